@@ -1,0 +1,85 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { Router } from 'express';
+import helmet from 'helmet';
+import pg from 'pg';
+import type { Sequelize } from 'sequelize';
+import { configurePassport } from './auth/passport';
+import { sessionMiddleware } from './auth/session';
+import type { Config } from './config';
+import { initModels } from './db/models';
+import { createSequelize } from './db/sequelize';
+import { errorHandler, notFoundHandler } from './http/errors';
+import { sameOriginOnly } from './http/same-origin';
+import { authRouter } from './routes/auth';
+import { healthRouter } from './routes/health';
+import { householdsRouter } from './routes/households';
+
+export interface AppContext {
+  config: Config;
+  sequelize: Sequelize;
+}
+
+/** Builds the Express app and its connections; tests mount it without listening. */
+export function createApp(config: Config, options: { authLimit?: number } = {}) {
+  const sequelize = createSequelize(config.databaseUrl, config.dbPoolMax);
+  initModels(sequelize);
+  const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
+  sessionPool.on('error', () => {});
+  const passport = configurePassport();
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.trustProxy) app.set('trust proxy', config.trustProxy);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: config.isProduction && config.appOrigins.some((o) => o.startsWith('https:')) ? [] : null,
+        },
+      },
+      strictTransportSecurity: config.appOrigins.some((o) => o.startsWith('https:')),
+    }),
+  );
+
+  const api = Router();
+  api.use(healthRouter(sequelize));
+  api.use(express.json({ limit: '1mb' }));
+  api.use(sameOriginOnly(config.appOrigins));
+  api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
+  api.use(passport.session());
+  api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? 20 }));
+  api.use('/households', householdsRouter(sequelize));
+  api.use(notFoundHandler);
+  app.use('/api', api);
+
+  const staticDir = path.resolve(config.staticDir);
+  if (existsSync(path.join(staticDir, 'index.html'))) {
+    app.use(express.static(staticDir, { index: false, maxAge: '1y', immutable: true, setHeaders: noCacheForHtml }));
+    app.get(/^\/(?!api\/).*/, (_req, res) => {
+      res.set('Cache-Control', 'no-cache').sendFile(path.join(staticDir, 'index.html'));
+    });
+  }
+  app.use(errorHandler({ exposeInternals: !config.isProduction }));
+
+  return {
+    app,
+    sequelize,
+    async close() {
+      await Promise.allSettled([sequelize.close(), sessionPool.end()]);
+    },
+  };
+}
+
+function noCacheForHtml(res: express.Response, filePath: string) {
+  if (filePath.endsWith('.html') || filePath.endsWith('sw.js') || filePath.endsWith('.webmanifest')) {
+    res.setHeader('Cache-Control', 'no-cache');
+  }
+}

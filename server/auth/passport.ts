@@ -1,0 +1,41 @@
+import passport from 'passport';
+import { Strategy as LocalStrategy } from 'passport-local';
+import { User } from '../db/models';
+import { checkPassword } from './passwords';
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface User {
+      id: string;
+      email: string;
+      name: string;
+    }
+  }
+}
+
+export const BAD_CREDENTIALS = 'That e-mail and password do not match an account. Check both and try again.';
+
+export function configurePassport() {
+  passport.use(
+    new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, async (email, password, done) => {
+      try {
+        const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
+        const ok = await checkPassword(password, user?.passwordHash);
+        done(null, ok && user ? user.toPublic() : false, { message: BAD_CREDENTIALS });
+      } catch (error) {
+        done(error);
+      }
+    }),
+  );
+  passport.serializeUser((user, done) => done(null, user.id));
+  passport.deserializeUser(async (id: string, done) => {
+    try {
+      const user = await User.findByPk(id);
+      done(null, user ? user.toPublic() : false);
+    } catch (error) {
+      done(error);
+    }
+  });
+  return passport;
+}

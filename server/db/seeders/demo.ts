@@ -1,0 +1,32 @@
+import type { Sequelize } from 'sequelize';
+import type { Role } from '../../../shared/roles';
+import { hashPassword } from '../../auth/passwords';
+import { Household, Membership, User } from '../models';
+import accounts from './demo-accounts.json' with { type: 'json' };
+
+export const DEMO_PASSWORD = accounts.password;
+export const DEMO_ACCOUNTS = accounts.households.flatMap((h) => h.members.map((m) => ({ ...m, household: h.name })));
+
+/**
+ * Our invented demo scenario, for local use only: a production start never seeds it.
+ * Returns the created households by name so feature seeders can add to them.
+ */
+export async function seedDemo(sequelize: Sequelize, bcryptCost = 12) {
+  const passwordHash = await hashPassword(DEMO_PASSWORD, bcryptCost);
+  return sequelize.transaction(async (transaction) => {
+    const households: Record<string, Household> = {};
+    for (const h of accounts.households) {
+      const household = await Household.create({ name: h.name, altitudeFt: h.altitudeFt, timeZone: h.timeZone }, { transaction });
+      households[h.name] = household;
+      for (const m of h.members) {
+        const user = await User.create({ email: m.email, name: m.name, passwordHash }, { transaction });
+        await Membership.create({ householdId: household.id, userId: user.id, role: m.role as Role }, { transaction });
+      }
+    }
+    return households;
+  });
+}
+
+export async function isEmpty() {
+  return (await Household.count()) === 0;
+}

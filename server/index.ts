@@ -1,0 +1,21 @@
+import { createApp } from './app';
+import { loadConfig } from './config';
+import { migrate } from './db/migrate';
+
+const config = loadConfig();
+const { app, sequelize, close } = createApp(config);
+await migrate(sequelize);
+
+const server = app.listen(config.port, config.host, () => {
+  const address = server.address();
+  const port = typeof address === 'object' && address ? address.port : config.port;
+  console.log(`larderly: serving on http://${config.host}:${port}`);
+});
+
+function shutdown(signal: string) {
+  console.log(`larderly: ${signal}, closing`);
+  server.close(() => void close().then(() => process.exit(0)));
+  setTimeout(() => process.exit(0), 5_000).unref();
+}
+process.on('SIGINT', () => shutdown('SIGINT'));
+process.on('SIGTERM', () => shutdown('SIGTERM'));

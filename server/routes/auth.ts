@@ -1,0 +1,72 @@
+import { Router, type NextFunction, type Request, type Response } from 'express';
+import rateLimit from 'express-rate-limit';
+import passport from 'passport';
+import type { Sequelize } from 'sequelize';
+import { loginBody, signupBody } from '../../shared/schemas/auth';
+import { BAD_CREDENTIALS } from '../auth/passport';
+import { requireUser } from '../auth/guards';
+import { AppError } from '../http/errors';
+import { body } from '../http/validate';
+import { describeMe, signUp } from '../services/accounts';
+
+function signIn(req: Request, user: Express.User) {
+  // A fresh session id at sign-in, so a planted id is worth nothing.
+  return new Promise<void>((resolve, reject) => {
+    req.session.regenerate((error) => {
+      if (error) return reject(error);
+      req.login(user, (loginError) => (loginError ? reject(loginError) : resolve()));
+    });
+  });
+}
+
+function authenticate(req: Request, res: Response, next: NextFunction) {
+  return new Promise<Express.User>((resolve, reject) => {
+    passport.authenticate('local', { session: false }, (error: unknown, user: Express.User | false) => {
+      if (error) return reject(error);
+      if (!user) return reject(new AppError(401, 'signed_out', BAD_CREDENTIALS));
+      resolve(user);
+    })(req, res, next);
+  });
+}
+
+export function authRouter(options: { sequelize: Sequelize; bcryptCost: number; authLimit: number }) {
+  const router = Router();
+  const limiter = rateLimit({
+    windowMs: 15 * 60 * 1000,
+    limit: options.authLimit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', 'Too many attempts. Wait 15 minutes, then try again.')),
+  });
+
+  router.post('/signup', limiter, async (req, res) => {
+    const input = body(req, signupBody);
+    const user = await signUp(options.sequelize, input, options.bcryptCost);
+    await signIn(req, user);
+    res.status(201).json(await describeMe(user));
+  });
+
+  router.post('/login', limiter, async (req, res, next) => {
+    body(req, loginBody);
+    const user = await authenticate(req, res, next);
+    await signIn(req, user);
+    res.json({ user });
+  });
+
+  router.post('/logout', (req, res, next) => {
+    req.logout((error) => {
+      if (error) return next(error);
+      req.session.destroy((destroyError) => {
+        if (destroyError) return next(destroyError);
+        res.clearCookie('larderly.sid');
+        res.status(204).end();
+      });
+    });
+  });
+
+  router.get('/me', requireUser, async (req, res) => {
+    res.json(await describeMe(req.user!));
+  });
+
+  return router;
+}

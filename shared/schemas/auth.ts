@@ -1,0 +1,47 @@
+import { z } from 'zod';
+
+export const email = z
+  .string({ error: 'Enter an e-mail address.' })
+  .trim()
+  .toLowerCase()
+  .max(254, 'That e-mail address is too long.')
+  .pipe(z.email({ error: 'Enter an e-mail address like name@example.com.' }));
+
+export const newPassword = z
+  .string({ error: 'Choose a password.' })
+  .min(10, 'Use at least 10 characters for your password.')
+  .max(200, 'Use at most 200 characters for your password.');
+
+export const personName = z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(80, 'Use at most 80 characters.');
+
+export const householdName = z
+  .string({ error: 'Name your household.' })
+  .trim()
+  .min(1, 'Name your household.')
+  .max(80, 'Use at most 80 characters.');
+
+export const signupBody = z.object({ email, password: newPassword, name: personName, householdName });
+export type SignupBody = z.infer<typeof signupBody>;
+
+export const loginBody = z.object({
+  email: z.string({ error: 'Enter your e-mail address.' }).trim().toLowerCase().min(1, 'Enter your e-mail address.').max(254),
+  password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200),
+});
+export type LoginBody = z.infer<typeof loginBody>;
+
+export interface PublicUser {
+  id: string;
+  email: string;
+  name: string;
+}
+
+export interface MembershipSummary {
+  householdId: string;
+  householdName: string;
+  role: import('../roles').Role;
+}
+
+export interface MeResponse {
+  user: PublicUser;
+  memberships: MembershipSummary[];
+}

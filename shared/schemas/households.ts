@@ -1,0 +1,52 @@
+import { z } from 'zod';
+import { ROLES, type Role } from '../roles';
+import { householdName } from './auth';
+
+export const UNIT_SYSTEMS = ['us', 'metric'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+function isTimeZone(zone: string) {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: zone });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+export const householdPatch = z
+  .object({
+    name: householdName.optional(),
+    altitudeFt: z
+      .number({ error: 'Enter the altitude in feet as a number.' })
+      .int('Enter the altitude in whole feet.')
+      .min(-1500, 'The altitude cannot be below -1,500 ft.')
+      .max(20000, 'The altitude cannot be above 20,000 ft.')
+      .optional(),
+    unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose US customary or metric units.' }).optional(),
+    timeZone: z
+      .string()
+      .max(64)
+      .refine(isTimeZone, 'Choose a time zone such as America/Denver.')
+      .optional(),
+  })
+  .strict();
+export type HouseholdPatch = z.infer<typeof householdPatch>;
+
+export const memberPatch = z.object({ role: z.enum(ROLES, { error: 'Choose keeper, cook or helper.' }) }).strict();
+
+export interface HouseholdView {
+  id: string;
+  name: string;
+  altitudeFt: number;
+  unitSystem: UnitSystem;
+  timeZone: string;
+  role: Role;
+}
+
+export interface MemberView {
+  userId: string;
+  name: string;
+  email: string;
+  role: Role;
+}

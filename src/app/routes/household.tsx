@@ -1,0 +1,35 @@
+import { can } from '@shared/roles';
+import { Card, PageHeader } from '@/components/ui/page';
+import { useHousehold, useMembers } from '@/features/households/api/get-household';
+import { HouseholdSettingsForm } from '@/features/households/components/household-settings-form';
+import { MemberList } from '@/features/households/components/member-list';
+import { useCurrentHousehold } from '@/features/households/use-current-household';
+
+const ROLE_NOTES = {
+  keeper: 'As a keeper you manage members, roles and the household settings.',
+  cook: 'As a cook you plan the week and record batches; a keeper manages these settings.',
+  helper: 'As a helper you can open, finish and discard jars and tick to-dos; a keeper manages these settings.',
+} as const;
+
+export function HouseholdRoute() {
+  const { hid, role, me } = useCurrentHousehold();
+  const household = useHousehold(hid);
+  const members = useMembers(hid);
+  const canManage = can(role, 'manage');
+
+  return (
+    <>
+      <PageHeader title="Household" lead={role ? ROLE_NOTES[role] : undefined} />
+      <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
+        <Card>
+          <h2 className="mb-4 text-xl">Settings</h2>
+          {household.data ? <HouseholdSettingsForm key={household.data.id} household={household.data} canEdit={canManage} /> : <p className="text-ink-muted">Loading…</p>}
+        </Card>
+        <Card>
+          <h2 className="mb-2 text-xl">Members</h2>
+          {members.data && me ? <MemberList hid={hid} members={members.data} canManage={canManage} myId={me.user.id} /> : <p className="text-ink-muted">Loading…</p>}
+        </Card>
+      </div>
+    </>
+  );
+}

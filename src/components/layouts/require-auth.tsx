@@ -1,0 +1,21 @@
+import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { useMe } from '@/features/auth/api/get-me';
+import { Notice } from '@/components/ui/notice';
+
+/** Signed-in screens only: anyone else goes to sign-in and comes back here afterwards. */
+export function RequireAuth() {
+  const { data: me, isPending, error } = useMe();
+  const location = useLocation();
+  if (isPending) return <p className="p-6 text-ink-muted">Opening your larder…</p>;
+  if (error) {
+    return (
+      <div className="p-6">
+        <Notice tone="past" title="Larderly cannot load right now." role="alert">
+          {error.message}
+        </Notice>
+      </div>
+    );
+  }
+  if (!me) return <Navigate to={`/sign-in?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
+  return <Outlet />;
+}

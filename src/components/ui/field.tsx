@@ -1,0 +1,57 @@
+import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+
+interface FieldProps {
+  label: string;
+  error?: string;
+  hint?: ReactNode;
+}
+
+const inputClass =
+  'min-h-11 w-full rounded-lg border border-line bg-surface px-3 text-ink placeholder:text-ink-muted/70 focus:border-info aria-[invalid=true]:border-past';
+
+function FieldFrame({ id, label, error, hint, children }: FieldProps & { id: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-bold">
+        {label}
+      </label>
+      {children}
+      {hint && !error && (
+        <p id={`${id}-hint`} className="text-sm text-ink-muted">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-bold text-past" role="alert">
+          {error}
+        </p>
+      )}
+    </div>
+  );
+}
+
+export function TextField({ label, error, hint, className = '', ...props }: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
+  const id = useId();
+  return (
+    <FieldFrame id={id} label={label} error={error} hint={hint}>
+      <input
+        id={id}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+        className={`${inputClass} ${className}`}
+        {...props}
+      />
+    </FieldFrame>
+  );
+}
+
+export function SelectField({ label, error, hint, children, className = '', ...props }: FieldProps & SelectHTMLAttributes<HTMLSelectElement>) {
+  const id = useId();
+  return (
+    <FieldFrame id={id} label={label} error={error} hint={hint}>
+      <select id={id} aria-invalid={error ? true : undefined} className={`${inputClass} ${className}`} {...props}>
+        {children}
+      </select>
+    </FieldFrame>
+  );
+}

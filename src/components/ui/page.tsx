@@ -1,0 +1,38 @@
+import type { ReactNode } from 'react';
+
+export function PageHeader({ title, lead, actions }: { title: string; lead?: ReactNode; actions?: ReactNode }) {
+  return (
+    <header className="mb-5 flex flex-wrap items-end justify-between gap-3">
+      <div>
+        <h1 className="text-2xl sm:text-3xl">{title}</h1>
+        {lead && <p className="mt-1 max-w-prose text-ink-muted">{lead}</p>}
+      </div>
+      {actions && <div className="flex gap-2">{actions}</div>}
+    </header>
+  );
+}
+
+export function Card({ children, className = '' }: { children: ReactNode; className?: string }) {
+  return <section className={`rounded-card border border-line bg-surface p-4 shadow-[0_1px_0_rgba(42,37,32,0.04)] ${className}`}>{children}</section>;
+}
+
+export function EmptyState({ title, children, action }: { title: string; children?: ReactNode; action?: ReactNode }) {
+  return (
+    <div className="flex flex-col items-center gap-3 rounded-card border border-dashed border-line bg-surface/60 px-6 py-10 text-center">
+      <JarMark />
+      <p className="text-lg font-bold">{title}</p>
+      {children && <div className="max-w-md text-ink-muted">{children}</div>}
+      {action}
+    </div>
+  );
+}
+
+function JarMark() {
+  return (
+    <svg width="44" height="52" viewBox="0 0 44 52" aria-hidden="true">
+      <rect x="11" y="2" width="22" height="7" rx="2" className="fill-action" />
+      <rect x="5" y="9" width="34" height="40" rx="9" className="fill-surface stroke-ink" strokeWidth="2.5" />
+      <path d="M8 30h28v10a6 6 0 0 1-6 6H14a6 6 0 0 1-6-6z" className="fill-soon-fill/70" />
+    </svg>
+  );
+}

@@ -1,0 +1,59 @@
+import { useState, type FormEvent } from 'react';
+import { Link, useNavigate } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { useSignup } from '../api/signup';
+
+export function SignUpForm() {
+  const signup = useSignup();
+  const navigate = useNavigate();
+  const [form, setForm] = useState({ name: '', email: '', password: '', householdName: '' });
+  const error = signup.error instanceof ApiError ? signup.error : null;
+  const set = (key: keyof typeof form) => (event: { target: { value: string } }) => setForm({ ...form, [key]: event.target.value });
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    signup.mutate(form, { onSuccess: (me) => navigate(`/h/${me.memberships[0].householdId}`, { replace: true }) });
+  }
+
+  return (
+    <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
+      {error && (
+        <Notice tone="past" role="alert">
+          {error.message}
+        </Notice>
+      )}
+      <TextField label="Your name" autoComplete="name" value={form.name} onChange={set('name')} error={error?.fields.name} required />
+      <TextField label="E-mail" type="email" autoComplete="email" value={form.email} onChange={set('email')} error={error?.fields.email} required />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        value={form.password}
+        onChange={set('password')}
+        error={error?.fields.password}
+        hint="At least 10 characters. A short sentence is easy to remember."
+        required
+      />
+      <TextField
+        label="Household name"
+        value={form.householdName}
+        onChange={set('householdName')}
+        error={error?.fields.householdName}
+        hint="You will be its keeper, and can invite the others later."
+        required
+      />
+      <Button type="submit" disabled={signup.isPending}>
+        {signup.isPending ? 'Creating your household…' : 'Create household'}
+      </Button>
+      <p className="text-center text-ink-muted">
+        Already have an account?{' '}
+        <Link to="/sign-in" className="font-bold text-action underline underline-offset-4">
+          Sign in
+        </Link>
+      </p>
+    </form>
+  );
+}

@@ -1,0 +1,70 @@
+import { useState, type FormEvent } from 'react';
+import type { HouseholdView } from '@shared/schemas/households';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { useUpdateHousehold } from '../api/update-household';
+
+const TIME_ZONES = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
+
+export function HouseholdSettingsForm({ household, canEdit }: { household: HouseholdView; canEdit: boolean }) {
+  const update = useUpdateHousehold(household.id);
+  const [form, setForm] = useState({
+    name: household.name,
+    altitudeFt: String(household.altitudeFt),
+    unitSystem: household.unitSystem,
+    timeZone: household.timeZone,
+  });
+  const error = update.error instanceof ApiError ? update.error : null;
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const altitude = form.altitudeFt.trim() === '' ? Number.NaN : Number(form.altitudeFt.replaceAll(',', ''));
+    update.mutate({ name: form.name, altitudeFt: altitude, unitSystem: form.unitSystem, timeZone: form.timeZone });
+  }
+
+  return (
+    <form onSubmit={submit} className="grid gap-4 sm:grid-cols-2" noValidate>
+      <fieldset disabled={!canEdit} className="contents">
+        <TextField label="Household name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={error?.fields.name} />
+        <TextField
+          label="Altitude (feet above sea level)"
+          inputMode="numeric"
+          value={form.altitudeFt}
+          onChange={(e) => setForm({ ...form, altitudeFt: e.target.value })}
+          error={error?.fields.altitudeFt}
+          hint="Processing times and pressures depend on it. Your local extension service can tell you yours."
+        />
+        <SelectField label="Units" value={form.unitSystem} onChange={(e) => setForm({ ...form, unitSystem: e.target.value as HouseholdView['unitSystem'] })}>
+          <option value="us">US customary (cups, pints, quarts)</option>
+          <option value="metric">Metric (millilitres, litres)</option>
+        </SelectField>
+        <SelectField label="Time zone" value={form.timeZone} onChange={(e) => setForm({ ...form, timeZone: e.target.value })} error={error?.fields.timeZone}>
+          {TIME_ZONES.map((zone) => (
+            <option key={zone} value={zone}>
+              {zone.replaceAll('_', ' ')}
+            </option>
+          ))}
+        </SelectField>
+      </fieldset>
+      {canEdit && (
+        <div className="flex items-center gap-3 sm:col-span-2">
+          <Button type="submit" disabled={update.isPending}>
+            {update.isPending ? 'Saving…' : 'Save settings'}
+          </Button>
+          <span role="status" className="text-ink-muted">
+            {update.isSuccess && !update.isPending ? 'Saved.' : ''}
+          </span>
+        </div>
+      )}
+      {error && !Object.keys(error.fields).length && (
+        <div className="sm:col-span-2">
+          <Notice tone="past" role="alert">
+            {error.message}
+          </Notice>
+        </div>
+      )}
+    </form>
+  );
+}

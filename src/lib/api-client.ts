@@ -1,0 +1,42 @@
+/** The error every API call rejects with: what the server said, in words a person can act on. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+  }
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+async function request<T>(method: Method, url: string, body?: unknown): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(`/api${url}`, {
+      method,
+      credentials: 'same-origin',
+      headers: body === undefined || body instanceof FormData ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
+      body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError(0, 'offline', 'Larderly cannot be reached. Check your connection and try again.');
+  }
+  if (response.status === 204) return undefined as T;
+  const payload = await response.json().catch(() => null);
+  if (!response.ok) {
+    const error = payload?.error;
+    throw new ApiError(response.status, error?.code ?? 'unknown', error?.message ?? `The server answered ${response.status}. Try again.`, error?.fields);
+  }
+  return payload as T;
+}
+
+export const api = {
+  get: <T>(url: string) => request<T>('GET', url),
+  post: <T>(url: string, body?: unknown) => request<T>('POST', url, body ?? {}),
+  patch: <T>(url: string, body: unknown) => request<T>('PATCH', url, body),
+  put: <T>(url: string, body: unknown) => request<T>('PUT', url, body),
+  delete: <T = void>(url: string) => request<T>('DELETE', url),
+};
