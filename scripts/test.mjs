@@ -42,7 +42,8 @@ try {
     if (results.numFailedTests > 0 || results.numFailedTestSuites > 0) exitCode = 1;
     const failedSuites = results.testResults.filter((s) => s.status === 'failed' && s.assertionResults.every((a) => a.status !== 'failed'));
     for (const suite of failedSuites) log(`failed to run: ${path.relative(projectDir, suite.name)}: ${suite.message?.split('\n')[0] ?? ''}`);
-    const failed = results.numFailedTests + failedSuites.length;
+    // A run that failed before any test could (a set-up error) still counts as a failure.
+    const failed = Math.max(results.numFailedTests + failedSuites.length, exitCode === 0 ? 0 : 1);
     process.stdout.write(`\n${results.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`);
   } else {
     process.stdout.write('\n0 passed, 1 failed\n');

@@ -7,7 +7,7 @@ interface FieldProps {
 }
 
 const inputClass =
-  'min-h-11 w-full rounded-lg border border-line bg-surface px-3 text-ink placeholder:text-ink-muted/70 focus:border-info aria-[invalid=true]:border-past';
+  'min-h-11 w-full rounded-lg border border-line bg-surface px-3 text-ink placeholder:text-ink-muted/70 focus:border-info disabled:bg-sunken disabled:text-ink-muted aria-[invalid=true]:border-past';
 
 function FieldFrame({ id, label, error, hint, children }: FieldProps & { id: string; children: ReactNode }) {
   return (

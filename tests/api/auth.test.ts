@@ -1,0 +1,129 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoApp, DEMO_PASSWORD } from '../support/app';
+
+let ctx: Awaited<ReturnType<typeof demoApp>>;
+beforeAll(async () => {
+  ctx = await demoApp();
+});
+afterAll(() => ctx.close());
+
+describe('sign-up', () => {
+  it('creates a household with the new person as its keeper and signs them in', async () => {
+    const agent = request.agent(ctx.app);
+    const response = await agent
+      .post('/api/auth/signup')
+      .send({ email: 'Rosa@Example.test', password: 'long enough password', name: 'Rosa', householdName: 'Rosa’s Pantry' });
+    expect(response.status).toBe(201);
+    expect(response.body.user.email).toBe('rosa@example.test');
+    expect(response.body.memberships).toEqual([{ householdId: expect.any(String), householdName: 'Rosa’s Pantry', role: 'keeper' }]);
+    const me = await agent.get('/api/auth/me');
+    expect(me.status).toBe(200);
+    expect(me.body.user.name).toBe('Rosa');
+  });
+
+  it('refuses a password shorter than 10 characters with a 400 that names the field', async () => {
+    const response = await ctx.request.post('/api/auth/signup').send({ email: 'short@example.test', password: 'short', name: 'S', householdName: 'H' });
+    expect(response.status).toBe(400);
+    expect(response.body.error.code).toBe('invalid_input');
+    expect(response.body.error.fields.password).toMatch(/at least 10 characters/);
+  });
+
+  it('refuses a malformed e-mail and missing fields, naming each', async () => {
+    const response = await ctx.request.post('/api/auth/signup').send({ email: 'not-an-address', password: 'long enough password' });
+    expect(response.status).toBe(400);
+    expect(Object.keys(response.body.error.fields).sort()).toEqual(['email', 'householdName', 'name']);
+  });
+
+  it('answers 409 for an e-mail that is already taken, whatever its case', async () => {
+    const response = await ctx.request
+      .post('/api/auth/signup')
+      .send({ email: 'KEEPER@larderly.test', password: 'long enough password', name: 'Copy', householdName: 'Copy' });
+    expect(response.status).toBe(409);
+    expect(response.body.error.message).toMatch(/already exists/);
+  });
+
+  it('stores the password hashed with bcrypt at the configured cost, never in plain text', async () => {
+    const [rows] = await ctx.sequelize.query(`SELECT password_hash FROM users WHERE email = 'rosa@example.test'`);
+    const hash = (rows as { password_hash: string }[])[0].password_hash;
+    expect(hash).toMatch(/^\$2[aby]\$04\$/);
+    expect(hash).not.toContain('long enough password');
+  });
+});
+
+describe('sign-in and sign-out', () => {
+  it('signs in with the right password and sets an httpOnly, SameSite=Lax session cookie', async () => {
+    const response = await ctx.request.post('/api/auth/login').send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });
+    expect(response.status).toBe(200);
+    expect(response.body.user).toMatchObject({ email: 'keeper@larderly.test', name: 'Wren Calloway' });
+    const cookie = String(response.headers['set-cookie']);
+    expect(cookie).toMatch(/larderly\.sid=/);
+    expect(cookie).toMatch(/HttpOnly/i);
+    expect(cookie).toMatch(/SameSite=Lax/i);
+  });
+
+  it('gives the same 401 for a wrong password and for an unknown e-mail', async () => {
+    const wrongPassword = await ctx.request.post('/api/auth/login').send({ email: 'keeper@larderly.test', password: 'not the password' });
+    const unknownEmail = await ctx.request.post('/api/auth/login').send({ email: 'nobody@larderly.test', password: 'not the password' });
+    expect(wrongPassword.status).toBe(401);
+    expect(unknownEmail.status).toBe(401);
+    expect(wrongPassword.body).toEqual(unknownEmail.body);
+  });
+
+  it('issues a new session id at sign-in', async () => {
+    const agent = request.agent(ctx.app);
+    await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD });
+    const first = String((await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD })).headers['set-cookie']);
+    const second = String((await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD })).headers['set-cookie']);
+    expect(first.split(';')[0]).not.toBe(second.split(';')[0]);
+  });
+
+  it('keeps the session in PostgreSQL', async () => {
+    const agent = await ctx.signedIn('helper@larderly.test');
+    expect((await agent.get('/api/auth/me')).status).toBe(200);
+    const [rows] = await ctx.sequelize.query(`SELECT count(*)::int AS n FROM sessions WHERE sess::text LIKE '%passport%'`);
+    expect((rows as { n: number }[])[0].n).toBeGreaterThan(0);
+  });
+
+  it('signs out with 204, after which /me answers 401', async () => {
+    const agent = await ctx.signedIn('cook@larderly.test');
+    expect((await agent.post('/api/auth/logout')).status).toBe(204);
+    const me = await agent.get('/api/auth/me');
+    expect(me.status).toBe(401);
+    expect(me.body.error.code).toBe('signed_out');
+  });
+
+  it('lists every household of a person with the role held in each', async () => {
+    const agent = await ctx.signedIn('keeper@larderly.test');
+    const me = await agent.get('/api/auth/me');
+    expect(me.body.memberships).toEqual([{ householdId: ctx.householdId, householdName: 'Calloway Hollow', role: 'keeper' }]);
+  });
+});
+
+describe('requests from another site', () => {
+  it('refuses a cross-origin POST with 403', async () => {
+    const response = await ctx.request
+      .post('/api/auth/login')
+      .set('Origin', 'https://elsewhere.example')
+      .send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });
+    expect(response.status).toBe(403);
+    expect(response.body.error.code).toBe('forbidden');
+  });
+
+  it('refuses a cross-site PATCH even with a valid session', async () => {
+    const agent = await ctx.signedIn('keeper@larderly.test');
+    const response = await agent.patch(`/api/households/${ctx.householdId}`).set('Origin', 'https://elsewhere.example').send({ name: 'Taken over' });
+    expect(response.status).toBe(403);
+    const after = await agent.get(`/api/households/${ctx.householdId}`);
+    expect(after.body.household.name).toBe('Calloway Hollow');
+  });
+
+  it('accepts a POST whose Origin is the app itself', async () => {
+    const response = await ctx.request
+      .post('/api/auth/login')
+      .set('Host', 'larder.example')
+      .set('Origin', 'http://larder.example')
+      .send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });
+    expect(response.status).toBe(200);
+  });
+});

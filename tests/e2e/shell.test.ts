@@ -1,0 +1,79 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { DESKTOP, launchChromium, PHONE, screenshot, signIn } from '../support/browser';
+
+const baseURL = inject('baseURL');
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(() => browser?.close());
+
+describe('the app shell', () => {
+  it('sends a signed-out visitor to sign-in', async () => {
+    const page = await browser.newPage({ viewport: DESKTOP });
+    await page.goto(`${baseURL}/`);
+    await page.waitForURL(/\/sign-in/);
+    await page.getByRole('heading', { name: 'Welcome back' }).waitFor();
+    await page.close();
+  });
+
+  it('shows a clear message for a wrong password', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(`${baseURL}/sign-in`);
+    await page.getByLabel('E-mail').fill('keeper@larderly.test');
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByRole('alert').textContent()).resolves.toMatch(/do not match/);
+    await page.close();
+  });
+
+  it('signs in the demo keeper, shows the shell on desktop, switches screens and signs out', async () => {
+    const page = await browser.newPage({ viewport: DESKTOP });
+    await signIn(page, baseURL, 'keeper@larderly.test');
+    await page.getByText('Calloway Hollow').first().waitFor();
+    await page.getByText('You are a keeper').waitFor();
+    await screenshot(page, 'shell-desktop');
+
+    const nav = page.getByRole('navigation', { name: 'Screens' }).first();
+    for (const [label, heading] of [['Shelf', 'Shelf'], ['Week', 'Week'], ['Household', 'Household']] as const) {
+      await nav.getByRole('link', { name: label }).click();
+      await page.getByRole('heading', { level: 1, name: heading }).waitFor();
+    }
+    await expect(page.getByLabel('Altitude (feet above sea level)').inputValue()).resolves.toBe('2350');
+    await screenshot(page, 'household-desktop');
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await page.goto(`${baseURL}/`);
+    await page.waitForURL(/\/sign-in/);
+    await page.close();
+  });
+
+  it('shows the shell on a phone with the bottom navigation and the More menu', async () => {
+    const page = await browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
+    await signIn(page, baseURL, 'helper@larderly.test');
+    await page.getByText('You are a helper').waitFor();
+    await screenshot(page, 'shell-phone');
+    const bottomNav = page.getByRole('navigation', { name: 'Screens' }).last();
+    await bottomNav.getByRole('button', { name: 'More' }).click();
+    await bottomNav.getByRole('link', { name: 'Household' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Household' }).waitFor();
+    await expect(page.getByLabel('Household name').isDisabled()).resolves.toBe(true);
+    await screenshot(page, 'household-phone');
+    await page.close();
+  });
+
+  it('creates a new household through sign-up', async () => {
+    const page = await browser.newPage({ viewport: PHONE });
+    await page.goto(`${baseURL}/sign-up`);
+    await page.getByLabel('Your name').fill('Ines Okafor');
+    await page.getByLabel('E-mail').fill(`ines-${Date.now()}@example.test`);
+    await page.getByLabel('Password').fill('plum jam every winter');
+    await page.getByLabel('Household name').fill('Okafor Kitchen');
+    await page.getByRole('button', { name: 'Create household' }).click();
+    await page.waitForURL(/\/h\/[0-9a-f-]{36}/);
+    await page.getByText('Okafor Kitchen').first().waitFor();
+    await page.close();
+  });
+});
