@@ -7,6 +7,9 @@ import { requireNonNegative, requireOneOf, requireRecord } from './validate';
 /** The history rate looks back over the 84 days (twelve weeks) before today. */
 export const HISTORY_DAYS = 84;
 
+// A rate so small that the run-out falls past 9999-12-31 cannot be written as a date: it counts as never.
+const LAST_WRITABLE_DAY = dayNumber('9999-12-31');
+
 // Tablespoon sums carry floating-point crumbs; a shortfall smaller than this is no shortfall.
 const CRUMB_TBSP = 1e-9;
 
@@ -138,7 +141,7 @@ export function forecastProduct({ productId, today, horizonDays, jars, finished,
     onHandTbsp,
     sealedJars: shelfJars.filter((jar) => jar.state === 'sealed').length,
     jarsOnHand: shelfJars.length,
-    runOutOn: runOutDay === null ? null : isoDateFromDayNumber(runOutDay),
+    runOutOn: runOutDay === null || runOutDay > LAST_WRITABLE_DAY ? null : isoDateFromDayNumber(runOutDay),
     tbspLeftOnHorizon,
   };
 }

@@ -58,7 +58,8 @@ describe('useBy: the last day to eat from an opened jar (worked by hand on the G
         expect(daysBetween('2025-03-01', '2025-11-30')).toBe(274);
       }
     } finally {
-      process.env.TZ = original;
+      if (original === undefined) delete process.env.TZ;
+      else process.env.TZ = original;
     }
   });
 
