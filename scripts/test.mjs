@@ -1,26 +1,34 @@
 // `npm test`: the same set-up as `npm start` against separate test databases, then every test.
-import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+// Extra arguments go to vitest, e.g. `npm test -- --project api tests/api/auth.test.ts`.
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { ensureChromium, ensureNodeModules, log, projectDir, run } from './lib/system.mjs';
 import { startCluster } from './lib/postgres.mjs';
 
+const extraArgs = process.argv.slice(2);
+const projects = extraArgs.flatMap((arg, i) => (arg === '--project' ? [extraArgs[i + 1]] : arg.startsWith('--project=') ? [arg.slice(10)] : []));
+const wantsBrowser = projects.length === 0 || projects.includes('e2e');
+
 ensureNodeModules();
-ensureChromium();
-const { buildClient, recreateDatabase, setUpSchema } = await import('./lib/database.mjs');
+if (wantsBrowser) ensureChromium();
+const { buildClient, dropDatabase, recreateDatabase, setUpSchema } = await import('./lib/database.mjs');
 
 const cluster = startCluster();
+// Names of this run's own, so two runs at once never share a template or a build.
+const template = `larderly_test_template_${process.pid}`;
+const clientDir = path.join('dist', `test-client-${process.pid}`);
 let exitCode = 1;
 try {
-  const template = 'larderly_test_template';
   await recreateDatabase(cluster, template);
   setUpSchema(cluster.url(template));
-  log('building the client');
-  buildClient();
+  if (wantsBrowser) {
+    log('building the client');
+    buildClient(clientDir);
+  }
 
   const resultsDir = path.join(projectDir, 'test-results');
   mkdirSync(resultsDir, { recursive: true });
-  const resultsFile = path.join(resultsDir, 'vitest.json');
-  const extraArgs = process.argv.slice(2);
+  const resultsFile = path.join(resultsDir, `vitest-${process.pid}.json`);
   try {
     run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`, ...extraArgs], {
       cwd: projectDir,
@@ -29,26 +37,35 @@ try {
         NODE_ENV: 'test',
         LARDERLY_TEST_ADMIN_URL: cluster.url('postgres'),
         LARDERLY_TEST_TEMPLATE: template,
-        LARDERLY_PG_BIN: cluster.bin,
+        LARDERLY_TEST_CLIENT_DIR: clientDir,
       },
     });
     exitCode = 0;
   } catch {
     exitCode = 1;
   }
-  if (existsSync(resultsFile)) {
-    const results = JSON.parse(readFileSync(resultsFile, 'utf8'));
-    const skipped = results.numPendingTests + results.numTodoTests;
-    if (results.numFailedTests > 0 || results.numFailedTestSuites > 0) exitCode = 1;
-    const failedSuites = results.testResults.filter((s) => s.status === 'failed' && s.assertionResults.every((a) => a.status !== 'failed'));
-    for (const suite of failedSuites) log(`failed to run: ${path.relative(projectDir, suite.name)}: ${suite.message?.split('\n')[0] ?? ''}`);
-    // A run that failed before any test could (a set-up error) still counts as a failure.
-    const failed = Math.max(results.numFailedTests + failedSuites.length, exitCode === 0 ? 0 : 1);
-    process.stdout.write(`\n${results.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`);
-  } else {
-    process.stdout.write('\n0 passed, 1 failed\n');
-  }
+  printSummary(resultsFile);
 } finally {
+  await dropDatabase(cluster, template).catch(() => {});
+  rmSync(path.join(projectDir, clientDir), { recursive: true, force: true });
   cluster.stop();
 }
 process.exit(exitCode);
+
+/** CI reads the plain line `N passed, N failed`, not vitest's own summary. */
+function printSummary(resultsFile) {
+  if (!existsSync(resultsFile)) {
+    process.stdout.write('\n0 passed, 1 failed\n');
+    exitCode = 1;
+    return;
+  }
+  const results = JSON.parse(readFileSync(resultsFile, 'utf8'));
+  rmSync(resultsFile);
+  const skipped = results.numPendingTests + results.numTodoTests;
+  if (results.numFailedTests > 0 || results.numFailedTestSuites > 0) exitCode = 1;
+  const brokenFiles = results.testResults.filter((s) => s.status === 'failed' && s.assertionResults.every((a) => a.status !== 'failed'));
+  for (const file of brokenFiles) log(`could not run ${path.relative(projectDir, file.name)}: ${file.message?.split('\n')[0] ?? ''}`);
+  // A run that failed before any test could (a set-up error) still counts as a failure.
+  const failed = Math.max(results.numFailedTests + brokenFiles.length, exitCode === 0 ? 0 : 1);
+  process.stdout.write(`\n${results.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`);
+}

@@ -3,7 +3,6 @@ import path from 'node:path';
 import express, { Router } from 'express';
 import helmet from 'helmet';
 import pg from 'pg';
-import type { Sequelize } from 'sequelize';
 import { configurePassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import type { Config } from './config';
@@ -14,11 +13,8 @@ import { sameOriginOnly } from './http/same-origin';
 import { authRouter } from './routes/auth';
 import { healthRouter } from './routes/health';
 import { householdsRouter } from './routes/households';
-
-export interface AppContext {
-  config: Config;
-  sequelize: Sequelize;
-}
+import { householdFeatureRouters } from './routes/index';
+import type { AppContext } from './context';
 
 /** Builds the Express app and its connections; tests mount it without listening. */
 export function createApp(config: Config, options: { authLimit?: number } = {}) {
@@ -27,6 +23,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport();
+  const ctx: AppContext = { config, sequelize };
 
   const app = express();
   app.disable('x-powered-by');
@@ -57,6 +54,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   api.use(passport.session());
   api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? 20 }));
   api.use('/households', householdsRouter(sequelize));
+  api.use('/households/:hid', householdFeatureRouters(ctx));
   api.use(notFoundHandler);
   app.use('/api', api);
 
@@ -71,6 +69,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
 
   return {
     app,
+    ctx,
     sequelize,
     async close() {
       await Promise.allSettled([sequelize.close(), sessionPool.end()]);

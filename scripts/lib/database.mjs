@@ -46,6 +46,10 @@ export function persistentSecret(cluster, name) {
   return readFileSync(file, 'utf8').trim();
 }
 
-export function buildClient() {
-  run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn'], { cwd: projectDir });
+export function dropDatabase(cluster, name) {
+  return admin(cluster, (client) => client.query(`DROP DATABASE IF EXISTS ${quote(name)} WITH (FORCE)`));
+}
+
+export function buildClient(outDir = 'dist/client') {
+  run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--outDir', outDir], { cwd: projectDir });
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PROCESSING_METHODS, type Method } from '../domain';
 import { ROLES, type Role } from '../roles';
 import { householdName } from './auth';
 
@@ -29,6 +30,10 @@ export const householdPatch = z
       .max(64)
       .refine(isTimeZone, 'Choose a time zone such as America/Denver.')
       .optional(),
+    bestQualityMonths: z.number().int('Use whole months.').min(1, 'Use at least 1 month.').max(60, 'Use at most 60 months.').optional(),
+    weekStartsOn: z.number().int().min(0, 'Choose a day of the week.').max(6, 'Choose a day of the week.').optional(),
+    cannerCapacityJars: z.number().int('Use a whole number of jars.').min(1, 'A canner holds at least 1 jar.').max(40, 'Use at most 40 jars.').optional(),
+    defaultMethod: z.enum(PROCESSING_METHODS, { error: 'Choose a processing method.' }).optional(),
   })
   .strict();
 export type HouseholdPatch = z.infer<typeof householdPatch>;
@@ -41,6 +46,10 @@ export interface HouseholdView {
   altitudeFt: number;
   unitSystem: UnitSystem;
   timeZone: string;
+  bestQualityMonths: number;
+  weekStartsOn: number;
+  cannerCapacityJars: number;
+  defaultMethod: Method;
   role: Role;
 }
 

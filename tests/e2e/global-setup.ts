@@ -19,7 +19,7 @@ export default async function startServer(project: TestProject) {
 
   const port = await freePort();
   const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: { ...env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: 'dist/client' },
+    env: { ...env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const baseURL = `http://127.0.0.1:${port}`;

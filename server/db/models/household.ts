@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { Method } from '../../../shared/domain';
 import type { UnitSystem } from '../../../shared/schemas/households';
 
 export class Household extends Model<InferAttributes<Household>, InferCreationAttributes<Household>> {
@@ -7,6 +8,11 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
   declare altitudeFt: CreationOptional<number>;
   declare unitSystem: CreationOptional<UnitSystem>;
   declare timeZone: CreationOptional<string>;
+  declare bestQualityMonths: CreationOptional<number>;
+  /** 0 = Sunday ... 6 = Saturday */
+  declare weekStartsOn: CreationOptional<number>;
+  declare cannerCapacityJars: CreationOptional<number>;
+  declare defaultMethod: CreationOptional<Method>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -17,6 +23,10 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
       altitudeFt: this.altitudeFt,
       unitSystem: this.unitSystem,
       timeZone: this.timeZone,
+      bestQualityMonths: this.bestQualityMonths,
+      weekStartsOn: this.weekStartsOn,
+      cannerCapacityJars: this.cannerCapacityJars,
+      defaultMethod: this.defaultMethod,
     };
   }
 
@@ -28,6 +38,10 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
         altitudeFt: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         unitSystem: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'us' },
         timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
+        bestQualityMonths: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 12 },
+        weekStartsOn: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        cannerCapacityJars: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 },
+        defaultMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

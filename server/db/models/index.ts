@@ -1,18 +1,43 @@
 import type { Sequelize } from 'sequelize';
+import { Batch } from './batch';
 import { Household } from './household';
+import { Jar } from './jar';
+import { JarEvent } from './jar-event';
+import { Meal, MealProduct } from './meal';
 import { Membership } from './membership';
+import { Pairing, PlanEntry } from './plan-entry';
+import { Product } from './product';
+import { Recipe } from './recipe';
 import { User } from './user';
 
 /** Binds every model to one connection and declares how they relate. */
 export function initModels(sequelize: Sequelize) {
-  User.initModel(sequelize);
-  Household.initModel(sequelize);
-  Membership.initModel(sequelize);
+  for (const model of [User, Household, Membership, Product, Recipe, Batch, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing]) {
+    model.initModel(sequelize);
+  }
 
   Membership.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
   Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   Household.hasMany(Membership, { as: 'memberships', foreignKey: 'householdId' });
   User.hasMany(Membership, { as: 'memberships', foreignKey: 'userId' });
+
+  Product.hasMany(Recipe, { as: 'recipes', foreignKey: 'productId' });
+  Recipe.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
+  Product.hasMany(Batch, { as: 'batches', foreignKey: 'productId' });
+  Batch.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
+  Batch.belongsTo(Recipe, { as: 'recipe', foreignKey: 'recipeId' });
+  Batch.hasMany(Jar, { as: 'jars', foreignKey: 'batchId' });
+  Jar.belongsTo(Batch, { as: 'batch', foreignKey: 'batchId' });
+  Jar.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
+  Jar.hasMany(JarEvent, { as: 'events', foreignKey: 'jarId' });
+  Batch.hasMany(JarEvent, { as: 'events', foreignKey: 'batchId' });
+  JarEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+
+  Meal.hasMany(MealProduct, { as: 'products', foreignKey: 'mealId' });
+  MealProduct.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
+  PlanEntry.hasMany(Pairing, { as: 'pairings', foreignKey: 'planEntryId' });
+  PlanEntry.belongsTo(Meal, { as: 'meal', foreignKey: 'mealId' });
+  Pairing.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { Household, Membership, User };
+export { Batch, Household, Jar, JarEvent, Meal, MealProduct, Membership, Pairing, PlanEntry, Product, Recipe, User };

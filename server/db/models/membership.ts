@@ -8,6 +8,8 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
   declare householdId: string;
   declare userId: string;
   declare role: Role;
+  declare heatTolerance: CreationOptional<number>;
+  declare dietTags: CreationOptional<string[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare household?: NonAttribute<Household>;
@@ -20,6 +22,8 @@ export class Membership extends Model<InferAttributes<Membership>, InferCreation
         householdId: { type: DataTypes.UUID, allowNull: false },
         userId: { type: DataTypes.UUID, allowNull: false },
         role: { type: DataTypes.STRING(10), allowNull: false },
+        heatTolerance: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 5 },
+        dietTags: { type: DataTypes.ARRAY(DataTypes.STRING(30)), allowNull: false, defaultValue: [] },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,8 +1,10 @@
 import type { Sequelize } from 'sequelize';
 import type { Role } from '../../../shared/roles';
 import { hashPassword } from '../../auth/passwords';
+import { todayIn } from '../../services/clock';
 import { Household, Membership, User } from '../models';
 import accounts from './demo-accounts.json' with { type: 'json' };
+import { seedDemoFeatures } from './features';
 
 export const DEMO_PASSWORD = accounts.password;
 export const DEMO_ACCOUNTS = accounts.households.flatMap((h) => h.members.map((m) => ({ ...m, household: h.name })));
@@ -15,14 +17,17 @@ export async function seedDemo(sequelize: Sequelize, bcryptCost = 12) {
   const passwordHash = await hashPassword(DEMO_PASSWORD, bcryptCost);
   return sequelize.transaction(async (transaction) => {
     const households: Record<string, Household> = {};
+    const members: Record<string, User> = {};
     for (const h of accounts.households) {
       const household = await Household.create({ name: h.name, altitudeFt: h.altitudeFt, timeZone: h.timeZone }, { transaction });
       households[h.name] = household;
       for (const m of h.members) {
         const user = await User.create({ email: m.email, name: m.name, passwordHash }, { transaction });
+        members[m.email] = user;
         await Membership.create({ householdId: household.id, userId: user.id, role: m.role as Role }, { transaction });
       }
     }
+    await seedDemoFeatures({ households, members, transaction, today: todayIn(accounts.households[0].timeZone) });
     return households;
   });
 }
@@ -30,3 +35,4 @@ export async function seedDemo(sequelize: Sequelize, bcryptCost = 12) {
 export async function isEmpty() {
   return (await Household.count()) === 0;
 }
+

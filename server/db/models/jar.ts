@@ -1,0 +1,46 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { JarState } from '../../../shared/domain';
+import { decimal, requiredUuid, uuidKey } from './columns';
+
+export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar>> {
+  declare id: CreationOptional<string>;
+  declare householdId: string;
+  declare batchId: string;
+  declare productId: string;
+  declare code: string;
+  declare state: JarState;
+  declare capacityTbsp: number;
+  declare remainingTbsp: number;
+  declare unsealed: CreationOptional<boolean>;
+  declare bestBy: string;
+  declare openedOn: CreationOptional<string | null>;
+  declare useBy: CreationOptional<string | null>;
+  declare finishedOn: CreationOptional<string | null>;
+  declare discardedOn: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Jar.init(
+      {
+        id: uuidKey,
+        householdId: requiredUuid,
+        batchId: requiredUuid,
+        productId: requiredUuid,
+        code: { type: DataTypes.STRING(12), allowNull: false, unique: true },
+        state: { type: DataTypes.STRING(10), allowNull: false },
+        capacityTbsp: decimal('capacityTbsp', 8, 2),
+        remainingTbsp: decimal('remainingTbsp', 8, 2),
+        unsealed: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        bestBy: { type: DataTypes.DATEONLY, allowNull: false },
+        openedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        useBy: { type: DataTypes.DATEONLY, allowNull: true },
+        finishedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        discardedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'jars' },
+    );
+  }
+}

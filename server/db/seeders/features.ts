@@ -1,0 +1,15 @@
+import type { Transaction } from 'sequelize';
+import type { Household, User } from '../models';
+
+export interface DemoSeedContext {
+  /** by household name, as in demo-accounts.json */
+  households: Record<string, Household>;
+  /** by e-mail */
+  members: Record<string, User>;
+  transaction: Transaction;
+  /** the first household's today, YYYY-MM-DD; demo dates are laid out around it */
+  today: string;
+}
+
+/** Each feature adds its part of our invented demo scenario here, in dependency order. */
+export async function seedDemoFeatures(_ctx: DemoSeedContext) {}

@@ -1,0 +1,14 @@
+/** The one place the server asks what time it is, so tests can set the clock. */
+export const clock = {
+  now: () => new Date(),
+};
+
+/** Today's calendar date in a time zone, as YYYY-MM-DD. */
+export function todayIn(timeZone: string, now = clock.now()) {
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+}
+
+/** The hour of the day (0-23) in a time zone. */
+export function hourIn(timeZone: string, now = clock.now()) {
+  return Number(new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', hourCycle: 'h23' }).format(now));
+}
