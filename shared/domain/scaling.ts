@@ -1,7 +1,7 @@
 // Scaling a tested recipe to the jars wanted, rounded for the kitchen without ever weakening its acid.
 import { roundKitchenAmount } from './kitchen-amounts';
 import type { ProductKind } from './products';
-import { INGREDIENT_UNITS, JAR_SIZES, jarCapacityMl, type IngredientUnit, type JarSize } from './units';
+import { INGREDIENT_UNITS, JAR_SIZES, jarFluidOunces, type IngredientUnit, type JarSize } from './units';
 import { requireList, requireNonNegative, requireOneOf, requirePositive, requireRecord, requireWholeNumber } from './validate';
 
 export const INGREDIENT_ROLES = ['produce', 'acid', 'sweetener', 'spice', 'other'] as const;
@@ -74,7 +74,7 @@ function factorFor(base: JarYield, target: ScaleTarget): number {
   requireRecord(target, 'target');
   if ('factor' in target) return requirePositive(target.factor, 'factor');
   const wanted = readYield(target, 'target');
-  return (wanted.jars * jarCapacityMl(wanted.jarSize)) / (base.jars * jarCapacityMl(base.jarSize));
+  return (wanted.jars * jarFluidOunces(wanted.jarSize)) / (base.jars * jarFluidOunces(base.jarSize));
 }
 
 export function scaleRecipe(recipe: Recipe, target: ScaleTarget): ScaledRecipe {
