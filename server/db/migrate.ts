@@ -14,8 +14,14 @@ export function createMigrator(sequelize: Sequelize) {
   });
 }
 
-/** Brings the schema up to date; safe to run on every start. */
+// Any fixed number: the advisory lock that lets one process migrate while the others wait.
+const MIGRATION_LOCK = 7_420_001;
+
+/** Brings the schema up to date; safe to run on every start, from several processes at once. */
 export async function migrate(sequelize: Sequelize) {
-  const applied = await createMigrator(sequelize).up();
-  return applied.map((m) => m.name);
+  return sequelize.transaction(async (transaction) => {
+    await sequelize.query('SELECT pg_advisory_xact_lock(:lock)', { replacements: { lock: MIGRATION_LOCK }, transaction });
+    const applied = await createMigrator(sequelize).up();
+    return applied.map((m) => m.name);
+  });
 }
