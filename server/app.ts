@@ -6,8 +6,7 @@ import pg from 'pg';
 import { configurePassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import type { Config } from './config';
-import { initModels } from './db/models';
-import { createSequelize } from './db/sequelize';
+import { acquireDatabase } from './db/sequelize';
 import { errorHandler, notFoundHandler } from './http/errors';
 import { sameOriginOnly } from './http/same-origin';
 import { authRouter } from './routes/auth';
@@ -18,8 +17,8 @@ import type { AppContext } from './context';
 
 /** Builds the Express app and its connections; tests mount it without listening. */
 export function createApp(config: Config, options: { authLimit?: number } = {}) {
-  const sequelize = createSequelize(config.databaseUrl, config.dbPoolMax);
-  initModels(sequelize);
+  const database = acquireDatabase(config.databaseUrl, config.dbPoolMax);
+  const { sequelize } = database;
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport();
@@ -27,7 +26,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
 
   const app = express();
   app.disable('x-powered-by');
-  if (config.trustProxy) app.set('trust proxy', config.trustProxy);
+  if (config.trustProxy !== undefined) app.set('trust proxy', config.trustProxy);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -72,7 +71,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
     ctx,
     sequelize,
     async close() {
-      await Promise.allSettled([sequelize.close(), sessionPool.end()]);
+      await Promise.allSettled([database.release(), sessionPool.end()]);
     },
   };
 }

@@ -11,6 +11,17 @@ const schema = z.object({
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   STATIC_DIR: z.string().default('dist/client'),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+  SMTP_HOST: z.string().optional(),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
+  SMTP_SECURE: z.enum(['true', 'false']).optional(),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  SMTP_FROM: z.string().default('Larderly <reminders@larderly.test>'),
+  VAPID_PUBLIC_KEY: z.string().optional(),
+  VAPID_PRIVATE_KEY: z.string().optional(),
+  VAPID_SUBJECT: z.string().regex(/^(mailto:|https:)/, 'VAPID_SUBJECT must start with mailto: or https:').optional(),
+  PUSH_CA_FILE: z.string().optional(),
+  MAIL_CATCHER_DIR: z.string().optional(),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -26,6 +37,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   if (c.NODE_ENV === 'production' && !c.SESSION_SECRET) {
     throw new Error('Larderly cannot start: set SESSION_SECRET (32+ random characters) in production.');
   }
+  if (Boolean(c.VAPID_PUBLIC_KEY) !== Boolean(c.VAPID_PRIVATE_KEY)) {
+    throw new Error('Larderly cannot start: set both VAPID_PUBLIC_KEY and VAPID_PRIVATE_KEY, or neither (then keys are generated and kept).');
+  }
   return {
     env: c.NODE_ENV,
     isProduction: c.NODE_ENV === 'production',
@@ -34,9 +48,35 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     databaseUrl: c.DATABASE_URL,
     sessionSecret: c.SESSION_SECRET ?? 'development-only-secret-not-for-production-use',
     appOrigins: (c.APP_ORIGIN ?? '').split(',').map((o) => o.trim()).filter(Boolean),
-    trustProxy: c.TRUST_PROXY,
+    trustProxy: parseTrustProxy(c.TRUST_PROXY),
     dbPoolMax: c.DB_POOL_MAX,
     staticDir: c.STATIC_DIR,
     bcryptCost: c.BCRYPT_COST,
+    /** where links in e-mails point: the first APP_ORIGIN, else this server's own address */
+    publicOrigin: (c.APP_ORIGIN ?? '').split(',')[0].trim() || `http://${c.HOST}:${c.PORT}`,
+    mail: {
+      host: c.SMTP_HOST,
+      port: c.SMTP_PORT,
+      secure: c.SMTP_SECURE ? c.SMTP_SECURE === 'true' : c.SMTP_PORT === 465,
+      user: c.SMTP_USER,
+      pass: c.SMTP_PASS,
+      from: c.SMTP_FROM,
+      /** the local catcher's folder, read by the development-only mailbox page */
+      catcherDir: c.NODE_ENV === 'production' ? undefined : c.MAIL_CATCHER_DIR,
+    },
+    push: {
+      vapidPublicKey: c.VAPID_PUBLIC_KEY,
+      vapidPrivateKey: c.VAPID_PRIVATE_KEY,
+      vapidSubject: c.VAPID_SUBJECT ?? `mailto:${c.SMTP_FROM.match(/<([^>]+)>/)?.[1] ?? c.SMTP_FROM}`,
+      /** the local push endpoint's certificate; trusted for loopback endpoints outside production only */
+      caFile: c.NODE_ENV === 'production' ? undefined : c.PUSH_CA_FILE,
+    },
   };
+}
+
+/** Express reads a number as a hop count and a string as addresses, so '1' must become 1. */
+function parseTrustProxy(value: string | undefined): boolean | number | string | undefined {
+  if (value === undefined || value === '') return undefined;
+  if (value === 'true' || value === 'false') return value === 'true';
+  return /^\d+$/.test(value) ? Number(value) : value;
 }

@@ -1,15 +1,14 @@
 // Database lifecycle for the set-up scripts: `tsx server/db/cli.ts migrate|setup [--seed-demo]`.
-import { createSequelize } from './sequelize';
+import { acquireDatabase } from './sequelize';
 import { migrate } from './migrate';
-import { initModels } from './models';
 import { isEmpty, seedDemo } from './seeders/demo';
 
 const [command, ...flags] = process.argv.slice(2);
 const url = process.env.DATABASE_URL;
 if (!url) throw new Error('DATABASE_URL is not set');
 
-const sequelize = createSequelize(url, 2);
-initModels(sequelize);
+const database = acquireDatabase(url, 2);
+const { sequelize } = database;
 try {
   if (command === 'migrate' || command === 'setup') {
     const applied = await migrate(sequelize);
@@ -20,5 +19,5 @@ try {
     console.log('larderly: seeded the demo households');
   }
 } finally {
-  await sequelize.close();
+  await database.release();
 }
