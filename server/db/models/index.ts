@@ -8,11 +8,12 @@ import { Membership } from './membership';
 import { Pairing, PlanEntry } from './plan-entry';
 import { Product } from './product';
 import { Recipe } from './recipe';
+import { Todo } from './todo';
 import { User } from './user';
 
 /** Binds every model to one connection and declares how they relate. */
 export function initModels(sequelize: Sequelize) {
-  for (const model of [User, Household, Membership, Product, Recipe, Batch, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing]) {
+  for (const model of [User, Household, Membership, Product, Recipe, Batch, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
     model.initModel(sequelize);
   }
 
@@ -38,6 +39,8 @@ export function initModels(sequelize: Sequelize) {
   PlanEntry.hasMany(Pairing, { as: 'pairings', foreignKey: 'planEntryId' });
   PlanEntry.belongsTo(Meal, { as: 'meal', foreignKey: 'mealId' });
   Pairing.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
+  Todo.belongsTo(User, { as: 'assignee', foreignKey: 'assigneeId' });
+  Todo.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { Batch, Household, Jar, JarEvent, Meal, MealProduct, Membership, Pairing, PlanEntry, Product, Recipe, User };
+export { Batch, Household, Jar, JarEvent, Meal, MealProduct, Membership, Pairing, PlanEntry, Product, Recipe, Todo, User };

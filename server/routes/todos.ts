@@ -1,0 +1,44 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { todoCreate, todoListQuery, todoPatch } from '../../shared/schemas/todos';
+import { currentMembership, householdAccess } from '../auth/guards';
+import type { AppContext } from '../context';
+import { body, params, query } from '../http/validate';
+import { createTodo, deleteTodo, findTodo, listTodos, updateTodo } from '../services/todos';
+
+const todoParams = z.object({ hid: z.string(), id: z.uuid({ error: 'That to-do was not found.' }) });
+
+export function todosRouter({ sequelize }: AppContext) {
+  const router = Router({ mergeParams: true });
+
+  router.get('/todos', householdAccess('read'), async (req, res) => {
+    const { filter } = query(req, todoListQuery);
+    res.json({ todos: await listTodos(currentMembership(req).householdId, filter, req.user!.id) });
+  });
+
+  router.get('/todos/:id', householdAccess('read'), async (req, res) => {
+    const { id } = params(req, todoParams);
+    res.json({ todo: await findTodo(currentMembership(req).householdId, id) });
+  });
+
+  router.post('/todos', householdAccess('cook'), async (req, res) => {
+    const input = body(req, todoCreate);
+    res.status(201).json({ todo: await createTodo(sequelize, currentMembership(req).householdId, req.user!.id, input) });
+  });
+
+  // Helpers pass this guard to tick a to-do; the service refuses them anything else.
+  router.patch('/todos/:id', householdAccess('handleJars'), async (req, res) => {
+    const { id } = params(req, todoParams);
+    const patch = body(req, todoPatch);
+    const { householdId, role } = currentMembership(req);
+    res.json({ todo: await updateTodo(sequelize, householdId, role, id, patch) });
+  });
+
+  router.delete('/todos/:id', householdAccess('cook'), async (req, res) => {
+    const { id } = params(req, todoParams);
+    await deleteTodo(sequelize, currentMembership(req).householdId, id);
+    res.status(204).end();
+  });
+
+  return router;
+}

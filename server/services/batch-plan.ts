@@ -1,0 +1,134 @@
+// A restock to-do's batch plan: the tested recipe scaled to the jars wanted, processed for this household.
+import type { Sequelize } from 'sequelize';
+import {
+  formatKitchenAmount,
+  jarFluidOunces,
+  processingPlan,
+  restockSuggestions,
+  scaleRecipe,
+  type JarSize,
+  type ScaledIngredient,
+} from '../../shared/domain';
+import { count } from '../../shared/day-words';
+import { JAR_SIZE_NAMES } from '../../shared/jar-size-names';
+import type { BatchPlan, RestockTodoCreate, ShoppingItem, TodoView } from '../../shared/schemas/todos';
+import { Batch, Household, Product, Recipe } from '../db/models';
+import { AppError, notFound } from '../http/errors';
+import { todayIn } from './clock';
+import { targetDate } from './harvest-target';
+import { stockSnapshot } from './stock-snapshot';
+import { createTodo } from './todos';
+
+/** The recipe the household last made this product with, else its newest recipe. */
+async function chooseRecipe(product: Product): Promise<Recipe | null> {
+  const lastBatch = await Batch.findOne({
+    where: { householdId: product.householdId, productId: product.id },
+    order: [['cannedOn', 'DESC'], ['createdAt', 'DESC']],
+    include: [{ model: Recipe, as: 'recipe', required: true }],
+  });
+  if (lastBatch) return (lastBatch as Batch & { recipe: Recipe }).recipe;
+  return Recipe.findOne({ where: { householdId: product.householdId, productId: product.id }, order: [['createdAt', 'DESC']] });
+}
+
+function refuse(message: string, action?: { label: string; href: string }): AppError {
+  return new AppError(422, 'not_allowed', message, undefined, action ? { action } : undefined);
+}
+
+function jarSizeFor(recipe: Recipe, product: Product, wanted: JarSize | undefined): JarSize {
+  const tested = Object.keys(recipe.baseMinutes) as JarSize[];
+  const size = wanted ?? (tested.includes(product.jarSize) ? product.jarSize : recipe.yieldJarSize);
+  if (recipe.baseMinutes[size] === undefined) {
+    const names = tested.map((s) => JAR_SIZE_NAMES[s]).join(', ') || 'none';
+    throw refuse(`"${recipe.name}" has no tested time for ${JAR_SIZE_NAMES[size]} jars. Choose a size it was tested for: ${names}.`);
+  }
+  return size;
+}
+
+/** One tested batch, in the jars chosen: what to make when nothing says how many. */
+function oneTestedBatch(recipe: Recipe, jarSize: JarSize): number {
+  return Math.max(1, Math.ceil((recipe.yieldJars * jarFluidOunces(recipe.yieldJarSize)) / jarFluidOunces(jarSize)));
+}
+
+function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
+  const amount = formatKitchenAmount(ingredient.amount, ingredient.unit);
+  return { name: ingredient.name, role: ingredient.role, amount: ingredient.amount, unit: ingredient.unit, text: `${amount} ${ingredient.name}`.trim() };
+}
+
+function cannerLoads(jars: number, capacity: number): number[] {
+  const loads = Array.from({ length: Math.floor(jars / capacity) }, () => capacity);
+  return jars % capacity ? [...loads, jars % capacity] : loads;
+}
+
+/** Makes the restock to-do, or refuses with what to do first. */
+export async function addRestockTodo(sequelize: Sequelize, household: Household, userId: string, productId: string, input: RestockTodoCreate): Promise<TodoView> {
+  const product = await Product.findOne({ where: { id: productId, householdId: household.id } });
+  if (!product) throw notFound('That product');
+  const recipe = await chooseRecipe(product);
+  if (!recipe) {
+    throw refuse(`${product.name} has no recipe yet. Add a tested recipe for it first, then plan the batch.`, {
+      label: 'Add a recipe',
+      href: `/h/${household.id}/recipes?productId=${product.id}`,
+    });
+  }
+  const jarSize = jarSizeFor(recipe, product, input.jarSize);
+
+  const today = todayIn(household.timeZone);
+  const snapshot = await stockSnapshot(household.id, today);
+  const { forecasts, suggestions } = restockSuggestions({
+    today,
+    products: [{ id: product.id, favourite: product.favourite, minJars: product.minJars, harvestMonths: product.harvestMonths, jarSize: product.jarSize }],
+    jars: snapshot.shelfJars.map((jar) => ({ productId: jar.productId, state: jar.state, remainingTbsp: jar.remainingTbsp })),
+    finished: snapshot.finished,
+    planned: snapshot.planned,
+  });
+  const suggestion = suggestions[0];
+  const suggestedInSize = suggestion && Math.ceil((suggestion.suggestedJars * jarFluidOunces(product.jarSize)) / jarFluidOunces(jarSize));
+  const jars = input.jars ?? suggestedInSize ?? oneTestedBatch(recipe, jarSize);
+
+  const scaled = scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients, kind: product.kind }, { jars, jarSize });
+  const processing = processingPlan({
+    method: recipe.method,
+    altitudeFt: household.altitudeFt,
+    jarSize,
+    baseMinutes: recipe.baseMinutes[jarSize]!,
+    ph: recipe.ph ?? undefined,
+    acidified: recipe.acidified,
+    altitudeTable: recipe.altitudeTable ?? undefined,
+  });
+  if (!processing.allowed) {
+    throw refuse(`There is no tested process for this batch at ${household.altitudeFt.toLocaleString('en-US')} ft: ${processing.reasons.join(' ')}`);
+  }
+  const target = targetDate(today, product.harvestMonths, forecasts[0].runOutOn);
+
+  const plan: BatchPlan = {
+    productId: product.id,
+    productName: product.name,
+    recipeId: recipe.id,
+    recipeName: recipe.name,
+    recipeSource: recipe.source,
+    reason: suggestion?.reason ?? null,
+    jars,
+    jarSize,
+    method: recipe.method,
+    altitudeFt: household.altitudeFt,
+    headspaceInches: recipe.headspaceInches,
+    scaled,
+    processing,
+    // Flat lids seal once (common practice); bands and jars are reused.
+    equipment: { jars, newLids: jars, cannerCapacityJars: household.cannerCapacityJars, cannerLoads: cannerLoads(jars, household.cannerCapacityJars) },
+    shopping: {
+      produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
+      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
+    },
+    targetOn: target.targetOn,
+    targetWhy: target.why,
+    plannedOn: today,
+  };
+  return createTodo(sequelize, household.id, userId, {
+    title: `Make ${count(jars, `${JAR_SIZE_NAMES[jarSize]} jar`)} of ${product.name}`,
+    dueOn: target.targetOn,
+    kind: 'restock',
+    productId: product.id,
+    batchPlan: plan,
+  });
+}

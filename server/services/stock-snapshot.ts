@@ -1,0 +1,63 @@
+// One read of what the forecast, the restock list and Today work from: products, jars, history and plan.
+import { Op } from 'sequelize';
+import { addDays, addMonths, defaultUseWithinDays, HISTORY_DAYS, type FinishedPortion, type PlannedPortion } from '../../shared/domain';
+import { Jar, Pairing, PlanEntry, Product } from '../db/models';
+
+/** The months a use chart shows, the current one included. */
+export const CHART_MONTHS = 6;
+
+export interface StockSnapshot {
+  householdId: string;
+  today: string;
+  products: Product[];
+  /** Sealed and opened jars. */
+  shelfJars: Jar[];
+  /** Jars finished since the start of the chart's first month, each counted as a full jar. */
+  finished: FinishedPortion[];
+  /** Every pairing of a plan entry from today on: the pairing's portion per serving times the entry's servings. */
+  planned: PlannedPortion[];
+  /** The plan entry each planned portion (by pairing id) belongs to. */
+  entryOf: Map<string, PlanEntry>;
+}
+
+export function useWithinDaysOf(product: Product): number {
+  return product.useWithinDays ?? defaultUseWithinDays(product.kind);
+}
+
+function historyStart(today: string): string {
+  const chartStart = `${addMonths(today, 1 - CHART_MONTHS).slice(0, 7)}-01`;
+  const forecastStart = addDays(today, -HISTORY_DAYS);
+  return chartStart < forecastStart ? chartStart : forecastStart;
+}
+
+export async function stockSnapshot(householdId: string, today: string): Promise<StockSnapshot> {
+  const [products, shelfJars, finishedJars, entries] = await Promise.all([
+    Product.findAll({ where: { householdId }, order: [['name', 'ASC']] }),
+    Jar.findAll({ where: { householdId, state: ['sealed', 'opened'] } }),
+    Jar.findAll({
+      where: { householdId, state: 'finished', finishedOn: { [Op.gte]: historyStart(today), [Op.lt]: today } },
+      attributes: ['productId', 'finishedOn', 'capacityTbsp'],
+    }),
+    PlanEntry.findAll({
+      where: { householdId, date: { [Op.gte]: today } },
+      include: [{ model: Pairing, as: 'pairings', required: true }],
+    }),
+  ]);
+  const entryOf = new Map(entries.flatMap((entry) => (entry.pairings ?? []).map((pairing) => [pairing.id, entry] as const)));
+  return {
+    householdId,
+    today,
+    products,
+    shelfJars,
+    finished: finishedJars.map((jar) => ({ productId: jar.productId, finishedOn: jar.finishedOn!, tbsp: jar.capacityTbsp })),
+    planned: entries.flatMap((entry) =>
+      (entry.pairings ?? []).map((pairing) => ({
+        id: pairing.id,
+        date: entry.date,
+        productId: pairing.productId,
+        tbsp: pairing.tbspPerServing * entry.servings,
+      })),
+    ),
+    entryOf,
+  };
+}

@@ -1,0 +1,48 @@
+import type { RestockSuggestionView } from './restock';
+
+/** The plan slots, as the week stores them. */
+type Slot = 'breakfast' | 'lunch' | 'dinner' | 'snack';
+
+/** One planned portion of today, and the jar it comes from. */
+export interface TodayUse {
+  portionId: string;
+  slot: Slot;
+  mealTitle: string;
+  productId: string;
+  productName: string;
+  tbsp: number;
+  /** null where the shelf cannot cover it. */
+  jarCode: string | null;
+  /** The jar has to be opened today for this portion. */
+  opensToday: boolean;
+}
+
+export interface TodayFridgeJar {
+  jarId: string;
+  code: string;
+  productName: string;
+  openedOn: string;
+  useBy: string;
+  daysLeft: number;
+  remainingTbsp: number;
+  capacityTbsp: number;
+}
+
+export interface TodayTodo {
+  id: string;
+  title: string;
+  dueOn: string | null;
+  kind: 'plain' | 'restock';
+}
+
+export interface TodayView {
+  today: string;
+  use: TodayUse[];
+  /** Tablespoons planned today that no jar on the shelf covers, by product name. */
+  short: { productName: string; tbsp: number }[];
+  fridge: TodayFridgeJar[];
+  fridgeCount: number;
+  restock: RestockSuggestionView[];
+  myTodos: TodayTodo[];
+  openTodoCount: number;
+}

@@ -1,0 +1,88 @@
+import { z } from 'zod';
+import { JAR_SIZES, type IngredientRole, type IngredientUnit, type JarSize, type Method, type ProcessingPlan, type RestockReason, type ScaledRecipe } from '../domain';
+
+export const TODO_KINDS = ['plain', 'restock'] as const;
+export type TodoKind = (typeof TODO_KINDS)[number];
+
+export const TODO_FILTERS = ['open', 'mine', 'done', 'all'] as const;
+export type TodoFilter = (typeof TODO_FILTERS)[number];
+
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-09-14.');
+const title = z.string().trim().min(1, 'Give the to-do a title.').max(200, 'Keep the title under 200 characters.');
+const notes = z.string().max(4000, 'Keep the notes under 4,000 characters.');
+const assignee = z.uuid({ error: 'Choose a member of the household.' }).nullable();
+
+export const todoListQuery = z.object({ filter: z.enum(TODO_FILTERS, { error: 'Filter by open, mine, done or all.' }).default('all') });
+
+export const todoCreate = z
+  .object({ title, notes: notes.optional(), dueOn: isoDate.nullable().optional(), assigneeId: assignee.optional() })
+  .strict();
+export type TodoCreate = z.infer<typeof todoCreate>;
+
+export const todoPatch = z
+  .object({
+    title: title.optional(),
+    notes: notes.optional(),
+    dueOn: isoDate.nullable().optional(),
+    assigneeId: assignee.optional(),
+    done: z.boolean({ error: 'Done is true or false.' }).optional(),
+    position: z.number().int('A position is a whole number.').min(0, 'A position starts at 0.').optional(),
+  })
+  .strict()
+  .refine((patch) => Object.keys(patch).length > 0, 'Send at least one field to change.');
+export type TodoPatch = z.infer<typeof todoPatch>;
+
+export const restockTodoCreate = z
+  .object({
+    jars: z.number().int('Use a whole number of jars.').min(1, 'Make at least 1 jar.').max(200, 'Plan at most 200 jars at a time.').optional(),
+    jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }).optional(),
+  })
+  .strict();
+export type RestockTodoCreate = z.infer<typeof restockTodoCreate>;
+
+export interface ShoppingItem {
+  name: string;
+  role: IngredientRole;
+  amount: number;
+  unit: IngredientUnit;
+  /** Written the way a cook measures it, e.g. "2 1/4 cups". */
+  text: string;
+}
+
+/** What a restock to-do carries: everything needed to make the batch. */
+export interface BatchPlan {
+  productId: string;
+  productName: string;
+  recipeId: string;
+  recipeName: string;
+  recipeSource: string;
+  reason: RestockReason | null;
+  jars: number;
+  jarSize: JarSize;
+  method: Method;
+  altitudeFt: number;
+  headspaceInches: number;
+  scaled: ScaledRecipe;
+  processing: ProcessingPlan;
+  equipment: { jars: number; newLids: number; cannerCapacityJars: number; cannerLoads: number[] };
+  shopping: { produce: ShoppingItem[]; pantry: ShoppingItem[] };
+  targetOn: string;
+  targetWhy: string;
+  plannedOn: string;
+}
+
+export interface TodoView {
+  id: string;
+  title: string;
+  notes: string;
+  dueOn: string | null;
+  assigneeId: string | null;
+  assigneeName: string | null;
+  done: boolean;
+  doneAt: string | null;
+  position: number;
+  kind: TodoKind;
+  productId: string | null;
+  batchPlan: BatchPlan | null;
+  createdBy: string | null;
+}
