@@ -1,8 +1,18 @@
 import { Router } from 'express';
 import type { AppContext } from '../context';
+import { devMailRouter } from './dev-mail';
+import { fridgeRouter } from './fridge';
+import { householdInvitationsRouter } from './invitations';
+import { batchesRouter } from './batches';
+import { jarsRouter } from './jars';
+import { mealsRouter } from './meals';
+import { productsRouter } from './products';
+import { recipesRouter } from './recipes';
 import { restockRouter } from './restock';
+import { shelfRouter } from './shelf';
 import { todayRouter } from './today';
 import { todosRouter } from './todos';
+import { weekRouter } from './week';
 
 /**
  * Every household-scoped feature router, mounted under /api/households/:hid.
@@ -10,8 +20,18 @@ import { todosRouter } from './todos';
  */
 export function householdFeatureRouters(ctx: AppContext) {
   const router = Router({ mergeParams: true });
+  router.use(productsRouter());
+  router.use(recipesRouter());
+  router.use(batchesRouter(ctx));
+  router.use(jarsRouter(ctx));
+  router.use(shelfRouter(ctx));
+  router.use(mealsRouter(ctx));
+  router.use(weekRouter(ctx));
   router.use(restockRouter(ctx));
   router.use(todosRouter(ctx));
   router.use(todayRouter());
+  router.use(fridgeRouter());
+  router.use(householdInvitationsRouter(ctx));
+  router.use(devMailRouter(ctx));
   return router;
 }

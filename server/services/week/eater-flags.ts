@@ -1,0 +1,47 @@
+// Why a paired product may not suit someone at the table: too hot for them, or against their diet.
+import type { RecipeIngredient } from '../../../shared/domain';
+import type { DietTag, EaterFlag, WeekMember } from '../../../shared/schemas/week';
+
+export interface FlagProduct {
+  id: string;
+  name: string;
+  heat: number;
+}
+
+export interface FlagRecipe {
+  productId: string;
+  name: string;
+  ingredients: RecipeIngredient[];
+}
+
+/** What in a recipe goes against each diet, and how to say so. */
+const DIET_CONFLICTS: Record<DietTag, { finds: (ingredient: RecipeIngredient) => boolean; says: string }> = {
+  'no-added-sugar': { finds: (i) => i.role === 'sweetener' && /sugar/i.test(i.name), says: 'sweetens with sugar' },
+  'low-salt': { finds: (i) => /salt/i.test(i.name), says: 'has added salt' },
+};
+
+export function eaterFlags(product: FlagProduct, recipes: FlagRecipe[], eaters: WeekMember[]): EaterFlag[] {
+  const flags: EaterFlag[] = [];
+  for (const eater of eaters) {
+    if (product.heat > eater.heatTolerance) {
+      flags.push({
+        kind: 'heat',
+        userId: eater.userId,
+        reason: `${product.name} is heat ${product.heat}; ${eater.name} keeps to heat ${eater.heatTolerance} or milder.`,
+      });
+    }
+    for (const tag of eater.dietTags) {
+      const conflict = DIET_CONFLICTS[tag];
+      const recipe = recipes.find((r) => r.productId === product.id && r.ingredients.some(conflict.finds));
+      if (recipe) {
+        const ingredient = recipe.ingredients.find(conflict.finds)!;
+        flags.push({
+          kind: 'diet',
+          userId: eater.userId,
+          reason: `${recipe.name} ${conflict.says} (${ingredient.name.toLowerCase()}); ${eater.name} eats ${tag === 'low-salt' ? 'low salt' : 'no added sugar'}.`,
+        });
+      }
+    }
+  }
+  return flags;
+}

@@ -1,0 +1,117 @@
+// Planned meals: add, move, change and remove them, keeping each slot's positions 0, 1, 2, ... in order.
+import type { Sequelize, Transaction } from 'sequelize';
+import { Meal, MealProduct, Membership, Pairing, PlanEntry } from '../../db/models';
+import { AppError, notFound } from '../../http/errors';
+import type { PlanEntryCreate, PlanEntryPatch, Slot } from '../../../shared/schemas/week';
+import { densePlacements, lockDays, slotOf, writePlacements, type Placement } from './slot-locks';
+
+const clamp = (value: number, max: number) => Math.max(0, Math.min(value, max));
+
+function placementsOf(entries: PlanEntry[]) {
+  return new Map<string, Placement>(entries.map((e) => [e.id, { id: e.id, date: e.date, slot: e.slot, position: e.position }]));
+}
+
+/** Adds a meal to a slot, from the library (with its usual products) or by name. */
+export async function createPlanEntry(sequelize: Sequelize, householdId: string, input: PlanEntryCreate) {
+  return sequelize.transaction(async (transaction) => {
+    const meal = input.mealId
+      ? await Meal.findOne({ where: { id: input.mealId, householdId }, include: [{ model: MealProduct, as: 'products' }], transaction })
+      : null;
+    if (input.mealId && !meal) throw notFound('That meal');
+    const entries = await lockDays(sequelize, transaction, householdId, [input.date]);
+    const slot = slotOf(entries, input.date, input.slot as Slot);
+    const position = clamp(input.position ?? slot.length, slot.length);
+    const entry = await PlanEntry.create(
+      {
+        householdId,
+        date: input.date,
+        slot: input.slot as Slot,
+        position: slot.length,
+        title: input.title ?? meal!.name,
+        mealId: meal?.id ?? null,
+        servings: input.servings ?? meal?.usualServings ?? 2,
+      },
+      { transaction },
+    );
+    const ids = slot.map((e) => e.id);
+    ids.splice(position, 0, entry.id);
+    const current = placementsOf([...entries, entry]);
+    await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: input.date, slot: input.slot as Slot, ids }], current));
+    const usual = (meal as (Meal & { products?: MealProduct[] }) | null)?.products ?? [];
+    if (usual.length) {
+      await Pairing.bulkCreate(
+        usual.map((mp) => ({ householdId, planEntryId: entry.id, productId: mp.productId, tbspPerServing: mp.tbspPerServing })),
+        { transaction },
+      );
+    }
+    return entry.id;
+  });
+}
+
+async function lockedEntry(householdId: string, id: string, transaction: Transaction) {
+  const entry = await PlanEntry.findOne({ where: { id, householdId }, transaction, lock: transaction.LOCK.UPDATE });
+  if (!entry) throw notFound('That planned meal');
+  return entry;
+}
+
+/** Moves and edits one entry; a move closes the gap it leaves and opens one where it lands. */
+export async function updatePlanEntry(sequelize: Sequelize, householdId: string, id: string, patch: PlanEntryPatch) {
+  return sequelize.transaction(async (transaction) => {
+    const peek = await PlanEntry.findOne({ where: { id, householdId }, attributes: ['date'], transaction });
+    if (!peek) throw notFound('That planned meal');
+    const target = { date: patch.date ?? peek.date };
+    const entries = await lockDays(sequelize, transaction, householdId, [peek.date, target.date]);
+    // Read again under the locks: a concurrent move may have changed it while we waited.
+    const entry = await lockedEntry(householdId, id, transaction);
+    if (entry.date !== peek.date && entry.date !== target.date) {
+      throw new AppError(409, 'conflict', 'Someone moved this meal at the same moment. The board has been refreshed; try again.');
+    }
+    if (patch.eaters) await requireMembers(householdId, patch.eaters, transaction);
+    const date = patch.date ?? entry.date;
+    const slot = (patch.slot ?? entry.slot) as Slot;
+    const moves = patch.date !== undefined || patch.slot !== undefined || patch.position !== undefined;
+    if (moves) {
+      const source = slotOf(entries, entry.date, entry.slot).map((e) => e.id).filter((e) => e !== id);
+      const sameSlot = entry.date === date && entry.slot === slot;
+      const destination = sameSlot ? source : slotOf(entries, date, slot).map((e) => e.id);
+      const position = clamp(patch.position ?? destination.length, destination.length);
+      destination.splice(position, 0, id);
+      const lists = [{ date, slot, ids: destination }];
+      if (!sameSlot) lists.push({ date: entry.date, slot: entry.slot, ids: source });
+      await writePlacements(sequelize, transaction, householdId, densePlacements(lists, placementsOf(entries)));
+    }
+    const fields: Partial<Pick<PlanEntry, 'servings' | 'title' | 'eaters'>> = {};
+    if (patch.servings !== undefined) fields.servings = patch.servings;
+    if (patch.title !== undefined) fields.title = patch.title;
+    if (patch.eaters !== undefined) fields.eaters = patch.eaters;
+    if (Object.keys(fields).length) await PlanEntry.update(fields, { where: { id, householdId }, transaction });
+    return id;
+  });
+}
+
+async function requireMembers(householdId: string, userIds: string[], transaction: Transaction) {
+  const count = await Membership.count({ where: { householdId, userId: [...new Set(userIds)] }, transaction });
+  if (count !== new Set(userIds).size) throw new AppError(400, 'invalid_input', 'Choose eaters from the household’s members.', { eaters: 'Choose members of this household.' });
+}
+
+/** Removes an entry (and its pairings) and closes the gap in its slot. */
+export async function deletePlanEntry(sequelize: Sequelize, householdId: string, id: string) {
+  await sequelize.transaction(async (transaction) => {
+    const peek = await PlanEntry.findOne({ where: { id, householdId }, attributes: ['date'], transaction });
+    if (!peek) throw notFound('That planned meal');
+    const entries = await lockDays(sequelize, transaction, householdId, [peek.date]);
+    const entry = entries.find((e) => e.id === id);
+    if (!entry) throw notFound('That planned meal');
+    await PlanEntry.destroy({ where: { id, householdId }, transaction });
+    const rest = slotOf(entries, entry.date, entry.slot).map((e) => e.id).filter((e) => e !== id);
+    await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: entry.date, slot: entry.slot, ids: rest }], placementsOf(entries)));
+  });
+}
+
+/** Empties one day of the plan. */
+export async function clearDay(sequelize: Sequelize, householdId: string, date: string) {
+  return sequelize.transaction(async (transaction) => {
+    await lockDays(sequelize, transaction, householdId, [date]);
+    return PlanEntry.destroy({ where: { householdId, date }, transaction });
+  });
+}

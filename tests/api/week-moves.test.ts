@@ -1,0 +1,110 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addDays } from '../../shared/domain';
+import { PlanEntry } from '../../server/db/models';
+import { demoApp } from '../support/app';
+
+let ctx: Awaited<ReturnType<typeof demoApp>>;
+let cook: Awaited<ReturnType<typeof ctx.signedIn>>;
+// A week far from the demo plan, so the seeded entries never share its slots.
+const monday = '2031-03-03';
+const tuesday = addDays(monday, 1);
+
+beforeAll(async () => {
+  ctx = await demoApp();
+  cook = await ctx.signedIn('cook@larderly.test');
+});
+afterAll(() => ctx.close());
+
+const url = (path: string) => `/api/households/${ctx.householdId}${path}`;
+
+async function plan(date: string, slot: string, title: string, position?: number) {
+  const response = await cook.post(url('/plan-entries')).send({ date, slot, title, ...(position === undefined ? {} : { position }) });
+  expect(response.status).toBe(201);
+  return response.body.id as string;
+}
+
+/** Titles of one slot in position order, with the positions themselves. */
+async function slot(date: string, name: string) {
+  const rows = await PlanEntry.findAll({ where: { householdId: ctx.householdId, date, slot: name }, order: [['position', 'ASC']] });
+  return { titles: rows.map((r) => r.title), positions: rows.map((r) => r.position) };
+}
+
+describe('moving planned meals keeps each slot dense and ordered', () => {
+  it('inserts at a position and shifts the rest down', async () => {
+    await plan(monday, 'lunch', 'Soup');
+    await plan(monday, 'lunch', 'Bread');
+    await plan(monday, 'lunch', 'Cheese board', 1);
+    expect(await slot(monday, 'lunch')).toEqual({ titles: ['Soup', 'Cheese board', 'Bread'], positions: [0, 1, 2] });
+  });
+
+  it('reorders within a slot', async () => {
+    const [soup] = (await PlanEntry.findAll({ where: { householdId: ctx.householdId, date: monday, slot: 'lunch', title: 'Soup' } })).map((e) => e.id);
+    expect((await cook.patch(url(`/plan-entries/${soup}`)).send({ position: 2 })).status).toBe(200);
+    expect(await slot(monday, 'lunch')).toEqual({ titles: ['Cheese board', 'Bread', 'Soup'], positions: [0, 1, 2] });
+  });
+
+  it('moves across slots: the gap closes and the new slot opens one', async () => {
+    await plan(monday, 'dinner', 'Pork chops');
+    const bread = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Bread' } }))!.id;
+    expect((await cook.patch(url(`/plan-entries/${bread}`)).send({ slot: 'dinner', position: 0 })).status).toBe(200);
+    expect(await slot(monday, 'lunch')).toEqual({ titles: ['Cheese board', 'Soup'], positions: [0, 1] });
+    expect(await slot(monday, 'dinner')).toEqual({ titles: ['Bread', 'Pork chops'], positions: [0, 1] });
+  });
+
+  it('moves across days to the end of the slot when no position is given', async () => {
+    await plan(tuesday, 'dinner', 'Lentil stew');
+    const soup = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Soup' } }))!.id;
+    expect((await cook.patch(url(`/plan-entries/${soup}`)).send({ date: tuesday, slot: 'dinner' })).status).toBe(200);
+    expect(await slot(monday, 'lunch')).toEqual({ titles: ['Cheese board'], positions: [0] });
+    expect(await slot(tuesday, 'dinner')).toEqual({ titles: ['Lentil stew', 'Soup'], positions: [0, 1] });
+  });
+
+  it('clamps a position past the end to the end', async () => {
+    const cheese = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Cheese board' } }))!.id;
+    expect((await cook.patch(url(`/plan-entries/${cheese}`)).send({ date: tuesday, slot: 'dinner', position: 99 })).status).toBe(200);
+    expect(await slot(tuesday, 'dinner')).toEqual({ titles: ['Lentil stew', 'Soup', 'Cheese board'], positions: [0, 1, 2] });
+    expect(await slot(monday, 'lunch')).toEqual({ titles: [], positions: [] });
+  });
+
+  it('closes the gap when an entry is removed', async () => {
+    const soup = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: tuesday, title: 'Soup' } }))!.id;
+    expect((await cook.delete(url(`/plan-entries/${soup}`))).status).toBe(204);
+    expect(await slot(tuesday, 'dinner')).toEqual({ titles: ['Lentil stew', 'Cheese board'], positions: [0, 1] });
+  });
+
+  it('shows the moves on GET /week in slot and position order', async () => {
+    const week = (await cook.get(url(`/week?start=${monday}`))).body;
+    expect(week.start).toBe(monday);
+    const tue = week.days.find((d: { date: string }) => d.date === tuesday);
+    expect(tue.entries.map((e: { title: string; slot: string; position: number }) => `${e.slot}:${e.position}:${e.title}`)).toEqual(['dinner:0:Lentil stew', 'dinner:1:Cheese board']);
+  });
+});
+
+describe('concurrent moves', () => {
+  it('never leave two entries on one position, whatever order they land in', async () => {
+    const day = '2031-04-07';
+    const other = addDays(day, 1);
+    const ids: string[] = [];
+    for (let i = 0; i < 6; i += 1) ids.push(await plan(day, 'dinner', `Dinner ${i}`));
+    for (let i = 0; i < 4; i += 1) ids.push(await plan(other, 'lunch', `Lunch ${i}`));
+    // Every entry moves at once: half to the top of one slot, half to the top of the other.
+    const responses = await Promise.all(
+      ids.map((id, i) => cook.patch(url(`/plan-entries/${id}`)).send(i % 2 ? { date: day, slot: 'dinner', position: 0 } : { date: other, slot: 'lunch', position: 0 })),
+    );
+    expect(responses.map((r) => r.status)).toEqual(ids.map(() => 200));
+    const dinner = await slot(day, 'dinner');
+    const lunch = await slot(other, 'lunch');
+    expect(dinner.positions).toEqual([...dinner.positions.keys()]);
+    expect(lunch.positions).toEqual([...lunch.positions.keys()]);
+    expect(dinner.titles.length + lunch.titles.length).toBe(10);
+    expect(dinner.titles.length).toBe(5);
+  });
+
+  it('keeps a slot dense when many reorder the same slot at once', async () => {
+    const day = '2031-05-05';
+    const ids: string[] = [];
+    for (let i = 0; i < 8; i += 1) ids.push(await plan(day, 'snack', `Snack ${i}`));
+    await Promise.all(ids.map((id, i) => cook.patch(url(`/plan-entries/${id}`)).send({ position: (i * 3) % 8 })));
+    expect((await slot(day, 'snack')).positions).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
+  });
+});
