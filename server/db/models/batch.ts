@@ -26,9 +26,9 @@ export class Batch extends Model<InferAttributes<Batch>, InferCreationAttributes
   static initModel(sequelize: Sequelize) {
     Batch.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
-        productId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
+        productId: requiredUuid(),
         recipeId: { type: DataTypes.UUID, allowNull: true },
         cannedOn: { type: DataTypes.DATEONLY, allowNull: false },
         jarSize: { type: DataTypes.STRING(20), allowNull: false },

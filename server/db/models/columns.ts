@@ -12,5 +12,7 @@ export function decimal(name: string, precision: number, scale: number, allowNul
   };
 }
 
-export const uuidKey = { type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true } as const;
-export const requiredUuid = { type: DataTypes.UUID, allowNull: false } as const;
+// Functions, not shared objects: Model.init writes each column's `field` into its definition object,
+// so one object shared by householdId and productId would map both to household_id.
+export const uuidKey = () => ({ type: DataTypes.UUID, defaultValue: DataTypes.UUIDV4, primaryKey: true }) as const;
+export const requiredUuid = () => ({ type: DataTypes.UUID, allowNull: false }) as const;

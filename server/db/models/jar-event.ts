@@ -17,10 +17,10 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
   static initModel(sequelize: Sequelize) {
     JarEvent.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
-        jarId: requiredUuid,
-        batchId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
+        jarId: requiredUuid(),
+        batchId: requiredUuid(),
         kind: { type: DataTypes.STRING(12), allowNull: false },
         userId: { type: DataTypes.UUID, allowNull: true },
         happenedOn: { type: DataTypes.DATEONLY, allowNull: false },

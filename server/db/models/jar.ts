@@ -23,10 +23,10 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
   static initModel(sequelize: Sequelize) {
     Jar.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
-        batchId: requiredUuid,
-        productId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
+        batchId: requiredUuid(),
+        productId: requiredUuid(),
         code: { type: DataTypes.STRING(12), allowNull: false, unique: true },
         state: { type: DataTypes.STRING(10), allowNull: false },
         capacityTbsp: decimal('capacityTbsp', 8, 2),

@@ -14,8 +14,8 @@ export class Meal extends Model<InferAttributes<Meal>, InferCreationAttributes<M
   static initModel(sequelize: Sequelize) {
     Meal.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
         name: { type: DataTypes.STRING(100), allowNull: false },
         tags: { type: DataTypes.ARRAY(DataTypes.STRING(30)), allowNull: false, defaultValue: [] },
         usualServings: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 2 },
@@ -41,10 +41,10 @@ export class MealProduct extends Model<InferAttributes<MealProduct>, InferCreati
   static initModel(sequelize: Sequelize) {
     MealProduct.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
-        mealId: requiredUuid,
-        productId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
+        mealId: requiredUuid(),
+        productId: requiredUuid(),
         tbspPerServing: decimal('tbspPerServing', 6, 2),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -22,8 +22,8 @@ export class PlanEntry extends Model<InferAttributes<PlanEntry>, InferCreationAt
   static initModel(sequelize: Sequelize) {
     PlanEntry.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
         date: { type: DataTypes.DATEONLY, allowNull: false },
         slot: { type: DataTypes.STRING(10), allowNull: false },
         position: { type: DataTypes.INTEGER, allowNull: false },
@@ -52,10 +52,10 @@ export class Pairing extends Model<InferAttributes<Pairing>, InferCreationAttrib
   static initModel(sequelize: Sequelize) {
     Pairing.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
-        planEntryId: requiredUuid,
-        productId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
+        planEntryId: requiredUuid(),
+        productId: requiredUuid(),
         tbspPerServing: decimal('tbspPerServing', 6, 2),
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

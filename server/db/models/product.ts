@@ -22,8 +22,8 @@ export class Product extends Model<InferAttributes<Product>, InferCreationAttrib
   static initModel(sequelize: Sequelize) {
     Product.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
         name: { type: DataTypes.STRING(80), allowNull: false },
         kind: { type: DataTypes.STRING(20), allowNull: false },
         heat: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

@@ -26,9 +26,9 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
   static initModel(sequelize: Sequelize) {
     Recipe.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
-        productId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
+        productId: requiredUuid(),
         name: { type: DataTypes.STRING(120), allowNull: false },
         yieldJars: { type: DataTypes.INTEGER, allowNull: false },
         yieldJarSize: { type: DataTypes.STRING(20), allowNull: false },

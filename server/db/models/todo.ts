@@ -22,8 +22,8 @@ export class Todo extends Model<InferAttributes<Todo>, InferCreationAttributes<T
   static initModel(sequelize: Sequelize) {
     Todo.init(
       {
-        id: uuidKey,
-        householdId: requiredUuid,
+        id: uuidKey(),
+        householdId: requiredUuid(),
         title: { type: DataTypes.STRING(200), allowNull: false },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         dueOn: { type: DataTypes.DATEONLY, allowNull: true },
