@@ -12,6 +12,7 @@ import { sameOriginOnly } from './http/same-origin';
 import { authRouter } from './routes/auth';
 import { healthRouter } from './routes/health';
 import { householdsRouter } from './routes/households';
+import { jarCodesRouter } from './routes/jars';
 import { householdFeatureRouters } from './routes/index';
 import type { AppContext } from './context';
 
@@ -53,6 +54,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   api.use(passport.session());
   api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? 20 }));
   api.use('/households', householdsRouter(sequelize));
+  api.use('/jars', jarCodesRouter());
   api.use('/households/:hid', householdFeatureRouters(ctx));
   api.use(notFoundHandler);
   app.use('/api', api);

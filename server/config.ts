@@ -11,6 +11,7 @@ const schema = z.object({
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   STATIC_DIR: z.string().default('dist/client'),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+  UPLOAD_DIR: z.string().default('.data/uploads'),
   SMTP_HOST: z.string().optional(),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
   SMTP_SECURE: z.enum(['true', 'false']).optional(),
@@ -52,6 +53,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     dbPoolMax: c.DB_POOL_MAX,
     staticDir: c.STATIC_DIR,
     bcryptCost: c.BCRYPT_COST,
+    /** batch photos, on local disk outside the web root; served only to members */
+    uploadDir: c.UPLOAD_DIR,
     /** where links in e-mails point: the first APP_ORIGIN, else this server's own address */
     publicOrigin: (c.APP_ORIGIN ?? '').split(',')[0].trim() || `http://${c.HOST}:${c.PORT}`,
     mail: {

@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { Household, User } from '../models';
+import { seedShelf } from './shelf';
 
 export interface DemoSeedContext {
   /** by household name, as in demo-accounts.json */
@@ -12,4 +13,6 @@ export interface DemoSeedContext {
 }
 
 /** Each feature adds its part of our invented demo scenario here, in dependency order. */
-export async function seedDemoFeatures(_ctx: DemoSeedContext) {}
+export async function seedDemoFeatures(ctx: DemoSeedContext) {
+  await seedShelf(ctx);
+}

@@ -1,0 +1,42 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { JAR_ACTIONS, jarStateQuery } from '../../shared/schemas/batches';
+import { currentMembership, householdAccess, requireUser } from '../auth/guards';
+import type { AppContext } from '../context';
+import { params, query } from '../http/validate';
+import { actOnJar, jarByCode, jarInHousehold, listJars } from '../services/shelf/jars';
+
+const jarAction = z.object({
+  hid: z.string(),
+  jarId: z.uuid({ error: 'That jar was not found.' }),
+  action: z.enum(JAR_ACTIONS, { error: 'A jar can be opened, finished or discarded.' }),
+});
+const codeParams = z.object({ code: z.string().max(20) }).loose();
+
+export function jarsRouter(ctx: AppContext) {
+  const router = Router({ mergeParams: true });
+
+  router.get('/jars', householdAccess('read'), async (req, res) => {
+    res.json({ jars: await listJars(currentMembership(req).household, query(req, jarStateQuery)) });
+  });
+
+  router.get('/jars/by-code/:code', householdAccess('read'), async (req, res) => {
+    res.json({ jar: await jarInHousehold(currentMembership(req).household, params(req, codeParams).code) });
+  });
+
+  router.post('/jars/:jarId/:action', householdAccess('handleJars'), async (req, res) => {
+    const { jarId, action } = params(req, jarAction);
+    res.json({ jar: await actOnJar(ctx.sequelize, currentMembership(req).household, jarId, action, req.user!.id) });
+  });
+
+  return router;
+}
+
+/** /api/jars/by-code/:code for a label's page, which knows the code but not the household. */
+export function jarCodesRouter() {
+  const router = Router();
+  router.get('/by-code/:code', requireUser, async (req, res) => {
+    res.json(await jarByCode(params(req, codeParams).code, req.user!.id));
+  });
+  return router;
+}

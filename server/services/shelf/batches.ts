@@ -1,0 +1,99 @@
+import type { Sequelize } from 'sequelize';
+import { batchPlan } from '../../../shared/batch-plan';
+import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
+import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
+import { Batch, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
+import { AppError, notFound } from '../../http/errors';
+import { todayIn } from '../clock';
+import { findProduct } from './products';
+import { findRecipe } from './recipes';
+import { batchView, jarView } from './views';
+import { withFreshJarCodes, writeBatch } from './write-batch';
+
+export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError {
+  return new AppError(422, 'not_allowed', `${what} cannot be saved: ${plan.reasons.join(' ')}`, undefined, { plan });
+}
+
+export async function previewPlan(household: Household, recipeId: string, jarSize: JarSize, method: Method) {
+  const recipe = await findRecipe(household.id, recipeId);
+  return batchPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt });
+}
+
+export async function createBatch(sequelize: Sequelize, household: Household, input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number }, userId: string): Promise<BatchCreated> {
+  const [product, recipe] = await Promise.all([findProduct(household.id, input.productId), findRecipe(household.id, input.recipeId)]);
+  if (recipe.productId !== product.id) {
+    throw new AppError(400, 'invalid_input', 'That recipe makes another product. Choose a recipe for this product.', { recipeId: 'This recipe is for another product.' });
+  }
+  if (input.cannedOn > todayIn(household.timeZone)) {
+    throw new AppError(400, 'invalid_input', 'A batch cannot be dated in the future.', { cannedOn: 'Use today or an earlier day.' });
+  }
+  const plan = batchPlan(recipe, { jarSize: input.jarSize, method: input.method, altitudeFt: household.altitudeFt });
+  if (!plan.allowed) throw notAllowed(plan);
+
+  const { batch, jars } = await withFreshJarCodes(sequelize, (transaction) =>
+    writeBatch(
+      household,
+      product,
+      {
+        productId: product.id,
+        recipeId: recipe.id,
+        cannedOn: input.cannedOn,
+        jarSize: input.jarSize,
+        jarsFilled: input.jarsFilled,
+        jarsSealed: input.jarsSealed,
+        method: input.method,
+        minutes: plan.minutes,
+        pressurePsi: plan.pressurePsi,
+        headspaceInches: input.headspaceInches ?? recipe.headspaceInches,
+        notes: input.notes,
+      },
+      userId,
+      transaction,
+    ),
+  );
+  const today = todayIn(household.timeZone);
+  return { batch: batchView(batch, product, recipe, jars.map((j) => j.state)), jars: jars.map((jar) => jarView(jar, batch, product, today)), plan };
+}
+
+export async function listBatches(householdId: string) {
+  const [batches, products, recipes, jars] = await Promise.all([
+    Batch.findAll({ where: { householdId }, order: [['cannedOn', 'DESC'], ['createdAt', 'DESC']] }),
+    Product.findAll({ where: { householdId } }),
+    Recipe.findAll({ where: { householdId }, attributes: ['id', 'name'] }),
+    Jar.findAll({ where: { householdId }, attributes: ['batchId', 'state'] }),
+  ]);
+  const productById = new Map(products.map((p) => [p.id, p]));
+  const recipeById = new Map(recipes.map((r) => [r.id, r]));
+  return batches.map((batch) =>
+    batchView(batch, productById.get(batch.productId)!, batch.recipeId ? (recipeById.get(batch.recipeId) ?? null) : null, jars.filter((j) => j.batchId === batch.id).map((j) => j.state)),
+  );
+}
+
+export async function findBatch(householdId: string, batchId: string) {
+  const batch = await Batch.findOne({ where: { householdId, id: batchId } });
+  if (!batch) throw notFound('That batch');
+  return batch;
+}
+
+export async function batchDetail(household: Household, batchId: string): Promise<BatchDetail> {
+  const batch = await findBatch(household.id, batchId);
+  const [product, recipe, jars, events] = await Promise.all([
+    findProduct(household.id, batch.productId),
+    batch.recipeId ? Recipe.findOne({ where: { householdId: household.id, id: batch.recipeId } }) : null,
+    Jar.findAll({ where: { batchId: batch.id }, order: [['code', 'ASC']] }),
+    JarEvent.findAll({ where: { batchId: batch.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['happenedOn', 'DESC'], ['createdAt', 'DESC']] }),
+  ]);
+  const today = todayIn(household.timeZone);
+  const codes = new Map(jars.map((jar) => [jar.id, jar.code]));
+  return {
+    ...batchView(batch, product, recipe, jars.map((j) => j.state)),
+    jars: jars.map((jar) => jarView(jar, batch, product, today)),
+    history: events.map((event) => ({
+      id: event.id,
+      kind: event.kind,
+      happenedOn: event.happenedOn,
+      jarCode: codes.get(event.jarId) ?? '',
+      who: (event as JarEvent & { user?: User | null }).user?.name ?? null,
+    })),
+  };
+}

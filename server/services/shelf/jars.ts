@@ -1,0 +1,82 @@
+// Jars on the shelf and in the fridge, and the three things a member does with one.
+import { Op, type Sequelize, type WhereOptions } from 'sequelize';
+import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
+import type { JarAction, JarByCode, JarView } from '../../../shared/schemas/batches';
+import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/models';
+import { conflict, notFound } from '../../http/errors';
+import { todayIn } from '../clock';
+import { normaliseJarCode } from './jar-codes';
+import { jarView } from './views';
+
+type JarWithParts = Jar & { batch: Batch; product: Product };
+const withParts = [
+  { model: Batch, as: 'batch', required: true },
+  { model: Product, as: 'product', required: true },
+];
+
+export async function listJars(household: Household, filter: { state?: JarState | 'all'; productId?: string; batchId?: string }) {
+  const where: WhereOptions<Jar> = { householdId: household.id };
+  if (filter.state !== 'all') Object.assign(where, { state: filter.state ?? { [Op.in]: ['sealed', 'opened'] } });
+  if (filter.productId) Object.assign(where, { productId: filter.productId });
+  if (filter.batchId) Object.assign(where, { batchId: filter.batchId });
+  const jars = (await Jar.findAll({ where, include: withParts, order: [['bestBy', 'ASC'], ['code', 'ASC']] })) as JarWithParts[];
+  const today = todayIn(household.timeZone);
+  return jars.map((jar) => jarView(jar, jar.batch, jar.product, today));
+}
+
+const FROM: Record<JarAction, JarState[]> = { open: ['sealed'], finish: ['opened'], discard: ['sealed', 'opened'] };
+const EVENT: Record<JarAction, 'opened' | 'finished' | 'discarded'> = { open: 'opened', finish: 'finished', discard: 'discarded' };
+
+function refusal(action: JarAction, jar: Jar): string {
+  const already = { opened: `was opened on ${jar.openedOn}`, finished: `was finished on ${jar.finishedOn}`, discarded: `was discarded on ${jar.discardedOn}`, sealed: 'is still sealed' }[jar.state];
+  const what = { open: 'Only a sealed jar can be opened.', finish: 'Only an opened jar can be finished; open it first.', discard: 'A finished or discarded jar cannot be discarded.' }[action];
+  return `Jar ${jar.code} ${already}. ${what} Refresh to see its state now.`;
+}
+
+/**
+ * Moves a jar along sealed -> opened -> finished, or to discarded. The conditional UPDATE is the
+ * lock: of many people acting on one jar at once, exactly one changes it and the others get 409.
+ */
+export async function actOnJar(sequelize: Sequelize, household: Household, jarId: string, action: JarAction, userId: string): Promise<JarView> {
+  const today = todayIn(household.timeZone);
+  return sequelize.transaction(async (transaction) => {
+    const jar = (await Jar.findOne({ where: { id: jarId, householdId: household.id }, include: withParts, transaction })) as JarWithParts | null;
+    if (!jar) throw notFound('That jar');
+    const changes: Partial<Jar> =
+      action === 'open'
+        ? { state: 'opened', openedOn: today, useBy: useBy(today, jar.product.useWithinDays ?? defaultUseWithinDays(jar.product.kind)) }
+        : action === 'finish'
+          ? { state: 'finished', finishedOn: today, remainingTbsp: 0 }
+          : { state: 'discarded', discardedOn: today };
+    const [count, rows] = await Jar.update(changes, { where: { id: jar.id, state: { [Op.in]: FROM[action] } }, returning: true, transaction });
+    if (count === 0) {
+      await jar.reload({ transaction });
+      throw conflict(refusal(action, jar));
+    }
+    await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: EVENT[action], userId, happenedOn: today }, { transaction });
+    return jarView(rows[0], jar.batch, jar.product, today);
+  });
+}
+
+export async function jarInHousehold(household: Household, rawCode: string) {
+  const code = normaliseJarCode(rawCode);
+  const jar = code ? ((await Jar.findOne({ where: { code, householdId: household.id }, include: withParts })) as JarWithParts | null) : null;
+  if (!jar) throw notFound('That jar');
+  return jarView(jar, jar.batch, jar.product, todayIn(household.timeZone));
+}
+
+/** A label's code, for someone signed in: the jar and its household when they belong to it, 404 otherwise. */
+export async function jarByCode(rawCode: string, userId: string): Promise<JarByCode> {
+  const code = normaliseJarCode(rawCode);
+  const jar = code ? await Jar.findOne({ where: { code }, attributes: ['householdId'] }) : null;
+  const membership = jar
+    ? await Membership.findOne({ where: { householdId: jar.householdId, userId }, include: [{ model: Household, as: 'household', required: true }] })
+    : null;
+  if (!membership?.household) throw notFound('That jar');
+  return {
+    householdId: membership.householdId,
+    householdName: membership.household.name,
+    role: membership.role,
+    jar: await jarInHousehold(membership.household, code!),
+  };
+}

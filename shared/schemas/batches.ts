@@ -1,0 +1,129 @@
+import { z } from 'zod';
+import { JAR_SIZES, PROCESSING_METHODS, type JarSize, type JarState, type Method, type ProcessingPlan } from '../domain';
+
+export const isoDate = z.string({ error: 'Enter a date.' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter a date as YYYY-MM-DD.');
+
+export const batchCreate = z
+  .object({
+    productId: z.uuid({ error: 'Choose the product.' }),
+    recipeId: z.uuid({ error: 'Choose the tested recipe you followed.' }),
+    cannedOn: isoDate,
+    jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
+    jarsFilled: z.number({ error: 'Enter how many jars you filled.' }).int('Use a whole number of jars.').min(1, 'Fill at least 1 jar.').max(200, 'Use at most 200 jars in one batch.'),
+    jarsSealed: z.number({ error: 'Enter how many jars sealed.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(200, 'Use at most 200 jars.'),
+    method: z.enum(PROCESSING_METHODS, { error: 'Choose the canner you used.' }),
+    headspaceInches: z.number().min(0).max(2).optional(),
+    notes: z.string().max(2000, 'Use at most 2,000 characters.').default(''),
+  })
+  .strict()
+  .refine((batch) => batch.jarsSealed <= batch.jarsFilled, { path: ['jarsSealed'], message: 'More jars cannot seal than were filled.' });
+export type BatchCreate = z.input<typeof batchCreate>;
+
+export const planQuery = z.object({
+  recipeId: z.uuid({ error: 'Choose a recipe.' }),
+  jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
+  method: z.enum(PROCESSING_METHODS, { error: 'Choose a canner.' }),
+});
+
+export const jarStateQuery = z.object({
+  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded']), z.literal('all')]).optional(),
+  productId: z.uuid().optional(),
+  batchId: z.uuid().optional(),
+});
+
+export const JAR_ACTIONS = ['open', 'finish', 'discard'] as const;
+export type JarAction = (typeof JAR_ACTIONS)[number];
+
+export interface JarView {
+  id: string;
+  code: string;
+  state: JarState;
+  unsealed: boolean;
+  bestBy: string;
+  openedOn: string | null;
+  useBy: string | null;
+  finishedOn: string | null;
+  discardedOn: string | null;
+  capacityTbsp: number;
+  remainingTbsp: number;
+  batchId: string;
+  cannedOn: string;
+  jarSize: JarSize;
+  batchNotes: string;
+  productId: string;
+  productName: string;
+  productKind: string;
+  productColour: string;
+  /** Sealed past the household's best-quality months. */
+  pastBestQuality: boolean;
+}
+
+export interface BatchView {
+  id: string;
+  productId: string;
+  productName: string;
+  recipeId: string | null;
+  recipeName: string | null;
+  cannedOn: string;
+  jarSize: JarSize;
+  jarsFilled: number;
+  jarsSealed: number;
+  method: Method;
+  altitudeFt: number;
+  minutes: number | null;
+  pressurePsi: number | null;
+  headspaceInches: number | null;
+  notes: string;
+  hasPhoto: boolean;
+  jarCounts: Record<JarState, number>;
+}
+
+export interface JarEventView {
+  id: string;
+  kind: string;
+  happenedOn: string;
+  jarCode: string;
+  who: string | null;
+}
+
+export interface BatchDetail extends BatchView {
+  jars: JarView[];
+  history: JarEventView[];
+}
+
+export interface BatchCreated {
+  batch: BatchView;
+  jars: JarView[];
+  plan: ProcessingPlan;
+}
+
+export interface JarByCode {
+  householdId: string;
+  householdName: string;
+  role: import('../roles').Role;
+  jar: JarView;
+}
+
+/** One row of a batch import, as the preview shows it. */
+export interface ImportRow {
+  row: number;
+  productName: string;
+  recipeName: string | null;
+  cannedOn: string;
+  jarSize: JarSize;
+  jarsFilled: number;
+  jarsSealed: number;
+  method: Method;
+  minutes: number | null;
+}
+
+export interface ImportProblem {
+  row: number;
+  field: string;
+  message: string;
+}
+
+export const importBody = z.object({
+  csv: z.string({ error: 'Choose a CSV file.' }).min(1, 'The file is empty.').max(500_000, 'Use a file of at most 500 kB.'),
+  commit: z.boolean().default(false),
+});
