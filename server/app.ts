@@ -14,6 +14,11 @@ import { healthRouter } from './routes/health';
 import { householdsRouter } from './routes/households';
 import { jarCodesRouter } from './routes/jars';
 import { householdFeatureRouters } from './routes/index';
+import { acceptInvitationRouter } from './routes/invitations';
+import { meNotificationsRouter } from './routes/me-notifications';
+import { pushRouter } from './routes/push';
+import { createMailer } from './services/mail/mailer';
+import { createPushSender } from './services/push/push-sender';
 import type { AppContext } from './context';
 
 /** Builds the Express app and its connections; tests mount it without listening. */
@@ -23,7 +28,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport();
-  const ctx: AppContext = { config, sequelize };
+  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config) };
 
   const app = express();
   app.disable('x-powered-by');
@@ -56,6 +61,9 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   api.use('/households', householdsRouter(sequelize));
   api.use('/jars', jarCodesRouter());
   api.use('/households/:hid', householdFeatureRouters(ctx));
+  api.use('/push', pushRouter(ctx));
+  api.use('/me', meNotificationsRouter());
+  api.use('/invitations', acceptInvitationRouter(ctx));
   api.use(notFoundHandler);
   app.use('/api', api);
 
@@ -73,6 +81,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
     ctx,
     sequelize,
     async close() {
+      ctx.mailer.close();
       await Promise.allSettled([database.release(), sessionPool.end()]);
     },
   };

@@ -1,8 +1,14 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { Mailer } from './services/mail/mailer';
+import type { PushSender } from './services/push/push-sender';
 
 /** What every router and service may need, built once per app. */
 export interface AppContext {
   config: Config;
   sequelize: Sequelize;
+  /** SMTP: the local catcher in development and tests */
+  mailer: Mailer;
+  /** Web Push with the VAPID keys */
+  push: PushSender;
 }

@@ -1,10 +1,12 @@
 import { createApp } from './app';
 import { loadConfig } from './config';
 import { migrate } from './db/migrate';
+import { startJobs } from './jobs';
 
 const config = loadConfig();
-const { app, sequelize, close } = createApp(config);
+const { app, ctx, sequelize, close } = createApp(config);
 await migrate(sequelize);
+const jobs = await startJobs(ctx);
 
 const server = app.listen(config.port, config.host, () => {
   const address = server.address();
@@ -14,7 +16,7 @@ const server = app.listen(config.port, config.host, () => {
 
 function shutdown(signal: string) {
   console.log(`larderly: ${signal}, closing`);
-  server.close(() => void close().then(() => process.exit(0)));
+  server.close(() => void jobs.stop().then(close).then(() => process.exit(0)));
   setTimeout(() => process.exit(0), 5_000).unref();
 }
 process.on('SIGINT', () => shutdown('SIGINT'));

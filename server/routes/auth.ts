@@ -9,7 +9,7 @@ import { AppError } from '../http/errors';
 import { body } from '../http/validate';
 import { describeMe, signUp } from '../services/accounts';
 
-function signIn(req: Request, user: Express.User) {
+export function signIn(req: Request, user: Express.User) {
   // A fresh session id at sign-in, so a planted id is worth nothing.
   return new Promise<void>((resolve, reject) => {
     req.session.regenerate((error) => {

@@ -1,13 +1,19 @@
 import type { Sequelize } from 'sequelize';
+import { AppSetting } from './app-setting';
 import { Batch } from './batch';
+import { DigestDelivery } from './digest-delivery';
 import { Household } from './household';
+import { Invitation } from './invitation';
 import { Jar } from './jar';
 import { JarEvent } from './jar-event';
 import { Meal, MealProduct } from './meal';
 import { Membership } from './membership';
+import { NotificationPreference } from './notification-preference';
 import { Pairing, PlanEntry } from './plan-entry';
 import { Product } from './product';
+import { PushSubscription } from './push-subscription';
 import { Recipe } from './recipe';
+import { ReminderDelivery } from './reminder-delivery';
 import { Todo } from './todo';
 import { User } from './user';
 
@@ -16,8 +22,10 @@ export function initModels(sequelize: Sequelize) {
   for (const model of [User, Household, Membership, Product, Recipe, Batch, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
     model.initModel(sequelize);
   }
+  for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation]) model.initModel(sequelize);
 
   Membership.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
+  Invitation.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
   Membership.belongsTo(User, { as: 'user', foreignKey: 'userId' });
   Household.hasMany(Membership, { as: 'memberships', foreignKey: 'householdId' });
   User.hasMany(Membership, { as: 'memberships', foreignKey: 'userId' });
@@ -43,4 +51,4 @@ export function initModels(sequelize: Sequelize) {
   Todo.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { Batch, Household, Jar, JarEvent, Meal, MealProduct, Membership, Pairing, PlanEntry, Product, Recipe, Todo, User };
+export { AppSetting, Batch, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, Todo, User };

@@ -1,0 +1,38 @@
+import PgBoss from 'pg-boss';
+import type { AppContext } from '../context';
+import { sweepDigests } from '../services/digest';
+import { sweepReminders } from '../services/reminders';
+
+const REMINDERS = 'reminder-sweep';
+const DIGESTS = 'digest-sweep';
+
+/**
+ * The job runner: pg-boss queues in PostgreSQL, with schedules every few minutes. The singleton
+ * policy lets one sweep run at a time across every app process; the delivery tables' unique
+ * keys make each reminder and digest go out once even so.
+ */
+export async function startJobs(ctx: AppContext) {
+  const boss = new PgBoss({ connectionString: ctx.config.databaseUrl, schema: 'pgboss', max: 3, application_name: 'larderly-jobs' });
+  boss.on('error', (error) => console.warn(`larderly jobs: ${error.message}`));
+  await boss.start();
+  // Processes starting together would deadlock creating the same queues; an advisory lock takes turns.
+  await ctx.sequelize.transaction(async (transaction) => {
+    await ctx.sequelize.query("SELECT pg_advisory_xact_lock(hashtext('larderly-job-queues'))", { transaction });
+    for (const name of [REMINDERS, DIGESTS]) {
+      if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, policy: 'singleton', expireInSeconds: 10 * 60, retryLimit: 2 });
+    }
+  });
+  await boss.schedule(REMINDERS, '*/5 * * * *');
+  await boss.schedule(DIGESTS, '2,32 * * * *');
+  await boss.work(REMINDERS, async () => {
+    await sweepReminders(ctx);
+  });
+  await boss.work(DIGESTS, async () => {
+    await sweepDigests(ctx);
+  });
+  return {
+    /** queue a reminder sweep now instead of waiting for the schedule */
+    sweepNow: () => boss.send(REMINDERS, {}),
+    stop: () => boss.stop({ graceful: true, timeout: 5_000 }),
+  };
+}

@@ -1,0 +1,15 @@
+import { ROLE_LABELS, type Role } from '../../../shared/roles';
+import { escapeHtml, mailButton, mailLayout, TEXT_FOOTER } from './layout';
+import type { MailMessage } from './mailer';
+
+export function invitationMail(input: { to: string; householdName: string; inviterName: string; role: Role; link: string; expiresOn: string }): MailMessage {
+  const role = ROLE_LABELS[input.role].toLowerCase();
+  const subject = `${input.inviterName} invites you to ${input.householdName} on Larderly`;
+  const lead = `${input.inviterName} would like you to join ${input.householdName} as a ${role}: you will share the shelf, the fridge and the week's meals.`;
+  const text = `${lead}\n\nJoin here (the link works once, until ${input.expiresOn}):\n${input.link}\n\nIf you did not expect this, ignore it; nothing happens without the link.${TEXT_FOOTER}`;
+  const html = mailLayout(
+    subject,
+    `<p>${escapeHtml(lead)}</p>${mailButton(input.link, `Join ${input.householdName}`)}<p style="font-size:14px">The link works once, until ${escapeHtml(input.expiresOn)}. If you did not expect this, ignore it; nothing happens without the link.</p>`,
+  );
+  return { to: input.to, subject, text, html };
+}

@@ -1,0 +1,33 @@
+import { DEFAULT_DAYS_BEFORE, DEFAULT_REMINDER_HOUR, type NotificationPatch, type NotificationSettings } from '../../shared/schemas/notifications';
+import { NotificationPreference, PushSubscription } from '../db/models';
+
+export interface Preferences {
+  emailReminders: boolean;
+  weeklyDigest: boolean;
+  reminderHour: number;
+  daysBefore: number;
+}
+
+export const DEFAULT_PREFERENCES: Preferences = { emailReminders: true, weeklyDigest: true, reminderHour: DEFAULT_REMINDER_HOUR, daysBefore: DEFAULT_DAYS_BEFORE };
+
+function pick(row: NotificationPreference | null | undefined): Preferences {
+  if (!row) return { ...DEFAULT_PREFERENCES };
+  return { emailReminders: row.emailReminders, weeklyDigest: row.weeklyDigest, reminderHour: row.reminderHour, daysBefore: row.daysBefore };
+}
+
+/** Each person's preferences by user id, defaults filled in. */
+export async function preferencesOf(userIds: string[]) {
+  const rows = await NotificationPreference.findAll({ where: { userId: userIds } });
+  return new Map(userIds.map((id) => [id, pick(rows.find((r) => r.userId === id))]));
+}
+
+export async function viewSettings(userId: string): Promise<NotificationSettings> {
+  const [row, pushDevices] = await Promise.all([NotificationPreference.findByPk(userId), PushSubscription.count({ where: { userId } })]);
+  return { ...pick(row), pushDevices };
+}
+
+export async function updateSettings(userId: string, patch: NotificationPatch) {
+  const current = pick(await NotificationPreference.findByPk(userId));
+  await NotificationPreference.upsert({ userId, ...current, ...patch });
+  return viewSettings(userId);
+}

@@ -1,0 +1,57 @@
+import { readFileSync } from 'node:fs';
+import https from 'node:https';
+import webpush, { WebPushError } from 'web-push';
+import type { Config } from '../../config';
+import { PushSubscription } from '../../db/models';
+import { loadVapidKeys, type VapidKeys } from './vapid-keys';
+
+/** What the service worker receives; `url` is the page a click opens. */
+export interface PushMessage {
+  title: string;
+  body: string;
+  url: string;
+  tag: string;
+}
+
+export type PushOutcome = 'sent' | 'gone' | 'failed';
+
+export interface PushSender {
+  publicKey(): Promise<string>;
+  /** Sends to one subscription; a subscription the push service no longer knows (404, 410) is removed. */
+  send(subscription: PushSubscription, message: PushMessage): Promise<PushOutcome>;
+}
+
+const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]']);
+
+export function createPushSender(config: Config): PushSender {
+  let keys: Promise<VapidKeys> | undefined;
+  const vapid = () => (keys ??= loadVapidKeys(config).catch((error) => {
+    keys = undefined;
+    throw error;
+  }));
+  // The local push endpoint's self-signed certificate, trusted only for loopback endpoints outside production.
+  const localAgent = config.push.caFile ? new https.Agent({ ca: readFileSync(config.push.caFile) }) : undefined;
+
+  return {
+    publicKey: async () => (await vapid()).publicKey,
+    async send(subscription, message) {
+      const { publicKey, privateKey } = await vapid();
+      const agent = localAgent && LOOPBACK.has(new URL(subscription.endpoint).hostname) ? localAgent : undefined;
+      try {
+        await webpush.sendNotification(
+          { endpoint: subscription.endpoint, keys: { p256dh: subscription.p256dh, auth: subscription.auth } },
+          JSON.stringify(message),
+          { vapidDetails: { subject: config.push.vapidSubject, publicKey, privateKey }, TTL: 24 * 60 * 60, urgency: 'normal', agent, timeout: 10_000 },
+        );
+        return 'sent';
+      } catch (error) {
+        if (error instanceof WebPushError && (error.statusCode === 404 || error.statusCode === 410)) {
+          await subscription.destroy();
+          return 'gone';
+        }
+        console.warn(`larderly: a push to ${new URL(subscription.endpoint).host} failed: ${(error as Error).message}`);
+        return 'failed';
+      }
+    },
+  };
+}

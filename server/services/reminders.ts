@@ -1,0 +1,85 @@
+import { randomUUID } from 'node:crypto';
+import { Op, QueryTypes } from 'sequelize';
+import { addDays, daysBetween } from '../../shared/domain';
+import type { AppContext } from '../context';
+import { Household, Jar, Membership, Product, ReminderDelivery, User } from '../db/models';
+import type { ReminderKind } from '../db/models/reminder-delivery';
+import { reminderMail, reminderWords } from './mail/reminder-mail';
+import { clock, hourIn, todayIn } from './clock';
+import { preferencesOf, type Preferences } from './notification-preferences';
+import { subscriptionsOf } from './push/subscriptions';
+
+type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer' | 'push'>;
+
+/** Which reminder, if any, a person is due for a jar at this hour of the household's day. */
+export function dueReminder(daysLeft: number, hour: number, prefs: Preferences): ReminderKind | null {
+  if (hour < prefs.reminderHour) return null;
+  if (daysLeft === 0) return 'today';
+  if (daysLeft >= 1 && daysLeft <= prefs.daysBefore) return 'soon';
+  return null;
+}
+
+/** Claims the reminder in the database; false when another run (or process) already has it. */
+async function claim(ctx: Notifiers, values: { householdId: string; jarId: string; userId: string; kind: ReminderKind; useBy: string }) {
+  const rows = await ctx.sequelize.query(
+    `INSERT INTO reminder_deliveries (id, household_id, jar_id, user_id, kind, use_by, created_at, updated_at)
+     VALUES (:id, :householdId, :jarId, :userId, :kind, :useBy, now(), now())
+     ON CONFLICT (jar_id, kind, user_id) DO NOTHING RETURNING id`,
+    { replacements: { id: randomUUID(), ...values }, type: QueryTypes.SELECT },
+  );
+  return rows.length === 1 ? (rows[0] as { id: string }).id : null;
+}
+
+async function deliver(ctx: Notifiers, deliveryId: string, to: { user: User; prefs: Preferences }, jar: Jar, product: Product, household: Household, kind: ReminderKind, daysLeft: number) {
+  const words = reminderWords(kind, product.name, daysLeft, jar.code);
+  const path = `/j/${jar.code}`;
+  let pushesSent = 0;
+  const problems: string[] = [];
+  for (const subscription of await subscriptionsOf([to.user.id])) {
+    const outcome = await ctx.push.send(subscription, { ...words, url: path, tag: `jar-${jar.id}-${kind}` });
+    if (outcome === 'sent') pushesSent += 1;
+    else problems.push(`push ${outcome}`);
+  }
+  let emailSent = false;
+  if (to.prefs.emailReminders && ctx.mailer.enabled) {
+    try {
+      await ctx.mailer.send(reminderMail({ to: to.user.email, words, householdName: household.name, link: `${ctx.config.publicOrigin}${path}` }));
+      emailSent = true;
+    } catch (error) {
+      problems.push(`e-mail: ${(error as Error).message}`);
+    }
+  }
+  await ReminderDelivery.update({ pushesSent, emailSent, problem: problems.join('; ') || null }, { where: { id: deliveryId } });
+}
+
+/**
+ * One pass of the reminder schedule: every opened jar whose use-by is near, in each household's
+ * time zone, for each member whose reminder hour has come. Safe to run often and in parallel.
+ */
+export async function sweepReminders(ctx: Notifiers, now = clock.now()) {
+  const utcToday = now.toISOString().slice(0, 10);
+  // Time zones are at most a day apart from UTC, so this window holds every jar due anywhere.
+  const jars = await Jar.findAll({ where: { state: 'opened', useBy: { [Op.between]: [addDays(utcToday, -1), addDays(utcToday, 16)] } } });
+  let claimed = 0;
+  const householdIds = [...new Set(jars.map((j) => j.householdId))];
+  for (const household of await Household.findAll({ where: { id: householdIds } })) {
+    const today = todayIn(household.timeZone, now);
+    const hour = hourIn(household.timeZone, now);
+    const memberships = await Membership.findAll({ where: { householdId: household.id }, include: [{ model: User, as: 'user', required: true }] });
+    const prefs = await preferencesOf(memberships.map((m) => m.userId));
+    const products = new Map((await Product.findAll({ where: { householdId: household.id } })).map((p) => [p.id, p]));
+    for (const jar of jars.filter((j) => j.householdId === household.id)) {
+      const daysLeft = daysBetween(today, jar.useBy!);
+      for (const membership of memberships) {
+        const mine = prefs.get(membership.userId)!;
+        const kind = dueReminder(daysLeft, hour, mine);
+        if (!kind) continue;
+        const deliveryId = await claim(ctx, { householdId: household.id, jarId: jar.id, userId: membership.userId, kind, useBy: jar.useBy! });
+        if (!deliveryId) continue;
+        claimed += 1;
+        await deliver(ctx, deliveryId, { user: membership.user!, prefs: mine }, jar, products.get(jar.productId)!, household, kind, daysLeft);
+      }
+    }
+  }
+  return { claimed };
+}
