@@ -1,0 +1,130 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Invitation } from '../../server/db/models';
+import { bareApp } from '../support/bare-app';
+import { newHousehold } from '../support/opened-jar';
+import { startStandIns, type StandIns } from '../support/stand-ins';
+
+let ctx: ReturnType<typeof bareApp>;
+let standIns: StandIns;
+beforeAll(async () => {
+  standIns = await startStandIns();
+  ctx = bareApp({ ...standIns.env, APP_ORIGIN: 'http://larderly.example.test' });
+});
+afterAll(async () => {
+  await ctx.close();
+  await standIns.close();
+});
+
+/** The token from the link in the last invitation e-mail to `email`. */
+function linkTokenFor(email: string) {
+  const mail = standIns.mail.to(email).at(-1);
+  const token = /http:\/\/larderly\.example\.test\/invite\/([A-Za-z0-9_-]+)/.exec(mail?.text ?? '')?.[1];
+  if (!token) throw new Error(`no invitation link was mailed to ${email}`);
+  expect(mail!.html).toContain(`/invite/${token}`);
+  return token;
+}
+
+const freshAddress = () => `guest-${Math.random().toString(36).slice(2, 10)}@example.test`;
+
+describe('invitations', () => {
+  it('e-mails a single-use link; a new person joins with it once, and a second use is refused', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const email = freshAddress();
+    const invited = await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email, role: 'cook' });
+    expect(invited.status).toBe(201);
+    expect(invited.body.invitation).toMatchObject({ email, role: 'cook', invitedBy: 'Ada Fenwick' });
+    const token = linkTokenFor(email);
+    expect(standIns.mail.to(email)[0].subject).toMatch(/Fenwick Cellar/);
+
+    const stored = await Invitation.findByPk(invited.body.invitation.id);
+    expect(stored!.tokenHash).not.toContain(token);
+    expect(stored!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
+
+    const newcomer = request.agent(ctx.app);
+    const accepted = await newcomer.post(`/api/invitations/${token}/accept`).send({ name: 'Bram Ostler', password: 'elderflower cordial' });
+    expect(accepted.status).toBe(200);
+    expect(accepted.body.invitation).toMatchObject({ householdId: keeper.householdId, role: 'cook', householdName: 'Fenwick Cellar' });
+    const me = await newcomer.get('/api/auth/me');
+    expect(me.body.user.email).toBe(email);
+    expect(me.body.memberships).toEqual([{ householdId: keeper.householdId, householdName: 'Fenwick Cellar', role: 'cook' }]);
+
+    const again = await request.agent(ctx.app).post(`/api/invitations/${token}/accept`).send({ name: 'Someone Else', password: 'another password' });
+    expect(again.status).toBe(410);
+    expect(again.body.error.message).toMatch(/already been used/);
+    expect((await keeper.agent.get(`/api/households/${keeper.householdId}/invitations`)).body.invitations).toEqual([]);
+  });
+
+  it('lets an existing person sign in and join with the role of the invitation', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const other = await newHousehold(ctx.app, 'UTC');
+    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: other.email, role: 'helper' });
+    const signedOut = await request(ctx.app).post(`/api/invitations/${linkTokenFor(other.email)}/accept`).send({});
+    expect(signedOut.status).toBe(401);
+    const joined = await other.agent.post(`/api/invitations/${linkTokenFor(other.email)}/accept`).send({});
+    expect(joined.status).toBe(200);
+    const memberships = (await other.agent.get('/api/auth/me')).body.memberships;
+    expect(memberships.map((m: { role: string }) => m.role)).toEqual(['keeper', 'helper']);
+  });
+
+  it('refuses an expired invitation with a clear message', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const email = freshAddress();
+    const invited = await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email, role: 'helper' });
+    const token = linkTokenFor(email);
+    await Invitation.update({ expiresAt: new Date(Date.now() - 60_000) }, { where: { id: invited.body.invitation.id } });
+    const response = await request(ctx.app).post(`/api/invitations/${token}/accept`).send({ name: 'Late Guest', password: 'rhubarb season' });
+    expect(response.status).toBe(410);
+    expect(response.body.error.message).toMatch(/^This invitation expired on \d{4}-\d{2}-\d{2}\. Ask a keeper/);
+  });
+
+  it('expires 7 days after it is sent', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const before = Date.now();
+    const invited = await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: freshAddress(), role: 'cook' });
+    const days = (Date.parse(invited.body.invitation.expiresAt) - before) / 86_400_000;
+    expect(days).toBeGreaterThan(6.99);
+    expect(days).toBeLessThan(7.01);
+  });
+
+  it('does not let a helper invite (403), nor a cook', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    for (const role of ['helper', 'cook'] as const) {
+      const member = await newHousehold(ctx.app, 'UTC');
+      await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: member.email, role });
+      await member.agent.post(`/api/invitations/${linkTokenFor(member.email)}/accept`).send({});
+      const sent = standIns.mail.messages.length;
+      const response = await member.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: freshAddress(), role: 'keeper' });
+      expect(response.status).toBe(403);
+      expect(standIns.mail.messages.length).toBe(sent);
+    }
+  });
+
+  it('shows the keeper pending invitations and lets them revoke one, whose link then fails', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const email = freshAddress();
+    const invited = await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email, role: 'cook' });
+    const pending = await keeper.agent.get(`/api/households/${keeper.householdId}/invitations`);
+    expect(pending.body.invitations.map((i: { email: string }) => i.email)).toEqual([email]);
+    expect((await keeper.agent.delete(`/api/households/${keeper.householdId}/invitations/${invited.body.invitation.id}`)).status).toBe(204);
+    expect((await keeper.agent.get(`/api/households/${keeper.householdId}/invitations`)).body.invitations).toEqual([]);
+    const response = await request(ctx.app).post(`/api/invitations/${linkTokenFor(email)}/accept`).send({ name: 'Withdrawn Guest', password: 'plum butter forever' });
+    expect(response.status).toBe(410);
+    expect(response.body.error.message).toMatch(/withdrawn/);
+  });
+
+  it("answers another household's keeper 404, and refuses to invite someone already in the household", async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const stranger = await newHousehold(ctx.app, 'UTC');
+    expect((await stranger.agent.get(`/api/households/${keeper.householdId}/invitations`)).status).toBe(404);
+    expect((await stranger.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: freshAddress(), role: 'cook' })).status).toBe(404);
+    const self = await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: keeper.email, role: 'cook' });
+    expect(self.status).toBe(409);
+  });
+
+  it('answers 404 for a made-up token', async () => {
+    const response = await request(ctx.app).post(`/api/invitations/${'x'.repeat(43)}/accept`).send({ name: 'Nobody', password: 'not a real link' });
+    expect(response.status).toBe(404);
+    expect(response.body.error.message).toMatch(/not valid/);
+  });
+});
