@@ -1,10 +1,105 @@
-import { EmptyState, PageHeader } from '@/components/ui/page';
+import { format, parseISO } from 'date-fns';
+import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { addDays, requireIsoDate } from '@shared/domain';
+import { can } from '@shared/roles';
+import { weekStartOf } from '@shared/schemas/week';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { PageHeader } from '@/components/ui/page';
+import { useHousehold } from '@/features/households/api/get-household';
+import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { useCopyWeek } from '@/features/week/api/copy-week';
+import { useMeals } from '@/features/week/api/get-meals';
+import { useWeek } from '@/features/week/api/get-week';
+import { PreferencesPanel } from '@/features/week/components/preferences-panel';
+import { WeekBoard } from '@/features/week/components/week-board';
+import { currentWeekStart, shiftWeek } from '@/features/week/week-dates';
+
+function validDate(value: string | null) {
+  try {
+    return value ? requireIsoDate(value) : null;
+  } catch {
+    return null;
+  }
+}
 
 export function WeekRoute() {
+  const { hid, role, me } = useCurrentHousehold();
+  const household = useHousehold(hid);
+  const [params, setParams] = useSearchParams();
+  if (!household.data) return <PageHeader title="Week" lead="Loading the week…" />;
+  const { timeZone, weekStartsOn } = household.data;
+  const asked = validDate(params.get('start'));
+  const start = asked ? weekStartOf(asked, weekStartsOn) : currentWeekStart(timeZone, weekStartsOn);
+  const goTo = (next: string) => setParams(next === currentWeekStart(timeZone, weekStartsOn) ? {} : { start: next });
+  return <WeekScreen key={start} hid={hid} start={start} canEdit={can(role, 'cook')} isKeeper={role === 'keeper'} myId={me?.user.id ?? ''} goTo={goTo} thisWeek={currentWeekStart(timeZone, weekStartsOn)} />;
+}
+
+function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek }: { hid: string; start: string; canEdit: boolean; isKeeper: boolean; myId: string; goTo: (start: string) => void; thisWeek: string }) {
+  const week = useWeek(hid, start);
+  const meals = useMeals(hid);
+  const copy = useCopyWeek(hid);
+  const [copied, setCopied] = useState<string | null>(null);
+  const title = `${format(parseISO(start), 'MMM d')} – ${format(parseISO(addDays(start, 6)), 'MMM d')}`;
+  const copyLastWeek = () =>
+    copy.mutate(
+      { from: shiftWeek(start, -1), to: start },
+      { onSuccess: ({ copied: count }) => setCopied(count ? `Copied ${count} planned meal${count === 1 ? '' : 's'} from last week.` : 'Last week had nothing planned to copy.') },
+    );
   return (
     <>
-      <PageHeader title="Week" lead="Plan the household's meals and pair them with jars from the shelf." />
-      <EmptyState title="The week is open">Meals you plan show up here, each paired with the jar it draws from.</EmptyState>
+      <PageHeader
+        title="Week"
+        lead={
+          <>
+            <span className="tabular font-bold text-ink">{title}</span>
+            {start === thisWeek ? ' · this week' : ''}. Plan meals and pair them with jars from the shelf; the board says which jar each one draws from.
+          </>
+        }
+        actions={
+          <nav aria-label="Weeks" className="flex flex-wrap gap-2">
+            <Button variant="secondary" onClick={() => goTo(shiftWeek(start, -1))} aria-label="Previous week">
+              ← Previous
+            </Button>
+            {start !== thisWeek && (
+              <Button variant="secondary" onClick={() => goTo(thisWeek)}>
+                This week
+              </Button>
+            )}
+            <Button variant="secondary" onClick={() => goTo(shiftWeek(start, 1))} aria-label="Next week">
+              Next →
+            </Button>
+            {canEdit && (
+              <Button variant="quiet" onClick={copyLastWeek} disabled={copy.isPending}>
+                Copy last week
+              </Button>
+            )}
+          </nav>
+        }
+      />
+      <div className="flex flex-col gap-4">
+        {!canEdit && <Notice tone="info">You can see the plan; cooks and keepers change it.</Notice>}
+        {copied && <Notice tone="action" role="status">{copied}</Notice>}
+        {copy.error && (
+          <Notice tone="past" role="alert">
+            {copy.error.message}
+          </Notice>
+        )}
+        {week.error && (
+          <Notice tone="past" role="alert" title="The week could not be loaded">
+            {week.error.message}
+          </Notice>
+        )}
+        {week.data && meals.data ? (
+          <>
+            <WeekBoard hid={hid} week={week.data} meals={meals.data} canEdit={canEdit} />
+            <PreferencesPanel hid={hid} members={week.data.members} myId={myId} isKeeper={isKeeper} />
+          </>
+        ) : (
+          !week.error && <p className="text-ink-muted">Loading the week…</p>
+        )}
+      </div>
     </>
   );
 }

@@ -1,0 +1,6 @@
+/** Query keys of the week feature, built in one place so mutations touch exactly these. */
+export const weekKeys = {
+  all: (hid: string) => ['households', hid, 'week'] as const,
+  week: (hid: string, start: string) => ['households', hid, 'week', start] as const,
+  meals: (hid: string) => ['households', hid, 'meals'] as const,
+};

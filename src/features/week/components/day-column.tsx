@@ -1,0 +1,36 @@
+import { format, parseISO } from 'date-fns';
+import { SLOTS, type WeekDay } from '@shared/schemas/week';
+import { useBoard } from '../board-context';
+import { DayNotes } from './day-notes';
+import { SlotList } from './slot-list';
+
+export function DayColumn({ day }: { day: WeekDay }) {
+  const board = useBoard();
+  const isToday = day.date === board.week.today;
+  const label = format(parseISO(day.date), 'EEEE d MMMM');
+  const clear = () => {
+    if (window.confirm(`Clear every meal planned for ${label}?`)) board.clearDay.mutate(day.date);
+  };
+  return (
+    <section aria-label={label} className={`flex min-w-0 flex-col gap-2 rounded-card border p-2 ${isToday ? 'border-action bg-action-soft/40' : 'border-line bg-surface/60'}`}>
+      <header className="flex items-start justify-between gap-1">
+        <h2 className="text-base leading-tight">
+          <span className="block">{format(parseISO(day.date), 'EEEE')}</span>
+          <span className="tabular text-sm font-normal text-ink-muted">
+            {format(parseISO(day.date), 'MMM d')}
+            {isToday && <span className="ml-1 font-bold text-action">Today</span>}
+          </span>
+        </h2>
+        {board.canEdit && day.entries.length > 0 && (
+          <button type="button" onClick={clear} className="min-h-9 rounded-md px-1.5 text-xs font-bold text-ink-muted hover:bg-past-soft hover:text-past pointer-coarse:min-h-11">
+            Clear day
+          </button>
+        )}
+      </header>
+      <DayNotes date={day.date} />
+      {SLOTS.map((slot) => (
+        <SlotList key={slot} date={day.date} slot={slot} entries={day.entries.filter((e) => e.slot === slot).sort((a, b) => a.position - b.position)} />
+      ))}
+    </section>
+  );
+}

@@ -1,0 +1,25 @@
+import { format, parseISO } from 'date-fns';
+import type { WeekDay } from '@shared/schemas/week';
+
+/** On a phone the board shows one day; this picks it. */
+export function DayPicker({ days, selected, today, onSelect }: { days: WeekDay[]; selected: string; today: string; onSelect: (date: string) => void }) {
+  return (
+    <nav aria-label="Day of the week" className="grid grid-cols-7 gap-1">
+      {days.map((day) => (
+        <button
+          key={day.date}
+          type="button"
+          aria-pressed={day.date === selected}
+          aria-label={`${format(parseISO(day.date), 'EEEE d MMMM')}${day.entries.length ? `, ${day.entries.length} planned` : ''}`}
+          onClick={() => onSelect(day.date)}
+          className={`flex min-h-14 flex-col items-center justify-center rounded-lg border text-sm font-bold ${
+            day.date === selected ? 'border-action bg-action text-white' : day.date === today ? 'border-action bg-surface text-action' : 'border-line bg-surface text-ink'
+          }`}
+        >
+          <span>{format(parseISO(day.date), 'EEEEE')}</span>
+          <span className="tabular text-xs font-normal">{format(parseISO(day.date), 'd')}</span>
+        </button>
+      ))}
+    </nav>
+  );
+}

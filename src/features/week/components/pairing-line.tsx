@@ -1,0 +1,77 @@
+import type { PairingView, PlanEntryView } from '@shared/schemas/week';
+import { jarCode, productName, useBoard } from '../board-context';
+import { isPending } from '../week-edits';
+import { NumberCommit } from './number-commit';
+
+/** Which jar a pairing draws from, or how much the shelf lacks. */
+function allocationLine(pairing: PairingView, entry: PlanEntryView, board: ReturnType<typeof useBoard>) {
+  const { week } = board;
+  if (entry.date < week.today) return 'Past: no jar drawn';
+  if (isPending(pairing.id)) return 'Finding a jar…';
+  const draws = week.allocation.assignments.filter((a) => String(a.portionId) === pairing.id);
+  if (draws.length === 0) return 'Finding a jar…';
+  return draws
+    .map((a) => {
+      if (a.jarId === null) return `short ${formatTbsp(a.tbsp)}`;
+      const opens = week.allocation.openings.some((o) => o.jarId === a.jarId && o.date === entry.date);
+      return `${opens ? 'opens' : 'from'} jar ${jarCode(week, a.jarId)}`;
+    })
+    .join(', then ');
+}
+
+export const formatTbsp = (tbsp: number) => `${Math.round(tbsp * 10) / 10} tbsp`;
+
+export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: PlanEntryView }) {
+  const board = useBoard();
+  const name = productName(board.week, pairing.productId);
+  const product = board.week.products.find((p) => p.id === pairing.productId);
+  const line = allocationLine(pairing, entry, board);
+  return (
+    <li className="rounded-md bg-sunken/70 px-2 py-1 text-sm">
+      <div className="flex items-start justify-between gap-1">
+        <span className="min-w-0 font-bold">
+          {name}
+          {product && product.heat > 0 && <span className="font-normal text-ink-muted"> · heat {product.heat}</span>}
+        </span>
+        {board.canEdit && !isPending(pairing.id) && (
+          <button
+            type="button"
+            className="-m-1 grid min-h-8 min-w-8 pointer-coarse:min-h-11 pointer-coarse:min-w-11 shrink-0 place-items-center rounded text-ink-muted hover:bg-past-soft hover:text-past"
+            aria-label={`Unpair ${name} from ${entry.title}`}
+            onClick={() => board.deletePairing.mutate(pairing.id)}
+          >
+            ×
+          </button>
+        )}
+      </div>
+      <p className={`tabular ${line.includes('short') ? 'font-bold text-past' : 'text-info'}`} data-testid="allocation-line">
+        {line}
+      </p>
+      <div className="flex items-center gap-1 text-ink-muted">
+        {board.canEdit && !isPending(pairing.id) ? (
+          <NumberCommit
+            label={`Tablespoons of ${name} per serving of ${entry.title}`}
+            value={pairing.tbspPerServing}
+            min={0.25}
+            max={64}
+            step={0.25}
+            onCommit={(tbspPerServing) => board.updatePairing.mutate({ id: pairing.id, tbspPerServing })}
+          />
+        ) : (
+          <span className="tabular">{pairing.tbspPerServing}</span>
+        )}
+        <span>tbsp a serving</span>
+      </div>
+      {pairing.flags.length > 0 && (
+        <ul className="mt-1 flex flex-col gap-0.5">
+          {pairing.flags.map((flag) => (
+            <li key={`${flag.kind}-${flag.userId}`} className="rounded bg-soon-soft px-1.5 text-soon">
+              <span aria-hidden="true">⚑ </span>
+              {flag.reason}
+            </li>
+          ))}
+        </ul>
+      )}
+    </li>
+  );
+}

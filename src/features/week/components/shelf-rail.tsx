@@ -1,0 +1,58 @@
+import { useDraggable } from '@dnd-kit/core';
+import type { WeekProduct } from '@shared/schemas/week';
+
+function ProductChip({ product, canEdit }: { product: WeekProduct; canEdit: boolean }) {
+  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: `product:${product.id}`, data: { type: 'product', product }, disabled: !canEdit });
+  const counts = [product.openedJars ? `${product.openedJars} open` : '', product.sealedJars ? `${product.sealedJars} sealed` : ''].filter(Boolean).join(', ');
+  return (
+    <li>
+      <button
+        type="button"
+        ref={setNodeRef}
+        {...attributes}
+        {...listeners}
+        aria-label={`${product.name}: ${counts}${canEdit ? '. Drag onto a planned meal to pair it.' : ''}`}
+        className={`flex min-h-11 w-full touch-none items-center gap-2 rounded-lg border bg-surface px-3 py-1 text-left hover:border-action ${product.openedJars ? 'border-info/60' : 'border-line'} ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
+      >
+        <JarGlyph opened={product.openedJars > 0} />
+        <span className="min-w-0">
+          <span className="block font-bold leading-snug">{product.name}</span>
+          <span className="tabular block text-xs text-ink-muted">{counts}</span>
+        </span>
+      </button>
+    </li>
+  );
+}
+
+function JarGlyph({ opened }: { opened: boolean }) {
+  return (
+    <svg width="18" height="22" viewBox="0 0 18 22" aria-hidden="true" className="shrink-0">
+      <rect x="4" y="1" width="10" height="3" rx="1" className={opened ? 'fill-info' : 'fill-action'} />
+      <rect x="2" y="4" width="14" height="17" rx="4" className="fill-surface stroke-ink" strokeWidth="1.5" />
+      <path d={opened ? 'M3.5 13h11v3.5a3 3 0 0 1-3 3h-5a3 3 0 0 1-3-3z' : 'M3.5 8h11v8.5a3 3 0 0 1-3 3h-5a3 3 0 0 1-3-3z'} className="fill-soon-fill/70" />
+    </svg>
+  );
+}
+
+/** Products with jars on the shelf or open in the fridge, the opened ones first: drag one onto a meal. */
+export function ShelfRail({ products, canEdit }: { products: WeekProduct[]; canEdit: boolean }) {
+  const onShelf = products
+    .filter((p) => p.openedJars + p.sealedJars > 0)
+    .sort((a, b) => Number(b.openedJars > 0) - Number(a.openedJars > 0) || a.name.localeCompare(b.name));
+  return (
+    <section aria-labelledby="shelf-rail" className="flex min-w-0 flex-col gap-2">
+      <h2 id="shelf-rail" className="text-lg">
+        On the shelf
+      </h2>
+      {onShelf.length === 0 ? (
+        <p className="text-sm text-ink-muted">No jars on the shelf or in the fridge yet. Record a batch, then pair its jars with meals here.</p>
+      ) : (
+        <ul className="grid max-h-72 grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] gap-1.5 overflow-y-auto pr-1">
+          {onShelf.map((product) => (
+            <ProductChip key={product.id} product={product} canEdit={canEdit} />
+          ))}
+        </ul>
+      )}
+    </section>
+  );
+}

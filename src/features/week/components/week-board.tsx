@@ -1,0 +1,170 @@
+import { DndContext, DragOverlay, pointerWithin, rectIntersection, type CollisionDetection, type DragEndEvent, type DragStartEvent, type KeyboardCoordinateGetter } from '@dnd-kit/core';
+import { useRef, useState } from 'react';
+import type { MealView, Slot, WeekView } from '@shared/schemas/week';
+import { Notice } from '@/components/ui/notice';
+import { useAddPairing } from '../api/add-pairing';
+import { restockMissing, useAddRestockTodo } from '../api/add-restock-todo';
+import { useClearDay } from '../api/clear-day';
+import { useCreatePlanEntry } from '../api/create-plan-entry';
+import { useDeletePairing } from '../api/delete-pairing';
+import { useDeletePlanEntry } from '../api/delete-plan-entry';
+import { useUpdatePairing } from '../api/update-pairing';
+import { useUpdatePlanEntry } from '../api/update-plan-entry';
+import { BoardContext, type Board } from '../board-context';
+import { accepts, announcements, screenReaderInstructions, sourceLabel, type DragSource, type DropTarget } from '../drag';
+import { nextPlace, placesByDay } from '../keyboard-targets';
+import { useBoardSensors } from '../use-board-sensors';
+import { useMedia } from '../use-media';
+import { entriesOf, isPending } from '../week-edits';
+import { DayColumn } from './day-column';
+import { DayPicker } from './day-picker';
+import { MealLibrary } from './meal-library';
+import { ShelfRail } from './shelf-rail';
+
+const sourceOf = (thing: { data: { current?: unknown } } | null | undefined) => thing?.data.current as DragSource | undefined;
+const targetOf = (thing: { data: { current?: unknown } } | null | undefined) => thing?.data.current as DropTarget | undefined;
+
+export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: WeekView; meals: MealView[]; canEdit: boolean }) {
+  const [message, setMessage] = useState<string | null>(null);
+  const report = (text: string) => setMessage(text);
+  const start = week.start;
+  const createEntry = useCreatePlanEntry(hid, start, report);
+  const updateEntry = useUpdatePlanEntry(hid, start, report);
+  const addPairing = useAddPairing(hid, start, report);
+  const restockTodo = useAddRestockTodo(hid);
+  const [restockAvailable, setRestockAvailable] = useState(true);
+  const [restocked, setRestocked] = useState(() => new Set<string>());
+  const wide = useMedia('(min-width: 1024px)');
+  const [picked, setPicked] = useState<string | null>(null);
+  const selectedDay = week.days.find((d) => d.date === picked)?.date ?? (week.days.some((d) => d.date === week.today) ? week.today : week.days[0].date);
+  const visibleDays = wide ? week.days : week.days.filter((d) => d.date === selectedDay);
+  const [dragging, setDragging] = useState<DragSource | null>(null);
+
+  // Keyboard drags go place to place; the collision check then reports that place as the one under the item.
+  const keyboardPlace = useRef<string | null>(null);
+  const visibleRef = useRef(visibleDays);
+  visibleRef.current = visibleDays;
+  const coordinateGetter: KeyboardCoordinateGetter = (event, { context: { active, collisionRect, droppableRects } }) => {
+    const source = sourceOf(active);
+    if (!source || !collisionRect) return undefined;
+    const next = nextPlace(placesByDay(visibleRef.current, source), keyboardPlace.current, event.code);
+    if (next === null) return undefined;
+    event.preventDefault();
+    keyboardPlace.current = next;
+    const rect = droppableRects.get(next);
+    if (!rect) return { x: collisionRect.left, y: collisionRect.top };
+    return { x: rect.left + rect.width / 2 - collisionRect.width / 2, y: rect.top + Math.min(rect.height / 2, 28) - collisionRect.height / 2 };
+  };
+  const sensors = useBoardSensors(coordinateGetter);
+
+  const collisionDetection: CollisionDetection = (args) => {
+    const source = sourceOf(args.active);
+    const droppableContainers = args.droppableContainers.filter((c) => accepts(source, targetOf(c)));
+    if (!args.pointerCoordinates) {
+      const place = keyboardPlace.current;
+      return place && droppableContainers.some((c) => c.id === place) ? [{ id: place }] : [];
+    }
+    const under = pointerWithin({ ...args, droppableContainers });
+    // A planned meal sits inside its slot: the meal is the more exact place.
+    const entry = under.find((c) => targetOf(droppableContainers.find((d) => d.id === c.id))?.type === 'entry');
+    if (entry) return [entry];
+    return under.length ? under : rectIntersection({ ...args, droppableContainers });
+  };
+
+  const onDragStart = ({ active }: DragStartEvent) => {
+    const source = sourceOf(active) ?? null;
+    setDragging(source);
+    setMessage(null);
+    keyboardPlace.current = source?.type === 'entry' ? source.entry.id : null;
+  };
+
+  const onDragEnd = ({ active, over }: DragEndEvent) => {
+    setDragging(null);
+    keyboardPlace.current = null;
+    const source = sourceOf(active);
+    const target = targetOf(over);
+    if (!source || !target || !accepts(source, target)) return;
+    if (source.type === 'product' && target.type === 'entry') {
+      if (isPending(target.entry.id)) return report('That meal is still being saved; pair it again in a moment.');
+      if (target.entry.pairings.some((p) => p.productId === source.product.id)) return report(`${target.entry.title} already has ${source.product.name}. Change its portion instead.`);
+      return addPairing.mutate({ entryId: target.entry.id, productId: source.product.id });
+    }
+    const place = target.type === 'slot' ? { date: target.date, slot: target.slot as Slot, position: undefined } : { date: target.entry.date, slot: target.entry.slot, position: target.entry.position };
+    if (source.type === 'meal') {
+      const preview = { title: source.meal.name, servings: source.meal.usualServings, pairings: source.meal.products.map((p, i) => ({ id: `pending-${i}`, ...p, flags: [] })) };
+      return createEntry.mutate({ ...place, mealId: source.meal.id, preview });
+    }
+    if (source.type !== 'entry' || isPending(source.entry.id)) return;
+    const { entry } = source;
+    const sameSlot = entry.date === place.date && entry.slot === place.slot;
+    const position = place.position ?? (sameSlot ? entriesOf(week, place.date, place.slot).length - 1 : undefined);
+    if (sameSlot && position === entry.position) return;
+    updateEntry.mutate({ id: entry.id, patch: { date: place.date, slot: place.slot, ...(position === undefined ? {} : { position }) } });
+  };
+
+  const board: Board = {
+    hid,
+    week,
+    canEdit,
+    updateEntry,
+    deleteEntry: useDeletePlanEntry(hid, start, report),
+    addPairing,
+    updatePairing: useUpdatePairing(hid, start, report),
+    deletePairing: useDeletePairing(hid, start, report),
+    clearDay: useClearDay(hid, start, report),
+    restock: {
+      todo: restockTodo,
+      available: restockAvailable,
+      added: restocked,
+      add: (productId) =>
+        restockTodo.mutate(productId, {
+          onSuccess: () => setRestocked((set) => new Set(set).add(productId)),
+          onError: (error) => (restockMissing(error) ? setRestockAvailable(false) : report(error.message)),
+        }),
+    },
+  };
+
+  return (
+    <BoardContext.Provider value={board}>
+      <DndContext
+        sensors={sensors}
+        collisionDetection={collisionDetection}
+        accessibility={{ announcements, screenReaderInstructions }}
+        onDragStart={onDragStart}
+        onDragEnd={onDragEnd}
+        onDragCancel={() => {
+          setDragging(null);
+          keyboardPlace.current = null;
+        }}
+      >
+        <div className="flex flex-col gap-4">
+          {message && (
+            <div className="flex items-start gap-2">
+              <div className="flex-1">
+                <Notice tone="past" role="alert" title="That change was not saved">
+                  {message}
+                </Notice>
+              </div>
+              <button type="button" onClick={() => setMessage(null)} className="min-h-11 rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+                Dismiss
+              </button>
+            </div>
+          )}
+          <div className="grid gap-4 rounded-card border border-line bg-surface p-3 md:grid-cols-2">
+            <MealLibrary hid={hid} meals={meals} canEdit={canEdit} />
+            <ShelfRail products={week.products} canEdit={canEdit} />
+          </div>
+          {!wide && <DayPicker days={week.days} selected={selectedDay} today={week.today} onSelect={setPicked} />}
+          <div className={wide ? 'grid grid-cols-7 gap-2' : 'flex flex-col'}>
+            {visibleDays.map((day) => (
+              <DayColumn key={day.date} day={day} />
+            ))}
+          </div>
+        </div>
+        <DragOverlay dropAnimation={null}>
+          {dragging && <div className="max-w-56 cursor-grabbing rounded-lg border-2 border-action bg-surface px-3 py-2 font-bold shadow-lg">{sourceLabel(dragging)}</div>}
+        </DragOverlay>
+      </DndContext>
+    </BoardContext.Provider>
+  );
+}
