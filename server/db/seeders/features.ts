@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { Household, User } from '../models';
 import { seedShelf } from './shelf';
+import { seedWeek } from './week';
 
 export interface DemoSeedContext {
   /** by household name, as in demo-accounts.json */
@@ -15,4 +16,5 @@ export interface DemoSeedContext {
 /** Each feature adds its part of our invented demo scenario here, in dependency order. */
 export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
+  await seedWeek(ctx);
 }
