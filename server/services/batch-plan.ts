@@ -7,6 +7,7 @@ import {
   restockSuggestions,
   scaleRecipe,
   type JarSize,
+  type RestockReason,
   type ScaledIngredient,
 } from '../../shared/domain';
 import { count } from '../../shared/day-words';
@@ -34,7 +35,7 @@ function refuse(message: string, action?: { label: string; href: string }): AppE
   return new AppError(422, 'not_allowed', message, undefined, action ? { action } : undefined);
 }
 
-function jarSizeFor(recipe: Recipe, product: Product, wanted: JarSize | undefined): JarSize {
+export function jarSizeFor(recipe: Recipe, product: Product, wanted: JarSize | undefined): JarSize {
   const tested = Object.keys(recipe.baseMinutes) as JarSize[];
   const size = wanted ?? (tested.includes(product.jarSize) ? product.jarSize : recipe.yieldJarSize);
   if (recipe.baseMinutes[size] === undefined) {
@@ -45,7 +46,7 @@ function jarSizeFor(recipe: Recipe, product: Product, wanted: JarSize | undefine
 }
 
 /** One tested batch, in the jars chosen: what to make when nothing says how many. */
-function oneTestedBatch(recipe: Recipe, jarSize: JarSize): number {
+export function oneTestedBatch(recipe: Recipe, jarSize: JarSize): number {
   return Math.max(1, Math.ceil((recipe.yieldJars * jarFluidOunces(recipe.yieldJarSize)) / jarFluidOunces(jarSize)));
 }
 
@@ -57,6 +58,63 @@ function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
 function cannerLoads(jars: number, capacity: number): number[] {
   const loads = Array.from({ length: Math.floor(jars / capacity) }, () => capacity);
   return jars % capacity ? [...loads, jars % capacity] : loads;
+}
+
+interface PlanQuestion {
+  household: Household;
+  product: Product;
+  recipe: Recipe;
+  today: string;
+  jars: number;
+  jarSize: JarSize;
+  reason: RestockReason | null;
+  runOutOn: string | null;
+}
+
+/** The batch plan for a count of jars, or a refusal where no tested process fits this household. */
+export function composeBatchPlan({ household, product, recipe, today, jars, jarSize, reason, runOutOn }: PlanQuestion): BatchPlan {
+  const scaled = scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients, kind: product.kind }, { jars, jarSize });
+  const processing = processingPlan({
+    method: recipe.method,
+    altitudeFt: household.altitudeFt,
+    jarSize,
+    baseMinutes: recipe.baseMinutes[jarSize]!,
+    ph: recipe.ph ?? undefined,
+    acidified: recipe.acidified,
+    altitudeTable: recipe.altitudeTable ?? undefined,
+  });
+  if (!processing.allowed) {
+    throw refuse(`There is no tested process for this batch at ${household.altitudeFt.toLocaleString('en-US')} ft: ${processing.reasons.join(' ')}`);
+  }
+  const target = targetDate(today, product.harvestMonths, runOutOn);
+  return {
+    productId: product.id,
+    productName: product.name,
+    recipeId: recipe.id,
+    recipeName: recipe.name,
+    recipeSource: recipe.source,
+    reason,
+    jars,
+    jarSize,
+    method: recipe.method,
+    altitudeFt: household.altitudeFt,
+    headspaceInches: recipe.headspaceInches,
+    scaled,
+    processing,
+    // Flat lids seal once (common practice); bands and jars are reused.
+    equipment: { jars, newLids: jars, cannerCapacityJars: household.cannerCapacityJars, cannerLoads: cannerLoads(jars, household.cannerCapacityJars) },
+    shopping: {
+      produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
+      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
+    },
+    targetOn: target.targetOn,
+    targetWhy: target.why,
+    plannedOn: today,
+  };
+}
+
+export function restockTitle(plan: BatchPlan): string {
+  return `Make ${count(plan.jars, `${JAR_SIZE_NAMES[plan.jarSize]} jar`)} of ${plan.productName}`;
 }
 
 /** Makes the restock to-do, or refuses with what to do first. */
@@ -84,51 +142,6 @@ export async function addRestockTodo(sequelize: Sequelize, household: Household,
   const suggestion = suggestions[0];
   const suggestedInSize = suggestion && Math.ceil((suggestion.suggestedJars * jarFluidOunces(product.jarSize)) / jarFluidOunces(jarSize));
   const jars = input.jars ?? suggestedInSize ?? oneTestedBatch(recipe, jarSize);
-
-  const scaled = scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients, kind: product.kind }, { jars, jarSize });
-  const processing = processingPlan({
-    method: recipe.method,
-    altitudeFt: household.altitudeFt,
-    jarSize,
-    baseMinutes: recipe.baseMinutes[jarSize]!,
-    ph: recipe.ph ?? undefined,
-    acidified: recipe.acidified,
-    altitudeTable: recipe.altitudeTable ?? undefined,
-  });
-  if (!processing.allowed) {
-    throw refuse(`There is no tested process for this batch at ${household.altitudeFt.toLocaleString('en-US')} ft: ${processing.reasons.join(' ')}`);
-  }
-  const target = targetDate(today, product.harvestMonths, forecasts[0].runOutOn);
-
-  const plan: BatchPlan = {
-    productId: product.id,
-    productName: product.name,
-    recipeId: recipe.id,
-    recipeName: recipe.name,
-    recipeSource: recipe.source,
-    reason: suggestion?.reason ?? null,
-    jars,
-    jarSize,
-    method: recipe.method,
-    altitudeFt: household.altitudeFt,
-    headspaceInches: recipe.headspaceInches,
-    scaled,
-    processing,
-    // Flat lids seal once (common practice); bands and jars are reused.
-    equipment: { jars, newLids: jars, cannerCapacityJars: household.cannerCapacityJars, cannerLoads: cannerLoads(jars, household.cannerCapacityJars) },
-    shopping: {
-      produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
-      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
-    },
-    targetOn: target.targetOn,
-    targetWhy: target.why,
-    plannedOn: today,
-  };
-  return createTodo(sequelize, household.id, userId, {
-    title: `Make ${count(jars, `${JAR_SIZE_NAMES[jarSize]} jar`)} of ${product.name}`,
-    dueOn: target.targetOn,
-    kind: 'restock',
-    productId: product.id,
-    batchPlan: plan,
-  });
+  const plan = composeBatchPlan({ household, product, recipe, today, jars, jarSize, reason: suggestion?.reason ?? null, runOutOn: forecasts[0].runOutOn });
+  return createTodo(sequelize, household.id, userId, { title: restockTitle(plan), dueOn: plan.targetOn, kind: 'restock', productId: product.id, batchPlan: plan });
 }

@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { Household, User } from '../models';
 import { seedShelf } from './shelf';
 import { seedWeek } from './week';
+import { seedTodos } from './todos';
 
 export interface DemoSeedContext {
   /** by household name, as in demo-accounts.json */
@@ -17,4 +18,5 @@ export interface DemoSeedContext {
 export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
   await seedWeek(ctx);
+  await seedTodos(ctx);
 }

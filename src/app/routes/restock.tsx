@@ -1,10 +1,68 @@
+import { useEffect } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { can } from '@shared/roles';
+import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
+import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { useRestock } from '@/features/restock/api/get-restock';
+import { ForecastCard } from '@/features/restock/components/forecast-card';
+import { SuggestionCard } from '@/features/restock/components/suggestion-card';
 
 export function RestockRoute() {
+  const { hid, role } = useCurrentHousehold();
+  const restock = useRestock(hid);
+  const [params] = useSearchParams();
+  const focus = params.get('product');
+  const canCook = can(role, 'cook');
+
+  useEffect(() => {
+    if (focus && restock.data) document.getElementById(`restock-${focus}`)?.scrollIntoView({ block: 'center' });
+  }, [focus, restock.data]);
+
   return (
     <>
       <PageHeader title="Restock" lead="Favourites running low, and the batch that would carry you to the next harvest." />
-      <EmptyState title="Nothing is running low">Mark your favourites and set a minimum; Larderly watches the count for you.</EmptyState>
+      {restock.isError && (
+        <Notice tone="past" role="alert" title="The restock list could not be loaded">
+          {restock.error.message}
+        </Notice>
+      )}
+      {!restock.data && !restock.isError && <p className="text-ink-muted">Loading…</p>}
+      {restock.data && (
+        <div className="flex flex-col gap-8">
+          <section aria-labelledby="needs-batch">
+            <h2 id="needs-batch" className="mb-3 text-xl">
+              Needs a new batch
+            </h2>
+            {restock.data.suggestions.length === 0 ? (
+              <EmptyState title="Nothing is running low">Mark your favourites and set a minimum below; Larderly watches the count for you.</EmptyState>
+            ) : (
+              <div className="grid gap-4 md:grid-cols-2">
+                {restock.data.suggestions.map((suggestion) => (
+                  <SuggestionCard key={suggestion.productId} hid={hid} suggestion={suggestion} canCook={canCook} focused={suggestion.productId === focus} />
+                ))}
+              </div>
+            )}
+          </section>
+          <section aria-labelledby="every-product">
+            <h2 id="every-product" className="mb-1 text-xl">
+              Every product
+            </h2>
+            <p className="mb-3 max-w-prose text-ink-muted">
+              The rate is the larger of the last twelve weeks’ finished jars and the meals planned from today.
+            </p>
+            {restock.data.forecasts.length === 0 ? (
+              <EmptyState title="No products yet">Add products and record a batch on the Shelf to see how fast each one goes.</EmptyState>
+            ) : (
+              <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3">
+                {restock.data.forecasts.map((forecast) => (
+                  <ForecastCard key={forecast.productId} hid={hid} forecast={forecast} canCook={canCook} />
+                ))}
+              </div>
+            )}
+          </section>
+        </div>
+      )}
     </>
   );
 }

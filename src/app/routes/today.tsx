@@ -1,10 +1,44 @@
-import { EmptyState, PageHeader } from '@/components/ui/page';
+import { shortDay } from '@shared/day-words';
+import { Notice } from '@/components/ui/notice';
+import { PageHeader } from '@/components/ui/page';
+import { useToday } from '@/features/today/api/get-today';
+import { FridgeCountdowns } from '@/features/today/components/fridge-countdowns';
+import { MyTodos } from '@/features/today/components/my-todos';
+import { RestockGlance } from '@/features/today/components/restock-glance';
+import { TodaySection } from '@/features/today/components/today-section';
+import { UseToday } from '@/features/today/components/use-today';
+import { useCurrentHousehold } from '@/features/households/use-current-household';
 
 export function TodayRoute() {
+  const { hid } = useCurrentHousehold();
+  const today = useToday(hid);
+  const view = today.data;
+
   return (
     <>
-      <PageHeader title="Today" lead="What to open and use today, the fridge countdowns, restock suggestions and your to-dos." />
-      <EmptyState title="Nothing needs you today">Once jars are on the shelf and meals are on the week, this is where the day starts.</EmptyState>
+      <PageHeader title="Today" lead={view ? shortDay(view.today) : 'What to open and use, the fridge, restock and your to-dos.'} />
+      {today.isError && (
+        <Notice tone="past" role="alert" title="Today could not be loaded">
+          {today.error.message}
+        </Notice>
+      )}
+      {!view && !today.isError && <p className="text-ink-muted">Loading…</p>}
+      {view && (
+        <div className="grid gap-4 lg:grid-cols-2">
+          <TodaySection id="today-use" title="Open and use today" more={{ to: `/h/${hid}/week`, label: 'Week' }}>
+            <UseToday use={view.use} short={view.short} />
+          </TodaySection>
+          <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: `/h/${hid}/fridge`, label: `All ${view.fridgeCount}` } : { to: `/h/${hid}/fridge`, label: 'Fridge' }}>
+            <FridgeCountdowns jars={view.fridge} />
+          </TodaySection>
+          <TodaySection id="today-restock" title="Running low" more={{ to: `/h/${hid}/restock`, label: 'Restock' }}>
+            <RestockGlance hid={hid} suggestions={view.restock} />
+          </TodaySection>
+          <TodaySection id="today-todos" title="My to-dos" more={{ to: `/h/${hid}/todo`, label: view.openTodoCount ? `All ${view.openTodoCount} open` : 'To-do' }}>
+            <MyTodos hid={hid} todos={view.myTodos} />
+          </TodaySection>
+        </div>
+      )}
     </>
   );
 }

@@ -1,0 +1,38 @@
+import type { RestockForecastView } from '@shared/schemas/restock';
+import { count, shortDay, tbspPerDay } from '@shared/day-words';
+import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import { LazyUseChart } from './lazy-use-chart';
+import { RestockSettings } from './restock-settings';
+
+function runOutWords(forecast: RestockForecastView) {
+  if (forecast.dailyTbsp === 0) return 'Not eaten lately and nothing planned.';
+  if (forecast.runOutOn === null) return 'Lasts well past next year at this rate.';
+  return `At ${tbspPerDay(forecast.dailyTbsp)}, runs out around ${shortDay(forecast.runOutOn)}.`;
+}
+
+/** One product's rate, stock, run-out date and jar size advice, with its use chart. */
+export function ForecastCard({ hid, forecast, canCook }: { hid: string; forecast: RestockForecastView; canCook: boolean }) {
+  const advice = forecast.jarSizeAdvice;
+  return (
+    <article aria-labelledby={`forecast-${forecast.productId}`} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h3 id={`forecast-${forecast.productId}`} className="text-lg">
+          {forecast.productName}
+        </h3>
+        <p className="tabular text-ink-muted">
+          {count(forecast.sealedJars, 'sealed jar')}
+          {forecast.jarsOnHand > forecast.sealedJars && `, ${forecast.jarsOnHand - forecast.sealedJars} open`}
+        </p>
+      </div>
+      <p>{runOutWords(forecast)}</p>
+      <p className="text-sm text-ink-muted">
+        {advice.size
+          ? `Jar size that gets finished within ${forecast.useWithinDays} days of opening: ${JAR_SIZE_NAMES[advice.size]}.`
+          : 'No jar size advice until it is eaten or planned.'}
+        {advice.size && advice.cautions.map((caution) => ` ${caution}`)}
+      </p>
+      <LazyUseChart productName={forecast.productName} months={forecast.monthlyUse} />
+      <RestockSettings hid={hid} forecast={forecast} canEdit={canCook} />
+    </article>
+  );
+}

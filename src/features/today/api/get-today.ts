@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { TodayView } from '@shared/schemas/today';
+import { api } from '@/lib/api-client';
+
+export const todayKeys = { view: (hid: string) => ['households', hid, 'today'] as const };
+
+export const getToday = (hid: string) => api.get<TodayView>(`/households/${hid}/today`);
+
+export const todayQueryOptions = (hid: string) => queryOptions({ queryKey: todayKeys.view(hid), queryFn: () => getToday(hid) });
+
+export const useToday = (hid: string) => useQuery(todayQueryOptions(hid));

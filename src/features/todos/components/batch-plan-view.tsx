@@ -1,0 +1,116 @@
+import { Link } from 'react-router-dom';
+import type { Method } from '@shared/domain';
+import { count, shortDay } from '@shared/day-words';
+import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
+import { Notice } from '@/components/ui/notice';
+
+const METHOD_NAMES: Record<Method, string> = {
+  'boiling-water': 'boiling-water canner',
+  'atmospheric-steam': 'atmospheric steam canner',
+  'pressure-dial': 'pressure canner with a dial gauge',
+  'pressure-weighted': 'pressure canner with a weighted gauge',
+};
+
+const HEADSPACE_NAMES: Record<string, string> = { '0.125': '1/8', '0.25': '1/4', '0.5': '1/2', '0.75': '3/4', '1': '1' };
+
+function processingWords(plan: BatchPlan): string {
+  const { processing } = plan;
+  const altitude = `${plan.altitudeFt.toLocaleString('en-US')} ft`;
+  if (processing.pressurePsi !== null) {
+    return `${processing.minutes} minutes at ${processing.pressurePsi} psi in a ${METHOD_NAMES[plan.method]}, for ${altitude}.`;
+  }
+  const added = processing.altitudeAddMinutes ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-1,000 ft plus ${processing.altitudeAddMinutes} for the altitude)` : '';
+  return `${processing.minutes} minutes in a ${METHOD_NAMES[plan.method]} at ${altitude}${added}.`;
+}
+
+function ShoppingList({ title, items }: { title: string; items: ShoppingItem[] }) {
+  if (items.length === 0) return null;
+  return (
+    <div>
+      <h4 className="font-bold">{title}</h4>
+      <ul className="list-disc pl-5">
+        {items.map((item) => (
+          <li key={item.name}>{item.text}</li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
+/** Everything needed to make a restock batch, and the step that records it. */
+export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; todoId: string; plan: BatchPlan; canRecord: boolean }) {
+  const size = JAR_SIZE_NAMES[plan.jarSize];
+  const recordHref = `/h/${hid}/batches/new?${new URLSearchParams({ productId: plan.productId, recipeId: plan.recipeId, jars: String(plan.jars), jarSize: plan.jarSize, todoId })}`;
+  return (
+    <div className="flex flex-col gap-5">
+      <div>
+        <p className="font-bold">Make it by {shortDay(plan.targetOn)}</p>
+        <p className="text-ink-muted">{plan.targetWhy}</p>
+      </div>
+
+      <section aria-labelledby="plan-equipment">
+        <h3 id="plan-equipment" className="mb-1 text-lg">
+          Jars and canner
+        </h3>
+        <ul className="list-disc pl-5">
+          <li>{count(plan.equipment.jars, `${size} jar`)}, washed and kept hot</li>
+          <li>{count(plan.equipment.newLids, 'new lid')}: lids seal only once; bands can be reused</li>
+          <li>
+            {count(plan.equipment.cannerLoads.length, 'canner load')} ({plan.equipment.cannerLoads.join(' + ')} jars; your canner holds {plan.equipment.cannerCapacityJars})
+          </li>
+        </ul>
+      </section>
+
+      <section aria-labelledby="plan-shopping">
+        <h3 id="plan-shopping" className="mb-1 text-lg">
+          Shopping list
+        </h3>
+        <div className="grid gap-3 sm:grid-cols-2">
+          <ShoppingList title="Produce" items={plan.shopping.produce} />
+          <ShoppingList title="Pantry" items={plan.shopping.pantry} />
+        </div>
+      </section>
+
+      <section aria-labelledby="plan-recipe">
+        <h3 id="plan-recipe" className="mb-1 text-lg">
+          {plan.recipeName}, scaled ×{Math.round(plan.scaled.factor * 100) / 100}
+        </h3>
+        {plan.recipeSource && <p className="text-sm text-ink-muted">Source: {plan.recipeSource}</p>}
+        {plan.scaled.cautions.map((caution) => (
+          <Notice key={caution} tone="soon">
+            {caution}
+          </Notice>
+        ))}
+      </section>
+
+      <section aria-labelledby="plan-processing">
+        <h3 id="plan-processing" className="mb-1 text-lg">
+          Processing
+        </h3>
+        <p className="font-bold">{processingWords(plan)}</p>
+        <p>Headspace: {HEADSPACE_NAMES[String(plan.headspaceInches)] ?? plan.headspaceInches} inch.</p>
+        <h4 className="mt-2 font-bold">After processing</h4>
+        <ol className="list-decimal pl-5">
+          {plan.processing.afterProcessing.map((step) => (
+            <li key={step}>{step}</li>
+          ))}
+        </ol>
+      </section>
+
+      <Notice tone="info" title="Before you start">
+        <ul className="list-disc pl-5">
+          {plan.processing.cautions.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
+        </ul>
+      </Notice>
+
+      {canRecord && (
+        <Link to={recordHref} className="inline-flex min-h-11 items-center justify-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+          Record this batch
+        </Link>
+      )}
+    </div>
+  );
+}
