@@ -1,0 +1,157 @@
+import request from 'supertest';
+import { QueryTypes } from 'sequelize';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoApp, type DemoEmail } from '../support/app';
+import { listRoutes, type RouteInfo } from '../support/routes';
+import { EXPECTED, PARAMS, PEOPLE, TABLE, type Ids, type Outcome, type Person, type RouteRule } from './authorization-matrix.table';
+
+let ctx: Awaited<ReturnType<typeof demoApp>>;
+type Agent = ReturnType<typeof request.agent>;
+let agents: Record<Person, Agent>;
+let ids: Ids;
+let secrets: string[];
+
+const EMAILS: Record<Exclude<Person, 'signed out'>, DemoEmail> = {
+  helper: 'helper@larderly.test',
+  cook: 'cook@larderly.test',
+  keeper: 'keeper@larderly.test',
+  "neighbour's keeper": 'neighbor@larderly.test',
+};
+
+async function rows<T>(sql: string, replacements: Record<string, unknown> = {}) {
+  return ctx.sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
+}
+
+/** Real ids of the first demo household: a route answering them is exercised for real. */
+async function lookUpIds(): Promise<Ids> {
+  const hid = ctx.householdId;
+  const one = async (sql: string) => {
+    const [row] = await rows<{ v: string }>(sql, { hid });
+    if (!row) throw new Error(`The demo data has nothing for: ${sql}`);
+    return String(row.v);
+  };
+  // A pending invitation written directly: sending one needs a mail server this file does not run.
+  const [invited] = await rows<{ id: string }>(
+    `INSERT INTO invitations (id, household_id, email, role, token_hash, expires_at, created_at, updated_at)
+     VALUES (gen_random_uuid(), :hid, 'matrix-invitee@larderly.test', 'helper', md5(random()::text), now() + interval '7 days', now(), now()) RETURNING id`,
+    { hid },
+  );
+  return {
+    hid,
+    productId: await one(`SELECT id AS v FROM products WHERE household_id = :hid AND name = 'Pickled Beets'`),
+    recipeId: await one(`SELECT id AS v FROM recipes WHERE household_id = :hid ORDER BY name LIMIT 1`),
+    batchId: await one(`SELECT id AS v FROM batches WHERE household_id = :hid ORDER BY canned_on LIMIT 1`),
+    jarId: await one(`SELECT id AS v FROM jars WHERE household_id = :hid AND state = 'sealed' ORDER BY code LIMIT 1`),
+    jarCode: await one(`SELECT code AS v FROM jars WHERE household_id = :hid ORDER BY code LIMIT 1`),
+    mealId: await one(`SELECT id AS v FROM meals WHERE household_id = :hid ORDER BY name LIMIT 1`),
+    planEntryId: await one(`SELECT id AS v FROM plan_entries WHERE household_id = :hid ORDER BY date, slot, position LIMIT 1`),
+    pairingId: await one(`SELECT p.id AS v FROM pairings p JOIN plan_entries e ON e.id = p.plan_entry_id WHERE p.household_id = :hid ORDER BY e.date DESC LIMIT 1`),
+    todoId: await one(`SELECT id AS v FROM todos WHERE household_id = :hid ORDER BY position LIMIT 1`),
+    invitationId: invited.id,
+    helperId: await one(`SELECT id AS v FROM users WHERE email = 'helper@larderly.test'`),
+    planDate: await one(`SELECT to_char(date, 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid ORDER BY date DESC LIMIT 1`),
+    weekStart: await one(`SELECT to_char(date_trunc('week', min(date)), 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid`),
+  };
+}
+
+/** Every id, name and text of the first household that the neighbour must never see. */
+async function firstHouseholdSecrets(): Promise<string[]> {
+  const hid = ctx.householdId;
+  const found = new Set<string>([hid]);
+  for (const table of ['products', 'recipes', 'batches', 'jars', 'jar_events', 'meals', 'meal_products', 'plan_entries', 'pairings', 'todos', 'invitations', 'memberships']) {
+    for (const row of await rows<{ id: string }>(`SELECT id FROM ${table} WHERE household_id = :hid`, { hid })) found.add(row.id);
+  }
+  const texts = await rows<{ v: string }>(
+    `SELECT name AS v FROM households WHERE id = :hid
+     UNION SELECT name FROM products WHERE household_id = :hid
+     UNION SELECT name FROM recipes WHERE household_id = :hid
+     UNION SELECT name FROM meals WHERE household_id = :hid
+     UNION SELECT title FROM plan_entries WHERE household_id = :hid
+     UNION SELECT title FROM todos WHERE household_id = :hid
+     UNION SELECT code FROM jars WHERE household_id = :hid
+     UNION SELECT u.id::text FROM users u JOIN memberships m ON m.user_id = u.id WHERE m.household_id = :hid
+     UNION SELECT u.email FROM users u JOIN memberships m ON m.user_id = u.id WHERE m.household_id = :hid
+     UNION SELECT u.name FROM users u JOIN memberships m ON m.user_id = u.id WHERE m.household_id = :hid
+     UNION SELECT email FROM invitations WHERE household_id = :hid`,
+    { hid },
+  );
+  // Very short texts (a to-do called "Lids") could match by chance; every one of ours is longer.
+  for (const { v } of texts) if (v && v.length >= 6) found.add(v);
+  return [...found];
+}
+
+function resolvePath(route: RouteInfo): string {
+  return route.path.replace(/:(\w+)/g, (_match, name: string, offset: number) => {
+    const segment = route.path.slice(0, offset).split('/').filter(Boolean).at(-1);
+    const source = PARAMS[`${segment}/:${name}`] ?? PARAMS[name];
+    if (source === undefined) {
+      throw new Error(`${route.method} ${route.path}: no real value for the path parameter :${name}. Add it to PARAMS in authorization-matrix.table.ts.`);
+    }
+    return encodeURIComponent(typeof source === 'string' ? ids[source] : source.literal);
+  });
+}
+
+function phase(route: RouteInfo, rule: RouteRule) {
+  if (rule.signsOut) return 3;
+  if (rule.destructive || route.method === 'DELETE') return 2;
+  return route.method === 'GET' ? 0 : 1;
+}
+
+function verdict(status: number, body: { error?: { message?: string } }): Outcome {
+  if (status === 401 || status === 403) return status;
+  if (status === 404 && /^That household/.test(body?.error?.message ?? '')) return 404;
+  return 'allow';
+}
+
+beforeAll(async () => {
+  ctx = await demoApp();
+  ids = await lookUpIds();
+  secrets = await firstHouseholdSecrets();
+  agents = { 'signed out': request.agent(ctx.app) } as Record<Person, Agent>;
+  for (const [person, email] of Object.entries(EMAILS)) agents[person as Person] = await ctx.signedIn(email);
+});
+afterAll(() => ctx.close());
+
+describe('authorization matrix over every route of the Express router', () => {
+  it('has a rule for every route, and no rule for a route that is gone', () => {
+    const routes = listRoutes(ctx.app).map((r) => `${r.method} ${r.path}`);
+    expect(routes.filter((r) => !(r in TABLE)), 'routes missing from authorization-matrix.table.ts').toEqual([]);
+    expect(Object.keys(TABLE).filter((r) => !routes.includes(r)), 'rules for routes that no longer exist').toEqual([]);
+  });
+
+  it('answers each person as the table says, and the neighbour learns nothing of the first household', async () => {
+    const routes = listRoutes(ctx.app)
+      .filter((r) => `${r.method} ${r.path}` in TABLE)
+      .sort((a, b) => phase(a, TABLE[`${a.method} ${a.path}`]) - phase(b, TABLE[`${b.method} ${b.path}`]));
+    const mismatches: string[] = [];
+    const leaks: string[] = [];
+    const tally: Record<string, number> = {};
+    for (const route of routes) {
+      const rule = TABLE[`${route.method} ${route.path}`];
+      const url = resolvePath(route) + (rule.query ? `?${rule.query(ids)}` : '');
+      for (const person of PEOPLE) {
+        const agent = agents[person];
+        let pending = agent[route.method.toLowerCase() as 'get'](url);
+        if (rule.body) pending = pending.send(rule.body(ids) as object);
+        const response = await pending;
+        const got = verdict(response.status, response.body);
+        const want = EXPECTED[rule.access][person];
+        tally[String(got)] = (tally[String(got)] ?? 0) + 1;
+        if (response.status >= 500) mismatches.push(`${route.method} ${url} as ${person}: ${response.status} ${response.text.slice(0, 200)}`);
+        // Hidden from the neighbour: any 404 will do (a jar code is looked up without a household in the path).
+        else if (got !== want && !(want === 404 && response.status === 404)) mismatches.push(`${route.method} ${route.path} as ${person}: expected ${want}, got ${response.status} ${response.text.slice(0, 160)}`);
+        if (person === "neighbour's keeper") {
+          const seen = `${JSON.stringify(response.headers)}\n${response.text}`;
+          for (const secret of secrets) if (seen.includes(secret)) leaks.push(`${route.method} ${route.path} showed the neighbour "${secret}"`);
+        }
+      }
+    }
+    console.info(`authorization matrix: ${routes.length} routes x ${PEOPLE.length} people = ${routes.length * PEOPLE.length} requests; outcomes ${JSON.stringify(tally)}; ${secrets.length} first-household ids and texts searched for`);
+    expect(mismatches).toEqual([]);
+    expect(leaks).toEqual([]);
+  });
+
+  it('fails loudly on a path parameter it has no real value for', () => {
+    expect(() => resolvePath({ method: 'GET', path: '/api/households/:hid/shelves/:shelfId' })).toThrow(/:shelfId/);
+  });
+});
