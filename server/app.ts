@@ -10,6 +10,7 @@ import { acquireDatabase } from './db/sequelize';
 import { errorHandler, notFoundHandler } from './http/errors';
 import { sameOriginOnly } from './http/same-origin';
 import { authRouter } from './routes/auth';
+import { backupImportRouter, IMPORT_PATH } from './routes/backup';
 import { healthRouter } from './routes/health';
 import { householdsRouter } from './routes/households';
 import { jarCodesRouter } from './routes/jars';
@@ -53,12 +54,15 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
 
   const api = Router();
   api.use(healthRouter(sequelize));
-  api.use(express.json({ limit: '1mb' }));
+  const json = express.json({ limit: '1mb' });
+  // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
+  api.use((req, res, next) => (req.method === 'POST' && req.path === IMPORT_PATH ? next() : json(req, res, next)));
   api.use(sameOriginOnly(config.appOrigins));
   api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
   api.use(passport.session());
   api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? 20 }));
   api.use('/households', householdsRouter(sequelize));
+  api.use('/households', backupImportRouter(ctx));
   api.use('/jars', jarCodesRouter());
   api.use('/households/:hid', householdFeatureRouters(ctx));
   api.use('/push', pushRouter(ctx));

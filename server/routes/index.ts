@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { AppContext } from '../context';
+import { householdBackupRouter } from './backup';
 import { devMailRouter } from './dev-mail';
 import { fridgeRouter } from './fridge';
 import { householdInvitationsRouter } from './invitations';
@@ -33,5 +34,6 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(fridgeRouter());
   router.use(householdInvitationsRouter(ctx));
   router.use(devMailRouter(ctx));
+  router.use(householdBackupRouter(ctx));
   return router;
 }

@@ -1,0 +1,40 @@
+import express, { Router, type RequestHandler } from 'express';
+import { BACKUP_MAX_BYTES, householdBackup } from '../../shared/schemas/backup';
+import { currentMembership, householdAccess, requireUser } from '../auth/guards';
+import type { AppContext } from '../context';
+import { AppError } from '../http/errors';
+import { parse } from '../http/validate';
+import { exportHousehold, importHousehold } from '../services/backup';
+
+/** GET /api/households/:hid/backup: the keeper's download of the whole household. */
+export function householdBackupRouter(ctx: AppContext) {
+  const router = Router({ mergeParams: true });
+  router.get('/backup', householdAccess('manage'), async (req, res) => {
+    const { household } = currentMembership(req);
+    const backup = await exportHousehold(ctx.sequelize, household);
+    const slug = household.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'household';
+    const fileName = `larderly-backup-${slug}-${backup.exportedAt.slice(0, 10)}.json`;
+    res.set({ 'Content-Disposition': `attachment; filename="${fileName}"`, 'Cache-Control': 'no-store' }).json(backup);
+  });
+  return router;
+}
+
+export const IMPORT_PATH = '/households/import';
+
+/** The one body larger than 1 MB the API accepts, read only once the person is signed in. */
+const backupBody: RequestHandler = (req, res, next) => {
+  express.json({ limit: BACKUP_MAX_BYTES })(req, res, (error?: { type?: string }) => {
+    if (error?.type === 'entity.too.large') return next(new AppError(413, 'too_large', 'That backup file is too large (10 MB at most).'));
+    next(error);
+  });
+};
+
+/** POST /api/households/import: a new household from a backup file, with the importer as keeper. */
+export function backupImportRouter(ctx: AppContext) {
+  const router = Router();
+  router.post('/import', requireUser, backupBody, async (req, res) => {
+    const backup = parse(householdBackup, req.body ?? {}, 'That file is not a Larderly household backup, or it has been changed.');
+    res.status(201).json(await importHousehold(ctx.sequelize, backup, req.user!.id));
+  });
+  return router;
+}

@@ -1,0 +1,144 @@
+import { z } from 'zod';
+import { JAR_SIZES, JAR_STATES, PROCESSING_METHODS, PRODUCT_KINDS } from '../domain';
+import { householdName } from './auth';
+import { UNIT_SYSTEMS } from './households';
+import { ingredientInput } from './recipes';
+import { PRODUCT_COLOURS } from '../shelf-words';
+import { SLOTS } from './week';
+
+/** A household's backup file: its shelf, week and to-dos, never people, sessions, keys or tokens. */
+export const BACKUP_FORMAT = 'larderly-household-backup';
+export const BACKUP_VERSION = 1;
+export const BACKUP_MAX_BYTES = 10 * 1024 * 1024;
+
+const id = z.uuid({ error: 'An id in the file is not valid.' });
+const date = z.iso.date({ error: 'A date in the file is not written YYYY-MM-DD.' });
+const int = (min: number, max: number) => z.number().int().min(min).max(max);
+const text = (max: number) => z.string().max(max);
+const tbsp = z.number().min(0).max(100_000);
+const list = <T extends z.ZodType>(item: T, max: number) => z.array(item).max(max, `The file has more than ${max.toLocaleString('en-US')} of these.`);
+
+const product = z.object({
+  id,
+  name: text(80).min(1),
+  kind: z.enum(PRODUCT_KINDS),
+  heat: int(0, 5),
+  favourite: z.boolean(),
+  minJars: int(0, 500),
+  useWithinDays: int(1, 365).nullable(),
+  harvestMonths: z.array(int(1, 12)).max(12),
+  jarSize: z.enum(JAR_SIZES),
+  colour: z.enum(PRODUCT_COLOURS),
+  notes: text(2000),
+});
+
+const recipe = z.object({
+  id,
+  productId: id,
+  name: text(120).min(1),
+  yieldJars: int(1, 100),
+  yieldJarSize: z.enum(JAR_SIZES),
+  ingredients: z.array(ingredientInput).max(60),
+  acidPercent: z.number().min(0).max(100).nullable(),
+  ph: z.number().min(0).max(14).nullable(),
+  acidified: z.boolean(),
+  method: z.enum(PROCESSING_METHODS),
+  baseMinutes: z.partialRecord(z.enum(JAR_SIZES), int(0, 600)),
+  altitudeTable: z.array(z.object({ upToFt: int(0, 20_000), addMinutes: int(0, 600) })).max(20).nullable(),
+  headspaceInches: z.number().min(0).max(2),
+  steps: text(10_000),
+  source: text(500),
+});
+
+const batch = z.object({
+  id,
+  productId: id,
+  recipeId: id.nullable(),
+  cannedOn: date,
+  jarSize: z.enum(JAR_SIZES),
+  jarsFilled: int(1, 500),
+  jarsSealed: int(0, 500),
+  method: z.enum(PROCESSING_METHODS),
+  altitudeFt: int(-1500, 20_000),
+  minutes: int(0, 600).nullable(),
+  pressurePsi: int(0, 30).nullable(),
+  headspaceInches: z.number().min(0).max(2).nullable(),
+  notes: text(2000),
+});
+
+const jar = z.object({
+  id,
+  batchId: id,
+  productId: id,
+  state: z.enum(JAR_STATES),
+  capacityTbsp: tbsp,
+  remainingTbsp: tbsp,
+  unsealed: z.boolean(),
+  bestBy: date,
+  openedOn: date.nullable(),
+  useBy: date.nullable(),
+  finishedOn: date.nullable(),
+  discardedOn: date.nullable(),
+});
+
+const jarEvent = z.object({
+  id,
+  jarId: id,
+  batchId: id,
+  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded']),
+  happenedOn: date,
+});
+
+const meal = z.object({ id, name: text(100).min(1), tags: z.array(text(30)).max(12), usualServings: int(1, 100), notes: text(2000) });
+const mealProduct = z.object({ id, mealId: id, productId: id, tbspPerServing: z.number().positive().max(64) });
+const planEntry = z.object({ id, date, slot: z.enum(SLOTS), position: int(0, 1000), title: text(100).min(1), mealId: id.nullable(), servings: int(1, 100) });
+const pairing = z.object({ id, planEntryId: id, productId: id, tbspPerServing: z.number().positive().max(64) });
+const todo = z.object({
+  id,
+  title: text(200).min(1),
+  notes: text(4000),
+  dueOn: date.nullable(),
+  done: z.boolean(),
+  doneAt: z.iso.datetime({ offset: true }).nullable(),
+  position: int(0, 100_000),
+  kind: z.enum(['plain', 'restock']),
+  productId: id.nullable(),
+  // A restock to-do's batch plan as the server wrote it; its product and recipe ids are remapped.
+  batchPlan: z.record(z.string(), z.unknown()).nullable(),
+});
+
+export const householdBackup = z
+  .object({
+    format: z.literal(BACKUP_FORMAT, { error: 'This is not a Larderly household backup.' }),
+    version: z.literal(BACKUP_VERSION, { error: `This backup was written by another version of Larderly (this one reads version ${BACKUP_VERSION}).` }),
+    exportedAt: z.iso.datetime({ offset: true }),
+    household: z.object({
+      name: householdName,
+      altitudeFt: int(-1500, 20_000),
+      unitSystem: z.enum(UNIT_SYSTEMS),
+      timeZone: text(64),
+      bestQualityMonths: int(1, 60),
+      weekStartsOn: int(0, 6),
+      cannerCapacityJars: int(1, 40),
+      defaultMethod: z.enum(PROCESSING_METHODS),
+    }),
+    products: list(product, 2_000),
+    recipes: list(recipe, 2_000),
+    batches: list(batch, 10_000),
+    jars: list(jar, 50_000),
+    jarEvents: list(jarEvent, 200_000),
+    meals: list(meal, 2_000),
+    mealProducts: list(mealProduct, 20_000),
+    planEntries: list(planEntry, 20_000),
+    pairings: list(pairing, 50_000),
+    todos: list(todo, 5_000),
+  })
+  .strict();
+
+export type HouseholdBackup = z.infer<typeof householdBackup>;
+export type BackupTable = Exclude<keyof HouseholdBackup, 'format' | 'version' | 'exportedAt' | 'household'>;
+
+export interface ImportResult {
+  household: { id: string; name: string };
+  counts: Record<BackupTable, number>;
+}

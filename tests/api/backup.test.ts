@@ -1,0 +1,135 @@
+import { randomUUID } from 'node:crypto';
+import { QueryTypes } from 'sequelize';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BackupTable, HouseholdBackup } from '../../shared/schemas/backup';
+import { demoApp } from '../support/app';
+
+let ctx: Awaited<ReturnType<typeof demoApp>>;
+let keeper: Awaited<ReturnType<typeof ctx.signedIn>>;
+let exported: HouseholdBackup;
+beforeAll(async () => {
+  ctx = await demoApp();
+  keeper = await ctx.signedIn('keeper@larderly.test');
+  const response = await keeper.get(`/api/households/${ctx.householdId}/backup`);
+  expect(response.status).toBe(200);
+  exported = response.body;
+});
+afterAll(() => ctx.close());
+
+/** Which table each id column points into, in insert order, so a row can be named by its content. */
+const REFS: [BackupTable, Record<string, BackupTable>][] = [
+  ['products', {}],
+  ['recipes', { productId: 'products' }],
+  ['batches', { productId: 'products', recipeId: 'recipes' }],
+  ['jars', { batchId: 'batches', productId: 'products' }],
+  ['jarEvents', { jarId: 'jars', batchId: 'batches' }],
+  ['meals', {}],
+  ['mealProducts', { mealId: 'meals', productId: 'products' }],
+  ['planEntries', { mealId: 'meals' }],
+  ['pairings', { planEntryId: 'planEntries', productId: 'products' }],
+  ['todos', { productId: 'products' }],
+];
+
+/** Each table as a sorted list of rows with ids replaced by what they point to: equal files give equal lists. */
+function byContent(backup: HouseholdBackup) {
+  const names = new Map<string, string>();
+  const tables: Record<string, string[]> = {};
+  for (const [table, refs] of REFS) {
+    const rows = (backup[table] as Record<string, unknown>[]).map((row) => {
+      const { id, ...rest } = row;
+      for (const [column, target] of Object.entries(refs)) if (rest[column] !== null) rest[column] = `${target}:${names.get(String(rest[column]))}`;
+      if (rest.batchPlan) {
+        const plan = rest.batchPlan as Record<string, unknown>;
+        rest.batchPlan = { ...plan, productId: names.get(String(plan.productId)), recipeId: names.get(String(plan.recipeId)) };
+      }
+      const name = JSON.stringify(rest);
+      names.set(String(id), name);
+      return name;
+    });
+    tables[table] = rows.sort();
+  }
+  return tables;
+}
+
+async function householdCount() {
+  const [row] = await ctx.sequelize.query<{ n: string }>('SELECT count(*) AS n FROM households', { type: QueryTypes.SELECT });
+  return Number(row!.n);
+}
+
+describe('household backup', () => {
+  it('exports every table of the household, and no secret', async () => {
+    expect(exported).toMatchObject({ format: 'larderly-household-backup', version: 1, household: { name: 'Calloway Hollow', altitudeFt: 2350 } });
+    for (const [table] of REFS) expect((exported[table] as unknown[]).length, table).toBeGreaterThan(0);
+    const text = JSON.stringify(exported);
+    for (const secret of ['passwordHash', 'password_hash', 'tokenHash', 'token_hash', 'p256dh', 'session', '@larderly.test', '$2a$', '$2b$']) {
+      expect(text, `the backup must not hold ${secret}`).not.toContain(secret);
+    }
+    const [neighbourProduct] = await ctx.sequelize.query<{ name: string }>('SELECT name FROM products WHERE household_id = $1 LIMIT 1', {
+      bind: [ctx.neighbourHouseholdId],
+      type: QueryTypes.SELECT,
+    });
+    expect(text).not.toContain(neighbourProduct!.name);
+  });
+
+  it('imports into a new household that the importer keeps, equal to the first but for ids and label codes', async () => {
+    const neighbour = await ctx.signedIn('neighbor@larderly.test');
+    const imported = await neighbour.post('/api/households/import').send(exported);
+    expect(imported.status, imported.text).toBe(201);
+    const newId = imported.body.household.id as string;
+    expect(newId).not.toBe(ctx.householdId);
+    expect(imported.body.counts.jars).toBe(exported.jars.length);
+
+    const again = await neighbour.get(`/api/households/${newId}/backup`);
+    expect(again.status).toBe(200);
+    const copy = again.body as HouseholdBackup;
+    expect(copy.household).toEqual(exported.household);
+    expect(byContent(copy)).toEqual(byContent(exported));
+
+    const ids = (b: HouseholdBackup) => new Set(REFS.flatMap(([t]) => (b[t] as { id: string }[]).map((r) => r.id)));
+    const shared = [...ids(copy)].filter((id) => ids(exported).has(id));
+    expect(shared, 'ids are new').toEqual([]);
+    const members = await neighbour.get(`/api/households/${newId}/members`);
+    expect(members.body.members).toEqual([expect.objectContaining({ email: 'neighbor@larderly.test', role: 'keeper' })]);
+    // The first household cannot see the copy.
+    expect((await keeper.get(`/api/households/${newId}/products`)).status).toBe(404);
+  });
+
+  it('refuses a file that does not fit together and writes nothing', async () => {
+    const before = await householdCount();
+    const dangling = structuredClone(exported);
+    dangling.jars[0]!.batchId = '00000000-0000-4000-8000-000000000000';
+    const refused = await keeper.post('/api/households/import').send(dangling);
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.message).toMatch(/jars\.batchId/);
+
+    const unsealable = structuredClone(exported);
+    unsealable.batches[0]!.jarsSealed = unsealable.batches[0]!.jarsFilled + 1;
+    const broken = await keeper.post('/api/households/import').send(unsealable);
+    expect(broken.status).toBe(400);
+    expect(broken.body.error.code).toBe('invalid_input');
+
+    const notOurs = await keeper.post('/api/households/import').send({ format: 'something-else' });
+    expect(notOurs.status).toBe(400);
+    expect(await householdCount()).toBe(before);
+  });
+
+  it('accepts a file over 1 MB on the import route only, and refuses one over 10 MB with 413', async () => {
+    // Many more jar events than the demo has: a long-kept household's history.
+    const events = exported.jarEvents;
+    const overOneMb = JSON.stringify({ ...exported, jarEvents: [...events, ...Array.from({ length: 9000 }, (_, i) => ({ ...events[i % events.length]!, id: randomUUID() }))] });
+    expect(overOneMb.length).toBeGreaterThan(1024 * 1024);
+    const accepted = await keeper.post('/api/households/import').set('Content-Type', 'application/json').send(overOneMb);
+    expect(accepted.status, accepted.text.slice(0, 300)).toBe(201);
+
+    const tooBig = await keeper.post('/api/households/import').set('Content-Type', 'application/json').send(`{"pad":"${'x'.repeat(10 * 1024 * 1024 + 10)}"}`);
+    expect(tooBig.status).toBe(413);
+    expect(tooBig.body.error.code).toBe('too_large');
+    const elsewhere = await keeper.post(`/api/households/${ctx.householdId}/todos`).set('Content-Type', 'application/json').send(`{"title":"${'x'.repeat(1024 * 1024 + 10)}"}`);
+    expect(elsewhere.status).toBe(413);
+  });
+
+  it('keeps the export to keepers and the import to signed-in people', async () => {
+    expect((await (await ctx.signedIn('cook@larderly.test')).get(`/api/households/${ctx.householdId}/backup`)).status).toBe(403);
+    expect((await ctx.request.post('/api/households/import').send(exported)).status).toBe(401);
+  });
+});
