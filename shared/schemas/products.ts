@@ -1,21 +1,8 @@
 import { z } from 'zod';
 import { JAR_SIZES, PRODUCT_KINDS, type JarSize, type ProductKind } from '../domain';
+import { PRODUCT_COLOURS, type ProductColour } from '../shelf-words';
 
-/** A product's chip colour, chosen by the household; each maps to a theme token in the client. */
-export const PRODUCT_COLOURS = ['honey', 'leaf', 'brine', 'earth', 'wheat'] as const;
-export type ProductColour = (typeof PRODUCT_COLOURS)[number];
-
-export const PRODUCT_KIND_NAMES: Record<ProductKind, string> = {
-  relish: 'Relish',
-  pickle: 'Pickle',
-  chutney: 'Chutney',
-  jam: 'Jam',
-  jelly: 'Jelly',
-  'fruit-butter': 'Fruit butter',
-  sauce: 'Sauce',
-  salsa: 'Salsa',
-  other: 'Other',
-};
+export { PRODUCT_COLOURS, type ProductColour };
 
 const fields = {
   name: z.string({ error: 'Give the product a name.' }).trim().min(1, 'Give the product a name.').max(80, 'Use at most 80 characters.'),

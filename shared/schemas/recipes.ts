@@ -1,13 +1,6 @@
 import { z } from 'zod';
 import { INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, PROCESSING_METHODS, type AltitudeRow, type JarSize, type Method, type RecipeIngredient } from '../domain';
 
-export const METHOD_NAMES: Record<Method, string> = {
-  'boiling-water': 'Boiling-water canner',
-  'atmospheric-steam': 'Atmospheric steam canner',
-  'pressure-dial': 'Pressure canner, dial gauge',
-  'pressure-weighted': 'Pressure canner, weighted gauge',
-};
-
 export const ingredientInput = z.object({
   name: z.string({ error: 'Name the ingredient.' }).trim().min(1, 'Name the ingredient.').max(80, 'Use at most 80 characters.'),
   amount: z.number({ error: 'Enter the amount as a number.' }).positive('Enter an amount above 0.').max(100_000, 'That amount is too large.'),

@@ -13,6 +13,9 @@ const router = createBrowserRouter([
     lazy: async () => ({ Component: (await import('@/components/layouts/require-auth')).RequireAuth }),
     children: [
       { path: '/', lazy: async () => ({ Component: (await import('./routes/home-redirect')).HomeRedirect }) },
+      // Outside the household layout: a label's page finds its household from the jar, and a label sheet prints bare.
+      { path: '/j/:code', lazy: async () => ({ Component: (await import('./routes/jar')).JarRoute }) },
+      { path: '/h/:hid/batches/:batchId/labels', lazy: async () => ({ Component: (await import('./routes/batch-labels')).BatchLabelsRoute }) },
       {
         path: '/h/:hid',
         lazy: async () => ({ Component: (await import('@/components/layouts/app-layout')).AppLayout }),
@@ -22,7 +25,14 @@ const router = createBrowserRouter([
           { path: 'shelf', lazy: async () => ({ Component: (await import('./routes/shelf')).ShelfRoute }) },
           { path: 'fridge', lazy: async () => ({ Component: (await import('./routes/fridge')).FridgeRoute }) },
           { path: 'batches', lazy: async () => ({ Component: (await import('./routes/batches')).BatchesRoute }) },
+          { path: 'batches/new', lazy: async () => ({ Component: (await import('./routes/batch-new')).NewBatchRoute }) },
+          { path: 'batches/:batchId', lazy: async () => ({ Component: (await import('./routes/batch-detail')).BatchDetailRoute }) },
           { path: 'recipes', lazy: async () => ({ Component: (await import('./routes/recipes')).RecipesRoute }) },
+          { path: 'recipes/new', lazy: async () => ({ Component: (await import('./routes/recipe-edit')).RecipeEditRoute }) },
+          { path: 'recipes/:recipeId', lazy: async () => ({ Component: (await import('./routes/recipe-card')).RecipeCardRoute }) },
+          { path: 'recipes/:recipeId/edit', lazy: async () => ({ Component: (await import('./routes/recipe-edit')).RecipeEditRoute }) },
+          { path: 'products/new', lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }) },
+          { path: 'products/:productId', lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }) },
           { path: 'restock', lazy: async () => ({ Component: (await import('./routes/restock')).RestockRoute }) },
           { path: 'todo', lazy: async () => ({ Component: (await import('./routes/todo')).TodoRoute }) },
           { path: 'household', lazy: async () => ({ Component: (await import('./routes/household')).HouseholdRoute }) },

@@ -1,7 +1,8 @@
 // How shelf rows look to the client: one place that turns models into the shared view shapes.
 import { defaultUseWithinDays, JAR_STATES, type JarState } from '../../../shared/domain';
 import type { BatchView, JarView } from '../../../shared/schemas/batches';
-import type { ProductColour, ProductView } from '../../../shared/schemas/products';
+import type { ProductView } from '../../../shared/schemas/products';
+import type { ProductColour } from '../../../shared/shelf-words';
 import type { RecipeView } from '../../../shared/schemas/recipes';
 import type { Batch, Jar, Product, Recipe } from '../../db/models';
 

@@ -1,10 +1,53 @@
+import { Link } from 'react-router-dom';
+import { can } from '@shared/roles';
+import { METHOD_NAMES } from '@shared/shelf-words';
+import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
+import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { useRecipes } from '@/features/shelf/api/get-recipes';
+import { jarSizeName } from '@/features/shelf/format';
 
 export function RecipesRoute() {
+  const { hid, role } = useCurrentHousehold();
+  const recipes = useRecipes(hid);
+  const canCook = can(role, 'cook');
   return (
     <>
-      <PageHeader title="Recipes" lead="Tested recipes, scaled to the jars you want without weakening their acid." />
-      <EmptyState title="No recipes yet">Add a tested recipe to scale it and plan batches from it.</EmptyState>
+      <PageHeader
+        title="Recipes"
+        lead="Tested recipes, scaled to the jars you want without weakening their acid."
+        actions={
+          canCook && (
+            <Link to={`/h/${hid}/recipes/new`} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+              New recipe
+            </Link>
+          )
+        }
+      />
+      {recipes.error && (
+        <Notice tone="past" role="alert">
+          {recipes.error.message}
+        </Notice>
+      )}
+      {recipes.isPending ? (
+        <p className="text-ink-muted">Opening the recipe box…</p>
+      ) : recipes.data?.length === 0 ? (
+        <EmptyState title="No recipes yet">Add a tested recipe to scale it and plan batches from it.</EmptyState>
+      ) : (
+        <ul className="grid gap-3 sm:grid-cols-2">
+          {recipes.data?.map((recipe) => (
+            <li key={recipe.id}>
+              <Link to={`/h/${hid}/recipes/${recipe.id}`} className="flex h-full flex-col gap-1 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
+                <span className="text-lg font-bold">{recipe.name}</span>
+                <span className="text-ink-muted">for {recipe.productName}</span>
+                <span className="text-[0.95rem]">
+                  Makes {recipe.yieldJars} {jarSizeName(recipe.yieldJarSize)} jars · {METHOD_NAMES[recipe.method].toLowerCase()}
+                </span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
     </>
   );
 }

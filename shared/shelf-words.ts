@@ -1,0 +1,25 @@
+// Names the shelf screens and the server's messages share; no zod here, so the client chunks stay small.
+import type { Method, ProductKind } from './domain';
+
+/** A product's chip colour, chosen by the household; each maps to a theme token in the client. */
+export const PRODUCT_COLOURS = ['honey', 'leaf', 'brine', 'earth', 'wheat'] as const;
+export type ProductColour = (typeof PRODUCT_COLOURS)[number];
+
+export const PRODUCT_KIND_NAMES: Record<ProductKind, string> = {
+  relish: 'Relish',
+  pickle: 'Pickle',
+  chutney: 'Chutney',
+  jam: 'Jam',
+  jelly: 'Jelly',
+  'fruit-butter': 'Fruit butter',
+  sauce: 'Sauce',
+  salsa: 'Salsa',
+  other: 'Other',
+};
+
+export const METHOD_NAMES: Record<Method, string> = {
+  'boiling-water': 'Boiling-water canner',
+  'atmospheric-steam': 'Atmospheric steam canner',
+  'pressure-dial': 'Pressure canner, dial gauge',
+  'pressure-weighted': 'Pressure canner, weighted gauge',
+};

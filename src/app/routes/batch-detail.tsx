@@ -1,0 +1,49 @@
+import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { can } from '@shared/roles';
+import { Notice } from '@/components/ui/notice';
+import { PageHeader } from '@/components/ui/page';
+import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { useBatch } from '@/features/shelf/api/get-batches';
+import { BatchDetailView } from '@/features/shelf/components/batch-detail';
+import { longDate } from '@/features/shelf/format';
+
+export function BatchDetailRoute() {
+  const { hid, role } = useCurrentHousehold();
+  const { batchId = '' } = useParams();
+  const [params] = useSearchParams();
+  const batch = useBatch(hid, batchId);
+  return (
+    <>
+      <PageHeader
+        title={batch.data ? batch.data.productName : 'Batch'}
+        lead={batch.data ? `Canned ${longDate(batch.data.cannedOn)}` : undefined}
+        actions={
+          <Link to={`/h/${hid}/batches`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+            All batches
+          </Link>
+        }
+      />
+      {params.get('saved') && batch.data && (
+        <div className="mb-5">
+          <Notice tone="action" role="status" title="Batch saved">
+            {batch.data.jarsSealed} sealed jars are on the shelf{batch.data.jarsFilled > batch.data.jarsSealed ? ` and ${batch.data.jarsFilled - batch.data.jarsSealed} in the fridge` : ''}. Print their labels so each jar can be scanned.
+            {params.get('todoId') && (
+              <>
+                {' '}
+                <Link to={`/h/${hid}/todo?open=${params.get('todoId')}`} className="font-bold text-action underline">
+                  Back to the to-do
+                </Link>
+              </>
+            )}
+          </Notice>
+        </div>
+      )}
+      {batch.error && (
+        <Notice tone="past" role="alert">
+          {batch.error.message}
+        </Notice>
+      )}
+      {batch.data && <BatchDetailView hid={hid} batch={batch.data} canCook={can(role, 'cook')} />}
+    </>
+  );
+}

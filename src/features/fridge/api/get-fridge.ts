@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { FridgeView } from '@shared/schemas/notifications';
+import { api } from '@/lib/api-client';
+
+export const fridgeKeys = { fridge: (hid: string) => ['households', hid, 'fridge'] as const };
+
+export const getFridge = (hid: string) => api.get<FridgeView>(`/households/${hid}/fridge`);
+
+export const fridgeQueryOptions = (hid: string) => queryOptions({ queryKey: fridgeKeys.fridge(hid), queryFn: () => getFridge(hid) });
+
+export const useFridge = (hid: string) => useQuery(fridgeQueryOptions(hid));

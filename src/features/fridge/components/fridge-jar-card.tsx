@@ -1,0 +1,70 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { count, shortDay } from '@shared/day-words';
+import type { FridgeJar } from '@shared/schemas/notifications';
+import { Button } from '@/components/ui/button';
+import type { ClosingAction } from '../api/close-jar';
+import { countdown } from './countdown';
+import { JarLevel } from './jar-level';
+
+const TONE_BADGE = { info: 'bg-info-soft text-info', soon: 'bg-soon-soft text-soon', past: 'bg-past-soft text-past' } as const;
+
+function estimateWords(jar: FridgeJar) {
+  const tbsp = Math.round(jar.estimateTbsp * 10) / 10;
+  if (jar.estimateFrom === 'plan') {
+    return tbsp > 0
+      ? `About ${tbsp} tbsp will be left on its use-by after this week's planned meals (${Math.round(jar.plannedTbsp * 10) / 10} tbsp planned).`
+      : 'The planned meals finish it before its use-by.';
+  }
+  return `About ${tbsp} tbsp left of ${jar.capacityTbsp} tbsp. No meal in the plan uses it yet.`;
+}
+
+export function FridgeJarCard({ jar, onClose, busy }: { jar: FridgeJar; onClose: (action: ClosingAction) => void; busy: boolean }) {
+  const [confirmDiscard, setConfirmDiscard] = useState(false);
+  const { text, tone } = countdown(jar.daysLeft);
+  return (
+    <li className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
+      <div className="flex items-start gap-3">
+        <JarLevel fraction={jar.capacityTbsp ? jar.remainingTbsp / jar.capacityTbsp : 0} tone={tone} />
+        <div className="min-w-0 flex-1">
+          <h2 className="text-lg font-bold">{jar.productName}</h2>
+          <p className="text-sm text-ink-muted tabular">
+            <Link to={`/j/${jar.code}`} className="font-bold text-action underline underline-offset-4">
+              Jar {jar.code}
+            </Link>{' '}
+            · opened {shortDay(jar.openedOn)}, {jar.daysOpen === 0 ? 'today' : `${count(jar.daysOpen, 'day')} ago`}
+          </p>
+        </div>
+        <span className={`shrink-0 rounded-full px-3 py-1 text-sm font-bold tabular ${TONE_BADGE[tone]}`}>{text}</span>
+      </div>
+      <p className="tabular">
+        <span className="font-bold">Use by {shortDay(jar.useBy)}.</span> {estimateWords(jar)}
+      </p>
+      {jar.unsealed && (
+        <p className="rounded-lg border border-soon-fill bg-soon-soft px-3 py-2 text-sm">
+          <span className="font-bold">Unsealed jar.</span> It never sealed, so it keeps only days in the fridge; when in doubt, throw it out.
+        </p>
+      )}
+      {confirmDiscard ? (
+        <div className="flex flex-wrap items-center gap-2" role="group" aria-label={`Discard jar ${jar.code}?`}>
+          <span className="font-bold">Discard what is left of jar {jar.code}?</span>
+          <Button variant="danger" disabled={busy} onClick={() => onClose('discard')}>
+            Yes, discard
+          </Button>
+          <Button variant="secondary" onClick={() => setConfirmDiscard(false)}>
+            Keep it
+          </Button>
+        </div>
+      ) : (
+        <div className="flex flex-wrap gap-2">
+          <Button disabled={busy} onClick={() => onClose('finish')} aria-label={`Finished jar ${jar.code} of ${jar.productName}`}>
+            Finished
+          </Button>
+          <Button variant="secondary" disabled={busy} onClick={() => setConfirmDiscard(true)} aria-label={`Discard jar ${jar.code} of ${jar.productName}`}>
+            Discard
+          </Button>
+        </div>
+      )}
+    </li>
+  );
+}

@@ -1,0 +1,100 @@
+import { Link } from 'react-router-dom';
+import type { BatchDetail } from '@shared/schemas/batches';
+import { METHOD_NAMES } from '@shared/shelf-words';
+import { Card } from '@/components/ui/page';
+import { feet, jarSizeName, longDate } from '../format';
+import { BatchPhoto } from './batch-photo';
+import { JarActions } from './jar-actions';
+import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
+
+const EVENT_WORDS: Record<string, string> = { filled: 'filled', unsealed: 'did not seal; put in the fridge', opened: 'opened', finished: 'finished', discarded: 'discarded' };
+
+export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
+  const processing =
+    batch.pressurePsi !== null
+      ? `${batch.minutes} minutes at ${batch.pressurePsi} lb`
+      : batch.minutes !== null
+        ? `${batch.minutes} minutes`
+        : 'time not recorded';
+  return (
+    <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
+      <div className="flex flex-col gap-5">
+        <Card>
+          <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
+            <dt className="text-ink-muted">Canned</dt>
+            <dd className="tabular">{longDate(batch.cannedOn)}</dd>
+            <dt className="text-ink-muted">Jars</dt>
+            <dd className="tabular">
+              {batch.jarsFilled} {jarSizeName(batch.jarSize)} filled, {batch.jarsSealed} sealed
+            </dd>
+            <dt className="text-ink-muted">Processing</dt>
+            <dd>
+              {METHOD_NAMES[batch.method]}, {processing} at {feet(batch.altitudeFt)}
+            </dd>
+            {batch.headspaceInches !== null && (
+              <>
+                <dt className="text-ink-muted">Headspace</dt>
+                <dd>{batch.headspaceInches} inch</dd>
+              </>
+            )}
+            <dt className="text-ink-muted">Recipe</dt>
+            <dd>
+              {batch.recipeId ? (
+                <Link to={`/h/${hid}/recipes/${batch.recipeId}`} className="font-bold text-action underline underline-offset-4">
+                  {batch.recipeName}
+                </Link>
+              ) : (
+                'not recorded'
+              )}
+            </dd>
+          </dl>
+          {batch.notes && <p className="mt-3 whitespace-pre-line">{batch.notes}</p>}
+        </Card>
+        <Card>
+          <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
+            <h2 className="text-xl">Jars</h2>
+            <Link to={`/h/${hid}/batches/${batch.id}/labels`} className="inline-flex min-h-11 items-center rounded-lg border border-line px-4 font-bold hover:bg-sunken">
+              Print labels
+            </Link>
+          </div>
+          <ul className="divide-y divide-line">
+            {batch.jars.map((jar) => (
+              <li key={jar.id} className="flex flex-wrap items-center justify-between gap-3 py-3">
+                <div className="flex flex-col gap-1">
+                  <p className="flex flex-wrap items-center gap-2">
+                    <Link to={`/j/${jar.code}`} className="font-mono text-lg font-bold tracking-wider text-action underline underline-offset-4">
+                      {jar.code}
+                    </Link>
+                    <JarStateBadge jar={jar} />
+                    {jar.pastBestQuality && <PastBestBadge bestBy={jar.bestBy} />}
+                  </p>
+                  <p className="text-sm text-ink-muted">
+                    <JarDates jar={jar} />
+                  </p>
+                </div>
+                <JarActions hid={hid} jar={jar} />
+              </li>
+            ))}
+          </ul>
+        </Card>
+      </div>
+      <div className="flex flex-col gap-5">
+        <Card>
+          <h2 className="mb-2 text-xl">Photo</h2>
+          <BatchPhoto hid={hid} batch={batch} canUpload={canCook} />
+        </Card>
+        <Card>
+          <h2 className="mb-2 text-xl">History</h2>
+          <ol className="flex flex-col gap-1 text-[0.95rem]">
+            {batch.history.map((event) => (
+              <li key={event.id} className="tabular">
+                <span className="text-ink-muted">{longDate(event.happenedOn)}</span> · jar <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
+                {event.who ? ` by ${event.who}` : ''}
+              </li>
+            ))}
+          </ol>
+        </Card>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,34 @@
+import { Link } from 'react-router-dom';
+import type { BatchView } from '@shared/schemas/batches';
+import { METHOD_NAMES } from '@shared/shelf-words';
+import { jarSizeName, longDate } from '../format';
+
+export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }) {
+  return (
+    <ul className="flex flex-col gap-3">
+      {batches.map((batch) => (
+        <li key={batch.id}>
+          <Link to={`/h/${hid}/batches/${batch.id}`} className="flex flex-wrap items-center justify-between gap-3 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
+            <div>
+              <p className="text-lg font-bold">{batch.productName}</p>
+              <p className="tabular text-ink-muted">
+                {longDate(batch.cannedOn)} · {batch.jarsFilled} {jarSizeName(batch.jarSize)} jars · {METHOD_NAMES[batch.method].toLowerCase()}
+                {batch.minutes !== null ? `, ${batch.minutes} min` : ''}
+              </p>
+            </div>
+            <p className="tabular flex flex-wrap gap-3 text-[0.95rem]">
+              <span>
+                <b>{batch.jarCounts.sealed}</b> on the shelf
+              </span>
+              <span>
+                <b>{batch.jarCounts.opened}</b> opened
+              </span>
+              <span className="text-ink-muted">{batch.jarCounts.finished} finished</span>
+              {batch.jarsFilled > batch.jarsSealed && <span className="text-info">{batch.jarsFilled - batch.jarsSealed} did not seal</span>}
+            </p>
+          </Link>
+        </li>
+      ))}
+    </ul>
+  );
+}

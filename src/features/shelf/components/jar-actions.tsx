@@ -1,0 +1,50 @@
+import type { JarAction, JarView } from '@shared/schemas/batches';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { useActOnJar } from '../api/act-on-jar';
+
+const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> = {
+  sealed: [
+    { action: 'open', label: 'Mark opened' },
+    { action: 'discard', label: 'Discard' },
+  ],
+  opened: [
+    { action: 'finish', label: 'Mark finished' },
+    { action: 'discard', label: 'Discard' },
+  ],
+  finished: [],
+  discarded: [],
+};
+
+/** The three things any member may do with a jar; a 409 says someone else got there first. */
+export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: JarView; size?: 'normal' | 'large' }) {
+  const act = useActOnJar(hid);
+  const choices = ACTIONS[jar.state];
+  if (choices.length === 0) return null;
+  return (
+    <div className="flex flex-col gap-2">
+      <div className="flex flex-wrap gap-2">
+        {choices.map(({ action, label }) => (
+          <Button
+            key={action}
+            variant={action === 'discard' ? (size === 'large' ? 'danger' : 'secondary') : action === 'open' ? 'primary' : 'secondary'}
+            className={`${size === 'large' ? 'min-h-14 px-6 text-lg' : ''} ${action === 'discard' && size !== 'large' ? 'text-past' : ''}`}
+            disabled={act.isPending}
+            aria-label={`${label}: jar ${jar.code}`}
+            onClick={() => {
+              if (action === 'discard' && !window.confirm(`Discard jar ${jar.code} of ${jar.productName}? When in doubt, throw it out.`)) return;
+              act.mutate({ jarId: jar.id, action });
+            }}
+          >
+            {label}
+          </Button>
+        ))}
+      </div>
+      {act.error && (
+        <Notice tone="past" role="alert">
+          {act.error.message}
+        </Notice>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,147 @@
+import { useState, type FormEvent } from 'react';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { batchPlan } from '@shared/batch-plan';
+import { JAR_SIZES, PROCESSING_METHODS, UNSEALED_JAR_ADVICE, type JarSize, type Method } from '@shared/domain';
+import type { HouseholdView } from '@shared/schemas/households';
+import type { ProductView } from '@shared/schemas/products';
+import type { RecipeView } from '@shared/schemas/recipes';
+import { METHOD_NAMES } from '@shared/shelf-words';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { useCreateBatch } from '../api/create-batch';
+import { jarSizeName } from '../format';
+import { numberFrom, TextAreaField } from './form-bits';
+import { PlanPanel } from './plan-panel';
+
+/** The household's today, as YYYY-MM-DD: the canning day the server checks against. */
+function todayIn(timeZone: string) {
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date());
+}
+
+/**
+ * The day's work in order: what, which tested recipe, when, which jars, how many sealed, which canner.
+ * The draft lives in the address (the pre-fill parameters), so a reload or a shared link keeps it.
+ */
+export function NewBatchForm({ household, products, recipes }: { household: HouseholdView; products: ProductView[]; recipes: RecipeView[] }) {
+  const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
+  const create = useCreateBatch(household.id);
+  const [notes, setNotes] = useState('');
+  const error = create.error instanceof ApiError ? create.error : null;
+
+  const productId = params.get('productId') ?? '';
+  const forProduct = recipes.filter((r) => r.productId === productId);
+  const recipe = forProduct.find((r) => r.id === params.get('recipeId')) ?? (forProduct.length === 1 ? forProduct[0] : undefined);
+  const product = products.find((p) => p.id === productId);
+  const testedSizes = recipe ? (JAR_SIZES.filter((s) => recipe.baseMinutes[s] !== undefined) as JarSize[]) : [];
+  const jarSize = (JAR_SIZES as readonly string[]).includes(params.get('jarSize') ?? '') ? (params.get('jarSize') as JarSize) : (testedSizes[0] ?? product?.jarSize ?? 'half-pint');
+  const method = (PROCESSING_METHODS as readonly string[]).includes(params.get('method') ?? '') ? (params.get('method') as Method) : (recipe?.method ?? household.defaultMethod);
+  const jarsText = params.get('jars') ?? '';
+  const sealedText = params.get('sealed') ?? jarsText;
+  const today = todayIn(household.timeZone);
+  const cannedOn = params.get('date') ?? today;
+
+  const plan = recipe ? batchPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
+  const filled = numberFrom(jarsText);
+  const sealed = numberFrom(sealedText);
+  const unsealed = Number.isInteger(filled) && Number.isInteger(sealed) && filled > sealed ? filled - sealed : 0;
+
+  function set(changes: Record<string, string | null>) {
+    const next = new URLSearchParams(params);
+    for (const [key, value] of Object.entries(changes)) {
+      if (value === null || value === '') next.delete(key);
+      else next.set(key, value);
+    }
+    setParams(next, { replace: true });
+  }
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    if (!recipe || !plan?.allowed) return;
+    create.mutate(
+      { productId, recipeId: recipe.id, cannedOn, jarSize, jarsFilled: filled, jarsSealed: sealed, method, notes },
+      { onSuccess: (created) => navigate(`/h/${household.id}/batches/${created.batch.id}?saved=1${params.get('todoId') ? `&todoId=${params.get('todoId')}` : ''}`) },
+    );
+  }
+
+  return (
+    <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+      <div className="flex flex-col gap-4">
+        <SelectField label="What did you make?" value={productId} onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null })} error={error?.fields.productId}>
+          <option value="">Choose a product</option>
+          {products.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name}
+            </option>
+          ))}
+        </SelectField>
+        {product && forProduct.length === 0 ? (
+          <Notice tone="soon" title={`No tested recipe for ${product.name} yet`}>
+            A batch follows a tested recipe, so its processing time is known.{' '}
+            <Link to={`/h/${household.id}/recipes/new?productId=${product.id}`} className="font-bold text-action underline">
+              Add the recipe
+            </Link>{' '}
+            first.
+          </Notice>
+        ) : (
+          <SelectField label="Which tested recipe?" value={recipe?.id ?? ''} disabled={!product} onChange={(e) => set({ recipeId: e.target.value, jarSize: null, method: null })} error={error?.fields.recipeId}>
+            <option value="">{product ? 'Choose a recipe' : 'Choose a product first'}</option>
+            {forProduct.map((r) => (
+              <option key={r.id} value={r.id}>
+                {r.name}
+              </option>
+            ))}
+          </SelectField>
+        )}
+        <TextField label="Canning day" type="date" value={cannedOn} max={today} onChange={(e) => set({ date: e.target.value })} error={error?.fields.cannedOn} />
+        <div className="grid gap-4 sm:grid-cols-3">
+          <SelectField label="Jar size" value={jarSize} onChange={(e) => set({ jarSize: e.target.value })} error={error?.fields.jarSize}>
+            {JAR_SIZES.map((size) => (
+              <option key={size} value={size}>
+                {jarSizeName(size)}
+                {recipe && !testedSizes.includes(size) ? ' (no tested time)' : ''}
+              </option>
+            ))}
+          </SelectField>
+          <TextField label="Jars filled" inputMode="numeric" value={jarsText} onChange={(e) => set({ jars: e.target.value })} error={error?.fields.jarsFilled} />
+          <TextField label="Jars sealed" inputMode="numeric" value={sealedText} onChange={(e) => set({ sealed: e.target.value })} error={error?.fields.jarsSealed} hint="Test each lid once cool." />
+        </div>
+        {unsealed > 0 && (
+          <Notice tone="info" title={`${unsealed} jar${unsealed > 1 ? 's' : ''} did not seal`}>
+            {UNSEALED_JAR_ADVICE} Saving puts {unsealed > 1 ? 'them' : 'it'} in the fridge as opened on the canning day.
+          </Notice>
+        )}
+        <SelectField label="Canner" value={method} onChange={(e) => set({ method: e.target.value })} error={error?.fields.method}>
+          {PROCESSING_METHODS.map((m) => (
+            <option key={m} value={m}>
+              {METHOD_NAMES[m]}
+            </option>
+          ))}
+        </SelectField>
+        <TextAreaField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} placeholder="What was different this time?" />
+        {error && !Object.keys(error.fields).length && (
+          <Notice tone="past" role="alert">
+            {error.message}
+          </Notice>
+        )}
+        <div className="flex flex-wrap items-center gap-3">
+          <Button type="submit" disabled={!plan?.allowed || create.isPending}>
+            {create.isPending ? 'Saving…' : 'Save the batch'}
+          </Button>
+          {plan && !plan.allowed && <span className="font-bold text-past">Not allowed: see the plan.</span>}
+        </div>
+      </div>
+      <div className="flex flex-col gap-3">
+        {plan ? (
+          <PlanPanel plan={plan} method={method} altitudeFt={household.altitudeFt} />
+        ) : (
+          <Notice tone="info" title="The processing plan appears here">
+            Choose the product and its tested recipe; the plan is worked out for your altitude, {household.altitudeFt.toLocaleString('en-US')} ft.
+          </Notice>
+        )}
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,16 @@
+import type { ProductColour } from '@shared/shelf-words';
+
+// The household chooses a product's colour; each maps to a theme token, never a raw colour.
+const CHIP: Record<ProductColour, string> = {
+  honey: 'bg-soon-fill',
+  leaf: 'bg-action',
+  brine: 'bg-info',
+  earth: 'bg-ink-muted',
+  wheat: 'bg-soon-soft border border-line',
+};
+
+export function ProductChip({ colour, className = '' }: { colour: string; className?: string }) {
+  return <span aria-hidden="true" className={`inline-block h-3.5 w-3.5 shrink-0 rounded-full ${CHIP[colour as ProductColour] ?? CHIP.wheat} ${className}`} />;
+}
+
+export const PRODUCT_COLOUR_NAMES: Record<ProductColour, string> = { honey: 'Honey', leaf: 'Leaf green', brine: 'Brine teal', earth: 'Earth brown', wheat: 'Wheat' };

@@ -1,0 +1,66 @@
+import { formatKitchenAmount, JAR_SIZES } from '@shared/domain';
+import type { RecipeView } from '@shared/schemas/recipes';
+import { METHOD_NAMES } from '@shared/shelf-words';
+import { Card } from '@/components/ui/page';
+import { jarSizeName } from '../format';
+import { ScalingTool } from './scaling-tool';
+
+export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: RecipeView; altitudeFt: number }) {
+  return (
+    <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
+      <Card className="flex flex-col gap-4">
+        <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
+          <dt className="text-ink-muted">Makes</dt>
+          <dd>
+            {recipe.yieldJars} {jarSizeName(recipe.yieldJarSize)} jars
+          </dd>
+          <dt className="text-ink-muted">Canner</dt>
+          <dd>{METHOD_NAMES[recipe.method]}</dd>
+          <dt className="text-ink-muted">Acid</dt>
+          <dd>
+            {recipe.ph !== null ? `pH ${recipe.ph}` : recipe.acidified ? 'acid or acidified' : 'not known to be acid'}
+            {recipe.acidPercent !== null ? `; vinegar or juice of ${recipe.acidPercent}% acidity` : ''}
+          </dd>
+          <dt className="text-ink-muted">Headspace</dt>
+          <dd>{recipe.headspaceInches} inch</dd>
+          <dt className="text-ink-muted">Source</dt>
+          <dd>{recipe.source || 'not given'}</dd>
+        </dl>
+        <div>
+          <h2 className="text-xl">Tested minutes at 0–1,000 ft</h2>
+          <ul className="tabular flex flex-wrap gap-3">
+            {JAR_SIZES.filter((size) => recipe.baseMinutes[size] !== undefined).map((size) => (
+              <li key={size} className="rounded-lg bg-sunken px-3 py-1">
+                {jarSizeName(size)}: <b>{recipe.baseMinutes[size]} min</b>
+              </li>
+            ))}
+          </ul>
+        </div>
+        <div>
+          <h2 className="text-xl">Ingredients</h2>
+          <table className="w-full text-left">
+            <caption className="sr-only">Ingredients of the tested batch</caption>
+            <tbody>
+              {recipe.ingredients.map((ingredient, index) => (
+                <tr key={`${ingredient.name}-${index}`} className="border-t border-line">
+                  <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">{formatKitchenAmount(ingredient.amount, ingredient.unit)}</td>
+                  <td className="py-2">{ingredient.name}</td>
+                  <td className="py-2 text-sm text-ink-muted">{ingredient.role}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+        {recipe.steps && (
+          <div>
+            <h2 className="text-xl">Method</h2>
+            <p className="whitespace-pre-line">{recipe.steps}</p>
+          </div>
+        )}
+      </Card>
+      <Card>
+        <ScalingTool hid={hid} recipe={recipe} altitudeFt={altitudeFt} />
+      </Card>
+    </div>
+  );
+}

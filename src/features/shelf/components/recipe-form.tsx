@@ -1,0 +1,169 @@
+import { useState, type FormEvent } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { defaultHeadspaceInches, INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, PROCESSING_METHODS, type IngredientRole, type IngredientUnit, type JarSize, type Method } from '@shared/domain';
+import type { ProductView } from '@shared/schemas/products';
+import type { RecipeView } from '@shared/schemas/recipes';
+import { METHOD_NAMES } from '@shared/shelf-words';
+import { Button } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { useSaveRecipe } from '../api/save-recipe';
+import { jarSizeName } from '../format';
+import { CheckboxField, numberFrom, TextAreaField } from './form-bits';
+
+interface IngredientDraft {
+  name: string;
+  amount: string;
+  unit: IngredientUnit;
+  role: IngredientRole;
+}
+
+const blankIngredient = (): IngredientDraft => ({ name: '', amount: '', unit: 'cup', role: 'produce' });
+const optionalNumber = (text: string) => (text.trim() === '' ? null : numberFrom(text));
+
+/** A tested recipe, entered as its source gives it: the app never invents a time. */
+export function RecipeForm({ hid, products, recipe, productId }: { hid: string; products: ProductView[]; recipe?: RecipeView; productId?: string }) {
+  const save = useSaveRecipe(hid, recipe?.id);
+  const navigate = useNavigate();
+  const firstProduct = products.find((p) => p.id === (recipe?.productId ?? productId)) ?? products[0];
+  const [form, setForm] = useState({
+    productId: firstProduct?.id ?? '',
+    name: recipe?.name ?? '',
+    yieldJars: String(recipe?.yieldJars ?? 4),
+    yieldJarSize: (recipe?.yieldJarSize ?? firstProduct?.jarSize ?? 'pint') as JarSize,
+    method: (recipe?.method ?? 'boiling-water') as Method,
+    acidified: recipe?.acidified ?? false,
+    ph: recipe?.ph === null || recipe === undefined ? '' : String(recipe.ph),
+    acidPercent: recipe?.acidPercent === null || recipe === undefined ? '' : String(recipe.acidPercent),
+    headspaceInches: String(recipe?.headspaceInches ?? (firstProduct ? defaultHeadspaceInches(firstProduct.kind) : 0.5)),
+    baseMinutes: Object.fromEntries(JAR_SIZES.map((size) => [size, recipe?.baseMinutes[size] === undefined ? '' : String(recipe.baseMinutes[size])])) as Record<JarSize, string>,
+    steps: recipe?.steps ?? '',
+    source: recipe?.source ?? '',
+  });
+  const [ingredients, setIngredients] = useState<IngredientDraft[]>(recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient()]);
+  const error = save.error instanceof ApiError ? save.error : null;
+
+  function submit(event: FormEvent) {
+    event.preventDefault();
+    const baseMinutes = Object.fromEntries(JAR_SIZES.filter((size) => form.baseMinutes[size].trim() !== '').map((size) => [size, numberFrom(form.baseMinutes[size])]));
+    save.mutate(
+      {
+        productId: form.productId,
+        name: form.name,
+        yieldJars: numberFrom(form.yieldJars),
+        yieldJarSize: form.yieldJarSize,
+        ingredients: ingredients.filter((i) => i.name.trim() || i.amount.trim()).map((i) => ({ name: i.name, amount: numberFrom(i.amount), unit: i.unit, role: i.role })),
+        acidPercent: optionalNumber(form.acidPercent),
+        ph: optionalNumber(form.ph),
+        acidified: form.acidified,
+        method: form.method,
+        baseMinutes,
+        altitudeTable: recipe?.altitudeTable ?? null,
+        headspaceInches: numberFrom(form.headspaceInches),
+        steps: form.steps,
+        source: form.source,
+      },
+      { onSuccess: (saved) => navigate(`/h/${hid}/recipes/${saved.id}`) },
+    );
+  }
+
+  const setIngredient = (index: number, changes: Partial<IngredientDraft>) => setIngredients(ingredients.map((i, n) => (n === index ? { ...i, ...changes } : i)));
+
+  return (
+    <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2">
+      <SelectField label="Product" value={form.productId} onChange={(e) => setForm({ ...form, productId: e.target.value })} error={error?.fields.productId}>
+        {products.map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.name}
+          </option>
+        ))}
+      </SelectField>
+      <TextField label="Recipe name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={error?.fields.name} />
+      <TextField label="Tested yield (jars)" inputMode="numeric" value={form.yieldJars} onChange={(e) => setForm({ ...form, yieldJars: e.target.value })} error={error?.fields.yieldJars} />
+      <SelectField label="Jar size of the yield" value={form.yieldJarSize} onChange={(e) => setForm({ ...form, yieldJarSize: e.target.value as JarSize })}>
+        {JAR_SIZES.map((size) => (
+          <option key={size} value={size}>
+            {jarSizeName(size)}
+          </option>
+        ))}
+      </SelectField>
+      <SelectField label="Tested for" value={form.method} onChange={(e) => setForm({ ...form, method: e.target.value as Method })} error={error?.fields.method}>
+        {PROCESSING_METHODS.map((m) => (
+          <option key={m} value={m}>
+            {METHOD_NAMES[m]}
+          </option>
+        ))}
+      </SelectField>
+      <TextField label="Headspace (inches)" inputMode="decimal" value={form.headspaceInches} onChange={(e) => setForm({ ...form, headspaceInches: e.target.value })} error={error?.fields.headspaceInches} />
+      <div className="sm:col-span-2">
+        <CheckboxField
+          label="Acid or acidified (pH 4.6 or below)"
+          hint="Tick only where the tested recipe is for a boiling-water canner. A measured pH below wins over this."
+          checked={form.acidified}
+          onChange={(e) => setForm({ ...form, acidified: e.target.checked })}
+        />
+      </div>
+      <TextField label="Measured pH (optional)" inputMode="decimal" value={form.ph} onChange={(e) => setForm({ ...form, ph: e.target.value })} error={error?.fields.ph} />
+      <TextField label="Acid strength, % (optional)" inputMode="decimal" value={form.acidPercent} onChange={(e) => setForm({ ...form, acidPercent: e.target.value })} error={error?.fields.acidPercent} hint="5 for the usual vinegar." />
+      <fieldset className="sm:col-span-2">
+        <legend className="font-bold">Tested minutes at 0–1,000 ft, by jar size</legend>
+        <p className="text-sm text-ink-muted">Copy them from the tested recipe; leave a size empty where it gives no time.</p>
+        {error?.fields.baseMinutes && <p className="text-sm font-bold text-past" role="alert">{error.fields.baseMinutes}</p>}
+        <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-4">
+          {JAR_SIZES.map((size) => (
+            <TextField key={size} label={jarSizeName(size)} inputMode="numeric" value={form.baseMinutes[size]} onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })} />
+          ))}
+        </div>
+      </fieldset>
+      <fieldset className="flex flex-col gap-3 sm:col-span-2">
+        <legend className="font-bold">Ingredients</legend>
+        {error?.fields.ingredients && <p className="text-sm font-bold text-past" role="alert">{error.fields.ingredients}</p>}
+        {ingredients.map((ingredient, index) => (
+          <div key={index} className="grid grid-cols-2 items-end gap-2 rounded-lg border border-line p-2 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
+            <TextField label={`Ingredient ${index + 1}`} value={ingredient.name} onChange={(e) => setIngredient(index, { name: e.target.value })} error={error?.fields[`ingredients.${index}.name`]} />
+            <TextField label="Amount" inputMode="decimal" value={ingredient.amount} onChange={(e) => setIngredient(index, { amount: e.target.value })} error={error?.fields[`ingredients.${index}.amount`]} />
+            <SelectField label="Unit" value={ingredient.unit} onChange={(e) => setIngredient(index, { unit: e.target.value as IngredientUnit })}>
+              {INGREDIENT_UNITS.map((unit) => (
+                <option key={unit} value={unit}>
+                  {unit}
+                </option>
+              ))}
+            </SelectField>
+            <SelectField label="Role" value={ingredient.role} onChange={(e) => setIngredient(index, { role: e.target.value as IngredientRole })}>
+              {INGREDIENT_ROLES.map((role) => (
+                <option key={role} value={role}>
+                  {role}
+                </option>
+              ))}
+            </SelectField>
+            <Button variant="quiet" onClick={() => setIngredients(ingredients.filter((_, n) => n !== index))} aria-label={`Remove ingredient ${index + 1}`}>
+              Remove
+            </Button>
+          </div>
+        ))}
+        <Button variant="secondary" className="self-start" onClick={() => setIngredients([...ingredients, blankIngredient()])}>
+          Add an ingredient
+        </Button>
+      </fieldset>
+      <div className="sm:col-span-2">
+        <TextAreaField label="Method" value={form.steps} onChange={(e) => setForm({ ...form, steps: e.target.value })} error={error?.fields.steps} />
+      </div>
+      <div className="sm:col-span-2">
+        <TextField label="Source" value={form.source} onChange={(e) => setForm({ ...form, source: e.target.value })} error={error?.fields.source} hint="Where the tested recipe comes from, for example the USDA Complete Guide to Home Canning." />
+      </div>
+      {error && (
+        <div className="sm:col-span-2">
+          <Notice tone="past" role="alert">
+            {error.message}
+          </Notice>
+        </div>
+      )}
+      <div className="sm:col-span-2">
+        <Button type="submit" disabled={save.isPending}>
+          {save.isPending ? 'Saving…' : recipe ? 'Save the recipe' : 'Add the recipe'}
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,83 @@
+import { Link } from 'react-router-dom';
+import { PRODUCT_KIND_NAMES } from '@shared/shelf-words';
+import { Button } from '@/components/ui/button';
+import { useActOnJar } from '../api/act-on-jar';
+import { jarSizeName, longDate } from '../format';
+import type { ShelfProductGroup } from '../shelf-rows';
+import { PastBestBadge } from './jar-badges';
+import { ProductChip } from './product-chip';
+
+export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
+  const act = useActOnJar(hid);
+  return (
+    <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
+      {groups.map((group) => (
+        <li key={group.product.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
+          <div className="flex items-start justify-between gap-3">
+            <div className="min-w-0">
+              <h2 className="flex items-center gap-2 text-lg">
+                <ProductChip colour={group.product.colour} />
+                <span className="truncate" title={group.product.name}>
+                  {group.product.name}
+                </span>
+                {group.product.favourite && (
+                  <span className="text-soon" title="A household favourite" aria-label="favourite">
+                    ★
+                  </span>
+                )}
+              </h2>
+              <p className="text-sm text-ink-muted">
+                {PRODUCT_KIND_NAMES[group.product.kind]}
+                {group.product.heat > 0 ? ` · heat ${group.product.heat} of 5` : ''}
+              </p>
+            </div>
+            <p className="text-right">
+              <span className="tabular block text-3xl font-bold leading-none">{group.sealed}</span>
+              <span className="text-sm text-ink-muted">sealed</span>
+            </p>
+          </div>
+          {group.oldestBestBy ? (
+            <p className="flex flex-wrap items-center gap-2 text-[0.95rem]">
+              <span className="tabular">Oldest best by {longDate(group.oldestBestBy)}</span>
+              {group.pastBest > 0 && <PastBestBadge bestBy={group.oldestBestBy} />}
+            </p>
+          ) : (
+            <p className="text-[0.95rem] text-ink-muted">None on the shelf{group.product.minJars > 0 ? `; the household keeps at least ${group.product.minJars}` : ''}.</p>
+          )}
+          {group.opened > 0 && <p className="text-sm text-info">{group.opened} opened in the fridge</p>}
+          {group.batches.length > 0 && (
+            <ul className="divide-y divide-line border-y border-line text-[0.95rem]">
+              {group.batches.map((row) => (
+                <li key={row.batchId}>
+                  <Link to={`/h/${hid}/batches/${row.batchId}`} className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken">
+                    <span className="tabular">
+                      {longDate(row.cannedOn)} · {jarSizeName(row.jarSize)}
+                    </span>
+                    <span className="tabular font-bold">{row.sealed}</span>
+                  </Link>
+                </li>
+              ))}
+            </ul>
+          )}
+          <div className="mt-auto flex flex-wrap gap-2">
+            {canHandleJars && group.nextJar && (
+              <Button
+                variant="secondary"
+                disabled={act.isPending}
+                onClick={() => act.mutate({ jarId: group.nextJar!.id, action: 'open' })}
+                aria-label={`Open the oldest jar of ${group.product.name} (${group.nextJar.code})`}
+              >
+                Open oldest jar
+              </Button>
+            )}
+            {canCook && (
+              <Link to={`/h/${hid}/products/${group.product.id}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+                Edit product
+              </Link>
+            )}
+          </div>
+        </li>
+      ))}
+    </ul>
+  );
+}

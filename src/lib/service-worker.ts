@@ -1,0 +1,19 @@
+import { queryClient } from './query-client';
+
+// Vite serves the source in development; the build writes the worker to /sw.js.
+const WORKER_URL = import.meta.env.DEV ? '/src/sw.ts' : '/sw.js';
+
+/** Registers the service worker (push notifications, installing the app) and listens for pushes it passes on. */
+export function registerServiceWorker() {
+  if (!('serviceWorker' in navigator)) return;
+  void serviceWorkerRegistration().catch(() => {});
+  navigator.serviceWorker.addEventListener('message', (event: MessageEvent<{ type?: string }>) => {
+    // A reminder arrived while the app is open: what it is about may have changed.
+    if (event.data?.type === 'larderly-push') void queryClient.invalidateQueries();
+  });
+}
+
+export async function serviceWorkerRegistration() {
+  await navigator.serviceWorker.register(WORKER_URL, { type: import.meta.env.DEV ? 'module' : 'classic', scope: '/' });
+  return navigator.serviceWorker.ready;
+}
