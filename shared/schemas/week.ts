@@ -92,6 +92,8 @@ export interface MealView {
 export interface EaterFlag {
   kind: 'heat' | 'diet';
   userId: string;
+  /** a few words for the card */
+  label: string;
   reason: string;
 }
 

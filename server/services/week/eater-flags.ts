@@ -15,10 +15,12 @@ export interface FlagRecipe {
 }
 
 /** What in a recipe goes against each diet, and how to say so. */
-const DIET_CONFLICTS: Record<DietTag, { finds: (ingredient: RecipeIngredient) => boolean; says: string }> = {
-  'no-added-sugar': { finds: (i) => i.role === 'sweetener' && /sugar/i.test(i.name), says: 'sweetens with sugar' },
-  'low-salt': { finds: (i) => /salt/i.test(i.name), says: 'has added salt' },
+const DIET_CONFLICTS: Record<DietTag, { finds: (ingredient: RecipeIngredient) => boolean; says: string; word: string }> = {
+  'no-added-sugar': { finds: (i) => i.role === 'sweetener' && /sugar/i.test(i.name), says: 'sweetens with sugar', word: 'Sugar' },
+  'low-salt': { finds: (i) => /salt/i.test(i.name), says: 'has added salt', word: 'Salt' },
 };
+
+const firstName = (name: string) => name.split(' ')[0];
 
 export function eaterFlags(product: FlagProduct, recipes: FlagRecipe[], eaters: WeekMember[]): EaterFlag[] {
   const flags: EaterFlag[] = [];
@@ -27,6 +29,7 @@ export function eaterFlags(product: FlagProduct, recipes: FlagRecipe[], eaters: 
       flags.push({
         kind: 'heat',
         userId: eater.userId,
+        label: `Too hot for ${firstName(eater.name)}`,
         reason: `${product.name} is heat ${product.heat}; ${eater.name} keeps to heat ${eater.heatTolerance} or milder.`,
       });
     }
@@ -38,6 +41,7 @@ export function eaterFlags(product: FlagProduct, recipes: FlagRecipe[], eaters: 
         flags.push({
           kind: 'diet',
           userId: eater.userId,
+          label: `${conflict.word}: not for ${firstName(eater.name)}`,
           reason: `${recipe.name} ${conflict.says} (${ingredient.name.toLowerCase()}); ${eater.name} eats ${tag === 'low-salt' ? 'low salt' : 'no added sugar'}.`,
         });
       }

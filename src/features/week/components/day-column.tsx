@@ -12,7 +12,7 @@ export function DayColumn({ day }: { day: WeekDay }) {
     if (window.confirm(`Clear every meal planned for ${label}?`)) board.clearDay.mutate(day.date);
   };
   return (
-    <section aria-label={label} className={`flex min-w-0 flex-col gap-2 rounded-card border p-2 ${isToday ? 'border-action bg-action-soft/40' : 'border-line bg-surface/60'}`}>
+    <section aria-label={label} className={`flex min-w-0 flex-col gap-1.5 rounded-card border p-1 ${isToday ? 'border-action bg-action-soft/40' : 'border-line bg-surface/60'}`}>
       <header className="flex items-start justify-between gap-1">
         <h2 className="text-base leading-tight">
           <span className="block">{format(parseISO(day.date), 'EEEE')}</span>
@@ -22,8 +22,13 @@ export function DayColumn({ day }: { day: WeekDay }) {
           </span>
         </h2>
         {board.canEdit && day.entries.length > 0 && (
-          <button type="button" onClick={clear} className="min-h-9 rounded-md px-1.5 text-xs font-bold text-ink-muted hover:bg-past-soft hover:text-past pointer-coarse:min-h-11">
-            Clear day
+          <button
+            type="button"
+            onClick={clear}
+            aria-label={`Clear ${label}`}
+            className="min-h-8 rounded-md px-1 text-xs font-bold text-ink-muted hover:bg-past-soft hover:text-past pointer-coarse:min-h-11 pointer-coarse:px-2"
+          >
+            Clear
           </button>
         )}
       </header>

@@ -4,29 +4,31 @@ import { formatTbsp } from './pairing-line';
 
 function warningText(warning: AllocationWarning, board: ReturnType<typeof useBoard>) {
   const name = productName(board.week, String(warning.productId));
-  if (warning.kind === 'short') return `The shelf runs short of ${name}: ${formatTbsp(warning.tbsp)} not covered.`;
+  if (warning.kind === 'short') return `Short of ${name}: ${formatTbsp(warning.tbsp)} not on the shelf.`;
   return `Jar ${jarCode(board.week, warning.jarId)} of ${name} passes its use-by with ${formatTbsp(warning.tbsp)} left.`;
 }
 
-/** A day's jar news from the allocation: jars to open, and what to act on. */
+/** A day's jar news from the allocation: jars to open (by product), and what to act on. */
 export function DayNotes({ date }: { date: string }) {
   const board = useBoard();
-  const { allocation } = board.week;
-  const openings = allocation.openings.filter((o) => o.date === date);
+  const { allocation, jars } = board.week;
+  const opened = new Map<string, string[]>();
+  for (const opening of allocation.openings.filter((o) => o.date === date)) {
+    const productId = jars[String(opening.jarId)]?.productId ?? '';
+    opened.set(productId, [...(opened.get(productId) ?? []), jarCode(board.week, opening.jarId)]);
+  }
   const warnings = allocation.warnings.filter((w) => w.date === date);
-  if (openings.length === 0 && warnings.length === 0) return null;
+  if (opened.size === 0 && warnings.length === 0) return null;
   return (
-    <div className="flex flex-col gap-1 text-sm">
-      {openings.map((opening) => {
-        const jar = board.week.jars[String(opening.jarId)];
-        return (
-          <p key={String(opening.jarId)} className="rounded-md border border-info/40 bg-info-soft px-2 py-1">
-            Open a new jar of {productName(board.week, jar?.productId ?? '')} <span className="tabular text-ink-muted">({jarCode(board.week, opening.jarId)})</span>
-          </p>
-        );
-      })}
+    <div className="flex flex-col gap-1 text-xs leading-snug">
+      {[...opened].map(([productId, codes]) => (
+        <p key={productId} className="rounded-md border border-info/40 bg-info-soft px-1.5 py-1">
+          {codes.length === 1 ? 'Open a new jar of ' : `Open ${codes.length} new jars of `}
+          <strong>{productName(board.week, productId)}</strong> <span className="tabular text-ink-muted">({codes.join(', ')})</span>
+        </p>
+      ))}
       {warnings.map((warning, i) => (
-        <div key={`${warning.kind}-${String(warning.productId)}-${i}`} role="note" className="rounded-md border border-soon-fill bg-soon-soft px-2 py-1">
+        <div key={`${warning.kind}-${String(warning.productId)}-${i}`} role="note" className="rounded-md border border-soon-fill bg-soon-soft px-1.5 py-1">
           <p>{warningText(warning, board)}</p>
           <RestockButton productId={String(warning.productId)} />
         </div>
@@ -42,11 +44,12 @@ function RestockButton({ productId }: { productId: string }) {
   return (
     <button
       type="button"
-      className="mt-1 min-h-9 rounded-md px-1 text-left font-bold text-action underline-offset-2 hover:underline pointer-coarse:min-h-11"
+      aria-label={`Add a restock to-do for ${productName(week, productId)}`}
+      className="mt-0.5 min-h-8 rounded px-0.5 text-left font-bold text-action underline underline-offset-2 pointer-coarse:min-h-11"
       disabled={restock.todo.isPending}
       onClick={() => restock.add(productId)}
     >
-      Add a restock to-do for {productName(week, productId)}
+      Add a restock to-do
     </button>
   );
 }

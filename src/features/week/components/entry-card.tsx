@@ -24,9 +24,9 @@ export function EntryCard({ entry }: { entry: PlanEntryView }) {
       style={{ transform: CSS.Translate.toString(transform), transition }}
       aria-label={`${entry.title}, ${entry.servings} servings`}
       data-entry={entry.title}
-      className={`rounded-lg border bg-surface p-2 shadow-sm ${isDragging ? 'opacity-40' : ''} ${welcoming ? 'border-action ring-2 ring-action' : 'border-line'}`}
+      className={`rounded-lg border bg-surface p-1.5 shadow-sm ${isDragging ? 'opacity-40' : ''} ${welcoming ? 'border-action ring-2 ring-action' : 'border-line'}`}
     >
-      <header className="flex items-start gap-1">
+      <header className="flex items-center gap-1">
         {board.canEdit && (
           <button
             type="button"
@@ -34,35 +34,35 @@ export function EntryCard({ entry }: { entry: PlanEntryView }) {
             {...attributes}
             {...listeners}
             aria-label={`Move ${entry.title}`}
-            className="-ml-1 grid min-h-9 min-w-7 shrink-0 cursor-grab touch-none place-items-center rounded text-ink-muted hover:bg-sunken pointer-coarse:min-h-11 pointer-coarse:min-w-9"
+            className="-ml-0.5 grid min-h-8 min-w-6 shrink-0 cursor-grab touch-none place-items-center rounded text-ink-muted hover:bg-sunken pointer-coarse:min-h-11 pointer-coarse:min-w-9"
           >
             <svg width="10" height="16" viewBox="0 0 10 16" aria-hidden="true" className="fill-current">
               {[2, 8, 14].flatMap((y) => [<circle key={`a${y}`} cx="2" cy={y} r="1.5" />, <circle key={`b${y}`} cx="8" cy={y} r="1.5" />])}
             </svg>
           </button>
         )}
-        <h4 className="min-w-0 flex-1 pt-1 text-[0.95rem] font-bold leading-snug">{entry.title}</h4>
+        <div className="flex min-w-0 flex-1 items-center gap-1 text-xs text-ink-muted">
+          {board.canEdit && !isPending(entry.id) ? (
+            <NumberCommit label={`Servings of ${entry.title}`} value={entry.servings} min={1} max={100} onCommit={(servings) => board.updateEntry.mutate({ id: entry.id, patch: { servings } })} />
+          ) : (
+            <span className="tabular">{entry.servings}</span>
+          )}
+          <span className="truncate">served</span>
+        </div>
         {board.canEdit && !isPending(entry.id) && (
           <button
             type="button"
             aria-label={`Remove ${entry.title} from the plan`}
-            className="grid min-h-9 min-w-8 shrink-0 place-items-center rounded text-ink-muted hover:bg-past-soft hover:text-past pointer-coarse:min-h-11 pointer-coarse:min-w-11"
+            className="-mr-0.5 grid min-h-8 min-w-6 shrink-0 place-items-center rounded text-ink-muted hover:bg-past-soft hover:text-past pointer-coarse:min-h-11 pointer-coarse:min-w-11"
             onClick={() => board.deleteEntry.mutate(entry.id)}
           >
             ×
           </button>
         )}
       </header>
-      <div className="mt-1 flex items-center gap-1 text-sm text-ink-muted">
-        {board.canEdit && !isPending(entry.id) ? (
-          <NumberCommit label={`Servings of ${entry.title}`} value={entry.servings} min={1} max={100} onCommit={(servings) => board.updateEntry.mutate({ id: entry.id, patch: { servings } })} />
-        ) : (
-          <span className="tabular">{entry.servings}</span>
-        )}
-        <span>servings</span>
-      </div>
+      <h4 className="mt-0.5 text-sm font-bold leading-snug">{entry.title}</h4>
       {entry.pairings.length > 0 && (
-        <ul className="mt-2 flex flex-col gap-1" aria-label={`Jars for ${entry.title}`}>
+        <ul className="mt-1.5 flex flex-col gap-1" aria-label={`Jars for ${entry.title}`}>
           {entry.pairings.map((pairing) => (
             <PairingLine key={pairing.id} pairing={pairing} entry={entry} />
           ))}

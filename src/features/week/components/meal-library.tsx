@@ -7,14 +7,14 @@ import { useCreateMeal } from '../api/create-meal';
 function MealChip({ meal, canEdit }: { meal: MealView; canEdit: boolean }) {
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: `meal:${meal.id}`, data: { type: 'meal', meal }, disabled: !canEdit });
   return (
-    <li>
+    <li className="w-44 shrink-0 md:w-auto">
       <button
         type="button"
         ref={setNodeRef}
         {...attributes}
         {...listeners}
         aria-label={`${meal.name}, serves ${meal.usualServings}${canEdit ? '. Drag onto a slot to plan it.' : ''}`}
-        className={`flex min-h-11 w-full touch-none flex-col items-start rounded-lg border border-line bg-surface px-3 py-1 text-left hover:border-action ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
+        className={`flex h-full min-h-11 w-full touch-manipulation select-none flex-col items-start rounded-lg border border-line bg-surface px-3 py-1 text-left hover:border-action ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
       >
         <span className="font-bold leading-snug">{meal.name}</span>
         {meal.tags.length > 0 && <span className="text-xs text-ink-muted">{meal.tags.join(' · ')}</span>}
@@ -46,7 +46,7 @@ export function MealLibrary({ hid, meals, canEdit }: { hid: string; meals: MealV
       ) : shown.length === 0 ? (
         <p className="text-sm text-ink-muted">No meal matches “{search}”.</p>
       ) : (
-        <ul className="grid max-h-72 grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] gap-1.5 overflow-y-auto pr-1">
+        <ul className="-mx-1 flex gap-1.5 overflow-x-auto px-1 pb-1 md:mx-0 md:grid md:max-h-72 md:grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] md:overflow-x-visible md:overflow-y-auto md:px-0 md:pr-1">
           {shown.map((meal) => (
             <MealChip key={meal.id} meal={meal} canEdit={canEdit} />
           ))}

@@ -27,7 +27,7 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
   const product = board.week.products.find((p) => p.id === pairing.productId);
   const line = allocationLine(pairing, entry, board);
   return (
-    <li className="rounded-md bg-sunken/70 px-2 py-1 text-sm">
+    <li className="rounded-md bg-sunken/70 px-1.5 py-1 text-xs leading-snug">
       <div className="flex items-start justify-between gap-1">
         <span className="min-w-0 font-bold">
           {name}
@@ -60,14 +60,14 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
         ) : (
           <span className="tabular">{pairing.tbspPerServing}</span>
         )}
-        <span>tbsp a serving</span>
+        <span>tbsp each</span>
       </div>
       {pairing.flags.length > 0 && (
         <ul className="mt-1 flex flex-col gap-0.5">
           {pairing.flags.map((flag) => (
-            <li key={`${flag.kind}-${flag.userId}`} className="rounded bg-soon-soft px-1.5 text-soon">
-              <span aria-hidden="true">⚑ </span>
-              {flag.reason}
+            <li key={`${flag.kind}-${flag.userId}`} title={flag.reason} className="rounded bg-soon-soft px-1 font-bold text-soon">
+              <span aria-hidden="true">⚑ {flag.label}</span>
+              <span className="sr-only">{flag.reason}</span>
             </li>
           ))}
         </ul>

@@ -5,14 +5,14 @@ function ProductChip({ product, canEdit }: { product: WeekProduct; canEdit: bool
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: `product:${product.id}`, data: { type: 'product', product }, disabled: !canEdit });
   const counts = [product.openedJars ? `${product.openedJars} open` : '', product.sealedJars ? `${product.sealedJars} sealed` : ''].filter(Boolean).join(', ');
   return (
-    <li>
+    <li className="w-44 shrink-0 md:w-auto">
       <button
         type="button"
         ref={setNodeRef}
         {...attributes}
         {...listeners}
         aria-label={`${product.name}: ${counts}${canEdit ? '. Drag onto a planned meal to pair it.' : ''}`}
-        className={`flex min-h-11 w-full touch-none items-center gap-2 rounded-lg border bg-surface px-3 py-1 text-left hover:border-action ${product.openedJars ? 'border-info/60' : 'border-line'} ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
+        className={`flex h-full min-h-11 w-full touch-manipulation select-none items-center gap-2 rounded-lg border bg-surface px-3 py-1 text-left hover:border-action ${product.openedJars ? 'border-info/60' : 'border-line'} ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
       >
         <JarGlyph opened={product.openedJars > 0} />
         <span className="min-w-0">
@@ -47,7 +47,7 @@ export function ShelfRail({ products, canEdit }: { products: WeekProduct[]; canE
       {onShelf.length === 0 ? (
         <p className="text-sm text-ink-muted">No jars on the shelf or in the fridge yet. Record a batch, then pair its jars with meals here.</p>
       ) : (
-        <ul className="grid max-h-72 grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] gap-1.5 overflow-y-auto pr-1">
+        <ul className="-mx-1 flex gap-1.5 overflow-x-auto px-1 pb-1 md:mx-0 md:grid md:max-h-72 md:grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] md:overflow-x-visible md:overflow-y-auto md:px-0 md:pr-1">
           {onShelf.map((product) => (
             <ProductChip key={product.id} product={product} canEdit={canEdit} />
           ))}

@@ -12,7 +12,7 @@ export function SlotList({ date, slot, entries }: { date: string; slot: Slot; en
   const dragging = active?.data.current as DragSource | undefined;
   const welcoming = isOver && dragging !== undefined && dragging.type !== 'product';
   return (
-    <section ref={setNodeRef} aria-label={SLOT_LABELS[slot]} className={`rounded-lg p-1.5 transition-colors ${welcoming ? 'bg-action-soft ring-2 ring-action' : 'bg-sunken/50'}`}>
+    <section ref={setNodeRef} aria-label={SLOT_LABELS[slot]} className={`rounded-lg p-1 transition-colors ${welcoming ? 'bg-action-soft ring-2 ring-action' : 'bg-sunken/50'}`}>
       <h3 className="px-1 text-xs font-bold uppercase tracking-wide text-ink-muted">{SLOT_LABELS[slot]}</h3>
       <SortableContext id={slotId(date, slot)} items={entries.map((e) => e.id)} strategy={verticalListSortingStrategy}>
         <div className="mt-1 flex min-h-11 flex-col gap-1.5">

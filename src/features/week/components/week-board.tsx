@@ -1,5 +1,5 @@
-import { DndContext, DragOverlay, pointerWithin, rectIntersection, type CollisionDetection, type DragEndEvent, type DragStartEvent, type KeyboardCoordinateGetter } from '@dnd-kit/core';
-import { useRef, useState } from 'react';
+import { DndContext, DragOverlay, type CollisionDetection, type DragEndEvent, type DragStartEvent, type KeyboardCoordinateGetter } from '@dnd-kit/core';
+import { useEffect, useRef, useState } from 'react';
 import type { MealView, Slot, WeekView } from '@shared/schemas/week';
 import { Notice } from '@/components/ui/notice';
 import { useAddPairing } from '../api/add-pairing';
@@ -57,22 +57,40 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   };
   const sensors = useBoardSensors(coordinateGetter);
 
+  // Where the finger or mouse really is, in the viewport: slots move as the page scrolls under a drag.
+  const pointer = useRef<{ x: number; y: number } | null>(null);
+  useEffect(() => {
+    const onPointer = (event: PointerEvent) => (pointer.current = { x: event.clientX, y: event.clientY });
+    const onTouch = (event: TouchEvent) => event.touches[0] && (pointer.current = { x: event.touches[0].clientX, y: event.touches[0].clientY });
+    // Capture, so the position is current before the drag sensors handle the same move.
+    window.addEventListener('pointermove', onPointer, { passive: true, capture: true });
+    window.addEventListener('touchmove', onTouch, { passive: true, capture: true });
+    return () => {
+      window.removeEventListener('pointermove', onPointer, { capture: true });
+      window.removeEventListener('touchmove', onTouch, { capture: true });
+    };
+  }, []);
+
   const collisionDetection: CollisionDetection = (args) => {
     const source = sourceOf(args.active);
     const droppableContainers = args.droppableContainers.filter((c) => accepts(source, targetOf(c)));
-    if (!args.pointerCoordinates) {
+    if (!args.pointerCoordinates || !pointer.current) {
       const place = keyboardPlace.current;
       return place && droppableContainers.some((c) => c.id === place) ? [{ id: place }] : [];
     }
-    const under = pointerWithin({ ...args, droppableContainers });
+    const { x, y } = pointer.current;
+    const under = droppableContainers.filter((c) => {
+      const rect = c.node.current?.getBoundingClientRect();
+      return rect !== undefined && x >= rect.left && x <= rect.right && y >= rect.top && y <= rect.bottom;
+    });
     // A planned meal sits inside its slot: the meal is the more exact place.
-    const entry = under.find((c) => targetOf(droppableContainers.find((d) => d.id === c.id))?.type === 'entry');
-    if (entry) return [entry];
-    return under.length ? under : rectIntersection({ ...args, droppableContainers });
+    const hit = under.find((c) => targetOf(c)?.type === 'entry') ?? under[0];
+    return hit ? [{ id: hit.id }] : [];
   };
 
-  const onDragStart = ({ active }: DragStartEvent) => {
+  const onDragStart = ({ active, activatorEvent }: DragStartEvent) => {
     const source = sourceOf(active) ?? null;
+    pointer.current = activatorEvent instanceof PointerEvent ? { x: activatorEvent.clientX, y: activatorEvent.clientY } : null;
     setDragging(source);
     setMessage(null);
     keyboardPlace.current = source?.type === 'entry' ? source.entry.id : null;
@@ -155,7 +173,7 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
             <ShelfRail products={week.products} canEdit={canEdit} />
           </div>
           {!wide && <DayPicker days={week.days} selected={selectedDay} today={week.today} onSelect={setPicked} />}
-          <div className={wide ? 'grid grid-cols-7 gap-2' : 'flex flex-col'}>
+          <div className={wide ? 'grid grid-cols-7 gap-1.5' : 'flex flex-col'}>
             {visibleDays.map((day) => (
               <DayColumn key={day.date} day={day} />
             ))}
