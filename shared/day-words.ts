@@ -1,10 +1,12 @@
 // Calendar dates in words, the same on the server (e-mails) and in the browser.
 const SHORT_DAY = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', timeZone: 'UTC' });
+const SHORT_DAY_WITH_YEAR = new Intl.DateTimeFormat('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
 const MONTH = new Intl.DateTimeFormat('en-US', { month: 'short', timeZone: 'UTC' });
 
-/** "Thu, Dec 10" for 2026-12-10. */
-export function shortDay(isoDate: string): string {
-  return SHORT_DAY.format(new Date(`${isoDate}T00:00:00Z`));
+/** "Thu, Dec 10" for 2026-12-10, with the year ("Tue, Aug 31, 2027") when it is not this year. */
+export function shortDay(isoDate: string, thisYear = new Date().getUTCFullYear()): string {
+  const day = new Date(`${isoDate}T00:00:00Z`);
+  return (day.getUTCFullYear() === thisYear ? SHORT_DAY : SHORT_DAY_WITH_YEAR).format(day);
 }
 
 /** "Dec" for 2026-12. */

@@ -125,7 +125,7 @@ export async function addRestockTodo(sequelize: Sequelize, household: Household,
   if (!recipe) {
     throw refuse(`${product.name} has no recipe yet. Add a tested recipe for it first, then plan the batch.`, {
       label: 'Add a recipe',
-      href: `/h/${household.id}/recipes?productId=${product.id}`,
+      href: `/h/${household.id}/recipes/new?productId=${product.id}`,
     });
   }
   const jarSize = jarSizeFor(recipe, product, input.jarSize);

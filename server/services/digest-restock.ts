@@ -1,9 +1,14 @@
+import { JAR_SIZE_NAMES } from '../../shared/jar-size-names';
 import type { DigestContent } from './mail/digest-mail';
+import { restockFor } from './restock';
 
-/**
- * The hook the restock feature fills: the suggestions the weekly digest lists under
- * "Time to make more". An empty list leaves that section out of the e-mail.
- */
-export async function digestRestockLines(_householdId: string, _today: string): Promise<DigestContent['restock']> {
-  return [];
+/** The restock suggestions the weekly digest lists under "Time to make more"; none leaves the section out. */
+export async function digestRestockLines(householdId: string, today: string): Promise<DigestContent['restock']> {
+  const suggestions = await restockFor(householdId, today);
+  return suggestions.map((suggestion) => ({
+    productName: suggestion.productName,
+    reason: `${suggestion.why} ${
+      suggestion.openTodoId ? 'A batch is already on the to-do list.' : `About ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars would last until the next harvest.`
+    }`,
+  }));
 }

@@ -30,17 +30,18 @@ export function harvestWindow(today: string, harvestMonths: number[]): HarvestWi
 
 /** The target date and, in words, why. */
 export function targetDate(today: string, harvestMonths: number[], runOutOn: string | null): { targetOn: string; why: string } {
+  const year = yearOf(today);
   const window = harvestWindow(today, harvestMonths);
   const runOut = runOutOn !== null && runOutOn > today ? runOutOn : null;
   if (window === null) {
-    if (runOut) return { targetOn: addDays(runOut, -1), why: `The day before the shelf runs out (${shortDay(runOut)}).` };
+    if (runOut) return { targetOn: addDays(runOut, -1), why: `The day before the shelf runs out (${shortDay(runOut, year)}).` };
     return { targetOn: addDays(today, DEFAULT_LEAD_DAYS), why: 'Two weeks from today: time to gather the produce and a free afternoon.' };
   }
   if (runOut && runOut > window.start && runOut <= window.end) {
-    return { targetOn: addDays(runOut, -1), why: `Before the shelf runs out on ${shortDay(runOut)}, while the produce is in season.` };
+    return { targetOn: addDays(runOut, -1), why: `Before the shelf runs out on ${shortDay(runOut, year)}, while the produce is in season.` };
   }
   if (window.start > today) {
-    return { targetOn: window.end, why: `The produce comes in from ${shortDay(window.start)}; make it before the harvest ends on ${shortDay(window.end)}.` };
+    return { targetOn: window.end, why: `The produce comes in from ${shortDay(window.start, year)}; make it before the harvest ends on ${shortDay(window.end, year)}.` };
   }
-  return { targetOn: window.end, why: `Before the harvest ends on ${shortDay(window.end)}.` };
+  return { targetOn: window.end, why: `Before the harvest ends on ${shortDay(window.end, year)}.` };
 }

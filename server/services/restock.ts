@@ -1,16 +1,16 @@
 // The restock list: each product's forecast, the favourites that need a batch and why, in plain words.
 import { Op } from 'sequelize';
-import { addMonths, jarSizeAdvice, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../shared/domain';
+import { addMonths, jarSizeAdvice, yearOf, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../shared/domain';
 import { count, shortDay, tbspPerDay } from '../../shared/day-words';
 import type { MonthlyUse, RestockForecastView, RestockSuggestionView, RestockView } from '../../shared/schemas/restock';
 import { Household, Product, Recipe, Todo } from '../db/models';
 import { todayIn } from './clock';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
-function whyInWords(suggestion: RestockSuggestion, forecast: RestockForecast, product: Product): string {
+function whyInWords(today: string, suggestion: RestockSuggestion, forecast: RestockForecast, product: Product): string {
   if (suggestion.reason === 'runs-out-soon') {
     if (forecast.jarsOnHand === 0) return 'None left on the shelf or in the fridge.';
-    return `At about ${tbspPerDay(forecast.dailyTbsp)}, the last jar is empty by ${shortDay(suggestion.runOutOn!)}.`;
+    return `At about ${tbspPerDay(forecast.dailyTbsp)}, the last jar is empty by ${shortDay(suggestion.runOutOn!, yearOf(today))}.`;
   }
   return `${count(forecast.sealedJars, 'sealed jar')} left; you keep at least ${product.minJars}.`;
 }
@@ -61,7 +61,7 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
       ...suggestion,
       productId: product.id,
       productName: product.name,
-      why: whyInWords(suggestion, forecastOf.get(product.id)!, product),
+      why: whyInWords(today, suggestion, forecastOf.get(product.id)!, product),
       jarSize: product.jarSize,
       hasRecipe: withRecipe.has(product.id),
       openTodoId: openTodo.get(product.id) ?? null,
@@ -101,10 +101,11 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
 }
 
 /** The restock suggestions for one household, for the weekly digest and other callers outside a request. */
-export async function restockFor(householdId: string): Promise<RestockSuggestionView[]> {
+export async function restockFor(householdId: string, today?: string): Promise<RestockSuggestionView[]> {
   const household = await Household.findByPk(householdId);
   if (!household) return [];
-  return (await restockView(household)).suggestions;
+  const snapshot = await stockSnapshot(household.id, today ?? todayIn(household.timeZone));
+  return (await restockFromSnapshot(snapshot)).suggestions;
 }
 
 /** Favourite and minimum jars, the two settings the restock list turns on. */

@@ -1,5 +1,6 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { todayQueryOptions } from '@/features/today/api/get-today';
 import { queryClient } from '@/lib/query-client';
 
 // Every screen is its own chunk; the loader warms the session query so screens open without a flash.
@@ -20,7 +21,15 @@ const router = createBrowserRouter([
         path: '/h/:hid',
         lazy: async () => ({ Component: (await import('@/components/layouts/app-layout')).AppLayout }),
         children: [
-          { index: true, lazy: async () => ({ Component: (await import('./routes/today')).TodayRoute }) },
+          // The home page asks for its one read while its code is still loading.
+          {
+            index: true,
+            loader: ({ params }) => {
+              void queryClient.prefetchQuery(todayQueryOptions(params.hid!));
+              return null;
+            },
+            lazy: async () => ({ Component: (await import('./routes/today')).TodayRoute }),
+          },
           { path: 'week', lazy: async () => ({ Component: (await import('./routes/week')).WeekRoute }) },
           { path: 'shelf', lazy: async () => ({ Component: (await import('./routes/shelf')).ShelfRoute }) },
           { path: 'fridge', lazy: async () => ({ Component: (await import('./routes/fridge')).FridgeRoute }) },

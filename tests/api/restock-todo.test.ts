@@ -77,7 +77,7 @@ describe('adding a restock batch to the to-do list', () => {
     const response = await cook.post(todoUrl(product.id)).send({ jars: 4 });
     expect(response.status).toBe(422);
     expect(response.body.error.message).toMatch(/Test Bare Butter has no recipe yet/);
-    expect(response.body.error.details.action.href).toBe(`/h/${ctx.householdId}/recipes?productId=${product.id}`);
+    expect(response.body.error.details.action.href).toBe(`/h/${ctx.householdId}/recipes/new?productId=${product.id}`);
   });
 
   it('refuses a jar size the recipe has no tested time for', async () => {

@@ -20,11 +20,9 @@ export function LazyUseChart({ productName, months }: { productName: string; mon
       {empty ? (
         <p className="text-sm text-ink-muted">No jars finished in the last six months.</p>
       ) : (
-        near && (
-          <Suspense fallback={null}>
-            <UseChart productName={productName} months={months} />
-          </Suspense>
-        )
+        <Suspense fallback={<div className="h-[5.5rem] rounded-lg bg-sunken/50" />}>
+          {near ? <UseChart productName={productName} months={months} /> : <div className="h-[5.5rem] rounded-lg bg-sunken/50" />}
+        </Suspense>
       )}
     </div>
   );

@@ -31,7 +31,7 @@ export function SuggestionCard({ hid, suggestion, canCook, focused }: { hid: str
       ) : !suggestion.hasRecipe ? (
         <p>
           No recipe yet, so there is nothing to scale.{' '}
-          <Link to={`/h/${hid}/recipes?productId=${suggestion.productId}`} className="font-bold text-action underline">
+          <Link to={`/h/${hid}/recipes/new?productId=${suggestion.productId}`} className="font-bold text-action underline">
             Add a tested recipe
           </Link>
         </p>

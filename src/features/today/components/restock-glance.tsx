@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
 
 /** The favourites that need a batch; each opens its place on the Restock screen. */
@@ -14,7 +15,7 @@ export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: 
           >
             <span className="font-bold text-action">{suggestion.productName}</span>
             <span className="text-sm text-ink-muted">
-              {suggestion.why} {suggestion.openTodoId ? 'A batch is on the list.' : `Make about ${suggestion.suggestedJars}.`}
+              {suggestion.why} {suggestion.openTodoId ? 'A batch is on the list.' : `Make about ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars.`}
             </span>
           </Link>
         </li>
