@@ -35,6 +35,11 @@ export default defineConfig({
     emptyOutDir: true,
     manifest: true,
     sourcemap: false,
+    // The service worker is a second entry, written to /sw.js so its scope is the whole app.
+    rolldownOptions: {
+      input: { main: fileURLToPath(new URL('./index.html', import.meta.url)), sw: fileURLToPath(new URL('./src/sw.ts', import.meta.url)) },
+      output: { entryFileNames: (chunk) => (chunk.name === 'sw' ? 'sw.js' : 'assets/[name]-[hash].js') },
+    },
   },
   server: {
     host: '127.0.0.1',

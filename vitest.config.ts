@@ -32,7 +32,7 @@ export default defineConfig({
           name: 'e2e',
           include: ['tests/e2e/**/*.test.ts'],
           environment: 'node',
-          globalSetup: ['tests/e2e/global-setup.ts'],
+          globalSetup: ['tests/e2e/stand-ins-setup.ts', 'tests/e2e/global-setup.ts'],
           fileParallelism: false,
           testTimeout: 60_000,
           hookTimeout: 120_000,

@@ -2,12 +2,15 @@
 import { readFileSync } from 'node:fs';
 import { ensureNodeModules, fail, log, projectDir, startChild } from './lib/system.mjs';
 import { startCluster } from './lib/postgres.mjs';
+import { startStandIns } from './lib/stand-ins.mjs';
 
 ensureNodeModules();
 const { buildClient, ensureDatabase, persistentSecret, setUpSchema } = await import('./lib/database.mjs');
 
 const cluster = startCluster();
+let standIns = null;
 const stopAll = (code) => {
+  standIns?.child.kill('SIGTERM');
   cluster.stop();
   process.exit(code);
 };
@@ -19,6 +22,11 @@ try {
   setUpSchema(databaseUrl, { seedDemo: !production });
   log('building the client');
   buildClient();
+  // Development sends mail and pushes to local stand-ins unless SMTP_HOST points elsewhere.
+  if (!production && !process.env.SMTP_HOST) {
+    standIns = await startStandIns(cluster);
+    log(standIns.describe);
+  }
 
   const port = process.env.PORT ?? '3000';
   const host = process.env.HOST ?? '127.0.0.1';
@@ -30,6 +38,7 @@ try {
       SESSION_SECRET: process.env.SESSION_SECRET ?? persistentSecret(cluster, 'session-secret'),
       PORT: port,
       HOST: host,
+      ...standIns?.env,
     },
   });
   await waitForHealth(`http://${host}:${port}/api/health`, server);

@@ -2,6 +2,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from '@/app/provider';
 import { AppRouter } from '@/app/router';
+import { registerServiceWorker } from '@/lib/service-worker';
 import '@/styles/index.css';
 
 createRoot(document.getElementById('root')!).render(
@@ -11,3 +12,4 @@ createRoot(document.getElementById('root')!).render(
     </AppProvider>
   </StrictMode>,
 );
+registerServiceWorker();

@@ -26,8 +26,19 @@ export async function viewSettings(userId: string): Promise<NotificationSettings
   return { ...pick(row), pushDevices };
 }
 
+const COLUMNS: Record<keyof NotificationPatch, string> = { emailReminders: 'email_reminders', weeklyDigest: 'weekly_digest', reminderHour: 'reminder_hour', daysBefore: 'days_before' };
+
+/** Writes only the fields in the patch, so two quick changes from one person never undo each other. */
 export async function updateSettings(userId: string, patch: NotificationPatch) {
-  const current = pick(await NotificationPreference.findByPk(userId));
-  await NotificationPreference.upsert({ userId, ...current, ...patch });
+  const keys = (Object.keys(patch) as (keyof NotificationPatch)[]).filter((k) => patch[k] !== undefined);
+  if (keys.length) {
+    const columns = keys.map((k) => COLUMNS[k]);
+    await NotificationPreference.sequelize!.query(
+      `INSERT INTO notification_preferences (user_id, ${columns.join(', ')}, created_at, updated_at)
+       VALUES (:userId, ${keys.map((k) => `:${k}`).join(', ')}, now(), now())
+       ON CONFLICT (user_id) DO UPDATE SET ${columns.map((c) => `${c} = EXCLUDED.${c}`).join(', ')}, updated_at = now()`,
+      { replacements: { userId, ...patch } },
+    );
+  }
   return viewSettings(userId);
 }

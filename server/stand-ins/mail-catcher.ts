@@ -2,18 +2,10 @@ import { randomUUID } from 'node:crypto';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { SMTPServer } from 'smtp-server';
+import type { CaughtMail } from '../../shared/schemas/notifications';
 import { decodeHeader, readMessage } from './mime';
 
-/** One message the catcher received, as the development mailbox page and the tests read it. */
-export interface CaughtMail {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-}
+export type { CaughtMail };
 
 /**
  * A local SMTP server on loopback that keeps every message instead of delivering it:

@@ -9,6 +9,7 @@ const warmMe = () => queryClient.ensureQueryData(meQueryOptions());
 const router = createBrowserRouter([
   { path: '/sign-in', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }) },
   { path: '/sign-up', lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }) },
+  { path: '/invite/:token', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/invite')).InviteRoute }) },
   {
     loader: warmMe,
     lazy: async () => ({ Component: (await import('@/components/layouts/require-auth')).RequireAuth }),
@@ -45,6 +46,7 @@ const router = createBrowserRouter([
           { path: 'restock', lazy: async () => ({ Component: (await import('./routes/restock')).RestockRoute }) },
           { path: 'todo', lazy: async () => ({ Component: (await import('./routes/todo')).TodoRoute }) },
           { path: 'household', lazy: async () => ({ Component: (await import('./routes/household')).HouseholdRoute }) },
+          { path: 'household/mail', lazy: async () => ({ Component: (await import('./routes/dev-mail')).DevMailRoute }) },
         ],
       },
     ],

@@ -38,5 +38,5 @@ export const api = {
   post: <T>(url: string, body?: unknown) => request<T>('POST', url, body ?? {}),
   patch: <T>(url: string, body: unknown) => request<T>('PATCH', url, body),
   put: <T>(url: string, body: unknown) => request<T>('PUT', url, body),
-  delete: <T = void>(url: string) => request<T>('DELETE', url),
+  delete: <T = void>(url: string, body?: unknown) => request<T>('DELETE', url, body),
 };

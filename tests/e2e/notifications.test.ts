@@ -98,7 +98,6 @@ describe('notifications on this device', () => {
     const subscription = await page.evaluate(() => (window as unknown as { __testPush: TestSubscription }).__testPush);
     const { publicKey } = await (await fetch(`${baseURL}/api/push/public-key`)).json();
     expect(subscription.applicationServerKey).toBe(publicKey);
-    await page.getByRole('heading', { name: 'Notifications' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'notifications-phone');
 
     await page.getByRole('button', { name: 'Send a test notification' }).click();

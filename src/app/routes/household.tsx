@@ -3,6 +3,8 @@ import { Card, PageHeader } from '@/components/ui/page';
 import { useHousehold, useMembers } from '@/features/households/api/get-household';
 import { HouseholdSettingsForm } from '@/features/households/components/household-settings-form';
 import { MemberList } from '@/features/households/components/member-list';
+import { InvitationPanel } from '@/features/invitations/components/invitation-panel';
+import { NotificationSettingsPanel } from '@/features/notifications/components/notification-settings';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 
 const ROLE_NOTES = {
@@ -29,6 +31,17 @@ export function HouseholdRoute() {
           <h2 className="mb-2 text-xl">Members</h2>
           {members.data && me ? <MemberList hid={hid} members={members.data} canManage={canManage} myId={me.user.id} /> : <p className="text-ink-muted">Loading…</p>}
         </Card>
+        <Card>
+          <h2 className="mb-1 text-xl">Notifications</h2>
+          <p className="mb-4 text-ink-muted">Yours alone: a reminder before an opened jar reaches its use-by, by push on this device or by e-mail.</p>
+          <NotificationSettingsPanel />
+        </Card>
+        {canManage && (
+          <Card>
+            <h2 className="mb-4 text-xl">Invitations</h2>
+            <InvitationPanel hid={hid} />
+          </Card>
+        )}
       </div>
     </>
   );

@@ -10,16 +10,14 @@ import { JarLevel } from './jar-level';
 const TONE_BADGE = { info: 'bg-info-soft text-info', soon: 'bg-soon-soft text-soon', past: 'bg-past-soft text-past' } as const;
 
 function estimateWords(jar: FridgeJar) {
-  const tbsp = Math.round(jar.estimateTbsp * 10) / 10;
-  if (jar.estimateFrom === 'plan') {
-    return tbsp > 0
-      ? `About ${tbsp} tbsp will be left on its use-by after this week's planned meals (${Math.round(jar.plannedTbsp * 10) / 10} tbsp planned).`
-      : 'The planned meals finish it before its use-by.';
-  }
-  return `About ${tbsp} tbsp left of ${jar.capacityTbsp} tbsp. No meal in the plan uses it yet.`;
+  const round = (tbsp: number) => Math.round(tbsp * 10) / 10;
+  if (jar.estimateFrom === 'jar') return `About ${round(jar.remainingTbsp)} of ${round(jar.capacityTbsp)} tbsp left. No meal in the plan uses it yet.`;
+  if (jar.estimateTbsp <= 0) return 'The planned meals finish it before its use-by.';
+  if (jar.plannedTbsp === 0) return `No planned meal draws from this jar before its use-by; about ${round(jar.estimateTbsp)} tbsp left.`;
+  return `The plan uses about ${round(jar.plannedTbsp)} tbsp; about ${round(jar.estimateTbsp)} tbsp will be left on its use-by.`;
 }
 
-export function FridgeJarCard({ jar, onClose, busy }: { jar: FridgeJar; onClose: (action: ClosingAction) => void; busy: boolean }) {
+export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
   const [confirmDiscard, setConfirmDiscard] = useState(false);
   const { text, tone } = countdown(jar.daysLeft);
   return (
@@ -42,7 +40,7 @@ export function FridgeJarCard({ jar, onClose, busy }: { jar: FridgeJar; onClose:
       </p>
       {jar.unsealed && (
         <p className="rounded-lg border border-soon-fill bg-soon-soft px-3 py-2 text-sm">
-          <span className="font-bold">Unsealed jar.</span> It never sealed, so it keeps only days in the fridge; when in doubt, throw it out.
+          <span className="font-bold">Unsealed jar.</span> {unsealedAdvice} Follow your tested recipe and your local extension service; when in doubt, throw it out.
         </p>
       )}
       {confirmDiscard ? (

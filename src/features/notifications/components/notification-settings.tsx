@@ -15,7 +15,7 @@ function hourLabel(hour: number) {
 function Toggle({ label, hint, checked, onChange }: { label: string; hint: string; checked: boolean; onChange: (on: boolean) => void }) {
   return (
     <label className="flex min-h-11 cursor-pointer items-start gap-3">
-      <input type="checkbox" className="mt-1 h-5 w-5 accent-action" checked={checked} onChange={(e) => onChange(e.target.checked)} />
+      <input type="checkbox" className="mt-1 h-5 w-5 shrink-0 accent-action" checked={checked} onChange={(e) => onChange(e.target.checked)} />
       <span>
         <span className="font-bold">{label}</span>
         <span className="block text-sm text-ink-muted">{hint}</span>
