@@ -70,7 +70,7 @@ async function expectPlannedOnThursday(page: Page, title: string, product: strin
   const planned = card(slot(page, 'Thursday', 'Lunch'), title);
   await planned.waitFor();
   expect(await card(day(page, 'Wednesday'), title).count()).toBe(0);
-  const pairing = planned.getByRole('listitem').filter({ hasText: product });
+  const pairing = planned.locator(`li[data-pairing="${product}"]`);
   await pairing.waitFor();
   // The allocation line names the jar the portion comes from (opens or draws from jar <code>).
   await expect(pairing.getByTestId('allocation-line').textContent()).resolves.toMatch(/^(opens|from) jar [A-Z0-9]{4,}/);

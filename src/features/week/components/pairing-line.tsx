@@ -27,7 +27,7 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
   const product = board.week.products.find((p) => p.id === pairing.productId);
   const line = allocationLine(pairing, entry, board);
   return (
-    <li className="rounded-md bg-sunken/70 px-1.5 py-1 text-xs leading-snug">
+    <li data-pairing={name} className="rounded-md bg-sunken/70 px-1.5 py-1 text-xs leading-snug">
       <div className="flex items-start justify-between gap-1">
         <span className="min-w-0 font-bold">
           {name}
