@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Invitation } from '../../server/db/models';
@@ -7,13 +10,16 @@ import { startStandIns, type StandIns } from '../support/stand-ins';
 
 let ctx: ReturnType<typeof bareApp>;
 let standIns: StandIns;
+let catcherDir: string;
 beforeAll(async () => {
-  standIns = await startStandIns();
-  ctx = bareApp({ ...standIns.env, APP_ORIGIN: 'http://larderly.example.test' });
+  catcherDir = mkdtempSync(path.join(os.tmpdir(), 'larderly-invitations-'));
+  standIns = await startStandIns(catcherDir);
+  ctx = bareApp({ ...standIns.env, APP_ORIGIN: 'http://larderly.example.test', MAIL_CATCHER_DIR: path.join(catcherDir, 'mail') });
 });
 afterAll(async () => {
   await ctx.close();
   await standIns.close();
+  rmSync(catcherDir, { recursive: true, force: true });
 });
 
 /** The token from the link in the last invitation e-mail to `email`. */
@@ -126,5 +132,16 @@ describe('invitations', () => {
     const response = await request(ctx.app).post(`/api/invitations/${'x'.repeat(43)}/accept`).send({ name: 'Nobody', password: 'not a real link' });
     expect(response.status).toBe(404);
     expect(response.body.error.message).toMatch(/not valid/);
+  });
+
+  it('lists caught mail to a keeper on the development mailbox page, and refuses a helper', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const helper = await newHousehold(ctx.app, 'UTC');
+    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: helper.email, role: 'helper' });
+    await helper.agent.post(`/api/invitations/${linkTokenFor(helper.email)}/accept`).send({});
+    const mailbox = await keeper.agent.get(`/api/households/${keeper.householdId}/dev/mail`);
+    expect(mailbox.status).toBe(200);
+    expect(mailbox.body.messages.map((m: { to: string[] }) => m.to[0])).toContain(helper.email);
+    expect((await helper.agent.get(`/api/households/${keeper.householdId}/dev/mail`)).status).toBe(403);
   });
 });
