@@ -1,21 +1,17 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays, jarCapacityTbsp, jarSizeAdvice } from '../../shared/domain';
-import { clock } from '../../server/services/clock';
 import { demoApp } from '../support/app';
+import { holdClockAt } from '../support/held-clock';
 import { addJars, addProduct, planPortion } from '../support/restock-fixtures';
 
 // Noon in New York on 2 December 2026: the household's today is 2026-12-02.
 const TODAY = '2026-12-02';
-const realNow = clock.now;
+holdClockAt('2026-12-02T17:00:00Z');
 let ctx: Awaited<ReturnType<typeof demoApp>>;
 beforeAll(async () => {
-  clock.now = () => new Date('2026-12-02T17:00:00Z');
   ctx = await demoApp();
 });
-afterAll(async () => {
-  clock.now = realNow;
-  await ctx.close();
-});
+afterAll(() => ctx.close());
 
 interface Suggestion {
   productId: string;

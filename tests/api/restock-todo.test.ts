@@ -1,19 +1,15 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formatKitchenAmount, processingPlan, scaleRecipe } from '../../shared/domain';
-import { clock } from '../../server/services/clock';
 import { demoApp } from '../support/app';
+import { holdClockAt } from '../support/held-clock';
 import { addAppleButterRecipe, addJars, addProduct, APPLE_BUTTER_INGREDIENTS } from '../support/restock-fixtures';
 
-const realNow = clock.now;
+holdClockAt('2026-12-02T17:00:00Z');
 let ctx: Awaited<ReturnType<typeof demoApp>>;
 beforeAll(async () => {
-  clock.now = () => new Date('2026-12-02T17:00:00Z');
   ctx = await demoApp();
 });
-afterAll(async () => {
-  clock.now = realNow;
-  await ctx.close();
-});
+afterAll(() => ctx.close());
 
 const todoUrl = (productId: string) => `/api/households/${ctx.householdId}/restock/${productId}/todo`;
 

@@ -1,20 +1,16 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
-import { clock } from '../../server/services/clock';
 import { demoApp } from '../support/app';
+import { holdClockAt } from '../support/held-clock';
 import { addJars, addProduct, planPortion } from '../support/restock-fixtures';
 
 const TODAY = '2026-12-02';
-const realNow = clock.now;
+holdClockAt('2026-12-02T17:00:00Z');
 let ctx: Awaited<ReturnType<typeof demoApp>>;
 beforeAll(async () => {
-  clock.now = () => new Date('2026-12-02T17:00:00Z');
   ctx = await demoApp();
 });
-afterAll(async () => {
-  clock.now = realNow;
-  await ctx.close();
-});
+afterAll(() => ctx.close());
 
 const todayUrl = () => `/api/households/${ctx.householdId}/today`;
 

@@ -23,7 +23,7 @@ async function forecastFor(page: Page, hid: string, name: string): Promise<Forec
 }
 
 describe('from a restock suggestion to a recorded batch', () => {
-  it('follows the suggestion from Today, plans the batch, records it, and the suggestion goes away', async () => {
+  it('follows the suggestion from Today, plans the batch, records it, and the suggestion goes away', { timeout: 120_000 }, async () => {
     const page = await browser.newPage({ viewport: DESKTOP });
     await signIn(page, baseURL, 'cook@larderly.test');
     const hid = householdOf(page);
@@ -70,8 +70,8 @@ describe('from a restock suggestion to a recorded batch', () => {
     await page.close();
   });
 
-  it('shows Today, Restock and the to-do list on a phone and on a desktop', async () => {
-    for (const [size, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
+  for (const [size, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
+    it(`shows Today, Restock and the to-do list on a ${size}`, { timeout: 120_000 }, async () => {
       const page = await browser.newPage({ viewport, ...(size === 'phone' ? { isMobile: true, hasTouch: true } : {}) });
       await signIn(page, baseURL, 'cook@larderly.test');
       const hid = householdOf(page);
@@ -94,8 +94,8 @@ describe('from a restock suggestion to a recorded batch', () => {
       await page.getByRole('list', { name: 'To-dos' }).waitFor();
       await screenshot(page, `todo-${size}`);
       await page.close();
-    }
-  });
+    });
+  }
 
   it('reorders the list with the keyboard and keeps the order after a reload', async () => {
     const page = await browser.newPage({ viewport: DESKTOP });
