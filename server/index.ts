@@ -6,6 +6,8 @@ import { startJobs } from './jobs';
 const config = loadConfig();
 const { app, ctx, sequelize, close } = createApp(config);
 await migrate(sequelize);
+// The VAPID key pair is made on the first start (unless the environment gives one) and kept.
+await ctx.push.publicKey();
 const jobs = await startJobs(ctx);
 
 const server = app.listen(config.port, config.host, () => {

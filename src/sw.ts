@@ -43,9 +43,8 @@ worker.addEventListener('notificationclick', (event) => {
     (async () => {
       const pages = await worker.clients.matchAll({ type: 'window', includeUncontrolled: true });
       const same = pages.find((page) => page.url === target);
-      if (same) return void (await same.focus());
-      if (pages[0]) return void (await (await pages[0].navigate(target))?.focus());
-      await worker.clients.openWindow(target);
+      if (same) await same.focus();
+      else await worker.clients.openWindow(target);
     })(),
   );
 });
