@@ -47,8 +47,11 @@ export function EntryCard({ entry }: { entry: PlanEntryView }) {
           ) : (
             <span className="tabular">{entry.servings}</span>
           )}
-          <span className="truncate">served</span>
+          <span>servings</span>
         </div>
+      </header>
+      <div className="mt-0.5 flex items-start gap-1">
+        <h4 className="min-w-0 flex-1 text-sm font-bold leading-snug">{entry.title}</h4>
         {board.canEdit && !isPending(entry.id) && (
           <button
             type="button"
@@ -59,8 +62,7 @@ export function EntryCard({ entry }: { entry: PlanEntryView }) {
             ×
           </button>
         )}
-      </header>
-      <h4 className="mt-0.5 text-sm font-bold leading-snug">{entry.title}</h4>
+      </div>
       {entry.pairings.length > 0 && (
         <ul className="mt-1.5 flex flex-col gap-1" aria-label={`Jars for ${entry.title}`}>
           {entry.pairings.map((pairing) => (

@@ -1,0 +1,113 @@
+// GET /week under load beside a bare Express JSON route, and the queries one request makes.
+// Run: node --import tsx tests/bench/week.bench.ts   (starts or reuses the project's PostgreSQL; ports 3201-3202)
+import { spawn, type ChildProcess } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+// @ts-expect-error autocannon ships no type declarations
+import autocannon from 'autocannon';
+import pg from 'pg';
+import request from 'supertest';
+import { weekStartOf } from '../../shared/schemas/week';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { migrate } from '../../server/db/migrate';
+import { todayIn } from '../../server/services/clock';
+import { startCluster } from '../../scripts/lib/postgres.mjs';
+import { dropDatabase, recreateDatabase } from '../../scripts/lib/database.mjs';
+import { BENCH_EMAIL, BENCH_PASSWORD, generateHousehold } from './week-household';
+
+const CONNECTIONS = 32;
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
+const APP_PORT = 3201;
+const BARE_PORT = 3202;
+
+const cluster = startCluster();
+const database = `larderly_bench_${process.pid}`;
+await recreateDatabase(cluster, database);
+const databaseUrl = cluster.url(database);
+const children: ChildProcess[] = [];
+
+try {
+  const built = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, STATIC_DIR: 'no-static-in-bench', BCRYPT_COST: '4' }));
+  await migrate(built.sequelize);
+  const today = todayIn('America/New_York');
+  const { household, jars, entries } = await generateHousehold(today);
+  const start = weekStartOf(today, household.weekStartsOn);
+  const path = `/api/households/${household.id}/week?start=${start}`;
+  console.log(`generated: 60 products, 400 batches, ${jars} jars, ${entries} plan entries; week of ${start}`);
+
+  // Queries per request, counted at the driver: the session, the guard and the week's own reads.
+  const agent = request.agent(built.app);
+  await agent.post('/api/auth/login').send({ email: BENCH_EMAIL, password: BENCH_PASSWORD }).expect(200);
+  const texts: string[] = [];
+  const query = pg.Client.prototype.query;
+  pg.Client.prototype.query = function counted(this: pg.Client, ...args: unknown[]) {
+    const sql = typeof args[0] === 'string' ? args[0] : (args[0] as { text?: string })?.text ?? '';
+    texts.push(sql.replace(/\s+/g, ' ').slice(0, 90));
+    return (query as (...a: unknown[]) => unknown).apply(this, args);
+  } as typeof query;
+  const rounds = 20;
+  const began = performance.now();
+  for (let i = 0; i < rounds; i += 1) await agent.get(path).expect(200);
+  const sequentialMs = (performance.now() - began) / rounds;
+  pg.Client.prototype.query = query;
+  console.log(`one at a time, in process: ${sequentialMs.toFixed(1)} ms per GET /week`);
+  console.log(`\nqueries per GET /week: ${texts.length / rounds} (${rounds} requests, ${texts.length} queries); one request's:`);
+  for (const sql of texts.slice(0, texts.length / rounds)) console.log(`  ${sql}`);
+  const payload = (await agent.get(path)).body;
+  console.log(`payload: ${payload.days.reduce((n: number, d: { entries: unknown[] }) => n + d.entries.length, 0)} entries, ${payload.allocation.assignments.length} assignments, ${payload.allocation.openings.length} openings, ${payload.allocation.warnings.length} warnings`);
+  const cookie = (await request(built.app).post('/api/auth/login').send({ email: BENCH_EMAIL, password: BENCH_PASSWORD })).headers['set-cookie']![0].split(';')[0];
+  await built.close();
+
+  // The real server and a bare Express route, each in its own process, so the load generator does not share their event loop.
+  const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: databaseUrl, PORT: String(APP_PORT), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: 'no-static-in-bench' },
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
+  const bare = spawn(
+    process.execPath,
+    ['--input-type=module', '-e', `import express from 'express'; const app = express(); app.get('/bare', (_req, res) => res.json({ ok: true, start: '${start}' })); app.listen(${BARE_PORT}, '127.0.0.1');`],
+    { stdio: ['ignore', 'inherit', 'inherit'] },
+  );
+  children.push(server, bare);
+  await waitFor(`http://127.0.0.1:${APP_PORT}/api/health`);
+  await waitFor(`http://127.0.0.1:${BARE_PORT}/bare`);
+
+  // The session cookie was signed with the test secret; sign in again against the real server.
+  const login = await fetch(`http://127.0.0.1:${APP_PORT}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: BENCH_EMAIL, password: BENCH_PASSWORD }) });
+  const serverCookie = login.headers.get('set-cookie')?.split(';')[0] ?? cookie;
+  const probe = await fetch(`http://127.0.0.1:${APP_PORT}${path}`, { headers: { cookie: serverCookie } });
+  if (!probe.ok) throw new Error(`GET /week answered ${probe.status} on the server (sign-in ${login.status} ${await login.clone().text()}): ${(await probe.text()).slice(0, 300)}`);
+
+  const week = await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie });
+  const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {});
+  const os = await import('node:os');
+  console.log(`\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; load average before: ${os.loadavg()[0].toFixed(1)}`);
+  console.table({
+    'GET /week': week,
+    'bare Express JSON': base,
+  });
+  console.log(`throughput ratio (week / bare): ${(week.requestsPerSecond / base.requestsPerSecond).toFixed(3)}; aim: p99 < 25 ms and ratio >= 0.333`);
+} finally {
+  for (const child of children) child.kill('SIGTERM');
+  await new Promise((resolve) => setTimeout(resolve, 500));
+  await dropDatabase(cluster, database).catch(() => {});
+  cluster.stop();
+}
+
+async function load(url: string, headers: Record<string, string>) {
+  const result = await autocannon({ url, connections: CONNECTIONS, duration: SECONDS, headers });
+  if (result.non2xx > 0 || result.errors > 0) console.log(`  ${url}: ${result.non2xx} non-2xx, ${result.errors} errors`);
+  return { medianMs: result.latency.p50, p99Ms: result.latency.p99, requestsPerSecond: result.requests.average, non2xx: result.non2xx };
+}
+
+async function waitFor(url: string) {
+  for (let i = 0; i < 120; i += 1) {
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  throw new Error(`${url} did not answer`);
+}
