@@ -1,13 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { restockProductPatch } from '../../shared/schemas/restock';
 import { restockTodoCreate } from '../../shared/schemas/todos';
 import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
-import { notFound } from '../http/errors';
 import { body, params } from '../http/validate';
 import { addRestockTodo } from '../services/batch-plan';
-import { restockView, updateRestockSettings } from '../services/restock';
+import { restockView } from '../services/restock';
 
 const productParams = z.object({ hid: z.string(), productId: z.uuid({ error: 'That product was not found.' }) });
 
@@ -16,15 +14,6 @@ export function restockRouter({ sequelize }: AppContext) {
 
   router.get('/restock', householdAccess('read'), async (req, res) => {
     res.json(await restockView(currentMembership(req).household));
-  });
-
-  // Favourite and minimum jars only; the product's other fields belong to the shelf.
-  router.patch('/restock/:productId', householdAccess('cook'), async (req, res) => {
-    const { productId } = params(req, productParams);
-    const patch = body(req, restockProductPatch);
-    const product = await updateRestockSettings(currentMembership(req).householdId, productId, patch);
-    if (!product) throw notFound('That product');
-    res.json({ product: { id: product.id, favourite: product.favourite, minJars: product.minJars } });
   });
 
   router.post('/restock/:productId/todo', householdAccess('cook'), async (req, res) => {

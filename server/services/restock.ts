@@ -3,7 +3,7 @@ import { Op } from 'sequelize';
 import { addMonths, jarSizeAdvice, yearOf, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../shared/domain';
 import { count, shortDay, tbspPerDay } from '../../shared/day-words';
 import type { MonthlyUse, RestockForecastView, RestockSuggestionView, RestockView } from '../../shared/schemas/restock';
-import { Household, Product, Recipe, Todo } from '../db/models';
+import { Household, Recipe, Todo, type Product } from '../db/models';
 import { todayIn } from './clock';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
@@ -106,10 +106,4 @@ export async function restockFor(householdId: string, today?: string): Promise<R
   if (!household) return [];
   const snapshot = await stockSnapshot(household.id, today ?? todayIn(household.timeZone));
   return (await restockFromSnapshot(snapshot)).suggestions;
-}
-
-/** Favourite and minimum jars, the two settings the restock list turns on. */
-export async function updateRestockSettings(householdId: string, productId: string, patch: { favourite?: boolean; minJars?: number }) {
-  const product = await Product.findOne({ where: { id: productId, householdId } });
-  return product ? product.update(patch) : null;
 }

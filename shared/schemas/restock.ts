@@ -1,14 +1,4 @@
-import { z } from 'zod';
 import type { JarSize, RestockReason } from '../domain';
-
-export const restockProductPatch = z
-  .object({
-    favourite: z.boolean({ error: 'Favourite is true or false.' }).optional(),
-    minJars: z.number({ error: 'Enter the minimum as a number of jars.' }).int('Use a whole number of jars.').min(0, 'The minimum cannot be below 0.').max(500, 'Use at most 500 jars.').optional(),
-  })
-  .strict()
-  .refine((patch) => Object.keys(patch).length > 0, 'Send favourite or minJars.');
-export type RestockProductPatch = z.infer<typeof restockProductPatch>;
 
 export interface MonthlyUse {
   /** YYYY-MM */

@@ -155,7 +155,6 @@ export const TABLE: Record<string, RouteRule> = {
   [`DELETE ${H}/pairings/:id`]: { access: 'cook' },
 
   [`GET ${H}/restock`]: { access: 'read' },
-  [`PATCH ${H}/restock/:productId`]: { access: 'cook', body: () => ({ minJars: 4 }) },
   [`POST ${H}/restock/:productId/todo`]: { access: 'cook', body: () => ({}) },
   [`GET ${H}/todos`]: { access: 'read' },
   [`GET ${H}/todos/:id`]: { access: 'read' },

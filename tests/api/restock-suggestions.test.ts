@@ -86,17 +86,16 @@ describe('restock suggestions over the real shelf', () => {
     ]);
   });
 
-  it('lets a cook change favourite and minimum jars, and refuses a helper', async () => {
+  it('follows a change of favourite and minimum made through the product, as the Restock screen makes it', async () => {
     const product = await addProduct(ctx.householdId, { name: 'Test Fig Butter', favourite: false, minJars: 0 });
+    await addJars(product, { sealed: 1 });
     const cook = await ctx.signedIn('cook@larderly.test');
-    const changed = await cook.patch(`/api/households/${ctx.householdId}/restock/${product.id}`).send({ favourite: true, minJars: 3 });
+    expect((await restock()).body.suggestions.some((s: Suggestion) => s.productId === product.id)).toBe(false);
+    const changed = await cook.patch(`/api/households/${ctx.householdId}/products/${product.id}`).send({ favourite: true, minJars: 3 });
     expect(changed.status).toBe(200);
-    expect(changed.body.product).toEqual({ id: product.id, favourite: true, minJars: 3 });
-    const helper = await ctx.signedIn('helper@larderly.test');
-    expect((await helper.patch(`/api/households/${ctx.householdId}/restock/${product.id}`).send({ minJars: 9 })).status).toBe(403);
-    const invalid = await cook.patch(`/api/households/${ctx.householdId}/restock/${product.id}`).send({ minJars: -1 });
-    expect(invalid.status).toBe(400);
-    expect(invalid.body.error.fields.minJars).toMatch(/below 0/);
+    const after = await restock();
+    expect(after.body.suggestions.find((s: Suggestion) => s.productId === product.id)).toMatchObject({ reason: 'below-minimum' });
+    expect(after.body.forecasts.find((f: { productId: string }) => f.productId === product.id)).toMatchObject({ favourite: true, minJars: 3 });
   });
 
   it("shows the neighbour nothing of this household's restock list", async () => {
@@ -105,10 +104,9 @@ describe('restock suggestions over the real shelf', () => {
     const response = await neighbour.get(`/api/households/${ctx.householdId}/restock`);
     expect(response.status).toBe(404);
     expect(JSON.stringify(response.body)).not.toMatch(/Secret Butter/);
-    expect((await neighbour.patch(`/api/households/${ctx.householdId}/restock/${product.id}`).send({ minJars: 0 })).status).toBe(404);
     const own = await neighbour.get(`/api/households/${ctx.neighbourHouseholdId}/restock`);
     expect(own.status).toBe(200);
     expect(JSON.stringify(own.body)).not.toMatch(/Test /);
-    expect((await neighbour.patch(`/api/households/${ctx.neighbourHouseholdId}/restock/${product.id}`).send({ minJars: 0 })).status).toBe(404);
+    expect((await neighbour.post(`/api/households/${ctx.neighbourHouseholdId}/restock/${product.id}/todo`).send({})).status).toBe(404);
   });
 });

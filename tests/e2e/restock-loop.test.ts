@@ -29,7 +29,7 @@ describe('from a restock suggestion to a recorded batch', () => {
     const hid = householdOf(page);
     // Pickled Beets has a tested recipe; making it a favourite with a minimum above its count makes it due.
     const before = await forecastFor(page, hid, 'Pickled Beets');
-    const changed = await page.request.patch(`${baseURL}/api/households/${hid}/restock/${before.productId}`, {
+    const changed = await page.request.patch(`${baseURL}/api/households/${hid}/products/${before.productId}`, {
       data: { favourite: true, minJars: before.sealedJars + 2 },
       headers: { Origin: baseURL },
     });

@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import type { RestockForecastView } from '@shared/schemas/restock';
-import { useUpdateRestockProduct } from '../api/update-restock-product';
+import { useUpdateRestockSettings } from '../api/update-restock-settings';
 
 /** Favourite and minimum jars, edited in place; a helper sees them read-only. */
 export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forecast: RestockForecastView; canEdit: boolean }) {
-  const update = useUpdateRestockProduct(hid);
+  const update = useUpdateRestockSettings(hid);
   const [minJars, setMinJars] = useState(String(forecast.minJars));
   const save = (patch: { favourite?: boolean; minJars?: number }) => update.mutate({ productId: forecast.productId, patch });
   const saveMinimum = () => {
