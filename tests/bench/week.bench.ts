@@ -78,10 +78,11 @@ try {
   const probe = await fetch(`http://127.0.0.1:${APP_PORT}${path}`, { headers: { cookie: serverCookie } });
   if (!probe.ok) throw new Error(`GET /week answered ${probe.status} on the server (sign-in ${login.status} ${await login.clone().text()}): ${(await probe.text()).slice(0, 300)}`);
 
+  const os = await import('node:os');
+  const loadBefore = os.loadavg()[0];
   const week = await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie });
   const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {});
-  const os = await import('node:os');
-  console.log(`\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; load average before: ${os.loadavg()[0].toFixed(1)}`);
+  console.log(`\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; machine load average before the run: ${loadBefore.toFixed(1)}`);
   console.table({
     'GET /week': week,
     'bare Express JSON': base,
