@@ -3,7 +3,8 @@ import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoApp, type DemoEmail } from '../support/app';
 import { listRoutes, type RouteInfo } from '../support/routes';
-import { EXPECTED, PARAMS, PEOPLE, TABLE, type Ids, type Outcome, type Person, type RouteRule } from './authorization-matrix.table';
+import { lookUpIds, resolvePath } from '../support/route-params';
+import { EXPECTED, PEOPLE, TABLE, type Ids, type Outcome, type Person, type RouteRule } from './authorization-matrix.table';
 
 let ctx: Awaited<ReturnType<typeof demoApp>>;
 type Agent = ReturnType<typeof request.agent>;
@@ -18,40 +19,8 @@ const EMAILS: Record<Exclude<Person, 'signed out'>, DemoEmail> = {
   "neighbour's keeper": 'neighbor@larderly.test',
 };
 
-async function rows<T>(sql: string, replacements: Record<string, unknown> = {}) {
+async function rows<T extends object>(sql: string, replacements: Record<string, unknown> = {}) {
   return ctx.sequelize.query<T>(sql, { type: QueryTypes.SELECT, replacements });
-}
-
-/** Real ids of the first demo household: a route answering them is exercised for real. */
-async function lookUpIds(): Promise<Ids> {
-  const hid = ctx.householdId;
-  const one = async (sql: string) => {
-    const [row] = await rows<{ v: string }>(sql, { hid });
-    if (!row) throw new Error(`The demo data has nothing for: ${sql}`);
-    return String(row.v);
-  };
-  // A pending invitation written directly: sending one needs a mail server this file does not run.
-  const [invited] = await rows<{ id: string }>(
-    `INSERT INTO invitations (id, household_id, email, role, token_hash, expires_at, created_at, updated_at)
-     VALUES (gen_random_uuid(), :hid, 'matrix-invitee@larderly.test', 'helper', md5(random()::text), now() + interval '7 days', now(), now()) RETURNING id`,
-    { hid },
-  );
-  return {
-    hid,
-    productId: await one(`SELECT id AS v FROM products WHERE household_id = :hid AND name = 'Pickled Beets'`),
-    recipeId: await one(`SELECT id AS v FROM recipes WHERE household_id = :hid ORDER BY name LIMIT 1`),
-    batchId: await one(`SELECT id AS v FROM batches WHERE household_id = :hid ORDER BY canned_on LIMIT 1`),
-    jarId: await one(`SELECT id AS v FROM jars WHERE household_id = :hid AND state = 'sealed' ORDER BY code LIMIT 1`),
-    jarCode: await one(`SELECT code AS v FROM jars WHERE household_id = :hid ORDER BY code LIMIT 1`),
-    mealId: await one(`SELECT id AS v FROM meals WHERE household_id = :hid ORDER BY name LIMIT 1`),
-    planEntryId: await one(`SELECT id AS v FROM plan_entries WHERE household_id = :hid ORDER BY date, slot, position LIMIT 1`),
-    pairingId: await one(`SELECT p.id AS v FROM pairings p JOIN plan_entries e ON e.id = p.plan_entry_id WHERE p.household_id = :hid ORDER BY e.date DESC LIMIT 1`),
-    todoId: await one(`SELECT id AS v FROM todos WHERE household_id = :hid ORDER BY position LIMIT 1`),
-    invitationId: invited.id,
-    helperId: await one(`SELECT id AS v FROM users WHERE email = 'helper@larderly.test'`),
-    planDate: await one(`SELECT to_char(date, 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid ORDER BY date DESC LIMIT 1`),
-    weekStart: await one(`SELECT to_char(date_trunc('week', min(date)), 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid`),
-  };
 }
 
 /** Every id, name and text of the first household that the neighbour must never see. */
@@ -80,17 +49,6 @@ async function firstHouseholdSecrets(): Promise<string[]> {
   return [...found];
 }
 
-function resolvePath(route: RouteInfo): string {
-  return route.path.replace(/:(\w+)/g, (_match, name: string, offset: number) => {
-    const segment = route.path.slice(0, offset).split('/').filter(Boolean).at(-1);
-    const source = PARAMS[`${segment}/:${name}`] ?? PARAMS[name];
-    if (source === undefined) {
-      throw new Error(`${route.method} ${route.path}: no real value for the path parameter :${name}. Add it to PARAMS in authorization-matrix.table.ts.`);
-    }
-    return encodeURIComponent(typeof source === 'string' ? ids[source] : source.literal);
-  });
-}
-
 function phase(route: RouteInfo, rule: RouteRule) {
   if (rule.signsOut) return 3;
   if (rule.destructive || route.method === 'DELETE') return 2;
@@ -105,7 +63,7 @@ function verdict(status: number, body: { error?: { message?: string } }): Outcom
 
 beforeAll(async () => {
   ctx = await demoApp();
-  ids = await lookUpIds();
+  ids = await lookUpIds(ctx);
   secrets = await firstHouseholdSecrets();
   agents = { 'signed out': request.agent(ctx.app) } as Record<Person, Agent>;
   for (const [person, email] of Object.entries(EMAILS)) agents[person as Person] = await ctx.signedIn(email);
@@ -128,7 +86,7 @@ describe('authorization matrix over every route of the Express router', () => {
     const tally: Record<string, number> = {};
     for (const route of routes) {
       const rule = TABLE[`${route.method} ${route.path}`];
-      const url = resolvePath(route) + (rule.query ? `?${rule.query(ids)}` : '');
+      const url = resolvePath(route, ids) + (rule.query ? `?${rule.query(ids)}` : '');
       for (const person of PEOPLE) {
         const agent = agents[person];
         let pending = agent[route.method.toLowerCase() as 'get'](url);
@@ -152,6 +110,6 @@ describe('authorization matrix over every route of the Express router', () => {
   });
 
   it('fails loudly on a path parameter it has no real value for', () => {
-    expect(() => resolvePath({ method: 'GET', path: '/api/households/:hid/shelves/:shelfId' })).toThrow(/:shelfId/);
+    expect(() => resolvePath({ method: 'GET', path: '/api/households/:hid/shelves/:shelfId' }, ids)).toThrow(/:shelfId/);
   });
 });
