@@ -15,7 +15,13 @@ const withId = (what: string) => z.object({ hid: z.string(), id: z.uuid({ error:
 const dayParams = z.object({ hid: z.string(), date: z.iso.date({ error: 'Use a date written YYYY-MM-DD.' }) });
 const memberParams = z.object({ hid: z.string(), userId: z.uuid({ error: 'That member was not found.' }) });
 
-/** The week board: /api/households/:hid/week, /plan-entries, /pairings, and members' preferences. */
+/**
+ * The week board, under /api/households/:hid (cooks and keepers write, helpers read):
+ * GET /week?start=YYYY-MM-DD (snapped to the household's week start; this week when left out),
+ * POST /week/copy { from, to }, DELETE /week/days/:date,
+ * POST /plan-entries, PATCH|DELETE /plan-entries/:id, POST /plan-entries/:id/pairings, PATCH|DELETE /pairings/:id,
+ * PATCH /members/:userId/preferences { heatTolerance?, dietTags? }: the member themselves, or a keeper.
+ */
 export function weekRouter({ sequelize }: AppContext) {
   const router = Router({ mergeParams: true });
   const householdOf = (req: Request) => currentMembership(req).household;
