@@ -28,7 +28,7 @@ function JarLabel({ jar }: { jar: JarView }) {
     };
   }, [jar.code]);
   return (
-    <li className="jar-label flex items-center gap-2 overflow-hidden rounded-md border border-line bg-surface px-2 print:rounded-none print:border-dashed" data-code={jar.code}>
+    <li className="jar-label flex items-center gap-2 overflow-hidden rounded-md border border-line bg-surface px-2 print:rounded-none print:bg-white print:border-dashed" data-code={jar.code}>
       {qr ? <img src={qr} alt={`QR code for jar ${jar.code}`} className="aspect-square h-[calc(var(--label-h)*0.8)] shrink-0" /> : <span className="aspect-square h-[calc(var(--label-h)*0.8)]" />}
       <span className="flex min-w-0 flex-col gap-0.5 leading-tight">
         <span className="line-clamp-2 font-bold">{jar.productName}</span>
@@ -46,7 +46,7 @@ export function LabelSheet({ batch, paper }: { batch: BatchDetail; paper: Paper 
     <>
       <style>{`${PAPER_CSS[paper]}
         .label-sheet ul { display: grid; grid-template-columns: repeat(3, var(--label-w)); grid-auto-rows: var(--label-h); column-gap: var(--gap); row-gap: 0; }
-        @media print { .label-sheet li { break-inside: avoid; } }
+        @media print { html, body { background: white; } .label-sheet li { break-inside: avoid; } }
         .label-sheet li { font-size: ${paper === 'letter' ? '7.5pt' : '10pt'}; }`}</style>
       <div className="label-sheet">
         <ul aria-label={`Labels for ${jars.length} jars`}>

@@ -1,5 +1,5 @@
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
-import { useState } from 'react';
+import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { PRODUCT_KIND_NAMES } from '@shared/shelf-words';
 import type { ProductKind } from '@shared/domain';
@@ -11,12 +11,14 @@ import { PastBestBadge } from './jar-badges';
 import { ProductChip } from './product-chip';
 
 const column = createColumnHelper<ShelfBatchRow>();
+const HIDDEN_COLUMNS = { pastBestQuality: false };
 
 export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'bestBy', desc: false }]);
   const [kind, setKind] = useState('');
   const [pastOnly, setPastOnly] = useState(false);
-  const columns = [
+  // Stable references: the table re-renders forever when its columns or state are new on every render.
+  const columns = useMemo(() => [
     column.accessor('productName', {
       header: 'Product',
       cell: (info) => (
@@ -41,14 +43,15 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
     }),
     column.accessor('pastBestQuality', { header: 'Past best', enableSorting: false, filterFn: 'equals' }),
     column.accessor('notes', { header: 'Notes', enableSorting: false, cell: (info) => <span className="text-ink-muted">{info.getValue()}</span> }),
-  ];
+  ], [hid]);
+  const columnFilters = useMemo(() => [...(kind ? [{ id: 'productKind', value: kind }] : []), ...(pastOnly ? [{ id: 'pastBestQuality', value: true }] : [])], [kind, pastOnly]);
   const table = useReactTable({
     data: rows,
     columns,
     state: {
       sorting,
-      columnFilters: [...(kind ? [{ id: 'productKind', value: kind }] : []), ...(pastOnly ? [{ id: 'pastBestQuality', value: true }] : [])],
-      columnVisibility: { pastBestQuality: false },
+      columnFilters,
+      columnVisibility: HIDDEN_COLUMNS,
     },
     onSortingChange: setSorting,
     getCoreRowModel: getCoreRowModel(),

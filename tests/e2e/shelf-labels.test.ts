@@ -1,0 +1,114 @@
+import jsQR from 'jsqr';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { DESKTOP, launchChromium, PHONE, screenshot, signIn } from '../support/browser';
+
+const baseURL = inject('baseURL');
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchChromium();
+});
+afterAll(() => browser?.close());
+
+/** A page with room for a busy shared machine. */
+async function newPage(options: Parameters<Browser['newPage']>[0]) {
+  const page = await browser.newPage(options);
+  page.setDefaultTimeout(60_000);
+  return page;
+}
+
+/** Draws a QR image on a canvas in the page and hands its pixels back for decoding. */
+async function qrPixels(page: Page, index: number) {
+  return page.evaluate(async (n) => {
+    const img = document.querySelectorAll<HTMLImageElement>('img[alt^="QR code for jar"]')[n];
+    await img.decode();
+    const size = 400;
+    const canvas = document.createElement('canvas');
+    canvas.width = size;
+    canvas.height = size;
+    const context = canvas.getContext('2d')!;
+    context.fillStyle = 'white';
+    context.fillRect(0, 0, size, size);
+    context.drawImage(img, 0, 0, size, size);
+    return { data: Array.from(context.getImageData(0, 0, size, size).data), size };
+  }, index);
+}
+
+describe('label sheets', () => {
+  it('prints one label a jar still to eat, each QR code decoding to the jar’s own page', async () => {
+    const page = await newPage({ viewport: DESKTOP });
+    await signIn(page, baseURL, 'cook@larderly.test');
+    const hid = page.url().match(/\/h\/([0-9a-f-]{36})/)![1];
+    const jars = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; batchId: string; productName: string }[];
+    const beets = jars.filter((j) => j.productName === 'Pickled Beets');
+    // The batch with the most jars left, so the sheet shows a full row or two.
+    const batchId = [...new Set(beets.map((j) => j.batchId))].sort((a, b) => beets.filter((j) => j.batchId === b).length - beets.filter((j) => j.batchId === a).length)[0];
+    const batch = (await (await page.request.get(`${baseURL}/api/households/${hid}/batches/${batchId}`)).json()).batch as { jars: { code: string; state: string }[] };
+    const onHand = batch.jars.filter((j) => j.state === 'sealed' || j.state === 'opened').map((j) => j.code);
+
+    await page.goto(`${baseURL}/h/${hid}/batches/${batchId}`);
+    await page.getByRole('link', { name: 'Print labels' }).click();
+    const labels = page.locator('li.jar-label');
+    await page.locator('img[alt^="QR code for jar"]').first().waitFor();
+    await expect(labels.count()).resolves.toBe(onHand.length);
+
+    const decoded: string[] = [];
+    for (let i = 0; i < onHand.length; i += 1) {
+      const { data, size } = await qrPixels(page, i);
+      const code = jsQR(Uint8ClampedArray.from(data), size, size);
+      expect(code, `label ${i + 1} has a readable QR code`).not.toBeNull();
+      decoded.push(code!.data);
+    }
+    expect(decoded.sort()).toEqual(onHand.map((c) => `${baseURL}/j/${c}`).sort());
+    await expect(labels.first().textContent()).resolves.toMatch(/Pickled Beets.*[0-9A-Z]{6}/);
+    await screenshot(page, 'shelf-labels-a4');
+
+    await page.getByRole('button', { name: 'US Letter' }).click();
+    await page.emulateMedia({ media: 'print' });
+    await expect(page.getByRole('button', { name: 'Print' }).isVisible()).resolves.toBe(false);
+    await screenshot(page, 'shelf-labels-letter-print');
+    await page.close();
+  }, 150_000);
+});
+
+describe('a jar’s page', () => {
+  it('lets a helper who scanned a label sign in and mark the jar opened', async () => {
+    const cook = await newPage({ viewport: DESKTOP });
+    await signIn(cook, baseURL, 'cook@larderly.test');
+    const hid = cook.url().match(/\/h\/([0-9a-f-]{36})/)![1];
+    const jar = ((await (await cook.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; productName: string }[]).find(
+      (j) => j.productName === 'Hot Pepper Jelly',
+    )!;
+    await cook.close();
+
+    const page = await newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
+    await page.goto(`${baseURL}/j/${jar.code}`);
+    await page.waitForURL(/\/sign-in\?next=/);
+    await page.getByLabel('E-mail').fill('helper@larderly.test');
+    await page.getByLabel('Password').fill('pantry-demo-2026');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(new RegExp(`/j/${jar.code}$`));
+    await page.getByRole('heading', { name: 'Hot Pepper Jelly' }).waitFor();
+    await page.getByText('sealed', { exact: true }).waitFor();
+    await screenshot(page, 'shelf-jar-phone');
+
+    await page.getByRole('button', { name: `Mark opened: jar ${jar.code}` }).click();
+    await page.getByText('opened, in the fridge').waitFor();
+    await page.getByText(/use by/).waitFor();
+    await page.getByRole('button', { name: `Mark finished: jar ${jar.code}` }).waitFor();
+    await page.close();
+  }, 150_000);
+
+  it('tells a neighbour the jar was not found, never what it is', async () => {
+    const page = await newPage({ viewport: PHONE });
+    await signIn(page, baseURL, 'keeper@larderly.test');
+    const hid = page.url().match(/\/h\/([0-9a-f-]{36})/)![1];
+    const [jar] = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; productName: string }[];
+    await page.context().clearCookies();
+    await signIn(page, baseURL, 'neighbor@larderly.test');
+    await page.goto(`${baseURL}/j/${jar.code}`);
+    await page.getByText(`Jar ${jar.code} was not found`).waitFor();
+    await expect(page.getByText(jar.productName).count()).resolves.toBe(0);
+    await page.close();
+  }, 150_000);
+});
