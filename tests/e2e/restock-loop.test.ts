@@ -90,6 +90,7 @@ describe('from a restock suggestion to a recorded batch', () => {
       });
       await page.getByRole('img', { name: /used per month/ }).first().waitFor();
       await screenshot(page, `restock-${size}`);
+      await page.screenshot({ path: `test-results/screenshots/restock-${size}-first-screen.png` });
       await page.goto(`${baseURL}/h/${hid}/todo`);
       await page.getByRole('list', { name: 'To-dos' }).waitFor();
       await screenshot(page, `todo-${size}`);

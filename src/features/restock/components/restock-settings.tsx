@@ -13,7 +13,7 @@ export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forec
     else setMinJars(String(forecast.minJars));
   };
   return (
-    <div className="flex flex-wrap items-center gap-3">
+    <div className="flex flex-wrap items-center gap-x-2 gap-y-3">
       <button
         type="button"
         aria-pressed={forecast.favourite}
@@ -27,7 +27,7 @@ export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forec
         Favourite
       </button>
       <label className="flex items-center gap-2">
-        <span className="text-sm font-bold">Keep at least</span>
+        <span className="text-sm font-bold">At least</span>
         <input
           type="number"
           inputMode="numeric"
@@ -35,12 +35,13 @@ export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forec
           max={500}
           value={minJars}
           disabled={!canEdit}
+          aria-label={`Keep at least this many sealed jars of ${forecast.productName}`}
           onChange={(event) => setMinJars(event.target.value)}
           onBlur={saveMinimum}
           onKeyDown={(event) => event.key === 'Enter' && saveMinimum()}
-          className="min-h-11 w-20 rounded-lg border border-line bg-surface px-2 text-center tabular disabled:bg-sunken"
+          className="min-h-11 w-16 rounded-lg border border-line bg-surface px-2 text-center tabular disabled:bg-sunken"
         />
-        <span className="text-sm">sealed jars</span>
+        <span className="text-sm">sealed</span>
       </label>
       {update.isError && (
         <p role="alert" className="w-full text-sm font-bold text-past">
