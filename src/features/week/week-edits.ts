@@ -23,7 +23,8 @@ function renumber(list: PlanEntryView[]): PlanEntryView[] {
 
 export function placeEntry(week: WeekView, entry: PlanEntryView, date: string, slot: Slot, position?: number): WeekView {
   const rest = week.days.flatMap((d) => d.entries).filter((e) => e.id !== entry.id);
-  const source = renumber(rest.filter((e) => e.date === entry.date && e.slot === entry.slot).sort((a, b) => a.position - b.position));
+  const sameSlot = entry.date === date && entry.slot === slot;
+  const source = sameSlot ? [] : renumber(rest.filter((e) => e.date === entry.date && e.slot === entry.slot).sort((a, b) => a.position - b.position));
   const target = rest.filter((e) => e.date === date && e.slot === slot).sort((a, b) => a.position - b.position);
   const at = Math.max(0, Math.min(position ?? target.length, target.length));
   target.splice(at, 0, { ...entry, date, slot });

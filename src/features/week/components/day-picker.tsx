@@ -10,14 +10,15 @@ export function DayPicker({ days, selected, today, onSelect }: { days: WeekDay[]
           key={day.date}
           type="button"
           aria-pressed={day.date === selected}
-          aria-label={`${format(parseISO(day.date), 'EEEE d MMMM')}${day.entries.length ? `, ${day.entries.length} planned` : ''}`}
           onClick={() => onSelect(day.date)}
           className={`flex min-h-14 flex-col items-center justify-center rounded-lg border text-sm font-bold ${
             day.date === selected ? 'border-action bg-action text-white' : day.date === today ? 'border-action bg-surface text-action' : 'border-line bg-surface text-ink'
           }`}
         >
-          <span>{format(parseISO(day.date), 'EEEEE')}</span>
+          <span aria-hidden="true">{format(parseISO(day.date), 'EEEEE')}</span>
+          <span className="sr-only">{format(parseISO(day.date), 'EEEE')}</span>
           <span className="tabular text-xs font-normal">{format(parseISO(day.date), 'd')}</span>
+          {day.entries.length > 0 && <span className="sr-only">, {day.entries.length} planned</span>}
         </button>
       ))}
     </nav>

@@ -13,11 +13,10 @@ function MealChip({ meal, canEdit }: { meal: MealView; canEdit: boolean }) {
         ref={setNodeRef}
         {...attributes}
         {...listeners}
-        aria-label={`${meal.name}, serves ${meal.usualServings}${canEdit ? '. Drag onto a slot to plan it.' : ''}`}
         className={`flex h-full min-h-11 w-full touch-manipulation select-none flex-col items-start rounded-lg border border-line bg-surface px-3 py-1 text-left hover:border-action ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
       >
         <span className="font-bold leading-snug">{meal.name}</span>
-        {meal.tags.length > 0 && <span className="text-xs text-ink-muted">{meal.tags.join(' · ')}</span>}
+        <span className="text-xs text-ink-muted">{[...meal.tags, `serves ${meal.usualServings}`].join(' · ')}</span>
       </button>
     </li>
   );

@@ -11,7 +11,6 @@ function ProductChip({ product, canEdit }: { product: WeekProduct; canEdit: bool
         ref={setNodeRef}
         {...attributes}
         {...listeners}
-        aria-label={`${product.name}: ${counts}${canEdit ? '. Drag onto a planned meal to pair it.' : ''}`}
         className={`flex h-full min-h-11 w-full touch-manipulation select-none items-center gap-2 rounded-lg border bg-surface px-3 py-1 text-left hover:border-action ${product.openedJars ? 'border-info/60' : 'border-line'} ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
       >
         <JarGlyph opened={product.openedJars > 0} />
