@@ -118,6 +118,19 @@ describe('the shelf list', () => {
     for (const jar of past) expect(jar.bestBy < today() && jar.state === 'sealed').toBe(true);
   });
 
+  it("moves every badge when the household changes its best-quality months (NCHFP's one year is only the default)", async () => {
+    const keeper = await ctx.signedIn('keeper@larderly.test');
+    const pastBest = async () => ((await keeper.get(`${lookups.base}/jars`)).body.jars as { pastBestQuality: boolean }[]).filter((j) => j.pastBestQuality).length;
+    expect(await pastBest()).toBeGreaterThan(0);
+    await keeper.patch(`/api/households/${ctx.householdId}`).send({ bestQualityMonths: 24 });
+    try {
+      // The oldest demo jars were canned under 500 days ago, well inside 24 months.
+      expect(await pastBest()).toBe(0);
+    } finally {
+      await keeper.patch(`/api/households/${ctx.householdId}`).send({ bestQualityMonths: 12 });
+    }
+  });
+
   it('refuses an unknown state filter with 400', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
     expect((await keeper.get(`${lookups.base}/jars?state=pickled`)).status).toBe(400);

@@ -61,7 +61,7 @@ async function seedBatches(
         minutes: plan?.minutes ?? null,
         pressurePsi: null,
         headspaceInches: recipe?.headspaceInches ?? null,
-        notes: demo.notes ?? (recipe ? '' : 'Made from the tested recipe card in the kitchen binder.'),
+        notes: demo.notes ?? '',
       },
       cook.id,
       transaction,

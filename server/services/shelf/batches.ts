@@ -7,7 +7,7 @@ import { AppError, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 import { findProduct } from './products';
 import { findRecipe } from './recipes';
-import { batchView, jarView } from './views';
+import { batchView, jarView, shelfClock } from './views';
 import { withFreshJarCodes, writeBatch } from './write-batch';
 
 export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError {
@@ -51,8 +51,8 @@ export async function createBatch(sequelize: Sequelize, household: Household, in
       transaction,
     ),
   );
-  const today = todayIn(household.timeZone);
-  return { batch: batchView(batch, product, recipe, jars.map((j) => j.state)), jars: jars.map((jar) => jarView(jar, batch, product, today)), plan };
+  const clock = shelfClock(household);
+  return { batch: batchView(batch, product, recipe, jars.map((j) => j.state)), jars: jars.map((jar) => jarView(jar, batch, product, clock)), plan };
 }
 
 export async function listBatches(householdId: string) {
@@ -83,11 +83,11 @@ export async function batchDetail(household: Household, batchId: string): Promis
     Jar.findAll({ where: { batchId: batch.id }, order: [['code', 'ASC']] }),
     JarEvent.findAll({ where: { batchId: batch.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['happenedOn', 'DESC'], ['createdAt', 'DESC']] }),
   ]);
-  const today = todayIn(household.timeZone);
+  const clock = shelfClock(household);
   const codes = new Map(jars.map((jar) => [jar.id, jar.code]));
   return {
     ...batchView(batch, product, recipe, jars.map((j) => j.state)),
-    jars: jars.map((jar) => jarView(jar, batch, product, today)),
+    jars: jars.map((jar) => jarView(jar, batch, product, clock)),
     history: events.map((event) => ({
       id: event.id,
       kind: event.kind,

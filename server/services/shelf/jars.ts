@@ -6,7 +6,7 @@ import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/m
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 import { normaliseJarCode } from './jar-codes';
-import { jarView } from './views';
+import { jarView, shelfClock } from './views';
 
 type JarWithParts = Jar & { batch: Batch; product: Product };
 const withParts = [
@@ -20,8 +20,8 @@ export async function listJars(household: Household, filter: { state?: JarState 
   if (filter.productId) Object.assign(where, { productId: filter.productId });
   if (filter.batchId) Object.assign(where, { batchId: filter.batchId });
   const jars = (await Jar.findAll({ where, include: withParts, order: [['bestBy', 'ASC'], ['code', 'ASC']] })) as JarWithParts[];
-  const today = todayIn(household.timeZone);
-  return jars.map((jar) => jarView(jar, jar.batch, jar.product, today));
+  const clock = shelfClock(household);
+  return jars.map((jar) => jarView(jar, jar.batch, jar.product, clock));
 }
 
 const FROM: Record<JarAction, JarState[]> = { open: ['sealed'], finish: ['opened'], discard: ['sealed', 'opened'] };
@@ -54,7 +54,7 @@ export async function actOnJar(sequelize: Sequelize, household: Household, jarId
       throw conflict(refusal(action, jar));
     }
     await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: EVENT[action], userId, happenedOn: today }, { transaction });
-    return jarView(rows[0], jar.batch, jar.product, today);
+    return jarView(rows[0], jar.batch, jar.product, shelfClock(household));
   });
 }
 
@@ -62,7 +62,7 @@ export async function jarInHousehold(household: Household, rawCode: string) {
   const code = normaliseJarCode(rawCode);
   const jar = code ? ((await Jar.findOne({ where: { code, householdId: household.id }, include: withParts })) as JarWithParts | null) : null;
   if (!jar) throw notFound('That jar');
-  return jarView(jar, jar.batch, jar.product, todayIn(household.timeZone));
+  return jarView(jar, jar.batch, jar.product, shelfClock(household));
 }
 
 /** A label's code, for someone signed in: the jar and its household when they belong to it, 404 otherwise. */

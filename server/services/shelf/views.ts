@@ -1,10 +1,11 @@
 // How shelf rows look to the client: one place that turns models into the shared view shapes.
-import { defaultUseWithinDays, JAR_STATES, type JarState } from '../../../shared/domain';
+import { bestQualityBy, defaultUseWithinDays, JAR_STATES, type JarState } from '../../../shared/domain';
 import type { BatchView, JarView } from '../../../shared/schemas/batches';
 import type { ProductView } from '../../../shared/schemas/products';
 import type { ProductColour } from '../../../shared/shelf-words';
 import type { RecipeView } from '../../../shared/schemas/recipes';
-import type { Batch, Jar, Product, Recipe } from '../../db/models';
+import type { Batch, Household, Jar, Product, Recipe } from '../../db/models';
+import { todayIn } from '../clock';
 
 export function productView(product: Product): ProductView {
   return {
@@ -44,13 +45,20 @@ export function recipeView(recipe: Recipe, productName: string): RecipeView {
   };
 }
 
-export function jarView(jar: Jar, batch: Batch, product: Product, today: string): JarView {
+/** The household's today and best-quality months, read once per request. */
+export function shelfClock(household: Household) {
+  return { today: todayIn(household.timeZone), bestQualityMonths: household.bestQualityMonths };
+}
+
+/** Best quality follows the household's current setting, so changing it moves every badge at once. */
+export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnType<typeof shelfClock>): JarView {
+  const bestBy = bestQualityBy(batch.cannedOn, clock.bestQualityMonths);
   return {
     id: jar.id,
     code: jar.code,
     state: jar.state,
     unsealed: jar.unsealed,
-    bestBy: jar.bestBy,
+    bestBy,
     openedOn: jar.openedOn,
     useBy: jar.useBy,
     finishedOn: jar.finishedOn,
@@ -65,7 +73,7 @@ export function jarView(jar: Jar, batch: Batch, product: Product, today: string)
     productName: product.name,
     productKind: product.kind,
     productColour: product.colour,
-    pastBestQuality: jar.state === 'sealed' && jar.bestBy < today,
+    pastBestQuality: jar.state === 'sealed' && bestBy < clock.today,
   };
 }
 

@@ -15,13 +15,15 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
     altitudeFt: String(household.altitudeFt),
     unitSystem: household.unitSystem,
     timeZone: household.timeZone,
+    bestQualityMonths: String(household.bestQualityMonths),
   });
   const error = update.error instanceof ApiError ? update.error : null;
 
   function submit(event: FormEvent) {
     event.preventDefault();
     const altitude = form.altitudeFt.trim() === '' ? Number.NaN : Number(form.altitudeFt.replaceAll(',', ''));
-    update.mutate({ name: form.name, altitudeFt: altitude, unitSystem: form.unitSystem, timeZone: form.timeZone });
+    const months = form.bestQualityMonths.trim() === '' ? Number.NaN : Number(form.bestQualityMonths);
+    update.mutate({ name: form.name, altitudeFt: altitude, unitSystem: form.unitSystem, timeZone: form.timeZone, bestQualityMonths: months });
   }
 
   return (
@@ -47,6 +49,14 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
             </option>
           ))}
         </SelectField>
+        <TextField
+          label="Best quality (months after canning)"
+          inputMode="numeric"
+          value={form.bestQualityMonths}
+          onChange={(e) => setForm({ ...form, bestQualityMonths: e.target.value })}
+          error={error?.fields.bestQualityMonths}
+          hint="Sealed jars past it get a badge on the shelf. NCHFP advises one year (12 months)."
+        />
       </fieldset>
       {canEdit && (
         <div className="flex items-center gap-3 sm:col-span-2">

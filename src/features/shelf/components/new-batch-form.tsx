@@ -67,7 +67,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
   }
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+    <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-[3fr_2fr] lg:items-start">
       <div className="flex flex-col gap-4">
         <SelectField label="What did you make?" value={productId} onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null })} error={error?.fields.productId}>
           <option value="">Choose a product</option>
@@ -121,6 +121,18 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
           ))}
         </SelectField>
         <TextAreaField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} placeholder="What was different this time?" />
+      </div>
+      <div className="flex flex-col gap-3 lg:col-start-2 lg:row-span-2 lg:row-start-1">
+        {plan ? (
+          <PlanPanel plan={plan} method={method} altitudeFt={household.altitudeFt} />
+        ) : (
+          <Notice tone="info" title="The processing plan appears here">
+            Choose the product and its tested recipe; the plan is worked out for your altitude, {household.altitudeFt.toLocaleString('en-US')} ft.
+          </Notice>
+        )}
+      </div>
+      {/* After the plan on a phone, so the cook reads it before saving. */}
+      <div className="flex flex-col gap-4">
         {error && !Object.keys(error.fields).length && (
           <Notice tone="past" role="alert">
             {error.message}
@@ -132,15 +144,6 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
           </Button>
           {plan && !plan.allowed && <span className="font-bold text-past">Not allowed: see the plan.</span>}
         </div>
-      </div>
-      <div className="flex flex-col gap-3">
-        {plan ? (
-          <PlanPanel plan={plan} method={method} altitudeFt={household.altitudeFt} />
-        ) : (
-          <Notice tone="info" title="The processing plan appears here">
-            Choose the product and its tested recipe; the plan is worked out for your altitude, {household.altitudeFt.toLocaleString('en-US')} ft.
-          </Notice>
-        )}
       </div>
     </form>
   );

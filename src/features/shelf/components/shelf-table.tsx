@@ -29,8 +29,8 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
       ),
     }),
     column.accessor('productKind', { header: 'Kind', cell: (info) => PRODUCT_KIND_NAMES[info.getValue() as ProductKind], filterFn: 'equals' }),
-    column.accessor('cannedOn', { header: 'Canned', cell: (info) => <span className="tabular">{longDate(info.getValue())}</span> }),
-    column.accessor('jarSize', { header: 'Jar size', cell: (info) => jarSizeName(info.getValue()) }),
+    column.accessor('cannedOn', { header: 'Canned', cell: (info) => <span className="tabular whitespace-nowrap">{longDate(info.getValue())}</span> }),
+    column.accessor('jarSize', { header: 'Jar size', cell: (info) => <span className="whitespace-nowrap">{jarSizeName(info.getValue())}</span> }),
     column.accessor('sealed', { header: 'Sealed', cell: (info) => <span className="tabular font-bold">{info.getValue()}</span> }),
     column.accessor('bestBy', {
       header: 'Best quality until',
@@ -88,7 +88,7 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
                   return (
                     <th key={header.id} scope="col" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined} className="px-3 py-1 font-bold">
                       {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="flex min-h-11 items-center gap-1 font-bold">
+                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="flex min-h-11 items-center gap-1 font-bold whitespace-nowrap">
                           {flexRender(header.column.columnDef.header, header.getContext())}
                           <span aria-hidden="true" className="text-ink-muted">
                             {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
