@@ -85,6 +85,7 @@ function printWelcome(url, production) {
     }
     lines.push('');
   }
+  if (standIns) lines.push('  E-mail and push go to local stand-ins; a keeper reads the caught mail from Household, Invitations.', '');
   lines.push('  Press Ctrl-C to stop the server and the database.', '');
   process.stdout.write(lines.join('\n') + '\n');
 }
