@@ -81,10 +81,13 @@ try {
   const os = await import('node:os');
   const loadBefore = os.loadavg()[0];
   const week = await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie });
+  // The same session and household guard with almost no work behind them: what any household route costs here.
+  const guarded = await load(`http://127.0.0.1:${APP_PORT}/api/households/${household.id}`, { cookie: serverCookie });
   const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {});
   console.log(`\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; machine load average before the run: ${loadBefore.toFixed(1)}`);
   console.table({
     'GET /week': week,
+    'GET /households/:hid (same session and guard)': guarded,
     'bare Express JSON': base,
   });
   console.log(`throughput ratio (week / bare): ${(week.requestsPerSecond / base.requestsPerSecond).toFixed(3)}; aim: p99 < 25 ms and ratio >= 0.333`);

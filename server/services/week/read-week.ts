@@ -1,7 +1,7 @@
 // GET /week: the board's days, the members at the table, the shelf, and which jar serves each portion.
 import type { Sequelize } from 'sequelize';
 import { addDays, allocateWeek, defaultUseWithinDays, type AllocationJar, type Id, type PlannedPortion, type WeekAllocation } from '../../../shared/domain';
-import { SLOTS, weekDates, type PlanEntryView, type WeekJar, type WeekMember, type WeekProduct, type WeekView } from '../../../shared/schemas/week';
+import { SLOTS, weekDates, type PlanEntryView, type WeekJar, type WeekMember, type WeekView } from '../../../shared/schemas/week';
 import type { Household } from '../../db/models';
 import { todayIn } from '../clock';
 import { eaterFlags } from './eater-flags';
@@ -12,9 +12,11 @@ export async function readWeek(sequelize: Sequelize, household: Household, start
   const end = addDays(start, 6);
   // Portions from today on draw from the shelf before this week's do, so they are read too.
   const from = today < start ? today : start;
-  const [rows, jarRows, products, recipes, memberList] = await Promise.all([
-    entryRows(sequelize, household.id, from, end),
-    currentJarRows(sequelize, household.id),
+  const rows = await entryRows(sequelize, household.id, from, end);
+  // Only the products the plan draws on from today need their jars one by one.
+  const drawn = [...new Set(rows.filter((r) => r.product_id && r.date >= today).map((r) => r.product_id!))];
+  const [jarRows, products, recipes, memberList] = await Promise.all([
+    currentJarRows(sequelize, household.id, drawn),
     productRows(sequelize, household.id),
     recipeRows(sequelize, household.id),
     memberRows(sequelize, household.id),
@@ -42,7 +44,7 @@ export async function readWeek(sequelize: Sequelize, household: Household, start
     days: weekDates(start).map((date) => ({ date, entries: weekEntries.filter((e) => e.date === date) })),
     allocation: weekAllocation,
     jars: jarsNamedIn(weekAllocation, jarRows),
-    products: shelfProducts(products, jarRows),
+    products: products.map((p) => ({ id: p.id, name: p.name, kind: p.kind, heat: p.heat, colour: p.colour, openedJars: p.opened_jars, sealedJars: p.sealed_jars })),
     members,
   };
 }
@@ -106,23 +108,4 @@ function jarsNamedIn(allocation: WeekAllocation, jarRows: JarRow[]): Record<stri
     };
   }
   return jars;
-}
-
-function shelfProducts(products: ProductRow[], jarRows: JarRow[]): WeekProduct[] {
-  const counts = new Map<string, { opened: number; sealed: number }>();
-  for (const jar of jarRows) {
-    const count = counts.get(jar.product_id) ?? { opened: 0, sealed: 0 };
-    if (jar.state === 'opened') count.opened += 1;
-    else count.sealed += 1;
-    counts.set(jar.product_id, count);
-  }
-  return products.map((p) => ({
-    id: p.id,
-    name: p.name,
-    kind: p.kind,
-    heat: p.heat,
-    colour: p.colour,
-    openedJars: counts.get(p.id)?.opened ?? 0,
-    sealedJars: counts.get(p.id)?.sealed ?? 0,
-  }));
 }

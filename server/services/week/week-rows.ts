@@ -28,14 +28,6 @@ export interface JarRow {
   opened_on: string | null;
 }
 
-export interface ProductRow {
-  id: string;
-  name: string;
-  kind: ProductKind;
-  heat: number;
-  colour: string;
-  use_within_days: number | null;
-}
 
 export interface RecipeRow {
   product_id: string;
@@ -62,18 +54,36 @@ export function entryRows(sequelize: Sequelize, householdId: string, from: strin
   );
 }
 
-/** The jars still on the shelf or in the fridge. */
-export function currentJarRows(sequelize: Sequelize, householdId: string) {
+/** The jars still on the shelf or in the fridge, of the products the plan draws on. */
+export function currentJarRows(sequelize: Sequelize, householdId: string, productIds: string[]) {
+  if (productIds.length === 0) return Promise.resolve([] as JarRow[]);
   return sequelize.query<JarRow>(
     `SELECT id, code, product_id, state, capacity_tbsp, remaining_tbsp, best_by, opened_on
-       FROM jars WHERE household_id = :householdId AND state IN ('sealed', 'opened')`,
-    { replacements: { householdId }, type: QueryTypes.SELECT },
+       FROM jars WHERE household_id = :householdId AND state IN ('sealed', 'opened') AND product_id IN (:productIds)`,
+    { replacements: { householdId, productIds }, type: QueryTypes.SELECT },
   );
 }
 
+export interface ProductRow {
+  id: string;
+  name: string;
+  kind: ProductKind;
+  heat: number;
+  colour: string;
+  use_within_days: number | null;
+  opened_jars: number;
+  sealed_jars: number;
+}
+
+/** Every product with its count of opened and sealed jars, for the shelf rail. */
 export function productRows(sequelize: Sequelize, householdId: string) {
   return sequelize.query<ProductRow>(
-    'SELECT id, name, kind, heat, colour, use_within_days FROM products WHERE household_id = :householdId ORDER BY lower(name)',
+    `SELECT p.id, p.name, p.kind, p.heat, p.colour, p.use_within_days,
+            count(j.id) FILTER (WHERE j.state = 'opened')::int AS opened_jars,
+            count(j.id) FILTER (WHERE j.state = 'sealed')::int AS sealed_jars
+       FROM products p LEFT JOIN jars j ON j.product_id = p.id AND j.state IN ('sealed', 'opened')
+      WHERE p.household_id = :householdId
+      GROUP BY p.id ORDER BY lower(p.name)`,
     { replacements: { householdId }, type: QueryTypes.SELECT },
   );
 }
