@@ -3,6 +3,7 @@ import { Card, PageHeader } from '@/components/ui/page';
 import { useHousehold, useMembers } from '@/features/households/api/get-household';
 import { HouseholdSettingsForm } from '@/features/households/components/household-settings-form';
 import { MemberList } from '@/features/households/components/member-list';
+import { BackupPanel } from '@/features/backup/components/backup-panel';
 import { InvitationPanel } from '@/features/invitations/components/invitation-panel';
 import { NotificationSettingsPanel } from '@/features/notifications/components/notification-settings';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -40,6 +41,12 @@ export function HouseholdRoute() {
           <Card>
             <h2 className="mb-4 text-xl">Invitations</h2>
             <InvitationPanel hid={hid} />
+          </Card>
+        )}
+        {canManage && (
+          <Card>
+            <h2 className="mb-4 text-xl">Export / Import</h2>
+            <BackupPanel hid={hid} />
           </Card>
         )}
       </div>
