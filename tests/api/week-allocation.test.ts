@@ -58,6 +58,16 @@ describe('the allocation on GET /week', () => {
     expect(week.allocation.warnings).toContainEqual(expect.objectContaining({ kind: 'short', productId: product.id, tbsp: 2, portionId: pairingId }));
   });
 
+  it('warns `will-expire` for an opened jar that turns this week with food left, even when no meal draws on it', async () => {
+    // The jam default of 21 days once opened is from memory (shared/domain/products.ts), not a published figure.
+    const { product, jars } = await productWithJars(ctx.householdId, { name: 'Test Open Damson Jam', kind: 'jam', jars: 1 });
+    const openedOn = addDays(start, -20);
+    await jars[0].update({ state: 'opened', openedOn, useBy: addDays(openedOn, 21), remainingTbsp: 10 });
+    const week = (await cook.get(url(`/week?start=${start}`))).body;
+    expect(week.allocation.warnings).toContainEqual({ kind: 'will-expire', productId: product.id, jarId: jars[0].id, date: addDays(start, 1), tbsp: 10 });
+    expect(week.jars[jars[0].id]).toMatchObject({ code: jars[0].code, state: 'opened' });
+  });
+
   it('leaves a week in the past without allocation', async () => {
     const past = weekStartOf('2020-01-15', 1);
     const week = (await cook.get(url(`/week?start=${past}`))).body;

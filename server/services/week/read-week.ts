@@ -13,7 +13,7 @@ export async function readWeek(sequelize: Sequelize, household: Household, start
   // Portions from today on draw from the shelf before this week's do, so they are read too.
   const from = today < start ? today : start;
   const rows = await entryRows(sequelize, household.id, from, end);
-  // Only the products the plan draws on from today need their jars one by one.
+  // Only the products the plan draws on from today need their sealed jars one by one.
   const drawn = [...new Set(rows.filter((r) => r.product_id && r.date >= today).map((r) => r.product_id!))];
   const [jarRows, products, recipes, memberList] = await Promise.all([
     currentJarRows(sequelize, household.id, drawn),

@@ -54,13 +54,14 @@ export function entryRows(sequelize: Sequelize, householdId: string, from: strin
   );
 }
 
-/** The jars still on the shelf or in the fridge, of the products the plan draws on. */
+/** Every opened jar (each may turn before it is finished), and the sealed jars of the products the plan draws on. */
 export function currentJarRows(sequelize: Sequelize, householdId: string, productIds: string[]) {
-  if (productIds.length === 0) return Promise.resolve([] as JarRow[]);
   return sequelize.query<JarRow>(
     `SELECT id, code, product_id, state, capacity_tbsp, remaining_tbsp, best_by, opened_on
-       FROM jars WHERE household_id = :householdId AND state IN ('sealed', 'opened') AND product_id IN (:productIds)`,
-    { replacements: { householdId, productIds }, type: QueryTypes.SELECT },
+       FROM jars
+      WHERE household_id = :householdId
+        AND (state = 'opened' OR (state = 'sealed' AND product_id = ANY(ARRAY[:productIds]::uuid[])))`,
+    { replacements: { householdId, productIds: productIds.length ? productIds : ['00000000-0000-0000-0000-000000000000'] }, type: QueryTypes.SELECT },
   );
 }
 
