@@ -1,0 +1,59 @@
+// 100 connections for 30 s over a mix of reads and writes against a running server, signed in as the demo cook.
+// Run: BASE_URL=http://127.0.0.1:3000 node --import tsx tests/bench/load.bench.ts   (the server from `npm start`)
+// @ts-expect-error autocannon ships no type declarations
+import autocannon from 'autocannon';
+
+const BASE_URL = (process.env.BASE_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '');
+const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 100);
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 30);
+
+async function call(path: string, init: RequestInit & { cookie?: string } = {}) {
+  const response = await fetch(`${BASE_URL}${path}`, {
+    ...init,
+    headers: { 'Content-Type': 'application/json', Origin: BASE_URL, ...(init.cookie ? { Cookie: init.cookie } : {}) },
+  });
+  if (!response.ok) throw new Error(`${init.method ?? 'GET'} ${path} answered ${response.status}: ${await response.text()}`);
+  return response;
+}
+
+const login = await call('/api/auth/login', { method: 'POST', body: JSON.stringify({ email: 'cook@larderly.test', password: 'pantry-demo-2026' }) });
+const cookie = login.headers.get('set-cookie')!.split(';')[0]!;
+const me = await (await call('/api/auth/me', { cookie })).json();
+const hid: string = me.memberships[0].householdId;
+const base = `/api/households/${hid}`;
+const todos: { id: string }[] = (await (await call(`${base}/todos`, { cookie })).json()).todos;
+const products: { id: string }[] = (await (await call(`${base}/products`, { cookie })).json()).products;
+const week = await (await call(`${base}/week`, { cookie })).json();
+const entries: { id: string; servings: number }[] = week.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries);
+if (todos.length === 0 || entries.length === 0) throw new Error('The demo household needs to-dos and planned meals: seed it with `server/db/cli.ts setup --seed-demo`.');
+
+// Seven reads to three writes; every write is one a cook may repeat without running out of anything.
+const json = (body: unknown) => JSON.stringify(body);
+const requests = [
+  { method: 'GET', path: `${base}/today` },
+  { method: 'GET', path: `${base}/week` },
+  { method: 'PATCH', path: `${base}/todos/${todos[0]!.id}`, body: json({ position: todos.length - 1 }) },
+  { method: 'GET', path: `${base}/jars?state=sealed` },
+  { method: 'GET', path: `${base}/products` },
+  { method: 'PATCH', path: `${base}/plan-entries/${entries[0]!.id}`, body: json({ servings: 3 }) },
+  { method: 'GET', path: `${base}/todos` },
+  { method: 'GET', path: `${base}/restock` },
+  { method: 'PATCH', path: `${base}/products/${products[0]!.id}`, body: json({ minJars: 2 }) },
+  { method: 'GET', path: `${base}/fridge` },
+];
+
+console.log(`load: ${CONNECTIONS} connections for ${SECONDS} s against ${BASE_URL}, ${requests.length} requests in turn (7 reads, 3 writes), as cook@larderly.test`);
+const result = await autocannon({
+  url: BASE_URL,
+  connections: CONNECTIONS,
+  duration: SECONDS,
+  headers: { cookie, 'content-type': 'application/json', origin: BASE_URL },
+  requests,
+});
+
+const failures = result.errors + result.timeouts + result.non2xx;
+console.log(`requests: ${result.requests.total} (${Math.round(result.requests.average)}/s), 2xx ${result['2xx']}, non-2xx ${result.non2xx}, errors ${result.errors}, timeouts ${result.timeouts}`);
+console.log(`answers by status: ${JSON.stringify(Object.fromEntries(Object.entries(result.statusCodeStats ?? {}).map(([code, s]) => [code, (s as { count: number }).count])))}`);
+console.log(`latency: median ${result.latency.p50} ms, p99 ${result.latency.p99} ms, max ${result.latency.max} ms`);
+console.log(failures === 0 ? 'zero errors: yes' : `zero errors: NO (${failures} failed requests)`);
+process.exit(failures === 0 ? 0 : 1);
