@@ -39,6 +39,15 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   const selectedDay = week.days.find((d) => d.date === picked)?.date ?? (week.days.some((d) => d.date === week.today) ? week.today : week.days[0].date);
   const visibleDays = wide ? week.days : week.days.filter((d) => d.date === selectedDay);
   const [dragging, setDragging] = useState<DragSource | null>(null);
+  // On a phone a quick sideways swipe over the day turns to the next or previous day.
+  const swipeFrom = useRef<{ x: number; y: number } | null>(null);
+  const onSwipeEnd = (x: number, y: number) => {
+    const from = swipeFrom.current;
+    swipeFrom.current = null;
+    if (!from || dragging || Math.abs(x - from.x) < 60 || Math.abs(x - from.x) < 2 * Math.abs(y - from.y)) return;
+    const index = week.days.findIndex((d) => d.date === selectedDay) + (x < from.x ? 1 : -1);
+    if (index >= 0 && index < week.days.length) setPicked(week.days[index].date);
+  };
 
   // Keyboard drags go place to place; the collision check then reports that place as the one under the item.
   const keyboardPlace = useRef<string | null>(null);
@@ -173,7 +182,11 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
             <ShelfRail products={week.products} canEdit={canEdit} />
           </div>
           {!wide && <DayPicker days={week.days} selected={selectedDay} today={week.today} onSelect={setPicked} />}
-          <div className={wide ? 'grid grid-cols-7 gap-1.5' : 'flex flex-col'}>
+          <div
+            className={wide ? 'grid grid-cols-7 gap-1.5' : 'flex flex-col'}
+            onTouchStart={wide ? undefined : (e) => (swipeFrom.current = { x: e.touches[0].clientX, y: e.touches[0].clientY })}
+            onTouchEnd={wide ? undefined : (e) => onSwipeEnd(e.changedTouches[0].clientX, e.changedTouches[0].clientY)}
+          >
             {visibleDays.map((day) => (
               <DayColumn key={day.date} day={day} />
             ))}
