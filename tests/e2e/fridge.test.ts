@@ -37,15 +37,14 @@ describe('the fridge', () => {
     const first = (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars[0];
     await page.getByRole('button', { name: `Finished jar ${first.code} of ${first.productName}` }).click();
     await page.getByRole('button', { name: `Finished jar ${first.code} of ${first.productName}` }).waitFor({ state: 'detached' });
+    const openJarIds = async () => (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars.map((j: { jarId: string }) => j.jarId);
+    await expect.poll(openJarIds).not.toContain(first.jarId);
     const after = (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars;
-    expect(after.map((j: { jarId: string }) => j.jarId)).not.toContain(first.jarId);
 
     const second = after[0];
     await page.getByRole('button', { name: `Discard jar ${second.code} of ${second.productName}` }).click();
     await page.getByRole('button', { name: 'Yes, discard' }).click();
-    await expect
-      .poll(async () => (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars.map((j: { jarId: string }) => j.jarId))
-      .not.toContain(second.jarId);
+    await expect.poll(openJarIds).not.toContain(second.jarId);
     await page.close();
   });
 });
