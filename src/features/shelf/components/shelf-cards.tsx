@@ -65,7 +65,8 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
                 variant="secondary"
                 disabled={act.isPending}
                 onClick={() => act.mutate({ jarId: group.nextJar!.id, action: 'open' })}
-                aria-label={`Open the oldest jar of ${group.product.name} (${group.nextJar.code})`}
+                aria-label={`Open oldest jar of ${group.product.name}`}
+                title={`Jar ${group.nextJar.code}, the one to eat first`}
               >
                 Open oldest jar
               </Button>
