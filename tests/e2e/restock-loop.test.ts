@@ -108,14 +108,20 @@ describe('from a restock suggestion to a recorded batch', () => {
     const titles = () => list.getByRole('listitem').evaluateAll((items) => items.map((item) => item.querySelector('input[type=checkbox]')?.getAttribute('aria-label')?.replace(/^Done: /, '') ?? ''));
     const first = (await titles())[0];
     const handle = page.getByRole('button', { name: `Move: ${first}` });
+    // dnd-kit measures the list after a pick-up; a key pressed before that is lost on a busy machine.
     await handle.focus();
     await page.keyboard.press('Space');
+    await page.waitForTimeout(400);
     await page.keyboard.press('ArrowDown');
+    await page.waitForTimeout(400);
+    // The list shows the move at once; the reload must wait for the server to have it.
+    const saved = page.waitForResponse((response) => response.request().method() === 'PATCH' && /\/todos\//.test(response.url()));
     await page.keyboard.press('Space');
-    await expect.poll(async () => (await titles())[1]).toBe(first);
+    await expect.poll(async () => (await titles())[1], { timeout: 10_000 }).toBe(first);
+    expect((await saved).status()).toBe(200);
     await page.reload();
     await list.waitFor();
-    await expect.poll(async () => (await titles())[1]).toBe(first);
+    await expect.poll(async () => (await titles())[1], { timeout: 10_000 }).toBe(first);
     await page.close();
   });
 
@@ -126,7 +132,7 @@ describe('from a restock suggestion to a recorded batch', () => {
     const mine = page.getByRole('region', { name: 'My to-dos' });
     const box = mine.getByRole('checkbox', { name: 'Done: Wash the empty jars from the cellar' });
     await box.check();
-    await expect.poll(() => box.count()).toBe(0);
+    await expect.poll(() => box.count(), { timeout: 10_000 }).toBe(0);
     await page.goto(`${baseURL}/h/${hid}/todo?show=done`);
     await page.getByRole('checkbox', { name: 'Done: Wash the empty jars from the cellar' }).waitFor();
     await expect(page.getByRole('button', { name: /^Move: / }).count()).resolves.toBe(0);
