@@ -50,8 +50,9 @@ describe('Export / Import on the Household screen', () => {
     await signIn(page, baseURL, 'cook@larderly.test');
     const home = new URL(page.url()).pathname.replace(/\/$/, '');
     await page.goto(`${baseURL}${home}/household`);
-    await page.getByRole('heading', { name: 'Members' }).waitFor();
+    // The members list loads with the page: once it shows, every section a cook may see is there.
+    await page.getByText('Tobias Calloway').first().waitFor({ timeout: 60_000 });
     expect(await page.getByRole('heading', { name: 'Export / Import' }).count()).toBe(0);
     await page.close();
-  });
+  }, 120_000);
 });
