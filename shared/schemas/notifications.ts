@@ -30,7 +30,11 @@ const base64url = (what: string) => z.string({ error: `The subscription has no $
 export const pushSubscriptionBody = z.object({
   endpoint: z.url({ protocol: /^https$/, error: 'A push endpoint must be an https:// address.' }).max(2000),
   expirationTime: z.number().nullable().optional(),
-  keys: z.object({ p256dh: base64url('p256dh').max(200), auth: base64url('auth').max(100) }),
+  // A P-256 public key is 65 bytes starting 0x04 (87 base64url characters from 'B'); the auth secret is 16 bytes.
+  keys: z.object({
+    p256dh: base64url('p256dh').regex(/^B[A-Za-z0-9_-]{86}=?$/, 'The p256dh key must be a 65-byte P-256 public key.'),
+    auth: base64url('auth').regex(/^[A-Za-z0-9_-]{22}(==)?$/, 'The auth secret must be 16 bytes.'),
+  }),
 });
 export type PushSubscriptionBody = z.infer<typeof pushSubscriptionBody>;
 

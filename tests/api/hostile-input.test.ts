@@ -52,7 +52,7 @@ function seedBody(key: string): unknown {
     'POST /api/auth/login': { email: 'keeper@larderly.test', password: 'pantry-demo-2026' },
     'POST /api/invitations/:token/accept': { name: 'Ada Fenwick', password: 'a-long-enough-password' },
     'POST /api/households/import': neighbourBackup,
-    'POST /api/push/subscriptions': { endpoint: 'https://push.larderly.test/sub/1', expirationTime: null, keys: { p256dh: 'BPcMbnWQL5GOYX', auth: 'Q2Bc9' } },
+    'POST /api/push/subscriptions': { endpoint: 'https://push.larderly.test/sub/1', expirationTime: null, keys: { p256dh: 'BCuf4fmp9_tdT2ZhgBWF6mCEgXE7geTWCAXj9jdSxUo_hwAJi5Qtwn-tPxrikoQc8BvLjslKGArQ7qHy7oe5808', auth: 'kYbaxzbGpXbyS2fjbb3hQQ' } },
     [`PATCH ${H}`]: { name: 'Calloway Hollow', altitudeFt: 2350, unitSystem: 'us', timeZone: 'America/New_York', bestQualityMonths: 12, weekStartsOn: 1, cannerCapacityJars: 7, defaultMethod: 'boiling-water' },
     [`POST ${H}/products`]: { name: 'Quince Paste', kind: 'other', heat: 0, favourite: false, minJars: 2, useWithinDays: 30, harvestMonths: [10], jarSize: 'half-pint', colour: 'honey', notes: '' },
     [`PATCH ${H}/products/:productId`]: { heat: 1, minJars: 3, useWithinDays: null, harvestMonths: [8, 9], notes: 'Keeps well.' },
