@@ -60,7 +60,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   api.use(sameOriginOnly(config.appOrigins));
   api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
   api.use(passport.session());
-  api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? 20 }));
+  api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? config.authRateLimit }));
   api.use('/households', householdsRouter(sequelize));
   api.use('/households', backupImportRouter(ctx));
   api.use('/jars', jarCodesRouter());

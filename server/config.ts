@@ -11,6 +11,7 @@ const schema = z.object({
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
   STATIC_DIR: z.string().default('dist/client'),
   BCRYPT_COST: z.coerce.number().int().min(4).max(15).default(12),
+  AUTH_RATE_LIMIT: z.coerce.number().int().min(1).max(100_000).default(20),
   UPLOAD_DIR: z.string().default('.data/uploads'),
   SMTP_HOST: z.string().optional(),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
@@ -53,6 +54,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     dbPoolMax: c.DB_POOL_MAX,
     staticDir: c.STATIC_DIR,
     bcryptCost: c.BCRYPT_COST,
+    /** sign-in and sign-up attempts per address per 15 minutes */
+    authRateLimit: c.AUTH_RATE_LIMIT,
     /** batch photos, on local disk outside the web root; served only to members */
     uploadDir: c.UPLOAD_DIR,
     /** where links in e-mails point: the first APP_ORIGIN, else this server's own address */

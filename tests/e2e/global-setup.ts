@@ -19,7 +19,9 @@ export default async function startServer(project: TestProject) {
 
   const port = await freePort();
   const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: { ...env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client' },
+    env: { ...env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client',
+      // Every browser test signs in from 127.0.0.1; the limit itself has its own API test.
+      AUTH_RATE_LIMIT: '10000' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const baseURL = `http://127.0.0.1:${port}`;
