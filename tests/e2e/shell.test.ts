@@ -1,4 +1,4 @@
-import type { Browser } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { DESKTOP, launchChromium, PHONE, screenshot, signIn } from '../support/browser';
 
@@ -8,6 +8,15 @@ beforeAll(async () => {
   browser = await launchChromium();
 });
 afterAll(() => browser?.close());
+
+/** The header names the current household and the role, as a label or, for people in several, as the switcher's choice. */
+async function shownHousehold(page: Page, name: RegExp, role: string) {
+  const header = page.getByRole('banner');
+  const switcher = header.getByRole('combobox', { name: 'Household' });
+  await expect
+    .poll(async () => ((await switcher.count()) ? await switcher.evaluate((s: HTMLSelectElement) => s.selectedOptions[0]?.text ?? '') : await header.innerText()), { timeout: 15_000 })
+    .toMatch(new RegExp(`${name.source}[\\s\\S]*${role}`, 'i'));
+}
 
 describe('the app shell', () => {
   it('sends a signed-out visitor to sign-in', async () => {
@@ -31,8 +40,7 @@ describe('the app shell', () => {
   it('signs in the demo keeper, shows the shell on desktop, switches screens and signs out', async () => {
     const page = await browser.newPage({ viewport: DESKTOP });
     await signIn(page, baseURL, 'keeper@larderly.test');
-    await page.getByText('Calloway Hollow').first().waitFor();
-    await page.getByText('You are a keeper').waitFor();
+    await shownHousehold(page, /Calloway Hollow/, 'keeper');
     await screenshot(page, 'shell-desktop');
 
     const nav = page.getByRole('navigation', { name: 'Screens' }).first();
@@ -53,7 +61,7 @@ describe('the app shell', () => {
   it('shows the shell on a phone with the bottom navigation and the More menu', async () => {
     const page = await browser.newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
     await signIn(page, baseURL, 'helper@larderly.test');
-    await page.getByText('You are a helper').waitFor();
+    await shownHousehold(page, /Calloway Hollow/, 'helper');
     await screenshot(page, 'shell-phone');
     const bottomNav = page.getByRole('navigation', { name: 'Screens' }).last();
     await bottomNav.getByRole('button', { name: 'More' }).click();
@@ -73,7 +81,7 @@ describe('the app shell', () => {
     await page.getByLabel('Household name').fill('Okafor Kitchen');
     await page.getByRole('button', { name: 'Create household' }).click();
     await page.waitForURL(/\/h\/[0-9a-f-]{36}/);
-    await page.getByText('Okafor Kitchen').first().waitFor();
+    await shownHousehold(page, /Okafor Kitchen/, 'keeper');
     await page.close();
   });
 });
