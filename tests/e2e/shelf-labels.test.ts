@@ -1,23 +1,12 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESKTOP, launchChromium, PHONE, screenshot, signIn } from '../support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { DESKTOP, browserForFile, PHONE, screenshot, signIn } from '../support/browser';
 
 const baseURL = inject('baseURL');
 const jsqrSource = readFileSync(createRequire(import.meta.url).resolve('jsqr/dist/jsQR.js'), 'utf8');
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(() => browser?.close());
-
-/** A page with room for a busy shared machine. */
-async function newPage(options: Parameters<Browser['newPage']>[0]) {
-  const page = await browser.newPage(options);
-  page.setDefaultTimeout(60_000);
-  return page;
-}
+const { newPage } = browserForFile();
 
 /** Decodes every QR image on the sheet inside the page (jsQR's own build, evaluated as a test tool), handing back only the texts. */
 async function decodeQrCodes(page: Page) {

@@ -1,20 +1,8 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESKTOP, launchChromium, PHONE, screenshot, signIn } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { DESKTOP, browserForFile, PHONE, screenshot, signIn } from '../support/browser';
 
 const baseURL = inject('baseURL');
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchChromium();
-});
-afterAll(() => browser?.close());
-
-/** A page with room for a busy shared machine. */
-async function newPage(options: Parameters<Browser['newPage']>[0]) {
-  const page = await browser.newPage(options);
-  page.setDefaultTimeout(60_000);
-  return page;
-}
+const { newPage } = browserForFile();
 
 describe('the shelf screen', () => {
   it('shows cards by product with sealed counts and best-quality badges, and finds a product from a misspelling', async () => {

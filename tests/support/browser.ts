@@ -1,6 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1366, height: 900 };
@@ -25,4 +26,20 @@ export async function screenshot(page: Page, name: string) {
   const dir = path.resolve('test-results/screenshots');
   mkdirSync(dir, { recursive: true });
   await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: true });
+}
+
+/** One Chromium for a test file, opened before its tests and closed after; its pages wait up to a minute on a busy machine. */
+export function browserForFile() {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchChromium();
+  });
+  afterAll(() => browser?.close());
+  return {
+    async newPage(options: Parameters<Browser['newPage']>[0]) {
+      const page = await browser.newPage(options);
+      page.setDefaultTimeout(60_000);
+      return page;
+    },
+  };
 }

@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldProps {
   label: string;
@@ -53,5 +53,39 @@ export function SelectField({ label, error, hint, children, className = '', ...p
         {children}
       </select>
     </FieldFrame>
+  );
+}
+
+export function TextAreaField({ label, error, hint, className = '', ...props }: FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+  const id = useId();
+  return (
+    <FieldFrame id={id} label={label} error={error} hint={hint}>
+      <textarea
+        id={id}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+        className={`${inputClass} min-h-24 py-2 ${className}`}
+        {...props}
+      />
+    </FieldFrame>
+  );
+}
+
+export function CheckboxField({ label, hint, ...props }: { label: ReactNode; hint?: ReactNode } & InputHTMLAttributes<HTMLInputElement>) {
+  const id = useId();
+  return (
+    <div className="flex items-start gap-3">
+      <input id={id} type="checkbox" className="mt-1 h-6 w-6 shrink-0 accent-action" aria-describedby={hint ? `${id}-hint` : undefined} {...props} />
+      <div>
+        <label htmlFor={id} className="font-bold">
+          {label}
+        </label>
+        {hint && (
+          <p id={`${id}-hint`} className="text-sm text-ink-muted">
+            {hint}
+          </p>
+        )}
+      </div>
+    </div>
   );
 }

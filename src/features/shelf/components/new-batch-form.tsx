@@ -7,12 +7,12 @@ import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { METHOD_NAMES } from '@shared/shelf-words';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useCreateBatch } from '../api/create-batch';
 import { jarSizeName } from '../format';
-import { numberFrom, TextAreaField } from './form-bits';
+import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
 
 /** The household's today, as YYYY-MM-DD: the canning day the server checks against. */

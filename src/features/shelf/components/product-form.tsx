@@ -4,12 +4,12 @@ import { defaultUseWithinDays, JAR_SIZES, PRODUCT_KINDS, type JarSize, type Prod
 import type { ProductView } from '@shared/schemas/products';
 import { PRODUCT_COLOURS, PRODUCT_KIND_NAMES, type ProductColour } from '@shared/shelf-words';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSaveProduct } from '../api/save-product';
 import { heatWords, jarSizeName } from '../format';
-import { CheckboxField, numberFrom, TextAreaField } from './form-bits';
+import { numberFrom } from '../number-from';
 import { PRODUCT_COLOUR_NAMES, ProductChip } from './product-chip';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];

@@ -5,12 +5,12 @@ import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { METHOD_NAMES } from '@shared/shelf-words';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextField } from '@/components/ui/field';
+import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSaveRecipe } from '../api/save-recipe';
 import { jarSizeName } from '../format';
-import { CheckboxField, numberFrom, TextAreaField } from './form-bits';
+import { numberFrom } from '../number-from';
 
 interface IngredientDraft {
   name: string;

@@ -6,7 +6,7 @@ import type { RecipeView } from '@shared/schemas/recipes';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { jarSizeName } from '../format';
-import { numberFrom } from './form-bits';
+import { numberFrom } from '../number-from';
 import { Cautions } from './plan-panel';
 
 /** Scales a tested recipe to the jars wanted; acid is never weakened, and the cautions come along. */

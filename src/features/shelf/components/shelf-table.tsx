@@ -3,10 +3,9 @@ import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { PRODUCT_KIND_NAMES } from '@shared/shelf-words';
 import type { ProductKind } from '@shared/domain';
-import { SelectField } from '@/components/ui/field';
+import { CheckboxField, SelectField } from '@/components/ui/field';
 import { jarSizeName, longDate } from '../format';
 import type { ShelfBatchRow } from '../shelf-rows';
-import { CheckboxField } from './form-bits';
 import { PastBestBadge } from './jar-badges';
 import { ProductChip } from './product-chip';
 
