@@ -22,8 +22,9 @@ export function householdBackupRouter(ctx: AppContext) {
 export const IMPORT_PATH = '/households/import';
 
 /** The one body larger than 1 MB the API accepts, read only once the person is signed in. */
+const readBackupJson = express.json({ limit: BACKUP_MAX_BYTES });
 const backupBody: RequestHandler = (req, res, next) => {
-  express.json({ limit: BACKUP_MAX_BYTES })(req, res, (error?: { type?: string }) => {
+  readBackupJson(req, res, (error?: { type?: string }) => {
     if (error?.type === 'entity.too.large') return next(new AppError(413, 'too_large', 'That backup file is too large (10 MB at most).'));
     next(error);
   });
