@@ -1,22 +1,19 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
 import { Household, Pairing, PlanEntry } from '../../server/db/models';
 import { todayIn } from '../../server/services/clock';
 import { sweepDigests } from '../../server/services/digest';
-import { bareApp } from '../support/bare-app';
+import type { bareApp } from '../support/bare-app';
 import { instantAt } from '../support/household-time';
 import { newHousehold, openedJar } from '../support/opened-jar';
-import { startStandIns, type StandIns } from '../support/stand-ins';
+import type { StandIns } from '../support/stand-ins';
+import { withStandInsApp } from '../support/stand-ins-app';
 
 let ctx: ReturnType<typeof bareApp>;
 let standIns: StandIns;
-beforeAll(async () => {
-  standIns = await startStandIns();
-  ctx = bareApp(standIns.env);
-});
-afterAll(async () => {
-  await ctx.close();
-  await standIns.close();
+withStandInsApp((app, started) => {
+  ctx = app;
+  standIns = started;
 });
 
 describe('the weekly digest', () => {

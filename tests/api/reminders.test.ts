@@ -1,6 +1,6 @@
 import { spawn } from 'node:child_process';
 import webpush from 'web-push';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
 import { startJobs } from '../../server/jobs';
 import { loadConfig } from '../../server/config';
@@ -8,21 +8,18 @@ import { AppSetting, ReminderDelivery } from '../../server/db/models';
 import { loadVapidKeys, type VapidKeys } from '../../server/services/push/vapid-keys';
 import { clock, todayIn } from '../../server/services/clock';
 import { sweepReminders } from '../../server/services/reminders';
-import { bareApp } from '../support/bare-app';
+import type { bareApp } from '../support/bare-app';
 import { instantAt } from '../support/household-time';
 import { newHousehold, openedJar } from '../support/opened-jar';
 import { browserPushKeys } from '../support/push-keys';
-import { startStandIns, type StandIns } from '../support/stand-ins';
+import type { StandIns } from '../support/stand-ins';
+import { withStandInsApp } from '../support/stand-ins-app';
 
 let ctx: ReturnType<typeof bareApp>;
 let standIns: StandIns;
-beforeAll(async () => {
-  standIns = await startStandIns();
-  ctx = bareApp(standIns.env);
-});
-afterAll(async () => {
-  await ctx.close();
-  await standIns.close();
+withStandInsApp((app, started) => {
+  ctx = app;
+  standIns = started;
 });
 
 const ZONE = 'America/Denver';
