@@ -12,7 +12,7 @@ const router = createBrowserRouter([
   { path: '/invite/:token', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/invite')).InviteRoute }) },
   {
     loader: warmMe,
-    lazy: async () => ({ Component: (await import('@/components/layouts/require-auth')).RequireAuth }),
+    lazy: async () => ({ Component: (await import('@/app/layouts/require-auth')).RequireAuth }),
     children: [
       { path: '/', lazy: async () => ({ Component: (await import('./routes/home-redirect')).HomeRedirect }) },
       // Outside the household layout: a label's page finds its household from the jar, and a label sheet prints bare.
@@ -20,7 +20,7 @@ const router = createBrowserRouter([
       { path: '/h/:hid/batches/:batchId/labels', lazy: async () => ({ Component: (await import('./routes/batch-labels')).BatchLabelsRoute }) },
       {
         path: '/h/:hid',
-        lazy: async () => ({ Component: (await import('@/components/layouts/app-layout')).AppLayout }),
+        lazy: async () => ({ Component: (await import('@/app/layouts/app-layout')).AppLayout }),
         children: [
           // The home page asks for its one read while its code is still loading.
           {

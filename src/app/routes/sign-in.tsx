@@ -1,5 +1,5 @@
 import { Navigate, useSearchParams } from 'react-router-dom';
-import { AuthLayout } from '@/components/layouts/auth-layout';
+import { AuthLayout } from '@/app/layouts/auth-layout';
 import { useMe } from '@/features/auth/api/get-me';
 import { safeNext, SignInForm } from '@/features/auth/components/sign-in-form';
 

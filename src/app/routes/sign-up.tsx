@@ -1,4 +1,4 @@
-import { AuthLayout } from '@/components/layouts/auth-layout';
+import { AuthLayout } from '@/app/layouts/auth-layout';
 import { SignUpForm } from '@/features/auth/components/sign-up-form';
 
 export function SignUpRoute() {

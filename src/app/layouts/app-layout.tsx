@@ -2,7 +2,7 @@ import { useEffect, useState } from 'react';
 import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { SCREENS } from '@/app/screens';
 import { Brand } from '@/components/ui/brand';
-import { ScreenIcon } from '@/components/ui/screen-icon';
+import { ScreenIcon } from './screen-icon';
 import { useLogout } from '@/features/auth/api/logout';
 import { HouseholdSwitcher } from '@/features/households/components/household-switcher';
 import { rememberHousehold, useCurrentHousehold } from '@/features/households/use-current-household';
