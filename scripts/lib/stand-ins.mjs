@@ -4,12 +4,12 @@ import { createInterface } from 'node:readline';
 import { startChild } from './system.mjs';
 
 /**
- * Runs server/stand-ins/main.ts with its files beside the database cluster, waits for its
+ * Runs dev/stand-ins/main.ts with its files beside the database cluster, waits for its
  * addresses, and returns the settings the server needs to send through it.
  */
 export async function startStandIns(cluster) {
   const dir = path.join(path.dirname(cluster.dataDir), 'stand-ins');
-  const child = startChild(process.execPath, ['--import', 'tsx', 'server/stand-ins/main.ts'], {
+  const child = startChild(process.execPath, ['--import', 'tsx', 'dev/stand-ins/main.ts'], {
     env: { ...process.env, STAND_IN_DIR: dir },
     stdio: ['ignore', 'pipe', 'inherit'],
   });

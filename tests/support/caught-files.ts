@@ -1,7 +1,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import type { CaughtMail } from '../../shared/schemas/notifications';
-import type { CaughtPush } from '../../server/stand-ins/push-endpoint';
+import type { CaughtPush } from '../../dev/stand-ins/push-endpoint';
 
 function readAll<T>(dir: string): T[] {
   if (!existsSync(dir)) return [];

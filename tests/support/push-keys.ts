@@ -1,6 +1,6 @@
 import { createECDH, randomBytes } from 'node:crypto';
 import { decrypt } from 'http_ece';
-import type { CaughtPush } from '../../server/stand-ins/push-endpoint';
+import type { CaughtPush } from '../../dev/stand-ins/push-endpoint';
 
 /** What a browser keeps for one push subscription: a P-256 key pair and an auth secret. */
 export function browserPushKeys() {

@@ -1,8 +1,8 @@
 import os from 'node:os';
 import path from 'node:path';
-import { ensureCertificate } from '../../scripts/lib/certificate.mjs';
-import { startMailCatcher } from '../../server/stand-ins/mail-catcher';
-import { startPushEndpoint } from '../../server/stand-ins/push-endpoint';
+import { ensureCertificate } from '../../dev/stand-ins/certificate.mjs';
+import { startMailCatcher } from '../../dev/stand-ins/mail-catcher';
+import { startPushEndpoint } from '../../dev/stand-ins/push-endpoint';
 import { freePort } from './ports';
 
 /** The local SMTP catcher and push endpoint on free loopback ports, inside the test process. */

@@ -1,7 +1,7 @@
 // The local stand-ins `npm start` runs beside the app: an SMTP catcher and a Web Push endpoint.
 // Prints one JSON line with their addresses, then keeps running until stopped.
 import path from 'node:path';
-import { ensureCertificate } from '../../scripts/lib/certificate.mjs';
+import { ensureCertificate } from './certificate.mjs';
 import { startMailCatcher } from './mail-catcher';
 import { startPushEndpoint } from './push-endpoint';
 
