@@ -74,7 +74,7 @@ async function waitForHealth(url, child) {
 }
 
 function printWelcome(url, production) {
-  const accounts = JSON.parse(readFileSync(`${projectDir}/server/db/seeders/demo-accounts.json`, 'utf8'));
+  const accounts = JSON.parse(readFileSync(`${projectDir}/server/demo/demo-accounts.json`, 'utf8'));
   const lines = ['', `  Larderly is ready: ${url}`, ''];
   if (!production) {
     lines.push('  Demo sign-ins (local demo data only), password for all: ' + accounts.password);

@@ -33,7 +33,7 @@ export function recreateDatabase(cluster, name, template) {
 
 /** Runs the migrations (and, with seedDemo, the demo scenario on an empty database). */
 export function setUpSchema(databaseUrl, { seedDemo = false } = {}) {
-  run(process.execPath, ['--import', 'tsx', 'server/db/cli.ts', 'setup', ...(seedDemo ? ['--seed-demo'] : [])], {
+  run(process.execPath, ['--import', 'tsx', 'server/setup.ts', 'setup', ...(seedDemo ? ['--seed-demo'] : [])], {
     cwd: projectDir,
     env: { ...process.env, DATABASE_URL: databaseUrl },
   });

@@ -24,7 +24,7 @@ beforeAll(async () => {
   const port = await freePort();
   cluster = startCluster({ name: `faults-${process.pid}-${port}`, port });
   // Migrated and seeded the way a server is set up (umzug loads .ts migrations only under tsx).
-  const setup = spawnSync(process.execPath, ['--import', 'tsx', 'server/db/cli.ts', 'setup', '--seed-demo'], {
+  const setup = spawnSync(process.execPath, ['--import', 'tsx', 'server/setup.ts', 'setup', '--seed-demo'], {
     env: { ...process.env, DATABASE_URL: cluster.url('postgres') },
     encoding: 'utf8',
   });

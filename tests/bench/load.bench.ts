@@ -25,7 +25,7 @@ const todos: { id: string }[] = (await (await call(`${base}/todos`, { cookie }))
 const products: { id: string }[] = (await (await call(`${base}/products`, { cookie })).json()).products;
 const week = await (await call(`${base}/week`, { cookie })).json();
 const entries: { id: string; servings: number }[] = week.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries);
-if (todos.length === 0 || entries.length === 0) throw new Error('The demo household needs to-dos and planned meals: seed it with `server/db/cli.ts setup --seed-demo`.');
+if (todos.length === 0 || entries.length === 0) throw new Error('The demo household needs to-dos and planned meals: seed it with `server/setup.ts setup --seed-demo`.');
 
 // Seven reads to three writes; every write is one a cook may repeat without running out of anything.
 const json = (body: unknown) => JSON.stringify(body);

@@ -14,7 +14,7 @@ declare module 'vitest' {
 export default async function startServer(project: TestProject) {
   const database = await createTestDatabase('e2e');
   const env = { ...process.env, DATABASE_URL: database.url };
-  const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'server/db/cli.ts', 'setup', '--seed-demo'], { env, encoding: 'utf8' });
+  const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'server/setup.ts', 'setup', '--seed-demo'], { env, encoding: 'utf8' });
   if (seeded.status !== 0) throw new Error(`seeding the browser-test database failed:\n${seeded.stdout}${seeded.stderr}`);
 
   const port = await freePort();

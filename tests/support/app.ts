@@ -1,8 +1,8 @@
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
-import { seedDemo } from '../../server/db/seeders/demo';
-import demo from '../../server/db/seeders/demo-accounts.json' with { type: 'json' };
+import { seedDemo } from '../../server/demo/demo';
+import demo from '../../server/demo/demo-accounts.json' with { type: 'json' };
 
 export const DEMO_PASSWORD = demo.password;
 export type DemoEmail = 'keeper@larderly.test' | 'cook@larderly.test' | 'helper@larderly.test' | 'neighbor@larderly.test';

@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import type { Household, User } from '../models';
+import type { Household, User } from '../db/models';
 import { seedShelf } from './shelf';
 import { seedWeek } from './week';
 import { seedTodos } from './todos';

@@ -1,8 +1,8 @@
 import type { Sequelize } from 'sequelize';
-import type { Role } from '../../../shared/roles';
-import { hashPassword } from '../../auth/passwords';
-import { todayIn } from '../../services/clock';
-import { Household, Membership, User } from '../models';
+import type { Role } from '../../shared/roles';
+import { hashPassword } from '../auth/passwords';
+import { todayIn } from '../services/clock';
+import { Household, Membership, User } from '../db/models';
 import accounts from './demo-accounts.json' with { type: 'json' };
 import { seedDemoFeatures } from './features';
 

@@ -1,8 +1,8 @@
 // The shelf part of the demo scenario: products, recipes and two seasons of batches with their jars.
-import { batchPlan } from '../../../shared/batch-plan';
-import { addDays, defaultUseWithinDays, useBy } from '../../../shared/domain';
-import { JarEvent, Product, Recipe, type Household, type User } from '../models';
-import { writeBatch } from '../../services/shelf/write-batch';
+import { batchPlan } from '../../shared/batch-plan';
+import { addDays, defaultUseWithinDays, useBy } from '../../shared/domain';
+import { JarEvent, Product, Recipe, type Household, type User } from '../db/models';
+import { writeBatch } from '../services/shelf/write-batch';
 import type { DemoSeedContext } from './features';
 import { CALLOWAY_BATCHES, CALLOWAY_PRODUCTS, MARSH_END_BATCHES, MARSH_END_PRODUCTS, type DemoBatch } from './shelf-batches';
 import { DEMO_RECIPES } from './shelf-recipes';

@@ -1,6 +1,6 @@
 // Our invented demo shelf: two seasons of batches and what became of each jar, in days before today.
-import type { JarSize } from '../../../shared/domain';
-import type { ProductCreate } from '../../../shared/schemas/products';
+import type { JarSize } from '../../shared/domain';
+import type { ProductCreate } from '../../shared/schemas/products';
 
 export const CALLOWAY_PRODUCTS: ProductCreate[] = [
   { name: 'Green Tomato Chutney', kind: 'chutney', heat: 1, favourite: true, minJars: 4, jarSize: 'half-pint', harvestMonths: [9, 10], colour: 'leaf', notes: 'The last green tomatoes before frost. Good with sharp cheddar.' },

@@ -1,7 +1,7 @@
 // Demo week: Calloway Hollow's own meals and two planned weeks (this one and the next) around today.
-import { addDays } from '../../../shared/domain';
-import { weekStartOf, type Slot } from '../../../shared/schemas/week';
-import { Jar, Meal, MealProduct, Membership, Pairing, PlanEntry, Product } from '../models';
+import { addDays } from '../../shared/domain';
+import { weekStartOf, type Slot } from '../../shared/schemas/week';
+import { Jar, Meal, MealProduct, Membership, Pairing, PlanEntry, Product } from '../db/models';
 import type { DemoSeedContext } from './features';
 
 interface DemoMeal {

@@ -1,7 +1,7 @@
 // Demo recipes. Ingredients, yields, headspace and 0-1,000 ft processing times are from memory of the
 // USDA Complete Guide to Home Canning (AIB 539, 2015), Guide 6 (pickled vegetables) and Guide 7, and
 // the National Center for Home Food Preservation's recipe of the same name; check them against the source.
-import type { RecipeCreate } from '../../../shared/schemas/recipes';
+import type { RecipeCreate } from '../../shared/schemas/recipes';
 
 type DemoRecipe = Omit<RecipeCreate, 'productId'> & { product: string };
 

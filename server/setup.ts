@@ -1,7 +1,7 @@
-// Database lifecycle for the set-up scripts: `tsx server/db/cli.ts migrate|setup [--seed-demo]`.
-import { acquireDatabase } from './sequelize';
-import { migrate } from './migrate';
-import { isEmpty, seedDemo } from './seeders/demo';
+// Database lifecycle for the set-up scripts: `tsx server/setup.ts migrate|setup [--seed-demo]`.
+import { acquireDatabase } from './db/sequelize';
+import { migrate } from './db/migrate';
+import { isEmpty, seedDemo } from './demo/demo';
 
 const [command, ...flags] = process.argv.slice(2);
 const url = process.env.DATABASE_URL;
