@@ -1,7 +1,7 @@
 // The to-do part of the demo scenario: a few everyday jobs and one restock batch with its plan.
 import { addDays } from '../../shared/domain';
 import type { BatchPlan } from '../../shared/schemas/todos';
-import { composeBatchPlan, jarSizeFor, oneTestedBatch, restockTitle } from '../services/batch-plan';
+import { composeBatchPlan, jarSizeFor, oneTestedBatch, restockTitle } from '../services/restock/todo-batch-plan';
 import { Product, Recipe, Todo } from '../db/models';
 import type { DemoSeedContext } from './features';
 

@@ -4,8 +4,8 @@ import { restockTodoCreate } from '../../shared/schemas/todos';
 import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { body, params } from '../http/validate';
-import { addRestockTodo } from '../services/batch-plan';
-import { restockView } from '../services/restock';
+import { addRestockTodo } from '../services/restock/todo-batch-plan';
+import { restockView } from '../services/restock/view';
 
 const productParams = z.object({ hid: z.string(), productId: z.uuid({ error: 'That product was not found.' }) });
 

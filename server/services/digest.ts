@@ -5,7 +5,7 @@ import type { AppContext } from '../context';
 import { DigestDelivery, Household, Jar, Membership, Pairing, PlanEntry, User } from '../db/models';
 import { digestMail, type DigestContent } from './mail/digest-mail';
 import { clock, hourIn, todayIn } from './clock';
-import { digestRestockLines } from './digest-restock';
+import { digestRestockLines } from './restock/digest-lines';
 import { preferencesOf } from './notification-preferences';
 import { allocatePlan, productsOf } from './plan-allocation';
 

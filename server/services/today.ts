@@ -3,8 +3,8 @@ import { addDays, allocateWeek, daysBetween, type Id, type PlannedPortion } from
 import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/today';
 import { Household, Jar, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
-import { restockFromSnapshot } from './restock';
-import { stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
+import { restockFromSnapshot } from './restock/view';
+import { stockSnapshot, useWithinDaysOf, type StockSnapshot } from './restock/stock-snapshot';
 
 /** The fridge jars shown first; the Fridge screen has the rest. */
 const FRIDGE_SHOWN = 5;

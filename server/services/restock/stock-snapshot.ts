@@ -1,7 +1,7 @@
 // One read of what the forecast, the restock list and Today work from: products, jars, history and plan.
 import { Op } from 'sequelize';
-import { addDays, addMonths, defaultUseWithinDays, HISTORY_DAYS, type FinishedPortion, type PlannedPortion } from '../../shared/domain';
-import { Jar, Pairing, PlanEntry, Product } from '../db/models';
+import { addDays, addMonths, defaultUseWithinDays, HISTORY_DAYS, type FinishedPortion, type PlannedPortion } from '../../../shared/domain';
+import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
 
 /** The months a use chart shows, the current one included. */
 export const CHART_MONTHS = 6;

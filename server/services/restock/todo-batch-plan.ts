@@ -9,16 +9,16 @@ import {
   type JarSize,
   type RestockReason,
   type ScaledIngredient,
-} from '../../shared/domain';
-import { count } from '../../shared/day-words';
-import { JAR_SIZE_NAMES } from '../../shared/jar-size-names';
-import type { BatchPlan, RestockTodoCreate, ShoppingItem, TodoView } from '../../shared/schemas/todos';
-import { Batch, Household, Product, Recipe } from '../db/models';
-import { AppError, notFound } from '../http/errors';
-import { todayIn } from './clock';
+} from '../../../shared/domain';
+import { count } from '../../../shared/day-words';
+import { JAR_SIZE_NAMES } from '../../../shared/jar-size-names';
+import type { BatchPlan, RestockTodoCreate, ShoppingItem, TodoView } from '../../../shared/schemas/todos';
+import { Batch, Household, Product, Recipe } from '../../db/models';
+import { AppError, notFound } from '../../http/errors';
+import { todayIn } from '../clock';
 import { targetDate } from './harvest-target';
 import { stockSnapshot } from './stock-snapshot';
-import { createTodo } from './todos';
+import { createTodo } from '../todos';
 
 /** The recipe the household last made this product with, else its newest recipe. */
 async function chooseRecipe(product: Product): Promise<Recipe | null> {

@@ -1,10 +1,10 @@
 // The restock list: each product's forecast, the favourites that need a batch and why, in plain words.
 import { Op } from 'sequelize';
-import { addMonths, jarSizeAdvice, yearOf, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../shared/domain';
-import { count, shortDay, tbspPerDay } from '../../shared/day-words';
-import type { MonthlyUse, RestockForecastView, RestockSuggestionView, RestockView } from '../../shared/schemas/restock';
-import { Household, Recipe, Todo, type Product } from '../db/models';
-import { todayIn } from './clock';
+import { addMonths, jarSizeAdvice, yearOf, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../../shared/domain';
+import { count, shortDay, tbspPerDay } from '../../../shared/day-words';
+import type { MonthlyUse, RestockForecastView, RestockSuggestionView, RestockView } from '../../../shared/schemas/restock';
+import { Household, Recipe, Todo, type Product } from '../../db/models';
+import { todayIn } from '../clock';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
 function whyInWords(today: string, suggestion: RestockSuggestion, forecast: RestockForecast, product: Product): string {

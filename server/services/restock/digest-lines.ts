@@ -1,6 +1,6 @@
-import { JAR_SIZE_NAMES } from '../../shared/jar-size-names';
-import type { DigestContent } from './mail/digest-mail';
-import { restockFor } from './restock';
+import { JAR_SIZE_NAMES } from '../../../shared/jar-size-names';
+import type { DigestContent } from '../mail/digest-mail';
+import { restockFor } from './view';
 
 /** The restock suggestions the weekly digest lists under "Time to make more"; none leaves the section out. */
 export async function digestRestockLines(householdId: string, today: string): Promise<DigestContent['restock']> {

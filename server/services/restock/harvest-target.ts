@@ -1,6 +1,6 @@
 // The day a restock batch should be made by: inside the harvest window, and before the shelf runs out.
-import { addDays, DEFAULT_LEAD_DAYS, lastDayOfMonth, monthOf, yearOf } from '../../shared/domain';
-import { shortDay } from '../../shared/day-words';
+import { addDays, DEFAULT_LEAD_DAYS, lastDayOfMonth, monthOf, yearOf } from '../../../shared/domain';
+import { shortDay } from '../../../shared/day-words';
 
 interface HarvestWindow {
   start: string;
