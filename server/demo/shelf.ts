@@ -1,5 +1,5 @@
 // The shelf part of the demo scenario: products, recipes and two seasons of batches with their jars.
-import { batchPlan } from '../../shared/batch-plan';
+import { batchPlan } from '../../shared/processing-plan';
 import { addDays, defaultUseWithinDays, useBy } from '../../shared/domain';
 import { JarEvent, Product, Recipe, type Household, type User } from '../db/models';
 import { writeBatch } from '../services/shelf/write-batch';

@@ -1,5 +1,5 @@
 import type { Sequelize } from 'sequelize';
-import { batchPlan } from '../../../shared/batch-plan';
+import { batchPlan } from '../../../shared/processing-plan';
 import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
 import { Batch, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';

@@ -2,7 +2,7 @@
 import Papa from 'papaparse';
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
-import { batchPlan } from '../../../shared/batch-plan';
+import { batchPlan } from '../../../shared/processing-plan';
 import { JAR_SIZES, PROCESSING_METHODS, requireIsoDate } from '../../../shared/domain';
 import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
 import { Product, Recipe, type Household } from '../../db/models';

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { batchPlan } from '@shared/batch-plan';
+import { batchPlan } from '@shared/processing-plan';
 import { JAR_SIZES, PROCESSING_METHODS, UNSEALED_JAR_ADVICE, type JarSize, type Method } from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';

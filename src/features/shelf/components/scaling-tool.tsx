@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { batchPlan } from '@shared/batch-plan';
+import { batchPlan } from '@shared/processing-plan';
 import { formatKitchenAmount, JAR_SIZES, SAFETY_CAUTIONS, scaleRecipe, type JarSize } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { SelectField, TextField } from '@/components/ui/field';
