@@ -10,7 +10,7 @@ export interface PlanRecipe {
   altitudeTable: AltitudeRow[] | null;
 }
 
-export interface BatchPlanQuestion {
+export interface ProcessingQuestion {
   method: Method;
   jarSize: JarSize;
   altitudeFt: number;
@@ -25,7 +25,7 @@ function methodFits(recipeMethod: Method, batchMethod: Method): boolean {
   return isPressureMethod(recipeMethod) === isPressureMethod(batchMethod);
 }
 
-export function batchPlan(recipe: PlanRecipe, question: BatchPlanQuestion): ProcessingPlan {
+export function recipeProcessingPlan(recipe: PlanRecipe, question: ProcessingQuestion): ProcessingPlan {
   if (!methodFits(recipe.method, question.method)) {
     return refused(
       question.method,

@@ -1,5 +1,5 @@
 // The shelf part of the demo scenario: products, recipes and two seasons of batches with their jars.
-import { batchPlan } from '../../shared/processing-plan';
+import { recipeProcessingPlan } from '../../shared/processing-plan';
 import { addDays, defaultUseWithinDays, useBy } from '../../shared/domain';
 import { JarEvent, Product, Recipe, type Household, type User } from '../db/models';
 import { writeBatch } from '../services/shelf/write-batch';
@@ -45,7 +45,7 @@ async function seedBatches(
   for (const demo of batches) {
     const product = products.get(demo.product)!;
     const recipe = recipes.get(demo.product) ?? null;
-    const plan = recipe ? batchPlan(recipe, { jarSize: demo.jarSize, method: 'boiling-water', altitudeFt: household.altitudeFt }) : null;
+    const plan = recipe ? recipeProcessingPlan(recipe, { jarSize: demo.jarSize, method: 'boiling-water', altitudeFt: household.altitudeFt }) : null;
     const cannedOn = addDays(today, -demo.daysAgo);
     const { batch, jars } = await writeBatch(
       household,

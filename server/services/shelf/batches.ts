@@ -1,5 +1,5 @@
 import type { Sequelize } from 'sequelize';
-import { batchPlan } from '../../../shared/processing-plan';
+import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
 import { Batch, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
@@ -16,7 +16,7 @@ export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError 
 
 export async function previewPlan(household: Household, recipeId: string, jarSize: JarSize, method: Method) {
   const recipe = await findRecipe(household.id, recipeId);
-  return batchPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt });
+  return recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt });
 }
 
 export async function createBatch(sequelize: Sequelize, household: Household, input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number }, userId: string): Promise<BatchCreated> {
@@ -27,7 +27,7 @@ export async function createBatch(sequelize: Sequelize, household: Household, in
   if (input.cannedOn > todayIn(household.timeZone)) {
     throw new AppError(400, 'invalid_input', 'A batch cannot be dated in the future.', { cannedOn: 'Use today or an earlier day.' });
   }
-  const plan = batchPlan(recipe, { jarSize: input.jarSize, method: input.method, altitudeFt: household.altitudeFt });
+  const plan = recipeProcessingPlan(recipe, { jarSize: input.jarSize, method: input.method, altitudeFt: household.altitudeFt });
   if (!plan.allowed) throw notAllowed(plan);
 
   const { batch, jars } = await withFreshJarCodes(sequelize, (transaction) =>

@@ -2,7 +2,7 @@
 import Papa from 'papaparse';
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
-import { batchPlan } from '../../../shared/processing-plan';
+import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import { JAR_SIZES, PROCESSING_METHODS, requireIsoDate } from '../../../shared/domain';
 import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
 import { Product, Recipe, type Household } from '../../db/models';
@@ -77,7 +77,7 @@ export async function checkImport(household: Household, csv: string) {
     let minutes = value.minutes === '' ? null : Number(value.minutes);
     let pressurePsi: number | null = null;
     if (recipe) {
-      const plan = batchPlan(recipe, { jarSize: value.jar_size, method: value.method, altitudeFt: household.altitudeFt });
+      const plan = recipeProcessingPlan(recipe, { jarSize: value.jar_size, method: value.method, altitudeFt: household.altitudeFt });
       if (!plan.allowed) return void problems.push({ row, field: 'method', message: `Not allowed: ${plan.reasons.join(' ')}` });
       minutes = plan.minutes;
       pressurePsi = plan.pressurePsi;

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { batchPlan } from '@shared/processing-plan';
+import { recipeProcessingPlan } from '@shared/processing-plan';
 import { JAR_SIZES, PROCESSING_METHODS, UNSEALED_JAR_ADVICE, type JarSize, type Method } from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
@@ -43,7 +43,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
   const today = todayIn(household.timeZone);
   const cannedOn = params.get('date') ?? today;
 
-  const plan = recipe ? batchPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
+  const plan = recipe ? recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
   const filled = numberFrom(jarsText);
   const sealed = numberFrom(sealedText);
   const unsealed = Number.isInteger(filled) && Number.isInteger(sealed) && filled > sealed ? filled - sealed : 0;

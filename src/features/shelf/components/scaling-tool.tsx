@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { batchPlan } from '@shared/processing-plan';
+import { recipeProcessingPlan } from '@shared/processing-plan';
 import { formatKitchenAmount, JAR_SIZES, SAFETY_CAUTIONS, scaleRecipe, type JarSize } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -16,7 +16,7 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
   const jars = numberFrom(jarsText);
   const valid = Number.isInteger(jars) && jars >= 1 && jars <= 200;
   const scaled = valid ? scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients }, { jars, jarSize }) : null;
-  const plan = batchPlan(recipe, { jarSize, method: recipe.method, altitudeFt });
+  const plan = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt });
 
   return (
     <section aria-labelledby="scale-heading" className="flex flex-col gap-4">
