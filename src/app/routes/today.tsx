@@ -6,7 +6,7 @@ import { FridgeCountdowns } from '@/features/today/components/fridge-countdowns'
 import { MyTodos } from '@/features/today/components/my-todos';
 import { RestockGlance } from '@/features/today/components/restock-glance';
 import { TodaySection } from '@/features/today/components/today-section';
-import { UseToday } from '@/features/today/components/use-today';
+import { UseToday } from '@/features/today/components/jars-for-today';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 
 export function TodayRoute() {

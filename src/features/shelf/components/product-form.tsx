@@ -10,7 +10,7 @@ import { ApiError } from '@/lib/api-client';
 import { useSaveProduct } from '../api/save-product';
 import { heatWords, jarSizeName } from '../format';
 import { numberFrom } from '../number-from';
-import { PRODUCT_COLOUR_NAMES, ProductChip } from './product-chip';
+import { PRODUCT_COLOUR_NAMES, ProductChip } from './colour-dot';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 

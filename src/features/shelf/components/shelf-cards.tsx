@@ -5,7 +5,7 @@ import { useActOnJar } from '../api/act-on-jar';
 import { jarSizeName, longDate } from '../format';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
-import { ProductChip } from './product-chip';
+import { ProductChip } from './colour-dot';
 
 export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
   const act = useActOnJar(hid);

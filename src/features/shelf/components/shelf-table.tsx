@@ -7,7 +7,7 @@ import { CheckboxField, SelectField } from '@/components/ui/field';
 import { jarSizeName, longDate } from '../format';
 import type { ShelfBatchRow } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
-import { ProductChip } from './product-chip';
+import { ProductChip } from './colour-dot';
 
 const column = createColumnHelper<ShelfBatchRow>();
 const HIDDEN_COLUMNS = { pastBestQuality: false };
