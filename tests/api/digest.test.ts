@@ -9,17 +9,17 @@ import { newHousehold, openedJar } from '../support/opened-jar';
 import type { StandIns } from '../support/stand-ins';
 import { withStandInsApp } from '../support/stand-ins-app';
 
-let ctx: ReturnType<typeof bareApp>;
+let built: ReturnType<typeof bareApp>;
 let standIns: StandIns;
 withStandInsApp((app, started) => {
-  ctx = app;
+  built = app;
   standIns = started;
 });
 
 describe('the weekly digest', () => {
   it("e-mails the week's plan, the jars to open and what expires, once, on the first day of the week at the reminder hour", async () => {
     const zone = 'Asia/Tokyo';
-    const home = await newHousehold(ctx.app, zone);
+    const home = await newHousehold(built.app, zone);
     const today = todayIn(zone);
     const weekday = new Date(`${today}T00:00:00Z`).getUTCDay();
     await Household.update({ weekStartsOn: weekday }, { where: { id: home.householdId } });
@@ -27,10 +27,10 @@ describe('the weekly digest', () => {
     const entry = await PlanEntry.create({ householdId: home.householdId, date: addDays(today, 1), slot: 'breakfast', position: 0, title: 'Oat scones', servings: 4 });
     await Pairing.create({ householdId: home.householdId, planEntryId: entry.id, productId: product.id, tbspPerServing: 1 });
 
-    await sweepDigests(ctx.ctx, instantAt(today, 7, 50, zone));
+    await sweepDigests(built.ctx, instantAt(today, 7, 50, zone));
     expect(standIns.mail.to(home.email)).toHaveLength(0);
-    await sweepDigests(ctx.ctx, instantAt(today, 8, 5, zone));
-    await sweepDigests(ctx.ctx, instantAt(today, 9, 5, zone));
+    await sweepDigests(built.ctx, instantAt(today, 8, 5, zone));
+    await sweepDigests(built.ctx, instantAt(today, 9, 5, zone));
     const mails = standIns.mail.to(home.email);
     expect(mails).toHaveLength(1);
     expect(mails[0].subject).toBe(`Fenwick Cellar: the week of ${today}`);
@@ -43,10 +43,10 @@ describe('the weekly digest', () => {
 
   it('sends nothing on other days of the week', async () => {
     const zone = 'UTC';
-    const home = await newHousehold(ctx.app, zone);
+    const home = await newHousehold(built.app, zone);
     const today = todayIn(zone);
     await Household.update({ weekStartsOn: (new Date(`${today}T00:00:00Z`).getUTCDay() + 1) % 7 }, { where: { id: home.householdId } });
-    await sweepDigests(ctx.ctx, instantAt(today, 12, 0, zone));
+    await sweepDigests(built.ctx, instantAt(today, 12, 0, zone));
     expect(standIns.mail.to(home.email)).toHaveLength(0);
   });
 });

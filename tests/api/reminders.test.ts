@@ -15,10 +15,10 @@ import { browserPushKeys } from '../support/push-keys';
 import type { StandIns } from '../support/stand-ins';
 import { withStandInsApp } from '../support/stand-ins-app';
 
-let ctx: ReturnType<typeof bareApp>;
+let built: ReturnType<typeof bareApp>;
 let standIns: StandIns;
 withStandInsApp((app, started) => {
-  ctx = app;
+  built = app;
   standIns = started;
 });
 
@@ -26,7 +26,7 @@ const ZONE = 'America/Denver';
 
 /** A household with one subscribed browser and a jar opened today that keeps 10 days. */
 async function scenario(productName: string) {
-  const home = await newHousehold(ctx.app, ZONE);
+  const home = await newHousehold(built.app, ZONE);
   const browser = browserPushKeys();
   const endpoint = standIns.push.newEndpoint();
   expect((await home.agent.post('/api/push/subscriptions').send({ endpoint, expirationTime: null, keys: browser.keys })).status).toBe(201);
@@ -53,17 +53,17 @@ describe('use-by reminders', () => {
   it('sends one push naming the product and one e-mail at the reminder hour 2 days before the use-by, and nothing on the next run', async () => {
     const home = await scenario('Quince and Walnut Chutney');
 
-    await sweepReminders(ctx.ctx, home.at(7, 55));
+    await sweepReminders(built.ctx, home.at(7, 55));
     expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
     expect(standIns.mail.to(home.email)).toHaveLength(0);
 
-    await sweepReminders(ctx.ctx, home.at(8, 5));
+    await sweepReminders(built.ctx, home.at(8, 5));
     const pushes = standIns.push.receivedBy(home.endpoint);
     expect(pushes).toHaveLength(1);
     const message = home.browser.read(pushes[0]);
     expect(message.title).toBe('Use the Quince and Walnut Chutney within 2 days');
     expect(message.url).toBe(`/j/${home.jar.code}`);
-    expect(pushes[0].vapidKey).toBe(await ctx.ctx.push.publicKey());
+    expect(pushes[0].vapidKey).toBe(await built.ctx.push.publicKey());
 
     const mails = standIns.mail.to(home.email);
     expect(mails).toHaveLength(1);
@@ -71,8 +71,8 @@ describe('use-by reminders', () => {
     expect(mails[0].text).toContain(`/j/${home.jar.code}`);
     expect(mails[0].html).toContain('Quince and Walnut Chutney');
 
-    await sweepReminders(ctx.ctx, home.at(8, 10));
-    await sweepReminders(ctx.ctx, home.at(14, 0));
+    await sweepReminders(built.ctx, home.at(8, 10));
+    await sweepReminders(built.ctx, home.at(14, 0));
     expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(1);
     expect(standIns.mail.to(home.email)).toHaveLength(1);
   });
@@ -80,8 +80,8 @@ describe('use-by reminders', () => {
   it('sends the "today" reminder on the use-by day, once', async () => {
     const home = await scenario('Gooseberry Relish');
     const useByMorning = instantAt(home.jar.useBy!, 9, 0, ZONE);
-    await sweepReminders(ctx.ctx, useByMorning);
-    await sweepReminders(ctx.ctx, useByMorning);
+    await sweepReminders(built.ctx, useByMorning);
+    await sweepReminders(built.ctx, useByMorning);
     const titles = standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title);
     expect(titles).toEqual(['Use the Gooseberry Relish today']);
   });
@@ -99,7 +99,7 @@ describe('use-by reminders', () => {
     const home = await scenario('Medlar Jelly');
     const realNow = clock.now;
     clock.now = () => home.at(8, 5);
-    const runners = await Promise.all([startJobs(ctx.ctx), startJobs(ctx.ctx)]);
+    const runners = await Promise.all([startJobs(built.ctx), startJobs(built.ctx)]);
     try {
       await Promise.all(runners.map((r) => r.sweepNow()));
       for (let i = 0; i < 60 && standIns.push.receivedBy(home.endpoint).length === 0; i += 1) await new Promise((r) => setTimeout(r, 250));
@@ -115,9 +115,9 @@ describe('use-by reminders', () => {
   it('respects a later reminder hour and more days before', async () => {
     const home = await scenario('Sloe Gin Jelly');
     expect((await home.agent.patch('/api/me/notifications').send({ reminderHour: 18, daysBefore: 3, emailReminders: false })).status).toBe(200);
-    await sweepReminders(ctx.ctx, instantAt(addDays(home.jar.useBy!, -3), 17, 30, ZONE));
+    await sweepReminders(built.ctx, instantAt(addDays(home.jar.useBy!, -3), 17, 30, ZONE));
     expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
-    await sweepReminders(ctx.ctx, instantAt(addDays(home.jar.useBy!, -3), 18, 5, ZONE));
+    await sweepReminders(built.ctx, instantAt(addDays(home.jar.useBy!, -3), 18, 5, ZONE));
     expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual(['Use the Sloe Gin Jelly within 3 days']);
     expect(standIns.mail.to(home.email)).toHaveLength(0);
   });
@@ -125,7 +125,7 @@ describe('use-by reminders', () => {
 
 describe('push subscriptions', () => {
   it('removes a subscription the push service answers 410 Gone for', async () => {
-    const home = await newHousehold(ctx.app, ZONE);
+    const home = await newHousehold(built.app, ZONE);
     const endpoint = standIns.push.newEndpoint();
     await home.agent.post('/api/push/subscriptions').send({ endpoint, keys: browserPushKeys().keys });
     expect((await home.agent.get('/api/me/notifications')).body.settings.pushDevices).toBe(1);
@@ -136,7 +136,7 @@ describe('push subscriptions', () => {
   });
 
   it('delivers a test notification the browser can decrypt', async () => {
-    const home = await newHousehold(ctx.app, ZONE);
+    const home = await newHousehold(built.app, ZONE);
     const browser = browserPushKeys();
     const endpoint = standIns.push.newEndpoint();
     await home.agent.post('/api/push/subscriptions').send({ endpoint, keys: browser.keys });
@@ -145,7 +145,7 @@ describe('push subscriptions', () => {
   });
 
   it('stops sending after unsubscribing', async () => {
-    const home = await newHousehold(ctx.app, ZONE);
+    const home = await newHousehold(built.app, ZONE);
     const endpoint = standIns.push.newEndpoint();
     await home.agent.post('/api/push/subscriptions').send({ endpoint, keys: browserPushKeys().keys });
     expect((await home.agent.delete('/api/push/subscriptions').send({ endpoint })).status).toBe(204);
@@ -153,18 +153,18 @@ describe('push subscriptions', () => {
   });
 
   it('refuses a subscription that is not https and answers 401 when signed out', async () => {
-    const home = await newHousehold(ctx.app, ZONE);
+    const home = await newHousehold(built.app, ZONE);
     const bad = await home.agent.post('/api/push/subscriptions').send({ endpoint: 'http://example.test/push/1', keys: browserPushKeys().keys });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.endpoint).toMatch(/https/);
-    expect((await ctx.request.post('/api/push/subscriptions').send({ endpoint: standIns.push.newEndpoint(), keys: browserPushKeys().keys })).status).toBe(401);
+    expect((await built.request.post('/api/push/subscriptions').send({ endpoint: standIns.push.newEndpoint(), keys: browserPushKeys().keys })).status).toBe(401);
   });
 
   it('keeps the VAPID keys it made on first start, and lets the environment override them', async () => {
-    const first = (await ctx.request.get('/api/push/public-key')).body.publicKey;
+    const first = (await built.request.get('/api/push/public-key')).body.publicKey;
     expect(first).toMatch(/^B[A-Za-z0-9_-]{86}$/);
     expect(((await AppSetting.findByPk('vapid-keys'))!.value as VapidKeys).publicKey).toBe(first);
-    expect((await loadVapidKeys(ctx.ctx.config)).publicKey).toBe(first);
+    expect((await loadVapidKeys(built.ctx.config)).publicKey).toBe(first);
     const fromEnvironment = webpush.generateVAPIDKeys();
     const config = loadConfig({ ...process.env, NODE_ENV: 'test', VAPID_PUBLIC_KEY: fromEnvironment.publicKey, VAPID_PRIVATE_KEY: fromEnvironment.privateKey });
     expect((await loadVapidKeys(config)).publicKey).toBe(fromEnvironment.publicKey);
@@ -173,13 +173,13 @@ describe('push subscriptions', () => {
 
 describe('notification settings', () => {
   it('starts from the defaults: 2 days before, e-mail on', async () => {
-    const home = await newHousehold(ctx.app, ZONE);
+    const home = await newHousehold(built.app, ZONE);
     const response = await home.agent.get('/api/me/notifications');
     expect(response.body.settings).toEqual({ emailReminders: true, weeklyDigest: true, reminderHour: 8, daysBefore: 2, pushDevices: 0 });
   });
 
   it('refuses an hour outside 0-23 naming the field', async () => {
-    const home = await newHousehold(ctx.app, ZONE);
+    const home = await newHousehold(built.app, ZONE);
     const response = await home.agent.patch('/api/me/notifications').send({ reminderHour: 24 });
     expect(response.status).toBe(400);
     expect(response.body.error.fields.reminderHour).toMatch(/0 to 23/);

@@ -6,7 +6,7 @@ import { FridgeCountdowns } from '@/features/today/components/fridge-countdowns'
 import { MyTodos } from '@/features/today/components/my-todos';
 import { RestockGlance } from '@/features/today/components/restock-glance';
 import { TodaySection } from '@/features/today/components/today-section';
-import { UseToday } from '@/features/today/components/jars-for-today';
+import { JarsForToday } from '@/features/today/components/jars-for-today';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 
 export function TodayRoute() {
@@ -26,7 +26,7 @@ export function TodayRoute() {
       {view && (
         <div className="grid gap-4 lg:grid-cols-2">
           <TodaySection id="today-use" title="Open and use today" more={{ to: `/h/${hid}/week`, label: 'Week' }}>
-            <UseToday use={view.use} short={view.short} />
+            <JarsForToday use={view.use} short={view.short} />
           </TodaySection>
           <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: `/h/${hid}/fridge`, label: `All ${view.fridgeCount}` } : { to: `/h/${hid}/fridge`, label: 'Fridge' }}>
             <FridgeCountdowns jars={view.fridge} />

@@ -10,7 +10,7 @@ import { ApiError } from '@/lib/api-client';
 import { useSaveProduct } from '../api/save-product';
 import { heatWords, jarSizeName } from '../format';
 import { numberFrom } from '../number-from';
-import { PRODUCT_COLOUR_NAMES, ProductChip } from './colour-dot';
+import { PRODUCT_COLOUR_NAMES, ColourDot } from './colour-dot';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
@@ -104,7 +104,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
           {PRODUCT_COLOURS.map((colour) => (
             <label key={colour} className="flex min-h-11 items-center gap-2 rounded-lg border border-line bg-surface px-3">
               <input type="radio" name="colour" className="h-5 w-5 accent-action" checked={form.colour === colour} onChange={() => setForm({ ...form, colour })} />
-              <ProductChip colour={colour} />
+              <ColourDot colour={colour} />
               {PRODUCT_COLOUR_NAMES[colour]}
             </label>
           ))}

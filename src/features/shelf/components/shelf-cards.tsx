@@ -5,7 +5,7 @@ import { useActOnJar } from '../api/act-on-jar';
 import { jarSizeName, longDate } from '../format';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
-import { ProductChip } from './colour-dot';
+import { ColourDot } from './colour-dot';
 
 export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
   const act = useActOnJar(hid);
@@ -16,7 +16,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
           <div className="flex items-start justify-between gap-3">
             <div className="min-w-0">
               <h2 className="flex items-center gap-2 text-lg">
-                <ProductChip colour={group.product.colour} />
+                <ColourDot colour={group.product.colour} />
                 <span className="truncate" title={group.product.name}>
                   {group.product.name}
                 </span>

@@ -7,7 +7,7 @@ import { CheckboxField, SelectField } from '@/components/ui/field';
 import { jarSizeName, longDate } from '../format';
 import type { ShelfBatchRow } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
-import { ProductChip } from './colour-dot';
+import { ColourDot } from './colour-dot';
 
 const column = createColumnHelper<ShelfBatchRow>();
 const HIDDEN_COLUMNS = { pastBestQuality: false };
@@ -22,7 +22,7 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
       header: 'Product',
       cell: (info) => (
         <Link to={`/h/${hid}/batches/${info.row.original.batchId}`} className="flex min-h-11 items-center gap-2 font-bold text-action underline-offset-4 hover:underline">
-          <ProductChip colour={info.row.original.productColour} />
+          <ColourDot colour={info.row.original.productColour} />
           {info.getValue()}
         </Link>
       ),

@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/notice';
 const SLOT_NAMES = { breakfast: 'Breakfast', lunch: 'Lunch', dinner: 'Dinner', snack: 'Snack' } as const;
 
 /** What to open and use today, meal by meal, from the week's allocation. */
-export function UseToday({ use, short }: Pick<TodayView, 'use' | 'short'>) {
+export function JarsForToday({ use, short }: Pick<TodayView, 'use' | 'short'>) {
   if (use.length === 0) return <p className="text-ink-muted">No jars are paired with today’s meals. Pair a product with a meal on the Week to see it here.</p>;
   const openings = use.filter((portion) => portion.opensToday);
   return (

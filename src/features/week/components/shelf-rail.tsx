@@ -1,7 +1,7 @@
 import { useDraggable } from '@dnd-kit/core';
 import type { WeekProduct } from '@shared/schemas/week';
 
-function ProductChip({ product, canEdit }: { product: WeekProduct; canEdit: boolean }) {
+function DraggableProduct({ product, canEdit }: { product: WeekProduct; canEdit: boolean }) {
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: `product:${product.id}`, data: { type: 'product', product }, disabled: !canEdit });
   const counts = [product.openedJars ? `${product.openedJars} open` : '', product.sealedJars ? `${product.sealedJars} sealed` : ''].filter(Boolean).join(', ');
   return (
@@ -48,7 +48,7 @@ export function ShelfRail({ products, canEdit }: { products: WeekProduct[]; canE
       ) : (
         <ul className="-mx-1 flex gap-1.5 overflow-x-auto px-1 pb-1 md:mx-0 md:grid md:max-h-72 md:grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] md:overflow-x-visible md:overflow-y-auto md:px-0 md:pr-1">
           {onShelf.map((product) => (
-            <ProductChip key={product.id} product={product} canEdit={canEdit} />
+            <DraggableProduct key={product.id} product={product} canEdit={canEdit} />
           ))}
         </ul>
       )}
