@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { SMTPServer } from 'smtp-server';
-import type { CaughtMail } from '../../shared/schemas/notifications';
+import type { CaughtMail } from '../../shared/schemas/caught-mail';
 import { decodeHeader, readMessage } from './mime';
 
 export type { CaughtMail };

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { acceptInvitationBody, invitationBody } from '../../shared/schemas/notifications';
+import { acceptInvitationBody, invitationBody } from '../../shared/schemas/invitations';
 import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';

@@ -1,6 +1,6 @@
 import { readdir, readFile } from 'node:fs/promises';
 import path from 'node:path';
-import type { CaughtMail } from '../../shared/schemas/notifications';
+import type { CaughtMail } from '../../shared/schemas/caught-mail';
 
 /** The newest messages the local catcher kept, for the development mailbox page. */
 export async function readCaughtMail(dir: string, limit = 50): Promise<CaughtMail[]> {

@@ -1,5 +1,5 @@
 import { daysBetween, UNSEALED_JAR_ADVICE } from '../../shared/domain';
-import type { FridgeJar, FridgeView } from '../../shared/schemas/notifications';
+import type { FridgeJar, FridgeView } from '../../shared/schemas/fridge';
 import { Jar } from '../db/models';
 import { allocatePlan, productsOf } from './plan-allocation';
 

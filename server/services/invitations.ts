@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, UniqueConstraintError } from 'sequelize';
-import type { AcceptedInvitation, InvitationBody, InvitationView } from '../../shared/schemas/notifications';
+import type { AcceptedInvitation, InvitationBody, InvitationView } from '../../shared/schemas/invitations';
 import { hashPassword } from '../auth/passwords';
 import type { AppContext } from '../context';
 import { Household, Invitation, Membership, User } from '../db/models';

@@ -1,6 +1,4 @@
 import { z } from 'zod';
-import { ROLES, type Role } from '../roles';
-import { email, newPassword, personName } from './auth';
 
 export const DEFAULT_DAYS_BEFORE = 2;
 export const DEFAULT_REMINDER_HOUR = 8;
@@ -39,62 +37,3 @@ export const pushSubscriptionBody = z.object({
 export type PushSubscriptionBody = z.infer<typeof pushSubscriptionBody>;
 
 export const pushUnsubscribeBody = z.object({ endpoint: z.string().min(1, 'Say which subscription to remove.').max(2000) });
-
-export const invitationBody = z.object({ email, role: z.enum(ROLES, { error: 'Choose keeper, cook or helper.' }) }).strict();
-export type InvitationBody = z.infer<typeof invitationBody>;
-
-/** Signed in: no body. Signed out: a new account for the invited address. */
-export const acceptInvitationBody = z.union([z.object({}).strict(), z.object({ name: personName, password: newPassword }).strict()]);
-
-export interface InvitationView {
-  id: string;
-  email: string;
-  role: Role;
-  invitedBy: string | null;
-  expiresAt: string;
-  createdAt: string;
-}
-
-export interface AcceptedInvitation {
-  householdId: string;
-  householdName: string;
-  role: Role;
-}
-
-export interface FridgeJar {
-  jarId: string;
-  code: string;
-  productId: string;
-  productName: string;
-  productColour: string;
-  openedOn: string;
-  useBy: string;
-  daysOpen: number;
-  /** negative once the use-by has passed */
-  daysLeft: number;
-  unsealed: boolean;
-  capacityTbsp: number;
-  remainingTbsp: number;
-  /** what the week's plan takes from this jar before its use-by */
-  plannedTbsp: number;
-  /** what will be left on the use-by day: the plan's estimate, or what is in the jar when nothing is planned */
-  estimateTbsp: number;
-  estimateFrom: 'plan' | 'jar';
-}
-
-export interface FridgeView {
-  today: string;
-  jars: FridgeJar[];
-  unsealedAdvice: string;
-}
-
-/** A message the local mail catcher kept (development and tests only). */
-export interface CaughtMail {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-}

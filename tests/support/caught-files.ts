@@ -1,6 +1,6 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import type { CaughtMail } from '../../shared/schemas/notifications';
+import type { CaughtMail } from '../../shared/schemas/caught-mail';
 import type { CaughtPush } from '../../dev/stand-ins/push-endpoint';
 
 function readAll<T>(dir: string): T[] {

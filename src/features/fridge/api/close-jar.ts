@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { FridgeView } from '@shared/schemas/notifications';
+import type { FridgeView } from '@shared/schemas/fridge';
 import { api } from '@/lib/api-client';
 import { fridgeKeys } from './get-fridge';
 

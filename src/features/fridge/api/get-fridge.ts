@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { FridgeView } from '@shared/schemas/notifications';
+import type { FridgeView } from '@shared/schemas/fridge';
 import { api } from '@/lib/api-client';
 
 export const fridgeKeys = { fridge: (hid: string) => ['households', hid, 'fridge'] as const };

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { count, shortDay } from '@shared/day-words';
-import type { FridgeJar } from '@shared/schemas/notifications';
+import type { FridgeJar } from '@shared/schemas/fridge';
 import { Button } from '@/components/ui/button';
 import type { ClosingAction } from '../api/close-jar';
 import { countdown } from './countdown';

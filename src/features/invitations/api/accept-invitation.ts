@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AcceptedInvitation } from '@shared/schemas/notifications';
+import type { AcceptedInvitation } from '@shared/schemas/invitations';
 import { authKeys } from '@/features/auth/api/get-me';
 import { api } from '@/lib/api-client';
 

@@ -1,5 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import type { CaughtMail } from '@shared/schemas/notifications';
+import type { CaughtMail } from '@shared/schemas/caught-mail';
 import { api } from '@/lib/api-client';
 
 /** Development only: the local mail catcher's messages; the server answers 404 elsewhere. */

@@ -1,5 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { InvitationBody, InvitationView } from '@shared/schemas/notifications';
+import type { InvitationBody, InvitationView } from '@shared/schemas/invitations';
 import { api } from '@/lib/api-client';
 
 export const invitationKeys = { pending: (hid: string) => ['households', hid, 'invitations'] as const };
