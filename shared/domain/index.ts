@@ -14,3 +14,5 @@ export * from './forecast';
 export * from './restock';
 export * from './jar-size-advice';
 export * from './validate';
+export * from './plan-waste';
+export * from './meal-proposal';
