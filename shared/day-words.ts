@@ -24,3 +24,6 @@ export function tbspPerDay(rate: number): string {
   const rounded = rate >= 1 ? Math.round(rate * 10) / 10 : Math.round(rate * 100) / 100;
   return `${rounded} tbsp a day`;
 }
+
+/** Index 0 = Sunday, as the household's week start and JavaScript's getDay count. */
+export const WEEKDAY_NAMES = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'] as const;

@@ -23,3 +23,8 @@ export const METHOD_NAMES: Record<Method, string> = {
   'pressure-dial': 'Pressure canner, dial gauge',
   'pressure-weighted': 'Pressure canner, weighted gauge',
 };
+
+/** "2,350 ft". */
+export function feet(altitudeFt: number): string {
+  return `${altitudeFt.toLocaleString('en-US')} ft`;
+}

@@ -1,7 +1,8 @@
 // The to-do part of the demo scenario: a few everyday jobs and one restock batch with its plan.
 import { addDays } from '../../shared/domain';
 import type { BatchPlan } from '../../shared/schemas/todos';
-import { composeBatchPlan, jarSizeFor, oneTestedBatch, restockTitle } from '../services/restock/todo-batch-plan';
+import { jarSizeFor, oneTestedBatch, restockTitle } from '../services/restock/todo-batch-plan';
+import { composeBatchPlan } from '../services/restock/todo-plan-numbers';
 import { Product, Recipe, Todo } from '../db/models';
 import type { DemoSeedContext } from './features';
 

@@ -10,7 +10,7 @@ type Column = [json: string, sql: string, type: string, ref?: BackupTable];
 
 /**
  * What a backup holds, table by table in insert order. People are left out (the importer becomes
- * the keeper), and so are photos, jar codes (they are unique across households) and who did what.
+ * the keeper), and so are photos and who did what. Label codes go in, and are kept on import where no jar holds them.
  */
 const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: false }[] = [
   {
@@ -49,7 +49,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['batchId', 'batch_id', 'uuid', 'batches'], ['productId', 'product_id', 'uuid', 'products'], ['state', 'state', 'varchar'],
       ['capacityTbsp', 'capacity_tbsp', 'numeric'], ['remainingTbsp', 'remaining_tbsp', 'numeric'], ['unsealed', 'unsealed', 'boolean'],
       ['bestBy', 'best_by', 'date'], ['openedOn', 'opened_on', 'date'], ['useBy', 'use_by', 'date'], ['finishedOn', 'finished_on', 'date'],
-      ['discardedOn', 'discarded_on', 'date'],
+      ['discardedOn', 'discarded_on', 'date'], ['code', 'code', 'varchar'],
     ],
   },
   {
@@ -126,12 +126,13 @@ export async function importHousehold(sequelize: Sequelize, backup: HouseholdBac
     return await sequelize.transaction(async (transaction) => {
       const household = await Household.create({ ...backup.household }, { transaction });
       await Membership.create({ householdId: household.id, userId: importerId, role: 'keeper' }, { transaction });
+      const takenCodes = await codesInUse(sequelize, transaction, backup.jars.map((jar) => jar.code).filter((code): code is string => Boolean(code)));
       const newIds = new Map<BackupTable, Map<string, string>>();
       const counts = {} as Record<BackupTable, number>;
       for (const spec of TABLES) {
         const rows = backup[spec.key] as Record<string, unknown>[];
         newIds.set(spec.key, new Map(rows.map((row) => [String(row.id), randomUUID()])));
-        const remapped = rows.map((row) => remap(spec.key, spec.columns, row, newIds));
+        const remapped = rows.map((row) => remap(spec.key, spec.columns, row, newIds, takenCodes));
         await insertRows(sequelize, transaction, spec, household.id, importerId, remapped);
         counts[spec.key] = rows.length;
       }
@@ -146,13 +147,24 @@ export async function importHousehold(sequelize: Sequelize, backup: HouseholdBac
   }
 }
 
-function remap(key: BackupTable, columns: Column[], row: Record<string, unknown>, newIds: Map<BackupTable, Map<string, string>>) {
+/** The backup's label codes some jar already carries; the rest stay on their jars, so a restored shelf needs no new labels. */
+async function codesInUse(sequelize: Sequelize, transaction: Transaction, codes: string[]): Promise<Set<string>> {
+  if (codes.length === 0) return new Set();
+  const rows = await sequelize.query<{ code: string }>('SELECT code FROM jars WHERE code = ANY($1::varchar[])', { bind: [codes], type: QueryTypes.SELECT, transaction });
+  return new Set(rows.map((row) => row.code));
+}
+
+function remap(key: BackupTable, columns: Column[], row: Record<string, unknown>, newIds: Map<BackupTable, Map<string, string>>, takenCodes: Set<string>) {
   const out: Record<string, unknown> = { ...row, id: newIds.get(key)!.get(String(row.id)) };
   for (const [json, , , ref] of columns) {
     if (!ref || row[json] === null) continue;
     out[json] = newId(newIds, ref, row[json], `${key}.${json}`);
   }
-  if (key === 'jars') out.code = newJarCode();
+  if (key === 'jars') {
+    const code = typeof row.code === 'string' ? row.code : null;
+    out.code = code && !takenCodes.has(code) ? code : newJarCode();
+    if (code) takenCodes.add(code);
+  }
   if (key === 'todos' && row.batchPlan) {
     const plan = row.batchPlan as Record<string, unknown>;
     out.batchPlan = { ...plan, productId: newId(newIds, 'products', plan.productId, 'todos.batchPlan.productId'), recipeId: newId(newIds, 'recipes', plan.recipeId, 'todos.batchPlan.recipeId') };
@@ -176,7 +188,6 @@ async function insertRows(
 ) {
   if (rows.length === 0) return;
   const columns: Column[] = [['id', 'id', 'uuid'], ...spec.columns];
-  if (spec.key === 'jars') columns.push(['code', 'code', 'varchar']);
   const createdBy = spec.key === 'batches' || spec.key === 'todos';
   const names = [...columns.map(([, sql]) => sql), 'household_id', ...(createdBy ? ['created_by'] : []), 'created_at', ...(spec.updatedAt === false ? [] : ['updated_at'])];
   const values = [...columns.map(([, sql]) => `r.${sql}`), '$2', ...(createdBy ? ['$3'] : []), 'now()', ...(spec.updatedAt === false ? [] : ['now()'])];

@@ -4,6 +4,7 @@ import type { Role } from '../../shared/roles';
 import type { BatchPlan, TodoCreate, TodoFilter, TodoPatch, TodoView } from '../../shared/schemas/todos';
 import { Household, Membership, Todo, User } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
+import { refreshPlans } from './restock/todo-plan-numbers';
 
 export function viewTodo(todo: Todo & { assignee?: User | null }): TodoView {
   return {
@@ -34,13 +35,14 @@ function whereFor(householdId: string, filter: TodoFilter, userId: string): Wher
 
 export async function listTodos(householdId: string, filter: TodoFilter, userId: string): Promise<TodoView[]> {
   const todos = await Todo.findAll({ where: whereFor(householdId, filter, userId), include: withAssignee, order: [['position', 'ASC']] });
-  return todos.map(viewTodo);
+  return refreshPlans(householdId, todos.map(viewTodo));
 }
 
 export async function findTodo(householdId: string, id: string): Promise<TodoView> {
   const todo = await Todo.findOne({ where: { id, householdId }, include: withAssignee });
   if (!todo) throw notFound('That to-do');
-  return viewTodo(todo);
+  const [view] = await refreshPlans(householdId, [viewTodo(todo)]);
+  return view;
 }
 
 /** Locks the household's list: the household row serialises adds, the todo rows are the ones moved. */

@@ -79,6 +79,8 @@ const jar = z.object({
   useBy: date.nullable(),
   finishedOn: date.nullable(),
   discardedOn: date.nullable(),
+  // Older files carry no label codes; the import then gives fresh ones.
+  code: z.string().regex(/^[0-9A-HJKMNP-TV-Z]{6}$/, 'A label code is 6 letters and digits.').optional(),
 });
 
 const jarEvent = z.object({

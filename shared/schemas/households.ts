@@ -50,6 +50,8 @@ export interface HouseholdView {
   weekStartsOn: number;
   cannerCapacityJars: number;
   defaultMethod: Method;
+  /** False until a keeper has confirmed the altitude: until then no processing plan is shown. */
+  altitudeConfirmed: boolean;
   role: Role;
 }
 

@@ -69,6 +69,8 @@ export interface BatchPlan {
   targetOn: string;
   targetWhy: string;
   plannedOn: string;
+  /** Filled in on every read: what differs from the plan as first made (altitude, canner, recipe), in words. */
+  changes?: string[];
 }
 
 export interface TodoView {

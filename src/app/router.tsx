@@ -45,6 +45,7 @@ const router = createBrowserRouter([
           { path: 'products/:productId', lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }) },
           { path: 'restock', lazy: async () => ({ Component: (await import('./routes/restock')).RestockRoute }) },
           { path: 'todo', lazy: async () => ({ Component: (await import('./routes/todo')).TodoRoute }) },
+          { path: 'setup', lazy: async () => ({ Component: (await import('./routes/setup')).SetupRoute }) },
           { path: 'household', lazy: async () => ({ Component: (await import('./routes/household')).HouseholdRoute }) },
           { path: 'household/mail', lazy: async () => ({ Component: (await import('./routes/dev-mail')).DevMailRoute }) },
         ],

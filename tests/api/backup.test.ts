@@ -36,7 +36,8 @@ function byContent(backup: HouseholdBackup) {
   const tables: Record<string, string[]> = {};
   for (const [table, refs] of REFS) {
     const rows = (backup[table] as Record<string, unknown>[]).map((row) => {
-      const { id, ...rest } = row;
+      // Label codes are kept only where free, so two households' copies differ in them.
+      const { id, code: _code, ...rest } = row;
       for (const [column, target] of Object.entries(refs)) if (rest[column] !== null) rest[column] = `${target}:${names.get(String(rest[column]))}`;
       if (rest.batchPlan) {
         const plan = rest.batchPlan as Record<string, unknown>;
@@ -92,6 +93,28 @@ describe('household backup', () => {
     expect(members.body.members).toEqual([expect.objectContaining({ email: 'neighbor@larderly.test', role: 'keeper' })]);
     // The first household cannot see the copy.
     expect((await keeper.get(`/api/households/${newId}/products`)).status).toBe(404);
+  });
+
+  it('keeps each jar’s label code on import when no jar holds it, and gives a fresh one when one does', async () => {
+    const neighbour = await ctx.signedIn('neighbor@larderly.test');
+    const codes = (b: HouseholdBackup) => b.jars.map((jar) => jar.code).sort();
+    expect(codes(exported).every((code) => /^[0-9A-HJKMNP-TV-Z]{6}$/.test(code ?? '')), 'the export carries every label code').toBe(true);
+
+    // The first household still holds its codes, so its copy gets fresh ones.
+    const first = await neighbour.post('/api/households/import').send(exported);
+    expect(first.status, first.text).toBe(201);
+    const copy = (await neighbour.get(`/api/households/${first.body.household.id}/backup`)).body as HouseholdBackup;
+    expect(codes(copy).filter((code) => codes(exported).includes(code))).toEqual([]);
+
+    // The copy is lost (its rows gone), then restored from its backup: the labels on its jars still open them.
+    await ctx.sequelize.query('DELETE FROM households WHERE id = $1', { bind: [first.body.household.id] });
+    const restored = await neighbour.post('/api/households/import').send(copy);
+    expect(restored.status, restored.text).toBe(201);
+    const again = (await neighbour.get(`/api/households/${restored.body.household.id}/backup`)).body as HouseholdBackup;
+    expect(codes(again)).toEqual(codes(copy));
+    const someJar = copy.jars[0]!;
+    const opened = await neighbour.get(`/api/jars/by-code/${someJar.code}`);
+    expect(opened.status, opened.text).toBe(200);
   });
 
   it('refuses a file that does not fit together and writes nothing', async () => {

@@ -8,7 +8,7 @@ export const BENCH_EMAIL = 'bench-keeper@larderly.test';
 export const BENCH_PASSWORD = 'bench household password';
 
 export async function generateHousehold(today: string) {
-  const household = await Household.create({ name: 'Bench Holler', timeZone: 'America/New_York', altitudeFt: 1200 });
+  const household = await Household.create({ name: 'Bench Holler', timeZone: 'America/New_York', altitudeFt: 1200, altitudeConfirmedAt: new Date() });
   const hid = household.id;
   const people = await User.bulkCreate(
     ['Keeper', 'Cook', 'Helper'].map((role, i) => ({ email: i === 0 ? BENCH_EMAIL : `bench-${role.toLowerCase()}@larderly.test`, name: `Bench ${role}`, passwordHash: '' })),

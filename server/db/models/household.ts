@@ -13,6 +13,8 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
   declare weekStartsOn: CreationOptional<number>;
   declare cannerCapacityJars: CreationOptional<number>;
   declare defaultMethod: CreationOptional<Method>;
+  /** When a keeper last confirmed the altitude; null means no processing plan may be shown yet. */
+  declare altitudeConfirmedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -27,6 +29,7 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
       weekStartsOn: this.weekStartsOn,
       cannerCapacityJars: this.cannerCapacityJars,
       defaultMethod: this.defaultMethod,
+      altitudeConfirmed: this.altitudeConfirmedAt !== null && this.altitudeConfirmedAt !== undefined,
     };
   }
 
@@ -42,6 +45,7 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
         weekStartsOn: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         cannerCapacityJars: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 },
         defaultMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
+        altitudeConfirmedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

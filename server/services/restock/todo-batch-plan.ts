@@ -1,22 +1,14 @@
 // A restock to-do's batch plan: the tested recipe scaled to the jars wanted, processed for this household.
 import type { Sequelize } from 'sequelize';
-import {
-  formatKitchenAmount,
-  jarFluidOunces,
-  processingPlan,
-  restockSuggestions,
-  scaleRecipe,
-  type JarSize,
-  type RestockReason,
-  type ScaledIngredient,
-} from '../../../shared/domain';
+import { jarFluidOunces, restockSuggestions, type JarSize } from '../../../shared/domain';
 import { count } from '../../../shared/day-words';
 import { JAR_SIZE_NAMES } from '../../../shared/jar-size-names';
-import type { BatchPlan, RestockTodoCreate, ShoppingItem, TodoView } from '../../../shared/schemas/todos';
+import type { BatchPlan, RestockTodoCreate, TodoView } from '../../../shared/schemas/todos';
 import { Batch, Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
+import { composeBatchPlan } from './todo-plan-numbers';
 import { todayIn } from '../clock';
-import { targetDate } from './harvest-target';
+import { requireConfirmedAltitude } from '../households';
 import { stockSnapshot } from './stock-snapshot';
 import { createTodo } from '../todos';
 
@@ -50,75 +42,13 @@ export function oneTestedBatch(recipe: Recipe, jarSize: JarSize): number {
   return Math.max(1, Math.ceil((recipe.yieldJars * jarFluidOunces(recipe.yieldJarSize)) / jarFluidOunces(jarSize)));
 }
 
-function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
-  const amount = formatKitchenAmount(ingredient.amount, ingredient.unit);
-  return { name: ingredient.name, role: ingredient.role, amount: ingredient.amount, unit: ingredient.unit, text: `${amount} ${ingredient.name}`.trim() };
-}
-
-function cannerLoads(jars: number, capacity: number): number[] {
-  const loads = Array.from({ length: Math.floor(jars / capacity) }, () => capacity);
-  return jars % capacity ? [...loads, jars % capacity] : loads;
-}
-
-interface PlanQuestion {
-  household: Household;
-  product: Product;
-  recipe: Recipe;
-  today: string;
-  jars: number;
-  jarSize: JarSize;
-  reason: RestockReason | null;
-  runOutOn: string | null;
-}
-
-/** The batch plan for a count of jars, or a refusal where no tested process fits this household. */
-export function composeBatchPlan({ household, product, recipe, today, jars, jarSize, reason, runOutOn }: PlanQuestion): BatchPlan {
-  const scaled = scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients, kind: product.kind }, { jars, jarSize });
-  const processing = processingPlan({
-    method: recipe.method,
-    altitudeFt: household.altitudeFt,
-    jarSize,
-    baseMinutes: recipe.baseMinutes[jarSize]!,
-    ph: recipe.ph ?? undefined,
-    acidified: recipe.acidified,
-    altitudeTable: recipe.altitudeTable ?? undefined,
-  });
-  if (!processing.allowed) {
-    throw refuse(`There is no tested process for this batch at ${household.altitudeFt.toLocaleString('en-US')} ft: ${processing.reasons.join(' ')}`);
-  }
-  const target = targetDate(today, product.harvestMonths, runOutOn);
-  return {
-    productId: product.id,
-    productName: product.name,
-    recipeId: recipe.id,
-    recipeName: recipe.name,
-    recipeSource: recipe.source,
-    reason,
-    jars,
-    jarSize,
-    method: recipe.method,
-    altitudeFt: household.altitudeFt,
-    headspaceInches: recipe.headspaceInches,
-    scaled,
-    processing,
-    // Flat lids seal once (common practice); bands and jars are reused.
-    equipment: { jars, newLids: jars, cannerCapacityJars: household.cannerCapacityJars, cannerLoads: cannerLoads(jars, household.cannerCapacityJars) },
-    shopping: {
-      produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
-      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
-    },
-    targetOn: target.targetOn,
-    targetWhy: target.why,
-    plannedOn: today,
-  };
-}
-
 export function restockTitle(plan: BatchPlan): string {
   return `Make ${count(plan.jars, `${JAR_SIZE_NAMES[plan.jarSize]} jar`)} of ${plan.productName}`;
 }
 
 /** Makes the restock to-do, or refuses with what to do first. */
 export async function addRestockTodo(sequelize: Sequelize, household: Household, userId: string, productId: string, input: RestockTodoCreate): Promise<TodoView> {
+  requireConfirmedAltitude(household);
   const product = await Product.findOne({ where: { id: productId, householdId: household.id } });
   if (!product) throw notFound('That product');
   const recipe = await chooseRecipe(product);

@@ -5,6 +5,7 @@ import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/sch
 import { Batch, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
+import { requireConfirmedAltitude } from '../households';
 import { findProduct } from './products';
 import { findRecipe } from './recipes';
 import { batchView, jarView, shelfClock } from './views';
@@ -15,11 +16,13 @@ export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError 
 }
 
 export async function previewPlan(household: Household, recipeId: string, jarSize: JarSize, method: Method) {
+  requireConfirmedAltitude(household);
   const recipe = await findRecipe(household.id, recipeId);
   return recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt });
 }
 
 export async function createBatch(sequelize: Sequelize, household: Household, input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number }, userId: string): Promise<BatchCreated> {
+  requireConfirmedAltitude(household);
   const [product, recipe] = await Promise.all([findProduct(household.id, input.productId), findRecipe(household.id, input.recipeId)]);
   if (recipe.productId !== product.id) {
     throw new AppError(400, 'invalid_input', 'That recipe makes another product. Choose a recipe for this product.', { recipeId: 'This recipe is for another product.' });

@@ -8,6 +8,7 @@ import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
 import { Product, Recipe, type Household } from '../../db/models';
 import { AppError } from '../../http/errors';
 import { todayIn } from '../clock';
+import { requireConfirmedAltitude } from '../households';
 import { withFreshJarCodes, writeBatch } from './write-batch';
 
 export const IMPORT_COLUMNS = ['product', 'recipe', 'canned_on', 'jar_size', 'jars_filled', 'jars_sealed', 'method', 'minutes', 'notes'] as const;
@@ -42,6 +43,7 @@ const rowSchema = z
 const sheetRow = (index: number) => index + 2;
 
 export async function checkImport(household: Household, csv: string) {
+  requireConfirmedAltitude(household);
   const parsed = Papa.parse<Record<string, string>>(csv.replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: 'greedy', transformHeader: (h) => h.trim().toLowerCase() });
   const problems: ImportProblem[] = [];
   const columns = parsed.meta.fields ?? [];

@@ -4,6 +4,7 @@ import { SCREENS } from '@/app/screens';
 import { Brand } from '@/components/ui/brand';
 import { ScreenIcon } from './screen-icon';
 import { useLogout } from '@/features/auth/api/logout';
+import { SetupBanner } from '@/features/households/components/setup-banner';
 import { HouseholdSwitcher } from '@/features/households/components/household-switcher';
 import { rememberHousehold, useCurrentHousehold } from '@/features/households/use-current-household';
 
@@ -61,6 +62,7 @@ export function AppLayout() {
           </div>
         </header>
         <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-5 sm:px-6">
+          <SetupBanner hid={hid} />
           <Outlet />
         </main>
       </div>

@@ -3,6 +3,7 @@ import { can } from '@shared/roles';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
 import { useHousehold } from '@/features/households/api/get-household';
+import { AltitudeGate } from '@/features/households/components/altitude-gate';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
@@ -24,7 +25,9 @@ export function NewBatchRoute() {
         </Notice>
       )}
       {household.data && products.data && recipes.data ? (
-        <NewBatchForm household={household.data} products={products.data} recipes={recipes.data} />
+        <AltitudeGate hid={hid}>
+          <NewBatchForm household={household.data} products={products.data} recipes={recipes.data} />
+        </AltitudeGate>
       ) : (
         !failed && <p className="text-ink-muted">Getting the recipes…</p>
       )}

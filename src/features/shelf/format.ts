@@ -13,9 +13,7 @@ export function jarSizeName(size: JarSize): string {
   return JAR_SIZE_NAMES[size];
 }
 
-export function feet(altitudeFt: number): string {
-  return `${altitudeFt.toLocaleString('en-US')} ft`;
-}
+export { feet } from '@shared/shelf-words';
 
 export function heatWords(heat: number): string {
   return ['not hot', 'a little warm', 'warm', 'hot', 'very hot', 'fiery'][heat] ?? `heat ${heat}`;

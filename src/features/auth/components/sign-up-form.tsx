@@ -15,7 +15,7 @@ export function SignUpForm() {
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    signup.mutate(form, { onSuccess: (me) => navigate(`/h/${me.memberships[0].householdId}`, { replace: true }) });
+    signup.mutate(form, { onSuccess: (me) => navigate(`/h/${me.memberships[0].householdId}/setup`, { replace: true }) });
   }
 
   return (

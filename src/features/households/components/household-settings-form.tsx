@@ -5,8 +5,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useUpdateHousehold } from '../api/update-household';
-
-const TIME_ZONES = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : ['UTC'];
+import { TimeZoneField } from './time-zone-field';
 
 export function HouseholdSettingsForm({ household, canEdit }: { household: HouseholdView; canEdit: boolean }) {
   const update = useUpdateHousehold(household.id);
@@ -42,13 +41,7 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
           <option value="us">US customary (cups, pints, quarts)</option>
           <option value="metric">Metric (millilitres, litres)</option>
         </SelectField>
-        <SelectField label="Time zone" value={form.timeZone} onChange={(e) => setForm({ ...form, timeZone: e.target.value })} error={error?.fields.timeZone}>
-          {TIME_ZONES.map((zone) => (
-            <option key={zone} value={zone}>
-              {zone.replaceAll('_', ' ')}
-            </option>
-          ))}
-        </SelectField>
+        <TimeZoneField value={form.timeZone} onChange={(e) => setForm({ ...form, timeZone: e.target.value })} error={error?.fields.timeZone} />
         <TextField
           label="Best quality (months after canning)"
           inputMode="numeric"

@@ -2,6 +2,7 @@ import { formatKitchenAmount, JAR_SIZES } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { METHOD_NAMES } from '@shared/shelf-words';
 import { Card } from '@/components/ui/page';
+import { AltitudeGate } from '@/features/households/components/altitude-gate';
 import { jarSizeName } from '../format';
 import { ScalingTool } from './scaling-tool';
 
@@ -59,7 +60,9 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
         )}
       </Card>
       <Card>
-        <ScalingTool hid={hid} recipe={recipe} altitudeFt={altitudeFt} />
+        <AltitudeGate hid={hid}>
+          <ScalingTool hid={hid} recipe={recipe} altitudeFt={altitudeFt} />
+        </AltitudeGate>
       </Card>
     </div>
   );

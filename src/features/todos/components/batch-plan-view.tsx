@@ -49,6 +49,17 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
         <p className="text-ink-muted">{plan.targetWhy}</p>
       </div>
 
+      {plan.changes && plan.changes.length > 0 && (
+        <Notice tone="soon" title={`Updated since it was planned on ${shortDay(plan.plannedOn)}`} role="status">
+          <ul className="list-disc pl-5">
+            {plan.changes.map((change) => (
+              <li key={change}>{change}</li>
+            ))}
+          </ul>
+          <p className="mt-1">Every number below is for the household and recipe as they are now.</p>
+        </Notice>
+      )}
+
       <section aria-labelledby="plan-equipment">
         <h3 id="plan-equipment" className="mb-1 text-lg">
           Jars and canner
@@ -88,7 +99,17 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
         <h3 id="plan-processing" className="mb-1 text-lg">
           Processing
         </h3>
-        <p className="font-bold">{processingWords(plan)}</p>
+        {plan.processing.allowed ? (
+          <p className="font-bold">{processingWords(plan)}</p>
+        ) : (
+          <Notice tone="past" title="Not allowed: no tested process for this plan now" role="alert">
+            <ul className="list-disc pl-5">
+              {plan.processing.reasons.map((reason) => (
+                <li key={reason}>{reason}</li>
+              ))}
+            </ul>
+          </Notice>
+        )}
         <p>Headspace: {HEADSPACE_NAMES[String(plan.headspaceInches)] ?? plan.headspaceInches} inch.</p>
         <h4 className="mt-2 font-bold">After processing</h4>
         <ol className="list-decimal pl-5">
@@ -106,7 +127,7 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
         </ul>
       </Notice>
 
-      {canRecord && (
+      {canRecord && plan.processing.allowed && (
         <Link to={recordHref} className="inline-flex min-h-11 items-center justify-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
           Record this batch
         </Link>

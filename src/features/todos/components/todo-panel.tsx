@@ -1,6 +1,7 @@
 import { useEffect, useRef } from 'react';
 import type { MemberView } from '@shared/schemas/households';
 import type { TodoView } from '@shared/schemas/todos';
+import { AltitudeGate } from '@/features/households/components/altitude-gate';
 import { BatchPlanView } from './batch-plan-view';
 import { TodoEditor } from './todo-editor';
 
@@ -36,7 +37,11 @@ export function TodoPanel({ hid, todo, members, canEdit, onClose }: Props) {
         </button>
       </div>
       <div className="flex flex-col gap-6 px-5 py-4">
-        {todo.batchPlan && <BatchPlanView hid={hid} todoId={todo.id} plan={todo.batchPlan} canRecord={canEdit && !todo.done} />}
+        {todo.batchPlan && (
+          <AltitudeGate hid={hid}>
+            <BatchPlanView hid={hid} todoId={todo.id} plan={todo.batchPlan} canRecord={canEdit && !todo.done} />
+          </AltitudeGate>
+        )}
         {canEdit ? (
           <details open={!todo.batchPlan} className="rounded-card border border-line bg-surface p-4">
             <summary className="min-h-11 cursor-pointer content-center font-bold">{todo.batchPlan ? 'Edit the to-do' : 'Details'}</summary>

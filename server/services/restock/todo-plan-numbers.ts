@@ -1,0 +1,131 @@
+// The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
+import { recipeProcessingPlan } from '../../../shared/processing-plan';
+import { formatKitchenAmount, scaleRecipe, type JarSize, type RestockReason, type ScaledIngredient } from '../../../shared/domain';
+import { shortDay } from '../../../shared/day-words';
+import { feet, METHOD_NAMES } from '../../../shared/shelf-words';
+import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
+import { Household, Product, Recipe } from '../../db/models';
+import { AppError, notFound } from '../../http/errors';
+import { targetDate } from './harvest-target';
+
+function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
+  const amount = formatKitchenAmount(ingredient.amount, ingredient.unit);
+  return { name: ingredient.name, role: ingredient.role, amount: ingredient.amount, unit: ingredient.unit, text: `${amount} ${ingredient.name}`.trim() };
+}
+
+function cannerLoads(jars: number, capacity: number): number[] {
+  const loads = Array.from({ length: Math.floor(jars / capacity) }, () => capacity);
+  return jars % capacity ? [...loads, jars % capacity] : loads;
+}
+
+export interface PlanQuestion {
+  household: Household;
+  product: Product;
+  recipe: Recipe;
+  today: string;
+  jars: number;
+  jarSize: JarSize;
+  reason: RestockReason | null;
+  runOutOn: string | null;
+}
+
+/** The batch plan for a count of jars, worked out for the household as it is now; its processing may be refused. */
+function planFor({ household, product, recipe, today, jars, jarSize, reason, runOutOn }: PlanQuestion): BatchPlan {
+  const scaled = scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients, kind: product.kind }, { jars, jarSize });
+  const processing = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt: household.altitudeFt });
+  const target = targetDate(today, product.harvestMonths, runOutOn);
+  return {
+    productId: product.id,
+    productName: product.name,
+    recipeId: recipe.id,
+    recipeName: recipe.name,
+    recipeSource: recipe.source,
+    reason,
+    jars,
+    jarSize,
+    method: recipe.method,
+    altitudeFt: household.altitudeFt,
+    headspaceInches: recipe.headspaceInches,
+    scaled,
+    processing,
+    // Flat lids seal once (common practice); bands and jars are reused.
+    equipment: { jars, newLids: jars, cannerCapacityJars: household.cannerCapacityJars, cannerLoads: cannerLoads(jars, household.cannerCapacityJars) },
+    shopping: {
+      produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
+      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
+    },
+    targetOn: target.targetOn,
+    targetWhy: target.why,
+    plannedOn: today,
+  };
+}
+
+/** The batch plan for a count of jars, or a refusal where no tested process fits this household. */
+export function composeBatchPlan(question: PlanQuestion): BatchPlan {
+  const plan = planFor(question);
+  if (!plan.processing.allowed) {
+    throw new AppError(422, 'not_allowed', `There is no tested process for this batch at ${question.household.altitudeFt.toLocaleString('en-US')} ft: ${plan.processing.reasons.join(' ')}`);
+  }
+  return plan;
+}
+
+function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
+  const { minutes, pressurePsi, allowed } = plan.processing;
+  if (!allowed) return 'no tested process';
+  return pressurePsi !== null ? `${minutes} minutes at ${pressurePsi} psi` : `${minutes} minutes`;
+}
+
+/** What differs between a plan as made and as worked out now, in words a cook reads on canning day. */
+export function planChanges(made: BatchPlan, now: BatchPlan): string[] {
+  const since = `when it was planned on ${shortDay(made.plannedOn)}`;
+  const changes: string[] = [];
+  if (made.altitudeFt !== now.altitudeFt) changes.push(`The household’s altitude is now ${feet(now.altitudeFt)} (it was ${feet(made.altitudeFt)} ${since}).`);
+  if (processingWords(made) !== processingWords(now)) changes.push(`Processing is now ${processingWords(now)} (it was ${processingWords(made)}).`);
+  if (made.method !== now.method) changes.push(`The recipe now uses a ${METHOD_NAMES[now.method].toLowerCase()} (it was a ${METHOD_NAMES[made.method].toLowerCase()}).`);
+  if (made.equipment.cannerCapacityJars !== now.equipment.cannerCapacityJars) {
+    changes.push(`Your canner now holds ${now.equipment.cannerCapacityJars} jars a load (it was ${made.equipment.cannerCapacityJars}), so the loads are ${now.equipment.cannerLoads.join(' + ')}.`);
+  }
+  const ingredients = (plan: BatchPlan) => JSON.stringify([...plan.shopping.produce, ...plan.shopping.pantry].map((item) => item.text));
+  if (ingredients(made) !== ingredients(now) || made.headspaceInches !== now.headspaceInches || made.recipeName !== now.recipeName) {
+    changes.push(`The recipe “${now.recipeName}” was edited since; the amounts below follow it as it is now.`);
+  }
+  return changes;
+}
+
+/** A plan whose recipe or product is gone: its numbers cannot be trusted, so its processing is refused with the reason. */
+function orphaned(made: BatchPlan, why: string): BatchPlan {
+  return {
+    ...made,
+    processing: { ...made.processing, allowed: false, minutes: null, pressurePsi: null, altitudeAddMinutes: null, reasons: [why] },
+    changes: [why],
+  };
+}
+
+/**
+ * Restock to-dos keep the plan as made; every read works it out again for the household's altitude, canner and
+ * recipe as they are now, and says what changed, so canning day never follows stale numbers.
+ */
+export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(householdId: string, views: T[]): Promise<T[]> {
+  const planned = views.filter((view) => view.batchPlan);
+  if (planned.length === 0) return views;
+  const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
+  const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
+  const [household, recipes, products] = await Promise.all([
+    Household.findByPk(householdId),
+    Recipe.findAll({ where: { householdId, id: recipeIds } }),
+    Product.findAll({ where: { householdId, id: productIds } }),
+  ]);
+  if (!household) throw notFound('That household');
+  return views.map((view) => {
+    const made = view.batchPlan;
+    if (!made) return view;
+    const recipe = recipes.find((r) => r.id === made.recipeId);
+    const product = products.find((p) => p.id === made.productId);
+    if (!recipe || !product) return { ...view, batchPlan: orphaned(made, 'The recipe or product this plan was made from has been removed; plan the batch again from Restock.') };
+    const now = planFor({ household, product, recipe, today: made.plannedOn, jars: made.jars, jarSize: made.jarSize, reason: made.reason, runOutOn: null });
+    const fresh: BatchPlan = { ...now, targetOn: made.targetOn, targetWhy: made.targetWhy, changes: planChanges(made, now) };
+    if (!household.altitudeConfirmedAt) return { ...view, batchPlan: orphaned(fresh, 'Confirm the household’s altitude first: processing depends on it.') };
+    return { ...view, batchPlan: fresh };
+  });
+}
+
