@@ -60,14 +60,15 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   api.use(sameOriginOnly(config.appOrigins));
   api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
   api.use(passport.session());
-  api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit: options.authLimit ?? config.authRateLimit }));
+  const authLimit = options.authLimit ?? config.authRateLimit;
+  api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit }));
   api.use('/households', householdsRouter(sequelize));
   api.use('/households', backupImportRouter(ctx));
   api.use('/jars', jarCodesRouter());
   api.use('/households/:hid', householdFeatureRouters(ctx));
   api.use('/push', pushRouter(ctx));
   api.use('/me', meNotificationsRouter());
-  api.use('/invitations', acceptInvitationRouter(ctx));
+  api.use('/invitations', acceptInvitationRouter(ctx, { authLimit }));
   api.use(notFoundHandler);
   app.use('/api', api);
 

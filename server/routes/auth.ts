@@ -1,11 +1,11 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
-import rateLimit from 'express-rate-limit';
 import passport from 'passport';
 import type { Sequelize } from 'sequelize';
 import { loginBody, signupBody } from '../../shared/schemas/auth';
 import { BAD_CREDENTIALS } from '../auth/passport';
 import { requireUser } from '../auth/guards';
 import { AppError } from '../http/errors';
+import { limit, MINUTE, passwordHashingLimit } from '../http/rate-limits';
 import { body } from '../http/validate';
 import { describeMe, signUp } from '../services/accounts';
 
@@ -31,22 +31,18 @@ function authenticate(req: Request, res: Response, next: NextFunction) {
 
 export function authRouter(options: { sequelize: Sequelize; bcryptCost: number; authLimit: number }) {
   const router = Router();
-  const limiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: options.authLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', 'Too many attempts. Wait 15 minutes, then try again.')),
-  });
+  // Failed sign-ins count, per address: a household signing in all day is never locked out.
+  const failedSignIns = limit(options.sequelize, 'failed-sign-in', { windowMs: 15 * MINUTE, limit: options.authLimit, what: 'attempts', failuresOnly: true });
+  const hashing = passwordHashingLimit(options.sequelize, options.authLimit);
 
-  router.post('/signup', limiter, async (req, res) => {
+  router.post('/signup', hashing, async (req, res) => {
     const input = body(req, signupBody);
     const user = await signUp(options.sequelize, input, options.bcryptCost);
     await signIn(req, user);
     res.status(201).json(await describeMe(user));
   });
 
-  router.post('/login', limiter, async (req, res, next) => {
+  router.post('/login', failedSignIns, async (req, res, next) => {
     body(req, loginBody);
     const user = await authenticate(req, res, next);
     await signIn(req, user);

@@ -33,7 +33,7 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(todayRouter());
   router.use(fridgeRouter());
   router.use(householdInvitationsRouter(ctx));
-  router.use(devMailRouter(ctx));
+  if (!ctx.config.isProduction) router.use(devMailRouter(ctx));
   router.use(householdBackupRouter(ctx));
   return router;
 }

@@ -1,12 +1,12 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, UniqueConstraintError } from 'sequelize';
-import type { AcceptedInvitation, InvitationBody, InvitationView } from '../../shared/schemas/invitations';
+import type { AcceptedInvitation, InvitationBody, InvitationPreview, InvitationView } from '../../shared/schemas/invitations';
 import { hashPassword } from '../auth/passwords';
 import type { AppContext } from '../context';
 import { Household, Invitation, Membership, User } from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
 import { clock } from './clock';
-import { invitationMail } from './mail/invitation-mail';
+import { invitationMail, invitationUsedElsewhereMail } from './mail/invitation-mail';
 
 export const INVITATION_DAYS = 7;
 
@@ -71,21 +71,56 @@ function refusal(invitation: Invitation | null): AppError {
   return new AppError(410, 'not_allowed', `This invitation expired on ${invitation.expiresAt.toISOString().slice(0, 10)}. Ask a keeper of the household to invite you again.`);
 }
 
+const isUsable = (invitation: Invitation | null): invitation is Invitation =>
+  Boolean(invitation && !invitation.acceptedAt && !invitation.revokedAt && invitation.expiresAt > clock.now());
+
+function stateOf(invitation: Invitation): InvitationPreview['state'] {
+  if (invitation.acceptedAt) return 'used';
+  if (invitation.revokedAt) return 'withdrawn';
+  return invitation.expiresAt <= clock.now() ? 'expired' : 'pending';
+}
+
+/** What the invitation page shows before anyone joins: who invited whom, to which household, and whether the link still works. */
+export async function preview(token: string): Promise<InvitationPreview> {
+  const invitation = await Invitation.findOne({ where: { tokenHash: hashToken(token) }, include: [{ model: Household, as: 'household', required: true }] });
+  if (!invitation) throw refusal(null);
+  const inviter = invitation.invitedBy ? await User.findByPk(invitation.invitedBy) : null;
+  const state = stateOf(invitation);
+  return {
+    householdName: invitation.household!.name,
+    inviterName: inviter?.name ?? null,
+    email: invitation.email,
+    role: invitation.role,
+    state,
+    expiresAt: invitation.expiresAt.toISOString(),
+    message: state === 'pending' ? null : refusal(invitation).message,
+  };
+}
+
+export type Invitee = { user: Express.User; confirmOtherAddress: boolean } | { name: string; password: string };
+
 /**
  * Joins the household with the invitation's role, as the signed-in person or as a new account
  * for the invited address; the token works once, even when two people try at the same moment.
+ * A signed-in person with another address joins only after confirming it, and the keeper is told.
  */
-export async function accept(
-  ctx: Pick<AppContext, 'sequelize' | 'config'>,
-  token: string,
-  who: { user: Express.User } | { name: string; password: string },
-): Promise<{ accepted: AcceptedInvitation; user: Express.User }> {
+export async function accept(ctx: Pick<AppContext, 'sequelize' | 'config' | 'mailer'>, token: string, who: Invitee): Promise<{ accepted: AcceptedInvitation; user: Express.User }> {
   const tokenHash = hashToken(token);
+  // The token first: a made-up link costs one indexed read, never a password hash.
+  const found = await Invitation.findOne({ where: { tokenHash } });
+  if (!isUsable(found)) throw refusal(found);
+  const otherAddress = 'user' in who && who.user.email.toLowerCase() !== found.email.toLowerCase();
+  if (otherAddress && !who.confirmOtherAddress) {
+    throw new AppError(409, 'conflict', `This invitation was sent to ${found.email}, and you are signed in as ${who.user.email}. Sign in with ${found.email}, or confirm that you want to join with this account; the keeper will be told.`, undefined, {
+      invitedEmail: found.email,
+    });
+  }
   const passwordHash = 'password' in who ? await hashPassword(who.password, ctx.config.bcryptCost) : null;
+  let joined: { accepted: AcceptedInvitation; user: Express.User };
   try {
-    return await ctx.sequelize.transaction(async (transaction) => {
+    joined = await ctx.sequelize.transaction(async (transaction) => {
       const invitation = await Invitation.findOne({ where: { tokenHash }, include: [{ model: Household, as: 'household', required: true }], transaction, lock: { level: transaction.LOCK.UPDATE, of: Invitation } });
-      if (!invitation || invitation.acceptedAt || invitation.revokedAt || invitation.expiresAt <= clock.now()) throw refusal(invitation);
+      if (!isUsable(invitation)) throw refusal(invitation);
       let user: Express.User;
       if ('user' in who) user = who.user;
       else {
@@ -104,5 +139,18 @@ export async function accept(
   } catch (error) {
     if (error instanceof UniqueConstraintError) throw conflict('That account or membership already exists. Sign in and open the link again.');
     throw error;
+  }
+  if (otherAddress) await tellKeepers(ctx, found, joined.user, joined.accepted.householdName);
+  return joined;
+}
+
+/** The keepers learn that their invitation was used by an account with another address. */
+async function tellKeepers(ctx: Pick<AppContext, 'config' | 'mailer'>, invitation: Invitation, joiner: Express.User, householdName: string) {
+  if (!ctx.mailer.enabled) return;
+  const keepers = await Membership.findAll({ where: { householdId: invitation.householdId, role: 'keeper' }, include: [{ model: User, as: 'user', required: true }] });
+  for (const keeper of keepers) {
+    await ctx.mailer
+      .send(invitationUsedElsewhereMail({ to: keeper.user!.email, householdName, invitedEmail: invitation.email, joinerName: joiner.name, joinerEmail: joiner.email, role: invitation.role, link: `${ctx.config.publicOrigin}/h/${invitation.householdId}/household` }))
+      .catch((error: Error) => console.warn(`larderly: the note to ${keeper.user!.email} about an invitation could not be sent: ${error.message}`));
   }
 }

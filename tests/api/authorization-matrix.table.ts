@@ -107,6 +107,7 @@ export const TABLE: Record<string, RouteRule> = {
   'POST /api/push/test': { access: 'signed-in' },
   'GET /api/me/notifications': { access: 'signed-in' },
   'PATCH /api/me/notifications': { access: 'signed-in', body: () => ({ reminderHour: 8 }) },
+  'GET /api/invitations/:token': { access: 'public' },
   'POST /api/invitations/:token/accept': { access: 'signed-in', body: () => ({}) },
   'POST /api/households/import': { access: 'signed-in', body: () => ({}) },
 

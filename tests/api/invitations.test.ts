@@ -3,9 +3,11 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { passwordWork } from '../../server/auth/passwords';
 import { Invitation } from '../../server/db/models';
 import { bareApp } from '../support/bare-app';
 import { newHousehold } from '../support/opened-jar';
+import { listRoutes } from '../support/routes';
 import { startStandIns, type StandIns } from '../support/stand-ins';
 
 let ctx: ReturnType<typeof bareApp>;
@@ -64,7 +66,7 @@ describe('invitations', () => {
   it('lets an existing person sign in and join with the role of the invitation', async () => {
     const keeper = await newHousehold(ctx.app, 'UTC');
     const other = await newHousehold(ctx.app, 'UTC');
-    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: other.email, role: 'helper' });
+    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: other.email.toUpperCase(), role: 'helper' });
     const signedOut = await request(ctx.app).post(`/api/invitations/${linkTokenFor(other.email)}/accept`).send({});
     expect(signedOut.status).toBe(401);
     const joined = await other.agent.post(`/api/invitations/${linkTokenFor(other.email)}/accept`).send({});
@@ -132,6 +134,77 @@ describe('invitations', () => {
     const response = await request(ctx.app).post(`/api/invitations/${'x'.repeat(43)}/accept`).send({ name: 'Nobody', password: 'not a real link' });
     expect(response.status).toBe(404);
     expect(response.body.error.message).toMatch(/not valid/);
+  });
+
+  it('refuses a signed-in account whose address is not the invited one, unless it confirms, and then tells the keepers', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const invitedEmail = freshAddress();
+    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: invitedEmail, role: 'cook' });
+    const token = linkTokenFor(invitedEmail);
+    const stranger = await newHousehold(ctx.app, 'UTC');
+
+    const refused = await stranger.agent.post(`/api/invitations/${token}/accept`).send({});
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.message).toContain(`sent to ${invitedEmail}`);
+    expect((await stranger.agent.get('/api/auth/me')).body.memberships).toHaveLength(1);
+    expect((await keeper.agent.get(`/api/households/${keeper.householdId}/members`)).body.members).toHaveLength(1);
+
+    const confirmed = await stranger.agent.post(`/api/invitations/${token}/accept`).send({ confirmOtherAddress: true });
+    expect(confirmed.status).toBe(200);
+    expect((await stranger.agent.get('/api/auth/me')).body.memberships.map((m: { householdId: string }) => m.householdId)).toContain(keeper.householdId);
+    const note = standIns.mail.to(keeper.email).at(-1);
+    expect(note?.subject).toBe(`Ada Fenwick joined Fenwick Cellar with an invitation sent to ${invitedEmail}`);
+    expect(note?.text).toContain(stranger.email);
+  });
+
+  it('looks the token up before hashing a password: a made-up link costs no hash', async () => {
+    const before = passwordWork().jobs;
+    const responses = await Promise.all(
+      Array.from({ length: 4 }, (_, i) => request(ctx.app).post(`/api/invitations/${'m'.repeat(40)}${i}/accept`).send({ name: 'Nobody', password: 'not a real link at all' })),
+    );
+    expect(responses.map((r) => r.status)).toEqual([404, 404, 404, 404]);
+    expect(passwordWork().jobs).toBe(before);
+  });
+
+  it('shows the invitation page who invited whom, to which household, and that a used link is used', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const email = freshAddress();
+    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email, role: 'helper' });
+    const token = linkTokenFor(email);
+    const pending = await request(ctx.app).get(`/api/invitations/${token}`);
+    expect(pending.status).toBe(200);
+    expect(pending.body.invitation).toMatchObject({ householdName: 'Fenwick Cellar', inviterName: 'Ada Fenwick', email, role: 'helper', state: 'pending', message: null });
+    await request.agent(ctx.app).post(`/api/invitations/${token}/accept`).send({ name: 'Tam Reed', password: 'quince and honey' });
+    const used = await request(ctx.app).get(`/api/invitations/${token}`);
+    expect(used.body.invitation).toMatchObject({ state: 'used', message: expect.stringMatching(/already been used/) });
+    expect((await request(ctx.app).get(`/api/invitations/${'z'.repeat(43)}`)).status).toBe(404);
+  });
+
+  it("shows a keeper only the caught mail of the household's members and their own, never another household's invitation", async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const outsider = await newHousehold(ctx.app, 'UTC');
+    const invitedElsewhere = freshAddress();
+    await keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email: invitedElsewhere, role: 'cook' });
+    await outsider.agent.post(`/api/households/${outsider.householdId}/invitations`).send({ email: keeper.email, role: 'helper' });
+    const seen = await outsider.agent.get(`/api/households/${outsider.householdId}/dev/mail`);
+    expect(seen.status).toBe(200);
+    const recipients = seen.body.messages.flatMap((m: { to: string[] }) => m.to);
+    expect(recipients).not.toContain(invitedElsewhere);
+    expect(recipients.every((to: string) => to === outsider.email)).toBe(true);
+    const own = await keeper.agent.get(`/api/households/${keeper.householdId}/dev/mail`);
+    expect(own.body.messages.map((m: { to: string[] }) => m.to[0])).toContain(keeper.email);
+    expect(own.body.messages.map((m: { to: string[] }) => m.to[0])).not.toContain(invitedElsewhere);
+  });
+
+  it('has no development mailbox route at all in production', () => {
+    const production = bareApp({ NODE_ENV: 'production', SESSION_SECRET: 'a'.repeat(40), MAIL_CATCHER_DIR: path.join(catcherDir, 'mail') });
+    try {
+      const paths = listRoutes(production.app).map((r) => r.path);
+      expect(paths.some((p) => p.endsWith('/dev/mail'))).toBe(false);
+      expect(listRoutes(ctx.app).some((r) => r.path.endsWith('/dev/mail'))).toBe(true);
+    } finally {
+      void production.close();
+    }
   });
 
   it('lists caught mail to a keeper on the development mailbox page, and refuses a helper', async () => {

@@ -13,3 +13,14 @@ export function invitationMail(input: { to: string; householdName: string; invit
   );
   return { to: input.to, subject, text, html };
 }
+
+/** To a keeper: their invitation was used by a signed-in account with another address, which confirmed it. */
+export function invitationUsedElsewhereMail(input: { to: string; householdName: string; invitedEmail: string; joinerName: string; joinerEmail: string; role: Role; link: string }): MailMessage {
+  const role = ROLE_LABELS[input.role].toLowerCase();
+  const subject = `${input.joinerName} joined ${input.householdName} with an invitation sent to ${input.invitedEmail}`;
+  const lead = `The invitation you sent to ${input.invitedEmail} was used by ${input.joinerName} (${input.joinerEmail}), who confirmed joining with that other address. They are now a ${role} of ${input.householdName}.`;
+  const advice = 'If you do not know this person, remove them from the household under Household, Members.';
+  const text = `${lead}\n\n${advice}\n${input.link}${TEXT_FOOTER}`;
+  const html = mailLayout(subject, `<p>${escapeHtml(lead)}</p><p>${escapeHtml(advice)}</p>${mailButton(input.link, 'Open Household')}`);
+  return { to: input.to, subject, text, html };
+}
