@@ -1,7 +1,7 @@
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { Role } from '../../shared/roles';
 import type { HouseholdPatch, HouseholdView, MemberView } from '../../shared/schemas/households';
-import { Household, Membership, User } from '../db/models';
+import { DigestDelivery, Household, Membership, PushSubscription, ReminderDelivery, Todo, User } from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
 
 export function viewHousehold(household: Household, role: Role): HouseholdView {
@@ -47,5 +47,41 @@ export async function changeRole(sequelize: Sequelize, householdId: string, user
     }
     await target.update({ role }, { transaction });
     return target;
+  });
+}
+
+/**
+ * Ends one person's membership: their to-dos there are unassigned, their reminder and digest claims
+ * for the household go, and their browsers stop receiving pushes once they belong to no household.
+ * The guard reads membership on every request, so their access ends on the very next one.
+ */
+async function endMembership(householdId: string, userId: string, transaction: Transaction) {
+  await Membership.destroy({ where: { householdId, userId }, transaction });
+  await Todo.update({ assigneeId: null }, { where: { householdId, assigneeId: userId }, transaction });
+  await ReminderDelivery.destroy({ where: { householdId, userId }, transaction });
+  await DigestDelivery.destroy({ where: { householdId, userId }, transaction });
+  if ((await Membership.count({ where: { userId }, transaction })) === 0) await PushSubscription.destroy({ where: { userId }, transaction });
+}
+
+const LAST_KEEPER = 'A household needs at least one keeper. Make someone else a keeper first, then leave.';
+
+/** A keeper removes another member; keepers leave by themselves, so a household always keeps one. */
+export async function removeMember(sequelize: Sequelize, householdId: string, keeperId: string, userId: string) {
+  if (userId === keeperId) throw conflict('To leave the household yourself, use Leave household.');
+  await sequelize.transaction(async (transaction) => {
+    const memberships = await Membership.findAll({ where: { householdId }, transaction, lock: transaction.LOCK.UPDATE });
+    if (!memberships.some((m) => m.userId === userId)) throw notFound('That member');
+    await endMembership(householdId, userId, transaction);
+  });
+}
+
+/** The signed-in member leaves; the last keeper must hand over first. */
+export async function leaveHousehold(sequelize: Sequelize, householdId: string, userId: string) {
+  await sequelize.transaction(async (transaction) => {
+    const memberships = await Membership.findAll({ where: { householdId }, transaction, lock: transaction.LOCK.UPDATE });
+    const me = memberships.find((m) => m.userId === userId);
+    if (!me) throw notFound('That household');
+    if (me.role === 'keeper' && memberships.filter((m) => m.role === 'keeper').length === 1) throw conflict(LAST_KEEPER);
+    await endMembership(householdId, userId, transaction);
   });
 }

@@ -90,6 +90,8 @@ export interface RouteRule {
   destructive?: boolean;
   /** ends the session of whoever calls it, so it runs at the very end */
   signsOut?: boolean;
+  /** takes someone out of the household; the memberships are put back after each request */
+  endsMembership?: boolean;
 }
 
 const H = '/api/households/:hid';
@@ -115,6 +117,8 @@ export const TABLE: Record<string, RouteRule> = {
   [`PATCH ${H}`]: { access: 'manage', body: () => ({ bestQualityMonths: 12 }) },
   [`GET ${H}/members`]: { access: 'read' },
   [`PATCH ${H}/members/:userId`]: { access: 'manage', body: () => ({ role: 'helper' }), destructive: true },
+  [`DELETE ${H}/members/:userId`]: { access: 'manage', endsMembership: true },
+  [`POST ${H}/leave`]: { access: 'read', endsMembership: true },
   [`PATCH ${H}/members/:userId/preferences`]: { access: 'self', body: () => ({ heatTolerance: 3 }) },
   [`GET ${H}/backup`]: { access: 'manage' },
 

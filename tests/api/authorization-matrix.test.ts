@@ -49,6 +49,11 @@ async function firstHouseholdSecrets(): Promise<string[]> {
   return [...found];
 }
 
+/** Puts back every membership of the first household as it was when the matrix began. */
+async function restoreMemberships() {
+  await ctx.sequelize.query('INSERT INTO memberships SELECT * FROM matrix_memberships ON CONFLICT DO NOTHING');
+}
+
 function phase(route: RouteInfo, rule: RouteRule) {
   if (rule.signsOut) return 3;
   if (rule.destructive || route.method === 'DELETE') return 2;
@@ -65,6 +70,7 @@ beforeAll(async () => {
   ctx = await demoApp();
   ids = await lookUpIds(ctx);
   secrets = await firstHouseholdSecrets();
+  await ctx.sequelize.query('CREATE TABLE matrix_memberships AS SELECT * FROM memberships');
   agents = { 'signed out': request.agent(ctx.app) } as Record<Person, Agent>;
   for (const [person, email] of Object.entries(EMAILS)) agents[person as Person] = await ctx.signedIn(email);
 });
@@ -92,6 +98,7 @@ describe('authorization matrix over every route of the Express router', () => {
         let pending = agent[route.method.toLowerCase() as 'get'](url);
         if (rule.body) pending = pending.send(rule.body(ids) as object);
         const response = await pending;
+        if (rule.endsMembership) await restoreMemberships();
         const got = verdict(response.status, response.body);
         const want = EXPECTED[rule.access][person];
         tally[String(got)] = (tally[String(got)] ?? 0) + 1;
