@@ -29,6 +29,7 @@ export function householdAccess(permission: Permission): RequestHandler {
       if (!req.user) throw new AppError(401, 'signed_out', 'Please sign in first.');
       const householdId = String(req.params.hid ?? '');
       if (!UUID.test(householdId)) throw notFound('That household');
+      // Read fresh on every request, never cached: a removed member loses access on their next request, on every process.
       const membership = await Membership.findOne({
         where: { householdId, userId: req.user.id },
         include: [{ model: Household, as: 'household', required: true }],
