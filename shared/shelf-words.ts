@@ -28,3 +28,15 @@ export const METHOD_NAMES: Record<Method, string> = {
 export function feet(altitudeFt: number): string {
   return `${altitudeFt.toLocaleString('en-US')} ft`;
 }
+
+/**
+ * Checks at opening, as the USDA Complete Guide to Home Canning (2015) and the National Center for Home Food
+ * Preservation advise for home-canned food (worded from memory, in our own words).
+ */
+export const OPENING_CHECKS = [
+  'Check the seal: the lid should be concave and not move when pressed, and should not come off without force.',
+  'Look: no bulging or leaking lid, no mould, no rising bubbles, no spurting liquid and no cloudiness that was not there before.',
+  'Smell: any off, sour or yeasty odour means the jar is spoiled. Do not taste it.',
+  'When in doubt, throw it out.',
+] as const;
+export const OPENING_CHECKS_SOURCE = 'USDA Complete Guide to Home Canning; National Center for Home Food Preservation';

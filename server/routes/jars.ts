@@ -4,13 +4,14 @@ import { JAR_ACTIONS, jarStateQuery } from '../../shared/schemas/batches';
 import { currentMembership, householdAccess, requireUser } from '../auth/guards';
 import type { AppContext } from '../context';
 import { params, query } from '../http/validate';
-import { actOnJar, jarByCode, jarInHousehold, listJars } from '../services/shelf/jars';
+import { actOnJar, jarByCode, jarInHousehold, listJars, openingAdvice } from '../services/shelf/jars';
 
 const jarAction = z.object({
   hid: z.string(),
   jarId: z.uuid({ error: 'That jar was not found.' }),
   action: z.enum(JAR_ACTIONS, { error: 'A jar can be opened, finished or discarded.' }),
 });
+const jarParams = z.object({ hid: z.string(), jarId: z.uuid({ error: 'That jar was not found.' }) });
 const codeParams = z.object({ code: z.string().max(20) }).loose();
 
 export function jarsRouter(ctx: AppContext) {
@@ -22,6 +23,10 @@ export function jarsRouter(ctx: AppContext) {
 
   router.get('/jars/by-code/:code', householdAccess('read'), async (req, res) => {
     res.json({ jar: await jarInHousehold(currentMembership(req).household, params(req, codeParams).code) });
+  });
+
+  router.get('/jars/:jarId/opening-advice', householdAccess('read'), async (req, res) => {
+    res.json({ advice: await openingAdvice(currentMembership(req).household, params(req, jarParams).jarId) });
   });
 
   router.post('/jars/:jarId/:action', householdAccess('handleJars'), async (req, res) => {

@@ -97,6 +97,14 @@ export interface BatchCreated {
   plan: ProcessingPlan;
 }
 
+/** Before a jar is opened: jars of the same product that should be used first (the choice stays the person's). */
+export interface OpeningAdvice {
+  /** Already open in the fridge, soonest use-by first. */
+  openedJars: JarView[];
+  /** Sealed and older than the jar about to be opened, oldest first. */
+  olderSealed: JarView[];
+}
+
 export interface JarByCode {
   householdId: string;
   householdName: string;

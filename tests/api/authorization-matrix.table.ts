@@ -141,6 +141,7 @@ export const TABLE: Record<string, RouteRule> = {
   [`GET ${H}/batches/:batchId/photo`]: { access: 'read' },
   [`GET ${H}/jars`]: { access: 'read' },
   [`GET ${H}/jars/by-code/:code`]: { access: 'read' },
+  [`GET ${H}/jars/:jarId/opening-advice`]: { access: 'read' },
   [`POST ${H}/jars/:jarId/:action`]: { access: 'handleJars', destructive: true },
   [`GET ${H}/shelf.csv`]: { access: 'read' },
   [`POST ${H}/shelf/import`]: { access: 'cook', body: () => ({ csv: 'product,canned on\n', commit: false }) },

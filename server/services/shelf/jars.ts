@@ -1,7 +1,7 @@
 // Jars on the shelf and in the fridge, and the three things a member does with one.
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
-import type { JarAction, JarByCode, JarView } from '../../../shared/schemas/batches';
+import type { JarAction, JarByCode, JarView, OpeningAdvice } from '../../../shared/schemas/batches';
 import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/models';
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
@@ -56,6 +56,29 @@ export async function actOnJar(sequelize: Sequelize, household: Household, jarId
     await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: EVENT[action], userId, happenedOn: today }, { transaction });
     return jarView(rows[0], jar.batch, jar.product, shelfClock(household));
   });
+}
+
+/**
+ * Jars to use before this one: the product's opened jars (opened first is the rule of the fridge) and its sealed jars
+ * canned earlier (oldest first is the rule of the shelf). Common practice; it advises and never refuses.
+ */
+export async function openingAdvice(household: Household, jarId: string): Promise<OpeningAdvice> {
+  const jar = await Jar.findOne({ where: { id: jarId, householdId: household.id }, include: withParts });
+  if (!jar) throw notFound('That jar');
+  const others = (await Jar.findAll({
+    where: { householdId: household.id, productId: jar.productId, id: { [Op.ne]: jar.id }, state: { [Op.in]: ['sealed', 'opened'] } },
+    include: withParts,
+    order: [['useBy', 'ASC'], ['bestBy', 'ASC'], ['code', 'ASC']],
+  })) as JarWithParts[];
+  const cannedOn = (jar as JarWithParts).batch.cannedOn;
+  const clock = shelfClock(household);
+  return {
+    openedJars: others.filter((other) => other.state === 'opened').map((other) => jarView(other, other.batch, other.product, clock)),
+    olderSealed: others
+      .filter((other) => other.state === 'sealed' && other.batch.cannedOn < cannedOn)
+      .sort((a, b) => a.batch.cannedOn.localeCompare(b.batch.cannedOn) || a.code.localeCompare(b.code))
+      .map((other) => jarView(other, other.batch, other.product, clock)),
+  };
 }
 
 export async function jarInHousehold(household: Household, rawCode: string) {

@@ -1,7 +1,9 @@
 import type { JarAction, JarView } from '@shared/schemas/batches';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { useState } from 'react';
 import { useActOnJar } from '../api/act-on-jar';
+import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 
 const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> = {
   sealed: [
@@ -19,15 +21,27 @@ const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> 
 /** The three things any member may do with a jar; a 409 says someone else got there first. */
 export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: JarView; size?: 'normal' | 'large' }) {
   const act = useActOnJar(hid);
+  const [justOpened, setJustOpened] = useState<OpenableJar | null>(null);
   const choices = ACTIONS[jar.state];
   if (choices.length === 0) return null;
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap gap-2">
-        {choices.map(({ action, label }) => (
+        {choices.map(({ action, label }) =>
+          action === 'open' ? (
+            <OpenJarButton
+              key={action}
+              hid={hid}
+              jar={jar}
+              label={label}
+              ariaLabel={`${label}: jar ${jar.code}`}
+              className={size === 'large' ? 'min-h-14 px-6 text-lg' : ''}
+              onOpened={setJustOpened}
+            />
+          ) : (
           <Button
             key={action}
-            variant={action === 'discard' ? (size === 'large' ? 'danger' : 'secondary') : action === 'open' ? 'primary' : 'secondary'}
+            variant={action === 'discard' && size === 'large' ? 'danger' : 'secondary'}
             className={`${size === 'large' ? 'min-h-14 px-6 text-lg' : ''} ${action === 'discard' && size !== 'large' ? 'text-past' : ''}`}
             disabled={act.isPending}
             aria-label={`${label}: jar ${jar.code}`}
@@ -38,8 +52,10 @@ export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: Ja
           >
             {label}
           </Button>
-        ))}
+          ),
+        )}
       </div>
+      {justOpened && <OpeningChecks code={justOpened.code} productName={justOpened.productName} />}
       {act.error && (
         <Notice tone="past" role="alert">
           {act.error.message}

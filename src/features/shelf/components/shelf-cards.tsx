@@ -1,14 +1,14 @@
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { PRODUCT_KIND_NAMES } from '@shared/shelf-words';
-import { Button } from '@/components/ui/button';
-import { useActOnJar } from '../api/act-on-jar';
 import { jarSizeName, longDate } from '../format';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
+import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 
 export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
-  const act = useActOnJar(hid);
+  const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});
   return (
     <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
       {groups.map((group) => (
@@ -61,15 +61,15 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
           )}
           <div className="mt-auto flex flex-wrap gap-2">
             {canHandleJars && group.nextJar && (
-              <Button
+              <OpenJarButton
+                hid={hid}
+                jar={{ ...group.nextJar, productName: group.product.name }}
                 variant="secondary"
-                disabled={act.isPending}
-                onClick={() => act.mutate({ jarId: group.nextJar!.id, action: 'open' })}
-                aria-label={`Open oldest jar of ${group.product.name}`}
+                label="Open oldest jar"
+                ariaLabel={`Open oldest jar of ${group.product.name}`}
                 title={`Jar ${group.nextJar.code}, the one to eat first`}
-              >
-                Open oldest jar
-              </Button>
+                onOpened={(jar) => setJustOpened((all) => ({ ...all, [group.product.id]: jar }))}
+              />
             )}
             {canCook && (
               <Link to={`/h/${hid}/products/${group.product.id}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
@@ -77,6 +77,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
               </Link>
             )}
           </div>
+          {justOpened[group.product.id] && <OpeningChecks code={justOpened[group.product.id]!.code} productName={group.product.name} />}
         </li>
       ))}
     </ul>
