@@ -22,8 +22,8 @@ try {
   setUpSchema(databaseUrl, { seedDemo: !production });
   log('building the client');
   buildClient();
-  // Development sends mail and pushes to local stand-ins unless SMTP_HOST points elsewhere.
-  if (!production && !process.env.SMTP_HOST) {
+  // Development sends mail, pushes and photos to local stand-ins unless SMTP_HOST and S3_BUCKET point elsewhere.
+  if (!production && !(process.env.SMTP_HOST && process.env.S3_BUCKET)) {
     standIns = await startStandIns(cluster);
     log(standIns.describe);
   }
@@ -85,7 +85,7 @@ function printWelcome(url, production) {
     }
     lines.push('');
   }
-  if (standIns) lines.push('  E-mail and push go to local stand-ins; a keeper reads the caught mail from Household, Invitations.', '');
+  if (standIns) lines.push('  E-mail, push and batch photos go to local stand-ins; a keeper reads the caught mail from Household, Invitations.', '');
   lines.push('  Press Ctrl-C to stop the server and the database.', '');
   process.stdout.write(lines.join('\n') + '\n');
 }

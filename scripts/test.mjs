@@ -12,8 +12,13 @@ const wantsBrowser = projects.length === 0 || projects.includes('e2e');
 ensureNodeModules();
 if (wantsBrowser) ensureChromium();
 const { buildClient, dropDatabase, recreateDatabase, setUpSchema } = await import('./lib/database.mjs');
+const { spawnObjectStore } = await import('../dev/stand-ins/object-store.mjs');
 
 const cluster = startCluster();
+// Photos go to a local S3-compatible store of this run's own, in the project's data folder.
+const objectStoreDir = path.join(path.dirname(cluster.dataDir), `test-object-store-${process.pid}`);
+const objectStore = await spawnObjectStore(objectStoreDir);
+log(`object store (S3) at ${objectStore.endpoint}, bucket ${objectStore.env.S3_BUCKET}, objects in ${objectStoreDir}`);
 // Names of this run's own, so two runs at once never share a template or a build.
 const template = `larderly_test_template_${process.pid}`;
 const clientDir = path.join('dist', `test-client-${process.pid}`);
@@ -34,6 +39,7 @@ try {
       cwd: projectDir,
       env: {
         ...process.env,
+        ...objectStore.env,
         NODE_ENV: 'test',
         LARDERLY_TEST_ADMIN_URL: cluster.url('postgres'),
         LARDERLY_TEST_TEMPLATE: template,
@@ -48,6 +54,8 @@ try {
 } finally {
   await dropDatabase(cluster, template).catch(() => {});
   rmSync(path.join(projectDir, clientDir), { recursive: true, force: true });
+  await objectStore.close();
+  rmSync(objectStoreDir, { recursive: true, force: true });
   cluster.stop();
 }
 process.exit(exitCode);

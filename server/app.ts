@@ -19,6 +19,7 @@ import { acceptInvitationRouter } from './routes/invitations';
 import { meNotificationsRouter } from './routes/me-notifications';
 import { pushRouter } from './routes/push';
 import { createMailer } from './services/mail/mailer';
+import { photoStorageFor } from './services/photo-storage';
 import { createPushSender } from './services/push/push-sender';
 import type { AppContext } from './context';
 
@@ -29,7 +30,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport();
-  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config) };
+  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config), photos: photoStorageFor(config) };
 
   const app = express();
   app.disable('x-powered-by');
@@ -53,7 +54,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   );
 
   const api = Router();
-  api.use(healthRouter(sequelize));
+  api.use(healthRouter(sequelize, ctx.photos));
   const json = express.json({ limit: '1mb' });
   // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
   api.use((req, res, next) => (req.method === 'POST' && req.path === IMPORT_PATH ? next() : json(req, res, next)));

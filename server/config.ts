@@ -1,3 +1,4 @@
+import { hostname } from 'node:os';
 import { z } from 'zod';
 
 const schema = z.object({
@@ -24,6 +25,15 @@ const schema = z.object({
   VAPID_SUBJECT: z.string().regex(/^(mailto:|https:)/, 'VAPID_SUBJECT must start with mailto: or https:').optional(),
   PUSH_CA_FILE: z.string().optional(),
   MAIL_CATCHER_DIR: z.string().optional(),
+  S3_ENDPOINT: z.string().url({ message: 'S3_ENDPOINT must be an http:// or https:// URL' }).optional(),
+  S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'S3_BUCKET must be a bucket name: 3-63 lower-case letters, digits, dots and hyphens').optional(),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('false'),
+  SHUTDOWN_TIMEOUT_MS: z.coerce.number().int().min(1_000).max(120_000).default(10_000),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  INSTANCE_NAME: z.string().regex(/^[\w.-]{1,64}$/, 'INSTANCE_NAME may hold letters, digits, dots, hyphens and underscores (64 at most)').optional(),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -42,6 +52,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
   if (Boolean(c.VAPID_PUBLIC_KEY) !== Boolean(c.VAPID_PRIVATE_KEY)) {
     throw new Error('Larderly cannot start: set both VAPID_PUBLIC_KEY and VAPID_PRIVATE_KEY, or neither (then keys are generated and kept).');
   }
+  if (Boolean(c.S3_ACCESS_KEY_ID) !== Boolean(c.S3_SECRET_ACCESS_KEY)) {
+    throw new Error('Larderly cannot start: set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither (then the SDK looks for credentials itself).');
+  }
+  if (!c.S3_BUCKET && (c.S3_ENDPOINT || c.S3_ACCESS_KEY_ID)) {
+    throw new Error('Larderly cannot start: S3 settings are given without S3_BUCKET; name the bucket the photos go to.');
+  }
   return {
     env: c.NODE_ENV,
     isProduction: c.NODE_ENV === 'production',
@@ -56,8 +72,23 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     bcryptCost: c.BCRYPT_COST,
     /** sign-in and sign-up attempts per address per 15 minutes */
     authRateLimit: c.AUTH_RATE_LIMIT,
-    /** batch photos, on local disk outside the web root; served only to members */
+    /** batch photos on local disk when no object store is set (and photos from before it) */
     uploadDir: c.UPLOAD_DIR,
+    /** the S3-compatible object store for batch photos; unset keeps them on local disk */
+    s3: c.S3_BUCKET
+      ? {
+          bucket: c.S3_BUCKET,
+          endpoint: c.S3_ENDPOINT,
+          region: c.S3_REGION,
+          forcePathStyle: c.S3_FORCE_PATH_STYLE === 'true',
+          credentials: c.S3_ACCESS_KEY_ID && c.S3_SECRET_ACCESS_KEY ? { accessKeyId: c.S3_ACCESS_KEY_ID, secretAccessKey: c.S3_SECRET_ACCESS_KEY } : undefined,
+        }
+      : undefined,
+    /** how long a stopping process finishes what it has in hand before it exits */
+    shutdownTimeoutMs: c.SHUTDOWN_TIMEOUT_MS,
+    logLevel: c.LOG_LEVEL,
+    /** this process's name in logs and the X-Larderly-Instance header: the host name and process id unless set */
+    instanceName: c.INSTANCE_NAME ?? `${hostname()}-${process.pid}`,
     /** where links in e-mails point: the first APP_ORIGIN, else this server's own address */
     publicOrigin: (c.APP_ORIGIN ?? '').split(',')[0].trim() || `http://${c.HOST}:${c.PORT}`,
     mail: {

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
 import type { Mailer } from './services/mail/mailer';
+import type { PhotoStorage } from './services/photo-storage';
 import type { PushSender } from './services/push/push-sender';
 
 /** What every router and service may need, built once per app. */
@@ -11,4 +12,6 @@ export interface AppContext {
   mailer: Mailer;
   /** Web Push with the VAPID keys */
   push: PushSender;
+  /** batch photos: the object store, or the local disk on a single machine */
+  photos: PhotoStorage;
 }

@@ -1,4 +1,4 @@
-// Starts the local SMTP catcher and Web Push endpoint beside the app (development only).
+// Starts the local SMTP catcher, Web Push endpoint and object store beside the app (development only).
 import path from 'node:path';
 import { createInterface } from 'node:readline';
 import { startChild } from './system.mjs';
@@ -19,9 +19,16 @@ export async function startStandIns(cluster) {
     child.once('exit', (code) => reject(new Error(`the local mail catcher and push endpoint stopped while starting (exit ${code}).`)));
   });
   lines.on('line', (line) => process.stdout.write(`${line}\n`));
+  // A mail server or bucket set in the environment wins over its stand-in.
+  const mail = process.env.SMTP_HOST ? {} : { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(ready.smtpPort), SMTP_SECURE: 'false', MAIL_CATCHER_DIR: ready.mailDir };
+  const objects = process.env.S3_BUCKET ? {} : ready.objectStore.env;
   return {
     child,
-    env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(ready.smtpPort), SMTP_SECURE: 'false', MAIL_CATCHER_DIR: ready.mailDir, PUSH_CA_FILE: ready.certFile },
-    describe: `mail catcher on 127.0.0.1:${ready.smtpPort}, push endpoint at ${ready.pushOrigin}`,
+    env: { ...mail, PUSH_CA_FILE: ready.certFile, ...objects },
+    describe: [
+      process.env.SMTP_HOST ? null : `mail catcher on 127.0.0.1:${ready.smtpPort}`,
+      `push endpoint at ${ready.pushOrigin}`,
+      process.env.S3_BUCKET ? null : `object store (S3) at ${ready.objectStore.env.S3_ENDPOINT}, bucket ${ready.objectStore.env.S3_BUCKET}, objects in ${ready.objectStore.directory}`,
+    ].filter(Boolean).join(', '),
   };
 }

@@ -6,11 +6,12 @@ import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
 import { body, params, query } from '../http/validate';
-import { localDiskStorage } from '../services/photo-storage';
 import { batchDetail, createBatch, listBatches, previewPlan } from '../services/shelf/batches';
+import { PHOTO_SIZES } from '../services/shelf/photo-images';
 import { PHOTO_MAX_BYTES, readBatchPhoto, saveBatchPhoto } from '../services/shelf/photos';
 
 const batchParams = z.object({ hid: z.string(), batchId: z.uuid({ error: 'That batch was not found.' }) });
+const photoQuery = z.object({ size: z.enum(Object.keys(PHOTO_SIZES) as [keyof typeof PHOTO_SIZES]).default('large'), v: z.string().max(40).optional() });
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 } }).single('photo');
 
 /** Runs multer and turns its errors into answers a person can act on. */
@@ -30,7 +31,7 @@ function receivePhoto(req: Request, res: Response): Promise<Buffer> {
 
 export function batchesRouter(ctx: AppContext) {
   const router = Router({ mergeParams: true });
-  const photos = localDiskStorage(ctx.config.uploadDir);
+  const { photos } = ctx;
 
   router.get('/batches', householdAccess('read'), async (req, res) => {
     res.json({ batches: await listBatches(currentMembership(req).householdId) });
@@ -60,7 +61,8 @@ export function batchesRouter(ctx: AppContext) {
 
   router.get('/batches/:batchId/photo', householdAccess('read'), async (req, res) => {
     const { batchId } = params(req, batchParams);
-    const photo = await readBatchPhoto(photos, currentMembership(req).householdId, batchId);
+    const { size } = query(req, photoQuery);
+    const photo = await readBatchPhoto(photos, currentMembership(req).householdId, batchId, size);
     res.set({ 'Content-Type': photo.type, 'Cache-Control': 'private, no-cache', 'Content-Disposition': 'inline' }).send(photo.bytes);
   });
 

@@ -35,6 +35,9 @@ describe('GET /api/health', () => {
     const down = await request(built.app).get('/api/health');
     expect(down.status).toBe(503);
     expect(down.body).toEqual({ ok: false, db: 'down' });
+    const notReady = await request(built.app).get('/api/ready');
+    expect(notReady.status).toBe(503);
+    expect(notReady.body).toEqual({ ready: false, db: 'down', photoStore: { kind: 's3', state: 'up' } });
 
     const login = await request(built.app).post('/api/auth/login').send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
     expect(login.status).toBe(503);
@@ -44,5 +47,25 @@ describe('GET /api/health', () => {
     const up = await request(built.app).get('/api/health');
     expect(up.status).toBe(200);
     expect(up.body).toEqual({ ok: true, db: 'up' });
+  });
+});
+
+describe('GET /api/ready', () => {
+  it('answers 200 only when both the database and the photo store answer', async () => {
+    const ready = await request(built.app).get('/api/ready');
+    expect(ready.status).toBe(200);
+    expect(ready.body).toEqual({ ready: true, db: 'up', photoStore: { kind: 's3', state: 'up' } });
+  });
+
+  it('answers 503 while the object store does not answer', async () => {
+    const nowhere = `http://127.0.0.1:${await freePort()}`;
+    const storeDown = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: cluster.url('postgres'), STATIC_DIR: 'none', S3_ENDPOINT: nowhere }));
+    try {
+      const response = await request(storeDown.app).get('/api/ready');
+      expect(response.status).toBe(503);
+      expect(response.body).toEqual({ ready: false, db: 'up', photoStore: { kind: 's3', state: 'down' } });
+    } finally {
+      await storeDown.close();
+    }
   });
 });
