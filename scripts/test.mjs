@@ -1,15 +1,27 @@
-// `npm test`: the same set-up as `npm start` against separate test databases, then every test.
-// Extra arguments go to vitest, e.g. `npm test -- --project api tests/api/auth.test.ts`.
+// `npm test`: first the code rules (lint, import direction), then the same set-up as `npm start` against
+// separate test databases, then every test. Extra arguments go to vitest, e.g.
+// `npm test -- --project api tests/api/auth.test.ts`; `--project code` runs the code rules alone.
+import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { ensureChromium, ensureNodeModules, log, projectDir, run } from './lib/system.mjs';
 import { startCluster } from './lib/postgres.mjs';
 
-const extraArgs = process.argv.slice(2);
-const projects = extraArgs.flatMap((arg, i) => (arg === '--project' ? [extraArgs[i + 1]] : arg.startsWith('--project=') ? [arg.slice(10)] : []));
-const wantsBrowser = projects.length === 0 || projects.includes('e2e');
+const givenArgs = process.argv.slice(2);
+const projects = givenArgs.flatMap((arg, i) => (arg === '--project' ? [givenArgs[i + 1]] : arg.startsWith('--project=') ? [arg.slice(10)] : []));
+// `code` is ours, not a vitest project: take it out of what vitest is given.
+const extraArgs = givenArgs.filter((arg, i) => arg !== '--project=code' && !(arg === 'code' && givenArgs[i - 1] === '--project') && !(arg === '--project' && givenArgs[i + 1] === 'code'));
+const wantsCodeRules = projects.length === 0 || projects.includes('code');
+const vitestProjects = projects.filter((name) => name !== 'code');
+const wantsVitest = projects.length === 0 || vitestProjects.length > 0;
+const wantsBrowser = projects.length === 0 || vitestProjects.includes('e2e');
 
 ensureNodeModules();
+const codeRules = wantsCodeRules ? checkCodeRules() : { passed: 0, failed: 0 };
+if (!wantsVitest) {
+  process.stdout.write(`\n${codeRules.passed} passed, ${codeRules.failed} failed\n`);
+  process.exit(codeRules.failed ? 1 : 0);
+}
 if (wantsBrowser) ensureChromium();
 const { buildClient, dropDatabase, recreateDatabase, setUpSchema } = await import('./lib/database.mjs');
 const { spawnObjectStore } = await import('../dev/stand-ins/object-store.mjs');
@@ -63,7 +75,7 @@ process.exit(exitCode);
 /** CI reads the plain line `N passed, N failed`, not vitest's own summary. */
 function printSummary(resultsFile) {
   if (!existsSync(resultsFile)) {
-    process.stdout.write('\n0 passed, 1 failed\n');
+    process.stdout.write(`\n${codeRules.passed} passed, ${1 + codeRules.failed} failed\n`);
     exitCode = 1;
     return;
   }
@@ -74,6 +86,25 @@ function printSummary(resultsFile) {
   const brokenFiles = results.testResults.filter((s) => s.status === 'failed' && s.assertionResults.every((a) => a.status !== 'failed'));
   for (const file of brokenFiles) log(`could not run ${path.relative(projectDir, file.name)}: ${file.message?.split('\n')[0] ?? ''}`);
   // A run that failed before any test could (a set-up error) still counts as a failure.
-  const failed = Math.max(results.numFailedTests + brokenFiles.length, exitCode === 0 ? 0 : 1);
-  process.stdout.write(`\n${results.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`);
+  const failed = Math.max(results.numFailedTests + brokenFiles.length, exitCode === 0 ? 0 : 1) + codeRules.failed;
+  if (codeRules.failed) exitCode = 1;
+  process.stdout.write(`\n${results.numPassedTests + codeRules.passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`);
+}
+
+/** The lint and the import rules, each one check of the suite; a failure prints each broken rule's reason. */
+function checkCodeRules() {
+  const counts = { passed: 0, failed: 0 };
+  for (const [name, script] of [
+    ['lint', 'lint'],
+    ['import rules', 'check:imports'],
+  ]) {
+    log(`checking the ${name} (npm run ${script})`);
+    const result = spawnSync('npm', ['run', '--silent', script], { cwd: projectDir, stdio: 'inherit' });
+    if (result.status === 0) counts.passed += 1;
+    else {
+      counts.failed += 1;
+      log(`the ${name} failed: see the reasons above (npm run ${script})`);
+    }
+  }
+  return counts;
 }

@@ -31,7 +31,7 @@ describe('the Today read', () => {
     expect(response.status).toBe(200);
     expect(response.body.today).toBe(TODAY);
     const use = response.body.use.filter((u: { productName: string }) => u.productName.startsWith('Test '));
-    // The week allocation's contract (issue 3): opened jars first, then the oldest sealed jar.
+    // The week allocation's rule: opened jars first, then the oldest sealed jar.
     expect(use).toEqual([
       expect.objectContaining({ slot: 'lunch', mealTitle: 'Dal and rice', productName: 'Test Lime Pickle', tbsp: 2, jarCode: openJar.code, opensToday: false }),
       expect.objectContaining({ slot: 'dinner', mealTitle: 'Roast pork', productName: 'Test Peach Chutney', tbsp: 6, jarCode: older.code, opensToday: true }),

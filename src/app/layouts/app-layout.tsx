@@ -16,9 +16,9 @@ export function AppLayout() {
   const logout = useLogout();
   const navigate = useNavigate();
   const location = useLocation();
-  const [moreOpen, setMoreOpen] = useState(false);
-
-  useEffect(() => setMoreOpen(false), [location.pathname]);
+  // The "more" menu belongs to the page it was opened on, so it closes by itself on navigation.
+  const [moreOpenOn, setMoreOpenOn] = useState<string | null>(null);
+  const moreOpen = moreOpenOn === location.pathname;
   useEffect(() => {
     if (membership) rememberHousehold(hid);
   }, [hid, membership]);
@@ -97,7 +97,7 @@ export function AppLayout() {
             <button
               type="button"
               aria-expanded={moreOpen}
-              onClick={() => setMoreOpen((open) => !open)}
+              onClick={() => setMoreOpenOn(moreOpen ? null : location.pathname)}
               className={`flex min-h-14 w-full flex-col items-center justify-center text-xs font-bold ${moreOpen ? 'text-action' : 'text-ink-muted'}`}
             >
               <ScreenIcon name="more" />

@@ -1,5 +1,5 @@
 import { useParams } from 'react-router-dom';
-import { useMe } from '@/features/auth/api/get-me';
+import { useMe } from '@/features/auth';
 
 const LAST_HOUSEHOLD = 'larderly.lastHousehold';
 

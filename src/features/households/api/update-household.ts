@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { HouseholdPatch, HouseholdView } from '@shared/schemas/households';
-import { authKeys } from '@/features/auth/api/get-me';
+import { authKeys } from '@/features/auth';
 import { api } from '@/lib/api-client';
 import { householdKeys } from './get-household';
 

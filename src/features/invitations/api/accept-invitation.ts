@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { AcceptedInvitation, InvitationPreview } from '@shared/schemas/invitations';
-import { authKeys } from '@/features/auth/api/get-me';
+import { authKeys } from '@/features/auth';
 import { api } from '@/lib/api-client';
 
 export const invitationPreviewKey = (token: string) => ['invitations', 'preview', token] as const;

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProductPatch, ProductView } from '@shared/schemas/products';
-import { shelfKeys } from '@/features/shelf/api/keys';
-import { refreshPlanning } from '@/features/todos/api/refresh-planning';
+import { shelfKeys } from '@/features/shelf';
+import { refreshPlanning } from '@/features/todos';
 import { api } from '@/lib/api-client';
 
 type RestockSettings = Pick<ProductPatch, 'favourite' | 'minJars'>;

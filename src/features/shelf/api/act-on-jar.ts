@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { JarAction, JarView } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
 
 export const actOnJar = (hid: string, jarId: string, action: JarAction) => api.post<{ jar: JarView }>(`/households/${hid}/jars/${jarId}/${action}`).then((r) => r.jar);
 

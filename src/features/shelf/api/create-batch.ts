@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BatchCreate, BatchCreated } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
 
 export const createBatch = (hid: string, batch: BatchCreate) => api.post<BatchCreated>(`/households/${hid}/batches`, batch);
 

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { TodayTodo } from '@shared/schemas/today';
 import { shortDay } from '@shared/day-words';
-import { useUpdateTodo } from '@/features/todos/api/update-todo';
+import { useUpdateTodo } from '@/features/todos';
 
 /** The signed-in person's open to-dos, tickable right here. */
 export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {

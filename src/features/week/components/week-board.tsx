@@ -1,5 +1,5 @@
 import { DndContext, DragOverlay, type CollisionDetection, type DragEndEvent, type DragStartEvent, type KeyboardCoordinateGetter } from '@dnd-kit/core';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import type { MealView, Slot, WeekView } from '@shared/schemas/week';
 import { Notice } from '@/components/ui/notice';
 import { useAddPairing } from '../api/add-pairing';
@@ -52,7 +52,9 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   // Keyboard drags go place to place; the collision check then reports that place as the one under the item.
   const keyboardPlace = useRef<string | null>(null);
   const visibleRef = useRef(visibleDays);
-  visibleRef.current = visibleDays;
+  useLayoutEffect(() => {
+    visibleRef.current = visibleDays;
+  });
   const coordinateGetter: KeyboardCoordinateGetter = (event, { context: { active, collisionRect, droppableRects } }) => {
     const source = sourceOf(active);
     if (!source || !collisionRect) return undefined;

@@ -1,0 +1,2 @@
+// What other features may use of the shelf.
+export { shelfKeys } from './api/keys';
