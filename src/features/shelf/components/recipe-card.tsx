@@ -2,7 +2,7 @@ import { formatKitchenAmount, JAR_SIZES } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { METHOD_NAMES } from '@shared/shelf-words';
 import { Card } from '@/components/ui/page';
-import { AltitudeGate } from '@/features/households/components/altitude-gate';
+import { AltitudeGate } from '@/features/households';
 import { jarSizeName } from '../format';
 import { ScalingTool } from './scaling-tool';
 

@@ -1,7 +1,7 @@
 import { useEffect, useRef } from 'react';
 import type { MemberView } from '@shared/schemas/households';
 import type { TodoView } from '@shared/schemas/todos';
-import { AltitudeGate } from '@/features/households/components/altitude-gate';
+import { AltitudeGate } from '@/features/households';
 import { BatchPlanView } from './batch-plan-view';
 import { TodoEditor } from './todo-editor';
 
