@@ -4,6 +4,7 @@ import { BACKUP_FORMAT, BACKUP_VERSION, type BackupTable, type HouseholdBackup, 
 import { Household, Membership } from '../db/models';
 import { AppError, conflict } from '../http/errors';
 import { newJarCode } from './shelf/jar-codes';
+import { isTimeZone } from '../../shared/time-zones';
 
 /** One column: its key in the file, its SQL name and type, and the table its id points into. */
 type Column = [json: string, sql: string, type: string, ref?: BackupTable];
@@ -197,13 +198,4 @@ async function insertRows(
     `INSERT INTO ${spec.table} (${names.join(', ')}) SELECT ${values.join(', ')} FROM jsonb_to_recordset($1::jsonb) AS r(${record})`,
     { bind: createdBy ? [JSON.stringify(asRecords), householdId, importerId] : [JSON.stringify(asRecords), householdId], transaction },
   );
-}
-
-function isTimeZone(zone: string) {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: zone });
-    return true;
-  } catch {
-    return false;
-  }
 }

@@ -1,3 +1,5 @@
+import { calendarDateIn } from '../../shared/time-zones';
+
 /** The one place the server asks what time it is, so tests can set the clock. */
 export const clock = {
   now: () => new Date(),
@@ -5,7 +7,7 @@ export const clock = {
 
 /** Today's calendar date in a time zone, as YYYY-MM-DD. */
 export function todayIn(timeZone: string, now = clock.now()) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+  return calendarDateIn(timeZone, now);
 }
 
 /** The hour of the day (0-23) in a time zone. */

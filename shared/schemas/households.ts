@@ -1,19 +1,11 @@
 import { z } from 'zod';
 import { PROCESSING_METHODS, type Method } from '../domain';
 import { ROLES, type Role } from '../roles';
+import { isTimeZone } from '../time-zones';
 import { householdName } from './auth';
 
 export const UNIT_SYSTEMS = ['us', 'metric'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
-
-function isTimeZone(zone: string) {
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: zone });
-    return true;
-  } catch {
-    return false;
-  }
-}
 
 export const householdPatch = z
   .object({

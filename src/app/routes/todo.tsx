@@ -2,6 +2,7 @@ import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
 import type { TodoFilter } from '@shared/schemas/todos';
 import { TODO_FILTERS } from '@shared/schemas/todos';
+import { calendarDateIn } from '@shared/time-zones';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useHousehold, useMembers } from '@/features/households/api/get-household';
@@ -18,10 +19,6 @@ const EMPTY_WORDS: Record<TodoFilter, { title: string; body: string }> = {
   done: { title: 'Nothing ticked yet', body: 'Ticked to-dos stay here so the household can see what got done.' },
   all: { title: 'The list is clear', body: 'Restock batches from the Restock screen and everyday jobs land here for the whole household.' },
 };
-
-function householdToday(timeZone: string | undefined) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone: timeZone ?? 'UTC', year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date());
-}
 
 export function TodoRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -59,7 +56,7 @@ export function TodoRoute() {
         {!todos.data && !todos.isError && <p className="text-ink-muted">Loading…</p>}
         {todos.data && todos.data.length === 0 && <EmptyState title={EMPTY_WORDS[filter].title}>{EMPTY_WORDS[filter].body}</EmptyState>}
         {todos.data && todos.data.length > 0 && (
-          <SortableTodoList hid={hid} filter={filter} todos={todos.data} canMove={canCook} today={householdToday(household.data?.timeZone)} onOpen={(open) => change({ open })} />
+          <SortableTodoList hid={hid} filter={filter} todos={todos.data} canMove={canCook} today={calendarDateIn(household.data?.timeZone ?? 'UTC')} onOpen={(open) => change({ open })} />
         )}
         {openId && everything.data && !opened && (
           <Notice tone="soon" title="That to-do is no longer on the list">

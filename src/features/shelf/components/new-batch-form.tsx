@@ -6,6 +6,7 @@ import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { METHOD_NAMES } from '@shared/shelf-words';
+import { calendarDateIn } from '@shared/time-zones';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -16,9 +17,6 @@ import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
 
 /** The household's today, as YYYY-MM-DD: the canning day the server checks against. */
-function todayIn(timeZone: string) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date());
-}
 
 /**
  * The day's work in order: what, which tested recipe, when, which jars, how many sealed, which canner.
@@ -40,7 +38,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
   const method = (PROCESSING_METHODS as readonly string[]).includes(params.get('method') ?? '') ? (params.get('method') as Method) : (recipe?.method ?? household.defaultMethod);
   const jarsText = params.get('jars') ?? '';
   const sealedText = params.get('sealed') ?? jarsText;
-  const today = todayIn(household.timeZone);
+  const today = calendarDateIn(household.timeZone);
   const cannedOn = params.get('date') ?? today;
 
   const plan = recipe ? recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
