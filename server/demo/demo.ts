@@ -7,7 +7,6 @@ import accounts from './demo-accounts.json' with { type: 'json' };
 import { seedDemoFeatures } from './features';
 
 export const DEMO_PASSWORD = accounts.password;
-export const DEMO_ACCOUNTS = accounts.households.flatMap((h) => h.members.map((m) => ({ ...m, household: h.name })));
 
 /**
  * Our invented demo scenario, for local use only: a production start never seeds it.

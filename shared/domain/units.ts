@@ -44,10 +44,6 @@ function millilitresPer(unit: VolumeUnit): number {
   return unit === 'ml' || unit === 'l' ? MILLILITRES[unit] : FLUID_OUNCES[unit] * ML_PER_US_FLUID_OUNCE;
 }
 
-export function isVolumeUnit(unit: string): unit is VolumeUnit {
-  return (VOLUME_UNITS as readonly string[]).includes(unit);
-}
-
 export function convertVolume(value: number, from: VolumeUnit, to: VolumeUnit): number {
   const amount = requireNumber(value, 'value');
   if (amount < 0) throw new RangeError(`value must not be negative; got ${amount}`);

@@ -1,7 +1,7 @@
 import { createContext, useContext } from 'react';
 import type { WeekView } from '@shared/schemas/week';
 import type { useAddPairing } from './api/add-pairing';
-import type { useAddRestockTodo } from './api/add-restock-todo';
+import type { useAddRestockTodo } from '@/features/restock';
 import type { useClearDay } from './api/clear-day';
 import type { useDeletePairing } from './api/delete-pairing';
 import type { useDeletePlanEntry } from './api/delete-plan-entry';
@@ -19,7 +19,7 @@ export interface Board {
   updatePairing: ReturnType<typeof useUpdatePairing>;
   deletePairing: ReturnType<typeof useDeletePairing>;
   clearDay: ReturnType<typeof useClearDay>;
-  restock: { todo: ReturnType<typeof useAddRestockTodo>; available: boolean; add: (productId: string) => void; added: Set<string> };
+  restock: { todo: ReturnType<typeof useAddRestockTodo>; add: (productId: string) => void; added: Set<string> };
 }
 
 export const BoardContext = createContext<Board | null>(null);

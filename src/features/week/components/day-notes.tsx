@@ -39,7 +39,7 @@ export function DayNotes({ date }: { date: string }) {
 
 function RestockButton({ productId }: { productId: string }) {
   const { canEdit, restock, week } = useBoard();
-  if (!canEdit || !restock.available) return null;
+  if (!canEdit) return null;
   if (restock.added.has(productId)) return <p className="font-bold text-action">On the to-do list</p>;
   return (
     <button

@@ -3,7 +3,7 @@ import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import type { MealView, Slot, WeekView } from '@shared/schemas/week';
 import { Notice } from '@/components/ui/notice';
 import { useAddPairing } from '../api/add-pairing';
-import { restockMissing, useAddRestockTodo } from '../api/add-restock-todo';
+import { useAddRestockTodo } from '@/features/restock';
 import { useClearDay } from '../api/clear-day';
 import { useCreatePlanEntry } from '../api/create-plan-entry';
 import { useDeletePairing } from '../api/delete-pairing';
@@ -32,7 +32,6 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   const updateEntry = useUpdatePlanEntry(hid, start, report);
   const addPairing = useAddPairing(hid, start, report);
   const restockTodo = useAddRestockTodo(hid);
-  const [restockAvailable, setRestockAvailable] = useState(true);
   const [restocked, setRestocked] = useState(() => new Set<string>());
   const wide = useMedia('(min-width: 1024px)');
   const [picked, setPicked] = useState<string | null>(null);
@@ -143,13 +142,15 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
     clearDay: useClearDay(hid, start, report),
     restock: {
       todo: restockTodo,
-      available: restockAvailable,
       added: restocked,
       add: (productId) =>
-        restockTodo.mutate(productId, {
-          onSuccess: () => setRestocked((set) => new Set(set).add(productId)),
-          onError: (error) => (restockMissing(error) ? setRestockAvailable(false) : report(error.message)),
-        }),
+        restockTodo.mutate(
+          { productId, input: {} },
+          {
+            onSuccess: () => setRestocked((set) => new Set(set).add(productId)),
+            onError: (error) => report(error.message),
+          },
+        ),
     },
   };
 
