@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MemberView } from '@shared/schemas/households';
 import type { Role } from '@shared/roles';
 import { api } from '@/lib/api-client';
-import { authKeys } from '@/features/auth/api/get-me';
+import { authKeys } from '@/features/auth';
 import { householdKeys } from './get-household';
 
 export const updateMemberRole = (hid: string, userId: string, role: Role) =>
