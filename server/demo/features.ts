@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { Household, User } from '../db/models';
 import { seedShelf } from './shelf';
 import { seedWeek } from './week';
+import { seedProposalScenario } from './week-proposal';
 import { seedTodos } from './todos';
 
 export interface DemoSeedContext {
@@ -18,5 +19,6 @@ export interface DemoSeedContext {
 export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
   await seedWeek(ctx);
+  await seedProposalScenario(ctx);
   await seedTodos(ctx);
 }

@@ -23,6 +23,8 @@ const MEALS: DemoMeal[] = [
   { name: 'Roast chicken and greens', tags: ['dinner', 'sunday'], usualServings: 4, products: { 'Apple-Cranberry Sauce': 2 } },
   { name: 'Chili with cornbread', tags: ['dinner', 'spicy'], usualServings: 4, products: { 'Hot Pepper Jelly': 1 } },
   { name: 'Pork meatballs', tags: ['dinner'], usualServings: 3, products: { 'Plum Ketchup': 1.5 } },
+  { name: 'Baked potatoes with chutney', tags: ['lunch'], usualServings: 2, products: { 'Green Tomato Chutney': 1.5 } },
+  { name: 'Lentil soup and bread', tags: ['lunch', 'quick'], usualServings: 3, products: {} },
   { name: 'Cheese and crackers', tags: ['snack'], usualServings: 2, products: { 'Green Tomato Chutney': 1 } },
 ];
 

@@ -14,6 +14,7 @@ import { shelfRouter } from './shelf';
 import { todayRouter } from './today';
 import { todosRouter } from './todos';
 import { weekRouter } from './week';
+import { weekProposalRouter } from './week-proposal';
 
 /**
  * Every household-scoped feature router, mounted under /api/households/:hid.
@@ -28,6 +29,7 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(shelfRouter(ctx));
   router.use(mealsRouter(ctx));
   router.use(weekRouter(ctx));
+  router.use(weekProposalRouter(ctx));
   router.use(restockRouter(ctx));
   router.use(todosRouter(ctx));
   router.use(todayRouter());

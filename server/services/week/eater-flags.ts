@@ -20,6 +20,11 @@ const DIET_CONFLICTS: Record<DietTag, { finds: (ingredient: RecipeIngredient) =>
   'low-salt': { finds: (i) => /salt/i.test(i.name), says: 'has added salt', word: 'Salt' },
 };
 
+/** The diets a product's recipes go against, by the same rules as the flags. */
+export function dietConflictsOf(productId: string, recipes: FlagRecipe[]): DietTag[] {
+  return (Object.keys(DIET_CONFLICTS) as DietTag[]).filter((tag) => recipes.some((r) => r.productId === productId && r.ingredients.some(DIET_CONFLICTS[tag].finds)));
+}
+
 const firstName = (name: string) => name.split(' ')[0];
 
 export function eaterFlags(product: FlagProduct, recipes: FlagRecipe[], eaters: WeekMember[]): EaterFlag[] {

@@ -14,38 +14,47 @@ function placementsOf(entries: PlanEntry[]) {
 /** Adds a meal to a slot, from the library (with its usual products) or by name. */
 export async function createPlanEntry(sequelize: Sequelize, householdId: string, input: PlanEntryCreate) {
   return sequelize.transaction(async (transaction) => {
-    const meal = input.mealId
-      ? await Meal.findOne({ where: { id: input.mealId, householdId }, include: [{ model: MealProduct, as: 'products' }], transaction })
-      : null;
-    if (input.mealId && !meal) throw notFound('That meal');
     const entries = await lockDays(sequelize, transaction, householdId, [input.date]);
-    const slot = slotOf(entries, input.date, input.slot as Slot);
-    const position = clamp(input.position ?? slot.length, slot.length);
-    const entry = await PlanEntry.create(
-      {
-        householdId,
-        date: input.date,
-        slot: input.slot as Slot,
-        position: slot.length,
-        title: input.title ?? meal!.name,
-        mealId: meal?.id ?? null,
-        servings: input.servings ?? meal?.usualServings ?? 2,
-      },
+    return (await insertPlanEntry(sequelize, transaction, householdId, input, entries)).id;
+  });
+}
+
+/**
+ * The write behind a drop on the board, inside a transaction that already holds the day's lock:
+ * `entries` are the locked days' entries, and the new one joins them.
+ */
+export async function insertPlanEntry(sequelize: Sequelize, transaction: Transaction, householdId: string, input: PlanEntryCreate, entries: PlanEntry[]) {
+  const meal = input.mealId
+    ? await Meal.findOne({ where: { id: input.mealId, householdId }, include: [{ model: MealProduct, as: 'products' }], transaction })
+    : null;
+  if (input.mealId && !meal) throw notFound('That meal');
+  const slot = slotOf(entries, input.date, input.slot as Slot);
+  const position = clamp(input.position ?? slot.length, slot.length);
+  const entry = await PlanEntry.create(
+    {
+      householdId,
+      date: input.date,
+      slot: input.slot as Slot,
+      position: slot.length,
+      title: input.title ?? meal!.name,
+      mealId: meal?.id ?? null,
+      servings: input.servings ?? meal?.usualServings ?? 2,
+    },
+    { transaction },
+  );
+  const ids = slot.map((e) => e.id);
+  ids.splice(position, 0, entry.id);
+  const current = placementsOf([...entries, entry]);
+  await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: input.date, slot: input.slot as Slot, ids }], current));
+  entries.push(entry);
+  const usual = (meal as (Meal & { products?: MealProduct[] }) | null)?.products ?? [];
+  if (usual.length) {
+    await Pairing.bulkCreate(
+      usual.map((mp) => ({ householdId, planEntryId: entry.id, productId: mp.productId, tbspPerServing: mp.tbspPerServing })),
       { transaction },
     );
-    const ids = slot.map((e) => e.id);
-    ids.splice(position, 0, entry.id);
-    const current = placementsOf([...entries, entry]);
-    await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: input.date, slot: input.slot as Slot, ids }], current));
-    const usual = (meal as (Meal & { products?: MealProduct[] }) | null)?.products ?? [];
-    if (usual.length) {
-      await Pairing.bulkCreate(
-        usual.map((mp) => ({ householdId, planEntryId: entry.id, productId: mp.productId, tbspPerServing: mp.tbspPerServing })),
-        { transaction },
-      );
-    }
-    return entry.id;
-  });
+  }
+  return entry;
 }
 
 async function lockedEntry(householdId: string, id: string, transaction: Transaction) {
@@ -89,7 +98,7 @@ export async function updatePlanEntry(sequelize: Sequelize, householdId: string,
   });
 }
 
-async function requireMembers(householdId: string, userIds: string[], transaction: Transaction) {
+export async function requireMembers(householdId: string, userIds: string[], transaction: Transaction) {
   const count = await Membership.count({ where: { householdId, userId: [...new Set(userIds)] }, transaction });
   if (count !== new Set(userIds).size) throw new AppError(400, 'invalid_input', 'Choose eaters from the household’s members.', { eaters: 'Choose members of this household.' });
 }
@@ -105,6 +114,23 @@ export async function deletePlanEntry(sequelize: Sequelize, householdId: string,
     await PlanEntry.destroy({ where: { id, householdId }, transaction });
     const rest = slotOf(entries, entry.date, entry.slot).map((e) => e.id).filter((e) => e !== id);
     await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: entry.date, slot: entry.slot, ids: rest }], placementsOf(entries)));
+  });
+}
+
+/** Removes several entries in one transaction (taking back an accepted proposal); every one must exist. */
+export async function deletePlanEntries(sequelize: Sequelize, householdId: string, ids: string[]) {
+  return sequelize.transaction(async (transaction) => {
+    const unique = [...new Set(ids)];
+    const peeks = await PlanEntry.findAll({ where: { id: unique, householdId }, attributes: ['date'], transaction });
+    if (peeks.length !== unique.length) throw notFound('One of those planned meals');
+    const entries = await lockDays(sequelize, transaction, householdId, peeks.map((p) => p.date));
+    const gone = entries.filter((e) => unique.includes(e.id));
+    if (gone.length !== unique.length) throw notFound('One of those planned meals');
+    await PlanEntry.destroy({ where: { id: unique, householdId }, transaction });
+    const slots = [...new Map(gone.map((e) => [`${e.date}|${e.slot}`, e])).values()];
+    const lists = slots.map(({ date, slot }) => ({ date, slot, ids: slotOf(entries, date, slot).map((e) => e.id).filter((id) => !unique.includes(id)) }));
+    await writePlacements(sequelize, transaction, householdId, densePlacements(lists, placementsOf(entries)));
+    return gone.length;
   });
 }
 

@@ -1,0 +1,30 @@
+// The words of the week board's meal proposal: why each meal, and the waste it saves.
+import { addDays, daysBetween, type ProposalReason } from './domain';
+import { count, shortDay } from './day-words';
+
+const WEEKDAY = new Intl.DateTimeFormat('en-US', { weekday: 'long', timeZone: 'UTC' });
+
+/** "Monday" for a day within a week of the meal, else "Thu, Dec 10". */
+function dayWords(isoDate: string, mealDate: string): string {
+  return Math.abs(daysBetween(mealDate, isoDate)) <= 6 ? WEEKDAY.format(new Date(`${isoDate}T00:00:00Z`)) : shortDay(isoDate);
+}
+
+/** "Uses the Plum Ketchup opened on Monday before Thursday." A jar turns the day after its use-by. */
+export function proposalReasonWords(reason: ProposalReason, productName: (productId: string) => string, mealDate: string): string {
+  switch (reason.kind) {
+    case 'opened-jar':
+      return `Uses the ${productName(String(reason.productId))} opened on ${dayWords(reason.openedOn, mealDate)} before ${dayWords(addDays(reason.useBy, 1), mealDate)}.`;
+    case 'past-best':
+      return `Opens the oldest ${productName(String(reason.productId))}, past its best quality since ${shortDay(addDays(reason.bestBy, 1))}.`;
+    case 'nearest-best':
+      return `Opens the oldest ${productName(String(reason.productId))}, at its best until ${shortDay(reason.bestBy)}.`;
+    case 'variety':
+      return 'Nothing on the shelf is pressing here: a change from the week’s other meals.';
+  }
+}
+
+/** "6 tbsp past their use-by · 2 sealed jars past best quality". */
+export function wasteWords(waste: { tbspPastUseBy: number; sealedJarsPastBest: number }): string {
+  const tbsp = Math.round(waste.tbspPastUseBy * 10) / 10;
+  return `${tbsp} tbsp past their use-by · ${count(waste.sealedJarsPastBest, 'sealed jar')} past best quality`;
+}
