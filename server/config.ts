@@ -24,6 +24,7 @@ const schema = z.object({
   VAPID_PRIVATE_KEY: z.string().optional(),
   VAPID_SUBJECT: z.string().regex(/^(mailto:|https:)/, 'VAPID_SUBJECT must start with mailto: or https:').optional(),
   PUSH_CA_FILE: z.string().optional(),
+  PUSH_LOCAL_ORIGIN: z.union([z.literal(''), z.url({ protocol: /^https$/, error: 'PUSH_LOCAL_ORIGIN must be an https:// origin' })]).optional(),
   MAIL_CATCHER_DIR: z.string().optional(),
   S3_ENDPOINT: z.string().url({ message: 'S3_ENDPOINT must be an http:// or https:// URL' }).optional(),
   S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'S3_BUCKET must be a bucket name: 3-63 lower-case letters, digits, dots and hyphens').optional(),
@@ -107,6 +108,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       vapidSubject: c.VAPID_SUBJECT ?? `mailto:${c.SMTP_FROM.match(/<([^>]+)>/)?.[1] ?? c.SMTP_FROM}`,
       /** the local push endpoint's certificate; trusted for loopback endpoints outside production only */
       caFile: c.NODE_ENV === 'production' ? undefined : c.PUSH_CA_FILE,
+      /** the local push endpoint (development setting): the only origin allowed that is not a public address */
+      localOrigin: c.PUSH_LOCAL_ORIGIN ? new URL(c.PUSH_LOCAL_ORIGIN).origin : undefined,
     },
   };
 }

@@ -24,7 +24,7 @@ export async function startStandIns(cluster) {
   const objects = process.env.S3_BUCKET ? {} : ready.objectStore.env;
   return {
     child,
-    env: { ...mail, PUSH_CA_FILE: ready.certFile, ...objects },
+    env: { ...mail, PUSH_CA_FILE: ready.certFile, PUSH_LOCAL_ORIGIN: ready.pushOrigin, ...objects },
     describe: [
       process.env.SMTP_HOST ? null : `mail catcher on 127.0.0.1:${ready.smtpPort}`,
       `push endpoint at ${ready.pushOrigin}`,

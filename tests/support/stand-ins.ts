@@ -15,7 +15,7 @@ export async function startStandIns(dir?: string) {
     push,
     certFile,
     /** what the app needs to send through them */
-    env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(mail.port), SMTP_SECURE: 'false', SMTP_FROM: 'Larderly <reminders@larderly.test>', PUSH_CA_FILE: certFile },
+    env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(mail.port), SMTP_SECURE: 'false', SMTP_FROM: 'Larderly <reminders@larderly.test>', PUSH_CA_FILE: certFile, PUSH_LOCAL_ORIGIN: push.origin },
     close: () => Promise.all([mail.close(), push.close()]),
   };
 }

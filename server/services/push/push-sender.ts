@@ -3,6 +3,7 @@ import https from 'node:https';
 import webpush, { WebPushError } from 'web-push';
 import type { Config } from '../../config';
 import { PushSubscription } from '../../db/models';
+import { publicPushAgent } from './endpoint-policy';
 import { loadVapidKeys, type VapidKeys } from './vapid-keys';
 
 /** What the service worker receives; `url` is the page a click opens. */
@@ -21,22 +22,22 @@ export interface PushSender {
   send(subscription: PushSubscription, message: PushMessage): Promise<PushOutcome>;
 }
 
-const LOOPBACK = new Set(['127.0.0.1', 'localhost', '[::1]']);
-
 export function createPushSender(config: Config): PushSender {
   let keys: Promise<VapidKeys> | undefined;
   const vapid = () => (keys ??= loadVapidKeys(config).catch((error) => {
     keys = undefined;
     throw error;
   }));
-  // The local push endpoint's self-signed certificate, trusted only for loopback endpoints outside production.
+  // The local push endpoint's self-signed certificate, trusted only for that endpoint outside production.
   const localAgent = config.push.caFile ? new https.Agent({ ca: readFileSync(config.push.caFile) }) : undefined;
+  const publicAgent = publicPushAgent();
 
   return {
     publicKey: async () => (await vapid()).publicKey,
     async send(subscription, message) {
       const { publicKey, privateKey } = await vapid();
-      const agent = localAgent && LOOPBACK.has(new URL(subscription.endpoint).hostname) ? localAgent : undefined;
+      const local = config.push.localOrigin !== undefined && new URL(subscription.endpoint).origin === config.push.localOrigin;
+      const agent = local ? localAgent : publicAgent;
       try {
         await webpush.sendNotification(
           { endpoint: subscription.endpoint, keys: { p256dh: subscription.p256dh, auth: subscription.auth } },

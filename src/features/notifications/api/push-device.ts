@@ -34,4 +34,4 @@ export async function unsubscribeThisDevice() {
   await subscription.unsubscribe();
 }
 
-export const sendTestNotification = () => api.post<{ sent: number; removed: number; failed: number }>('/push/test');
+export const sendTestNotification = () => api.post<{ devices: number }>('/push/test');

@@ -24,7 +24,7 @@ export function PushDevicePanel({ otherDevices }: { otherDevices: number }) {
       )}
       {device.test.data && (
         <Notice tone="action" role="status">
-          {device.test.data.sent > 0 ? 'Test notification sent. It should appear in a moment.' : 'No device could be reached; turn notifications on again.'}
+          {`Test notification sent to ${device.test.data.devices === 1 ? 'your device' : `your ${device.test.data.devices} devices`}. It should appear in a moment; if it does not, turn notifications off and on again.`}
         </Notice>
       )}
       <div className="flex flex-wrap gap-2">
