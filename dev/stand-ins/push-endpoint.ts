@@ -12,6 +12,8 @@ export interface CaughtPush {
   receivedAt: string;
   ttl: number;
   urgency: string;
+  /** the Topic header: a later message with the same topic replaces an undelivered one */
+  topic: string | null;
   vapidKey: string;
   claims: VapidClaims;
   /** the aes128gcm body, base64 */
@@ -56,6 +58,7 @@ export async function startPushEndpoint(options: { certFile: string; keyFile: st
         receivedAt: new Date().toISOString(),
         ttl,
         urgency: String(req.headers.urgency ?? 'normal'),
+        topic: typeof req.headers.topic === 'string' ? req.headers.topic : null,
         vapidKey: vapid.publicKey,
         claims: vapid.claims,
         body: Buffer.concat(chunks).toString('base64'),

@@ -4,6 +4,13 @@ import { sweepDigests } from '../services/digest';
 import { sweepReminders } from '../services/reminders';
 
 const REMINDERS = 'reminder-sweep';
+/**
+ * A sweep whose worker died stays "active" until expired; expiry is checked at each maintenance
+ * run. Together at most a minute before the next sweep may start. A slow live sweep that is
+ * expired too does no harm: the claims in reminder_deliveries keep every reminder once.
+ */
+export const SWEEP_EXPIRE_SECONDS = 40;
+export const MAINTENANCE_INTERVAL_SECONDS = 20;
 const DIGESTS = 'digest-sweep';
 
 /**
@@ -12,14 +19,23 @@ const DIGESTS = 'digest-sweep';
  * keys make each reminder and digest go out once even so.
  */
 export async function startJobs(ctx: AppContext) {
-  const boss = new PgBoss({ connectionString: ctx.config.databaseUrl, schema: 'pgboss', max: 3, application_name: 'larderly-jobs' });
+  const boss = new PgBoss({
+    connectionString: ctx.config.databaseUrl,
+    schema: 'pgboss',
+    max: 3,
+    application_name: 'larderly-jobs',
+    maintenanceIntervalSeconds: MAINTENANCE_INTERVAL_SECONDS,
+  });
   boss.on('error', (error) => console.warn(`larderly jobs: ${error.message}`));
   await boss.start();
   // Processes starting together would deadlock creating the same queues; an advisory lock takes turns.
   await ctx.sequelize.transaction(async (transaction) => {
     await ctx.sequelize.query("SELECT pg_advisory_xact_lock(hashtext('larderly-job-queues'))", { transaction });
     for (const name of [REMINDERS, DIGESTS]) {
-      if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, policy: 'singleton', expireInSeconds: 10 * 60, retryLimit: 2 });
+      const settings = { name, policy: 'singleton' as const, expireInSeconds: SWEEP_EXPIRE_SECONDS, retryLimit: 2 };
+      // Queues made by an earlier version keep their old expiry unless updated.
+      if (await boss.getQueue(name)) await boss.updateQueue(name, settings);
+      else await boss.createQueue(name, settings);
     }
   });
   await boss.schedule(REMINDERS, '*/5 * * * *');

@@ -19,44 +19,63 @@ export function dueReminder(daysLeft: number, hour: number, prefs: Preferences):
   return null;
 }
 
-/** Claims the reminder in the database; false when another run (or process) already has it. */
-async function claim(ctx: Notifiers, values: { householdId: string; jarId: string; userId: string; kind: ReminderKind; useBy: string }) {
-  const rows = await ctx.sequelize.query(
-    `INSERT INTO reminder_deliveries (id, household_id, jar_id, user_id, kind, use_by, created_at, updated_at)
-     VALUES (:id, :householdId, :jarId, :userId, :kind, :useBy, now(), now())
-     ON CONFLICT (jar_id, kind, user_id) DO NOTHING RETURNING id`,
-    { replacements: { id: randomUUID(), ...values }, type: QueryTypes.SELECT },
+/** A claim whose sends did not finish in this long (its process died) is taken again by a later sweep. */
+export const STALE_CLAIM_MINUTES = 5;
+/** Tries per reminder before it is left with its problem recorded. */
+export const MAX_ATTEMPTS = 5;
+
+/**
+ * Claims the reminder in the database: a new claim, or one whose sends never finished and whose
+ * claim went stale. Null when another run (or process) holds it or it has been sent.
+ */
+async function claim(ctx: Notifiers, now: Date, values: { householdId: string; jarId: string; userId: string; kind: ReminderKind; useBy: string }) {
+  const rows = await ctx.sequelize.query<{ id: string }>(
+    `INSERT INTO reminder_deliveries (id, household_id, jar_id, user_id, kind, use_by, claimed_at, attempts, created_at, updated_at)
+     VALUES (:id, :householdId, :jarId, :userId, :kind, :useBy, :now, 1, :now, :now)
+     ON CONFLICT (jar_id, kind, user_id) DO UPDATE SET claimed_at = :now, attempts = reminder_deliveries.attempts + 1, updated_at = :now
+       WHERE reminder_deliveries.sent_at IS NULL
+         AND reminder_deliveries.claimed_at < :now::timestamptz - make_interval(mins => :staleMinutes)
+         AND reminder_deliveries.attempts < :maxAttempts
+     RETURNING id`,
+    { replacements: { id: randomUUID(), now, staleMinutes: STALE_CLAIM_MINUTES, maxAttempts: MAX_ATTEMPTS, ...values }, type: QueryTypes.SELECT },
   );
-  return rows.length === 1 ? (rows[0] as { id: string }).id : null;
+  return rows.length === 1 ? rows[0].id : null;
 }
 
-async function deliver(ctx: Notifiers, deliveryId: string, to: { user: User; prefs: Preferences }, jar: Jar, product: Product, household: Household, kind: ReminderKind, daysLeft: number) {
+async function deliver(ctx: Notifiers, now: Date, deliveryId: string, to: { user: User; prefs: Preferences }, jar: Jar, product: Product, household: Household, kind: ReminderKind, daysLeft: number) {
   const words = reminderWords(kind, product.name, daysLeft, jar.code);
   const path = `/j/${jar.code}`;
   let pushesSent = 0;
   const problems: string[] = [];
   for (const subscription of await subscriptionsOf([to.user.id])) {
-    const outcome = await ctx.push.send(subscription, { ...words, url: path, tag: `jar-${jar.id}-${kind}` });
+    // The delivery's id as the push topic: a retried send replaces the first at the push service instead of adding a second.
+    const outcome = await ctx.push.send(subscription, { ...words, url: path, tag: `jar-${jar.id}-${kind}` }, { topic: deliveryId.replaceAll('-', '') });
     if (outcome === 'sent') pushesSent += 1;
     else problems.push(`push ${outcome}`);
   }
   let emailSent = false;
   if (to.prefs.emailReminders && ctx.mailer.enabled) {
     try {
-      await ctx.mailer.send(reminderMail({ to: to.user.email, words, householdName: household.name, link: `${ctx.config.publicOrigin}${path}` }));
+      // One Message-ID per delivery: a retried send is the same message to the mail server and the reader's mail program.
+      await ctx.mailer.send({ ...reminderMail({ to: to.user.email, words, householdName: household.name, link: `${ctx.config.publicOrigin}${path}` }), messageId: `<reminder-${deliveryId}@larderly.invalid>` });
       emailSent = true;
     } catch (error) {
       problems.push(`e-mail: ${(error as Error).message}`);
     }
   }
-  await ReminderDelivery.update({ pushesSent, emailSent, problem: problems.join('; ') || null }, { where: { id: deliveryId } });
+  await ReminderDelivery.update({ pushesSent, emailSent, problem: problems.join('; ') || null, sentAt: now }, { where: { id: deliveryId } });
+}
+
+/** For tests: runs between a claim and its sends, where a crash would leave the claim unsent. */
+export interface SweepHooks {
+  afterClaim?: (deliveryId: string) => void | Promise<void>;
 }
 
 /**
  * One pass of the reminder schedule: every opened jar whose use-by is near, in each household's
  * time zone, for each member whose reminder hour has come. Safe to run often and in parallel.
  */
-export async function sweepReminders(ctx: Notifiers, now = clock.now()) {
+export async function sweepReminders(ctx: Notifiers, now = clock.now(), hooks: SweepHooks = {}) {
   const utcToday = now.toISOString().slice(0, 10);
   // Time zones are at most a day apart from UTC, so this window holds every jar due anywhere.
   const jars = await Jar.findAll({ where: { state: 'opened', useBy: { [Op.between]: [addDays(utcToday, -1), addDays(utcToday, 16)] } } });
@@ -74,10 +93,11 @@ export async function sweepReminders(ctx: Notifiers, now = clock.now()) {
         const mine = prefs.get(membership.userId)!;
         const kind = dueReminder(daysLeft, hour, mine);
         if (!kind) continue;
-        const deliveryId = await claim(ctx, { householdId: household.id, jarId: jar.id, userId: membership.userId, kind, useBy: jar.useBy! });
+        const deliveryId = await claim(ctx, now, { householdId: household.id, jarId: jar.id, userId: membership.userId, kind, useBy: jar.useBy! });
         if (!deliveryId) continue;
         claimed += 1;
-        await deliver(ctx, deliveryId, { user: membership.user!, prefs: mine }, jar, products.get(jar.productId)!, household, kind, daysLeft);
+        await hooks.afterClaim?.(deliveryId);
+        await deliver(ctx, now, deliveryId, { user: membership.user!, prefs: mine }, jar, products.get(jar.productId)!, household, kind, daysLeft);
       }
     }
   }

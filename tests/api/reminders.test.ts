@@ -2,12 +2,13 @@ import { spawn } from 'node:child_process';
 import webpush from 'web-push';
 import { describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
-import { startJobs } from '../../server/jobs';
+import { QueryTypes } from 'sequelize';
+import { MAINTENANCE_INTERVAL_SECONDS, startJobs, SWEEP_EXPIRE_SECONDS } from '../../server/jobs';
 import { loadConfig } from '../../server/config';
 import { AppSetting, ReminderDelivery } from '../../server/db/models';
 import { loadVapidKeys, type VapidKeys } from '../../server/services/push/vapid-keys';
 import { clock, todayIn } from '../../server/services/clock';
-import { sweepReminders } from '../../server/services/reminders';
+import { STALE_CLAIM_MINUTES, sweepReminders } from '../../server/services/reminders';
 import type { bareApp } from '../support/bare-app';
 import { instantAt } from '../support/household-time';
 import { newHousehold, openedJar } from '../support/opened-jar';
@@ -93,6 +94,41 @@ describe('use-by reminders', () => {
     expect(standIns.mail.to(home.email)).toHaveLength(1);
     expect(await ReminderDelivery.count({ where: { jarId: home.jar.id } })).toBe(1);
     expect(outputs.join('')).toMatch(/"reminders":/);
+  });
+
+  it('retries a claim whose sweep crashed between the claim and the send, once it is stale, and then sends once', async () => {
+    const home = await scenario('Rowan Berry Jelly');
+    const crash = new Error('the process died here');
+    await expect(sweepReminders(built.ctx, home.at(8, 5), { afterClaim: () => Promise.reject(crash) })).rejects.toBe(crash);
+    const claimed = await ReminderDelivery.findOne({ where: { jarId: home.jar.id } });
+    expect(claimed).toMatchObject({ sentAt: null, attempts: 1 });
+    expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
+
+    // A sweep soon after leaves the claim to whoever might still hold it.
+    await sweepReminders(built.ctx, home.at(8, 5 + STALE_CLAIM_MINUTES - 1));
+    expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
+
+    await sweepReminders(built.ctx, home.at(8, 6 + STALE_CLAIM_MINUTES));
+    await sweepReminders(built.ctx, home.at(9, 0));
+    await sweepReminders(built.ctx, home.at(10, 0));
+    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual(['Use the Rowan Berry Jelly within 2 days']);
+    expect(standIns.mail.to(home.email)).toHaveLength(1);
+    const sent = await ReminderDelivery.findOne({ where: { jarId: home.jar.id } });
+    expect(sent!.sentAt).not.toBeNull();
+    expect(sent!.attempts).toBe(2);
+    // The retried push replaces any first one at the push service; the retried mail keeps one Message-ID.
+    expect(standIns.push.receivedBy(home.endpoint)[0].topic).toBe(sent!.id.replaceAll('-', ''));
+  });
+
+  it('expires a sweep whose worker died within a minute, so the next sweep is not blocked longer', async () => {
+    const runner = await startJobs(built.ctx);
+    try {
+      const [queue] = await built.sequelize.query<{ expire_seconds: number }>("SELECT expire_seconds FROM pgboss.queue WHERE name = 'reminder-sweep'", { type: QueryTypes.SELECT });
+      expect(queue.expire_seconds).toBe(SWEEP_EXPIRE_SECONDS);
+      expect(SWEEP_EXPIRE_SECONDS + MAINTENANCE_INTERVAL_SECONDS).toBeLessThanOrEqual(60);
+    } finally {
+      await runner.stop();
+    }
   });
 
   it('runs through the job queue in PostgreSQL with two runners, still once', async () => {

@@ -15,6 +15,10 @@ export class ReminderDelivery extends Model<InferAttributes<ReminderDelivery>, I
   declare pushesSent: CreationOptional<number>;
   declare emailSent: CreationOptional<boolean>;
   declare problem: CreationOptional<string | null>;
+  declare claimedAt: CreationOptional<Date>;
+  /** when the sends finished; null while claimed, or after a crash until a later sweep retries */
+  declare sentAt: CreationOptional<Date | null>;
+  declare attempts: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -30,6 +34,9 @@ export class ReminderDelivery extends Model<InferAttributes<ReminderDelivery>, I
         pushesSent: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         emailSent: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         problem: { type: DataTypes.TEXT, allowNull: true },
+        claimedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+        sentAt: { type: DataTypes.DATE, allowNull: true },
+        attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

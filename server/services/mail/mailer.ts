@@ -6,6 +6,8 @@ export interface MailMessage {
   subject: string;
   text: string;
   html: string;
+  /** a fixed Message-ID, so a retried send is recognisably the same message */
+  messageId?: string;
 }
 
 export interface Mailer {

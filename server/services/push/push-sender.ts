@@ -19,7 +19,7 @@ export type PushOutcome = 'sent' | 'gone' | 'failed';
 export interface PushSender {
   publicKey(): Promise<string>;
   /** Sends to one subscription; a subscription the push service no longer knows (404, 410) is removed. */
-  send(subscription: PushSubscription, message: PushMessage): Promise<PushOutcome>;
+  send(subscription: PushSubscription, message: PushMessage, options?: { topic?: string }): Promise<PushOutcome>;
 }
 
 export function createPushSender(config: Config): PushSender {
@@ -34,7 +34,7 @@ export function createPushSender(config: Config): PushSender {
 
   return {
     publicKey: async () => (await vapid()).publicKey,
-    async send(subscription, message) {
+    async send(subscription, message, options = {}) {
       const { publicKey, privateKey } = await vapid();
       const local = config.push.localOrigin !== undefined && new URL(subscription.endpoint).origin === config.push.localOrigin;
       const agent = local ? localAgent : publicAgent;
@@ -42,7 +42,7 @@ export function createPushSender(config: Config): PushSender {
         await webpush.sendNotification(
           { endpoint: subscription.endpoint, keys: { p256dh: subscription.p256dh, auth: subscription.auth } },
           JSON.stringify(message),
-          { vapidDetails: { subject: config.push.vapidSubject, publicKey, privateKey }, TTL: 24 * 60 * 60, urgency: 'normal', agent, timeout: 10_000 },
+          { vapidDetails: { subject: config.push.vapidSubject, publicKey, privateKey }, TTL: 24 * 60 * 60, urgency: 'normal', agent, timeout: 10_000, topic: options.topic },
         );
         return 'sent';
       } catch (error) {
