@@ -6,7 +6,7 @@ import { DigestDelivery, Household, Jar, Membership, Pairing, PlanEntry, User } 
 import { digestMail, type DigestContent } from './mail/digest-mail';
 import { clock, hourIn, todayIn } from './clock';
 import { digestRestockLines } from './restock/digest-lines';
-import { preferencesOf } from './notification-preferences';
+import { preferencesOf, withinReminderHours } from './notification-preferences';
 import { allocatePlan, productsOf } from './plan-allocation';
 
 type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer'>;
@@ -57,7 +57,7 @@ export async function sweepDigests(ctx: Notifiers, now = clock.now()) {
     const hour = hourIn(household.timeZone, now);
     const memberships = await Membership.findAll({ where: { householdId: household.id }, include: [{ model: User, as: 'user', required: true }] });
     const prefs = await preferencesOf(memberships.map((m) => m.userId));
-    const due = memberships.filter((m) => prefs.get(m.userId)!.weeklyDigest && hour >= prefs.get(m.userId)!.reminderHour);
+    const due = memberships.filter((m) => prefs.get(m.userId)!.weeklyDigest && withinReminderHours(hour, prefs.get(m.userId)!.reminderHour));
     if (due.length === 0) continue;
     let digest: DigestContent | undefined;
     for (const membership of due) {

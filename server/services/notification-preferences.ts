@@ -8,6 +8,16 @@ export interface Preferences {
   daysBefore: number;
 }
 
+/**
+ * How long after the reminder hour a missed reminder or digest is still sent (a sweep late after a restart): our own
+ * rule, so a server back up at 10:30 pm wakes nobody; a reminder still due tomorrow goes out at tomorrow's hour.
+ */
+export const CATCH_UP_HOURS = 3;
+
+export function withinReminderHours(hour: number, reminderHour: number): boolean {
+  return hour >= reminderHour && hour < reminderHour + CATCH_UP_HOURS;
+}
+
 export const DEFAULT_PREFERENCES: Preferences = { emailReminders: true, weeklyDigest: true, reminderHour: DEFAULT_REMINDER_HOUR, daysBefore: DEFAULT_DAYS_BEFORE };
 
 function pick(row: NotificationPreference | null | undefined): Preferences {

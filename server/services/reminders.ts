@@ -6,14 +6,14 @@ import { Household, Jar, Membership, Product, ReminderDelivery, User } from '../
 import type { ReminderKind } from '../db/models/reminder-delivery';
 import { reminderMail, reminderWords } from './mail/reminder-mail';
 import { clock, hourIn, todayIn } from './clock';
-import { preferencesOf, type Preferences } from './notification-preferences';
+import { preferencesOf, withinReminderHours, type Preferences } from './notification-preferences';
 import { subscriptionsOf } from './push/subscriptions';
 
 type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer' | 'push'>;
 
 /** Which reminder, if any, a person is due for a jar at this hour of the household's day. */
 export function dueReminder(daysLeft: number, hour: number, prefs: Preferences): ReminderKind | null {
-  if (hour < prefs.reminderHour) return null;
+  if (!withinReminderHours(hour, prefs.reminderHour)) return null;
   if (daysLeft === 0) return 'today';
   if (daysLeft >= 1 && daysLeft <= prefs.daysBefore) return 'soon';
   return null;

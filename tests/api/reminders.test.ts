@@ -73,8 +73,21 @@ describe('use-by reminders', () => {
     expect(mails[0].html).toContain('Quince and Walnut Chutney');
 
     await sweepReminders(built.ctx, home.at(8, 10));
-    await sweepReminders(built.ctx, home.at(14, 0));
+    await sweepReminders(built.ctx, home.at(10, 0));
     expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(1);
+    expect(standIns.mail.to(home.email)).toHaveLength(1);
+  });
+
+  it('after a restart late in the evening sends nothing then, and the reminder at the next morning’s hour', async () => {
+    const home = await scenario('Cherry Plum Chutney');
+    // The server comes back at 10:30 pm household time, well after the 8:00 reminder hour.
+    await sweepReminders(built.ctx, home.at(22, 30));
+    await sweepReminders(built.ctx, home.at(11, 5));
+    expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
+    expect(standIns.mail.to(home.email)).toHaveLength(0);
+    // A sweep within the catch-up hours after the reminder hour still sends the missed one.
+    await sweepReminders(built.ctx, instantAt(addDays(home.jar.useBy!, -1), 9, 40, ZONE));
+    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual(['Use the Cherry Plum Chutney within 1 day']);
     expect(standIns.mail.to(home.email)).toHaveLength(1);
   });
 

@@ -52,7 +52,7 @@ export function NotificationSettingsPanel() {
               </option>
             ))}
           </SelectField>
-          <SelectField label="Reminder time" hint="In the household's time zone." value={s.reminderHour} onChange={(e) => change({ reminderHour: Number(e.target.value) })}>
+          <SelectField label="Reminder time" hint="In the household's time zone. A reminder missed at that hour is sent up to 3 hours late, never later in the day." value={s.reminderHour} onChange={(e) => change({ reminderHour: Number(e.target.value) })}>
             {HOURS.map((h) => (
               <option key={h} value={h}>
                 {hourLabel(h)}
