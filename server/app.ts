@@ -12,6 +12,7 @@ import { sameOriginOnly } from './http/same-origin';
 import { authRouter } from './routes/auth';
 import { backupImportRouter, IMPORT_PATH } from './routes/backup';
 import { healthRouter } from './routes/health';
+import { publicConfigRouter } from './routes/public-config';
 import { householdsRouter } from './routes/households';
 import { jarCodesRouter } from './routes/jars';
 import { householdFeatureRouters } from './routes/index';
@@ -55,6 +56,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
 
   const api = Router();
   api.use(healthRouter(sequelize, ctx.photos));
+  api.use(publicConfigRouter(config));
   const json = express.json({ limit: '1mb' });
   // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
   api.use((req, res, next) => (req.method === 'POST' && req.path === IMPORT_PATH ? next() : json(req, res, next)));

@@ -99,6 +99,7 @@ const H = '/api/households/:hid';
 export const TABLE: Record<string, RouteRule> = {
   'GET /api/health': { access: 'public' },
   'GET /api/ready': { access: 'public' },
+  'GET /api/config': { access: 'public' },
   'POST /api/auth/signup': { access: 'public', body: () => ({}) },
   'POST /api/auth/login': { access: 'public', body: () => ({}) },
   'POST /api/auth/logout': { access: 'public', signsOut: true },

@@ -63,6 +63,32 @@ describe('label sheets', () => {
   }, 150_000);
 });
 
+describe('labels for a phone to scan', () => {
+  it('point their QR codes at the configured public origin, carry the best-quality date, and print US Letter text at 9 pt or more', async () => {
+    const page = await newPage({ viewport: DESKTOP });
+    // The server's answer when APP_ORIGIN is set (its API test checks that); here the sheet is printed from a local address.
+    await page.route('**/api/config', (route) => route.fulfill({ json: { publicOrigin: 'https://larder.example.test' } }));
+    await signIn(page, baseURL, 'cook@larderly.test');
+    const hid = page.url().match(/\/h\/([0-9a-f-]{36})/)![1];
+    const [jar] = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; batchId: string; bestBy: string }[];
+    await page.goto(`${baseURL}/h/${hid}/batches/${jar!.batchId}/labels?paper=letter`);
+    await page.locator('img[alt^="QR code for jar"]').first().waitFor();
+    const decoded = await decodeQrCodes(page);
+    expect(decoded.length).toBeGreaterThan(0);
+    for (const text of decoded) expect(text).toMatch(/^https:\/\/larder\.example\.test\/j\/[0-9A-Z]{6}$/);
+    const label = page.locator(`li.jar-label[data-code="${jar!.code}"]`);
+    const bestBy = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${jar!.bestBy}T00:00:00Z`));
+    await expect(label.textContent()).resolves.toContain(`Best by ${bestBy}`);
+    await page.emulateMedia({ media: 'print' });
+    // 9 pt is 12 CSS px; every line of text on a Letter label is at least that.
+    const sizes = await page.locator('li.jar-label span span, li.jar-label > span > span').evaluateAll((spans) => spans.map((s) => parseFloat(getComputedStyle(s).fontSize)));
+    expect(sizes.length).toBeGreaterThan(0);
+    expect(Math.min(...sizes)).toBeGreaterThanOrEqual(12);
+    await screenshot(page, 'shelf-labels-letter-public-origin');
+    await page.close();
+  }, 150_000);
+});
+
 describe('a jar’s page', () => {
   it('lets a helper who scanned a label sign in and mark the jar opened', async () => {
     const cook = await newPage({ viewport: DESKTOP });

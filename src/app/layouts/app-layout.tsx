@@ -34,7 +34,7 @@ export function AppLayout() {
       <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-surface focus:p-2">
         Skip to content
       </a>
-      <aside className="hidden border-r border-line bg-surface/70 lg:flex lg:flex-col lg:gap-6 lg:p-4">
+      <aside className="hidden border-r border-line bg-surface/70 lg:sticky lg:top-0 lg:flex lg:h-dvh lg:flex-col lg:gap-6 lg:overflow-y-auto lg:p-4">
         <Brand />
         <nav aria-label="Screens" className="flex flex-col gap-1">
           {SCREENS.map((screen) => (
