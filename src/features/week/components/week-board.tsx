@@ -19,6 +19,7 @@ import { entriesOf, isPending } from '../week-edits';
 import { DayColumn } from './day-column';
 import { DayPicker } from './day-picker';
 import { MealLibrary } from './meal-library';
+import { ProposalPanel } from './proposal-panel';
 import { ShelfRail } from './shelf-rail';
 
 const sourceOf = (thing: { data: { current?: unknown } } | null | undefined) => thing?.data.current as DragSource | undefined;
@@ -180,6 +181,7 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
               </button>
             </div>
           )}
+          <ProposalPanel hid={hid} week={week} canEdit={canEdit} />
           <div className="grid gap-4 rounded-card border border-line bg-surface p-3 md:grid-cols-2">
             <MealLibrary hid={hid} meals={meals} canEdit={canEdit} />
             <ShelfRail products={week.products} canEdit={canEdit} />
