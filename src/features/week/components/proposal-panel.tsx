@@ -34,6 +34,8 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
   const [chosen, setChosen] = useState<Set<string>>(new Set());
   const [avoid, setAvoid] = useState<{ date: string; slot: ProposedMealView['slot']; mealId: string }[]>([]);
   const [planned, setPlanned] = useState<{ ids: string[]; count: number } | null>(null);
+  // The before-and-after figures hold for the whole proposal; once some of it is planned the live figure above says it.
+  const [wholeProposal, setWholeProposal] = useState(true);
   const days = week.days.filter((d) => d.date >= week.today);
 
   const ask = (options: { keep?: ProposedMealView[]; avoid?: typeof avoid } = {}) => {
@@ -45,6 +47,7 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
           setProposal(answer);
           setChosen(new Set(answer.proposed.map(slotKey)));
           setAvoid(options.avoid ?? []);
+          setWholeProposal(true);
         },
         onError: (error) => setMessage(error.message),
       },
@@ -66,6 +69,7 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
         setPlanned({ ids: entryIds, count: entryIds.length });
         const rest = proposal.proposed.filter((m) => !chosen.has(slotKey(m)));
         setProposal(rest.length ? { ...proposal, proposed: rest } : null);
+        setWholeProposal(false);
       },
     });
   };
@@ -135,9 +139,11 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
       )}
       {proposal && (
         <div className="flex flex-col gap-2">
+          {wholeProposal && (
           <p className="tabular text-sm" data-testid="proposal-figures">
             If you accept them all: <span className="font-bold">{wasteWords(proposal.before)}</span> → <span className="font-bold text-action">{wasteWords(proposal.after)}</span>
           </p>
+          )}
           {proposal.proposed.length === 0 && <p>Every slot asked for is planned already, or no meal suits it without a flag, a repeat or a jar the shelf lacks.</p>}
           <ul className="flex flex-col gap-2" aria-label="Proposed meals">
             {proposal.proposed.map((meal) => (
