@@ -87,7 +87,7 @@ const jarEvent = z.object({
   id,
   jarId: id,
   batchId: id,
-  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded']),
+  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored']),
   happenedOn: date,
 });
 

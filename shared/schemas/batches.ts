@@ -110,6 +110,28 @@ export interface JarByCode {
   householdName: string;
   role: import('../roles').Role;
   jar: JarView;
+  /** The jar's latest change, which a put-back reverses. */
+  lastChange: JarChange | null;
+}
+
+/** How long a helper may undo their own open, finish or discard; cooks and keepers may put a jar back any time. */
+export const JAR_UNDO_MINUTES = 10;
+
+export const jarUndoBody = z.object({ eventId: z.uuid({ error: 'Say which change to undo.' }) });
+
+/** What an open, finish, discard or undo answers: the jar now, and the event it wrote (to undo it). */
+export interface JarActed {
+  jar: JarView;
+  eventId: string;
+}
+
+export interface JarChange {
+  eventId: string;
+  kind: string;
+  happenedOn: string;
+  at: string;
+  who: string | null;
+  byUserId: string | null;
 }
 
 /** One row of a batch import, as the preview shows it. */

@@ -145,6 +145,8 @@ export const TABLE: Record<string, RouteRule> = {
   [`GET ${H}/jars/by-code/:code`]: { access: 'read' },
   [`GET ${H}/jars/:jarId/opening-advice`]: { access: 'read' },
   [`POST ${H}/jars/:jarId/:action`]: { access: 'handleJars', destructive: true },
+  // Any member reaches the service, which lets a helper undo only their own recent change (tests/api/jar-undo.test.ts).
+  [`POST ${H}/jars/:jarId/undo`]: { access: 'handleJars', body: () => ({ eventId: '00000000-0000-4000-8000-000000000000' }) },
   [`GET ${H}/shelf.csv`]: { access: 'read' },
   [`POST ${H}/shelf/import`]: { access: 'cook', body: () => ({ csv: 'product,canned on\n', commit: false }) },
 

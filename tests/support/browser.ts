@@ -5,6 +5,10 @@ import { afterAll, beforeAll } from 'vitest';
 
 export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1366, height: 900 };
+/** The desktop the week board must stay readable on. */
+export const WIDE_DESKTOP = { width: 1440, height: 900 };
+/** A phone held in the hand: touch, not a mouse. */
+export const PHONE_TOUCH = { viewport: PHONE, isMobile: true, hasTouch: true };
 
 export function launchChromium(): Promise<Browser> {
   return chromium.launch({

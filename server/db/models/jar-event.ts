@@ -1,8 +1,18 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { JarState } from '../../../shared/domain';
 import { requiredUuid, uuidKey } from './columns';
 
-export const JAR_EVENT_KINDS = ['filled', 'unsealed', 'opened', 'finished', 'discarded'] as const;
+export const JAR_EVENT_KINDS = ['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored'] as const;
 export type JarEventKind = (typeof JAR_EVENT_KINDS)[number];
+
+export interface JarBefore {
+  state: JarState;
+  openedOn: string | null;
+  useBy: string | null;
+  finishedOn: string | null;
+  discardedOn: string | null;
+  remainingTbsp: number;
+}
 
 export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttributes<JarEvent>> {
   declare id: CreationOptional<string>;
@@ -12,6 +22,10 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
   declare kind: JarEventKind;
   declare userId: string | null;
   declare happenedOn: string;
+  /** A 'restored' event names the open, finish or discard it reverses. */
+  declare undoesEventId: CreationOptional<string | null>;
+  /** The jar's fields before an open, finish or discard, so an undo puts back exactly those. */
+  declare stateBefore: CreationOptional<JarBefore | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -24,6 +38,8 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
         kind: { type: DataTypes.STRING(12), allowNull: false },
         userId: { type: DataTypes.UUID, allowNull: true },
         happenedOn: { type: DataTypes.DATEONLY, allowNull: false },
+        undoesEventId: { type: DataTypes.UUID, allowNull: true },
+        stateBefore: { type: DataTypes.JSONB, allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'jar_events', updatedAt: false },

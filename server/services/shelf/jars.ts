@@ -1,11 +1,12 @@
 // Jars on the shelf and in the fridge, and the three things a member does with one.
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
-import type { JarAction, JarByCode, JarView, OpeningAdvice } from '../../../shared/schemas/batches';
+import type { JarAction, JarActed, JarByCode, JarView, OpeningAdvice } from '../../../shared/schemas/batches';
 import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/models';
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 import { normaliseJarCode } from './jar-codes';
+import { jarBefore, lastJarChange } from './jar-undo';
 import { jarView, shelfClock } from './views';
 
 type JarWithParts = Jar & { batch: Batch; product: Product };
@@ -37,7 +38,7 @@ function refusal(action: JarAction, jar: Jar): string {
  * Moves a jar along sealed -> opened -> finished, or to discarded. The conditional UPDATE is the
  * lock: of many people acting on one jar at once, exactly one changes it and the others get 409.
  */
-export async function actOnJar(sequelize: Sequelize, household: Household, jarId: string, action: JarAction, userId: string): Promise<JarView> {
+export async function actOnJar(sequelize: Sequelize, household: Household, jarId: string, action: JarAction, userId: string): Promise<JarActed> {
   const today = todayIn(household.timeZone);
   return sequelize.transaction(async (transaction) => {
     const jar = (await Jar.findOne({ where: { id: jarId, householdId: household.id }, include: withParts, transaction })) as JarWithParts | null;
@@ -53,8 +54,11 @@ export async function actOnJar(sequelize: Sequelize, household: Household, jarId
       await jar.reload({ transaction });
       throw conflict(refusal(action, jar));
     }
-    await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: EVENT[action], userId, happenedOn: today }, { transaction });
-    return jarView(rows[0], jar.batch, jar.product, shelfClock(household));
+    const event = await JarEvent.create(
+      { householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: EVENT[action], userId, happenedOn: today, stateBefore: jarBefore(jar) },
+      { transaction },
+    );
+    return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
   });
 }
 
@@ -91,7 +95,7 @@ export async function jarInHousehold(household: Household, rawCode: string) {
 /** A label's code, for someone signed in: the jar and its household when they belong to it, 404 otherwise. */
 export async function jarByCode(rawCode: string, userId: string): Promise<JarByCode> {
   const code = normaliseJarCode(rawCode);
-  const jar = code ? await Jar.findOne({ where: { code }, attributes: ['householdId'] }) : null;
+  const jar = code ? await Jar.findOne({ where: { code }, attributes: ['id', 'householdId'] }) : null;
   const membership = jar
     ? await Membership.findOne({ where: { householdId: jar.householdId, userId }, include: [{ model: Household, as: 'household', required: true }] })
     : null;
@@ -101,5 +105,6 @@ export async function jarByCode(rawCode: string, userId: string): Promise<JarByC
     householdName: membership.household.name,
     role: membership.role,
     jar: await jarInHousehold(membership.household, code!),
+    lastChange: await lastJarChange(membership.householdId, jar!.id),
   };
 }

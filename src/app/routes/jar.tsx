@@ -1,10 +1,12 @@
 import { Link, useParams } from 'react-router-dom';
+import { can } from '@shared/roles';
 import { UNSEALED_JAR_ADVICE } from '@shared/domain';
 import { Brand } from '@/components/ui/brand';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
 import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
+import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
 import { jarSizeName, longDate } from '@/features/shelf/format';
 
@@ -49,6 +51,7 @@ export function JarRoute() {
           </p>
           {jar.unsealed && jar.state === 'opened' && <Notice tone="info">{UNSEALED_JAR_ADVICE}</Notice>}
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
+          <PutBackJar hid={found.data.householdId} jar={jar} lastChange={found.data.lastChange} canCook={can(found.data.role, 'cook')} />
           <Link to={`/h/${found.data.householdId}/batches/${jar.batchId}`} className="font-bold text-action underline underline-offset-4">
             The whole batch
           </Link>

@@ -1,2 +1,4 @@
 // What other features may use of the shelf.
 export { shelfKeys } from './api/keys';
+export { actOnJar } from './api/act-on-jar';
+export { useOfferJarUndo } from './api/undo-jar-change';

@@ -1,17 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { FridgeView } from '@shared/schemas/fridge';
-import { api } from '@/lib/api-client';
+import { actOnJar, useOfferJarUndo } from '@/features/shelf';
 import { fridgeKeys } from './get-fridge';
 
 export type ClosingAction = 'finish' | 'discard';
 
 /** The shelf's own jar actions; the fridge only offers finishing and discarding. */
-export const closeJar = (hid: string, jarId: string, action: ClosingAction) => api.post(`/households/${hid}/jars/${jarId}/${action}`);
-
 export function useCloseJar(hid: string) {
   const queryClient = useQueryClient();
+  const offerUndo = useOfferJarUndo(hid);
   return useMutation({
-    mutationFn: ({ jarId, action }: { jarId: string; action: ClosingAction }) => closeJar(hid, jarId, action),
+    mutationFn: ({ jarId, action }: { jarId: string; action: ClosingAction }) => actOnJar(hid, jarId, action),
     onMutate: async ({ jarId }) => {
       await queryClient.cancelQueries({ queryKey: fridgeKeys.fridge(hid) });
       const before = queryClient.getQueryData<FridgeView>(fridgeKeys.fridge(hid));
@@ -21,6 +20,7 @@ export function useCloseJar(hid: string) {
     onError: (_error, _input, context) => {
       if (context?.before) queryClient.setQueryData(fridgeKeys.fridge(hid), context.before);
     },
+    onSuccess: (acted, { action }) => offerUndo(action, acted),
     // The shelf, Today and the week all count this jar, so every household query refreshes.
     onSettled: () => queryClient.invalidateQueries({ queryKey: ['households', hid] }),
   });

@@ -7,5 +7,6 @@ export const shelfKeys = {
   batches: (hid: string) => ['households', hid, 'shelf', 'batches'] as const,
   batch: (hid: string, batchId: string) => ['households', hid, 'shelf', 'batches', batchId] as const,
   jars: (hid: string, state: string) => ['households', hid, 'shelf', 'jars', state] as const,
+  jarsByCode: () => ['jar-by-code'] as const,
   jarByCode: (code: string) => ['jar-by-code', code] as const,
 };

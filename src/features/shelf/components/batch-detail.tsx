@@ -7,7 +7,7 @@ import { BatchPhoto } from './batch-photo';
 import { JarActions } from './jar-actions';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
 
-const EVENT_WORDS: Record<string, string> = { filled: 'filled', unsealed: 'did not seal; put in the fridge', opened: 'opened', finished: 'finished', discarded: 'discarded' };
+const EVENT_WORDS: Record<string, string> = { filled: 'filled', unsealed: 'did not seal; put in the fridge', opened: 'opened', finished: 'finished', discarded: 'discarded', restored: 'put back (the change before was undone)' };
 
 export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
   const processing =

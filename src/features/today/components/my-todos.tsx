@@ -1,11 +1,11 @@
 import { Link } from 'react-router-dom';
 import type { TodayTodo } from '@shared/schemas/today';
 import { shortDay } from '@shared/day-words';
-import { useUpdateTodo } from '@/features/todos';
+import { useTickTodo } from '@/features/todos';
 
 /** The signed-in person's open to-dos, tickable right here. */
 export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
-  const update = useUpdateTodo(hid);
+  const tick = useTickTodo(hid);
   if (todos.length === 0) return <p className="text-ink-muted">Nothing on the list is assigned to you.</p>;
   return (
     <ul className="divide-y divide-line">
@@ -16,8 +16,8 @@ export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
               type="checkbox"
               className="h-6 w-6 accent-action"
               aria-label={`Done: ${todo.title}`}
-              disabled={update.isPending}
-              onChange={() => update.mutate({ id: todo.id, patch: { done: true } })}
+              disabled={tick.isPending}
+              onChange={() => tick.mutate({ id: todo.id, title: todo.title, done: true })}
             />
           </label>
           <Link to={`/h/${hid}/todo${todo.kind === 'restock' ? `?open=${todo.id}` : ''}`} className="flex min-h-11 flex-1 flex-col justify-center hover:underline">

@@ -2,7 +2,7 @@ import { closestCenter, DndContext, KeyboardSensor, PointerSensor, useSensor, us
 import { arrayMove, SortableContext, sortableKeyboardCoordinates, verticalListSortingStrategy } from '@dnd-kit/sortable';
 import type { TodoFilter, TodoView } from '@shared/schemas/todos';
 import { useMoveTodo } from '../api/move-todo';
-import { useUpdateTodo } from '../api/update-todo';
+import { useTickTodo } from '../api/update-todo';
 import { TodoRow } from './todo-row';
 
 interface Props {
@@ -18,7 +18,7 @@ const titleOf = (todos: TodoView[], id: unknown) => todos.find((t) => t.id === i
 
 export function SortableTodoList({ hid, filter, todos, canMove, today, onOpen }: Props) {
   const move = useMoveTodo(hid, filter);
-  const update = useUpdateTodo(hid);
+  const tick = useTickTodo(hid);
   // A short drag distance keeps a tap on the handle from starting a drag on a phone.
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
 
@@ -52,7 +52,7 @@ export function SortableTodoList({ hid, filter, todos, canMove, today, onOpen }:
               todo={todo}
               canMove={canMove}
               today={today}
-              onTick={(done) => update.mutate({ id: todo.id, patch: { done } })}
+              onTick={(done) => tick.mutate({ id: todo.id, title: todo.title, done })}
               onOpen={() => onOpen(todo.id)}
             />
           ))}
