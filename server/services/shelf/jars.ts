@@ -1,7 +1,7 @@
 // Jars on the shelf and in the fridge, and the three things a member does with one.
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
-import type { JarAction, JarActed, JarByCode, JarView, OpeningAdvice } from '../../../shared/schemas/batches';
+import type { JarAction, JarActed, JarByCode, OpeningAdvice } from '../../../shared/schemas/batches';
 import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/models';
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
