@@ -61,6 +61,11 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
   api.use((req, res, next) => (req.method === 'POST' && req.path === IMPORT_PATH ? next() : json(req, res, next)));
   api.use(sameOriginOnly(config.appOrigins));
+  // Household answers are one person's view: never kept by a shared cache or the browser's back-forward store.
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'private, no-store');
+    next();
+  });
   api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
   api.use(passport.session());
   const authLimit = options.authLimit ?? config.authRateLimit;

@@ -3,6 +3,7 @@ import { BACKUP_MAX_BYTES, householdBackup } from '../../shared/schemas/backup';
 import { currentMembership, householdAccess, requireUser } from '../auth/guards';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
+import { byPerson, limit, MINUTE } from '../http/rate-limits';
 import { parse } from '../http/validate';
 import { exportHousehold, importHousehold } from '../services/backup';
 
@@ -33,7 +34,10 @@ const backupBody: RequestHandler = (req, res, next) => {
 /** POST /api/households/import: a new household from a backup file, with the importer as keeper. */
 export function backupImportRouter(ctx: AppContext) {
   const router = Router();
-  router.post('/import', requireUser, backupBody, async (req, res) => {
+  // Each import reads up to 10 MB and writes a whole household: a handful an hour is plenty.
+  const importsPerPerson = limit(ctx.sequelize, 'imports-person', { windowMs: 60 * MINUTE, limit: 10, what: 'imports', key: byPerson });
+  const importsPerAddress = limit(ctx.sequelize, 'imports-address', { windowMs: 60 * MINUTE, limit: 30, what: 'imports from this network' });
+  router.post('/import', requireUser, importsPerPerson, importsPerAddress, backupBody, async (req, res) => {
     const backup = parse(householdBackup, req.body ?? {}, 'That file is not a Larderly household backup, or it has been changed.');
     res.status(201).json(await importHousehold(ctx.sequelize, backup, req.user!.id));
   });

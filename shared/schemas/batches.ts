@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { JAR_SIZES, PROCESSING_METHODS, type JarSize, type JarState, type Method, type ProcessingPlan } from '../domain';
 
-export const isoDate = z.string({ error: 'Enter a date.' }).regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter a date as YYYY-MM-DD.');
+// A real calendar date (2026-02-30 is refused), checked by zod's ISO date format.
+export const isoDate = z.iso.date({ error: 'Enter a real date as YYYY-MM-DD.' });
 
 export const batchCreate = z
   .object({

@@ -7,7 +7,8 @@ export type TodoKind = (typeof TODO_KINDS)[number];
 export const TODO_FILTERS = ['open', 'mine', 'done', 'all'] as const;
 export type TodoFilter = (typeof TODO_FILTERS)[number];
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-09-14.');
+// A real calendar date (2026-02-30 is refused).
+const isoDate = z.iso.date({ error: 'Use a real date such as 2026-09-14.' });
 const title = z.string().trim().min(1, 'Give the to-do a title.').max(200, 'Keep the title under 200 characters.');
 const notes = z.string().max(4000, 'Keep the notes under 4,000 characters.');
 const assignee = z.uuid({ error: 'Choose a member of the household.' }).nullable();
