@@ -118,11 +118,11 @@ describe('requests from another site', () => {
     expect(after.body.household.name).toBe('Calloway Hollow');
   });
 
-  it('accepts a POST whose Origin is the app itself', async () => {
+  it('accepts a POST whose Origin is the app itself on its loopback address (APP_ORIGIN unset)', async () => {
     const response = await ctx.request
       .post('/api/auth/login')
-      .set('Host', 'larder.example')
-      .set('Origin', 'http://larder.example')
+      .set('Host', '127.0.0.1:3000')
+      .set('Origin', 'http://127.0.0.1:3000')
       .send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });
     expect(response.status).toBe(200);
   });
