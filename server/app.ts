@@ -4,10 +4,11 @@ import express, { Router } from 'express';
 import helmet from 'helmet';
 import pg from 'pg';
 import { configurePassport } from './auth/passport';
-import { sessionMiddleware } from './auth/session';
+import { keepSessionAlive, sessionMiddleware } from './auth/session';
 import type { Config } from './config';
 import { acquireDatabase } from './db/sequelize';
 import { errorHandler, notFoundHandler } from './http/errors';
+import { createReadCache } from './http/read-cache';
 import { sameOriginOnly } from './http/same-origin';
 import { authRouter } from './routes/auth';
 import { backupImportRouter, IMPORT_PATH } from './routes/backup';
@@ -31,7 +32,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport();
-  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config), photos: photoStorageFor(config) };
+  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config), photos: photoStorageFor(config), readCache: createReadCache() };
 
   const app = express();
   app.disable('x-powered-by');
@@ -68,6 +69,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   });
   api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
   api.use(passport.session());
+  api.use(keepSessionAlive);
   const authLimit = options.authLimit ?? config.authRateLimit;
   api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit }));
   api.use('/households', householdsRouter(sequelize));

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { ReadCache } from './http/read-cache';
 import type { Mailer } from './services/mail/mailer';
 import type { PhotoStorage } from './services/photo-storage';
 import type { PushSender } from './services/push/push-sender';
@@ -14,4 +15,6 @@ export interface AppContext {
   push: PushSender;
   /** batch photos: the object store, or the local disk on a single machine */
   photos: PhotoStorage;
+  /** This process's household answers, kept until the household's data changes */
+  readCache: ReadCache;
 }

@@ -1,13 +1,20 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import { can, type Permission, type Role } from '../../shared/roles';
-import { Household, Membership } from '../db/models';
+import { Household } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
-      membership?: { householdId: string; role: Role; household: Household };
+      membership?: {
+        householdId: string;
+        role: Role;
+        household: Household;
+        /** Changes with every write to the household's data, in any process (migration 0085): the key of cached reads. */
+        dataVersion: string;
+      };
     }
   }
 }
@@ -18,6 +25,22 @@ export const requireUser: RequestHandler = (req, _res, next) => {
   if (!req.user) return next(new AppError(401, 'signed_out', 'Please sign in first.'));
   next();
 };
+
+type MembershipRow = Record<string, unknown> & { member_role: Role; data_version: string };
+
+/** The person's membership and its household in one indexed read (memberships_household_id_user_id). */
+async function membershipOf(sequelize: Sequelize, householdId: string, userId: string) {
+  // Raw SQL: every household request pays for this read, and a Sequelize include costs more than the query itself.
+  const [row] = await sequelize.query<MembershipRow>(
+    `SELECT m.role AS member_role, h.*
+       FROM memberships m JOIN households h ON h.id = m.household_id
+      WHERE m.household_id = :householdId AND m.user_id = :userId`,
+    { replacements: { householdId, userId }, type: QueryTypes.SELECT },
+  );
+  if (!row) return null;
+  const attributes = Object.fromEntries(Object.entries(Household.getAttributes()).map(([name, column]) => [name, row[column.field ?? name]]));
+  return { role: row.member_role, dataVersion: String(row.data_version), household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }) };
+}
 
 /**
  * The one guard for every household route: the signed-in person must belong to the household
@@ -30,12 +53,9 @@ export function householdAccess(permission: Permission): RequestHandler {
       const householdId = String(req.params.hid ?? '');
       if (!UUID.test(householdId)) throw notFound('That household');
       // Read fresh on every request, never cached: a removed member loses access on their next request, on every process.
-      const membership = await Membership.findOne({
-        where: { householdId, userId: req.user.id },
-        include: [{ model: Household, as: 'household', required: true }],
-      });
-      if (!membership?.household) throw notFound('That household');
-      req.membership = { householdId, role: membership.role, household: membership.household };
+      const membership = await membershipOf(Household.sequelize!, householdId, req.user.id);
+      if (!membership) throw notFound('That household');
+      req.membership = { householdId, ...membership };
       if (!can(membership.role, permission)) throw forbidden();
       next();
     } catch (error) {

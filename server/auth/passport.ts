@@ -1,7 +1,9 @@
+import type { IncomingMessage } from 'node:http';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { User } from '../db/models';
 import { checkPassword } from './passwords';
+import { PERSON, type SessionPerson } from './session';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -29,9 +31,12 @@ export function configurePassport() {
     }),
   );
   passport.serializeUser((user, done) => done(null, user.id));
-  passport.deserializeUser(async (id: string, done) => {
+  // The session read already joined the person (see session.ts); only the columns a request needs.
+  passport.deserializeUser(async (req: IncomingMessage, id: string, done: (error: unknown, user?: Express.User | false) => void) => {
+    const joined = (req as IncomingMessage & { session?: { passport?: { [PERSON]?: SessionPerson } } }).session?.passport;
+    if (joined && PERSON in joined) return done(null, joined[PERSON]?.id === id ? joined[PERSON]! : false);
     try {
-      const user = await User.findByPk(id);
+      const user = await User.findByPk(id, { attributes: ['id', 'email', 'name'] });
       done(null, user ? user.toPublic() : false);
     } catch (error) {
       done(error);

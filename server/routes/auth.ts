@@ -14,7 +14,12 @@ export function signIn(req: Request, user: Express.User) {
   return new Promise<void>((resolve, reject) => {
     req.session.regenerate((error) => {
       if (error) return reject(error);
-      req.login(user, (loginError) => (loginError ? reject(loginError) : resolve()));
+      req.login(user, (loginError) => {
+        if (loginError) return reject(loginError);
+        // passport makes the session anew at sign-in; it is saved with the answer.
+        req.session.seenAt = Date.now();
+        resolve();
+      });
     });
   });
 }

@@ -32,8 +32,8 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(weekProposalRouter(ctx));
   router.use(restockRouter(ctx));
   router.use(todosRouter(ctx));
-  router.use(todayRouter());
-  router.use(fridgeRouter());
+  router.use(todayRouter(ctx));
+  router.use(fridgeRouter(ctx));
   router.use(householdInvitationsRouter(ctx));
   if (!ctx.config.isProduction) router.use(devMailRouter(ctx));
   router.use(householdBackupRouter(ctx));

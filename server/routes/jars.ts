@@ -19,7 +19,8 @@ export function jarsRouter(ctx: AppContext) {
   const router = Router({ mergeParams: true });
 
   router.get('/jars', householdAccess('read'), async (req, res) => {
-    res.json({ jars: await listJars(currentMembership(req).household, query(req, jarStateQuery)) });
+    const filter = query(req, jarStateQuery);
+    await ctx.readCache.send(req, res, `jars ${JSON.stringify(filter)}`, async () => ({ jars: await listJars(currentMembership(req).household, filter) }));
   });
 
   router.get('/jars/by-code/:code', householdAccess('read'), async (req, res) => {

@@ -9,11 +9,11 @@ import { restockView } from '../services/restock/view';
 
 const productParams = z.object({ hid: z.string(), productId: z.uuid({ error: 'That product was not found.' }) });
 
-export function restockRouter({ sequelize }: AppContext) {
+export function restockRouter({ sequelize, readCache }: AppContext) {
   const router = Router({ mergeParams: true });
 
   router.get('/restock', householdAccess('read'), async (req, res) => {
-    res.json(await restockView(currentMembership(req).household));
+    await readCache.send(req, res, 'restock', () => restockView(currentMembership(req).household));
   });
 
   router.post('/restock/:productId/todo', householdAccess('cook'), async (req, res) => {

@@ -22,7 +22,7 @@ const memberParams = z.object({ hid: z.string(), userId: z.uuid({ error: 'That m
  * POST /plan-entries, PATCH|DELETE /plan-entries/:id, POST /plan-entries/:id/pairings, PATCH|DELETE /pairings/:id,
  * PATCH /members/:userId/preferences { heatTolerance?, dietTags? }: the member themselves, or a keeper.
  */
-export function weekRouter({ sequelize }: AppContext) {
+export function weekRouter({ sequelize, readCache }: AppContext) {
   const router = Router({ mergeParams: true });
   const householdOf = (req: Request) => currentMembership(req).household;
   const hid = (req: Request) => currentMembership(req).householdId;
@@ -31,7 +31,7 @@ export function weekRouter({ sequelize }: AppContext) {
     const household = householdOf(req);
     const { start } = query(req, weekQuery);
     const weekStart = weekStartOf(start ?? todayIn(household.timeZone), household.weekStartsOn);
-    res.set('Cache-Control', 'no-store').json(await readWeek(sequelize, household, weekStart));
+    await readCache.send(req, res, `week ${weekStart}`, () => readWeek(sequelize, household, weekStart));
   });
 
   router.post('/week/copy', householdAccess('cook'), async (req, res) => {

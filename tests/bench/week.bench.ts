@@ -59,7 +59,9 @@ try {
   await built.close();
 
   // The real server and a bare Express route, each in its own process, so the load generator does not share their event loop.
-  const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+  // BENCH_CPU_PROF=<dir> writes the server's CPU profile there when it stops (node --cpu-prof).
+  const profile = process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [];
+  const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
     env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: databaseUrl, PORT: String(APP_PORT), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: 'no-static-in-bench' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
@@ -92,8 +94,13 @@ try {
   });
   console.log(`throughput ratio (week / bare): ${(week.requestsPerSecond / base.requestsPerSecond).toFixed(3)}; aim: p99 < 25 ms and ratio >= 0.333`);
 } finally {
-  for (const child of children) child.kill('SIGTERM');
-  await new Promise((resolve) => setTimeout(resolve, 500));
+  // Waits for each child to exit (up to 6 s), so a CPU profile is written before the database goes.
+  await Promise.all(children.map((child) => new Promise((resolve) => {
+    if (child.exitCode !== null) return resolve(null);
+    child.once('exit', resolve);
+    child.kill('SIGTERM');
+    setTimeout(resolve, 6_000).unref();
+  })));
   await dropDatabase(cluster, database).catch(() => {});
   cluster.stop();
 }

@@ -1,0 +1,160 @@
+// Two app instances on one database, as two processes behind a load balancer: each keeps its own
+// session middleware and its own cache of household answers, so neither may trust what it saw before.
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { weekStartOf } from '../../shared/schemas/week';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { Household, Membership, User } from '../../server/db/models';
+import { todayIn } from '../../server/services/clock';
+import { todayView } from '../../server/services/today';
+import { readWeek } from '../../server/services/week/read-week';
+import { demoApp, DEMO_PASSWORD, type DemoEmail } from '../support/app';
+
+const SECRET = 'two-apps-test-secret-that-is-long-enough-0123456789';
+let first: Awaited<ReturnType<typeof demoApp>>;
+let second: ReturnType<typeof createApp>;
+beforeAll(async () => {
+  first = await demoApp({ SESSION_SECRET: SECRET });
+  second = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', BCRYPT_COST: '4', STATIC_DIR: 'no-static-in-api-tests', SESSION_SECRET: SECRET }));
+});
+afterAll(async () => {
+  await second.close();
+  await first.close();
+});
+
+/** Signs in on the first app and returns the cookie, which the second app honours too. */
+async function cookieOf(email: DemoEmail) {
+  const response = await request(first.app).post('/api/auth/login').send({ email, password: DEMO_PASSWORD });
+  expect(response.status).toBe(200);
+  return String(response.headers['set-cookie']).split(';')[0]!;
+}
+
+const onSecond = (path: string, cookie: string) => request(second.app).get(path).set('Cookie', cookie);
+const sessionRow = async (cookie: string) => {
+  const sid = decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0];
+  const [rows] = await first.sequelize.query('SELECT sess, expire FROM sessions WHERE sid = :sid', { replacements: { sid } });
+  return (rows as { sess: { seenAt?: number }; expire: Date }[])[0];
+};
+
+describe('a read is never stale after a write made through the other app', () => {
+  it('GET /week on the second app shows a change to servings made through the first, and equals the direct computation', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const base = `/api/households/${first.householdId}`;
+    const before = await onSecond(`${base}/week`, cookie);
+    expect(before.status).toBe(200);
+    const entry = before.body.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries)[0];
+    expect(entry).toBeDefined();
+
+    const patched = await request(first.app).patch(`${base}/plan-entries/${entry.id}`).set('Cookie', cookie).send({ servings: entry.servings + 3 });
+    expect(patched.status).toBe(200);
+    const after = await onSecond(`${base}/week`, cookie);
+    const changed = after.body.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries).find((e: { id: string }) => e.id === entry.id);
+    expect(changed.servings).toBe(entry.servings + 3);
+
+    const household = (await Household.findByPk(first.householdId))!;
+    const fresh = await readWeek(first.sequelize, household, weekStartOf(todayIn(household.timeZone), household.weekStartsOn));
+    expect(after.body).toEqual(JSON.parse(JSON.stringify(fresh)));
+  });
+
+  it('GET /today and /fridge on the second app follow a jar opened through the first', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const base = `/api/households/${first.householdId}`;
+    const fridgeBefore = (await onSecond(`${base}/fridge`, cookie)).body.jars.length;
+    const todayBefore = (await onSecond(`${base}/today`, cookie)).body.fridgeCount;
+    const sealed = (await onSecond(`${base}/jars?state=sealed`, cookie)).body.jars[0];
+
+    expect((await request(first.app).post(`${base}/jars/${sealed.id}/open`).set('Cookie', cookie)).status).toBe(200);
+    expect((await onSecond(`${base}/fridge`, cookie)).body.jars.length).toBe(fridgeBefore + 1);
+    const today = (await onSecond(`${base}/today`, cookie)).body;
+    expect(today.fridgeCount).toBe(todayBefore + 1);
+    const cook = (await User.findOne({ where: { email: 'cook@larderly.test' } }))!;
+    expect(today).toEqual(JSON.parse(JSON.stringify(await todayView((await Household.findByPk(first.householdId))!, cook.id))));
+    expect((await onSecond(`${base}/jars?state=sealed`, cookie)).body.jars.map((j: { id: string }) => j.id)).not.toContain(sealed.id);
+  });
+
+  it('answers 304 to a matching If-None-Match, and 200 with the new answer once the other app wrote', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const base = `/api/households/${first.householdId}`;
+    const first200 = await onSecond(`${base}/restock`, cookie);
+    expect(first200.headers['cache-control']).toBe('private, no-cache');
+    const etag = first200.headers.etag;
+    expect((await onSecond(`${base}/restock`, cookie).set('If-None-Match', etag)).status).toBe(304);
+
+    const product = first200.body.forecasts[0];
+    const patched = await request(first.app).patch(`${base}/products/${product.productId}`).set('Cookie', cookie).send({ minJars: product.minJars + 5 });
+    expect(patched.status).toBe(200);
+    const changed = await onSecond(`${base}/restock`, cookie).set('If-None-Match', etag);
+    expect(changed.status).toBe(200);
+    expect(changed.body.forecasts.find((f: { productId: string }) => f.productId === product.productId).minJars).toBe(product.minJars + 5);
+  });
+});
+
+describe('the session and the guard, across both apps', () => {
+  it('signing out through the first app signs the person out on the second at its next request', async () => {
+    const cookie = await cookieOf('helper@larderly.test');
+    const week = `/api/households/${first.householdId}/week`;
+    expect((await onSecond(week, cookie)).status).toBe(200);
+    expect((await request(first.app).post('/api/auth/logout').set('Cookie', cookie)).status).toBe(204);
+    expect((await onSecond(week, cookie)).status).toBe(401);
+    expect((await onSecond('/api/auth/me', cookie)).status).toBe(401);
+  });
+
+  it('a removed membership answers 404 on the second app at the next request, even for an answer it holds', async () => {
+    const cookie = await cookieOf('neighbor@larderly.test');
+    const week = `/api/households/${first.neighbourHouseholdId}/week`;
+    expect((await onSecond(week, cookie)).status).toBe(200);
+    const neighbour = (await User.findOne({ where: { email: 'neighbor@larderly.test' } }))!;
+    const membership = (await Membership.findOne({ where: { userId: neighbour.id, householdId: first.neighbourHouseholdId } }))!;
+    await membership.destroy();
+    try {
+      expect((await onSecond(week, cookie)).status).toBe(404);
+      expect((await request(first.app).get(week).set('Cookie', cookie)).status).toBe(404);
+    } finally {
+      await Membership.create({ householdId: membership.householdId, userId: membership.userId, role: membership.role });
+    }
+  });
+
+  it('reads write nothing to the session; a session last seen over a day ago is written once and lives 30 more days', async () => {
+    const cookie = await cookieOf('keeper@larderly.test');
+    const week = `/api/households/${first.householdId}/week`;
+    const signedIn = await sessionRow(cookie);
+    for (const path of [week, '/api/auth/me', `/api/households/${first.householdId}`]) {
+      const response = await onSecond(path, cookie);
+      expect(response.status).toBe(200);
+      expect(response.headers['set-cookie']).toBeUndefined();
+    }
+    expect(await sessionRow(cookie)).toEqual(signedIn);
+
+    // As if the last write had been two days ago.
+    const twoDaysAgo = Date.now() - 2 * 24 * 60 * 60 * 1000;
+    const sid = decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0];
+    await first.sequelize.query(`UPDATE sessions SET sess = jsonb_set(sess::jsonb, '{seenAt}', to_jsonb(:at::bigint))::json, expire = expire - interval '2 days' WHERE sid = :sid`, {
+      replacements: { at: twoDaysAgo, sid },
+    });
+    const touched = await onSecond(week, cookie);
+    expect(String(touched.headers['set-cookie'])).toMatch(/larderly\.sid=.*Expires=/);
+    const row = await sessionRow(cookie);
+    expect(row.sess.seenAt).toBeGreaterThan(twoDaysAgo);
+    const daysLeft = (row.expire.getTime() - Date.now()) / (24 * 60 * 60 * 1000);
+    expect(daysLeft).toBeGreaterThan(29.9);
+    expect(daysLeft).toBeLessThan(30.01);
+    expect((await onSecond(week, cookie)).headers['set-cookie']).toBeUndefined();
+  });
+
+  it('never reads the password hash on a signed-in request', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const texts: string[] = [];
+    const record = (sql: string) => texts.push(sql);
+    first.sequelize.options.logging = record;
+    try {
+      for (const path of ['/api/auth/me', `/api/households/${first.householdId}/week`, `/api/households/${first.householdId}/today`]) {
+        expect((await onSecond(path, cookie)).status).toBe(200);
+      }
+    } finally {
+      first.sequelize.options.logging = false;
+    }
+    expect(texts.length).toBeGreaterThan(0);
+    expect(texts.join('\n')).not.toMatch(/password_hash/);
+  });
+});
