@@ -2,6 +2,7 @@ import { fileURLToPath } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig, type Plugin } from 'vite';
+import { compression } from 'vite-plugin-compression2';
 
 /** Preloads the Karla files the first screen uses, so text never flashes in a fallback face. */
 function preloadFonts(): Plugin {
@@ -23,7 +24,8 @@ function preloadFonts(): Plugin {
 }
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), preloadFonts()],
+  // Brotli and gzip copies of every file over 1 KB beside it, which the server sends to browsers that accept them.
+  plugins: [react(), tailwindcss(), preloadFonts(), compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024, exclude: [/\.(br|gz|woff2?|png|jpe?g|webp)$/] })],
   resolve: {
     alias: {
       '@': fileURLToPath(new URL('./src', import.meta.url)),

@@ -1,6 +1,5 @@
-import { existsSync } from 'node:fs';
-import path from 'node:path';
 import express, { Router } from 'express';
+import compression from 'compression';
 import helmet from 'helmet';
 import pg from 'pg';
 import { configurePassport } from './auth/passport';
@@ -10,6 +9,7 @@ import { acquireDatabase } from './db/sequelize';
 import { errorHandler, notFoundHandler } from './http/errors';
 import { createReadCache } from './http/read-cache';
 import { sameOriginOnly } from './http/same-origin';
+import { staticClient } from './http/static-client';
 import { authRouter } from './routes/auth';
 import { backupImportRouter, IMPORT_PATH } from './routes/backup';
 import { healthRouter } from './routes/health';
@@ -55,6 +55,8 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
     }),
   );
 
+  // JSON answers over 1 KB go out compressed; the built client is compressed at build time.
+  app.use(compression({ threshold: 1024 }));
   const api = Router();
   api.use(healthRouter(sequelize, ctx.photos));
   api.use(publicConfigRouter(config));
@@ -82,13 +84,8 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   api.use(notFoundHandler);
   app.use('/api', api);
 
-  const staticDir = path.resolve(config.staticDir);
-  if (existsSync(path.join(staticDir, 'index.html'))) {
-    app.use(express.static(staticDir, { index: false, maxAge: '1y', immutable: true, setHeaders: noCacheForHtml }));
-    app.get(/^\/(?!api\/).*/, (_req, res) => {
-      res.set('Cache-Control', 'no-cache').sendFile(path.join(staticDir, 'index.html'));
-    });
-  }
+  const client = staticClient(config.staticDir);
+  if (client) app.use(client);
   app.use(errorHandler({ exposeInternals: !config.isProduction }));
 
   return {
@@ -100,10 +97,4 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
       await Promise.allSettled([database.release(), sessionPool.end()]);
     },
   };
-}
-
-function noCacheForHtml(res: express.Response, filePath: string) {
-  if (filePath.endsWith('.html') || filePath.endsWith('sw.js') || filePath.endsWith('.webmanifest')) {
-    res.setHeader('Cache-Control', 'no-cache');
-  }
 }

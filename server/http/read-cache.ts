@@ -1,4 +1,6 @@
 import { createHash } from 'node:crypto';
+import { promisify } from 'node:util';
+import zlib from 'node:zlib';
 import type { Request, Response } from 'express';
 import { currentMembership } from '../auth/guards';
 import { todayIn } from '../services/clock';
@@ -6,7 +8,19 @@ import { todayIn } from '../services/clock';
 interface Answer {
   body: string;
   etag: string;
+  /** The body compressed, made once per answer the first time a browser asks for each encoding. */
+  encoded: Partial<Record<Encoding, Promise<Buffer>>>;
 }
+
+type Encoding = 'br' | 'gzip';
+/** Answers smaller than this go out as they are (as the compression middleware's threshold in app.ts). */
+const COMPRESS_FROM_BYTES = 1024;
+const brotli = promisify(zlib.brotliCompress);
+const gzip = promisify(zlib.gzip);
+const compress: Record<Encoding, (body: string) => Promise<Buffer>> = {
+  br: (body) => brotli(body, { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 5 } }),
+  gzip: (body) => gzip(body),
+};
 
 /**
  * Keeps each household read's answer (as sent) until the household's data version moves.
@@ -20,7 +34,7 @@ export function createReadCache(maxEntries = 2_000) {
   function remember(key: string, version: string, compute: () => Promise<unknown>) {
     const answer = compute().then((value) => {
       const body = JSON.stringify(value);
-      return { body, etag: `W/"${createHash('sha1').update(body).digest('base64url')}"` };
+      return { body, etag: `W/"${createHash('sha1').update(body).digest('base64url')}"`, encoded: {} as Answer['encoded'] };
     });
     answers.delete(key);
     answers.set(key, { version, answer });
@@ -38,9 +52,14 @@ export function createReadCache(maxEntries = 2_000) {
       const { householdId, household, dataVersion } = currentMembership(req);
       const fullKey = `${householdId} ${todayIn(household.timeZone)} ${key}`;
       const held = answers.get(fullKey);
-      const { body, etag } = await (held?.version === dataVersion ? held.answer : remember(fullKey, dataVersion, compute));
+      const answer = await (held?.version === dataVersion ? held.answer : remember(fullKey, dataVersion, compute));
       // no-cache: a browser may keep the answer but asks again every time, and gets 304 while it is current.
-      res.set({ 'Cache-Control': 'private, no-cache', ETag: etag, 'Content-Type': 'application/json; charset=utf-8' }).send(body);
+      res.set({ 'Cache-Control': 'private, no-cache', ETag: answer.etag, 'Content-Type': 'application/json; charset=utf-8' }).vary('Accept-Encoding');
+      const encoding = answer.body.length >= COMPRESS_FROM_BYTES ? req.acceptsEncodings('br', 'gzip') : false;
+      if (!encoding || req.fresh) return void res.send(answer.body);
+      const chosen = encoding as Encoding;
+      answer.encoded[chosen] ??= compress[chosen](answer.body);
+      res.set('Content-Encoding', chosen).send(await answer.encoded[chosen]);
     },
   };
 }

@@ -1,0 +1,34 @@
+import { existsSync } from 'node:fs';
+import type { ServerResponse } from 'node:http';
+import path from 'node:path';
+import { Router } from 'express';
+import expressStaticGzip from 'express-static-gzip';
+
+/**
+ * The built client: each file as the brotli or gzip copy the build made beside it (vite.config.ts)
+ * when the browser accepts it, with Content-Encoding and Vary: Accept-Encoding; index.html for every
+ * other address outside /api. Null when there is no build.
+ */
+export function staticClient(staticDir: string) {
+  const root = path.resolve(staticDir);
+  if (!existsSync(path.join(root, 'index.html'))) return null;
+  const router = Router();
+  router.use(
+    expressStaticGzip(root, {
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
+      index: false,
+      serveStatic: { index: false, maxAge: '1y', immutable: true, setHeaders: noCacheForHtml },
+    }),
+  );
+  router.get(/^\/(?!api\/).*/, (_req, res) => {
+    res.set('Cache-Control', 'no-cache').sendFile(path.join(root, 'index.html'));
+  });
+  return router;
+}
+
+function noCacheForHtml(res: ServerResponse, filePath: string) {
+  if (filePath.endsWith('.html') || filePath.endsWith('sw.js') || filePath.endsWith('.webmanifest')) {
+    res.setHeader('Cache-Control', 'no-cache');
+  }
+}
