@@ -47,7 +47,8 @@ function personJoiningStore(PgStore: ReturnType<typeof connectPgSimple>) {
           if (!row) return fn(null, null);
           const sess = typeof row.sess === 'string' ? JSON.parse(row.sess) : row.sess;
           // A symbol key: express-session keeps the passport object by reference and JSON never writes it.
-          if (sess.passport) sess.passport[PERSON] = row.person_id ? { id: row.person_id, email: row.email!, name: row.name! } : null;
+          if (sess.passport)
+            sess.passport[PERSON] = row.person_id ? { id: row.person_id, email: row.email!, name: row.name! } : null;
           fn(null, sess);
         },
       );
@@ -61,7 +62,13 @@ export function sessionMiddleware(options: { pool: pg.Pool; secret: string; secu
   return session({
     name: SESSION_COOKIE,
     // No write on every read: the session is written back by keepSessionAlive at most once a day.
-    store: new Store({ pool: options.pool, tableName: 'sessions', createTableIfMissing: false, pruneSessionInterval: 15 * 60, disableTouch: true }),
+    store: new Store({
+      pool: options.pool,
+      tableName: 'sessions',
+      createTableIfMissing: false,
+      pruneSessionInterval: 15 * 60,
+      disableTouch: true,
+    }),
     secret: options.secret,
     resave: false,
     saveUninitialized: false,
@@ -77,6 +84,7 @@ export function sessionMiddleware(options: { pool: pg.Pool; secret: string; secu
 
 /** Marks a signed-in session seen when it was last written over a day ago, so it (and its cookie) last another 30 days. */
 export const keepSessionAlive: RequestHandler = (req, _res, next) => {
-  if (req.user && req.session && Date.now() - (req.session.seenAt ?? 0) > TOUCH_EVERY_MS) req.session.seenAt = Date.now();
+  if (req.user && req.session && Date.now() - (req.session.seenAt ?? 0) > TOUCH_EVERY_MS)
+    req.session.seenAt = Date.now();
   next();
 };

@@ -34,7 +34,11 @@ export function createReadCache(maxEntries = 2_000) {
   function remember(key: string, version: string, compute: () => Promise<unknown>) {
     const answer = compute().then((value) => {
       const body = JSON.stringify(value);
-      return { body, etag: `W/"${createHash('sha1').update(body).digest('base64url')}"`, encoded: {} as Answer['encoded'] };
+      return {
+        body,
+        etag: `W/"${createHash('sha1').update(body).digest('base64url')}"`,
+        encoded: {} as Answer['encoded'],
+      };
     });
     answers.delete(key);
     answers.set(key, { version, answer });
@@ -54,7 +58,13 @@ export function createReadCache(maxEntries = 2_000) {
       const held = answers.get(fullKey);
       const answer = await (held?.version === dataVersion ? held.answer : remember(fullKey, dataVersion, compute));
       // no-cache: a browser may keep the answer but asks again every time, and gets 304 while it is current.
-      res.set({ 'Cache-Control': 'private, no-cache', ETag: answer.etag, 'Content-Type': 'application/json; charset=utf-8' }).vary('Accept-Encoding');
+      res
+        .set({
+          'Cache-Control': 'private, no-cache',
+          ETag: answer.etag,
+          'Content-Type': 'application/json; charset=utf-8',
+        })
+        .vary('Accept-Encoding');
       const encoding = answer.body.length >= COMPRESS_FROM_BYTES ? req.acceptsEncodings('br', 'gzip') : false;
       if (!encoding || req.fresh) return void res.send(answer.body);
       const chosen = encoding as Encoding;

@@ -16,7 +16,15 @@ let first: Awaited<ReturnType<typeof demoApp>>;
 let second: ReturnType<typeof createApp>;
 beforeAll(async () => {
   first = await demoApp({ SESSION_SECRET: SECRET });
-  second = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', BCRYPT_COST: '4', STATIC_DIR: 'no-static-in-api-tests', SESSION_SECRET: SECRET }));
+  second = createApp(
+    loadConfig({
+      ...process.env,
+      NODE_ENV: 'test',
+      BCRYPT_COST: '4',
+      STATIC_DIR: 'no-static-in-api-tests',
+      SESSION_SECRET: SECRET,
+    }),
+  );
 });
 afterAll(async () => {
   await second.close();
@@ -33,7 +41,9 @@ async function cookieOf(email: DemoEmail) {
 const onSecond = (path: string, cookie: string) => request(second.app).get(path).set('Cookie', cookie);
 const sessionRow = async (cookie: string) => {
   const sid = decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0];
-  const [rows] = await first.sequelize.query('SELECT sess, expire FROM sessions WHERE sid = :sid', { replacements: { sid } });
+  const [rows] = await first.sequelize.query('SELECT sess, expire FROM sessions WHERE sid = :sid', {
+    replacements: { sid },
+  });
   return (rows as { sess: { seenAt?: number }; expire: Date }[])[0];
 };
 
@@ -46,14 +56,23 @@ describe('a read is never stale after a write made through the other app', () =>
     const entry = before.body.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries)[0];
     expect(entry).toBeDefined();
 
-    const patched = await request(first.app).patch(`${base}/plan-entries/${entry.id}`).set('Cookie', cookie).send({ servings: entry.servings + 3 });
+    const patched = await request(first.app)
+      .patch(`${base}/plan-entries/${entry.id}`)
+      .set('Cookie', cookie)
+      .send({ servings: entry.servings + 3 });
     expect(patched.status).toBe(200);
     const after = await onSecond(`${base}/week`, cookie);
-    const changed = after.body.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries).find((e: { id: string }) => e.id === entry.id);
+    const changed = after.body.days
+      .flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries)
+      .find((e: { id: string }) => e.id === entry.id);
     expect(changed.servings).toBe(entry.servings + 3);
 
     const household = (await Household.findByPk(first.householdId))!;
-    const fresh = await readWeek(first.sequelize, household, weekStartOf(todayIn(household.timeZone), household.weekStartsOn));
+    const fresh = await readWeek(
+      first.sequelize,
+      household,
+      weekStartOf(todayIn(household.timeZone), household.weekStartsOn),
+    );
     expect(after.body).toEqual(JSON.parse(JSON.stringify(fresh)));
   });
 
@@ -69,8 +88,12 @@ describe('a read is never stale after a write made through the other app', () =>
     const today = (await onSecond(`${base}/today`, cookie)).body;
     expect(today.fridgeCount).toBe(todayBefore + 1);
     const cook = (await User.findOne({ where: { email: 'cook@larderly.test' } }))!;
-    expect(today).toEqual(JSON.parse(JSON.stringify(await todayView((await Household.findByPk(first.householdId))!, cook.id))));
-    expect((await onSecond(`${base}/jars?state=sealed`, cookie)).body.jars.map((j: { id: string }) => j.id)).not.toContain(sealed.id);
+    expect(today).toEqual(
+      JSON.parse(JSON.stringify(await todayView((await Household.findByPk(first.householdId))!, cook.id))),
+    );
+    expect(
+      (await onSecond(`${base}/jars?state=sealed`, cookie)).body.jars.map((j: { id: string }) => j.id),
+    ).not.toContain(sealed.id);
   });
 
   it('answers 304 to a matching If-None-Match, and 200 with the new answer once the other app wrote', async () => {
@@ -82,11 +105,16 @@ describe('a read is never stale after a write made through the other app', () =>
     expect((await onSecond(`${base}/restock`, cookie).set('If-None-Match', etag)).status).toBe(304);
 
     const product = first200.body.forecasts[0];
-    const patched = await request(first.app).patch(`${base}/products/${product.productId}`).set('Cookie', cookie).send({ minJars: product.minJars + 5 });
+    const patched = await request(first.app)
+      .patch(`${base}/products/${product.productId}`)
+      .set('Cookie', cookie)
+      .send({ minJars: product.minJars + 5 });
     expect(patched.status).toBe(200);
     const changed = await onSecond(`${base}/restock`, cookie).set('If-None-Match', etag);
     expect(changed.status).toBe(200);
-    expect(changed.body.forecasts.find((f: { productId: string }) => f.productId === product.productId).minJars).toBe(product.minJars + 5);
+    expect(changed.body.forecasts.find((f: { productId: string }) => f.productId === product.productId).minJars).toBe(
+      product.minJars + 5,
+    );
   });
 });
 
@@ -107,13 +135,19 @@ describe('the session and the guard, across both apps', () => {
     expect((await onSecond(week, helperCookie)).status).toBe(200);
     const helper = (await User.findOne({ where: { email: 'helper@larderly.test' } }))!;
     const membership = (await Membership.findOne({ where: { userId: helper.id, householdId: first.householdId } }))!;
-    const removed = await request(first.app).delete(`/api/households/${first.householdId}/members/${helper.id}`).set('Cookie', keeperCookie);
+    const removed = await request(first.app)
+      .delete(`/api/households/${first.householdId}/members/${helper.id}`)
+      .set('Cookie', keeperCookie);
     expect(removed.status).toBeLessThan(300);
     try {
       expect((await onSecond(week, helperCookie)).status).toBe(404);
       expect((await request(first.app).get(week).set('Cookie', helperCookie)).status).toBe(404);
     } finally {
-      await Membership.create({ householdId: membership.householdId, userId: membership.userId, role: membership.role });
+      await Membership.create({
+        householdId: membership.householdId,
+        userId: membership.userId,
+        role: membership.role,
+      });
     }
   });
 
@@ -131,9 +165,12 @@ describe('the session and the guard, across both apps', () => {
     // As if the last write had been two days ago.
     const twoDaysAgo = Date.now() - 2 * 24 * 60 * 60 * 1000;
     const sid = decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0];
-    await first.sequelize.query(`UPDATE sessions SET sess = jsonb_set(sess::jsonb, '{seenAt}', to_jsonb(:at::bigint))::json, expire = expire - interval '2 days' WHERE sid = :sid`, {
-      replacements: { at: twoDaysAgo, sid },
-    });
+    await first.sequelize.query(
+      `UPDATE sessions SET sess = jsonb_set(sess::jsonb, '{seenAt}', to_jsonb(:at::bigint))::json, expire = expire - interval '2 days' WHERE sid = :sid`,
+      {
+        replacements: { at: twoDaysAgo, sid },
+      },
+    );
     const touched = await onSecond(week, cookie);
     expect(String(touched.headers['set-cookie'])).toMatch(/larderly\.sid=.*Expires=/);
     const row = await sessionRow(cookie);
@@ -151,7 +188,11 @@ describe('the session and the guard, across both apps', () => {
     const options = (first.sequelize as unknown as { options: { logging: unknown } }).options;
     options.logging = (sql: string) => texts.push(sql);
     try {
-      for (const path of ['/api/auth/me', `/api/households/${first.householdId}/week`, `/api/households/${first.householdId}/today`]) {
+      for (const path of [
+        '/api/auth/me',
+        `/api/households/${first.householdId}/week`,
+        `/api/households/${first.householdId}/today`,
+      ]) {
         expect((await onSecond(path, cookie)).status).toBe(200);
       }
     } finally {

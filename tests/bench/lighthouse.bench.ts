@@ -13,10 +13,13 @@ const login = await fetch(`${BASE_URL}/api/auth/login`, {
   headers: { 'Content-Type': 'application/json', Origin: BASE_URL },
   body: JSON.stringify({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' }),
 });
-if (!login.ok) throw new Error(`Sign-in as the demo keeper answered ${login.status}: is the demo household seeded (npm start)?`);
+if (!login.ok)
+  throw new Error(`Sign-in as the demo keeper answered ${login.status}: is the demo household seeded (npm start)?`);
 const cookie = login.headers.get('set-cookie')!.split(';')[0]!;
 const me = await (await fetch(`${BASE_URL}/api/auth/me`, { headers: { Cookie: cookie } })).json();
-const hid: string = me.memberships.find((m: { householdName: string }) => m.householdName === 'Calloway Hollow')?.householdId ?? me.memberships[0].householdId;
+const hid: string =
+  me.memberships.find((m: { householdName: string }) => m.householdName === 'Calloway Hollow')?.householdId ??
+  me.memberships[0].householdId;
 
 const screens = [
   { screen: 'sign-in', path: '/sign-in', signedIn: false },
@@ -42,17 +45,23 @@ try {
     });
     if (!result) throw new Error(`Lighthouse gave no result for ${path}`);
     const { categories, audits, finalDisplayedUrl } = result.lhr;
-    if (!finalDisplayedUrl.endsWith(path)) throw new Error(`${path} ended on ${finalDisplayedUrl}: the screen was not the one measured`);
+    if (!finalDisplayedUrl.endsWith(path))
+      throw new Error(`${path} ended on ${finalDisplayedUrl}: the screen was not the one measured`);
     const performance = Math.round((categories.performance?.score ?? 0) * 100);
     const accessibility = Math.round((categories.accessibility?.score ?? 0) * 100);
     const lcpSeconds = Number(((audits['largest-contentful-paint']?.numericValue ?? 0) / 1000).toFixed(2));
-    const met = performance >= GOALS.performance && lcpSeconds <= GOALS.lcpSeconds && accessibility >= GOALS.accessibility;
+    const met =
+      performance >= GOALS.performance && lcpSeconds <= GOALS.lcpSeconds && accessibility >= GOALS.accessibility;
     rows[screen] = { performance, lcpSeconds, accessibility, met: met ? 'yes' : 'no' };
   }
 } finally {
   await chrome.kill();
 }
 const os = await import('node:os');
-console.log(`Lighthouse ${(await import('lighthouse/package.json', { with: { type: 'json' } })).default.version}, mobile preset, ${BASE_URL}; load average ${os.loadavg()[0].toFixed(1)} on ${os.cpus().length} cores`);
+console.log(
+  `Lighthouse ${(await import('lighthouse/package.json', { with: { type: 'json' } })).default.version}, mobile preset, ${BASE_URL}; load average ${os.loadavg()[0].toFixed(1)} on ${os.cpus().length} cores`,
+);
 console.table(rows);
-console.log(`goals: performance >= ${GOALS.performance}, LCP <= ${GOALS.lcpSeconds} s, accessibility ${GOALS.accessibility}`);
+console.log(
+  `goals: performance >= ${GOALS.performance}, LCP <= ${GOALS.lcpSeconds} s, accessibility ${GOALS.accessibility}`,
+);

@@ -35,7 +35,10 @@ for (const node of profile.nodes) {
   byPlace.set(where(url), (byPlace.get(where(url)) ?? 0) + n);
 }
 const top = (map: Map<string, number>) =>
-  [...map.entries()].sort((a, b) => b[1] - a[1]).slice(0, Number(entries)).map(([name, n]) => `${((100 * n) / total).toFixed(1).padStart(5)}%  ${name}`);
+  [...map.entries()]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, Number(entries))
+    .map(([name, n]) => `${((100 * n) / total).toFixed(1).padStart(5)}%  ${name}`);
 console.log(`${total} samples`);
 console.log('\nself time by function:');
 for (const line of top(byFunction)) console.log(`  ${line}`);

@@ -21,7 +21,15 @@ const os = await import('node:os');
 async function measure(label: string, crowd: boolean) {
   const database = `larderly_scale_${label}_${process.pid}`;
   await recreateDatabase(cluster, database);
-  const built = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: cluster.url(database), STATIC_DIR: 'no-static-in-bench', BCRYPT_COST: '4' }));
+  const built = createApp(
+    loadConfig({
+      ...process.env,
+      NODE_ENV: 'test',
+      DATABASE_URL: cluster.url(database),
+      STATIC_DIR: 'no-static-in-bench',
+      BCRYPT_COST: '4',
+    }),
+  );
   try {
     await migrate(built.sequelize);
     const today = todayIn('America/New_York');
@@ -43,7 +51,9 @@ async function measure(label: string, crowd: boolean) {
     const computed: number[] = [];
     const cached: number[] = [];
     for (let i = 0; i < ROUNDS; i += 1) {
-      await built.sequelize.query('UPDATE households SET data_version = data_version + 1 WHERE id = :id', { replacements: { id: household.id } });
+      await built.sequelize.query('UPDATE households SET data_version = data_version + 1 WHERE id = :id', {
+        replacements: { id: household.id },
+      });
       let began = performance.now();
       await agent.get(path).expect(200);
       computed.push(performance.now() - began);
@@ -66,11 +76,15 @@ async function explainWeek(sequelize: import('sequelize').Sequelize, householdId
     'current jars': `SELECT id FROM jars WHERE household_id = :householdId AND (state = 'opened' OR state = 'sealed')`,
     'products with counts': `SELECT p.id, count(j.id) FROM products p LEFT JOIN jars j ON j.product_id = p.id AND j.state IN ('sealed', 'opened') WHERE p.household_id = :householdId GROUP BY p.id`,
     recipes: 'SELECT product_id FROM recipes WHERE household_id = :householdId',
-    members: 'SELECT m.user_id, u.name FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.household_id = :householdId',
+    members:
+      'SELECT m.user_id, u.name FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.household_id = :householdId',
   };
   const lines: string[] = [];
   for (const [name, sql] of Object.entries(queries)) {
-    const plan = await sequelize.query<{ 'QUERY PLAN': string }>(`EXPLAIN (ANALYZE, BUFFERS) ${sql}`, { replacements: { householdId, today }, type: QueryTypes.SELECT });
+    const plan = await sequelize.query<{ 'QUERY PLAN': string }>(`EXPLAIN (ANALYZE, BUFFERS) ${sql}`, {
+      replacements: { householdId, today },
+      type: QueryTypes.SELECT,
+    });
     const text = plan.map((row) => row['QUERY PLAN']);
     const scans = text.filter((l) => /Scan/.test(l)).map((l) => l.trim().replace(/\s+\(cost.*$/, ''));
     lines.push(`  ${name}: ${text.find((l) => l.startsWith('Execution Time'))}; ${scans.join(' | ')}`);
@@ -87,12 +101,23 @@ const loadBefore = os.loadavg()[0];
 try {
   const alone = await measure('alone', false);
   const crowded = await measure('crowd', true);
-  console.log(`\nGET /week of a household with 4,000 jars and 3,000 plan entries, one request at a time, ${ROUNDS} rounds, median ms`);
-  console.log(`machine: ${os.cpus().length} cores, load average ${loadBefore.toFixed(1)} before and ${os.loadavg()[0].toFixed(1)} after`);
-  console.table(
-    Object.fromEntries([alone, crowded].map((r) => [r.label === 'alone' ? 'the household alone' : `among ${HOUSEHOLDS.toLocaleString('en-US')} households`, { computedMs: r.computedMs, cachedMs: r.cachedMs, database: r.made }])),
+  console.log(
+    `\nGET /week of a household with 4,000 jars and 3,000 plan entries, one request at a time, ${ROUNDS} rounds, median ms`,
   );
-  console.log(`cost among the crowd / alone: worked out ${(crowded.computedMs / alone.computedMs).toFixed(2)}x, cached ${(crowded.cachedMs / alone.cachedMs).toFixed(2)}x; aim <= 1.2x`);
+  console.log(
+    `machine: ${os.cpus().length} cores, load average ${loadBefore.toFixed(1)} before and ${os.loadavg()[0].toFixed(1)} after`,
+  );
+  console.table(
+    Object.fromEntries(
+      [alone, crowded].map((r) => [
+        r.label === 'alone' ? 'the household alone' : `among ${HOUSEHOLDS.toLocaleString('en-US')} households`,
+        { computedMs: r.computedMs, cachedMs: r.cachedMs, database: r.made },
+      ]),
+    ),
+  );
+  console.log(
+    `cost among the crowd / alone: worked out ${(crowded.computedMs / alone.computedMs).toFixed(2)}x, cached ${(crowded.cachedMs / alone.cachedMs).toFixed(2)}x; aim <= 1.2x`,
+  );
   console.log('\nplans among the crowd:');
   for (const line of crowded.plans) console.log(line);
 } finally {

@@ -1,7 +1,19 @@
 import type { QueryInterface } from 'sequelize';
 
 /** The household tables whose rows the cached reads (GET /week, /today, /fridge, /restock, /jars) are made from. */
-export const VERSIONED_TABLES = ['products', 'recipes', 'batches', 'jars', 'jar_events', 'meals', 'meal_products', 'plan_entries', 'pairings', 'memberships', 'todos'];
+export const VERSIONED_TABLES = [
+  'products',
+  'recipes',
+  'batches',
+  'jars',
+  'jar_events',
+  'meals',
+  'meal_products',
+  'plan_entries',
+  'pairings',
+  'memberships',
+  'todos',
+];
 
 /**
  * households.data_version changes in the same transaction as any write to the household's data,
@@ -36,7 +48,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
         IF NEW.data_version = OLD.data_version AND NEW IS DISTINCT FROM OLD THEN NEW.data_version := OLD.data_version + 1; END IF;
         RETURN NEW;
       END $$`);
-    await run('CREATE TRIGGER households_data_version BEFORE UPDATE ON households FOR EACH ROW EXECUTE FUNCTION household_settings_changed()');
+    await run(
+      'CREATE TRIGGER households_data_version BEFORE UPDATE ON households FOR EACH ROW EXECUTE FUNCTION household_settings_changed()',
+    );
     // A member's name shows on the week board of every household they belong to.
     await run(`
       CREATE FUNCTION member_name_changed() RETURNS trigger LANGUAGE plpgsql AS $$
@@ -55,7 +69,9 @@ export async function down({ context: qi }: { context: QueryInterface }) {
     for (const table of VERSIONED_TABLES) await run(`DROP TRIGGER ${table}_data_version ON ${table}`);
     await run('DROP TRIGGER users_data_version ON users');
     await run('DROP TRIGGER households_data_version ON households');
-    await run('DROP FUNCTION member_name_changed(), household_settings_changed(), household_rows_changed(), bump_household_data_version(uuid)');
+    await run(
+      'DROP FUNCTION member_name_changed(), household_settings_changed(), household_rows_changed(), bump_household_data_version(uuid)',
+    );
     await run('ALTER TABLE households DROP COLUMN data_version');
   });
 }
