@@ -57,10 +57,9 @@ export function createReadCache(maxEntries = 2_000) {
       const fullKey = `${householdId} ${todayIn(household.timeZone)} ${key}`;
       const held = answers.get(fullKey);
       const answer = await (held?.version === dataVersion ? held.answer : remember(fullKey, dataVersion, compute));
-      // no-cache: a browser may keep the answer but asks again every time, and gets 304 while it is current.
+      // Cache-Control stays the API's own (private, no-store, app.ts); a client that sends If-None-Match still gets 304.
       res
         .set({
-          'Cache-Control': 'private, no-cache',
           ETag: answer.etag,
           'Content-Type': 'application/json; charset=utf-8',
         })

@@ -100,7 +100,7 @@ describe('a read is never stale after a write made through the other app', () =>
     const cookie = await cookieOf('cook@larderly.test');
     const base = `/api/households/${first.householdId}`;
     const first200 = await onSecond(`${base}/restock`, cookie);
-    expect(first200.headers['cache-control']).toBe('private, no-cache');
+    expect(first200.headers['cache-control']).toBe('private, no-store');
     const etag = first200.headers.etag;
     expect((await onSecond(`${base}/restock`, cookie).set('If-None-Match', etag)).status).toBe(304);
 
