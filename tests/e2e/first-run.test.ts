@@ -117,3 +117,20 @@ describe('a restock to-do’s batch plan on canning day', () => {
     await page.close();
   });
 });
+
+describe('first run without dead ends', () => {
+  it('Today, New recipe and Record a batch each point a household with no product to adding its first', async () => {
+    const page = await browser.newPage(phone);
+    await signUp(page, 'Henrike');
+    const hid = householdOf(page);
+    expect((await page.request.patch(`${baseURL}/api/households/${hid}`, { ...write, data: { altitudeFt: 800 } })).status()).toBe(200);
+    for (const [path, name] of [['', 'today'], ['/recipes/new', 'recipe'], ['/batches/new', 'batch']] as const) {
+      await page.goto(`${baseURL}/h/${hid}${path}`);
+      await page.getByText('Start with your first product').waitFor();
+      await screenshot(page, `first-run-no-product-${name}-phone`);
+    }
+    await page.getByRole('link', { name: 'Add a product' }).tap();
+    await page.waitForURL(new RegExp(`/h/${hid}/products/new$`));
+    await page.close();
+  });
+});

@@ -7,6 +7,7 @@ import { AltitudeGate } from '@/features/households/components/altitude-gate';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
+import { FirstProduct } from '@/features/shelf/components/first-product';
 import { NewBatchForm } from '@/features/shelf/components/new-batch-form';
 
 export function NewBatchRoute() {
@@ -26,7 +27,11 @@ export function NewBatchRoute() {
       )}
       {household.data && products.data && recipes.data ? (
         <AltitudeGate hid={hid}>
-          <NewBatchForm household={household.data} products={products.data} recipes={recipes.data} />
+          {products.data.length === 0 ? (
+            <FirstProduct hid={hid} why="A batch is a canning session of one product, made from its tested recipe." canCook />
+          ) : (
+            <NewBatchForm household={household.data} products={products.data} recipes={recipes.data} />
+          )}
         </AltitudeGate>
       ) : (
         !failed && <p className="text-ink-muted">Getting the recipes…</p>

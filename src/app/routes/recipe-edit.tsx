@@ -4,10 +4,12 @@ import { Card, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { useRecipe } from '@/features/shelf/api/get-recipes';
+import { can } from '@shared/roles';
+import { FirstProduct } from '@/features/shelf/components/first-product';
 import { RecipeForm } from '@/features/shelf/components/recipe-form';
 
 export function RecipeEditRoute() {
-  const { hid } = useCurrentHousehold();
+  const { hid, role } = useCurrentHousehold();
   const { recipeId } = useParams();
   const [params] = useSearchParams();
   const products = useProducts(hid);
@@ -22,7 +24,8 @@ export function RecipeEditRoute() {
           {(products.error ?? recipe.error)?.message}
         </Notice>
       )}
-      {ready && (
+      {ready && products.data!.length === 0 && <FirstProduct hid={hid} why="A recipe is how a product is made, so the product comes first." canCook={can(role, 'cook')} />}
+      {ready && products.data!.length > 0 && (
         <Card>
           <RecipeForm hid={hid} products={products.data!} recipe={editing ? recipe.data : undefined} productId={params.get('productId') ?? undefined} />
         </Card>

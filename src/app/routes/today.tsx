@@ -8,10 +8,14 @@ import { RestockGlance } from '@/features/today/components/restock-glance';
 import { TodaySection } from '@/features/today/components/today-section';
 import { JarsForToday } from '@/features/today/components/jars-for-today';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { useProducts } from '@/features/shelf/api/get-products';
+import { FirstProduct } from '@/features/shelf/components/first-product';
+import { can } from '@shared/roles';
 
 export function TodayRoute() {
-  const { hid } = useCurrentHousehold();
+  const { hid, role } = useCurrentHousehold();
   const today = useToday(hid);
+  const products = useProducts(hid);
   const view = today.data;
 
   return (
@@ -23,6 +27,11 @@ export function TodayRoute() {
         </Notice>
       )}
       {!view && !today.isError && <p className="text-ink-muted">Loading…</p>}
+      {view && products.data?.length === 0 && (
+        <div className="mb-4">
+          <FirstProduct hid={hid} why="Today fills in once your shelf has jars: add what you preserve, its recipe, then record a batch." canCook={can(role, 'cook')} />
+        </div>
+      )}
       {view && (
         <div className="grid gap-4 lg:grid-cols-2">
           <TodaySection id="today-use" title="Open and use today" more={{ to: `/h/${hid}/week`, label: 'Week' }}>
