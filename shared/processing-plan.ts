@@ -1,6 +1,6 @@
 // The processing plan for a batch made from a recipe: the domain's plan, after checking the recipe has a tested time for it.
 import { afterProcessingSteps, cautionsFor, isPressureMethod, processingPlan, type AltitudeRow, type JarSize, type Method, type ProcessingPlan } from './domain';
-import { JAR_SIZE_NAMES } from './jar-size-names';
+import { JAR_SIZE_NAMES } from './words';
 
 export interface PlanRecipe {
   method: Method;

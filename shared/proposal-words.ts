@@ -1,12 +1,10 @@
 // The words of the week board's meal proposal: why each meal, and the waste it saves.
 import { addDays, daysBetween, type ProposalReason } from './domain';
-import { count, shortDay } from './day-words';
-
-const WEEKDAY = new Intl.DateTimeFormat('en-US', { weekday: 'long', timeZone: 'UTC' });
+import { count, dateWords, weekdayWords } from './words';
 
 /** "Monday" for a day within a week of the meal, else "Thu, Dec 10". */
 function dayWords(isoDate: string, mealDate: string): string {
-  return Math.abs(daysBetween(mealDate, isoDate)) <= 6 ? WEEKDAY.format(new Date(`${isoDate}T00:00:00Z`)) : shortDay(isoDate);
+  return Math.abs(daysBetween(mealDate, isoDate)) <= 6 ? weekdayWords(isoDate) : dateWords(isoDate);
 }
 
 /** "Uses the Plum Ketchup opened on Monday before Thursday." A jar turns the day after its use-by. */
@@ -15,9 +13,9 @@ export function proposalReasonWords(reason: ProposalReason, productName: (produc
     case 'opened-jar':
       return `Uses the ${productName(String(reason.productId))} opened on ${dayWords(reason.openedOn, mealDate)} before ${dayWords(addDays(reason.useBy, 1), mealDate)}.`;
     case 'past-best':
-      return `Opens the oldest ${productName(String(reason.productId))}, past its best quality since ${shortDay(addDays(reason.bestBy, 1))}.`;
+      return `Opens the oldest ${productName(String(reason.productId))}, past its best quality since ${dateWords(addDays(reason.bestBy, 1))}.`;
     case 'nearest-best':
-      return `Opens the oldest ${productName(String(reason.productId))}, at its best until ${shortDay(reason.bestBy)}.`;
+      return `Opens the oldest ${productName(String(reason.productId))}, best quality by ${dateWords(reason.bestBy)}.`;
     case 'variety':
       return 'Nothing on the shelf is pressing here: a change from the week’s other meals.';
   }

@@ -3,7 +3,7 @@ import { JAR_SIZES, JAR_STATES, PROCESSING_METHODS, PRODUCT_KINDS } from '../dom
 import { householdName } from './auth';
 import { UNIT_SYSTEMS } from './households';
 import { ingredientInput } from './recipes';
-import { PRODUCT_COLOURS } from '../shelf-words';
+import { PRODUCT_COLOURS } from '../words';
 import { SLOTS } from './week';
 
 /** A household's backup file: its shelf, week and to-dos, never people, sessions, keys or tokens. */

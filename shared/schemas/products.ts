@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { JAR_SIZES, PRODUCT_KINDS, type JarSize, type ProductKind } from '../domain';
-import { PRODUCT_COLOURS, type ProductColour } from '../shelf-words';
+import { PRODUCT_COLOURS, type ProductColour } from '../words';
 
 export { PRODUCT_COLOURS, type ProductColour };
 

@@ -6,7 +6,7 @@ export const SCREENS = [
   { path: 'fridge', label: 'Fridge', icon: 'fridge', primary: true },
   { path: 'batches', label: 'Batches', icon: 'pot', primary: false },
   { path: 'recipes', label: 'Recipes', icon: 'card', primary: false },
-  { path: 'restock', label: 'Restock', icon: 'arrow', primary: false },
+  { path: 'restock', label: 'Restock', icon: 'jar-plus', primary: false },
   { path: 'todo', label: 'To-do', icon: 'check', primary: false },
   { path: 'household', label: 'Household', icon: 'home', primary: false },
 ] as const;

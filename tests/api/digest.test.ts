@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
+import { dateWords, USE_BY_CAUTION_SENTENCE } from '../../shared/words';
 import { Household, Pairing, PlanEntry } from '../../server/db/models';
 import { todayIn } from '../../server/services/clock';
 import { sweepDigests } from '../../server/services/digest';
@@ -33,9 +34,15 @@ describe('the weekly digest', () => {
     await sweepDigests(built.ctx, instantAt(today, 9, 5, zone));
     const mails = standIns.mail.to(home.email);
     expect(mails).toHaveLength(1);
-    expect(mails[0].subject).toBe(`Fenwick Cellar: the week of ${today}`);
-    expect(mails[0].text).toContain(`${addDays(today, 1)} breakfast: Oat scones with Blackcurrant Jam`);
-    expect(mails[0].text).toContain(`${addDays(today, 3)}: Blackcurrant Jam (jar `);
+    // The app's date words ("Tue, Jun 9"), never an ISO date or a raw slot id such as "breakfast:".
+    const day = (date: string) => dateWords(date, Number(today.slice(0, 4)));
+    expect(mails[0].subject).toBe(`Fenwick Cellar: the week of ${day(today)}`);
+    expect(mails[0].text).toContain(`${day(addDays(today, 1))} at breakfast: Oat scones with Blackcurrant Jam`);
+    expect(mails[0].text).toContain('Use by this week');
+    expect(mails[0].text).toContain(`- ${day(addDays(today, 3))}: Blackcurrant Jam (jar `);
+    expect(mails[0].text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    // The use-by is a default: the e-mail says so beside the dates (NCHFP, "Storing Home Canned Foods", gives no single figure).
+    expect(mails[0].text).toContain(USE_BY_CAUTION_SENTENCE);
     // 4 tbsp planned, 2 in the opened jar and no sealed jar: the shelf is short, nothing new to open.
     expect(mails[0].text).toContain('No new jars need opening.');
     expect(mails[0].html).toContain('Oat scones');

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
 import { QueryTypes } from 'sequelize';
 import { MAINTENANCE_INTERVAL_SECONDS, startJobs, SWEEP_EXPIRE_SECONDS } from '../../server/jobs';
+import { USE_BY_CAUTION_SENTENCE } from '../../shared/words';
 import { loadConfig } from '../../server/config';
 import { AppSetting, ReminderDelivery } from '../../server/db/models';
 import { loadVapidKeys, type VapidKeys } from '../../server/services/push/vapid-keys';
@@ -64,6 +65,8 @@ describe('use-by reminders', () => {
     const message = home.browser.read(pushes[0]);
     expect(message.title).toBe('Use the Quince and Walnut Chutney within 2 days');
     expect(message.url).toBe(`/j/${home.jar.code}`);
+    // The push carries a caution sized to it: the use-by is a default, the jar's look and smell come first.
+    expect(message.body).toMatch(/use-by is a default.*look and smell.*When in doubt, throw it out\./);
     expect(pushes[0].vapidKey).toBe(await built.ctx.push.publicKey());
 
     const mails = standIns.mail.to(home.email);
@@ -71,6 +74,7 @@ describe('use-by reminders', () => {
     expect(mails[0].subject).toMatch(/Quince and Walnut Chutney within 2 days/);
     expect(mails[0].text).toContain(`/j/${home.jar.code}`);
     expect(mails[0].html).toContain('Quince and Walnut Chutney');
+    expect(mails[0].text).toContain(USE_BY_CAUTION_SENTENCE);
 
     await sweepReminders(built.ctx, home.at(8, 10));
     await sweepReminders(built.ctx, home.at(10, 0));

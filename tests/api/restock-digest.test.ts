@@ -13,7 +13,7 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 describe('restock in the weekly digest', () => {
-  it('lists each restock suggestion with its reason under "Time to make more"', async () => {
+  it('lists each restock suggestion with its reason under "Restock suggestions"', async () => {
     const product = await addProduct(ctx.householdId, { name: 'Test Digest Butter', favourite: true, minJars: 5 });
     await addJars(product, { sealed: 2 });
     const household = (await Household.findByPk(ctx.householdId))!;
@@ -21,7 +21,7 @@ describe('restock in the weekly digest', () => {
     const line = digest.restock.find((r) => r.productName === 'Test Digest Butter');
     expect(line?.reason).toMatch(/^2 sealed jars left; you keep at least 5\. About \d+ half-pint jars would last until the next harvest\.$/);
     const mail = digestMail('keeper@larderly.test', digest);
-    expect(mail.text).toMatch(/Time to make more\n(- .*\n)*- Test Digest Butter: 2 sealed jars left/);
+    expect(mail.text).toMatch(/Restock suggestions\n(- .*\n)*- Test Digest Butter: 2 sealed jars left/);
   });
 
   it("never lists another household's products", async () => {

@@ -36,10 +36,10 @@ describe('from a restock suggestion to a recorded batch', () => {
     expect(changed.status()).toBe(200);
 
     await page.goto(`${baseURL}/h/${hid}`);
-    const runningLow = page.getByRole('region', { name: 'Running low' });
+    const runningLow = page.getByRole('region', { name: 'Restock suggestions' });
     await runningLow.getByRole('link', { name: /Pickled Beets/ }).click();
     await page.waitForURL(/\/restock\?product=/);
-    const needsBatch = page.getByRole('region', { name: 'Needs a new batch' });
+    const needsBatch = page.getByRole('region', { name: 'Restock suggestions' });
     const card = needsBatch.getByRole('article', { name: 'Pickled Beets' });
     await card.getByText(/sealed jars? left; you keep at least/).waitFor();
     const jars = Number(await card.getByRole('spinbutton', { name: 'Jars of Pickled Beets to make' }).inputValue());
@@ -65,7 +65,7 @@ describe('from a restock suggestion to a recorded batch', () => {
     await page.goto(`${baseURL}/h/${hid}/restock`);
     const productCard = page.getByRole('region', { name: 'Every product' }).getByRole('article', { name: 'Pickled Beets' });
     await productCard.getByText(`${before.sealedJars + jars} sealed jars`).waitFor();
-    await expect(page.getByRole('region', { name: 'Needs a new batch' }).getByRole('article', { name: 'Pickled Beets' }).count()).resolves.toBe(0);
+    await expect(page.getByRole('region', { name: 'Restock suggestions' }).getByRole('article', { name: 'Pickled Beets' }).count()).resolves.toBe(0);
     expect((await forecastFor(page, hid, 'Pickled Beets')).sealedJars).toBe(before.sealedJars + jars);
     await page.close();
   });

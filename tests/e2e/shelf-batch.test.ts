@@ -54,7 +54,7 @@ describe('recording a batch', () => {
       await page.getByText('Batch saved').waitFor();
       await page.getByText('Boiling-water canner, 30 minutes at 6,500 ft').waitFor();
       await expect(page.getByText('sealed', { exact: true }).count()).resolves.toBe(8);
-      await page.getByText('in the fridge (did not seal)').waitFor();
+      await page.getByText('did not seal, in the fridge').waitFor();
     } finally {
       await setAltitude(2350);
       await page.close();

@@ -1,3 +1,4 @@
+import { dateWords, SLOT_NAMES, USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
 import { escapeHtml, mailButton, mailLayout, TEXT_FOOTER } from './layout';
 import type { MailMessage } from './mailer';
 
@@ -12,23 +13,28 @@ export interface DigestContent {
   link: string;
 }
 
-function section(title: string, lines: string[], empty: string) {
+function section(title: string, lines: string[], empty: string, note = '') {
   return {
-    text: `${title}\n${lines.length ? lines.map((l) => `- ${l}`).join('\n') : empty}\n`,
+    text: `${title}\n${lines.length ? lines.map((l) => `- ${l}`).join('\n') : empty}\n${note && lines.length ? `${note}\n` : ''}`,
     html: `<h2 style="font-size:17px;margin:20px 0 6px">${escapeHtml(title)}</h2>${
       lines.length ? `<ul style="padding-left:20px;margin:0">${lines.map((l) => `<li>${escapeHtml(l)}</li>`).join('')}</ul>` : `<p style="margin:0">${escapeHtml(empty)}</p>`
-    }`,
+    }${note && lines.length ? `<p style="margin:6px 0 0;font-size:14px">${escapeHtml(note)}</p>` : ''}`,
   };
 }
 
+const slotName = (slot: string) => SLOT_NAMES[slot as keyof typeof SLOT_NAMES] ?? slot;
+
 export function digestMail(to: string, digest: DigestContent): MailMessage {
+  // The same date words as the app ("Tue, Jun 9"), counted from the digest's own week so the year shows only when it changes.
+  const thisYear = Number(digest.weekOf.slice(0, 4));
+  const day = (isoDate: string) => dateWords(isoDate, thisYear);
   const sections = [
-    section('This week’s plan', digest.plan.map((p) => `${p.date} ${p.slot}: ${p.title}${p.products.length ? ` with ${p.products.join(', ')}` : ''}`), 'Nothing is planned yet.'),
-    section('Jars to open', digest.toOpen.map((o) => `${o.date}: open a new jar of ${o.productName}`), 'No new jars need opening.'),
-    section('What expires', digest.expiring.map((e) => `${e.useBy}: ${e.productName} (jar ${e.code})`), 'No opened jar reaches its use-by this week.'),
-    ...(digest.restock.length ? [section('Time to make more', digest.restock.map((r) => `${r.productName}: ${r.reason}`), '')] : []),
+    section('This week’s plan', digest.plan.map((p) => `${day(p.date)} at ${slotName(p.slot).toLowerCase()}: ${p.title}${p.products.length ? ` with ${p.products.join(', ')}` : ''}`), 'Nothing is planned yet.'),
+    section('Jars to open', digest.toOpen.map((o) => `${day(o.date)}: open a new jar of ${o.productName}`), 'No new jars need opening.'),
+    section('Use by this week', digest.expiring.map((e) => `${day(e.useBy)}: ${e.productName} (jar ${e.code})`), 'No opened jar reaches its use-by this week.', USE_BY_CAUTION_SENTENCE),
+    ...(digest.restock.length ? [section('Restock suggestions', digest.restock.map((r) => `${r.productName}: ${r.reason}`), '')] : []),
   ];
-  const subject = `${digest.householdName}: the week of ${digest.weekOf}`;
+  const subject = `${digest.householdName}: the week of ${day(digest.weekOf)}`;
   return {
     to,
     subject,

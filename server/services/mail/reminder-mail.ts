@@ -1,4 +1,5 @@
 import type { ReminderKind } from '../../db/models/reminder-delivery';
+import { USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
 import { escapeHtml, mailButton, mailLayout, TEXT_FOOTER } from './layout';
 import type { MailMessage } from './mailer';
 
@@ -7,18 +8,21 @@ export interface ReminderWords {
   body: string;
 }
 
+// A push message has room for one short caution; the e-mail carries the full sentence.
+const PUSH_CAUTION = 'The use-by is a default; the jar’s look and smell come first. When in doubt, throw it out.';
+
 /** The words of a use-by reminder, shared by the push notification and the e-mail. */
 export function reminderWords(kind: ReminderKind, productName: string, daysLeft: number, code: string): ReminderWords {
   if (kind === 'today') {
-    return { title: `Use the ${productName} today`, body: `The opened jar ${code} of ${productName} reaches its use-by today. Finish it, or discard what is left.` };
+    return { title: `Use the ${productName} today`, body: `The opened jar ${code} of ${productName} reaches its use-by today. Finish it, or discard what is left. ${PUSH_CAUTION}` };
   }
   const days = daysLeft === 1 ? '1 day' : `${daysLeft} days`;
-  return { title: `Use the ${productName} within ${days}`, body: `The opened jar ${code} of ${productName} should be finished within ${days}.` };
+  return { title: `Use the ${productName} within ${days}`, body: `The opened jar ${code} of ${productName} should be finished within ${days}. ${PUSH_CAUTION}` };
 }
 
 export function reminderMail(input: { to: string; words: ReminderWords; householdName: string; link: string }): MailMessage {
   const { title, body } = input.words;
-  const text = `${body}\n\n${input.householdName}: ${input.link}\n\nWhen in doubt, throw it out.${TEXT_FOOTER}`;
-  const html = mailLayout(title, `<p>${escapeHtml(body)}</p>${mailButton(input.link, 'Open the jar')}<p style="font-size:14px">When in doubt, throw it out.</p>`);
+  const text = `${body}\n\n${input.householdName}: ${input.link}\n\n${USE_BY_CAUTION_SENTENCE}${TEXT_FOOTER}`;
+  const html = mailLayout(title, `<p>${escapeHtml(body)}</p>${mailButton(input.link, 'Open the jar')}<p style="font-size:14px">${escapeHtml(USE_BY_CAUTION_SENTENCE)}</p>`);
   return { to: input.to, subject: `${title} (${input.householdName})`, text, html };
 }

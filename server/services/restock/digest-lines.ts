@@ -1,8 +1,8 @@
-import { JAR_SIZE_NAMES } from '../../../shared/jar-size-names';
+import { JAR_SIZE_NAMES } from '../../../shared/words';
 import type { DigestContent } from '../mail/digest-mail';
 import { restockFor } from './view';
 
-/** The restock suggestions the weekly digest lists under "Time to make more"; none leaves the section out. */
+/** The restock suggestions the weekly digest lists under "Restock suggestions"; none leaves the section out. */
 export async function digestRestockLines(householdId: string, today: string): Promise<DigestContent['restock']> {
   const suggestions = await restockFor(householdId, today);
   return suggestions.map((suggestion) => ({

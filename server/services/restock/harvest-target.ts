@@ -1,6 +1,6 @@
 // The day a restock batch should be made by: inside the harvest window, and before the shelf runs out.
 import { addDays, DEFAULT_LEAD_DAYS, lastDayOfMonth, monthOf, yearOf } from '../../../shared/domain';
-import { shortDay } from '../../../shared/day-words';
+import { dateWords } from '../../../shared/words';
 
 interface HarvestWindow {
   start: string;
@@ -34,14 +34,14 @@ export function targetDate(today: string, harvestMonths: number[], runOutOn: str
   const window = harvestWindow(today, harvestMonths);
   const runOut = runOutOn !== null && runOutOn > today ? runOutOn : null;
   if (window === null) {
-    if (runOut) return { targetOn: addDays(runOut, -1), why: `The day before the shelf runs out (${shortDay(runOut, year)}).` };
+    if (runOut) return { targetOn: addDays(runOut, -1), why: `The day before the shelf runs out (${dateWords(runOut, year)}).` };
     return { targetOn: addDays(today, DEFAULT_LEAD_DAYS), why: 'Two weeks from today: time to gather the produce and a free afternoon.' };
   }
   if (runOut && runOut > window.start && runOut <= window.end) {
-    return { targetOn: addDays(runOut, -1), why: `Before the shelf runs out on ${shortDay(runOut, year)}, while the produce is in season.` };
+    return { targetOn: addDays(runOut, -1), why: `Before the shelf runs out on ${dateWords(runOut, year)}, while the produce is in season.` };
   }
   if (window.start > today) {
-    return { targetOn: window.end, why: `The produce comes in from ${shortDay(window.start, year)}; make it before the harvest ends on ${shortDay(window.end, year)}.` };
+    return { targetOn: window.end, why: `The produce comes in from ${dateWords(window.start, year)}; make it before the harvest ends on ${dateWords(window.end, year)}.` };
   }
-  return { targetOn: window.end, why: `Before the harvest ends on ${shortDay(window.end, year)}.` };
+  return { targetOn: window.end, why: `Before the harvest ends on ${dateWords(window.end, year)}.` };
 }

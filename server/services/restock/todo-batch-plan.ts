@@ -1,8 +1,7 @@
 // A restock to-do's batch plan: the tested recipe scaled to the jars wanted, processed for this household.
 import type { Sequelize } from 'sequelize';
 import { jarFluidOunces, restockSuggestions, type JarSize } from '../../../shared/domain';
-import { count } from '../../../shared/day-words';
-import { JAR_SIZE_NAMES } from '../../../shared/jar-size-names';
+import { count, JAR_SIZE_NAMES } from '../../../shared/words';
 import type { BatchPlan, RestockTodoCreate, TodoView } from '../../../shared/schemas/todos';
 import { Batch, Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';

@@ -1,8 +1,7 @@
 // The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import { formatKitchenAmount, scaleRecipe, type JarSize, type RestockReason, type ScaledIngredient } from '../../../shared/domain';
-import { shortDay } from '../../../shared/day-words';
-import { feet, METHOD_NAMES } from '../../../shared/shelf-words';
+import { altitudeWords, dateWords, METHOD_NAMES } from '../../../shared/words';
 import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
@@ -77,9 +76,9 @@ function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
 
 /** What differs between a plan as made and as worked out now, in words a cook reads on canning day. */
 export function planChanges(made: BatchPlan, now: BatchPlan): string[] {
-  const since = `when it was planned on ${shortDay(made.plannedOn)}`;
+  const since = `when it was planned on ${dateWords(made.plannedOn)}`;
   const changes: string[] = [];
-  if (made.altitudeFt !== now.altitudeFt) changes.push(`The household’s altitude is now ${feet(now.altitudeFt)} (it was ${feet(made.altitudeFt)} ${since}).`);
+  if (made.altitudeFt !== now.altitudeFt) changes.push(`The household’s altitude is now ${altitudeWords(now.altitudeFt)} (it was ${altitudeWords(made.altitudeFt)} ${since}).`);
   if (processingWords(made) !== processingWords(now)) changes.push(`Processing is now ${processingWords(now)} (it was ${processingWords(made)}).`);
   if (made.method !== now.method) changes.push(`The recipe now uses a ${METHOD_NAMES[now.method].toLowerCase()} (it was a ${METHOD_NAMES[made.method].toLowerCase()}).`);
   if (made.equipment.cannerCapacityJars !== now.equipment.cannerCapacityJars) {

@@ -1,7 +1,7 @@
 // The restock list: each product's forecast, the favourites that need a batch and why, in plain words.
 import { Op } from 'sequelize';
 import { addMonths, jarSizeAdvice, yearOf, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../../shared/domain';
-import { count, shortDay, tbspPerDay } from '../../../shared/day-words';
+import { count, dateWords, tbspPerDay } from '../../../shared/words';
 import type { MonthlyUse, RestockForecastView, RestockSuggestionView, RestockView } from '../../../shared/schemas/restock';
 import { Household, Recipe, Todo, type Product } from '../../db/models';
 import { todayIn } from '../clock';
@@ -10,7 +10,7 @@ import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from
 function whyInWords(today: string, suggestion: RestockSuggestion, forecast: RestockForecast, product: Product): string {
   if (suggestion.reason === 'runs-out-soon') {
     if (forecast.jarsOnHand === 0) return 'None left on the shelf or in the fridge.';
-    return `At about ${tbspPerDay(forecast.dailyTbsp)}, the last jar is empty by ${shortDay(suggestion.runOutOn!, yearOf(today))}.`;
+    return `At about ${tbspPerDay(forecast.dailyTbsp)}, the last jar is empty by ${dateWords(suggestion.runOutOn!, yearOf(today))}.`;
   }
   return `${count(forecast.sealedJars, 'sealed jar')} left; you keep at least ${product.minJars}.`;
 }

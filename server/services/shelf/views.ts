@@ -2,7 +2,7 @@
 import { bestQualityBy, defaultUseWithinDays, JAR_STATES, type JarState } from '../../../shared/domain';
 import type { BatchView, JarView } from '../../../shared/schemas/batches';
 import type { ProductView } from '../../../shared/schemas/products';
-import type { ProductColour } from '../../../shared/shelf-words';
+import { type ProductColour } from '../../../shared/words';
 import type { RecipeView } from '../../../shared/schemas/recipes';
 import type { Batch, Household, Jar, Product, Recipe } from '../../db/models';
 import { todayIn } from '../clock';

@@ -5,7 +5,7 @@ import { PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { BatchDetailView } from '@/features/shelf/components/batch-detail';
-import { longDate } from '@/features/shelf/format';
+import { dateWords } from '@shared/words';
 
 export function BatchDetailRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -16,7 +16,7 @@ export function BatchDetailRoute() {
     <>
       <PageHeader
         title={batch.data ? batch.data.productName : 'Batch'}
-        lead={batch.data ? `Canned ${longDate(batch.data.cannedOn)}` : undefined}
+        lead={batch.data ? `Canned ${dateWords(batch.data.cannedOn)}` : undefined}
         actions={
           <Link to={`/h/${hid}/batches`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
             All batches

@@ -3,7 +3,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { LabelSheet, type Paper } from '@/features/shelf/components/label-sheet';
-import { longDate } from '@/features/shelf/format';
+import { dateWords } from '@shared/words';
 
 /** A page of its own, outside the app's navigation, so it prints as nothing but labels. */
 export function BatchLabelsRoute() {
@@ -15,7 +15,7 @@ export function BatchLabelsRoute() {
     <main className="mx-auto max-w-5xl p-4 print:max-w-none print:p-0">
       <div className="mb-4 flex flex-wrap items-end justify-between gap-3 print:hidden">
         <div>
-          <h1 className="text-2xl">Labels{batch.data ? `: ${batch.data.productName}, ${longDate(batch.data.cannedOn)}` : ''}</h1>
+          <h1 className="text-2xl">Labels{batch.data ? `: ${batch.data.productName}, ${dateWords(batch.data.cannedOn)}` : ''}</h1>
           <p className="text-ink-muted">One label a jar. Scanning a label opens the jar’s page to mark it opened, finished or discarded.</p>
         </div>
         <div className="flex flex-wrap items-center gap-2">

@@ -8,7 +8,7 @@ import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
-import { jarSizeName, longDate } from '@/features/shelf/format';
+import { dateWords, jarSizeWords } from '@shared/words';
 
 /** What a label's QR code opens: the jar, found by its code in whichever household of yours holds it. */
 export function JarRoute() {
@@ -39,7 +39,7 @@ export function JarRoute() {
             <p className="font-mono text-lg font-bold tracking-wider text-ink-muted">{jar.code}</p>
             <h1 className="text-3xl">{jar.productName}</h1>
             <p className="text-ink-muted">
-              {jarSizeName(jar.jarSize)} jar, canned {longDate(jar.cannedOn)}
+              {jarSizeWords(jar.jarSize)} jar, canned {dateWords(jar.cannedOn)}
             </p>
           </div>
           <p className="flex flex-wrap items-center gap-2">
@@ -49,7 +49,7 @@ export function JarRoute() {
           <p className="text-lg">
             <JarDates jar={jar} />
           </p>
-          {jar.unsealed && jar.state === 'opened' && <Notice tone="info">{UNSEALED_JAR_ADVICE}</Notice>}
+          {jar.unsealed && jar.state === 'opened' && <Notice tone="soon">{UNSEALED_JAR_ADVICE}</Notice>}
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
           <PutBackJar hid={found.data.householdId} jar={jar} lastChange={found.data.lastChange} canCook={can(found.data.role, 'cook')} />
           <Link to={`/h/${found.data.householdId}/batches/${jar.batchId}`} className="font-bold text-action underline underline-offset-4">

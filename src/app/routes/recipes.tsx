@@ -1,11 +1,10 @@
 import { Link } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { METHOD_NAMES } from '@shared/shelf-words';
+import { jarSizeWords, METHOD_NAMES } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
-import { jarSizeName } from '@/features/shelf/format';
 
 export function RecipesRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -41,7 +40,7 @@ export function RecipesRoute() {
                 <span className="text-lg font-bold">{recipe.name}</span>
                 <span className="text-ink-muted">for {recipe.productName}</span>
                 <span className="text-[0.95rem]">
-                  Makes {recipe.yieldJars} {jarSizeName(recipe.yieldJarSize)} jars · {METHOD_NAMES[recipe.method].toLowerCase()}
+                  Makes {recipe.yieldJars} {jarSizeWords(recipe.yieldJarSize)} jars · {METHOD_NAMES[recipe.method].toLowerCase()}
                 </span>
               </Link>
             </li>

@@ -21,7 +21,7 @@ export function RestockRoute() {
 
   return (
     <>
-      <PageHeader title="Restock" lead="Favourites running low, and the batch that would carry you to the next harvest." />
+      <PageHeader title="Restock" lead="Favorites running low, and the batch that would carry you to the next harvest." />
       {restock.isError && (
         <Notice tone="past" role="alert" title="The restock list could not be loaded">
           {restock.error.message}
@@ -32,7 +32,7 @@ export function RestockRoute() {
         <div className="flex flex-col gap-8">
           <section aria-labelledby="needs-batch">
             <h2 id="needs-batch" className="mb-3 text-xl">
-              Needs a new batch
+              Restock suggestions
             </h2>
             {restock.data.suggestions.length === 0 ? (
               <EmptyState title="Nothing is running low">Mark your favourites and set a minimum below; Larderly watches the count for you.</EmptyState>

@@ -1,4 +1,4 @@
-import { shortDay } from '@shared/day-words';
+import { dateWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
 import { useToday } from '@/features/today/api/get-today';
@@ -20,7 +20,7 @@ export function TodayRoute() {
 
   return (
     <>
-      <PageHeader title="Today" lead={view ? shortDay(view.today) : 'What to open and use, the fridge, restock and your to-dos.'} />
+      <PageHeader title="Today" lead={view ? dateWords(view.today) : 'What to open and use, the fridge, restock and your to-dos.'} />
       {today.isError && (
         <Notice tone="past" role="alert" title="Today could not be loaded">
           {today.error.message}
@@ -40,7 +40,7 @@ export function TodayRoute() {
           <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: `/h/${hid}/fridge`, label: `All ${view.fridgeCount}` } : { to: `/h/${hid}/fridge`, label: 'Fridge' }}>
             <FridgeCountdowns jars={view.fridge} />
           </TodaySection>
-          <TodaySection id="today-restock" title="Running low" more={{ to: `/h/${hid}/restock`, label: 'Restock' }}>
+          <TodaySection id="today-restock" title="Restock suggestions" more={{ to: `/h/${hid}/restock`, label: 'Restock' }}>
             <RestockGlance hid={hid} suggestions={view.restock} />
           </TodaySection>
           <TodaySection id="today-todos" title="My to-dos" more={{ to: `/h/${hid}/todo`, label: view.openTodoCount ? `All ${view.openTodoCount} open` : 'To-do' }}>

@@ -1,9 +1,9 @@
-import { format, parseISO } from 'date-fns';
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { addDays, requireIsoDate } from '@shared/domain';
 import { can } from '@shared/roles';
 import { weekStartOf } from '@shared/schemas/week';
+import { monthDayWords } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
@@ -41,7 +41,7 @@ function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek }: { h
   const meals = useMeals(hid);
   const copy = useCopyWeek(hid);
   const [copied, setCopied] = useState<string | null>(null);
-  const title = `${format(parseISO(start), 'MMM d')} – ${format(parseISO(addDays(start, 6)), 'MMM d')}`;
+  const title = `${monthDayWords(start)} – ${monthDayWords(addDays(start, 6))}`;
   const copyLastWeek = () =>
     copy.mutate(
       { from: shiftWeek(start, -1), to: start },

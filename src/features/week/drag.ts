@@ -1,14 +1,14 @@
 // What can be dragged on the week board, where it can land, and how that is said aloud.
 import type { Announcements } from '@dnd-kit/core';
-import { format, parseISO } from 'date-fns';
 import type { MealView, PlanEntryView, Slot, WeekProduct } from '@shared/schemas/week';
+import { SLOT_NAMES, weekdayWords } from '@shared/words';
 
 export type DragSource = { type: 'meal'; meal: MealView } | { type: 'product'; product: WeekProduct } | { type: 'entry'; entry: PlanEntryView };
 export type DropTarget = { type: 'slot'; date: string; slot: Slot } | { type: 'entry'; entry: PlanEntryView };
 
-export const SLOT_LABELS: Record<Slot, string> = { breakfast: 'Breakfast', lunch: 'Lunch', dinner: 'Dinner', snack: 'Snack' };
+export const SLOT_LABELS: Record<Slot, string> = SLOT_NAMES;
 export const slotId = (date: string, slot: Slot) => `slot:${date}:${slot}`;
-export const weekday = (date: string) => format(parseISO(date), 'EEEE');
+export const weekday = (date: string) => weekdayWords(date);
 
 export function sourceLabel(source: DragSource | undefined): string {
   if (!source) return 'The item';

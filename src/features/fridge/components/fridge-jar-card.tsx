@@ -1,13 +1,11 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { count, shortDay } from '@shared/day-words';
+import { count, countdown, dateWords, DATE_NAMES, JAR_ACTION_NAMES } from '@shared/words';
 import type { FridgeJar } from '@shared/schemas/fridge';
 import { Button } from '@/components/ui/button';
+import { CountdownBadge } from '@/components/ui/countdown-badge';
 import type { ClosingAction } from '../api/close-jar';
-import { countdown } from './countdown';
 import { JarLevel } from './jar-level';
-
-const TONE_BADGE = { info: 'bg-info-soft text-info', soon: 'bg-soon-soft text-soon', past: 'bg-past-soft text-past' } as const;
 
 function estimateWords(jar: FridgeJar) {
   const round = (tbsp: number) => Math.round(tbsp * 10) / 10;
@@ -19,7 +17,7 @@ function estimateWords(jar: FridgeJar) {
 
 export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
   const [confirmDiscard, setConfirmDiscard] = useState(false);
-  const { text, tone } = countdown(jar.daysLeft);
+  const { tone } = countdown(jar.daysLeft);
   return (
     <li className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
       <div className="flex items-start gap-3">
@@ -30,13 +28,13 @@ export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: Fri
             <Link to={`/j/${jar.code}`} className="font-bold text-action underline underline-offset-4">
               Jar {jar.code}
             </Link>{' '}
-            · opened {shortDay(jar.openedOn)}, {jar.daysOpen === 0 ? 'today' : `${count(jar.daysOpen, 'day')} ago`}
+            · opened {dateWords(jar.openedOn)}, {jar.daysOpen === 0 ? 'today' : `${count(jar.daysOpen, 'day')} ago`}
           </p>
         </div>
-        <span className={`shrink-0 rounded-full px-3 py-1 text-sm font-bold tabular ${TONE_BADGE[tone]}`}>{text}</span>
+        <CountdownBadge daysLeft={jar.daysLeft} />
       </div>
       <p className="tabular">
-        <span className="font-bold">Use by {shortDay(jar.useBy)}.</span> {estimateWords(jar)}
+        <span className="font-bold">{DATE_NAMES.useBy} {dateWords(jar.useBy)}.</span> {estimateWords(jar)}
       </p>
       {jar.unsealed && (
         <p className="rounded-lg border border-soon-fill bg-soon-soft px-3 py-2 text-sm">
@@ -55,8 +53,8 @@ export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: Fri
         </div>
       ) : (
         <div className="flex flex-wrap gap-2">
-          <Button disabled={busy} onClick={() => onClose('finish')} aria-label={`Finished jar ${jar.code} of ${jar.productName}`}>
-            Finished
+          <Button disabled={busy} onClick={() => onClose('finish')} aria-label={`${JAR_ACTION_NAMES.finish}: jar ${jar.code} of ${jar.productName}`}>
+            {JAR_ACTION_NAMES.finish}
           </Button>
           <Button variant="secondary" disabled={busy} onClick={() => setConfirmDiscard(true)} aria-label={`Discard jar ${jar.code} of ${jar.productName}`}>
             Discard

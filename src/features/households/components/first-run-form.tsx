@@ -1,8 +1,7 @@
 import { useRef, useState, type FormEvent } from 'react';
 import { PROCESSING_METHODS, type Method } from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
-import { METHOD_NAMES } from '@shared/shelf-words';
-import { WEEKDAY_NAMES } from '@shared/day-words';
+import { METHOD_NAMES, WEEKDAY_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

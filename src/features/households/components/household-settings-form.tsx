@@ -43,12 +43,12 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
         </SelectField>
         <TimeZoneField value={form.timeZone} onChange={(e) => setForm({ ...form, timeZone: e.target.value })} error={error?.fields.timeZone} />
         <TextField
-          label="Best quality (months after canning)"
+          label="Best quality by: months after canning"
           inputMode="numeric"
           value={form.bestQualityMonths}
           onChange={(e) => setForm({ ...form, bestQualityMonths: e.target.value })}
           error={error?.fields.bestQualityMonths}
-          hint="Sealed jars past it get a badge on the shelf. NCHFP advises one year (12 months)."
+          hint="Sealed jars past it get a badge on the shelf. The National Center for Home Food Preservation (NCHFP) advises one year (12 months)."
         />
       </fieldset>
       {canEdit && (

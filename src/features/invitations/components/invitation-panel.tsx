@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { shortDay } from '@shared/day-words';
+import { dateWords } from '@shared/words';
 import { ROLE_LABELS, ROLES, type Role } from '@shared/roles';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
@@ -60,7 +60,7 @@ export function InvitationPanel({ hid }: { hid: string }) {
               <span className="min-w-0">
                 <span className="block truncate font-bold">{invitation.email}</span>
                 <span className="text-sm text-ink-muted">
-                  {ROLE_LABELS[invitation.role]} · link valid until {shortDay(invitation.expiresAt.slice(0, 10))}
+                  {ROLE_LABELS[invitation.role]} · link valid until {dateWords(invitation.expiresAt.slice(0, 10))}
                 </span>
               </span>
               <Button variant="quiet" disabled={revoke.isPending} onClick={() => revoke.mutate(invitation.id)} aria-label={`Withdraw the invitation to ${invitation.email}`}>

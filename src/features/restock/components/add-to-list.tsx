@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
 import type { JarSize } from '@shared/domain';
-import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import { JAR_SIZE_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { useAddRestockTodo } from '../api/add-restock-todo';
 

@@ -1,13 +1,12 @@
 import type { RestockForecastView } from '@shared/schemas/restock';
-import { count, shortDay, tbspPerDay } from '@shared/day-words';
-import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import { count, dateWords, JAR_SIZE_NAMES, tbspPerDay } from '@shared/words';
 import { LazyUseChart } from './lazy-use-chart';
 import { RestockSettings } from './restock-settings';
 
 function runOutWords(forecast: RestockForecastView) {
   if (forecast.dailyTbsp === 0) return 'Not eaten lately and nothing planned.';
   if (forecast.runOutOn === null) return 'Lasts well past next year at this rate.';
-  return `At ${tbspPerDay(forecast.dailyTbsp)}, runs out around ${shortDay(forecast.runOutOn)}.`;
+  return `At ${tbspPerDay(forecast.dailyTbsp)}, runs out around ${dateWords(forecast.runOutOn)}.`;
 }
 
 /** One product's rate, stock, run-out date and jar size advice, with its use chart. */

@@ -1,7 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
-import { shortDay } from '@shared/day-words';
-import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import { dateWords, JAR_SIZE_NAMES } from '@shared/words';
 import { AddToList } from './add-to-list';
 
 const REASON_TITLES = { 'runs-out-soon': 'Runs out soon', 'below-minimum': 'Below your minimum' } as const;
@@ -21,7 +20,7 @@ export function SuggestionCard({ hid, suggestion, canCook, focused }: { hid: str
         </h3>
         <p>{suggestion.why}</p>
         <p className="text-ink-muted">
-          About {suggestion.suggestedJars} {JAR_SIZE_NAMES[suggestion.jarSize]} jars last until {shortDay(suggestion.lastsUntil)}, the end of the next harvest month.
+          About {suggestion.suggestedJars} {JAR_SIZE_NAMES[suggestion.jarSize]} jars last until {dateWords(suggestion.lastsUntil)}, the end of the next harvest month.
         </p>
       </div>
       {suggestion.openTodoId ? (

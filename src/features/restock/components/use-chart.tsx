@@ -1,5 +1,5 @@
 import type { MonthlyUse } from '@shared/schemas/restock';
-import { shortMonth } from '@shared/day-words';
+import { monthWords } from '@shared/words';
 
 const WIDTH = 240;
 const HEIGHT = 72;
@@ -9,7 +9,7 @@ const LABEL = 16;
 export default function UseChart({ productName, months }: { productName: string; months: MonthlyUse[] }) {
   const most = Math.max(...months.map((m) => m.tbsp), 1);
   const slot = WIDTH / months.length;
-  const summary = months.map((m) => `${shortMonth(m.month)} ${Math.round(m.tbsp)} tbsp`).join(', ');
+  const summary = months.map((m) => `${monthWords(m.month)} ${Math.round(m.tbsp)} tbsp`).join(', ');
   return (
     <svg viewBox={`0 0 ${WIDTH} ${HEIGHT + LABEL}`} className="h-auto w-full max-w-xs" role="img" aria-label={`${productName}, used per month: ${summary}`}>
       <line x1="0" x2={WIDTH} y1={HEIGHT} y2={HEIGHT} className="stroke-line" strokeWidth="1" />
@@ -20,7 +20,7 @@ export default function UseChart({ productName, months }: { productName: string;
           <g key={month.month}>
             <rect x={x} y={HEIGHT - height} width={slot * 0.6} height={height} rx="3" className="fill-info" />
             <text x={x + slot * 0.3} y={HEIGHT + LABEL - 3} textAnchor="middle" className="fill-ink-muted text-[10px]">
-              {shortMonth(month.month)}
+              {monthWords(month.month)}
             </text>
           </g>
         );

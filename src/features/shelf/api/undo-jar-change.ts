@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import { shortDay } from '@shared/day-words';
+import { dateWords } from '@shared/words';
 import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
 import { useUndoToast } from '@/components/ui/undo-toast';
 import { api } from '@/lib/api-client';
@@ -33,7 +33,7 @@ export const whereJarIs = (jar: Pick<JarView, 'state'>) => (jar.state === 'opene
 /** What the toast says: which jar, and where it went. */
 export function jarActionWords(action: JarAction, jar: Pick<JarView, 'code' | 'productName' | 'useBy'>): string {
   const which = `jar ${jar.code} of ${jar.productName}`;
-  if (action === 'open') return `Opened ${which}. It is in the fridge now${jar.useBy ? `; use by ${shortDay(jar.useBy)}` : ''}.`;
+  if (action === 'open') return `Opened ${which}. It is in the fridge now${jar.useBy ? `; use by ${dateWords(jar.useBy)}` : ''}.`;
   if (action === 'finish') return `Finished ${which}. It has left the fridge.`;
   return `Discarded ${which}. It is off the shelf and out of the plan.`;
 }

@@ -1,8 +1,8 @@
 import { Link } from 'react-router-dom';
 import type { BatchDetail } from '@shared/schemas/batches';
-import { METHOD_NAMES } from '@shared/shelf-words';
+import { altitudeWords, dateWords, headspaceWords, jarSizeWords, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
+import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
-import { feet, jarSizeName, longDate } from '../format';
 import { BatchPhoto } from './batch-photo';
 import { JarActions } from './jar-actions';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
@@ -12,9 +12,9 @@ const EVENT_WORDS: Record<string, string> = { filled: 'filled', unsealed: 'did n
 export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
   const processing =
     batch.pressurePsi !== null
-      ? `${batch.minutes} minutes at ${batch.pressurePsi} lb`
+      ? `${minutesWords(batch.minutes!)} at ${pressureWords(batch.pressurePsi)}`
       : batch.minutes !== null
-        ? `${batch.minutes} minutes`
+        ? minutesWords(batch.minutes)
         : 'time not recorded';
   return (
     <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
@@ -22,19 +22,19 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
         <Card>
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
             <dt className="text-ink-muted">Canned</dt>
-            <dd className="tabular">{longDate(batch.cannedOn)}</dd>
+            <dd className="tabular">{dateWords(batch.cannedOn)}</dd>
             <dt className="text-ink-muted">Jars</dt>
             <dd className="tabular">
-              {batch.jarsFilled} {jarSizeName(batch.jarSize)} filled, {batch.jarsSealed} sealed
+              {batch.jarsFilled} {jarSizeWords(batch.jarSize)} filled, {batch.jarsSealed} sealed
             </dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
-              {METHOD_NAMES[batch.method]}, {processing} at {feet(batch.altitudeFt)}
+              {METHOD_NAMES[batch.method]}, {processing} at {altitudeWords(batch.altitudeFt)}
             </dd>
             {batch.headspaceInches !== null && (
               <>
                 <dt className="text-ink-muted">Headspace</dt>
-                <dd>{batch.headspaceInches} inch</dd>
+                <dd>{headspaceWords(batch.headspaceInches)}</dd>
               </>
             )}
             <dt className="text-ink-muted">Recipe</dt>
@@ -48,6 +48,9 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
               )}
             </dd>
           </dl>
+          <div className="mt-3">
+            <CautionLine about="canning" />
+          </div>
           {batch.notes && <p className="mt-3 whitespace-pre-line">{batch.notes}</p>}
         </Card>
         <Card>
@@ -88,7 +91,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
           <ol className="flex flex-col gap-1 text-[0.95rem]">
             {batch.history.map((event) => (
               <li key={event.id} className="tabular">
-                <span className="text-ink-muted">{longDate(event.happenedOn)}</span> · jar <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
+                <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
                 {event.who ? ` by ${event.who}` : ''}
               </li>
             ))}

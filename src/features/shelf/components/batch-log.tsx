@@ -1,10 +1,12 @@
 import { Link } from 'react-router-dom';
 import type { BatchView } from '@shared/schemas/batches';
-import { METHOD_NAMES } from '@shared/shelf-words';
-import { jarSizeName, longDate } from '../format';
+import { dateWords, jarSizeWords, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
+import { CautionLine } from '@/components/ui/caution-line';
 
 export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }) {
   return (
+    <div className="flex flex-col gap-3">
+    <CautionLine about="canning" />
     <ul className="flex flex-col gap-3">
       {batches.map((batch) => (
         <li key={batch.id}>
@@ -12,8 +14,9 @@ export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }
             <div>
               <p className="text-lg font-bold">{batch.productName}</p>
               <p className="tabular text-ink-muted">
-                {longDate(batch.cannedOn)} · {batch.jarsFilled} {jarSizeName(batch.jarSize)} jars · {METHOD_NAMES[batch.method].toLowerCase()}
-                {batch.minutes !== null ? `, ${batch.minutes} min` : ''}
+                {dateWords(batch.cannedOn)} · {batch.jarsFilled} {jarSizeWords(batch.jarSize)} jars · {METHOD_NAMES[batch.method].toLowerCase()}
+                {batch.minutes !== null ? `, ${minutesWords(batch.minutes)}` : ''}
+                {batch.pressurePsi !== null ? ` at ${pressureWords(batch.pressurePsi, true)}` : ''}
               </p>
             </div>
             <p className="tabular flex flex-wrap gap-3 text-[0.95rem]">
@@ -24,11 +27,12 @@ export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }
                 <b>{batch.jarCounts.opened}</b> opened
               </span>
               <span className="text-ink-muted">{batch.jarCounts.finished} finished</span>
-              {batch.jarsFilled > batch.jarsSealed && <span className="text-info">{batch.jarsFilled - batch.jarsSealed} did not seal</span>}
+              {batch.jarsFilled > batch.jarsSealed && <span className="font-bold text-soon">{batch.jarsFilled - batch.jarsSealed} did not seal</span>}
             </p>
           </Link>
         </li>
       ))}
     </ul>
+    </div>
   );
 }

@@ -1,6 +1,6 @@
-import type { ProductColour } from '@shared/shelf-words';
+import type { ProductColour } from '@shared/words';
 
-// The household chooses a product's colour; each maps to a theme token, never a raw colour.
+// The household chooses a product's color; each maps to a theme token, never a raw color.
 const CHIP: Record<ProductColour, string> = {
   honey: 'bg-soon-fill',
   leaf: 'bg-action',
@@ -13,4 +13,3 @@ export function ColourDot({ colour, className = '' }: { colour: string; classNam
   return <span aria-hidden="true" className={`inline-block h-3.5 w-3.5 shrink-0 rounded-full ${CHIP[colour as ProductColour] ?? CHIP.wheat} ${className}`} />;
 }
 
-export const PRODUCT_COLOUR_NAMES: Record<ProductColour, string> = { honey: 'Honey', leaf: 'Leaf green', brine: 'Brine teal', earth: 'Earth brown', wheat: 'Wheat' };

@@ -3,7 +3,7 @@ import type { ImportProblem, ImportRow } from '@shared/schemas/batches';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCommitImport, usePreviewImport } from '../api/import-batches';
-import { jarSizeName, longDate } from '../format';
+import { dateWords, jarSizeWords } from '@shared/words';
 
 const EXAMPLE = 'product,recipe,canned_on,jar_size,jars_filled,jars_sealed,method,minutes,notes';
 
@@ -71,9 +71,9 @@ export function CsvImport({ hid }: { hid: string }) {
                 <tr key={row.row} className="tabular border-t border-line">
                   <td className="px-3 py-2">{row.row}</td>
                   <td className="px-3 py-2">{row.productName}</td>
-                  <td className="px-3 py-2">{longDate(row.cannedOn)}</td>
+                  <td className="px-3 py-2">{dateWords(row.cannedOn)}</td>
                   <td className="px-3 py-2">
-                    {row.jarsFilled} {jarSizeName(row.jarSize)}
+                    {row.jarsFilled} {jarSizeWords(row.jarSize)}
                   </td>
                   <td className="px-3 py-2">{row.jarsSealed}</td>
                   <td className="px-3 py-2">{row.minutes ?? '—'}</td>

@@ -1,4 +1,5 @@
 import type { JarAction, JarView } from '@shared/schemas/batches';
+import { JAR_ACTION_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useState } from 'react';
@@ -7,12 +8,12 @@ import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 
 const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> = {
   sealed: [
-    { action: 'open', label: 'Mark opened' },
-    { action: 'discard', label: 'Discard' },
+    { action: 'open', label: JAR_ACTION_NAMES.open },
+    { action: 'discard', label: JAR_ACTION_NAMES.discard },
   ],
   opened: [
-    { action: 'finish', label: 'Mark finished' },
-    { action: 'discard', label: 'Discard' },
+    { action: 'finish', label: JAR_ACTION_NAMES.finish },
+    { action: 'discard', label: JAR_ACTION_NAMES.discard },
   ],
   finished: [],
   discarded: [],

@@ -1,10 +1,10 @@
 import type { JarView } from '@shared/schemas/batches';
-import { longDate } from '../format';
+import { DATE_NAMES, dateWords, JAR_STATE_NAMES, UNSEALED_STATE_NAME } from '@shared/words';
 
 export function PastBestBadge({ bestBy }: { bestBy: string }) {
   return (
-    <span className="inline-flex items-center rounded-full border border-soon-fill bg-soon-soft px-2 py-0.5 text-sm font-bold text-soon" title={`Best quality until ${longDate(bestBy)}`}>
-      Past best quality
+    <span className="inline-flex items-center rounded-full border border-soon-fill bg-soon-soft px-2 py-0.5 text-sm font-bold text-soon" title={`${DATE_NAMES.bestQuality} ${dateWords(bestBy)}`}>
+      {DATE_NAMES.pastBestQuality}
     </span>
   );
 }
@@ -17,14 +17,16 @@ const STATE_STYLE: Record<JarView['state'], string> = {
 };
 
 export function JarStateBadge({ jar }: { jar: Pick<JarView, 'state' | 'unsealed'> }) {
-  const label = jar.state === 'opened' && jar.unsealed ? 'in the fridge (did not seal)' : jar.state === 'opened' ? 'opened, in the fridge' : jar.state;
-  return <span className={`inline-flex rounded-full px-2 py-0.5 text-sm font-bold ${STATE_STYLE[jar.state]}`}>{label}</span>;
+  const unsealed = jar.state === 'opened' && jar.unsealed;
+  // The unsealed jar always wears the warning color (honey), as on the fridge and the batch form.
+  const style = unsealed ? 'border border-soon-fill bg-soon-soft text-soon' : STATE_STYLE[jar.state];
+  return <span className={`inline-flex rounded-full px-2 py-0.5 text-sm font-bold ${style}`}>{unsealed ? UNSEALED_STATE_NAME : JAR_STATE_NAMES[jar.state]}</span>;
 }
 
 /** What the jar's dates mean today: best quality for a sealed jar, use-by for an opened one. */
 export function JarDates({ jar }: { jar: JarView }) {
-  if (jar.state === 'sealed') return <span className="tabular">Best quality until {longDate(jar.bestBy)}</span>;
-  if (jar.state === 'opened') return <span className="tabular">Opened {longDate(jar.openedOn!)} · use by {longDate(jar.useBy!)}</span>;
-  if (jar.state === 'finished') return <span className="tabular">Finished {longDate(jar.finishedOn!)}</span>;
-  return <span className="tabular">Discarded {longDate(jar.discardedOn!)}</span>;
+  if (jar.state === 'sealed') return <span className="tabular">{DATE_NAMES.bestQuality} {dateWords(jar.bestBy)}</span>;
+  if (jar.state === 'opened') return <span className="tabular">{DATE_NAMES.opened} {dateWords(jar.openedOn!)} · {DATE_NAMES.useBy.toLowerCase()} {dateWords(jar.useBy!)}</span>;
+  if (jar.state === 'finished') return <span className="tabular">Finished {dateWords(jar.finishedOn!)}</span>;
+  return <span className="tabular">Discarded {dateWords(jar.discardedOn!)}</span>;
 }

@@ -1,8 +1,8 @@
 import QRCode from 'qrcode';
 import { useEffect, useState } from 'react';
 import type { BatchDetail, JarView } from '@shared/schemas/batches';
+import { dateWords, DATE_NAMES } from '@shared/words';
 import { usePublicConfig } from '@/lib/public-config';
-import { longDate } from '../format';
 
 export type Paper = 'a4' | 'letter';
 
@@ -33,8 +33,8 @@ function JarLabel({ jar, origin }: { jar: JarView; origin: string | null }) {
       {qr ? <img src={qr} alt={`QR code for jar ${jar.code}`} className="aspect-square h-[calc(var(--label-h)*0.8)] shrink-0" /> : <span className="aspect-square h-[calc(var(--label-h)*0.8)]" />}
       <span className="flex min-w-0 flex-col gap-0.5 leading-tight">
         <span className="line-clamp-2 font-bold">{jar.productName}</span>
-        <span className="tabular whitespace-nowrap">Canned {longDate(jar.cannedOn)}</span>
-        <span className="tabular whitespace-nowrap">Best by {longDate(jar.bestBy)}</span>
+        <span className="tabular whitespace-nowrap">{DATE_NAMES.canned} {dateWords(jar.cannedOn)}</span>
+        <span className="tabular whitespace-nowrap">{DATE_NAMES.bestQuality} {dateWords(jar.bestBy)}</span>
         <span className="font-mono font-bold tracking-wider">{jar.code}</span>
       </span>
     </li>

@@ -5,14 +5,13 @@ import { JAR_SIZES, PROCESSING_METHODS, UNSEALED_JAR_ADVICE, type JarSize, type 
 import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { METHOD_NAMES } from '@shared/shelf-words';
 import { calendarDateIn } from '@shared/time-zones';
+import { jarSizeWords, METHOD_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useCreateBatch } from '../api/create-batch';
-import { jarSizeName } from '../format';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
 
@@ -98,7 +97,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
           <SelectField label="Jar size" value={jarSize} onChange={(e) => set({ jarSize: e.target.value })} error={error?.fields.jarSize}>
             {JAR_SIZES.map((size) => (
               <option key={size} value={size}>
-                {jarSizeName(size)}
+                {jarSizeWords(size)}
                 {recipe && !testedSizes.includes(size) ? ' (no tested time)' : ''}
               </option>
             ))}
@@ -107,7 +106,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
           <TextField label="Jars sealed" inputMode="numeric" value={sealedText} onChange={(e) => set({ sealed: e.target.value })} error={error?.fields.jarsSealed} hint="Test each lid once cool." />
         </div>
         {unsealed > 0 && (
-          <Notice tone="info" title={`${unsealed} jar${unsealed > 1 ? 's' : ''} did not seal`}>
+          <Notice tone="soon" title={`${unsealed} jar${unsealed > 1 ? 's' : ''} did not seal`}>
             {UNSEALED_JAR_ADVICE} Saving puts {unsealed > 1 ? 'them' : 'it'} in the fridge as opened on the canning day.
           </Notice>
         )}

@@ -1,12 +1,11 @@
 import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { JarView, OpeningAdvice } from '@shared/schemas/batches';
-import { OPENING_CHECKS, OPENING_CHECKS_SOURCE } from '@shared/shelf-words';
+import { dateWords, OPENING_CHECKS, OPENING_CHECKS_SOURCE } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useActOnJar } from '../api/act-on-jar';
 import { getOpeningAdvice } from '../api/get-opening-advice';
-import { longDate } from '../format';
 
 export type OpenableJar = Pick<JarView, 'id' | 'code' | 'productName'>;
 
@@ -85,8 +84,8 @@ function AdvicePanel({ jar, advice, onOpen, onCancel }: { jar: OpenableJar; advi
                 <Link to={`/j/${other.code}`} className="inline-flex min-h-11 items-center font-bold text-action underline underline-offset-4">
                   Jar {other.code}
                 </Link>{' '}
-                opened {other.openedOn ? longDate(other.openedOn) : ''}
-                {other.useBy ? `, use by ${longDate(other.useBy)}` : ''}
+                opened {other.openedOn ? dateWords(other.openedOn) : ''}
+                {other.useBy ? `, use by ${dateWords(other.useBy)}` : ''}
               </li>
             ))}
           </ul>
@@ -94,7 +93,7 @@ function AdvicePanel({ jar, advice, onOpen, onCancel }: { jar: OpenableJar; advi
       )}
       {oldest && (
         <p>
-          Jar {oldest.code} was canned {longDate(oldest.cannedOn)}
+          Jar {oldest.code} was canned {dateWords(oldest.cannedOn)}
           {oldest.pastBestQuality ? ', and is past its best quality' : ''}: the oldest is the one to eat first
           {advice.olderSealed.length > 1 ? ` (${advice.olderSealed.length} older jars in all)` : ''}.
         </p>

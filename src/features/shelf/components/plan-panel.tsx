@@ -1,15 +1,15 @@
 import type { Method, ProcessingPlan } from '@shared/domain';
-import { METHOD_NAMES } from '@shared/shelf-words';
+import { altitudeWords, BEFORE_YOU_START, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
-import { feet } from '../format';
 
-/** The processing plan with its cautions: the canning numbers are never shown without them. */
+/** The processing plan with its cautions first: the canning numbers are never shown without them, nor before them. */
 export function PlanPanel({ plan, method, altitudeFt }: { plan: ProcessingPlan; method: Method; altitudeFt: number }) {
   return (
     <section aria-labelledby="plan-heading" aria-live="polite" className="flex flex-col gap-3">
       <h2 id="plan-heading" className="text-xl">
-        Processing plan at {feet(altitudeFt)}
+        Processing plan at {altitudeWords(altitudeFt)}
       </h2>
+      <Cautions cautions={plan.cautions} />
       {plan.allowed ? (
         <Notice tone="action" title={headline(plan, method)}>
           <p>{METHOD_NAMES[method]}.{plan.altitudeAddMinutes ? ` Includes ${plan.altitudeAddMinutes} minutes added for your altitude.` : ''}</p>
@@ -33,20 +33,19 @@ export function PlanPanel({ plan, method, altitudeFt }: { plan: ProcessingPlan; 
           </ol>
         </div>
       )}
-      <Cautions cautions={plan.cautions} />
     </section>
   );
 }
 
 function headline(plan: ProcessingPlan, method: Method): string {
-  if (plan.pressurePsi !== null) return `Process ${plan.minutes} minutes at ${plan.pressurePsi} pounds pressure`;
-  return `Process ${plan.minutes} minutes${method === 'atmospheric-steam' ? ' in full steam' : ' at a full rolling boil'}`;
+  if (plan.pressurePsi !== null) return `Process ${minutesWords(plan.minutes!)} at ${pressureWords(plan.pressurePsi)}`;
+  return `Process ${minutesWords(plan.minutes!)}${method === 'atmospheric-steam' ? ' in full steam' : ' at a full rolling boil'}`;
 }
 
 export function Cautions({ cautions }: { cautions: string[] }) {
   return (
     <div className="rounded-card border border-line bg-sunken/60 px-4 py-3">
-      <h3 className="font-bold">Before you start</h3>
+      <h3 className="font-bold">{BEFORE_YOU_START}</h3>
       <ul className="list-disc pl-5 text-[0.95rem] text-ink-muted">
         {cautions.map((caution) => (
           <li key={caution}>{caution}</li>

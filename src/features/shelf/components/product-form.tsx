@@ -2,15 +2,14 @@ import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { defaultUseWithinDays, JAR_SIZES, PRODUCT_KINDS, type JarSize, type ProductKind } from '@shared/domain';
 import type { ProductView } from '@shared/schemas/products';
-import { PRODUCT_COLOURS, PRODUCT_KIND_NAMES, type ProductColour } from '@shared/shelf-words';
+import { HEAT_LEVELS, heatWords, jarSizeWords, PRODUCT_COLOUR_NAMES, PRODUCT_COLOURS, PRODUCT_KIND_NAMES, type ProductColour, USE_WITHIN_DEFAULT_HINT } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSaveProduct } from '../api/save-product';
-import { heatWords, jarSizeName } from '../format';
 import { numberFrom } from '../number-from';
-import { PRODUCT_COLOUR_NAMES, ColourDot } from './colour-dot';
+import { ColourDot } from './colour-dot';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
@@ -64,9 +63,9 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         ))}
       </SelectField>
       <SelectField label="Heat" value={form.heat} onChange={(e) => setForm({ ...form, heat: e.target.value })} error={error?.fields.heat}>
-        {[0, 1, 2, 3, 4, 5].map((heat) => (
+        {HEAT_LEVELS.map((heat) => (
           <option key={heat} value={heat}>
-            {heat}: {heatWords(heat)}
+            {heatWords(heat, true)}
           </option>
         ))}
       </SelectField>
@@ -78,12 +77,12 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         placeholder={`${defaultUseWithinDays(form.kind)} (default)`}
         onChange={(e) => setForm({ ...form, useWithinDays: e.target.value })}
         error={error?.fields.useWithinDays}
-        hint={`Leave empty for the default for ${PRODUCT_KIND_NAMES[form.kind].toLowerCase()}: ${defaultUseWithinDays(form.kind)} days. A default from memory, not a published figure; the tested recipe's advice wins.`}
+        hint={`Leave empty for the default for ${PRODUCT_KIND_NAMES[form.kind].toLowerCase()}: ${defaultUseWithinDays(form.kind)} days. ${USE_WITHIN_DEFAULT_HINT}`}
       />
       <SelectField label="Usual jar size" value={form.jarSize} onChange={(e) => setForm({ ...form, jarSize: e.target.value as JarSize })}>
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
-            {jarSizeName(size)}
+            {jarSizeWords(size)}
           </option>
         ))}
       </SelectField>
@@ -99,7 +98,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         </div>
       </fieldset>
       <fieldset className="sm:col-span-2">
-        <legend className="font-bold">Colour on the shelf</legend>
+        <legend className="font-bold">Color on the shelf</legend>
         <div className="mt-1 flex flex-wrap gap-2">
           {PRODUCT_COLOURS.map((colour) => (
             <label key={colour} className="flex min-h-11 items-center gap-2 rounded-lg border border-line bg-surface px-3">
@@ -110,7 +109,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
           ))}
         </div>
       </fieldset>
-      <CheckboxField label="A household favourite" hint="Favourites get restock suggestions before they run out." checked={form.favourite} onChange={(e) => setForm({ ...form, favourite: e.target.checked })} />
+      <CheckboxField label="A household favorite" hint="Favorites get restock suggestions before they run out." checked={form.favourite} onChange={(e) => setForm({ ...form, favourite: e.target.checked })} />
       <div className="sm:col-span-2">
         <TextAreaField label="Notes" value={form.notes} onChange={(e) => setForm({ ...form, notes: e.target.value })} error={error?.fields.notes} />
       </div>

@@ -1,5 +1,5 @@
 import type { JarChange, JarView } from '@shared/schemas/batches';
-import { shortDay } from '@shared/day-words';
+import { dateWords } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { usePutBackJar, whereJarIs } from '../api/undo-jar-change';
@@ -12,7 +12,7 @@ export function PutBackJar({ hid, jar, lastChange, canCook }: { hid: string; jar
   if (putBack.isSuccess) return <Notice tone="action" role="status" title={`Jar ${putBack.data.jar.code} is ${whereJarIs(putBack.data.jar)}.`} />;
   if (jar.state !== 'finished' && jar.state !== 'discarded') return null;
   const undoable = lastChange && lastChange.kind === jar.state;
-  const when = lastChange ? `${WORDS[lastChange.kind] ?? lastChange.kind} ${shortDay(lastChange.happenedOn)}${lastChange.who ? ` by ${lastChange.who}` : ''}.` : '';
+  const when = lastChange ? `${WORDS[lastChange.kind] ?? lastChange.kind} ${dateWords(lastChange.happenedOn)}${lastChange.who ? ` by ${lastChange.who}` : ''}.` : '';
   return (
     <div className="flex flex-col gap-2 rounded-card border border-line bg-sunken/50 p-3">
       <p>

@@ -1,9 +1,9 @@
 import { formatKitchenAmount, JAR_SIZES } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { METHOD_NAMES } from '@shared/shelf-words';
+import { headspaceWords, jarSizeWords, METHOD_NAMES, minutesWords } from '@shared/words';
+import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { AltitudeGate } from '@/features/households';
-import { jarSizeName } from '../format';
 import { ScalingTool } from './scaling-tool';
 
 export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: RecipeView; altitudeFt: number }) {
@@ -13,7 +13,7 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
           <dt className="text-ink-muted">Makes</dt>
           <dd>
-            {recipe.yieldJars} {jarSizeName(recipe.yieldJarSize)} jars
+            {recipe.yieldJars} {jarSizeWords(recipe.yieldJarSize)} jars
           </dd>
           <dt className="text-ink-muted">Canner</dt>
           <dd>{METHOD_NAMES[recipe.method]}</dd>
@@ -23,7 +23,7 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
             {recipe.acidPercent !== null ? `; vinegar or juice of ${recipe.acidPercent}% acidity` : ''}
           </dd>
           <dt className="text-ink-muted">Headspace</dt>
-          <dd>{recipe.headspaceInches} inch</dd>
+          <dd>{headspaceWords(recipe.headspaceInches)}</dd>
           <dt className="text-ink-muted">Source</dt>
           <dd>{recipe.source || 'not given'}</dd>
         </dl>
@@ -32,10 +32,11 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
           <ul className="tabular flex flex-wrap gap-3">
             {JAR_SIZES.filter((size) => recipe.baseMinutes[size] !== undefined).map((size) => (
               <li key={size} className="rounded-lg bg-sunken px-3 py-1">
-                {jarSizeName(size)}: <b>{recipe.baseMinutes[size]} min</b>
+                {jarSizeWords(size)}: <b>{minutesWords(recipe.baseMinutes[size]!)}</b>
               </li>
             ))}
           </ul>
+          <CautionLine about="canning" />
         </div>
         <div>
           <h2 className="text-xl">Ingredients</h2>

@@ -3,13 +3,12 @@ import { useNavigate } from 'react-router-dom';
 import { defaultHeadspaceInches, INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, PROCESSING_METHODS, type IngredientRole, type IngredientUnit, type JarSize, type Method } from '@shared/domain';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { METHOD_NAMES } from '@shared/shelf-words';
+import { jarSizeWords, METHOD_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSaveRecipe } from '../api/save-recipe';
-import { jarSizeName } from '../format';
 import { numberFrom } from '../number-from';
 
 interface IngredientDraft {
@@ -84,7 +83,7 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
       <SelectField label="Jar size of the yield" value={form.yieldJarSize} onChange={(e) => setForm({ ...form, yieldJarSize: e.target.value as JarSize })}>
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
-            {jarSizeName(size)}
+            {jarSizeWords(size)}
           </option>
         ))}
       </SelectField>
@@ -112,7 +111,7 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
         {error?.fields.baseMinutes && <p className="text-sm font-bold text-past" role="alert">{error.fields.baseMinutes}</p>}
         <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-4">
           {JAR_SIZES.map((size) => (
-            <TextField key={size} label={jarSizeName(size)} inputMode="numeric" value={form.baseMinutes[size]} onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })} />
+            <TextField key={size} label={jarSizeWords(size)} inputMode="numeric" value={form.baseMinutes[size]} onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })} />
           ))}
         </div>
       </fieldset>

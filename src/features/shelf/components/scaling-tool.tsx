@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { recipeProcessingPlan } from '@shared/processing-plan';
-import { formatKitchenAmount, JAR_SIZES, SAFETY_CAUTIONS, scaleRecipe, type JarSize } from '@shared/domain';
+import { formatKitchenAmount, JAR_SIZES, scaleRecipe, type JarSize } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
+import { altitudeWords, jarSizeWords, minutesWords, pressureWords } from '@shared/words';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
-import { jarSizeName } from '../format';
 import { numberFrom } from '../number-from';
 import { Cautions } from './plan-panel';
 
@@ -28,7 +28,7 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
         <SelectField label="Jar size" value={jarSize} onChange={(e) => setJarSize(e.target.value as JarSize)}>
           {JAR_SIZES.map((size) => (
             <option key={size} value={size}>
-              {jarSizeName(size)}
+              {jarSizeWords(size)}
             </option>
           ))}
         </SelectField>
@@ -60,8 +60,9 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
           ))}
         </>
       )}
+      <Cautions cautions={plan.cautions} />
       {plan.allowed ? (
-        <Notice tone="action" title={`${jarSizeName(jarSize)} jars: ${plan.pressurePsi !== null ? `${plan.minutes} minutes at ${plan.pressurePsi} lb` : `${plan.minutes} minutes`} at ${altitudeFt.toLocaleString('en-US')} ft`}>
+        <Notice tone="action" title={`${jarSizeWords(jarSize)} jars: ${minutesWords(plan.minutes!)}${plan.pressurePsi !== null ? ` at ${pressureWords(plan.pressurePsi)}` : ''} at ${altitudeWords(altitudeFt)}`}>
           {valid && (
             <Link to={`/h/${hid}/batches/new?productId=${recipe.productId}&recipeId=${recipe.id}&jars=${jars}&jarSize=${jarSize}`} className="font-bold text-action underline">
               Record this batch
@@ -73,7 +74,6 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
           {plan.reasons.join(' ')}
         </Notice>
       )}
-      <Cautions cautions={[...SAFETY_CAUTIONS]} />
     </section>
   );
 }

@@ -1,7 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { PRODUCT_KIND_NAMES } from '@shared/shelf-words';
-import { jarSizeName, longDate } from '../format';
+import { DATE_NAMES, dateWords, heatWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
@@ -21,14 +20,14 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
                   {group.product.name}
                 </span>
                 {group.product.favourite && (
-                  <span className="text-soon" title="A household favourite" aria-label="favourite">
+                  <span className="text-soon" title="A household favorite" aria-label="favorite">
                     ★
                   </span>
                 )}
               </h2>
               <p className="text-sm text-ink-muted">
                 {PRODUCT_KIND_NAMES[group.product.kind]}
-                {group.product.heat > 0 ? ` · heat ${group.product.heat} of 5` : ''}
+                {group.product.heat > 0 ? ` · ${heatWords(group.product.heat)}` : ''}
               </p>
             </div>
             <p className="text-right">
@@ -38,7 +37,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
           </div>
           {group.oldestBestBy ? (
             <p className="flex flex-wrap items-center gap-2 text-[0.95rem]">
-              <span className="tabular">Oldest best by {longDate(group.oldestBestBy)}</span>
+              <span className="tabular">{DATE_NAMES.oldestBestQuality} {dateWords(group.oldestBestBy)}</span>
               {group.pastBest > 0 && <PastBestBadge bestBy={group.oldestBestBy} />}
             </p>
           ) : (
@@ -51,7 +50,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
                 <li key={row.batchId}>
                   <Link to={`/h/${hid}/batches/${row.batchId}`} className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken">
                     <span className="tabular">
-                      {longDate(row.cannedOn)} · {jarSizeName(row.jarSize)}
+                      {dateWords(row.cannedOn)} · {jarSizeWords(row.jarSize)}
                     </span>
                     <span className="tabular font-bold">{row.sealed}</span>
                   </Link>

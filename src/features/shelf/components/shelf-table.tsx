@@ -1,10 +1,9 @@
 import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { PRODUCT_KIND_NAMES } from '@shared/shelf-words';
+import { DATE_NAMES, dateWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
 import type { ProductKind } from '@shared/domain';
 import { CheckboxField, SelectField } from '@/components/ui/field';
-import { jarSizeName, longDate } from '../format';
 import type { ShelfBatchRow } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
@@ -28,14 +27,14 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
       ),
     }),
     column.accessor('productKind', { header: 'Kind', cell: (info) => PRODUCT_KIND_NAMES[info.getValue() as ProductKind], filterFn: 'equals' }),
-    column.accessor('cannedOn', { header: 'Canned', cell: (info) => <span className="tabular whitespace-nowrap">{longDate(info.getValue())}</span> }),
-    column.accessor('jarSize', { header: 'Jar size', cell: (info) => <span className="whitespace-nowrap">{jarSizeName(info.getValue())}</span> }),
+    column.accessor('cannedOn', { header: 'Canned', cell: (info) => <span className="tabular whitespace-nowrap">{dateWords(info.getValue())}</span> }),
+    column.accessor('jarSize', { header: 'Jar size', cell: (info) => <span className="whitespace-nowrap">{jarSizeWords(info.getValue())}</span> }),
     column.accessor('sealed', { header: 'Sealed', cell: (info) => <span className="tabular font-bold">{info.getValue()}</span> }),
     column.accessor('bestBy', {
-      header: 'Best quality until',
+      header: DATE_NAMES.bestQuality,
       cell: (info) => (
         <span className="flex flex-wrap items-center gap-2">
-          <span className="tabular">{longDate(info.getValue())}</span>
+          <span className="tabular">{dateWords(info.getValue())}</span>
           {info.row.original.pastBestQuality && <PastBestBadge bestBy={info.getValue()} />}
         </span>
       ),

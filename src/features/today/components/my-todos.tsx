@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { TodayTodo } from '@shared/schemas/today';
-import { shortDay } from '@shared/day-words';
+import { dateWords } from '@shared/words';
 import { useTickTodo } from '@/features/todos';
 
 /** The signed-in person's open to-dos, tickable right here. */
@@ -22,7 +22,7 @@ export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
           </label>
           <Link to={`/h/${hid}/todo${todo.kind === 'restock' ? `?open=${todo.id}` : ''}`} className="flex min-h-11 flex-1 flex-col justify-center hover:underline">
             <span>{todo.title}</span>
-            {todo.dueOn && <span className="text-sm text-ink-muted">by {shortDay(todo.dueOn)}</span>}
+            {todo.dueOn && <span className="text-sm text-ink-muted">by {dateWords(todo.dueOn)}</span>}
           </Link>
         </li>
       ))}

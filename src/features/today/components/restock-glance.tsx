@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import { JAR_SIZE_NAMES } from '@shared/words';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
 
 /** The favourites that need a batch; each opens its place on the Restock screen. */

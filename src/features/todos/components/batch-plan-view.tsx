@@ -1,27 +1,16 @@
 import { Link } from 'react-router-dom';
-import type { Method } from '@shared/domain';
-import { count, shortDay } from '@shared/day-words';
-import { JAR_SIZE_NAMES } from '@shared/jar-size-names';
+import { altitudeWords, BEFORE_YOU_START, count, dateWords, headspaceWords, inCanner, JAR_SIZE_NAMES, minutesWords, pressureWords } from '@shared/words';
 import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
 import { Notice } from '@/components/ui/notice';
 
-const METHOD_NAMES: Record<Method, string> = {
-  'boiling-water': 'boiling-water canner',
-  'atmospheric-steam': 'atmospheric steam canner',
-  'pressure-dial': 'pressure canner with a dial gauge',
-  'pressure-weighted': 'pressure canner with a weighted gauge',
-};
-
-const HEADSPACE_NAMES: Record<string, string> = { '0.125': '1/8', '0.25': '1/4', '0.5': '1/2', '0.75': '3/4', '1': '1' };
-
 function processingWords(plan: BatchPlan): string {
   const { processing } = plan;
-  const altitude = `${plan.altitudeFt.toLocaleString('en-US')} ft`;
+  const altitude = altitudeWords(plan.altitudeFt);
   if (processing.pressurePsi !== null) {
-    return `${processing.minutes} minutes at ${processing.pressurePsi} psi in a ${METHOD_NAMES[plan.method]}, for ${altitude}.`;
+    return `${minutesWords(processing.minutes!)} at ${pressureWords(processing.pressurePsi)} ${inCanner(plan.method)}, for ${altitude}.`;
   }
   const added = processing.altitudeAddMinutes ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-1,000 ft plus ${processing.altitudeAddMinutes} for the altitude)` : '';
-  return `${processing.minutes} minutes in a ${METHOD_NAMES[plan.method]} at ${altitude}${added}.`;
+  return `${minutesWords(processing.minutes!)} ${inCanner(plan.method)} at ${altitude}${added}.`;
 }
 
 function ShoppingList({ title, items }: { title: string; items: ShoppingItem[] }) {
@@ -45,12 +34,12 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
   return (
     <div className="flex flex-col gap-5">
       <div>
-        <p className="font-bold">Make it by {shortDay(plan.targetOn)}</p>
+        <p className="font-bold">Make it by {dateWords(plan.targetOn)}</p>
         <p className="text-ink-muted">{plan.targetWhy}</p>
       </div>
 
       {plan.changes && plan.changes.length > 0 && (
-        <Notice tone="soon" title={`Updated since it was planned on ${shortDay(plan.plannedOn)}`} role="status">
+        <Notice tone="soon" title={`Updated since it was planned on ${dateWords(plan.plannedOn)}`} role="status">
           <ul className="list-disc pl-5">
             {plan.changes.map((change) => (
               <li key={change}>{change}</li>
@@ -95,6 +84,14 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
         ))}
       </section>
 
+      <Notice tone="info" title={BEFORE_YOU_START}>
+        <ul className="list-disc pl-5">
+          {plan.processing.cautions.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
+        </ul>
+      </Notice>
+
       <section aria-labelledby="plan-processing">
         <h3 id="plan-processing" className="mb-1 text-lg">
           Processing
@@ -110,7 +107,7 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
             </ul>
           </Notice>
         )}
-        <p>Headspace: {HEADSPACE_NAMES[String(plan.headspaceInches)] ?? plan.headspaceInches} inch.</p>
+        <p>Headspace: {headspaceWords(plan.headspaceInches)}.</p>
         <h4 className="mt-2 font-bold">After processing</h4>
         <ol className="list-decimal pl-5">
           {plan.processing.afterProcessing.map((step) => (
@@ -118,14 +115,6 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
           ))}
         </ol>
       </section>
-
-      <Notice tone="info" title="Before you start">
-        <ul className="list-disc pl-5">
-          {plan.processing.cautions.map((caution) => (
-            <li key={caution}>{caution}</li>
-          ))}
-        </ul>
-      </Notice>
 
       {canRecord && plan.processing.allowed && (
         <Link to={recordHref} className="inline-flex min-h-11 items-center justify-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">

@@ -1,7 +1,7 @@
 import { useSortable } from '@dnd-kit/sortable';
 import { CSS } from '@dnd-kit/utilities';
 import type { TodoView } from '@shared/schemas/todos';
-import { shortDay } from '@shared/day-words';
+import { dateWords } from '@shared/words';
 
 interface TodoRowProps {
   todo: TodoView;
@@ -42,7 +42,7 @@ export function TodoRow({ todo, canMove, today, onTick, onOpen }: TodoRowProps) 
         <span className={`font-bold ${todo.done ? 'text-ink-muted line-through' : ''}`}>{todo.title}</span>
         <span className="flex flex-wrap gap-x-3 text-sm text-ink-muted">
           {todo.kind === 'restock' && <span className="font-bold text-info">Batch plan</span>}
-          {todo.dueOn && <span className={overdue ? 'font-bold text-soon' : ''}>{overdue ? 'was due' : 'by'} {shortDay(todo.dueOn)}</span>}
+          {todo.dueOn && <span className={overdue ? 'font-bold text-soon' : ''}>{overdue ? 'was due' : 'by'} {dateWords(todo.dueOn)}</span>}
           {todo.assigneeName && <span>{todo.assigneeName}</span>}
           {todo.notes && <span className="truncate">{todo.notes}</span>}
         </span>

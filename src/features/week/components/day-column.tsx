@@ -1,4 +1,4 @@
-import { format, parseISO } from 'date-fns';
+import { dateWords, monthDayWords, weekdayWords } from '@shared/words';
 import { SLOTS, type WeekDay } from '@shared/schemas/week';
 import { useBoard } from '../board-context';
 import { DayNotes } from './day-notes';
@@ -7,7 +7,7 @@ import { SlotList } from './slot-list';
 export function DayColumn({ day }: { day: WeekDay }) {
   const board = useBoard();
   const isToday = day.date === board.week.today;
-  const label = format(parseISO(day.date), 'EEEE d MMMM');
+  const label = dateWords(day.date);
   const clear = () => {
     if (window.confirm(`Clear every meal planned for ${label}?`)) board.clearDay.mutate(day.date);
   };
@@ -15,9 +15,9 @@ export function DayColumn({ day }: { day: WeekDay }) {
     <section aria-label={label} className={`flex min-w-0 flex-col gap-1.5 rounded-card border p-1 ${isToday ? 'border-action bg-action-soft/40' : 'border-line bg-surface/60'}`}>
       <header className="flex items-start justify-between gap-1">
         <h2 className="text-base leading-tight">
-          <span className="block">{format(parseISO(day.date), 'EEEE')}</span>
+          <span className="block">{weekdayWords(day.date)}</span>
           <span className="tabular text-sm font-normal text-ink-muted">
-            {format(parseISO(day.date), 'MMM d')}
+            {monthDayWords(day.date)}
             {isToday && <span className="ml-1 font-bold text-action">Today</span>}
           </span>
         </h2>

@@ -1,11 +1,11 @@
 import type { AllocationWarning } from '@shared/domain';
 import { jarCode, productName, useBoard } from '../board-context';
-import { formatTbsp } from './pairing-line';
+import { tbspWords } from '@shared/words';
 
 function warningText(warning: AllocationWarning, board: ReturnType<typeof useBoard>) {
   const name = productName(board.week, String(warning.productId));
-  if (warning.kind === 'short') return `Short of ${name}: ${formatTbsp(warning.tbsp)} not on the shelf.`;
-  return `Jar ${jarCode(board.week, warning.jarId)} of ${name} passes its use-by with ${formatTbsp(warning.tbsp)} left.`;
+  if (warning.kind === 'short') return `Not enough ${name} on the shelf: the plan needs ${tbspWords(warning.tbsp)} more than it holds.`;
+  return `Jar ${jarCode(board.week, warning.jarId)} of ${name} passes its use-by with ${tbspWords(warning.tbsp)} left.`;
 }
 
 /** A day's jar news from the allocation: jars to open (by product), and what to act on. */

@@ -1,4 +1,4 @@
-import { format, parseISO } from 'date-fns';
+import { weekdayWords } from '@shared/words';
 import type { WeekDay } from '@shared/schemas/week';
 
 /** On a phone the board shows one day; this picks it. */
@@ -15,9 +15,9 @@ export function DayPicker({ days, selected, today, onSelect }: { days: WeekDay[]
             day.date === selected ? 'border-action bg-action text-white' : day.date === today ? 'border-action bg-surface text-action' : 'border-line bg-surface text-ink'
           }`}
         >
-          <span aria-hidden="true">{format(parseISO(day.date), 'EEEEE')}</span>
-          <span className="sr-only">{format(parseISO(day.date), 'EEEE')}</span>
-          <span className="tabular text-xs font-normal">{format(parseISO(day.date), 'd')}</span>
+          <span aria-hidden="true">{weekdayWords(day.date, true)}</span>
+          <span className="sr-only">{weekdayWords(day.date)}</span>
+          <span className="tabular text-xs font-normal">{Number(day.date.slice(8))}</span>
           {day.entries.length > 0 && <span className="sr-only">, {day.entries.length} planned</span>}
         </button>
       ))}

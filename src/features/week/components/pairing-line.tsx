@@ -2,24 +2,23 @@ import type { PairingView, PlanEntryView } from '@shared/schemas/week';
 import { jarCode, productName, useBoard } from '../board-context';
 import { isPending } from '../week-edits';
 import { NumberCommit } from './number-commit';
+import { heatWords, tbspWords } from '@shared/words';
 
 /** Which jar a pairing draws from, or how much the shelf lacks. */
-function allocationLine(pairing: PairingView, entry: PlanEntryView, board: ReturnType<typeof useBoard>) {
+function allocationLine(pairing: PairingView, entry: PlanEntryView, board: ReturnType<typeof useBoard>): { text: string; lacking: boolean } {
   const { week } = board;
-  if (entry.date < week.today) return 'Past: no jar drawn';
-  if (isPending(pairing.id)) return 'Finding a jar…';
-  const draws = week.allocation.assignments.filter((a) => String(a.portionId) === pairing.id);
-  if (draws.length === 0) return 'Finding a jar…';
-  return draws
+  if (entry.date < week.today) return { text: 'This day is over; its jars are no longer counted', lacking: false };
+  const draws = isPending(pairing.id) ? [] : week.allocation.assignments.filter((a) => String(a.portionId) === pairing.id);
+  if (draws.length === 0) return { text: 'Finding a jar…', lacking: false };
+  const text = draws
     .map((a) => {
-      if (a.jarId === null) return `short ${formatTbsp(a.tbsp)}`;
+      if (a.jarId === null) return `${tbspWords(a.tbsp)} more than the shelf holds`;
       const opens = week.allocation.openings.some((o) => o.jarId === a.jarId && o.date === entry.date);
       return `${opens ? 'opens' : 'from'} jar ${jarCode(week, a.jarId)}`;
     })
     .join(', then ');
+  return { text, lacking: draws.some((a) => a.jarId === null) };
 }
-
-export const formatTbsp = (tbsp: number) => `${Math.round(tbsp * 10) / 10} tbsp`;
 
 export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: PlanEntryView }) {
   const board = useBoard();
@@ -31,7 +30,7 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
       <div className="flex items-start justify-between gap-1">
         <span className="min-w-0 font-bold">
           {name}
-          {product && product.heat > 0 && <span className="font-normal text-ink-muted"> · heat {product.heat}</span>}
+          {product && product.heat > 0 && <span className="font-normal text-ink-muted"> · {heatWords(product.heat)}</span>}
         </span>
         {board.canEdit && !isPending(pairing.id) && (
           <button
@@ -44,8 +43,8 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
           </button>
         )}
       </div>
-      <p className={`tabular ${line.includes('short') ? 'font-bold text-past' : 'text-info'}`} data-testid="allocation-line">
-        {line}
+      <p className={`tabular ${line.lacking ? 'font-bold text-past' : 'text-info'}`} data-testid="allocation-line">
+        {line.text}
       </p>
       <div className="flex items-center gap-1 text-ink-muted">
         {board.canEdit && !isPending(pairing.id) ? (

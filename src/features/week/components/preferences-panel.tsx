@@ -1,4 +1,5 @@
 import { DIET_LABELS, DIET_TAGS, type DietTag, type WeekMember } from '@shared/schemas/week';
+import { HEAT_LEVELS, heatWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { useUpdatePreferences } from '../api/update-preferences';
 
@@ -35,9 +36,9 @@ export function PreferencesPanel({ hid, members, myId, isKeeper }: { hid: string
                   disabled={!editable || update.isPending}
                   onChange={(e) => update.mutate({ userId: member.userId, patch: { heatTolerance: Number(e.target.value) } })}
                 >
-                  {[0, 1, 2, 3, 4, 5].map((heat) => (
+                  {HEAT_LEVELS.map((heat) => (
                     <option key={heat} value={heat}>
-                      {heat === 0 ? '0 (no heat)' : heat === 5 ? '5 (the hottest)' : heat}
+                      {heatWords(heat, true)}
                     </option>
                   ))}
                 </select>
