@@ -1,7 +1,7 @@
 // The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import { formatKitchenAmount, scaleRecipe, type JarSize, type RestockReason, type ScaledIngredient } from '../../../shared/domain';
-import { altitudeWords, dateWords, METHOD_NAMES } from '../../../shared/words';
+import { altitudeWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
 import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
@@ -63,7 +63,7 @@ function planFor({ household, product, recipe, today, jars, jarSize, reason, run
 export function composeBatchPlan(question: PlanQuestion): BatchPlan {
   const plan = planFor(question);
   if (!plan.processing.allowed) {
-    throw new AppError(422, 'not_allowed', `There is no tested process for this batch at ${question.household.altitudeFt.toLocaleString('en-US')} ft: ${plan.processing.reasons.join(' ')}`);
+    throw new AppError(422, 'not_allowed', `There is no tested process for this batch at ${altitudeWords(question.household.altitudeFt)}: ${plan.processing.reasons.join(' ')}`);
   }
   return plan;
 }
@@ -71,7 +71,7 @@ export function composeBatchPlan(question: PlanQuestion): BatchPlan {
 function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
   const { minutes, pressurePsi, allowed } = plan.processing;
   if (!allowed) return 'no tested process';
-  return pressurePsi !== null ? `${minutes} minutes at ${pressurePsi} psi` : `${minutes} minutes`;
+  return pressurePsi !== null ? `${minutesWords(minutes!)} at ${pressureWords(pressurePsi)}` : minutesWords(minutes!);
 }
 
 /** What differs between a plan as made and as worked out now, in words a cook reads on canning day. */

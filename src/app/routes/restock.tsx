@@ -35,7 +35,7 @@ export function RestockRoute() {
               Restock suggestions
             </h2>
             {restock.data.suggestions.length === 0 ? (
-              <EmptyState title="Nothing is running low">Mark your favourites and set a minimum below; Larderly watches the count for you.</EmptyState>
+              <EmptyState title="Nothing is running low">Mark your favorites and set a minimum below; Larderly watches the count for you.</EmptyState>
             ) : (
               <div className="grid gap-4 md:grid-cols-2">
                 {restock.data.suggestions.map((suggestion) => (

@@ -24,7 +24,7 @@ export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forec
         <svg viewBox="0 0 24 24" className="h-5 w-5" aria-hidden="true">
           <path d="M12 3l2.7 5.6 6.1.9-4.4 4.3 1 6.1L12 17l-5.4 2.9 1-6.1L3.2 9.5l6.1-.9z" className={forecast.favourite ? 'fill-soon-fill stroke-soon' : 'fill-none stroke-ink-muted'} strokeWidth="1.5" />
         </svg>
-        Favourite
+        Favorite
       </button>
       <label className="flex items-center gap-2">
         <span className="text-sm font-bold">At least</span>

@@ -4,7 +4,7 @@ import type { RestockSuggestionView } from '@shared/schemas/restock';
 
 /** The favourites that need a batch; each opens its place on the Restock screen. */
 export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: RestockSuggestionView[] }) {
-  if (suggestions.length === 0) return <p className="text-ink-muted">Every favourite is stocked past its minimum.</p>;
+  if (suggestions.length === 0) return <p className="text-ink-muted">Every favorite is stocked past its minimum.</p>;
   return (
     <ul className="flex flex-col gap-2">
       {suggestions.map((suggestion) => (
