@@ -1,6 +1,6 @@
 import type { ProposedMealView } from '@shared/schemas/week-proposal';
 import { weekday } from '../drag';
-import { formatTbsp } from './pairing-line';
+import { tbspWords } from '@shared/words';
 
 /** One proposed meal: where it goes, why, which jar each pairing draws from, and a swap for the next best. */
 export function ProposedMealRow({ meal, chosen, onChoose, onSwap, busy }: { meal: ProposedMealView; chosen: boolean; onChoose: (on: boolean) => void; onSwap: () => void; busy: boolean }) {
@@ -27,7 +27,7 @@ export function ProposedMealRow({ meal, chosen, onChoose, onSwap, busy }: { meal
         <ul className="tabular flex flex-col gap-0.5 text-xs text-info">
           {meal.pairings.map((p) => (
             <li key={p.productId}>
-              {p.name}: {p.jars.map((j) => `${formatTbsp(j.tbsp)} ${j.opens ? 'opens' : 'from'} jar ${j.code}`).join(', then ')}
+              {p.name}: {p.jars.map((j) => `${tbspWords(j.tbsp)} ${j.opens ? 'opens' : 'from'} jar ${j.code}`).join(', then ')}
             </li>
           ))}
         </ul>
