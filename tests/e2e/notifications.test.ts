@@ -101,7 +101,7 @@ describe('notifications on this device', () => {
     await screenshot(page, 'notifications-phone');
 
     await page.getByRole('button', { name: 'Send a test notification' }).click();
-    await page.getByText('Test notification sent.').waitFor();
+    await page.getByText(/^Test notification sent to your device\./).waitFor();
     const id = subscription.endpoint.split('/').pop();
     const push = await eventually(() => caughtPushes(standInsDir).find((p) => p.subscription === id));
     expect(push.vapidKey).toBe(publicKey);

@@ -16,7 +16,7 @@ describe('one-tap actions can be undone', () => {
     await page.goto(`${baseURL}/h/${hid}/fridge`);
     await page.getByRole('list', { name: 'Opened jars' }).waitFor();
     const [jar] = (await getJson(page, `/households/${hid}/fridge`)).jars;
-    await page.getByRole('button', { name: `Finished jar ${jar.code} of ${jar.productName}` }).tap();
+    await page.getByRole('button', { name: `Mark finished: jar ${jar.code} of ${jar.productName}` }).tap();
 
     const toast = page.getByTestId('undo-toast');
     await toast.getByText(`Finished jar ${jar.code} of ${jar.productName}. It has left the fridge.`).waitFor();
@@ -25,7 +25,7 @@ describe('one-tap actions can be undone', () => {
     await screenshot(page, 'undo-fridge-toast-phone');
     await toast.getByRole('button', { name: 'Undo' }).tap();
     await toast.getByText(`Jar ${jar.code} is back in the fridge.`).waitFor();
-    await page.getByRole('button', { name: `Finished jar ${jar.code} of ${jar.productName}` }).waitFor();
+    await page.getByRole('button', { name: `Mark finished: jar ${jar.code} of ${jar.productName}` }).waitFor();
     const fridge = await getJson(page, `/households/${hid}/fridge`);
     expect(fridge.jars.map((j: { jarId: string }) => j.jarId)).toContain(jar.jarId);
     await screenshot(page, 'undo-fridge-undone-phone');

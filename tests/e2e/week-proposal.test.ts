@@ -54,7 +54,7 @@ async function acceptTwoChutneyLunches(page: Page, name: string) {
     const weekday = meal.place.split(' ')[0];
     const picker = page.getByRole('navigation', { name: 'Day of the week' });
     if (await picker.isVisible()) await picker.getByRole('button', { name: new RegExp(`^${weekday}`) }).click();
-    const day = page.getByRole('region', { name: new RegExp(`^${weekday} `) });
+    const day = page.getByRole('region', { name: new RegExp(`^${weekday},`) });
     const line = day.locator(`article[data-entry="${meal.title}"] li[data-pairing="Green Tomato Chutney"] [data-testid="allocation-line"]`);
     await expect.poll(() => line.textContent(), { timeout: 30_000 }).toMatch(new RegExp(`(from|opens) jar ${meal.code}`));
     await line.scrollIntoViewIfNeeded();

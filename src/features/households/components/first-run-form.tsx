@@ -1,4 +1,4 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { PROCESSING_METHODS, type Method } from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
 import { METHOD_NAMES, WEEKDAY_NAMES } from '@shared/words';
@@ -25,6 +25,10 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
     weekStartsOn: String(household.weekStartsOn),
   });
   const error = update.error instanceof ApiError ? update.error : null;
+  // After the messages are drawn, not when the answer arrives: only then is the field marked invalid.
+  useEffect(() => {
+    if (error && Object.keys(error.fields).length) focusFirstError(form.current);
+  }, [error]);
   const set = (key: keyof typeof answers) => (event: { target: { value: string } }) => setAnswers({ ...answers, [key]: event.target.value });
 
   function submit(event: FormEvent) {
@@ -33,7 +37,7 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
     const capacity = answers.cannerCapacityJars.trim() === '' ? Number.NaN : Number(answers.cannerCapacityJars);
     update.mutate(
       { altitudeFt: altitude, timeZone: answers.timeZone, defaultMethod: answers.defaultMethod, cannerCapacityJars: capacity, weekStartsOn: Number(answers.weekStartsOn) },
-      { onSuccess: onConfirmed, onError: () => focusFirstError(form.current) },
+      { onSuccess: onConfirmed },
     );
   }
 

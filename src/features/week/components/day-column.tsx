@@ -1,4 +1,4 @@
-import { dateWords, monthDayWords, weekdayWords } from '@shared/words';
+import { monthDayWords, weekdayWords } from '@shared/words';
 import { SLOTS, type WeekDay } from '@shared/schemas/week';
 import { useBoard } from '../board-context';
 import { DayNotes } from './day-notes';
@@ -7,7 +7,8 @@ import { SlotList } from './slot-list';
 export function DayColumn({ day }: { day: WeekDay }) {
   const board = useBoard();
   const isToday = day.date === board.week.today;
-  const label = dateWords(day.date);
+  // The full weekday leads, so a screen reader (and a search by day) hears "Wednesday, Dec 9".
+  const label = `${weekdayWords(day.date)}, ${monthDayWords(day.date)}`;
   const clear = () => {
     if (window.confirm(`Clear every meal planned for ${label}?`)) board.clearDay.mutate(day.date);
   };
