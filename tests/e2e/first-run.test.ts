@@ -50,7 +50,9 @@ describe('first run: the questions the canning numbers depend on', () => {
     await page.getByLabel('First day of your week').selectOption({ label: 'Sunday' });
     await page.getByRole('button', { name: 'Confirm and continue' }).click();
     await page.waitForURL(new RegExp(`/h/${hid}/batches/new$`));
-    await page.getByLabel('What did you make?').waitFor();
+    // The altitude question is answered; a household with no product yet is sent on to add its first.
+    await page.getByText('Start with your first product').waitFor();
+    expect(await page.getByText('First, your altitude').count()).toBe(0);
 
     const household = (await (await page.request.get(`${baseURL}/api/households/${hid}`)).json()).household;
     expect(household).toMatchObject({ altitudeFt: 5200, altitudeConfirmed: true, timeZone: 'UTC', defaultMethod: 'atmospheric-steam', cannerCapacityJars: 8, weekStartsOn: 0 });
