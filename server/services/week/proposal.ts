@@ -2,7 +2,6 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import {
   addDays,
-  defaultUseWithinDays,
   planWaste,
   proposeMeals,
   type AllocationJar,
@@ -19,6 +18,7 @@ import { dietConflictsOf } from './eater-flags';
 import { listMeals } from './meals';
 import { insertPlanEntry, requireMembers } from './plan-entries';
 import { lockDays } from './slot-locks';
+import { allocationJar } from './read-week';
 import { currentJarRows, entryRows, memberRows, productRows, recipeRows } from './week-rows';
 import { PlanEntry } from '../../db/models';
 
@@ -41,19 +41,7 @@ async function weekPlan(sequelize: Sequelize, household: Household, start: strin
   const [rows, products] = await Promise.all([entryRows(sequelize, household.id, addDays(earliest, -VARIETY_REACH), addDays(end, VARIETY_REACH)), productRows(sequelize, household.id)]);
   const jarRows = await currentJarRows(sequelize, household.id, products.map((p) => p.id));
   const productById = new Map(products.map((p) => [p.id, p]));
-  const jars: AllocationJar[] = jarRows.map((j) => {
-    const product = productById.get(j.product_id)!;
-    return {
-      id: j.id,
-      productId: j.product_id,
-      state: j.state,
-      capacityTbsp: Number(j.capacity_tbsp),
-      remainingTbsp: Number(j.remaining_tbsp),
-      bestBy: j.best_by,
-      openedOn: j.opened_on ?? undefined,
-      useWithinDays: product.use_within_days ?? defaultUseWithinDays(product.kind),
-    };
-  });
+  const jars: AllocationJar[] = jarRows.map((j) => allocationJar(j, productById));
   // Portions from today draw first, including any before this week's start.
   const portions: PlannedPortion[] = rows
     .filter((r) => r.pairing_id && r.product_id && r.date >= today && r.date <= end)

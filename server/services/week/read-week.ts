@@ -72,7 +72,7 @@ function portionsOf(entries: PlanEntryView[]): PlannedPortion[] {
   return entries.flatMap((e) => e.pairings.map((p) => ({ id: p.id, date: e.date, productId: p.productId, tbsp: p.tbspPerServing * e.servings })));
 }
 
-function allocationJar(jar: JarRow, productById: Map<string, ProductRow>): AllocationJar {
+export function allocationJar(jar: JarRow, productById: Map<string, ProductRow>): AllocationJar {
   const product = productById.get(jar.product_id)!;
   return {
     id: jar.id,
