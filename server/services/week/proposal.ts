@@ -8,7 +8,7 @@ import {
   type PlannedPortion,
   type PlanWaste,
 } from '../../../shared/domain';
-import { proposalReasonWords } from '../../../shared/proposal-words';
+import { proposalReasonWords } from '../../../shared/words/proposal';
 import { SLOTS, weekDates, type Slot } from '../../../shared/schemas/week';
 import type { ProposalAccept, ProposalRequest, ProposalView, WasteFigure } from '../../../shared/schemas/week-proposal';
 import type { Household } from '../../db/models';

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
+import { CautionLine } from '@/components/ui/caution-line';
 import { useCloseJar } from '@/features/fridge/api/close-jar';
 import { useFridge } from '@/features/fridge/api/get-fridge';
 import { FridgeJarCard } from '@/features/fridge/components/fridge-jar-card';
@@ -14,7 +15,10 @@ export function FridgeRoute() {
 
   return (
     <>
-      <PageHeader title="Fridge" lead="Opened jars, soonest use-by first: how long each has been open and what the week's plan leaves in it." />
+      <PageHeader
+        title="Fridge"
+        lead="Opened jars, soonest use-by first: how long each has been open and what the week's plan leaves in it."
+      />
       {fridge.error && (
         <Notice tone="past" role="alert" title="The fridge could not load.">
           {fridge.error.message}
@@ -32,7 +36,10 @@ export function FridgeRoute() {
         <EmptyState
           title="No jars are open"
           action={
-            <Link to={`/h/${hid}/shelf`} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white">
+            <Link
+              to={`/h/${hid}/shelf`}
+              className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white"
+            >
               Go to the shelf
             </Link>
           }
@@ -43,9 +50,20 @@ export function FridgeRoute() {
       {jars.length > 0 && (
         <ul className="grid items-start gap-3 md:grid-cols-2 xl:grid-cols-3" aria-label="Opened jars">
           {jars.map((jar) => (
-            <FridgeJarCard key={jar.jarId} jar={jar} unsealedAdvice={fridge.data?.unsealedAdvice ?? ''} busy={closeJar.isPending} onClose={(action) => closeJar.mutate({ jarId: jar.jarId, action })} />
+            <FridgeJarCard
+              key={jar.jarId}
+              jar={jar}
+              unsealedAdvice={fridge.data?.unsealedAdvice ?? ''}
+              busy={closeJar.isPending}
+              onClose={(action) => closeJar.mutate({ jarId: jar.jarId, action })}
+            />
           ))}
         </ul>
+      )}
+      {jars.length > 0 && (
+        <div className="mt-4">
+          <CautionLine about="use-by" />
+        </div>
       )}
     </>
   );

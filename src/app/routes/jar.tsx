@@ -4,6 +4,7 @@ import { UNSEALED_JAR_ADVICE } from '@shared/domain';
 import { Brand } from '@/components/ui/brand';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';
+import { CautionLine } from '@/components/ui/caution-line';
 import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
@@ -22,7 +23,10 @@ export function JarRoute() {
           <Brand />
         </Link>
         {found.data && (
-          <Link to={`/h/${found.data.householdId}/shelf`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+          <Link
+            to={`/h/${found.data.householdId}/shelf`}
+            className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+          >
             {found.data.householdName}’s shelf
           </Link>
         )}
@@ -49,10 +53,19 @@ export function JarRoute() {
           <p className="text-lg">
             <JarDates jar={jar} />
           </p>
+          {jar.state === 'opened' && <CautionLine about="use-by" />}
           {jar.unsealed && jar.state === 'opened' && <Notice tone="soon">{UNSEALED_JAR_ADVICE}</Notice>}
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
-          <PutBackJar hid={found.data.householdId} jar={jar} lastChange={found.data.lastChange} canCook={can(found.data.role, 'cook')} />
-          <Link to={`/h/${found.data.householdId}/batches/${jar.batchId}`} className="font-bold text-action underline underline-offset-4">
+          <PutBackJar
+            hid={found.data.householdId}
+            jar={jar}
+            lastChange={found.data.lastChange}
+            canCook={can(found.data.role, 'cook')}
+          />
+          <Link
+            to={`/h/${found.data.householdId}/batches/${jar.batchId}`}
+            className="font-bold text-action underline underline-offset-4"
+          >
             The whole batch
           </Link>
         </Card>

@@ -58,7 +58,7 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
             <li>Your local extension service or county office can tell you the altitude of your address.</li>
             <li>A topographic map, or a map app with a terrain or elevation layer, shows it for the spot you live.</li>
             <li>A phone’s GPS altitude can be off by a hundred feet or more; prefer a map.</li>
-            <li>In metres? Multiply by 3.28 to get feet (1 m = 3.2808 ft).</li>
+            <li>In meters? Multiply by 3.28 to get feet (1 m = 3.2808 ft).</li>
             <li>Near the edge of a range in the altitude tables, use the higher altitude (common practice).</li>
           </ul>
         </details>

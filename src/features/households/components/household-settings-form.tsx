@@ -39,7 +39,7 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
         />
         <SelectField label="Units" value={form.unitSystem} onChange={(e) => setForm({ ...form, unitSystem: e.target.value as HouseholdView['unitSystem'] })}>
           <option value="us">US customary (cups, pints, quarts)</option>
-          <option value="metric">Metric (millilitres, litres)</option>
+          <option value="metric">Metric (milliliters, liters)</option>
         </SelectField>
         <TimeZoneField value={form.timeZone} onChange={(e) => setForm({ ...form, timeZone: e.target.value })} error={error?.fields.timeZone} />
         <TextField

@@ -61,7 +61,7 @@ export function NotificationSettingsPanel() {
           </SelectField>
         </div>
         <Toggle label="E-mail reminders" hint="The same reminders by e-mail, for when push is off." checked={s.emailReminders} onChange={(on) => change({ emailReminders: on })} />
-        <Toggle label="Weekly digest by e-mail" hint="On the first day of the week: the plan, jars to open and what expires." checked={s.weeklyDigest} onChange={(on) => change({ weeklyDigest: on })} />
+        <Toggle label="Weekly digest by e-mail" hint="On the first day of the week: the plan, jars to open and the opened jars that reach their use-by." checked={s.weeklyDigest} onChange={(on) => change({ weeklyDigest: on })} />
         {update.error && (
           <Notice tone="past" role="alert">
             {update.error.message}

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { DEFAULT_VARIETY_DAYS } from '@shared/domain';
-import { wasteWords } from '@shared/proposal-words';
+import { wasteWords } from '@shared/words/proposal';
 import { SLOTS, type WeekView } from '@shared/schemas/week';
 import type { ProposalScope, ProposalView, ProposedMealView } from '@shared/schemas/week-proposal';
 import { Button } from '@/components/ui/button';

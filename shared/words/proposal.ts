@@ -1,6 +1,7 @@
 // The words of the week board's meal proposal: why each meal, and the waste it saves.
-import { addDays, daysBetween, type ProposalReason } from './domain';
-import { count, dateWords, weekdayWords } from './words';
+import { addDays, daysBetween, type ProposalReason } from '../domain';
+import { dateWords, weekdayWords } from './dates';
+import { count } from './units';
 
 /** "Monday" for a day within a week of the meal, else "Thu, Dec 10". */
 function dayWords(isoDate: string, mealDate: string): string {
@@ -8,7 +9,11 @@ function dayWords(isoDate: string, mealDate: string): string {
 }
 
 /** "Uses the Plum Ketchup opened on Monday before Thursday." A jar turns the day after its use-by. */
-export function proposalReasonWords(reason: ProposalReason, productName: (productId: string) => string, mealDate: string): string {
+export function proposalReasonWords(
+  reason: ProposalReason,
+  productName: (productId: string) => string,
+  mealDate: string,
+): string {
   switch (reason.kind) {
     case 'opened-jar':
       return `Uses the ${productName(String(reason.productId))} opened on ${dayWords(reason.openedOn, mealDate)} before ${dayWords(addDays(reason.useBy, 1), mealDate)}.`;
