@@ -53,6 +53,16 @@ module.exports = {
       to: { path: '^(server|dev|scripts|tests)/' },
     },
     {
+      name: 'client-ships-no-zod',
+      severity: 'error',
+      comment:
+        'The client imports shared/schemas for types only (`import type`), and never zod itself, so zod stays out of the ' +
+        'browser bundle; the server validates every request. Plain values both sides need belong in shared/choices.ts, ' +
+        'shared/domain or shared/words.',
+      from: { path: '^src/' },
+      to: { path: ['^shared/schemas/', 'node_modules/zod/'], dependencyTypesNot: ['type-only'] },
+    },
+    {
       name: 'server-imports-no-client',
       severity: 'error',
       comment: 'The server never imports the React client; what both need lives in shared/.',

@@ -83,3 +83,18 @@ export function yearOf(isoDate: string): number {
 export function lastDayOfMonth(year: number, month: number): string {
   return format({ year, month, day: daysInMonth(year, month) });
 }
+
+/** 1970-01-01, day 0 of the calendar count, was a Thursday (4); 0 = Sunday. */
+export function dayOfWeek(isoDate: string): number {
+  return (((dayNumber(isoDate) + 4) % 7) + 7) % 7;
+}
+
+/** The first day of the week (the household's week start, 0 = Sunday) that holds `isoDate`. */
+export function weekStartOf(isoDate: string, weekStartsOn: number): string {
+  return addDays(isoDate, -((dayOfWeek(isoDate) - weekStartsOn + 7) % 7));
+}
+
+/** The seven dates of the week that starts on `start`. */
+export function weekDates(start: string): string[] {
+  return Array.from({ length: 7 }, (_, i) => addDays(start, i));
+}

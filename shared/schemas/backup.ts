@@ -9,7 +9,7 @@ import { SLOTS } from './week';
 /** A household's backup file: its shelf, week and to-dos, never people, sessions, keys or tokens. */
 export const BACKUP_FORMAT = 'larderly-household-backup';
 export const BACKUP_VERSION = 1;
-export const BACKUP_MAX_BYTES = 10 * 1024 * 1024;
+export { BACKUP_MAX_BYTES } from '../choices';
 
 const id = z.uuid({ error: 'An id in the file is not valid.' });
 const date = z.iso.date({ error: 'A date in the file is not written YYYY-MM-DD.' });

@@ -1,11 +1,11 @@
 import { z } from 'zod';
+import { TODO_FILTERS } from '../choices';
 import { JAR_SIZES, type IngredientRole, type IngredientUnit, type JarSize, type Method, type ProcessingPlan, type RestockReason, type ScaledRecipe } from '../domain';
 
 export const TODO_KINDS = ['plain', 'restock'] as const;
 export type TodoKind = (typeof TODO_KINDS)[number];
 
-export const TODO_FILTERS = ['open', 'mine', 'done', 'all'] as const;
-export type TodoFilter = (typeof TODO_FILTERS)[number];
+export { TODO_FILTERS, type TodoFilter } from '../choices';
 
 // A real calendar date (2026-02-30 is refused).
 const isoDate = z.iso.date({ error: 'Use a real date such as 2026-09-14.' });

@@ -1,13 +1,10 @@
 import { z } from 'zod';
-import { addDays, dayNumber, type WeekAllocation } from '../domain';
+import type { WeekAllocation } from '../domain';
 
-export const SLOTS = ['breakfast', 'lunch', 'dinner', 'snack'] as const;
-export type Slot = (typeof SLOTS)[number];
+import { DIET_TAGS, SLOTS, type DietTag, type Slot } from '../choices';
 
-/** Diets the planner can check against a recipe's ingredients. */
-export const DIET_TAGS = ['no-added-sugar', 'low-salt'] as const;
-export type DietTag = (typeof DIET_TAGS)[number];
-export const DIET_LABELS: Record<DietTag, string> = { 'no-added-sugar': 'No added sugar', 'low-salt': 'Low salt' };
+export { DIET_LABELS, DIET_TAGS, SLOTS, type DietTag, type Slot } from '../choices';
+export { dayOfWeek, weekDates, weekStartOf } from '../domain';
 
 const isoDate = z.iso.date({ error: 'Use a date written YYYY-MM-DD.' });
 const id = z.uuid({ error: 'That id is not valid.' });
@@ -163,16 +160,3 @@ export interface WeekView {
   members: WeekMember[];
 }
 
-/** 1970-01-01, day 0 of the calendar count, was a Thursday (4). */
-export function dayOfWeek(isoDate: string): number {
-  return (((dayNumber(isoDate) + 4) % 7) + 7) % 7;
-}
-
-/** The first day of the week (the household's week start, 0 = Sunday) that holds `isoDate`. */
-export function weekStartOf(isoDate: string, weekStartsOn: number): string {
-  return addDays(isoDate, -((dayOfWeek(isoDate) - weekStartsOn + 7) % 7));
-}
-
-export function weekDates(start: string): string[] {
-  return Array.from({ length: 7 }, (_, i) => addDays(start, i));
-}

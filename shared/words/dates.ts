@@ -1,25 +1,28 @@
 // The one way Larderly writes a calendar date, on screens, in e-mails, push messages and CSV help.
-import { format, parseISO } from 'date-fns';
+// date-fns's intlFormat hands the words to the platform's Intl (en-US), so no locale tables ship to the browser.
+import { intlFormat, parseISO } from 'date-fns';
+
+const US = { locale: 'en-US' };
 
 /** "Tue, Jun 9" for 2026-06-09; with the year ("Tue, Aug 31, 2027") when it is not `thisYear`. */
 export function dateWords(isoDate: string, thisYear = new Date().getFullYear()): string {
   const day = parseISO(isoDate);
-  return format(day, day.getFullYear() === thisYear ? 'EEE, MMM d' : 'EEE, MMM d, yyyy');
+  return intlFormat(day, { weekday: 'short', month: 'short', day: 'numeric', year: day.getFullYear() === thisYear ? undefined : 'numeric' }, US);
 }
 
 /** "Jun 9", for the week board's column heads and a week's range. */
 export function monthDayWords(isoDate: string): string {
-  return format(parseISO(isoDate), 'MMM d');
+  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric' }, US);
 }
 
 /** "Tuesday", or "T" when `narrow`. */
 export function weekdayWords(isoDate: string, narrow = false): string {
-  return format(parseISO(isoDate), narrow ? 'EEEEE' : 'EEEE');
+  return intlFormat(parseISO(isoDate), { weekday: narrow ? 'narrow' : 'long' }, US);
 }
 
 /** "Dec" for 2026-12. */
 export function monthWords(isoMonth: string): string {
-  return format(parseISO(`${isoMonth}-01`), 'MMM');
+  return intlFormat(parseISO(`${isoMonth}-01`), { month: 'short' }, US);
 }
 
 /** Index 0 = Sunday, as the household's week start and JavaScript's getDay count. */

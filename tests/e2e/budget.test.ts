@@ -4,9 +4,9 @@ import { gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 
 // Set from the build measured on 2026-12-02 (sign-in 114.2 KB, Today 118.6 KB gzip) with about 10% to grow;
-// Today rose to 133.6 KB with the shared words, undo and first-run code, so its budget is 136 until it is trimmed,
-// still under a 150 KB ceiling for a phone on a slow connection.
-const BUDGET_KB = { signIn: 125, today: 136 };
+// Today later rose to 133.6 KB and was trimmed back to 129.5 KB (date words through Intl instead of date-fns's
+// locale tables), so its budget is 130 again, under a 150 KB ceiling for a phone on a slow connection.
+const BUDGET_KB = { signIn: 125, today: 130 };
 
 interface Chunk {
   file: string;

@@ -1,7 +1,7 @@
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
 import type { TodoFilter } from '@shared/schemas/todos';
-import { TODO_FILTERS } from '@shared/schemas/todos';
+import { TODO_FILTERS } from '@shared/choices';
 import { calendarDateIn } from '@shared/time-zones';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';

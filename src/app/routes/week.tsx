@@ -1,8 +1,7 @@
 import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
-import { addDays, requireIsoDate } from '@shared/domain';
+import { addDays, requireIsoDate, weekStartOf } from '@shared/domain';
 import { can } from '@shared/roles';
-import { weekStartOf } from '@shared/schemas/week';
 import { monthDayWords } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';

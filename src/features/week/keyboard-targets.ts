@@ -1,6 +1,7 @@
 // Keyboard moves jump from place to place on the board instead of by pixels: left and right between
 // days, up and down between slots (for meals) or planned meals (for products and entries).
-import { SLOTS, type Slot, type WeekDay } from '@shared/schemas/week';
+import { SLOTS, type Slot } from '@shared/choices';
+import type { WeekDay } from '@shared/schemas/week';
 import { slotId, type DragSource } from './drag';
 
 export interface Place {

@@ -1,6 +1,6 @@
 import { useId, useState, type ChangeEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { BACKUP_MAX_BYTES } from '@shared/schemas/backup';
+import { BACKUP_MAX_BYTES } from '@shared/choices';
 import { Notice } from '@/components/ui/notice';
 import { useImportHousehold } from '../api/import-household';
 

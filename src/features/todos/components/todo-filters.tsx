@@ -1,4 +1,4 @@
-import { TODO_FILTERS, type TodoFilter } from '@shared/schemas/todos';
+import { TODO_FILTERS, type TodoFilter } from '@shared/choices';
 
 const FILTER_NAMES: Record<TodoFilter, string> = { open: 'Open', mine: 'Mine', done: 'Done', all: 'All' };
 

@@ -1,5 +1,6 @@
 import { monthDayWords, weekdayWords } from '@shared/words';
-import { SLOTS, type WeekDay } from '@shared/schemas/week';
+import { SLOTS } from '@shared/choices';
+import type { WeekDay } from '@shared/schemas/week';
 import { useBoard } from '../board-context';
 import { DayNotes } from './day-notes';
 import { SlotList } from './slot-list';

@@ -1,4 +1,5 @@
-import { DIET_LABELS, DIET_TAGS, type DietTag, type WeekMember } from '@shared/schemas/week';
+import { DIET_LABELS, DIET_TAGS, type DietTag } from '@shared/choices';
+import type { WeekMember } from '@shared/schemas/week';
 import { HEAT_LEVELS, heatWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { useUpdatePreferences } from '../api/update-preferences';

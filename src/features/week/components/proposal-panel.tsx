@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { DEFAULT_VARIETY_DAYS } from '@shared/domain';
 import { wasteWords } from '@shared/words/proposal';
-import { SLOTS, type WeekView } from '@shared/schemas/week';
+import { SLOTS } from '@shared/choices';
+import type { WeekView } from '@shared/schemas/week';
 import type { ProposalScope, ProposalView, ProposedMealView } from '@shared/schemas/week-proposal';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
