@@ -7,6 +7,7 @@ import { keepSessionAlive, sessionMiddleware } from './auth/session';
 import type { Config } from './config';
 import { acquireDatabase } from './db/sequelize';
 import { errorHandler, notFoundHandler } from './http/errors';
+import { createLogger, requestLogger, type Logger } from './http/logging';
 import { createReadCache } from './http/read-cache';
 import { sameOriginOnly } from './http/same-origin';
 import { staticClient } from './http/static-client';
@@ -26,7 +27,9 @@ import { createPushSender } from './services/push/push-sender';
 import type { AppContext } from './context';
 
 /** Builds the Express app and its connections; tests mount it without listening. */
-export function createApp(config: Config, options: { authLimit?: number } = {}) {
+export function createApp(config: Config, options: { authLimit?: number; logger?: Logger } = {}) {
+  const logger = options.logger ?? createLogger(config);
+  let stopping = false;
   const database = acquireDatabase(config.databaseUrl, config.dbPoolMax);
   const { sequelize } = database;
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
@@ -37,6 +40,13 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   const app = express();
   app.disable('x-powered-by');
   if (config.trustProxy !== undefined) app.set('trust proxy', config.trustProxy);
+  // Express's own reading of TRUST_PROXY: X-Forwarded-* and X-Request-Id count only from those peers.
+  const trusts = app.get('trust proxy fn') as (address: string, hop: number) => boolean;
+  app.use(requestLogger(logger, (address) => trusts(address, 0)));
+  app.use((_req, res, next) => {
+    res.set('X-Larderly-Instance', config.instanceName);
+    next();
+  });
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -58,7 +68,7 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
   // JSON answers over 1 KB go out compressed; the built client is compressed at build time.
   app.use(compression({ threshold: 1024 }));
   const api = Router();
-  api.use(healthRouter(sequelize, ctx.photos));
+  api.use(healthRouter(sequelize, ctx.photos, () => stopping));
   api.use(publicConfigRouter(config));
   const json = express.json({ limit: '1mb' });
   // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
@@ -92,6 +102,11 @@ export function createApp(config: Config, options: { authLimit?: number } = {}) 
     app,
     ctx,
     sequelize,
+    logger,
+    /** From now on /api/ready answers 503, so a balancer stops sending new work here. */
+    beginStopping() {
+      stopping = true;
+    },
     async close() {
       ctx.mailer.close();
       await Promise.allSettled([database.release(), sessionPool.end()]);

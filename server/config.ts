@@ -33,7 +33,7 @@ const schema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('false'),
   SHUTDOWN_TIMEOUT_MS: z.coerce.number().int().min(1_000).max(120_000).default(10_000),
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   INSTANCE_NAME: z.string().regex(/^[\w.-]{1,64}$/, 'INSTANCE_NAME may hold letters, digits, dots, hyphens and underscores (64 at most)').optional(),
 });
 
@@ -87,7 +87,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       : undefined,
     /** how long a stopping process finishes what it has in hand before it exits */
     shutdownTimeoutMs: c.SHUTDOWN_TIMEOUT_MS,
-    logLevel: c.LOG_LEVEL,
+    /** JSON lines on stdout; silent under NODE_ENV=test unless LOG_LEVEL is set */
+    logLevel: c.LOG_LEVEL ?? (c.NODE_ENV === 'test' ? 'silent' : 'info'),
     /** this process's name in logs and the X-Larderly-Instance header: the host name and process id unless set */
     instanceName: c.INSTANCE_NAME ?? `${hostname()}-${process.pid}`,
     /** where links in e-mails point: the first APP_ORIGIN, else this server's own address */

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ConnectionError, TimeoutError } from 'sequelize';
 import { ZodError } from 'zod';
+import { loggedPath } from './logging';
 
 export type ErrorCode =
   | 'invalid_input'
@@ -64,7 +65,9 @@ export function errorHandler({ exposeInternals }: { exposeInternals: boolean }):
     } else if (err?.type === 'entity.parse.failed') {
       error = new AppError(400, 'invalid_input', 'The request body is not valid JSON.');
     } else {
-      console.error(`[${req.method} ${req.originalUrl}]`, err);
+      // The request's own logger carries its id, which the answer's X-Request-Id header repeats.
+      if (req.log) req.log.error({ err }, `unexpected error in ${req.method} ${loggedPath(req.originalUrl)}`);
+      else console.error(`[${req.method} ${req.originalUrl}]`, err);
       error = new AppError(500, 'internal', 'Something went wrong on our side. Nothing was saved; try again, and tell us if it keeps happening.');
       if (exposeInternals) error = new AppError(500, 'internal', error.message, undefined, String(err?.stack ?? err));
     }

@@ -62,7 +62,7 @@ try {
   // BENCH_CPU_PROF=<dir> writes the server's CPU profile there when it stops (node --cpu-prof).
   const profile = process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [];
   const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
-    env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: databaseUrl, PORT: String(APP_PORT), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: 'no-static-in-bench' },
+    env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: databaseUrl, PORT: String(APP_PORT), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: 'no-static-in-bench', LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const bare = spawn(

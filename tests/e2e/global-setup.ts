@@ -21,7 +21,9 @@ export default async function startServer(project: TestProject) {
   const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     env: { ...env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client',
       // Every browser test signs in from 127.0.0.1; the limit itself has its own API test.
-      AUTH_RATE_LIMIT: '10000' },
+      AUTH_RATE_LIMIT: '10000',
+      // Only warnings and errors: a line per request would bury the test output.
+      LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const baseURL = `http://127.0.0.1:${port}`;
