@@ -15,6 +15,7 @@ import { authRouter } from './routes/auth';
 import { backupImportRouter, IMPORT_PATH } from './routes/backup';
 import { healthRouter } from './routes/health';
 import { publicConfigRouter } from './routes/public-config';
+import { calendarFeedRouter } from './routes/calendar';
 import { householdsRouter } from './routes/households';
 import { jarCodesRouter } from './routes/jars';
 import { householdFeatureRouters } from './routes/index';
@@ -70,6 +71,8 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   const api = Router();
   api.use(healthRouter(sequelize, ctx.photos, () => stopping));
   api.use(publicConfigRouter(config));
+  // Calendar apps fetch with the secret in the address and no session: no cookie is read or set.
+  api.use('/calendar', calendarFeedRouter(config));
   const json = express.json({ limit: '1mb' });
   // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
   api.use((req, res, next) => (req.method === 'POST' && req.path === IMPORT_PATH ? next() : json(req, res, next)));

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { AppContext } from '../context';
 import { householdBackupRouter } from './backup';
+import { householdCalendarRouter } from './calendar';
 import { devMailRouter } from './dev-mail';
 import { fridgeRouter } from './fridge';
 import { householdInvitationsRouter } from './invitations';
@@ -37,5 +38,6 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(householdInvitationsRouter(ctx));
   if (!ctx.config.isProduction) router.use(devMailRouter(ctx));
   router.use(householdBackupRouter(ctx));
+  router.use(householdCalendarRouter(ctx));
   return router;
 }

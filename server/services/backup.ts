@@ -107,6 +107,7 @@ export async function exportHousehold(sequelize: Sequelize, household: Household
       weekStartsOn: household.weekStartsOn,
       cannerCapacityJars: household.cannerCapacityJars,
       defaultMethod: household.defaultMethod,
+      mealTimes: household.mealTimes,
     },
   };
   for (const { key, table, columns } of TABLES) {

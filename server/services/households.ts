@@ -1,7 +1,7 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import type { Role } from '../../shared/roles';
 import type { HouseholdPatch, HouseholdView, MemberView } from '../../shared/schemas/households';
-import { DigestDelivery, Household, Membership, PushSubscription, ReminderDelivery, Todo, User } from '../db/models';
+import { CalendarFeed, DigestDelivery, Household, Membership, PushSubscription, ReminderDelivery, Todo, User } from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
 
 export function viewHousehold(household: Household, role: Role): HouseholdView {
@@ -60,6 +60,7 @@ async function endMembership(householdId: string, userId: string, transaction: T
   await Todo.update({ assigneeId: null }, { where: { householdId, assigneeId: userId }, transaction });
   await ReminderDelivery.destroy({ where: { householdId, userId }, transaction });
   await DigestDelivery.destroy({ where: { householdId, userId }, transaction });
+  await CalendarFeed.destroy({ where: { householdId, userId }, transaction });
   if ((await Membership.count({ where: { userId }, transaction })) === 0) await PushSubscription.destroy({ where: { userId }, transaction });
 }
 

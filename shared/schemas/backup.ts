@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { JAR_SIZES, JAR_STATES, PROCESSING_METHODS, PRODUCT_KINDS } from '../domain';
 import { householdName } from './auth';
+import { mealTimesBody } from './calendar';
 import { UNIT_SYSTEMS } from './households';
 import { ingredientInput } from './recipes';
 import { PRODUCT_COLOURS } from '../words';
@@ -123,6 +124,8 @@ export const householdBackup = z
       weekStartsOn: int(0, 6),
       cannerCapacityJars: int(1, 40),
       defaultMethod: z.enum(PROCESSING_METHODS),
+      /** Added with the household calendar; older backups have none and get the default times. */
+      mealTimes: mealTimesBody.optional(),
     }),
     products: list(product, 2_000),
     recipes: list(recipe, 2_000),

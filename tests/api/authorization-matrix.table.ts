@@ -80,6 +80,8 @@ export const PARAMS: Record<string, keyof Ids | { literal: string }> = {
   'invitations/:id': 'invitationId',
   // Not a real invitation: accepting a real one would make the neighbour a member mid-test.
   token: { literal: 'not-a-real-invitation-token-0123456789' },
+  // Not a real calendar secret: the feed answers 404 for it to everybody.
+  file: { literal: `${'0'.repeat(43)}.ics` },
 };
 
 export interface RouteRule {
@@ -114,6 +116,7 @@ export const TABLE: Record<string, RouteRule> = {
   'GET /api/invitations/:token': { access: 'public' },
   'POST /api/invitations/:token/accept': { access: 'signed-in', body: () => ({}) },
   'POST /api/households/import': { access: 'signed-in', body: () => ({}) },
+  'GET /api/calendar/:file': { access: 'public' },
 
   [`GET ${H}`]: { access: 'read' },
   [`PATCH ${H}`]: { access: 'manage', body: () => ({ bestQualityMonths: 12 }) },
@@ -123,6 +126,10 @@ export const TABLE: Record<string, RouteRule> = {
   [`POST ${H}/leave`]: { access: 'read', endsMembership: true },
   [`PATCH ${H}/members/:userId/preferences`]: { access: 'self', body: () => ({ heatTolerance: 3 }) },
   [`GET ${H}/backup`]: { access: 'manage' },
+  [`GET ${H}/calendar-feed`]: { access: 'read' },
+  [`POST ${H}/calendar-feed`]: { access: 'read' },
+  [`DELETE ${H}/calendar-feed`]: { access: 'read' },
+  [`PUT ${H}/meal-times`]: { access: 'manage', body: () => ({ breakfast: '08:00', lunch: '12:30', snack: '15:30', dinner: '18:30' }) },
 
   [`GET ${H}/products`]: { access: 'read' },
   [`GET ${H}/products/:productId`]: { access: 'read' },

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Method } from '../../../shared/domain';
+import type { MealTimes } from '../../../shared/schemas/calendar';
 import type { UnitSystem } from '../../../shared/schemas/households';
 
 export class Household extends Model<InferAttributes<Household>, InferCreationAttributes<Household>> {
@@ -15,6 +16,8 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
   declare defaultMethod: CreationOptional<Method>;
   /** When a keeper last confirmed the altitude; null means no processing plan may be shown yet. */
   declare altitudeConfirmedAt: CreationOptional<Date | null>;
+  /** When each meal slot is eaten ("18:30"), in the household's time zone: places meals in the calendar. */
+  declare mealTimes: CreationOptional<MealTimes>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -46,6 +49,7 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
         cannerCapacityJars: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 },
         defaultMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
         altitudeConfirmedAt: { type: DataTypes.DATE, allowNull: true },
+        mealTimes: { type: DataTypes.JSONB, allowNull: false, defaultValue: { breakfast: '08:00', lunch: '12:30', snack: '15:30', dinner: '18:30' } },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { AppSetting } from './app-setting';
 import { Batch } from './batch';
+import { CalendarFeed } from './calendar-feed';
 import { DigestDelivery } from './digest-delivery';
 import { Household } from './household';
 import { Invitation } from './invitation';
@@ -22,7 +23,7 @@ export function initModels(sequelize: Sequelize) {
   for (const model of [User, Household, Membership, Product, Recipe, Batch, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
     model.initModel(sequelize);
   }
-  for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation]) model.initModel(sequelize);
+  for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation, CalendarFeed]) model.initModel(sequelize);
 
   Membership.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
   Invitation.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
@@ -51,4 +52,4 @@ export function initModels(sequelize: Sequelize) {
   Todo.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { AppSetting, Batch, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, Todo, User };
+export { AppSetting, Batch, CalendarFeed, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, Todo, User };

@@ -4,6 +4,7 @@ import { useHousehold, useMembers } from '@/features/households/api/get-househol
 import { HouseholdSettingsForm } from '@/features/households/components/household-settings-form';
 import { MemberList } from '@/features/households/components/member-list';
 import { BackupPanel } from '@/features/backup/components/backup-panel';
+import { CalendarPanel } from '@/features/calendar';
 import { InvitationPanel } from '@/features/invitations/components/invitation-panel';
 import { NotificationSettingsPanel } from '@/features/notifications/components/notification-settings';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -36,6 +37,11 @@ export function HouseholdRoute() {
           <h2 className="mb-1 text-xl">Notifications</h2>
           <p className="mb-4 text-ink-muted">Yours alone: a reminder before an opened jar reaches its use-by, by push on this device or by e-mail.</p>
           <NotificationSettingsPanel />
+        </Card>
+        <Card>
+          <h2 className="mb-1 text-xl">Calendar</h2>
+          <p className="mb-4 text-ink-muted">Yours alone: the planned meals, the use-by dates of opened jars and the to-dos with a due date, in the calendar app you already use.</p>
+          <CalendarPanel hid={hid} canManage={canManage} />
         </Card>
         {canManage && (
           <Card>

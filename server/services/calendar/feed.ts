@@ -1,0 +1,121 @@
+// A household's calendar in iCalendar (RFC 5545): the planned meals at the household's meal times, the use-by
+// dates of opened jars, and the to-dos with a due date. Times carry the household's time zone (TZID with its
+// VTIMEZONE), so they stay right across daylight-saving changes. Every event's UID and DTSTAMP come from the
+// stored row, so the same data gives the same text and calendar apps polling the address get 304s.
+import { TZDate } from '@date-fns/tz';
+import ical, { ICalCalendarMethod } from 'ical-generator';
+import { Op } from 'sequelize';
+import { tzlib_get_ical_block } from 'timezones-ical-library';
+import { addDays } from '../../../shared/domain';
+import { DEFAULT_MEAL_TIMES, type MealTimes } from '../../../shared/schemas/calendar';
+import { SLOT_NAMES, USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
+import { Household, Jar, Pairing, PlanEntry, Product, Todo } from '../../db/models';
+import { todayIn } from '../clock';
+
+/** Planned meals from a week back to six weeks ahead; calendar apps keep what they fetched before. */
+const MEALS_FROM_DAYS = -7;
+const MEALS_TO_DAYS = 42;
+/** A meal is placed as a 45-minute event at its slot's time. */
+const MEAL_MINUTES = 45;
+
+/** The instant `isoDate` at `clock` ("18:30") in `timeZone`, as a date that formats itself in that zone. */
+export function zonedInstant(isoDate: string, clock: string, timeZone: string): TZDate {
+  const [y, m, d] = isoDate.split('-').map(Number);
+  const [hh, mm] = clock.split(':').map(Number);
+  return new TZDate(y, m - 1, d, hh, mm, 0, timeZone);
+}
+
+function allDay(isoDate: string, timeZone: string): TZDate {
+  return zonedInstant(isoDate, '00:00', timeZone);
+}
+
+/** The UID domain: fixed, so a meal keeps its UID whatever address serves the feed. */
+const uid = (kind: string, id: string) => `${kind}-${id}@larderly.calendar`;
+
+export async function householdCalendar(household: Household, publicOrigin: string): Promise<string> {
+  const zone = household.timeZone;
+  const times: MealTimes = { ...DEFAULT_MEAL_TIMES, ...(household.mealTimes ?? {}) };
+  const today = todayIn(zone);
+  const [entries, jars, todos] = await Promise.all([
+    PlanEntry.findAll({
+      where: {
+        householdId: household.id,
+        date: { [Op.between]: [addDays(today, MEALS_FROM_DAYS), addDays(today, MEALS_TO_DAYS)] },
+      },
+      include: [{ model: Pairing, as: 'pairings', include: [{ model: Product, as: 'product', attributes: ['name'] }] }],
+      order: [
+        ['date', 'ASC'],
+        ['slot', 'ASC'],
+        ['position', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    Jar.findAll({
+      where: { householdId: household.id, state: 'opened', useBy: { [Op.ne]: null } },
+      include: [{ model: Product, as: 'product', attributes: ['name'] }],
+      order: [
+        ['useBy', 'ASC'],
+        ['code', 'ASC'],
+      ],
+    }),
+    Todo.findAll({
+      where: { householdId: household.id, done: false, dueOn: { [Op.ne]: null } },
+      order: [
+        ['dueOn', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+  ]);
+
+  const calendar = ical({
+    name: `Larderly: ${household.name}`,
+    description: 'Planned meals, use-by dates of opened jars and to-dos with a due date.',
+    prodId: { company: 'Larderly', product: 'household-calendar', language: 'EN' },
+    method: ICalCalendarMethod.PUBLISH,
+    timezone: { name: zone, generator: (tz) => (tzlib_get_ical_block(tz) as string[])[0] },
+    ttl: 60 * 60,
+  });
+
+  for (const entry of entries) {
+    const start = zonedInstant(entry.date, times[entry.slot], zone);
+    const jars = (entry.pairings ?? [])
+      .map((p) => (p as Pairing & { product?: Product }).product?.name)
+      .filter(Boolean);
+    calendar.createEvent({
+      id: uid('meal', entry.id),
+      stamp: entry.updatedAt,
+      start,
+      end: new TZDate(start.getTime() + MEAL_MINUTES * 60_000, zone),
+      timezone: zone,
+      summary: `${SLOT_NAMES[entry.slot]}: ${entry.title}`,
+      description: jars.length > 0 ? `With ${jars.join(', ')}.` : undefined,
+      url: `${publicOrigin}/h/${household.id}/week?date=${entry.date}`,
+    });
+  }
+  for (const jar of jars) {
+    const product = (jar as Jar & { product?: Product }).product;
+    calendar.createEvent({
+      id: uid('use-by', jar.id),
+      stamp: jar.updatedAt,
+      start: allDay(jar.useBy!, zone),
+      allDay: true,
+      timezone: zone,
+      summary: `Use by: ${product?.name ?? 'an opened jar'} (jar ${jar.code})`,
+      description: USE_BY_CAUTION_SENTENCE,
+      url: `${publicOrigin}/j/${jar.code}`,
+    });
+  }
+  for (const todo of todos) {
+    calendar.createEvent({
+      id: uid('todo', todo.id),
+      stamp: todo.updatedAt,
+      start: allDay(todo.dueOn!, zone),
+      allDay: true,
+      timezone: zone,
+      summary: `To do: ${todo.title}`,
+      description: todo.notes || undefined,
+      url: `${publicOrigin}/h/${household.id}/todo?open=${todo.id}`,
+    });
+  }
+  return calendar.toString();
+}

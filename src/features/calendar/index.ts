@@ -1,0 +1,1 @@
+export { CalendarPanel } from './components/calendar-panel';
