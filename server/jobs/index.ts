@@ -1,5 +1,6 @@
 import PgBoss from 'pg-boss';
 import type { AppContext } from '../context';
+import { forgetOldRequestKeys } from '../http/idempotency';
 import { sweepDigests } from '../services/digest';
 import { sweepReminders } from '../services/reminders';
 
@@ -45,6 +46,7 @@ export async function startJobs(ctx: AppContext) {
   });
   await boss.work(DIGESTS, async () => {
     await sweepDigests(ctx);
+    await forgetOldRequestKeys(ctx.sequelize);
   });
   return {
     /** queue a reminder sweep now instead of waiting for the schedule */

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { JAR_ACTIONS, jarStateQuery, jarUndoBody } from '../../shared/schemas/batches';
 import { currentMembership, householdAccess, requireUser } from '../auth/guards';
 import type { AppContext } from '../context';
+import { idempotent } from '../http/idempotency';
 import { body, params, query } from '../http/validate';
 import { undoJarEvent } from '../services/shelf/jar-undo';
 import { actOnJar, jarByCode, jarInHousehold, listJars, openingAdvice } from '../services/shelf/jars';
@@ -32,14 +33,14 @@ export function jarsRouter(ctx: AppContext) {
   });
 
   // Before '/:action': any member may try; the service lets helpers undo only their own recent change.
-  router.post('/jars/:jarId/undo', householdAccess('handleJars'), async (req, res) => {
+  router.post('/jars/:jarId/undo', householdAccess('handleJars'), idempotent(ctx.sequelize), async (req, res) => {
     const { jarId } = params(req, jarParams);
     const { eventId } = body(req, jarUndoBody);
     const { household, role } = currentMembership(req);
     res.json(await undoJarEvent(ctx.sequelize, household, role, req.user!.id, jarId, eventId));
   });
 
-  router.post('/jars/:jarId/:action', householdAccess('handleJars'), async (req, res) => {
+  router.post('/jars/:jarId/:action', householdAccess('handleJars'), idempotent(ctx.sequelize), async (req, res) => {
     const { jarId, action } = params(req, jarAction);
     res.json(await actOnJar(ctx.sequelize, currentMembership(req).household, jarId, action, req.user!.id));
   });

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { todoCreate, todoListQuery, todoPatch } from '../../shared/schemas/todos';
 import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
+import { idempotent } from '../http/idempotency';
 import { body, params, query } from '../http/validate';
 import { createTodo, deleteTodo, findTodo, listTodos, updateTodo } from '../services/todos';
 
@@ -21,13 +22,13 @@ export function todosRouter({ sequelize }: AppContext) {
     res.json({ todo: await findTodo(currentMembership(req).householdId, id) });
   });
 
-  router.post('/todos', householdAccess('cook'), async (req, res) => {
+  router.post('/todos', householdAccess('cook'), idempotent(sequelize), async (req, res) => {
     const input = body(req, todoCreate);
     res.status(201).json({ todo: await createTodo(sequelize, currentMembership(req).householdId, req.user!.id, input) });
   });
 
   // Helpers pass this guard to tick a to-do; the service refuses them anything else.
-  router.patch('/todos/:id', householdAccess('handleJars'), async (req, res) => {
+  router.patch('/todos/:id', householdAccess('handleJars'), idempotent(sequelize), async (req, res) => {
     const { id } = params(req, todoParams);
     const patch = body(req, todoPatch);
     const { householdId, role } = currentMembership(req);
