@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS } from './limits';
 
 export const email = z
   .string({ error: 'Enter an e-mail address.' })
@@ -12,13 +13,13 @@ export const newPassword = z
   .min(10, 'Use at least 10 characters for your password.')
   .max(200, 'Use at most 200 characters for your password.');
 
-export const personName = z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(80, 'Use at most 80 characters.');
+export const personName = z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(LIMITS.length.personName, `Use at most ${LIMITS.length.personName} characters.`);
 
 export const householdName = z
   .string({ error: 'Name your household.' })
   .trim()
   .min(1, 'Name your household.')
-  .max(80, 'Use at most 80 characters.');
+  .max(LIMITS.length.householdName, `Use at most ${LIMITS.length.householdName} characters.`);
 
 export const signupBody = z.object({ email, password: newPassword, name: personName, householdName });
 export type SignupBody = z.infer<typeof signupBody>;

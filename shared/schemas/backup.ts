@@ -6,6 +6,9 @@ import { UNIT_SYSTEMS } from './households';
 import { ingredientInput } from './recipes';
 import { PRODUCT_COLOURS } from '../words';
 import { SLOTS } from './week';
+import { LIMITS } from './limits';
+
+const N = LIMITS.length;
 
 /** A household's backup file: its shelf, week and to-dos, never people, sessions, keys or tokens. */
 export const BACKUP_FORMAT = 'larderly-household-backup';
@@ -21,34 +24,34 @@ const list = <T extends z.ZodType>(item: T, max: number) => z.array(item).max(ma
 
 const product = z.object({
   id,
-  name: text(80).min(1),
+  name: text(N.productName).min(1),
   kind: z.enum(PRODUCT_KINDS),
-  heat: int(0, 5),
+  heat: int(0, LIMITS.heat),
   favourite: z.boolean(),
-  minJars: int(0, 500),
-  useWithinDays: int(1, 365).nullable(),
+  minJars: int(0, LIMITS.minJars),
+  useWithinDays: int(1, LIMITS.useWithinDays).nullable(),
   harvestMonths: z.array(int(1, 12)).max(12),
   jarSize: z.enum(JAR_SIZES),
   colour: z.enum(PRODUCT_COLOURS),
-  notes: text(2000),
+  notes: text(N.notes),
 });
 
 const recipe = z.object({
   id,
   productId: id,
-  name: text(120).min(1),
-  yieldJars: int(1, 100),
+  name: text(N.recipeName).min(1),
+  yieldJars: int(1, LIMITS.recipeYieldJars),
   yieldJarSize: z.enum(JAR_SIZES),
-  ingredients: z.array(ingredientInput).max(60),
+  ingredients: z.array(ingredientInput).max(LIMITS.ingredientsPerRecipe),
   acidPercent: z.number().min(0).max(100).nullable(),
   ph: z.number().min(0).max(14).nullable(),
   acidified: z.boolean(),
   method: z.enum(PROCESSING_METHODS),
-  baseMinutes: z.partialRecord(z.enum(JAR_SIZES), int(0, 600)),
-  altitudeTable: z.array(z.object({ upToFt: int(0, 20_000), addMinutes: int(0, 600) })).max(20).nullable(),
-  headspaceInches: z.number().min(0).max(2),
-  steps: text(10_000),
-  source: text(500),
+  baseMinutes: z.partialRecord(z.enum(JAR_SIZES), int(0, LIMITS.processingMinutes)),
+  altitudeTable: z.array(z.object({ upToFt: int(0, LIMITS.altitudeFt.max), addMinutes: int(0, LIMITS.processingMinutes) })).max(LIMITS.altitudeRows).nullable(),
+  headspaceInches: z.number().min(0).max(LIMITS.headspaceInches),
+  steps: text(N.steps),
+  source: text(N.source),
 });
 
 const batch = z.object({
@@ -57,14 +60,14 @@ const batch = z.object({
   recipeId: id.nullable(),
   cannedOn: date,
   jarSize: z.enum(JAR_SIZES),
-  jarsFilled: int(1, 500),
-  jarsSealed: int(0, 500),
+  jarsFilled: int(1, LIMITS.jarsPerBatch),
+  jarsSealed: int(0, LIMITS.jarsPerBatch),
   method: z.enum(PROCESSING_METHODS),
-  altitudeFt: int(-1500, 20_000),
-  minutes: int(0, 600).nullable(),
-  pressurePsi: int(0, 30).nullable(),
-  headspaceInches: z.number().min(0).max(2).nullable(),
-  notes: text(2000),
+  altitudeFt: int(LIMITS.altitudeFt.min, LIMITS.altitudeFt.max),
+  minutes: int(0, LIMITS.batchMinutes).nullable(),
+  pressurePsi: int(0, LIMITS.pressurePsi).nullable(),
+  headspaceInches: z.number().min(0).max(LIMITS.headspaceInches).nullable(),
+  notes: text(N.notes),
 });
 
 const jar = z.object({
@@ -92,18 +95,18 @@ const jarEvent = z.object({
   happenedOn: date,
 });
 
-const meal = z.object({ id, name: text(100).min(1), tags: z.array(text(30)).max(12), usualServings: int(1, 100), notes: text(2000) });
-const mealProduct = z.object({ id, mealId: id, productId: id, tbspPerServing: z.number().positive().max(64) });
-const planEntry = z.object({ id, date, slot: z.enum(SLOTS), position: int(0, 1000), title: text(100).min(1), mealId: id.nullable(), servings: int(1, 100) });
-const pairing = z.object({ id, planEntryId: id, productId: id, tbspPerServing: z.number().positive().max(64) });
+const meal = z.object({ id, name: text(N.mealName).min(1), tags: z.array(text(N.mealTag)).max(LIMITS.mealTags), usualServings: int(1, LIMITS.servings), notes: text(N.notes) });
+const mealProduct = z.object({ id, mealId: id, productId: id, tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing) });
+const planEntry = z.object({ id, date, slot: z.enum(SLOTS), position: int(0, LIMITS.planPosition), title: text(N.mealName).min(1), mealId: id.nullable(), servings: int(1, LIMITS.servings) });
+const pairing = z.object({ id, planEntryId: id, productId: id, tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing) });
 const todo = z.object({
   id,
-  title: text(200).min(1),
-  notes: text(4000),
+  title: text(N.todoTitle).min(1),
+  notes: text(N.todoNotes),
   dueOn: date.nullable(),
   done: z.boolean(),
   doneAt: z.iso.datetime({ offset: true }).nullable(),
-  position: int(0, 100_000),
+  position: int(0, LIMITS.todoPosition),
   kind: z.enum(['plain', 'restock']),
   productId: id.nullable(),
   // A restock to-do's batch plan as the server wrote it; its product and recipe ids are remapped.
@@ -117,12 +120,12 @@ export const householdBackup = z
     exportedAt: z.iso.datetime({ offset: true }),
     household: z.object({
       name: householdName,
-      altitudeFt: int(-1500, 20_000),
+      altitudeFt: int(LIMITS.altitudeFt.min, LIMITS.altitudeFt.max),
       unitSystem: z.enum(UNIT_SYSTEMS),
       timeZone: text(64),
-      bestQualityMonths: int(1, 60),
+      bestQualityMonths: int(1, LIMITS.bestQualityMonths),
       weekStartsOn: int(0, 6),
-      cannerCapacityJars: int(1, 40),
+      cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
       defaultMethod: z.enum(PROCESSING_METHODS),
       /** Added with the household calendar; older backups have none and get the default times. */
       mealTimes: mealTimesBody.optional(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS, limitWords } from './limits';
 import { JAR_SIZES, PROCESSING_METHODS, type JarSize, type JarState, type Method, type ProcessingPlan } from '../domain';
 
 // A real calendar date (2026-02-30 is refused), checked by zod's ISO date format.
@@ -10,11 +11,11 @@ export const batchCreate = z
     recipeId: z.uuid({ error: 'Choose the tested recipe you followed.' }),
     cannedOn: isoDate,
     jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
-    jarsFilled: z.number({ error: 'Enter how many jars you filled.' }).int('Use a whole number of jars.').min(1, 'Fill at least 1 jar.').max(200, 'Use at most 200 jars in one batch.'),
-    jarsSealed: z.number({ error: 'Enter how many jars sealed.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(200, 'Use at most 200 jars.'),
+    jarsFilled: z.number({ error: 'Enter how many jars you filled.' }).int('Use a whole number of jars.').min(1, 'Fill at least 1 jar.').max(LIMITS.jarsPerBatch, `Use at most ${LIMITS.jarsPerBatch} jars in one batch.`),
+    jarsSealed: z.number({ error: 'Enter how many jars sealed.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(LIMITS.jarsPerBatch, `Use at most ${LIMITS.jarsPerBatch} jars.`),
     method: z.enum(PROCESSING_METHODS, { error: 'Choose the canner you used.' }),
-    headspaceInches: z.number().min(0).max(2).optional(),
-    notes: z.string().max(2000, 'Use at most 2,000 characters.').default(''),
+    headspaceInches: z.number().min(0).max(LIMITS.headspaceInches).optional(),
+    notes: z.string().max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`).default(''),
   })
   .strict()
   .refine((batch) => batch.jarsSealed <= batch.jarsFilled, { path: ['jarsSealed'], message: 'More jars cannot seal than were filled.' });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { LIMITS, limitWords } from './limits';
 import { PROCESSING_METHODS, type Method } from '../domain';
 import { ROLES, type Role } from '../roles';
 import { isTimeZone } from '../time-zones';
@@ -13,8 +14,8 @@ export const householdPatch = z
     altitudeFt: z
       .number({ error: 'Enter the altitude in feet as a number.' })
       .int('Enter the altitude in whole feet.')
-      .min(-1500, 'The altitude cannot be below -1,500 ft.')
-      .max(20000, 'The altitude cannot be above 20,000 ft.')
+      .min(LIMITS.altitudeFt.min, `The altitude cannot be below ${limitWords(LIMITS.altitudeFt.min)} ft.`)
+      .max(LIMITS.altitudeFt.max, `The altitude cannot be above ${limitWords(LIMITS.altitudeFt.max)} ft.`)
       .optional(),
     unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose US customary or metric units.' }).optional(),
     timeZone: z
@@ -22,9 +23,9 @@ export const householdPatch = z
       .max(64)
       .refine(isTimeZone, 'Choose a time zone such as America/Denver.')
       .optional(),
-    bestQualityMonths: z.number().int('Use whole months.').min(1, 'Use at least 1 month.').max(60, 'Use at most 60 months.').optional(),
+    bestQualityMonths: z.number().int('Use whole months.').min(1, 'Use at least 1 month.').max(LIMITS.bestQualityMonths, `Use at most ${LIMITS.bestQualityMonths} months.`).optional(),
     weekStartsOn: z.number().int().min(0, 'Choose a day of the week.').max(6, 'Choose a day of the week.').optional(),
-    cannerCapacityJars: z.number().int('Use a whole number of jars.').min(1, 'A canner holds at least 1 jar.').max(40, 'Use at most 40 jars.').optional(),
+    cannerCapacityJars: z.number().int('Use a whole number of jars.').min(1, 'A canner holds at least 1 jar.').max(LIMITS.cannerCapacityJars, `Use at most ${LIMITS.cannerCapacityJars} jars.`).optional(),
     defaultMethod: z.enum(PROCESSING_METHODS, { error: 'Choose a processing method.' }).optional(),
   })
   .strict();

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { WeekAllocation } from '../domain';
+import { LIMITS, limitWords } from './limits';
 
 import { DIET_TAGS, SLOTS, type DietTag, type Slot } from '../choices';
 
@@ -9,22 +10,22 @@ export { dayOfWeek, weekDates, weekStartOf } from '../domain';
 const isoDate = z.iso.date({ error: 'Use a date written YYYY-MM-DD.' });
 const id = z.uuid({ error: 'That id is not valid.' });
 const slot = z.enum(SLOTS, { error: 'Choose breakfast, lunch, dinner or snack.' });
-const servings = z.number({ error: 'Servings must be a number.' }).int('Use whole servings.').min(1, 'Plan at least 1 serving.').max(100, 'Plan at most 100 servings.');
+const servings = z.number({ error: 'Servings must be a number.' }).int('Use whole servings.').min(1, 'Plan at least 1 serving.').max(LIMITS.servings, `Plan at most ${LIMITS.servings} servings.`);
 const tbspPerServing = z
   .number({ error: 'The portion must be a number of tablespoons.' })
   .positive('A portion is more than 0 tablespoons.')
-  .max(64, 'A portion is at most 64 tablespoons (a quart) per serving.');
-const title = z.string({ error: 'Name the meal.' }).trim().min(1, 'Name the meal.').max(100, 'Use at most 100 characters.');
-const position = z.number().int('Positions are whole numbers.').min(0, 'Positions start at 0.').max(1000);
+  .max(LIMITS.tbspPerServing, `A portion is at most ${LIMITS.tbspPerServing} tablespoons (a quart) per serving.`);
+const title = z.string({ error: 'Name the meal.' }).trim().min(1, 'Name the meal.').max(LIMITS.length.mealName, `Use at most ${LIMITS.length.mealName} characters.`);
+const position = z.number().int('Positions are whole numbers.').min(0, 'Positions start at 0.').max(LIMITS.planPosition);
 
 export const mealProductInput = z.object({ productId: id, tbspPerServing }).strict();
 
 export const mealBody = z
   .object({
     name: title,
-    tags: z.array(z.string().trim().min(1).max(30, 'A tag is at most 30 characters.')).max(12, 'Use at most 12 tags.').default([]),
+    tags: z.array(z.string().trim().min(1).max(LIMITS.length.mealTag, `A tag is at most ${LIMITS.length.mealTag} characters.`)).max(LIMITS.mealTags, `Use at most ${LIMITS.mealTags} tags.`).default([]),
     usualServings: servings.default(2),
-    notes: z.string().max(2000, 'Notes are at most 2,000 characters.').default(''),
+    notes: z.string().max(LIMITS.length.notes, `Notes are at most ${limitWords(LIMITS.length.notes)} characters.`).default(''),
     products: z.array(mealProductInput).max(12, 'Pair a meal with at most 12 products.').default([]),
   })
   .strict();

@@ -156,3 +156,62 @@ describe('household backup', () => {
     expect((await ctx.request.post('/api/households/import').send(exported)).status).toBe(401);
   });
 });
+
+describe('one limit per value, shared by every entry point', () => {
+  it('a household with every value at its limit exports a backup that imports', async () => {
+    const { LIMITS } = await import('../../shared/schemas/limits');
+    const request = (await import('supertest')).default;
+    const agent = request.agent(ctx.app);
+    const signup = await agent.post('/api/auth/signup').send({ email: `limits-${Date.now()}@example.test`, password: 'long enough password', name: 'N'.repeat(LIMITS.length.personName), householdName: 'H'.repeat(LIMITS.length.householdName) });
+    expect(signup.status).toBe(201);
+    const hid = signup.body.memberships[0].householdId as string;
+    const base = `/api/households/${hid}`;
+    const ok = async (response: PromiseLike<import('supertest').Response>, status: number) => {
+      const res = await response;
+      expect(res.status, JSON.stringify(res.body)).toBe(status);
+      return res.body;
+    };
+    await ok(agent.patch(base).send({ altitudeFt: LIMITS.altitudeFt.max, bestQualityMonths: LIMITS.bestQualityMonths, cannerCapacityJars: LIMITS.cannerCapacityJars }), 200);
+    const name = 'P'.repeat(LIMITS.length.productName);
+    const { product } = await ok(
+      agent.post(`${base}/products`).send({ name, kind: 'pickle', heat: LIMITS.heat, minJars: LIMITS.minJars, useWithinDays: LIMITS.useWithinDays, notes: 'n'.repeat(LIMITS.length.notes) }),
+      201,
+    );
+    await ok(
+      agent.post(`${base}/recipes`).send({
+        productId: product.id,
+        name: 'R'.repeat(LIMITS.length.recipeName),
+        yieldJars: LIMITS.recipeYieldJars,
+        yieldJarSize: 'pint',
+        ingredients: Array.from({ length: LIMITS.ingredientsPerRecipe }, (_, i) => ({ name: `${i}`.padEnd(LIMITS.length.ingredientName, 'i'), amount: LIMITS.ingredientAmount, unit: 'g', role: 'other' })),
+        acidified: true,
+        method: 'boiling-water',
+        baseMinutes: { pint: LIMITS.processingMinutes },
+        altitudeTable: Array.from({ length: LIMITS.altitudeRows }, (_, i) => ({ upToFt: i * 1000, addMinutes: LIMITS.processingMinutes })),
+        headspaceInches: LIMITS.headspaceInches,
+        steps: 's'.repeat(LIMITS.length.steps),
+        source: 'u'.repeat(LIMITS.length.source),
+      }),
+      201,
+    );
+    // The CSV import at its limits: the most jars in one batch, and the most minutes a batch can carry.
+    const csv = `product,canned_on,jar_size,jars_filled,jars_sealed,method,minutes,notes\n${name},2025-09-01,pint,${LIMITS.jarsPerBatch},${LIMITS.jarsPerBatch},boiling-water,${LIMITS.batchMinutes},${'n'.repeat(LIMITS.length.notes)}`;
+    await ok(agent.post(`${base}/shelf/import`).send({ csv, commit: true }), 201);
+    await ok(
+      agent.post(`${base}/meals`).send({
+        name: 'M'.repeat(LIMITS.length.mealName),
+        tags: Array.from({ length: LIMITS.mealTags }, (_, i) => `${i}`.padEnd(LIMITS.length.mealTag, 't')),
+        usualServings: LIMITS.servings,
+        notes: 'n'.repeat(LIMITS.length.notes),
+        products: [{ productId: product.id, tbspPerServing: LIMITS.tbspPerServing }],
+      }),
+      201,
+    );
+    await ok(agent.post(`${base}/todos`).send({ title: 'T'.repeat(LIMITS.length.todoTitle), notes: 'n'.repeat(LIMITS.length.todoNotes) }), 201);
+
+    const backup = await ok(agent.get(`${base}/backup`), 200);
+    expect(backup.batches[0]).toMatchObject({ minutes: LIMITS.batchMinutes, jarsFilled: LIMITS.jarsPerBatch });
+    const imported = await ok(agent.post('/api/households/import').send(backup), 201);
+    expect(imported.counts).toMatchObject({ products: 1, recipes: 1, batches: 1, jars: LIMITS.jarsPerBatch, meals: 1, todos: 1 });
+  });
+});

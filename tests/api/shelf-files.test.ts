@@ -1,4 +1,5 @@
 import Papa from 'papaparse';
+import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoApp } from '../support/app';
 import { shelfLookups } from './shelf-helpers';
@@ -86,5 +87,121 @@ describe('batch CSV import', () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: 'name,date\nBeets,2025-01-01' })).body;
     expect(problems[0]).toMatchObject({ row: 1, message: expect.stringMatching(/needs the columns product, canned_on/) });
+  });
+});
+
+/** A person of their own, with a fresh household whose altitude is confirmed: "another household". */
+async function freshHousehold(tag: string) {
+  const agent = request.agent(ctx.app);
+  const email = `${tag}-${Date.now()}@example.test`;
+  const signup = await agent.post('/api/auth/signup').send({ email, password: 'long enough password', name: 'Wren', householdName: `Wren ${tag}` });
+  expect(signup.status).toBe(201);
+  const hid = signup.body.memberships[0].householdId as string;
+  const home = (await (await ctx.signedIn('keeper@larderly.test')).get(`/api/households/${ctx.householdId}`)).body.household as { altitudeFt: number };
+  expect((await agent.patch(`/api/households/${hid}`).send({ altitudeFt: home.altitudeFt })).status).toBe(200);
+  return { agent, base: `/api/households/${hid}` };
+}
+
+const csvText = (res: import('supertest').Response) => String(res.text ?? res.body).replace(/^\uFEFF/, '');
+
+describe('shelf CSV round trip', () => {
+  /** The shelf as a person sees it, without ids and label codes (another household's jars get codes of their own). */
+  async function shelfOf(agent: import('supertest').Agent, base: string) {
+    const jars = (await agent.get(`${base}/jars?state=all`)).body.jars as Record<string, unknown>[];
+    return jars
+      .map(({ productName, productKind, state, unsealed, bestBy, openedOn, useBy, finishedOn, discardedOn, cannedOn, jarSize, batchNotes, pastBestQuality, remainingTbsp }) =>
+        JSON.stringify({ productName, productKind, state, unsealed, bestBy, openedOn, useBy, finishedOn, discardedOn, cannedOn, jarSize, batchNotes, pastBestQuality, remainingTbsp }),
+      )
+      .sort();
+  }
+
+  it('imports the shelf’s own export into another household and gives the same shelf', async () => {
+    const keeper = await ctx.signedIn('keeper@larderly.test');
+    const exported = await keeper.get(`${lookups.base}/shelf.csv?jars=all`).buffer(true);
+    expect(exported.status).toBe(200);
+    const csv = csvText(exported);
+    // The file speaks the screens' words.
+    expect(csv).toMatch(/"Boiling-water canner"/);
+    expect(csv).not.toMatch(/"boiling-water"/);
+
+    const other = await freshHousehold('round-trip');
+    const preview = await other.agent.post(`${other.base}/shelf/import`).send({ csv });
+    expect(preview.body.problems).toEqual([]);
+    const imported = await other.agent.post(`${other.base}/shelf/import`).send({ csv, commit: true });
+    expect(imported.status).toBe(201);
+    expect(imported.body.jars).toBe(csv.trim().split('\r\n').length - 1);
+    expect(await shelfOf(other.agent, other.base)).toEqual(await shelfOf(keeper, lookups.base));
+
+    // The same batches, canned together as before, and the file exported again reads the same but for label codes.
+    const batches = async (agent: import('supertest').Agent, base: string) =>
+      ((await agent.get(`${base}/batches`)).body.batches as Record<string, unknown>[]).map(({ productName, cannedOn, jarSize, jarsFilled, jarsSealed, method, minutes }) => JSON.stringify({ productName, cannedOn, jarSize, jarsFilled, jarsSealed, method, minutes })).sort();
+    expect(await batches(other.agent, other.base)).toEqual(await batches(keeper, lookups.base));
+    const again = csvText(await other.agent.get(`${other.base}/shelf.csv?jars=all`).buffer(true));
+    const withoutCodes = (text: string) => Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data.map(({ jar_code: _c, batch: _b, ...rest }) => JSON.stringify(rest)).sort();
+    expect(withoutCodes(again)).toEqual(withoutCodes(csv));
+  });
+
+  it('accepts the words the screens show as well as the ids', async () => {
+    const cook = await ctx.signedIn('cook@larderly.test');
+    const csv = [
+      'product,canned_on,jar_size,jars_filled,jars_sealed,method,minutes',
+      'Hot Pepper Jelly,2025-08-30,12-ounce,6,6,Boiling-water canner,10',
+      'Hot Pepper Jelly,2025-08-31,twelve-ounce,6,6,boiling-water,10',
+      'Hot Pepper Jelly,2025-09-01,Pint-and-a-half,2,2,"Pressure canner, dial gauge",25',
+      'Hot Pepper Jelly,2025-09-02,HALF-PINT,4,4,"pressure canner, weighted gauge",25',
+    ].join('\n');
+    const { rows, problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv })).body;
+    expect(problems).toEqual([]);
+    expect(rows.map((r: { jarSize: string; method: string }) => [r.jarSize, r.method])).toEqual([
+      ['twelve-ounce', 'boiling-water'],
+      ['twelve-ounce', 'boiling-water'],
+      ['pint-and-half', 'pressure-dial'],
+      ['half-pint', 'pressure-weighted'],
+    ]);
+    const wrong = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nHot Pepper Jelly,2025-08-30,gallon,1,1,kettle' })).body.problems;
+    expect(wrong).toEqual([
+      { row: 2, field: 'jar_size', message: 'Use one of: quarter-pint, half-pint, 12-ounce, pint, pint-and-a-half, quart, half-gallon.' },
+      { row: 2, field: 'method', message: 'Use one of: Boiling-water canner, Atmospheric steam canner, Pressure canner, dial gauge, Pressure canner, weighted gauge.' },
+    ]);
+  });
+
+  it('adds a product the household does not have when the row gives its kind', async () => {
+    const other = await freshHousehold('new-product');
+    const csv = 'product,kind,canned_on,jar_size,jars_filled,jars_sealed,method,minutes\nQuince Paste,Fruit butter,2025-10-01,half-pint,4,3,Boiling-water canner,10';
+    expect((await other.agent.post(`${other.base}/shelf/import`).send({ csv, commit: true })).status).toBe(201);
+    const products = (await other.agent.get(`${other.base}/products`)).body.products as { name: string; kind: string }[];
+    expect(products).toEqual([expect.objectContaining({ name: 'Quince Paste', kind: 'fruit-butter' })]);
+  });
+
+  it('takes the formula guard off again, so a guarded name matches its product', async () => {
+    const cook = await ctx.signedIn('cook@larderly.test');
+    const csv = `product,canned_on,jar_size,jars_filled,jars_sealed,method\n"'=Hot Pepper Jelly",2025-08-30,pint,1,1,boiling-water`;
+    const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv })).body;
+    // "=Hot Pepper Jelly" is not a product here: the apostrophe the export adds is not part of the name.
+    expect(problems).toEqual([expect.objectContaining({ field: 'product', message: expect.stringContaining('“=Hot Pepper Jelly”') })]);
+  });
+});
+
+describe('one limit per value', () => {
+  it('refuses minutes and jars past the shared limits, naming them', async () => {
+    const cook = await ctx.signedIn('cook@larderly.test');
+    const header = 'product,canned_on,jar_size,jars_filled,jars_sealed,method,minutes';
+    const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: `${header}\nHot Pepper Jelly,2025-08-30,pint,201,1,boiling-water,1201` })).body;
+    expect(problems).toEqual([
+      { row: 2, field: 'minutes', message: 'Use at most 1,200 minutes.' },
+      { row: 2, field: 'jars_filled', message: 'Use at most 200 jars.' },
+    ]);
+  });
+});
+
+describe('CSV import limits', () => {
+  it('limits checks and imports per person', async () => {
+    const other = await freshHousehold('import-limit');
+    const statuses: number[] = [];
+    for (let i = 0; i < 61; i += 1) statuses.push((await other.agent.post(`${other.base}/shelf/import`).send({ csv: 'x' })).status);
+    expect(statuses.slice(0, 60).every((status) => status === 200)).toBe(true);
+    const refused = await other.agent.post(`${other.base}/shelf/import`).send({ csv: 'x' });
+    expect(refused.status).toBe(429);
+    expect(refused.body.error.message).toBe('Too many CSV imports and checks. Wait 60 minutes, then try again.');
   });
 });

@@ -1,19 +1,63 @@
 import Papa from 'papaparse';
-import type { Household } from '../../db/models';
+import type { ProductKind } from '../../../shared/domain';
+import { csvChoiceWords } from '../../../shared/words';
+import { Batch, type Household } from '../../db/models';
+import { CSV_WRITE_OPTIONS, guardCell } from './csv-cells';
 import { listJars } from './jars';
 
-const COLUMNS = ['jar_code', 'product', 'kind', 'state', 'canned_on', 'jar_size', 'best_by', 'opened_on', 'use_by', 'finished_on', 'discarded_on', 'unsealed', 'past_best_quality', 'batch_notes'] as const;
+/** One row a jar; the batch import reads these columns back (see shared/words/csv.ts). */
+export const SHELF_COLUMNS = [
+  'batch',
+  'jar_code',
+  'product',
+  'kind',
+  'state',
+  'canned_on',
+  'jar_size',
+  'method',
+  'minutes',
+  'best_by',
+  'opened_on',
+  'use_by',
+  'finished_on',
+  'discarded_on',
+  'unsealed',
+  'past_best_quality',
+  'batch_notes',
+] as const;
 
-/** A spreadsheet runs a cell that starts like a formula; a leading apostrophe keeps it text. */
-function safeCell(value: string): string {
-  return /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
-}
-
-/** The shelf as CSV, one row a jar: sealed and opened jars, or every jar ever made. */
+/** The shelf as CSV, one row a jar: sealed and opened jars, or every jar ever made. Sizes, canners and kinds in the screens' words. */
 export async function shelfCsv(household: Household, everyJar: boolean) {
   const jars = await listJars(household, { state: everyJar ? 'all' : undefined });
-  const rows = jars.map((jar) =>
-    [jar.code, jar.productName, jar.productKind, jar.state, jar.cannedOn, jar.jarSize, jar.bestBy, jar.openedOn ?? '', jar.useBy ?? '', jar.finishedOn ?? '', jar.discardedOn ?? '', jar.unsealed ? 'yes' : 'no', jar.pastBestQuality ? 'yes' : 'no', jar.batchNotes].map(safeCell),
+  const batches = new Map(
+    (await Batch.findAll({ where: { householdId: household.id }, attributes: ['id', 'method', 'minutes'] })).map(
+      (b) => [b.id, b],
+    ),
   );
-  return Papa.unparse({ fields: [...COLUMNS], data: rows }, { newline: '\r\n' });
+  // Rows of one batch share a number, counted in the order the batches first appear.
+  const batchNumbers = new Map<string, number>();
+  const rows = jars.map((jar) => {
+    if (!batchNumbers.has(jar.batchId)) batchNumbers.set(jar.batchId, batchNumbers.size + 1);
+    const batch = batches.get(jar.batchId)!;
+    return [
+      String(batchNumbers.get(jar.batchId)),
+      jar.code,
+      jar.productName,
+      csvChoiceWords('kind', jar.productKind as ProductKind),
+      jar.state,
+      jar.cannedOn,
+      csvChoiceWords('jar_size', jar.jarSize),
+      csvChoiceWords('method', batch.method),
+      batch.minutes === null ? '' : String(batch.minutes),
+      jar.bestBy,
+      jar.openedOn ?? '',
+      jar.useBy ?? '',
+      jar.finishedOn ?? '',
+      jar.discardedOn ?? '',
+      jar.unsealed ? 'yes' : 'no',
+      jar.pastBestQuality ? 'yes' : 'no',
+      jar.batchNotes,
+    ].map(guardCell);
+  });
+  return Papa.unparse({ fields: [...SHELF_COLUMNS], data: rows }, CSV_WRITE_OPTIONS);
 }

@@ -3,9 +3,38 @@ import type { ImportProblem, ImportRow } from '@shared/schemas/batches';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCommitImport, usePreviewImport } from '../api/import-batches';
-import { dateWords, jarSizeWords } from '@shared/words';
+import { CSV_IMPORT_COLUMNS, csvChoiceList, dateWords, jarSizeWords } from '@shared/words';
 
 const EXAMPLE = 'product,recipe,canned_on,jar_size,jars_filled,jars_sealed,method,minutes,notes';
+const NEEDED = {
+  always: 'needed',
+  'batch rows': 'needed, one row a batch',
+  'jar rows': 'needed, one row a jar',
+  no: 'may be empty',
+} as const;
+
+/** The columns the import reads and the values each takes, from the same words the export writes. */
+function ImportColumns() {
+  return (
+    <details className="rounded-card border border-line bg-surface p-3">
+      <summary className="cursor-pointer font-bold">Columns and accepted values</summary>
+      <dl className="mt-2 flex flex-col gap-2">
+        {CSV_IMPORT_COLUMNS.map((c) => (
+          <div key={c.column}>
+            <dt>
+              <code className="rounded bg-sunken px-1">{c.column}</code>{' '}
+              <span className="text-ink-muted">({NEEDED[c.needed]})</span>
+            </dt>
+            <dd>
+              {c.says}
+              {c.choices && <> One of: {csvChoiceList(c.choices)} Capitals do not matter.</>}
+            </dd>
+          </div>
+        ))}
+      </dl>
+    </details>
+  );
+}
 
 /** Choose a file, see every row checked, then write all of it or none of it. */
 export function CsvImport({ hid }: { hid: string }) {
@@ -27,13 +56,20 @@ export function CsvImport({ hid }: { hid: string }) {
   return (
     <div className="flex flex-col gap-3">
       <p className="text-ink-muted">
-        A CSV with the header <code className="break-all rounded bg-sunken px-1">{EXAMPLE}</code>. Recipe, minutes and notes may be empty; where a recipe is named, its
-        plan is worked out for your altitude.
+        A CSV with the header <code className="break-all rounded bg-sunken px-1">{EXAMPLE}</code>. Recipe, minutes and
+        notes may be empty; where a recipe is named, its plan is worked out for your altitude. The shelf’s own CSV
+        export (one row a jar) imports as it is, into this household or another.
       </p>
+      <ImportColumns />
       <div>
         <label className="inline-flex min-h-11 cursor-pointer items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken">
           {fileName ? `Choose another file (${fileName})` : 'Choose a CSV file'}
-          <input type="file" accept=".csv,text/csv" className="sr-only" onChange={(e) => void choose(e.target.files?.[0])} />
+          <input
+            type="file"
+            accept=".csv,text/csv"
+            className="sr-only"
+            onChange={(e) => void choose(e.target.files?.[0])}
+          />
         </label>
       </div>
       {preview.error && (
@@ -42,7 +78,11 @@ export function CsvImport({ hid }: { hid: string }) {
         </Notice>
       )}
       {result && result.problems.length > 0 && (
-        <Notice tone="past" role="alert" title={`Nothing can be imported until ${result.problems.length === 1 ? 'this is' : 'these are'} fixed`}>
+        <Notice
+          tone="past"
+          role="alert"
+          title={`Nothing can be imported until ${result.problems.length === 1 ? 'this is' : 'these are'} fixed`}
+        >
           <ul className="list-disc pl-5">
             {result.problems.map((p) => (
               <li key={`${p.row}-${p.field}-${p.message}`}>
