@@ -1,2 +1,2 @@
 // What other features may use of the signed-in person.
-export { authKeys, useMe } from './api/get-me';
+export { useMe } from './api/get-me';

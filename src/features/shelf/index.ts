@@ -1,4 +1,3 @@
 // What other features may use of the shelf.
-export { shelfKeys } from './api/keys';
 export { actOnJar } from './api/act-on-jar';
 export { useOfferJarUndo } from './api/undo-jar-change';

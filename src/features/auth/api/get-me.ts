@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MeResponse } from '@shared/schemas/auth';
 import { api, ApiError } from '@/lib/api-client';
-
-export const authKeys = { me: ['auth', 'me'] as const };
+import { authKeys } from '@/lib/query-keys';
 
 /** The signed-in person and their households; null when signed out. */
 export async function getMe(): Promise<MeResponse | null> {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { authKeys } from './get-me';
+import { authKeys } from '@/lib/query-keys';
 
 export const logout = () => api.post<void>('/auth/logout');
 

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ImportResult } from '@shared/schemas/backup';
-import { authKeys } from '@/features/auth';
+import { authKeys } from '@/lib/query-keys';
 import { api } from '@/lib/api-client';
 
 export const importHousehold = (backup: unknown) => api.post<ImportResult>('/households/import', backup);

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { FridgeView } from '@shared/schemas/fridge';
 import { actOnJar, useOfferJarUndo } from '@/features/shelf';
-import { fridgeKeys } from './get-fridge';
+import { useOptimisticCache } from '@/lib/optimistic';
+import { fridgeKeys, householdKeys } from '@/lib/query-keys';
 
 export type ClosingAction = 'finish' | 'discard';
 
@@ -9,19 +10,15 @@ export type ClosingAction = 'finish' | 'discard';
 export function useCloseJar(hid: string) {
   const queryClient = useQueryClient();
   const offerUndo = useOfferJarUndo(hid);
+  const optimistic = useOptimisticCache<FridgeView, { jarId: string }>({
+    key: fridgeKeys.fridge(hid),
+    edit: (fridge, { jarId }) => ({ ...fridge, jars: fridge.jars.filter((j) => j.jarId !== jarId) }),
+    // The shelf, Today and the week all count this jar, so every household query refreshes.
+    refresh: () => queryClient.invalidateQueries({ queryKey: householdKeys.all(hid) }),
+  });
   return useMutation({
     mutationFn: ({ jarId, action }: { jarId: string; action: ClosingAction }) => actOnJar(hid, jarId, action),
-    onMutate: async ({ jarId }) => {
-      await queryClient.cancelQueries({ queryKey: fridgeKeys.fridge(hid) });
-      const before = queryClient.getQueryData<FridgeView>(fridgeKeys.fridge(hid));
-      if (before) queryClient.setQueryData(fridgeKeys.fridge(hid), { ...before, jars: before.jars.filter((j) => j.jarId !== jarId) });
-      return { before };
-    },
-    onError: (_error, _input, context) => {
-      if (context?.before) queryClient.setQueryData(fridgeKeys.fridge(hid), context.before);
-    },
+    ...optimistic,
     onSuccess: (acted, { action }) => offerUndo(action, acted),
-    // The shelf, Today and the week all count this jar, so every household query refreshes.
-    onSettled: () => queryClient.invalidateQueries({ queryKey: ['households', hid] }),
   });
 }

@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { FridgeView } from '@shared/schemas/fridge';
 import { api } from '@/lib/api-client';
-
-export const fridgeKeys = { fridge: (hid: string) => ['households', hid, 'fridge'] as const };
+import { fridgeKeys } from '@/lib/query-keys';
 
 export const getFridge = (hid: string) => api.get<FridgeView>(`/households/${hid}/fridge`);
 

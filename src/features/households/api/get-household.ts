@@ -1,12 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { HouseholdView, MemberView } from '@shared/schemas/households';
 import { api } from '@/lib/api-client';
-
-export const householdKeys = {
-  all: (hid: string) => ['households', hid] as const,
-  detail: (hid: string) => ['households', hid, 'detail'] as const,
-  members: (hid: string) => ['households', hid, 'members'] as const,
-};
+import { householdKeys } from '@/lib/query-keys';
 
 export const getHousehold = (hid: string) => api.get<{ household: HouseholdView }>(`/households/${hid}`).then((r) => r.household);
 

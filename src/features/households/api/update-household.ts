@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { HouseholdPatch, HouseholdView } from '@shared/schemas/households';
-import { authKeys } from '@/features/auth';
+import { authKeys } from '@/lib/query-keys';
 import { api } from '@/lib/api-client';
-import { householdKeys } from './get-household';
+import { householdKeys } from '@/lib/query-keys';
 
 export const updateHousehold = (hid: string, patch: HouseholdPatch) =>
   api.patch<{ household: HouseholdView }>(`/households/${hid}`, patch).then((r) => r.household);

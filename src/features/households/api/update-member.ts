@@ -2,8 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MemberView } from '@shared/schemas/households';
 import type { Role } from '@shared/roles';
 import { api } from '@/lib/api-client';
-import { authKeys } from '@/features/auth';
-import { householdKeys } from './get-household';
+import { authKeys } from '@/lib/query-keys';
+import { householdKeys } from '@/lib/query-keys';
 
 export const updateMemberRole = (hid: string, userId: string, role: Role) =>
   api.patch<{ members: MemberView[] }>(`/households/${hid}/members/${userId}`, { role }).then((r) => r.members);

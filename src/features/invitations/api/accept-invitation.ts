@@ -1,14 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { AcceptedInvitation, InvitationPreview } from '@shared/schemas/invitations';
-import { authKeys } from '@/features/auth';
+import { authKeys, invitationKeys } from '@/lib/query-keys';
 import { api } from '@/lib/api-client';
-
-export const invitationPreviewKey = (token: string) => ['invitations', 'preview', token] as const;
 
 /** Who invited whom, to which household, and whether the link still works. */
 export const getInvitationPreview = (token: string) => api.get<{ invitation: InvitationPreview }>(`/invitations/${encodeURIComponent(token)}`).then((r) => r.invitation);
 
-export const invitationPreviewQueryOptions = (token: string) => queryOptions({ queryKey: invitationPreviewKey(token), queryFn: () => getInvitationPreview(token), retry: false });
+export const invitationPreviewQueryOptions = (token: string) => queryOptions({ queryKey: invitationKeys.preview(token), queryFn: () => getInvitationPreview(token), retry: false });
 
 export const useInvitationPreview = (token: string) => useQuery(invitationPreviewQueryOptions(token));
 
@@ -22,6 +20,6 @@ export function useAcceptInvitation(token: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: AcceptInput) => acceptInvitation(token, input),
-    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: authKeys.me }), queryClient.invalidateQueries({ queryKey: invitationPreviewKey(token) })]),
+    onSuccess: () => Promise.all([queryClient.invalidateQueries({ queryKey: authKeys.me }), queryClient.invalidateQueries({ queryKey: invitationKeys.preview(token) })]),
   });
 }

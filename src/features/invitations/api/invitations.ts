@@ -1,8 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { InvitationBody, InvitationView } from '@shared/schemas/invitations';
 import { api } from '@/lib/api-client';
-
-export const invitationKeys = { pending: (hid: string) => ['households', hid, 'invitations'] as const };
+import { invitationKeys } from '@/lib/query-keys';
 
 export const getInvitations = (hid: string) => api.get<{ invitations: InvitationView[] }>(`/households/${hid}/invitations`).then((r) => r.invitations);
 

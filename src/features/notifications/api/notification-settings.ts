@@ -1,8 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { NotificationPatch, NotificationSettings } from '@shared/schemas/notifications';
 import { api } from '@/lib/api-client';
-
-export const notificationKeys = { settings: ['me', 'notifications'] as const };
+import { useOptimisticCache } from '@/lib/optimistic';
+import { notificationKeys } from '@/lib/query-keys';
 
 export const getNotificationSettings = () => api.get<{ settings: NotificationSettings }>('/me/notifications').then((r) => r.settings);
 
@@ -14,18 +14,11 @@ export const updateNotificationSettings = (patch: NotificationPatch) => api.patc
 
 export function useUpdateNotificationSettings() {
   const queryClient = useQueryClient();
+  const optimistic = useOptimisticCache<NotificationSettings, NotificationPatch>({ key: notificationKeys.settings, edit: (settings, patch) => ({ ...settings, ...patch }) });
   return useMutation({
     mutationFn: updateNotificationSettings,
     // The choice shows at once; a refusal puts the saved settings back.
-    onMutate: async (patch: NotificationPatch) => {
-      await queryClient.cancelQueries({ queryKey: notificationKeys.settings });
-      const before = queryClient.getQueryData<NotificationSettings>(notificationKeys.settings);
-      if (before) queryClient.setQueryData(notificationKeys.settings, { ...before, ...patch });
-      return { before };
-    },
-    onError: (_error, _patch, context) => {
-      if (context?.before) queryClient.setQueryData(notificationKeys.settings, context.before);
-    },
+    ...optimistic,
     onSuccess: (settings) => queryClient.setQueryData(notificationKeys.settings, settings),
   });
 }

@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { RestockView } from '@shared/schemas/restock';
 import { api } from '@/lib/api-client';
-
-export const restockKeys = { list: (hid: string) => ['households', hid, 'restock'] as const };
+import { restockKeys } from '@/lib/query-keys';
 
 export const getRestock = (hid: string) => api.get<RestockView>(`/households/${hid}/restock`);
 

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProductPatch, ProductView } from '@shared/schemas/products';
-import { shelfKeys } from '@/features/shelf';
+import { shelfKeys } from '@/lib/query-keys';
 import { refreshPlanning } from '@/features/todos';
 import { api } from '@/lib/api-client';
 

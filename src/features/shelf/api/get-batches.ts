@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { BatchDetail, BatchView } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 export const getBatches = (hid: string) => api.get<{ batches: BatchView[] }>(`/households/${hid}/batches`).then((r) => r.batches);
 export const batchesQueryOptions = (hid: string) => queryOptions({ queryKey: shelfKeys.batches(hid), queryFn: () => getBatches(hid) });

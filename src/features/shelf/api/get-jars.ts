@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { JarView } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 type JarFilter = 'on-hand' | 'sealed' | 'opened' | 'all';
 

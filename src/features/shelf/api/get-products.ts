@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { ProductView } from '@shared/schemas/products';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 export const getProducts = (hid: string) => api.get<{ products: ProductView[] }>(`/households/${hid}/products`).then((r) => r.products);
 

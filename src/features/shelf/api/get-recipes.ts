@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 export const getRecipes = (hid: string) => api.get<{ recipes: RecipeView[] }>(`/households/${hid}/recipes`).then((r) => r.recipes);
 export const recipesQueryOptions = (hid: string) => queryOptions({ queryKey: shelfKeys.recipes(hid), queryFn: () => getRecipes(hid) });

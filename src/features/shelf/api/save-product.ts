@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProductCreate, ProductView } from '@shared/schemas/products';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 export const saveProduct = (hid: string, productId: string | undefined, product: ProductCreate) =>
   (productId ? api.patch<{ product: ProductView }>(`/households/${hid}/products/${productId}`, product) : api.post<{ product: ProductView }>(`/households/${hid}/products`, product)).then((r) => r.product);

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { RecipeCreate, RecipeView } from '@shared/schemas/recipes';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 export const saveRecipe = (hid: string, recipeId: string | undefined, recipe: RecipeCreate) =>
   (recipeId ? api.patch<{ recipe: RecipeView }>(`/households/${hid}/recipes/${recipeId}`, recipe) : api.post<{ recipe: RecipeView }>(`/households/${hid}/recipes`, recipe)).then((r) => r.recipe);

@@ -4,7 +4,7 @@ import { dateWords } from '@shared/words';
 import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
 import { useUndoToast } from '@/components/ui/undo-toast';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { householdKeys, shelfKeys } from '@/lib/query-keys';
 
 /** Reverses one open, finish or discard on the server; the jar's history keeps both. */
 export const undoJarChange = (hid: string, jarId: string, eventId: string) => api.post<JarActed>(`/households/${hid}/jars/${jarId}/undo`, { eventId });
@@ -15,7 +15,7 @@ function useRefreshJarViews(hid: string) {
   return useCallback(
     () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: ['households', hid] }),
+        queryClient.invalidateQueries({ queryKey: householdKeys.all(hid) }),
         queryClient.invalidateQueries({ queryKey: shelfKeys.jarsByCode() }),
       ]),
     [hid, queryClient],

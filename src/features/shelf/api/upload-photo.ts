@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BatchDetail } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
-import { shelfKeys } from './keys';
+import { shelfKeys } from '@/lib/query-keys';
 
 export function uploadBatchPhoto(hid: string, batchId: string, photo: File) {
   const form = new FormData();

@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { TodayView } from '@shared/schemas/today';
 import { api } from '@/lib/api-client';
-
-export const todayKeys = { view: (hid: string) => ['households', hid, 'today'] as const };
+import { todayKeys } from '@/lib/query-keys';
 
 export const getToday = (hid: string) => api.get<TodayView>(`/households/${hid}/today`);
 

@@ -1,11 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { TodoFilter, TodoView } from '@shared/schemas/todos';
 import { api } from '@/lib/api-client';
-
-export const todoKeys = {
-  all: (hid: string) => ['households', hid, 'todos'] as const,
-  list: (hid: string, filter: TodoFilter) => ['households', hid, 'todos', filter] as const,
-};
+import { todoKeys } from '@/lib/query-keys';
 
 export const getTodos = (hid: string, filter: TodoFilter) => api.get<{ todos: TodoView[] }>(`/households/${hid}/todos?filter=${filter}`).then((r) => r.todos);
 

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { TodoFilter, TodoView } from '@shared/schemas/todos';
-import { todoKeys } from './get-todos';
+import { useOptimisticCache } from '@/lib/optimistic';
+import { todoKeys } from '@/lib/query-keys';
 import { refreshPlanning } from './refresh-planning';
 import { updateTodo } from './update-todo';
 
@@ -15,18 +16,10 @@ interface Move {
 /** Drag and drop: the list shows the new order at once and goes back if the server refuses. */
 export function useMoveTodo(hid: string, filter: TodoFilter) {
   const queryClient = useQueryClient();
-  const key = todoKeys.list(hid, filter);
-  return useMutation({
-    mutationFn: ({ id, position }: Move) => updateTodo(hid, id, { position }),
-    onMutate: async ({ reordered }: Move) => {
-      await queryClient.cancelQueries({ queryKey: key });
-      const before = queryClient.getQueryData<TodoView[]>(key);
-      queryClient.setQueryData(key, reordered);
-      return { before };
-    },
-    onError: (_error, _move, context) => {
-      if (context?.before) queryClient.setQueryData(key, context.before);
-    },
-    onSettled: () => refreshPlanning(queryClient, hid),
+  const optimistic = useOptimisticCache<TodoView[], Move>({
+    key: todoKeys.list(hid, filter),
+    edit: (_list, { reordered }) => reordered,
+    refresh: () => refreshPlanning(queryClient, hid),
   });
+  return useMutation({ mutationFn: ({ id, position }: Move) => updateTodo(hid, id, { position }), ...optimistic });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { WeekCopy } from '@shared/schemas/week';
 import { api } from '@/lib/api-client';
-import { weekKeys } from './keys';
+import { weekKeys } from '@/lib/query-keys';
 
 export const copyWeek = (hid: string, copy: WeekCopy) => api.post<{ copied: number }>(`/households/${hid}/week/copy`, copy);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MealBody, MealView } from '@shared/schemas/week';
 import { api } from '@/lib/api-client';
-import { weekKeys } from './keys';
+import { weekKeys } from '@/lib/query-keys';
 
 export const createMeal = (hid: string, meal: MealBody) => api.post<{ meal: MealView }>(`/households/${hid}/meals`, meal).then((r) => r.meal);
 

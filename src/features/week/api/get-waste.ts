@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { WasteFigure } from '@shared/schemas/week-proposal';
 import { api } from '@/lib/api-client';
-import { weekKeys } from './keys';
+import { weekKeys } from '@/lib/query-keys';
 
 export const getWaste = (hid: string, start: string) => api.get<WasteFigure>(`/households/${hid}/week/waste?start=${start}`);
 

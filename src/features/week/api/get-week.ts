@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { WeekView } from '@shared/schemas/week';
 import { api } from '@/lib/api-client';
-import { weekKeys } from './keys';
+import { weekKeys } from '@/lib/query-keys';
 
 export const getWeek = (hid: string, start: string) => api.get<WeekView>(`/households/${hid}/week?start=${start}`);
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PreferencesPatch } from '@shared/schemas/week';
 import { api } from '@/lib/api-client';
-import { weekKeys } from './keys';
+import { weekKeys } from '@/lib/query-keys';
 
 export const updatePreferences = (hid: string, userId: string, patch: PreferencesPatch) => api.patch(`/households/${hid}/members/${userId}/preferences`, patch);
 
