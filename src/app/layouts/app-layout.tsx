@@ -7,6 +7,7 @@ import { useLogout } from '@/features/auth/api/logout';
 import { SetupBanner } from '@/features/households/components/setup-banner';
 import { HouseholdSwitcher } from '@/features/households/components/household-switcher';
 import { rememberHousehold, useCurrentHousehold } from '@/features/households/use-current-household';
+import { paths } from '@/lib/paths';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `flex min-h-11 items-center gap-3 rounded-lg px-3 font-bold ${isActive ? 'bg-action text-white' : 'text-ink hover:bg-sunken'}`;
@@ -24,10 +25,10 @@ export function AppLayout() {
   }, [hid, membership]);
 
   if (!me) return null;
-  if (!membership) return <Navigate to="/" replace />;
+  if (!membership) return <Navigate to={paths.home()} replace />;
 
-  const signOut = () => logout.mutate(undefined, { onSuccess: () => navigate('/sign-in', { replace: true }) });
-  const href = (path: string) => `/h/${hid}${path ? `/${path}` : ''}`;
+  const signOut = () => logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn(), { replace: true }) });
+  const href = (path: string) => paths.screen(hid, path);
 
   return (
     <div className="min-h-dvh lg:grid lg:grid-cols-[16rem_1fr]">

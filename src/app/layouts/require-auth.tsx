@@ -1,6 +1,7 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/get-me';
 import { Notice } from '@/components/ui/notice';
+import { paths } from '@/lib/paths';
 
 /** Signed-in screens only: anyone else goes to sign-in and comes back here afterwards. */
 export function RequireAuth() {
@@ -16,6 +17,6 @@ export function RequireAuth() {
       </div>
     );
   }
-  if (!me) return <Navigate to={`/sign-in?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
+  if (!me) return <Navigate to={paths.signIn(location.pathname + location.search)} replace />;
   return <Outlet />;
 }

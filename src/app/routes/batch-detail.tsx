@@ -6,6 +6,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { BatchDetailView } from '@/features/shelf/components/batch-detail';
 import { dateWords } from '@shared/words';
+import { paths } from '@/lib/paths';
 
 export function BatchDetailRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -18,7 +19,7 @@ export function BatchDetailRoute() {
         title={batch.data ? batch.data.productName : 'Batch'}
         lead={batch.data ? `Canned ${dateWords(batch.data.cannedOn)}` : undefined}
         actions={
-          <Link to={`/h/${hid}/batches`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+          <Link to={paths.batches(hid)} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
             All batches
           </Link>
         }
@@ -30,7 +31,7 @@ export function BatchDetailRoute() {
             {params.get('todoId') && (
               <>
                 {' '}
-                <Link to={`/h/${hid}/todo?open=${params.get('todoId')}`} className="font-bold text-action underline">
+                <Link to={paths.todo(hid, params.get('todoId'))} className="font-bold text-action underline">
                   Back to the to-do
                 </Link>
               </>

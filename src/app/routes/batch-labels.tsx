@@ -4,6 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { LabelSheet, type Paper } from '@/features/shelf/components/label-sheet';
 import { dateWords } from '@shared/words';
+import { paths } from '@/lib/paths';
 
 /** A page of its own, outside the app's navigation, so it prints as nothing but labels. */
 export function BatchLabelsRoute() {
@@ -33,7 +34,7 @@ export function BatchLabelsRoute() {
             ))}
           </div>
           <Button onClick={() => window.print()}>Print</Button>
-          <Link to={`/h/${hid}/batches/${batchId}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+          <Link to={paths.batch(hid, batchId)} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
             Back to the batch
           </Link>
         </div>

@@ -9,13 +9,14 @@ import { useProducts } from '@/features/shelf/api/get-products';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
 import { FirstProduct } from '@/features/shelf/components/first-product';
 import { NewBatchForm } from '@/features/shelf/components/new-batch-form';
+import { paths } from '@/lib/paths';
 
 export function NewBatchRoute() {
   const { hid, role } = useCurrentHousehold();
   const household = useHousehold(hid);
   const products = useProducts(hid);
   const recipes = useRecipes(hid);
-  if (role && !can(role, 'cook')) return <Navigate to={`/h/${hid}/batches`} replace />;
+  if (role && !can(role, 'cook')) return <Navigate to={paths.batches(hid)} replace />;
   const failed = household.error ?? products.error ?? recipes.error;
   return (
     <>

@@ -7,6 +7,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useBatches } from '@/features/shelf/api/get-batches';
 import { BatchLog } from '@/features/shelf/components/batch-log';
 import { CsvImport } from '@/features/shelf/components/csv-import';
+import { paths } from '@/lib/paths';
 
 export function BatchesRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -24,7 +25,7 @@ export function BatchesRoute() {
               <button type="button" aria-expanded={importing} onClick={() => setImporting((open) => !open)} className="min-h-11 rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken">
                 Import CSV
               </button>
-              <Link to={`/h/${hid}/batches/new`} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+              <Link to={paths.newBatch(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
                 Record a batch
               </Link>
             </>
@@ -45,7 +46,7 @@ export function BatchesRoute() {
       {batches.isPending ? (
         <p className="text-ink-muted">Reading the log…</p>
       ) : batches.data?.length === 0 ? (
-        <EmptyState title="No batches yet" action={canCook ? <Link to={`/h/${hid}/batches/new`} className="font-bold text-action underline">Record your first batch</Link> : undefined}>
+        <EmptyState title="No batches yet" action={canCook ? <Link to={paths.newBatch(hid)} className="font-bold text-action underline">Record your first batch</Link> : undefined}>
           Your first batch will show its processing plan for your altitude here.
         </EmptyState>
       ) : (

@@ -3,6 +3,7 @@ import { Card, EmptyState, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useCaughtMail } from '@/features/invitations/api/caught-mail';
+import { paths } from '@/lib/paths';
 
 /** Development only: what Larderly sent, as the local mail catcher received it. */
 export function DevMailRoute() {
@@ -14,7 +15,7 @@ export function DevMailRoute() {
         title="Caught mail"
         lead="In development Larderly sends e-mail to a local catcher instead of real mailboxes. Newest first."
         actions={
-          <Link to={`/h/${hid}/household`} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold">
+          <Link to={paths.household(hid)} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold">
             Back to Household
           </Link>
         }

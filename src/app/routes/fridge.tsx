@@ -6,6 +6,7 @@ import { useCloseJar } from '@/features/fridge/api/close-jar';
 import { useFridge } from '@/features/fridge/api/get-fridge';
 import { FridgeJarCard } from '@/features/fridge/components/fridge-jar-card';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { paths } from '@/lib/paths';
 
 export function FridgeRoute() {
   const { hid } = useCurrentHousehold();
@@ -37,7 +38,7 @@ export function FridgeRoute() {
           title="No jars are open"
           action={
             <Link
-              to={`/h/${hid}/shelf`}
+              to={paths.shelf(hid)}
               className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white"
             >
               Go to the shelf

@@ -2,6 +2,7 @@ import { Navigate } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/page';
 import { useMe } from '@/features/auth/api/get-me';
 import { lastHousehold } from '@/features/households/use-current-household';
+import { paths } from '@/lib/paths';
 
 /** Opens the household used last, or the first one. */
 export function HomeRedirect() {
@@ -16,5 +17,5 @@ export function HomeRedirect() {
       </main>
     );
   }
-  return <Navigate to={`/h/${target.householdId}`} replace />;
+  return <Navigate to={paths.today(target.householdId)} replace />;
 }

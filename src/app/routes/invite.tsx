@@ -9,6 +9,7 @@ import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/features/auth/api/get-me';
 import { useAcceptInvitation, useInvitationPreview, type AcceptInput } from '@/features/invitations/api/accept-invitation';
 import { ApiError } from '@/lib/api-client';
+import { paths } from '@/lib/paths';
 
 function lead(invitation: InvitationPreview | undefined) {
   if (!invitation) return 'An invitation to share a shelf, a fridge and a week of meals on Larderly.';
@@ -27,7 +28,7 @@ export function InviteRoute() {
   const [password, setPassword] = useState('');
   const error = accept.error instanceof ApiError ? accept.error : null;
   const invitation = preview.data;
-  const joined = (input?: AcceptInput) => accept.mutate(input, { onSuccess: (accepted) => navigate(`/h/${accepted.householdId}`, { replace: true }) });
+  const joined = (input?: AcceptInput) => accept.mutate(input, { onSuccess: (accepted) => navigate(paths.today(accepted.householdId), { replace: true }) });
 
   function createAccount(event: FormEvent) {
     event.preventDefault();
@@ -52,7 +53,7 @@ export function InviteRoute() {
             <Notice tone="past" role="alert">
               {unusable}
             </Notice>
-            <Link to={me ? '/' : '/sign-in'} className="text-center font-bold text-action underline underline-offset-4">
+            <Link to={me ? paths.home() : paths.signIn()} className="text-center font-bold text-action underline underline-offset-4">
               {me ? 'Go to your households' : 'Sign in'}
             </Link>
           </>
@@ -89,7 +90,7 @@ export function InviteRoute() {
             </form>
             <p className="text-center text-ink-muted">
               Already have an account?{' '}
-              <Link to={`/sign-in?next=${encodeURIComponent(`/invite/${token}`)}`} className="font-bold text-action underline underline-offset-4">
+              <Link to={paths.signIn(paths.invitation(token))} className="font-bold text-action underline underline-offset-4">
                 Sign in to join
               </Link>
             </p>

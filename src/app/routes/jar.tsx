@@ -10,6 +10,7 @@ import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
 import { dateWords, jarSizeWords } from '@shared/words';
+import { paths } from '@/lib/paths';
 
 /** What a label's QR code opens: the jar, found by its code in whichever household of yours holds it. */
 export function JarRoute() {
@@ -19,12 +20,12 @@ export function JarRoute() {
   return (
     <main className="mx-auto flex min-h-dvh max-w-lg flex-col gap-5 p-4">
       <header className="flex items-center justify-between">
-        <Link to="/" aria-label="Larderly home">
+        <Link to={paths.home()} aria-label="Larderly home">
           <Brand />
         </Link>
         {found.data && (
           <Link
-            to={`/h/${found.data.householdId}/shelf`}
+            to={paths.shelf(found.data.householdId)}
             className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft"
           >
             {found.data.householdName}’s shelf
@@ -63,7 +64,7 @@ export function JarRoute() {
             canCook={can(found.data.role, 'cook')}
           />
           <Link
-            to={`/h/${found.data.householdId}/batches/${jar.batchId}`}
+            to={paths.batch(found.data.householdId, jar.batchId)}
             className="font-bold text-action underline underline-offset-4"
           >
             The whole batch

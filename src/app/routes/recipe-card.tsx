@@ -6,6 +6,7 @@ import { useHousehold } from '@/features/households/api/get-household';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useRecipe } from '@/features/shelf/api/get-recipes';
 import { RecipeCard } from '@/features/shelf/components/recipe-card';
+import { paths } from '@/lib/paths';
 
 export function RecipeCardRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -19,7 +20,7 @@ export function RecipeCardRoute() {
         lead={recipe.data ? `For ${recipe.data.productName}` : undefined}
         actions={
           can(role, 'cook') && recipe.data ? (
-            <Link to={`/h/${hid}/recipes/${recipeId}/edit`} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken">
+            <Link to={paths.editRecipe(hid, recipeId)} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken">
               Edit
             </Link>
           ) : undefined

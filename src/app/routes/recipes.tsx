@@ -5,6 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
+import { paths } from '@/lib/paths';
 
 export function RecipesRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -17,7 +18,7 @@ export function RecipesRoute() {
         lead="Tested recipes, scaled to the jars you want without weakening their acid."
         actions={
           canCook && (
-            <Link to={`/h/${hid}/recipes/new`} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+            <Link to={paths.newRecipe(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
               New recipe
             </Link>
           )
@@ -36,7 +37,7 @@ export function RecipesRoute() {
         <ul className="grid gap-3 sm:grid-cols-2">
           {recipes.data?.map((recipe) => (
             <li key={recipe.id}>
-              <Link to={`/h/${hid}/recipes/${recipe.id}`} className="flex h-full flex-col gap-1 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
+              <Link to={paths.recipe(hid, recipe.id)} className="flex h-full flex-col gap-1 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
                 <span className="text-lg font-bold">{recipe.name}</span>
                 <span className="text-ink-muted">for {recipe.productName}</span>
                 <span className="text-[0.95rem]">

@@ -5,10 +5,11 @@ import { Notice } from '@/components/ui/notice';
 import { useHousehold } from '@/features/households/api/get-household';
 import { FirstRunForm } from '@/features/households/components/first-run-form';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { paths } from '@/lib/paths';
 
 /** Only addresses inside this household are followed back, so the page cannot be used to send someone elsewhere. */
 function safeBack(hid: string, back: string | null) {
-  return back && back.startsWith(`/h/${hid}`) ? back : `/h/${hid}`;
+  return back && back.startsWith(paths.today(hid)) ? back : paths.today(hid);
 }
 
 export function SetupRoute() {
@@ -16,7 +17,7 @@ export function SetupRoute() {
   const household = useHousehold(hid);
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  if (role && !can(role, 'manage')) return <Navigate to={`/h/${hid}`} replace />;
+  if (role && !can(role, 'manage')) return <Navigate to={paths.today(hid)} replace />;
   return (
     <>
       <PageHeader title="Before the first plan" lead="Processing times and pressures, “today” and the week all depend on these. Answer once; change them later under Household." />

@@ -10,6 +10,7 @@ import { useProducts } from '@/features/shelf/api/get-products';
 import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
+import { paths } from '@/lib/paths';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },
@@ -45,7 +46,7 @@ export function ShelfRoute() {
               Export CSV
             </a>
             {canCook && (
-              <Link to={`/h/${hid}/products/new`} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+              <Link to={paths.newProduct(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
                 New product
               </Link>
             )}
@@ -60,7 +61,7 @@ export function ShelfRoute() {
       {jars.isPending || products.isPending ? (
         <p className="text-ink-muted">Counting jars…</p>
       ) : products.data?.length === 0 ? (
-        <EmptyState title="The shelf is empty" action={canCook ? <Link to={`/h/${hid}/products/new`} className="font-bold text-action underline">Add your first product</Link> : undefined}>
+        <EmptyState title="The shelf is empty" action={canCook ? <Link to={paths.newProduct(hid)} className="font-bold text-action underline">Add your first product</Link> : undefined}>
           Add the preserves your household makes, then record a batch: its sealed jars line up here, oldest first.
         </EmptyState>
       ) : (

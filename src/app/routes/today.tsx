@@ -11,6 +11,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useProducts } from '@/features/shelf/api/get-products';
 import { FirstProduct } from '@/features/shelf/components/first-product';
 import { can } from '@shared/roles';
+import { paths } from '@/lib/paths';
 
 export function TodayRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -34,16 +35,16 @@ export function TodayRoute() {
       )}
       {view && (
         <div className="grid gap-4 lg:grid-cols-2">
-          <TodaySection id="today-use" title="Open and use today" more={{ to: `/h/${hid}/week`, label: 'Week' }}>
+          <TodaySection id="today-use" title="Open and use today" more={{ to: paths.week(hid), label: 'Week' }}>
             <JarsForToday use={view.use} short={view.short} />
           </TodaySection>
-          <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: `/h/${hid}/fridge`, label: `All ${view.fridgeCount}` } : { to: `/h/${hid}/fridge`, label: 'Fridge' }}>
+          <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: paths.fridge(hid), label: `All ${view.fridgeCount}` } : { to: paths.fridge(hid), label: 'Fridge' }}>
             <FridgeCountdowns jars={view.fridge} />
           </TodaySection>
-          <TodaySection id="today-restock" title="Restock suggestions" more={{ to: `/h/${hid}/restock`, label: 'Restock' }}>
+          <TodaySection id="today-restock" title="Restock suggestions" more={{ to: paths.restock(hid), label: 'Restock' }}>
             <RestockGlance hid={hid} suggestions={view.restock} />
           </TodaySection>
-          <TodaySection id="today-todos" title="My to-dos" more={{ to: `/h/${hid}/todo`, label: view.openTodoCount ? `All ${view.openTodoCount} open` : 'To-do' }}>
+          <TodaySection id="today-todos" title="My to-dos" more={{ to: paths.todo(hid), label: view.openTodoCount ? `All ${view.openTodoCount} open` : 'To-do' }}>
             <MyTodos hid={hid} todos={view.myTodos} />
           </TodaySection>
         </div>

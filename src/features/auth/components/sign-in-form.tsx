@@ -5,6 +5,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useLogin } from '../api/login';
+import { paths } from '@/lib/paths';
 
 export function SignInForm() {
   const login = useLogin();
@@ -41,7 +42,7 @@ export function SignInForm() {
       </Button>
       <p className="text-center text-ink-muted">
         New here?{' '}
-        <Link to="/sign-up" className="font-bold text-action underline underline-offset-4">
+        <Link to={paths.signUp()} className="font-bold text-action underline underline-offset-4">
           Start a household
         </Link>
       </p>

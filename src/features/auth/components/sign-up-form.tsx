@@ -5,6 +5,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSignup } from '../api/signup';
+import { paths } from '@/lib/paths';
 
 export function SignUpForm() {
   const signup = useSignup();
@@ -15,7 +16,7 @@ export function SignUpForm() {
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    signup.mutate(form, { onSuccess: (me) => navigate(`/h/${me.memberships[0].householdId}/setup`, { replace: true }) });
+    signup.mutate(form, { onSuccess: (me) => navigate(paths.setup(me.memberships[0].householdId), { replace: true }) });
   }
 
   return (
@@ -50,7 +51,7 @@ export function SignUpForm() {
       </Button>
       <p className="text-center text-ink-muted">
         Already have an account?{' '}
-        <Link to="/sign-in" className="font-bold text-action underline underline-offset-4">
+        <Link to={paths.signIn()} className="font-bold text-action underline underline-offset-4">
           Sign in
         </Link>
       </p>

@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import { BACKUP_MAX_BYTES } from '@shared/choices';
 import { Notice } from '@/components/ui/notice';
 import { useImportHousehold } from '../api/import-household';
+import { paths } from '@/lib/paths';
 
 const buttonLook = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 font-bold transition-colors';
 
@@ -63,7 +64,7 @@ export function BackupPanel({ hid }: { hid: string }) {
             {result.counts.products} products, {result.counts.batches} batches, {result.counts.jars} jars, {result.counts.meals} meals and {result.counts.todos} to-dos.
             New jars have new label codes: print fresh labels from each batch.
           </p>
-          <Link to={`/h/${result.household.id}`} className="font-bold text-action underline underline-offset-4">
+          <Link to={paths.today(result.household.id)} className="font-bold text-action underline underline-offset-4">
             Open {result.household.name}
           </Link>
         </Notice>

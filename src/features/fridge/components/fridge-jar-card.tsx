@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { CountdownBadge } from '@/components/ui/countdown-badge';
 import type { ClosingAction } from '../api/close-jar';
 import { JarLevel } from './jar-level';
+import { paths } from '@/lib/paths';
 
 function estimateWords(jar: FridgeJar) {
   const round = (tbsp: number) => Math.round(tbsp * 10) / 10;
@@ -25,7 +26,7 @@ export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: Fri
         <div className="min-w-0 flex-1">
           <h2 className="text-lg font-bold">{jar.productName}</h2>
           <p className="text-sm text-ink-muted tabular">
-            <Link to={`/j/${jar.code}`} className="font-bold text-action underline underline-offset-4">
+            <Link to={paths.jar(jar.code)} className="font-bold text-action underline underline-offset-4">
               Jar {jar.code}
             </Link>{' '}
             · opened {dateWords(jar.openedOn)}, {jar.daysOpen === 0 ? 'today' : `${count(jar.daysOpen, 'day')} ago`}

@@ -4,9 +4,10 @@ import { can } from '@shared/roles';
 import { Notice } from '@/components/ui/notice';
 import { useHousehold } from '../api/get-household';
 import { useCurrentHousehold } from '../use-current-household';
+import { paths } from '@/lib/paths';
 
 export function setupHref(hid: string, back: string) {
-  return `/h/${hid}/setup?${new URLSearchParams({ back })}`;
+  return paths.setup(hid, back);
 }
 
 /** Shows what it wraps (a processing plan) only once a keeper has confirmed the household's altitude; until then, the question. */

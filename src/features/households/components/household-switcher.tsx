@@ -1,6 +1,7 @@
 import { useLocation, useNavigate } from 'react-router-dom';
 import { ROLE_LABELS } from '@shared/roles';
 import type { MembershipSummary } from '@shared/schemas/auth';
+import { paths } from '@/lib/paths';
 
 /** Moves to the same screen in another household; a plain label when there is only one. */
 export function HouseholdSwitcher({ memberships, current }: { memberships: MembershipSummary[]; current: MembershipSummary }) {
@@ -22,7 +23,7 @@ export function HouseholdSwitcher({ memberships, current }: { memberships: Membe
       <select
         className="min-h-11 max-w-[14rem] truncate rounded-lg border border-line bg-surface px-2 font-bold"
         value={current.householdId}
-        onChange={(event) => navigate(`/h/${event.target.value}${screen ? `/${screen}` : ''}`)}
+        onChange={(event) => navigate(paths.screen(event.target.value, screen))}
       >
         {memberships.map((m) => (
           <option key={m.householdId} value={m.householdId}>

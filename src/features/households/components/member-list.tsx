@@ -5,6 +5,7 @@ import type { MemberView } from '@shared/schemas/households';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useLeaveHousehold, useRemoveMember, useUpdateMemberRole } from '../api/update-member';
+import { paths } from '@/lib/paths';
 
 export function MemberList({ hid, members, canManage, myId }: { hid: string; members: MemberView[]; canManage: boolean; myId: string }) {
   const update = useUpdateMemberRole(hid);
@@ -96,7 +97,7 @@ function LeaveHousehold({ hid }: { hid: string }) {
       )}
       <p>Leave this household? You will no longer see its shelf, fridge or week, and its reminders stop. A keeper can invite you again.</p>
       <div className="flex flex-wrap gap-2">
-        <Button variant="danger" disabled={leave.isPending} onClick={() => leave.mutate(undefined, { onSuccess: () => navigate('/', { replace: true }) })}>
+        <Button variant="danger" disabled={leave.isPending} onClick={() => leave.mutate(undefined, { onSuccess: () => navigate(paths.home(), { replace: true }) })}>
           {leave.isPending ? 'Leaving…' : 'Yes, leave'}
         </Button>
         <Button variant="quiet" onClick={() => setAsking(false)}>

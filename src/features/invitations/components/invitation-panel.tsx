@@ -8,6 +8,7 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useCaughtMail } from '../api/caught-mail';
 import { useInvitations, useInvite, useRevokeInvitation } from '../api/invitations';
+import { paths } from '@/lib/paths';
 
 /** Keepers invite by e-mail with a role, see who has not joined yet and withdraw an invitation. */
 export function InvitationPanel({ hid }: { hid: string }) {
@@ -71,7 +72,7 @@ export function InvitationPanel({ hid }: { hid: string }) {
         </ul>
       </div>
       {mailbox.isSuccess && (
-        <Link to={`/h/${hid}/household/mail`} className="text-sm font-bold text-info underline underline-offset-4">
+        <Link to={paths.caughtMail(hid)} className="text-sm font-bold text-info underline underline-offset-4">
           Development: read the mail the local catcher received ({mailbox.data.length})
         </Link>
       )}

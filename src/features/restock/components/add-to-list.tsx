@@ -4,6 +4,7 @@ import type { JarSize } from '@shared/domain';
 import { JAR_SIZE_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { useAddRestockTodo } from '../api/add-restock-todo';
+import { paths } from '@/lib/paths';
 
 /** "Add a restock batch to the to-do list", with the jar count the cook may change. */
 export function AddToList({ hid, productId, productName, suggestedJars, jarSize }: { hid: string; productId: string; productName: string; suggestedJars: number; jarSize: JarSize }) {
@@ -17,7 +18,7 @@ export function AddToList({ hid, productId, productName, suggestedJars, jarSize 
     return (
       <p role="status" className="font-bold">
         On the list.{' '}
-        <Link to={`/h/${hid}/todo?open=${add.data.id}`} className="text-action underline">
+        <Link to={paths.todo(hid, add.data.id)} className="text-action underline">
           Open the batch plan
         </Link>
       </p>

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
 import { dateWords, JAR_SIZE_NAMES } from '@shared/words';
 import { AddToList } from './add-to-list';
+import { paths } from '@/lib/paths';
 
 const REASON_TITLES = { 'runs-out-soon': 'Runs out soon', 'below-minimum': 'Below your minimum' } as const;
 
@@ -24,13 +25,13 @@ export function SuggestionCard({ hid, suggestion, canCook, focused }: { hid: str
         </p>
       </div>
       {suggestion.openTodoId ? (
-        <Link to={`/h/${hid}/todo?open=${suggestion.openTodoId}`} className="inline-flex min-h-11 items-center font-bold text-action underline">
+        <Link to={paths.todo(hid, suggestion.openTodoId)} className="inline-flex min-h-11 items-center font-bold text-action underline">
           On the to-do list: open the batch plan
         </Link>
       ) : !suggestion.hasRecipe ? (
         <p>
           No recipe yet, so there is nothing to scale.{' '}
-          <Link to={`/h/${hid}/recipes/new?productId=${suggestion.productId}`} className="font-bold text-action underline">
+          <Link to={paths.newRecipe(hid, suggestion.productId)} className="font-bold text-action underline">
             Add a tested recipe
           </Link>
         </p>

@@ -6,6 +6,7 @@ import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';
 import { JarActions } from './jar-actions';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
+import { paths } from '@/lib/paths';
 
 const EVENT_WORDS: Record<string, string> = { filled: 'filled', unsealed: 'did not seal; put in the fridge', opened: 'opened', finished: 'finished', discarded: 'discarded', restored: 'put back (the change before was undone)' };
 
@@ -40,7 +41,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             <dt className="text-ink-muted">Recipe</dt>
             <dd>
               {batch.recipeId ? (
-                <Link to={`/h/${hid}/recipes/${batch.recipeId}`} className="font-bold text-action underline underline-offset-4">
+                <Link to={paths.recipe(hid, batch.recipeId)} className="font-bold text-action underline underline-offset-4">
                   {batch.recipeName}
                 </Link>
               ) : (
@@ -56,7 +57,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
         <Card>
           <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
             <h2 className="text-xl">Jars</h2>
-            <Link to={`/h/${hid}/batches/${batch.id}/labels`} className="inline-flex min-h-11 items-center rounded-lg border border-line px-4 font-bold hover:bg-sunken">
+            <Link to={paths.batchLabels(hid, batch.id)} className="inline-flex min-h-11 items-center rounded-lg border border-line px-4 font-bold hover:bg-sunken">
               Print labels
             </Link>
           </div>
@@ -65,7 +66,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
               <li key={jar.id} className="flex flex-wrap items-center justify-between gap-3 py-3">
                 <div className="flex flex-col gap-1">
                   <p className="flex flex-wrap items-center gap-2">
-                    <Link to={`/j/${jar.code}`} className="font-mono text-lg font-bold tracking-wider text-action underline underline-offset-4">
+                    <Link to={paths.jar(jar.code)} className="font-mono text-lg font-bold tracking-wider text-action underline underline-offset-4">
                       {jar.code}
                     </Link>
                     <JarStateBadge jar={jar} />

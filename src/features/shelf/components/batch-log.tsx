@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { BatchView } from '@shared/schemas/batches';
 import { dateWords, jarSizeWords, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
+import { paths } from '@/lib/paths';
 
 export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }) {
   return (
@@ -10,7 +11,7 @@ export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }
     <ul className="flex flex-col gap-3">
       {batches.map((batch) => (
         <li key={batch.id}>
-          <Link to={`/h/${hid}/batches/${batch.id}`} className="flex flex-wrap items-center justify-between gap-3 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
+          <Link to={paths.batch(hid, batch.id)} className="flex flex-wrap items-center justify-between gap-3 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
             <div>
               <p className="text-lg font-bold">{batch.productName}</p>
               <p className="tabular text-ink-muted">

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/page';
+import { paths } from '@/lib/paths';
 
 /** Where a household with no product yet is sent from every screen that needs one: to make its first. */
 export function FirstProduct({ hid, why, canCook }: { hid: string; why: string; canCook: boolean }) {
@@ -8,7 +9,7 @@ export function FirstProduct({ hid, why, canCook }: { hid: string; why: string; 
       title="Start with your first product"
       action={
         canCook ? (
-          <Link to={`/h/${hid}/products/new`} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+          <Link to={paths.newProduct(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
             Add a product
           </Link>
         ) : undefined

@@ -14,6 +14,7 @@ import { ApiError } from '@/lib/api-client';
 import { useCreateBatch } from '../api/create-batch';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
+import { paths } from '@/lib/paths';
 
 /** The household's today, as YYYY-MM-DD: the canning day the server checks against. */
 
@@ -59,7 +60,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
     if (!recipe || !plan?.allowed) return;
     create.mutate(
       { productId, recipeId: recipe.id, cannedOn, jarSize, jarsFilled: filled, jarsSealed: sealed, method, notes },
-      { onSuccess: (created) => navigate(`/h/${household.id}/batches/${created.batch.id}?saved=1${params.get('todoId') ? `&todoId=${params.get('todoId')}` : ''}`) },
+      { onSuccess: (created) => navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') })) },
     );
   }
 
@@ -77,7 +78,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
         {product && forProduct.length === 0 ? (
           <Notice tone="soon" title={`No tested recipe for ${product.name} yet`}>
             A batch follows a tested recipe, so its processing time is known.{' '}
-            <Link to={`/h/${household.id}/recipes/new?productId=${product.id}`} className="font-bold text-action underline">
+            <Link to={paths.newRecipe(household.id, product.id)} className="font-bold text-action underline">
               Add the recipe
             </Link>{' '}
             first.

@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useActOnJar } from '../api/act-on-jar';
 import { getOpeningAdvice } from '../api/get-opening-advice';
+import { paths } from '@/lib/paths';
 
 export type OpenableJar = Pick<JarView, 'id' | 'code' | 'productName'>;
 
@@ -81,7 +82,7 @@ function AdvicePanel({ jar, advice, onOpen, onCancel }: { jar: OpenableJar; advi
           <ul className="mt-1 flex flex-col gap-1">
             {advice.openedJars.map((other) => (
               <li key={other.id}>
-                <Link to={`/j/${other.code}`} className="inline-flex min-h-11 items-center font-bold text-action underline underline-offset-4">
+                <Link to={paths.jar(other.code)} className="inline-flex min-h-11 items-center font-bold text-action underline underline-offset-4">
                   Jar {other.code}
                 </Link>{' '}
                 opened {other.openedOn ? dateWords(other.openedOn) : ''}

@@ -10,6 +10,7 @@ import { ApiError } from '@/lib/api-client';
 import { useSaveProduct } from '../api/save-product';
 import { numberFrom } from '../number-from';
 import { ColourDot } from './colour-dot';
+import { paths } from '@/lib/paths';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
@@ -45,7 +46,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         colour: form.colour,
         notes: form.notes,
       },
-      { onSuccess: () => navigate(`/h/${hid}/shelf`) },
+      { onSuccess: () => navigate(paths.shelf(hid)) },
     );
   }
 

@@ -10,6 +10,7 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSaveRecipe } from '../api/save-recipe';
 import { numberFrom } from '../number-from';
+import { paths } from '@/lib/paths';
 
 interface IngredientDraft {
   name: string;
@@ -63,7 +64,7 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
         steps: form.steps,
         source: form.source,
       },
-      { onSuccess: (saved) => navigate(`/h/${hid}/recipes/${saved.id}`) },
+      { onSuccess: (saved) => navigate(paths.recipe(hid, saved.id)) },
     );
   }
 

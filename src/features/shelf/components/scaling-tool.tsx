@@ -8,6 +8,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { numberFrom } from '../number-from';
 import { Cautions } from './plan-panel';
+import { paths } from '@/lib/paths';
 
 /** Scales a tested recipe to the jars wanted; acid is never weakened, and the cautions come along. */
 export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: RecipeView; altitudeFt: number }) {
@@ -64,7 +65,7 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
       {plan.allowed ? (
         <Notice tone="action" title={`${jarSizeWords(jarSize)} jars: ${minutesWords(plan.minutes!)}${plan.pressurePsi !== null ? ` at ${pressureWords(plan.pressurePsi)}` : ''} at ${altitudeWords(altitudeFt)}`}>
           {valid && (
-            <Link to={`/h/${hid}/batches/new?productId=${recipe.productId}&recipeId=${recipe.id}&jars=${jars}&jarSize=${jarSize}`} className="font-bold text-action underline">
+            <Link to={paths.newBatch(hid, { productId: recipe.productId, recipeId: recipe.id, jars, jarSize })} className="font-bold text-action underline">
               Record this batch
             </Link>
           )}

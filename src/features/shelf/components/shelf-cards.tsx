@@ -5,6 +5,7 @@ import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
+import { paths } from '@/lib/paths';
 
 export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
   const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});
@@ -48,7 +49,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
             <ul className="divide-y divide-line border-y border-line text-[0.95rem]">
               {group.batches.map((row) => (
                 <li key={row.batchId}>
-                  <Link to={`/h/${hid}/batches/${row.batchId}`} className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken">
+                  <Link to={paths.batch(hid, row.batchId)} className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken">
                     <span className="tabular">
                       {dateWords(row.cannedOn)} · {jarSizeWords(row.jarSize)}
                     </span>
@@ -71,7 +72,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
               />
             )}
             {canCook && (
-              <Link to={`/h/${hid}/products/${group.product.id}`} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+              <Link to={paths.product(hid, group.product.id)} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
                 Edit product
               </Link>
             )}

@@ -7,6 +7,7 @@ import { CheckboxField, SelectField } from '@/components/ui/field';
 import type { ShelfBatchRow } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
+import { paths } from '@/lib/paths';
 
 const column = createColumnHelper<ShelfBatchRow>();
 const HIDDEN_COLUMNS = { pastBestQuality: false };
@@ -20,7 +21,7 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
     column.accessor('productName', {
       header: 'Product',
       cell: (info) => (
-        <Link to={`/h/${hid}/batches/${info.row.original.batchId}`} className="flex min-h-11 items-center gap-2 font-bold text-action underline-offset-4 hover:underline">
+        <Link to={paths.batch(hid, info.row.original.batchId)} className="flex min-h-11 items-center gap-2 font-bold text-action underline-offset-4 hover:underline">
           <ColourDot colour={info.row.original.productColour} />
           {info.getValue()}
         </Link>

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { TodayTodo } from '@shared/schemas/today';
 import { dateWords } from '@shared/words';
 import { useTickTodo } from '@/features/todos';
+import { paths } from '@/lib/paths';
 
 /** The signed-in person's open to-dos, tickable right here. */
 export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
@@ -20,7 +21,7 @@ export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
               onChange={() => tick.mutate({ id: todo.id, title: todo.title, done: true })}
             />
           </label>
-          <Link to={`/h/${hid}/todo${todo.kind === 'restock' ? `?open=${todo.id}` : ''}`} className="flex min-h-11 flex-1 flex-col justify-center hover:underline">
+          <Link to={paths.todo(hid, todo.kind === 'restock' ? todo.id : null)} className="flex min-h-11 flex-1 flex-col justify-center hover:underline">
             <span>{todo.title}</span>
             {todo.dueOn && <span className="text-sm text-ink-muted">by {dateWords(todo.dueOn)}</span>}
           </Link>

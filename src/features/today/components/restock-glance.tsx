@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { JAR_SIZE_NAMES } from '@shared/words';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
+import { paths } from '@/lib/paths';
 
 /** The favourites that need a batch; each opens its place on the Restock screen. */
 export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: RestockSuggestionView[] }) {
@@ -10,7 +11,7 @@ export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: 
       {suggestions.map((suggestion) => (
         <li key={suggestion.productId}>
           <Link
-            to={`/h/${hid}/restock?product=${suggestion.productId}`}
+            to={paths.restock(hid, suggestion.productId)}
             className="flex min-h-11 flex-col rounded-lg border border-line px-3 py-2 hover:border-action hover:bg-action-soft"
           >
             <span className="font-bold text-action">{suggestion.productName}</span>

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import { altitudeWords, BEFORE_YOU_START, count, dateWords, headspaceWords, inCanner, JAR_SIZE_NAMES, minutesWords, pressureWords } from '@shared/words';
 import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
 import { Notice } from '@/components/ui/notice';
+import { paths } from '@/lib/paths';
 
 function processingWords(plan: BatchPlan): string {
   const { processing } = plan;
@@ -30,7 +31,7 @@ function ShoppingList({ title, items }: { title: string; items: ShoppingItem[] }
 /** Everything needed to make a restock batch, and the step that records it. */
 export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; todoId: string; plan: BatchPlan; canRecord: boolean }) {
   const size = JAR_SIZE_NAMES[plan.jarSize];
-  const recordHref = `/h/${hid}/batches/new?${new URLSearchParams({ productId: plan.productId, recipeId: plan.recipeId, jars: String(plan.jars), jarSize: plan.jarSize, todoId })}`;
+  const recordHref = paths.newBatch(hid, { productId: plan.productId, recipeId: plan.recipeId, jars: plan.jars, jarSize: plan.jarSize, todoId });
   return (
     <div className="flex flex-col gap-5">
       <div>
