@@ -1,5 +1,7 @@
 // The one way Larderly writes a canning number: pressure, headspace, jar size, altitude, minutes.
-import { type JarSize, roundKitchenAmount, formatKitchenAmount } from '../domain';
+// The modules themselves, not the domain's index, so a screen that shows an amount does not load all of the domain.
+import { formatKitchenAmount, roundKitchenAmount } from '../domain/kitchen-amounts';
+import type { JarSize } from '../domain/units';
 
 /** How a cook says each jar size, for titles and sentences. */
 export const JAR_SIZE_NAMES: Record<JarSize, string> = {
