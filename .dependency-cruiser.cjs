@@ -63,6 +63,15 @@ module.exports = {
       to: { path: ['^shared/schemas/', 'node_modules/zod/'], dependencyTypesNot: ['type-only'] },
     },
     {
+      name: 'words-import-domain-modules',
+      severity: 'error',
+      comment:
+        "shared/words is on every screen's first load: it imports the shared/domain module it needs (../domain/units), " +
+        "not the domain's index, which would bring every domain module some screen uses into the first screen's chunk.",
+      from: { path: '^shared/words/' },
+      to: { path: '^shared/domain/index\\.ts$', dependencyTypesNot: ['type-only'] },
+    },
+    {
       name: 'server-imports-no-client',
       severity: 'error',
       comment: 'The server never imports the React client; what both need lives in shared/.',

@@ -1,15 +1,10 @@
 // The shelf's CSV file in words: its columns, and the values each column takes. The export writes the words
 // the screens show; the import reads those words and the ids alike, and its help lists the same table.
-import {
-  JAR_SIZES,
-  JAR_STATES,
-  PROCESSING_METHODS,
-  PRODUCT_KINDS,
-  type JarSize,
-  type JarState,
-  type Method,
-  type ProductKind,
-} from '../domain';
+// Imported from shared/words/csv, not the words' index, so only the screens with the CSV help load it.
+import { PROCESSING_METHODS, type Method } from '../domain/processing-tables';
+import { PRODUCT_KINDS, type ProductKind } from '../domain/products';
+import { JAR_STATES, type JarState } from '../domain/shelf-life';
+import { JAR_SIZES, type JarSize } from '../domain/units';
 import { JAR_STATE_NAMES, METHOD_NAMES, PRODUCT_KIND_NAMES } from './names';
 import { JAR_SIZE_NAMES } from './units';
 

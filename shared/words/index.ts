@@ -5,4 +5,3 @@ export * from './units';
 export * from './names';
 export * from './countdown';
 export * from './cautions';
-export * from './csv';

@@ -1,5 +1,6 @@
 // The words of the week board's meal proposal: why each meal, and the waste it saves.
-import { addDays, daysBetween, type ProposalReason } from '../domain';
+import { addDays, daysBetween } from '../domain/dates';
+import type { ProposalReason } from '../domain/meal-proposal';
 import { dateWords, weekdayWords } from './dates';
 import { count } from './units';
 

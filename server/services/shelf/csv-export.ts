@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
 import type { ProductKind } from '../../../shared/domain';
-import { csvChoiceWords } from '../../../shared/words';
+import { csvChoiceWords } from '../../../shared/words/csv';
 import { Batch, type Household } from '../../db/models';
 import { CSV_WRITE_OPTIONS, guardCell } from './csv-cells';
 import { listJars } from './jars';

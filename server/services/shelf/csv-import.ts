@@ -16,7 +16,7 @@ import {
 } from '../../../shared/domain';
 import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
 import { LIMITS, limitWords } from '../../../shared/schemas/limits';
-import { csvChoiceList, readCsvChoice, type CsvChoiceColumn } from '../../../shared/words';
+import { csvChoiceList, readCsvChoice, type CsvChoiceColumn } from '../../../shared/words/csv';
 import { Jar, JarEvent, Product, Recipe, type Household } from '../../db/models';
 import { AppError } from '../../http/errors';
 import { todayIn } from '../clock';

@@ -3,7 +3,8 @@ import type { ImportProblem, ImportRow } from '@shared/schemas/batches';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCommitImport, usePreviewImport } from '../api/import-batches';
-import { CSV_IMPORT_COLUMNS, csvChoiceList, dateWords, jarSizeWords } from '@shared/words';
+import { dateWords, jarSizeWords } from '@shared/words';
+import { CSV_IMPORT_COLUMNS, csvChoiceList } from '@shared/words/csv';
 
 const EXAMPLE = 'product,recipe,canned_on,jar_size,jars_filled,jars_sealed,method,minutes,notes';
 const NEEDED = {
