@@ -38,6 +38,19 @@ export default defineConfig({
           hookTimeout: 120_000,
         },
       },
+      {
+        resolve: { alias },
+        test: {
+          // Whole processes: `npm start` under a supervisor, two app processes behind nginx.
+          name: 'scale',
+          include: ['tests/scale/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/api/global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 180_000,
+          hookTimeout: 180_000,
+        },
+      },
     ],
   },
 });

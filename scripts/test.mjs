@@ -4,7 +4,7 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
-import { ensureChromium, ensureNodeModules, log, projectDir, run } from './lib/system.mjs';
+import { ensureChromium, ensureNginx, ensureNodeModules, log, projectDir, run } from './lib/system.mjs';
 import { startCluster } from './lib/postgres.mjs';
 
 const givenArgs = process.argv.slice(2);
@@ -15,6 +15,12 @@ const wantsCodeRules = projects.length === 0 || projects.includes('code');
 const vitestProjects = projects.filter((name) => name !== 'code');
 const wantsVitest = projects.length === 0 || vitestProjects.length > 0;
 const wantsBrowser = projects.length === 0 || vitestProjects.includes('e2e');
+const wantsScale = vitestProjects.includes('scale');
+// The scale suite (whole processes behind nginx, `npm start` under SIGTERM) runs only when asked for:
+// `npm test -- --project scale`. Without --project every other project runs.
+const defaultProjects = projects.length === 0 ? ['--project', 'unit', '--project', 'api', '--project', 'e2e'] : [];
+// The built client is served by the browser tests' server and by nginx in the scale tests.
+const wantsClient = wantsBrowser || wantsScale;
 
 ensureNodeModules();
 const codeRules = wantsCodeRules ? checkCodeRules() : { passed: 0, failed: 0 };
@@ -23,6 +29,7 @@ if (!wantsVitest) {
   process.exit(codeRules.failed ? 1 : 0);
 }
 if (wantsBrowser) ensureChromium();
+if (wantsScale) ensureNginx();
 const { buildClient, dropDatabase, recreateDatabase, setUpSchema } = await import('./lib/database.mjs');
 const { spawnObjectStore } = await import('../dev/stand-ins/object-store.mjs');
 
@@ -38,7 +45,7 @@ let exitCode = 1;
 try {
   await recreateDatabase(cluster, template);
   setUpSchema(cluster.url(template));
-  if (wantsBrowser) {
+  if (wantsClient) {
     log('building the client');
     buildClient(clientDir);
   }
@@ -47,7 +54,7 @@ try {
   mkdirSync(resultsDir, { recursive: true });
   const resultsFile = path.join(resultsDir, `vitest-${process.pid}.json`);
   try {
-    run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`, ...extraArgs], {
+    run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`, ...defaultProjects, ...extraArgs], {
       cwd: projectDir,
       env: {
         ...process.env,

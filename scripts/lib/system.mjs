@@ -1,7 +1,7 @@
 // Plain Node helpers for the set-up scripts: they must run before node_modules exists.
 import { spawnSync, spawn } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -60,7 +60,53 @@ export function ensureChromium() {
   ensureDebianPackages(['chromium'], 'Chromium, for the browser tests');
 }
 
+/** Debian's nginx, the load balancer in front of several app processes (the scale tests, `scripts/lib/nginx.mjs`). */
+export function ensureNginx() {
+  if (existsSync(process.env.NGINX_PATH ?? '/usr/sbin/nginx')) return;
+  // The package would start a system-wide nginx on port 80; the project runs its own, so none is started.
+  const policy = '/usr/sbin/policy-rc.d';
+  const ownPolicy = isRoot && !existsSync(policy);
+  if (ownPolicy) writeFileSync(policy, '#!/bin/sh\nexit 101\n', { mode: 0o755 });
+  try {
+    ensureDebianPackages(['nginx'], 'nginx, the load balancer for the scale tests');
+  } finally {
+    if (ownPolicy) rmSync(policy, { force: true });
+  }
+}
+
 /** Starts a long-running child that shares this terminal. */
 export function startChild(command, args, options = {}) {
   return spawn(command, args, { stdio: 'inherit', cwd: projectDir, ...options });
+}
+
+/** Sends a child SIGTERM and waits for it to exit; SIGKILL after `graceMs`. Resolves at once if it has exited. */
+export function stopChild(child, graceMs = 15_000) {
+  if (!child || child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((resolve) => {
+    const kill = setTimeout(() => child.kill('SIGKILL'), graceMs);
+    child.once('exit', () => {
+      clearTimeout(kill);
+      resolve();
+    });
+    child.kill('SIGTERM');
+  });
+}
+
+/**
+ * Calls `stop(reason)` once on SIGINT (Ctrl-C), SIGTERM (a supervisor, or `kill` of npm's process),
+ * SIGHUP (the terminal closed), or when the parent process is gone: npm runs a script through a
+ * shell, and a shell that is killed leaves its child running with no parent of its own.
+ */
+export function onStopRequest(stop) {
+  let called = false;
+  const once = (reason) => {
+    if (called) return;
+    called = true;
+    stop(reason);
+  };
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP']) process.on(signal, () => once(signal));
+  const parent = process.ppid;
+  setInterval(() => {
+    if (process.ppid !== parent) once('the parent process exited');
+  }, 500).unref();
 }
