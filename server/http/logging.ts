@@ -49,10 +49,15 @@ export function createLogger(
 
 const REQUEST_ID = /^[A-Za-z0-9._:-]{8,128}$/;
 
-/** An invitation's token is its key: the path keeps where it went, not the token. Query strings are left out. */
+/**
+ * An invitation's token and a calendar address's secret are keys: the path keeps where the request
+ * went, not the key. Query strings are left out.
+ */
 export function loggedPath(url: string): string {
   const path = url.split('?')[0]!;
-  return path.replace(/^(\/api\/invitations\/)[^/]+/, '$1[token]');
+  return path
+    .replace(/^(\/api\/invitations\/)[^/]+/, '$1[token]')
+    .replace(/^(\/api\/calendar\/)[^/]+?(\.ics)?$/, '$1[secret]$2');
 }
 
 /**

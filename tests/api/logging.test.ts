@@ -103,7 +103,7 @@ describe('one line per request, under the id the answer carries', () => {
       expect(everything).not.toContain(secret);
   });
 
-  it('an invitation token in the path and any query string stay out of the log', async () => {
+  it('an invitation token or a calendar secret in the path, and any query string, stay out of the log', async () => {
     const response = await request(app.app).get(
       '/api/invitations/secret-invitation-token-0123456789?token=another-secret',
     );
@@ -111,6 +111,14 @@ describe('one line per request, under the id the answer carries', () => {
     const [line] = linesFor(direct.lines, response.headers['x-request-id']);
     expect(line).toMatchObject({ level: 30, req: { path: '/api/invitations/[token]' } });
     expect(direct.raw.join('\n')).not.toMatch(/secret-invitation-token|another-secret/);
+
+    const secret = 'A'.repeat(43);
+    const feed = await request(app.app).get(`/api/calendar/${secret}.ics`);
+    expect(feed.status).toBe(404);
+    expect(linesFor(direct.lines, feed.headers['x-request-id'])[0]).toMatchObject({
+      req: { path: '/api/calendar/[secret].ics' },
+    });
+    expect(direct.raw.join('\n')).not.toContain(secret);
   });
 
   it('an unexpected error is logged with its stack under the request id, and the answer says what to do', async () => {
