@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { JAR_SIZES, JAR_STATES, PROCESSING_METHODS, PRODUCT_KINDS } from '../domain';
+import { INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, JAR_STATES, PROCESSING_METHODS, PRODUCT_KINDS, RESTOCK_REASONS } from '../domain';
 import { householdName } from './auth';
 import { mealTimesBody } from './calendar';
 import { UNIT_SYSTEMS } from './households';
@@ -99,6 +99,51 @@ const meal = z.object({ id, name: text(N.mealName).min(1), tags: z.array(text(N.
 const mealProduct = z.object({ id, mealId: id, productId: id, tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing) });
 const planEntry = z.object({ id, date, slot: z.enum(SLOTS), position: int(0, LIMITS.planPosition), title: text(N.mealName).min(1), mealId: id.nullable(), servings: int(1, LIMITS.servings) });
 const pairing = z.object({ id, planEntryId: id, productId: id, tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing) });
+const words = (max: number, items = 50) => z.array(text(max)).max(items);
+const shoppingItem = z.object({ name: text(N.ingredientName), role: z.enum(INGREDIENT_ROLES), amount: z.number().min(0).max(LIMITS.ingredientAmount * 100), unit: z.enum(INGREDIENT_UNITS), text: text(200) });
+/** A restock to-do's batch plan, every field as the server writes it: the to-do page draws each of them. */
+const batchPlan = z.object({
+  productId: id,
+  productName: text(N.productName),
+  recipeId: id,
+  recipeName: text(N.recipeName),
+  recipeSource: text(N.source),
+  reason: z.enum(RESTOCK_REASONS).nullable(),
+  jars: int(1, LIMITS.jarsPerBatch),
+  jarSize: z.enum(JAR_SIZES),
+  method: z.enum(PROCESSING_METHODS),
+  altitudeFt: int(LIMITS.altitudeFt.min, LIMITS.altitudeFt.max),
+  headspaceInches: z.number().min(0).max(LIMITS.headspaceInches),
+  scaled: z.object({
+    factor: z.number().positive().max(1000),
+    acidFactor: z.number().positive().max(1000),
+    ingredients: z
+      .array(z.object({ name: text(N.ingredientName), amount: z.number().min(0), exactAmount: z.number().min(0), unit: z.enum(INGREDIENT_UNITS), role: z.enum(INGREDIENT_ROLES) }))
+      .max(LIMITS.ingredientsPerRecipe),
+    cautions: words(500),
+  }),
+  processing: z.object({
+    allowed: z.boolean(),
+    minutes: int(0, LIMITS.batchMinutes).nullable(),
+    pressurePsi: int(0, LIMITS.pressurePsi).nullable(),
+    reasons: words(1000),
+    cautions: words(1000),
+    afterProcessing: words(1000),
+    altitudeAddMinutes: int(0, LIMITS.processingMinutes).nullable(),
+  }),
+  equipment: z.object({
+    jars: int(1, LIMITS.jarsPerBatch),
+    newLids: int(0, LIMITS.jarsPerBatch),
+    cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
+    cannerLoads: z.array(int(0, LIMITS.cannerCapacityJars)).max(LIMITS.jarsPerBatch),
+  }),
+  shopping: z.object({ produce: z.array(shoppingItem).max(LIMITS.ingredientsPerRecipe), pantry: z.array(shoppingItem).max(LIMITS.ingredientsPerRecipe) }),
+  targetOn: date,
+  targetWhy: text(1000),
+  plannedOn: date,
+  changes: words(1000).optional(),
+});
+
 const todo = z.object({
   id,
   title: text(N.todoTitle).min(1),
@@ -109,8 +154,8 @@ const todo = z.object({
   position: int(0, LIMITS.todoPosition),
   kind: z.enum(['plain', 'restock']),
   productId: id.nullable(),
-  // A restock to-do's batch plan as the server wrote it; its product and recipe ids are remapped.
-  batchPlan: z.record(z.string(), z.unknown()).nullable(),
+  // A restock to-do's batch plan as the server wrote it, checked field by field; its product and recipe ids are remapped.
+  batchPlan: batchPlan.nullable(),
 });
 
 export const householdBackup = z

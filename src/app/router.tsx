@@ -1,4 +1,5 @@
-import { createBrowserRouter, Outlet, RouterProvider, ScrollRestoration } from 'react-router-dom';
+import { createBrowserRouter, Outlet, RouterProvider, ScrollRestoration, type RouteObject } from 'react-router-dom';
+import { RouteError } from '@/app/layouts/route-error';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { todayQueryOptions } from '@/features/today/api/get-today';
 import { queryClient } from '@/lib/query-client';
@@ -19,7 +20,12 @@ function FirstLoad() {
   return <p className="p-6 text-ink-muted">Opening Larderly…</p>;
 }
 
-const router = createBrowserRouter([
+/** Every route its own error boundary: a screen that fails shows what happened inside the layout, whose navigation still works. */
+function withBoundaries(routes: RouteObject[]): RouteObject[] {
+  return routes.map((route) => ({ ErrorBoundary: RouteError, ...route, ...(route.children ? { children: withBoundaries(route.children) } : {}) }) as RouteObject);
+}
+
+const router = createBrowserRouter(withBoundaries([
   {
     // The root: a new page starts at its top (and Back returns to where it was), and the first load shows a quiet placeholder.
     Component: RootLayout,
@@ -73,7 +79,7 @@ const router = createBrowserRouter([
       { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }) },
     ],
   },
-]);
+]));
 
 export function AppRouter() {
   return <RouterProvider router={router} />;

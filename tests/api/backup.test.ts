@@ -215,3 +215,21 @@ describe('one limit per value, shared by every entry point', () => {
     expect(imported.counts).toMatchObject({ products: 1, recipes: 1, batches: 1, jars: LIMITS.jarsPerBatch, meals: 1, todos: 1 });
   });
 });
+
+describe('a restock to-do’s batch plan in a backup', () => {
+  it('is checked field by field on import: a free-form plan is refused with where it is wrong, and nothing is written', async () => {
+    const index = exported.todos.findIndex((todo) => todo.batchPlan);
+    expect(index).toBeGreaterThanOrEqual(0);
+    const before = await householdCount();
+    const freeForm = structuredClone(exported);
+    // What once took down the to-do page: ids that fit, the rest of the plan anything at all.
+    freeForm.todos[index].batchPlan = { productId: exported.todos[index].batchPlan!.productId, recipeId: exported.todos[index].batchPlan!.recipeId, plannedOn: 'next spring', jars: 'many' } as never;
+    const refused = await keeper.post('/api/households/import').send(freeForm);
+    expect(refused.status).toBe(400);
+    expect(Object.keys(refused.body.error.fields)).toEqual(expect.arrayContaining([`todos.${index}.batchPlan.plannedOn`, `todos.${index}.batchPlan.jars`, `todos.${index}.batchPlan.processing`]));
+    const badDate = structuredClone(exported);
+    badDate.todos[index].batchPlan!.targetOn = '2026-02-30';
+    expect((await keeper.post('/api/households/import').send(badDate)).status).toBe(400);
+    expect(await householdCount()).toBe(before);
+  });
+});
