@@ -36,7 +36,7 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport();
-  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config), photos: photoStorageFor(config), readCache: createReadCache() };
+  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config, logger), photos: photoStorageFor(config), readCache: createReadCache(), log: logger };
 
   const app = express();
   app.disable('x-powered-by');

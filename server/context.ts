@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import type { Config } from './config';
+import type { Logger } from './http/logging';
 import type { ReadCache } from './http/read-cache';
 import type { Mailer } from './services/mail/mailer';
 import type { PhotoStorage } from './services/photo-storage';
@@ -17,4 +18,6 @@ export interface AppContext {
   photos: PhotoStorage;
   /** This process's household answers, kept until the household's data changes */
   readCache: ReadCache;
+  /** the process's JSON logger (absent in the one-off scripts, which print plain lines) */
+  log?: Logger;
 }

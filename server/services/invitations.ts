@@ -145,12 +145,16 @@ export async function accept(ctx: Pick<AppContext, 'sequelize' | 'config' | 'mai
 }
 
 /** The keepers learn that their invitation was used by an account with another address. */
-async function tellKeepers(ctx: Pick<AppContext, 'config' | 'mailer'>, invitation: Invitation, joiner: Express.User, householdName: string) {
+async function tellKeepers(ctx: Pick<AppContext, 'config' | 'mailer' | 'log'>, invitation: Invitation, joiner: Express.User, householdName: string) {
   if (!ctx.mailer.enabled) return;
   const keepers = await Membership.findAll({ where: { householdId: invitation.householdId, role: 'keeper' }, include: [{ model: User, as: 'user', required: true }] });
   for (const keeper of keepers) {
     await ctx.mailer
       .send(invitationUsedElsewhereMail({ to: keeper.user!.email, householdName, invitedEmail: invitation.email, joinerName: joiner.name, joinerEmail: joiner.email, role: invitation.role, link: `${ctx.config.publicOrigin}/h/${invitation.householdId}/household` }))
-      .catch((error: Error) => console.warn(`larderly: the note to ${keeper.user!.email} about an invitation could not be sent: ${error.message}`));
+      .catch((error: Error) =>
+        ctx.log
+          ? ctx.log.warn({ err: error, userId: keeper.userId }, 'the note to a keeper about a used invitation could not be sent')
+          : console.warn(`larderly: the note to ${keeper.user!.email} about an invitation could not be sent: ${error.message}`),
+      );
   }
 }

@@ -14,21 +14,25 @@ afterEach(() => {
 });
 
 /** server/index.ts as `npm start` runs it, on this file's database; resolves once it listens. */
-async function startServer(env: Record<string, string> = {}) {
+async function startServer(env: Record<string, string> = {}, preload: string[] = []) {
   const port = await freePort();
-  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      LOG_LEVEL: 'info',
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      STATIC_DIR: 'none',
-      BCRYPT_COST: '4',
-      ...env,
+  const child = spawn(
+    process.execPath,
+    ['--import', 'tsx', ...preload.flatMap((file) => ['--import', file]), 'server/index.ts'],
+    {
+      env: {
+        ...process.env,
+        NODE_ENV: 'test',
+        LOG_LEVEL: 'info',
+        PORT: String(port),
+        HOST: '127.0.0.1',
+        STATIC_DIR: 'none',
+        BCRYPT_COST: '4',
+        ...env,
+      },
+      stdio: ['ignore', 'pipe', 'inherit'],
     },
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  );
   started.push(child);
   const lines: Line[] = [];
   const waiters: { test: (l: Line) => boolean; resolve: (l: Line) => void }[] = [];
@@ -116,5 +120,15 @@ describe('SIGTERM', () => {
     expect(Date.now() - sent).toBeGreaterThanOrEqual(1000);
     await expect(stuck.answered).rejects.toThrow();
     expect(server.lines.some((l) => l.level === 50 && l.msg.includes('not done after 1000 ms'))).toBe(true);
+  });
+
+  it('an unhandled promise rejection is logged as fatal with its error, and the process stops cleanly with exit code 1', async () => {
+    const server = await startServer({}, ['./tests/support/reject-later.mjs']);
+    server.child.kill('SIGUSR2');
+    expect(await server.exited).toBe(1);
+    const fatal = server.lines.find((l) => l.level === 60) as (Line & { err?: { message: string } }) | undefined;
+    expect(fatal?.msg).toBe('unhandled promise rejection; stopping');
+    expect(fatal?.err?.message).toBe('a promise nobody awaited failed');
+    expect(server.lines.at(-1)).toMatchObject({ msg: 'stopped', exitCode: 1 });
   });
 });

@@ -5,6 +5,7 @@ import type { Config } from '../../config';
 import { PushSubscription } from '../../db/models';
 import { publicPushAgent } from './endpoint-policy';
 import { loadVapidKeys, type VapidKeys } from './vapid-keys';
+import type { Logger } from '../../http/logging';
 
 /** What the service worker receives; `url` is the page a click opens. */
 export interface PushMessage {
@@ -22,7 +23,7 @@ export interface PushSender {
   send(subscription: PushSubscription, message: PushMessage, options?: { topic?: string }): Promise<PushOutcome>;
 }
 
-export function createPushSender(config: Config): PushSender {
+export function createPushSender(config: Config, log?: Logger): PushSender {
   let keys: Promise<VapidKeys> | undefined;
   const vapid = () => (keys ??= loadVapidKeys(config).catch((error) => {
     keys = undefined;
@@ -50,7 +51,9 @@ export function createPushSender(config: Config): PushSender {
           await subscription.destroy();
           return 'gone';
         }
-        console.warn(`larderly: a push to ${new URL(subscription.endpoint).host} failed: ${(error as Error).message}`);
+        const host = new URL(subscription.endpoint).host;
+        if (log) log.warn({ err: error, pushHost: host }, 'a push failed');
+        else console.warn(`larderly: a push to ${host} failed: ${(error as Error).message}`);
         return 'failed';
       }
     },
