@@ -1,7 +1,24 @@
-import { QueryClient } from '@tanstack/react-query';
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { ApiError } from './api-client';
+import { authKeys } from './query-keys';
 
-export const queryClient = new QueryClient({
+/**
+ * A read or a change answered "signed out" (401) while the client still held a session: it has expired or was
+ * ended elsewhere. Forgetting the person once sends every signed-in screen to sign-in, with ?next= back to where
+ * they were (see src/app/layouts/require-auth.tsx), instead of each screen saying "Please sign in first.".
+ * Signed-out pages (sign-in, an invitation) get 401s that mean something else, and are left to show them.
+ */
+function onSignedOut(error: Error) {
+  if (!(error instanceof ApiError) || error.status !== 401) return;
+  if (!queryClient.getQueryData(authKeys.me)) return;
+  queryClient.setQueryData(authKeys.me, null);
+  // What the old session read is not the next person's to see; sign-in reads afresh.
+  queueMicrotask(() => queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.me[0] }));
+}
+
+export const queryClient: QueryClient = new QueryClient({
+  queryCache: new QueryCache({ onError: onSignedOut }),
+  mutationCache: new MutationCache({ onError: onSignedOut }),
   defaultOptions: {
     queries: {
       staleTime: 30_000,

@@ -84,4 +84,37 @@ describe('the app shell', () => {
     await shownHousehold(page, /Okafor Kitchen/, 'keeper');
     await page.close();
   });
+
+  it('after a sign-out in another tab, the next click goes to sign-in once and signing in comes back to that screen', async () => {
+    const context = await browser.newContext({ viewport: DESKTOP });
+    const page = await context.newPage();
+    await signIn(page, baseURL, 'keeper@larderly.test');
+    const home = new URL(page.url()).pathname;
+    await page.getByRole('heading', { level: 1, name: 'Today' }).waitFor();
+
+    // A second tab of the same browser signs out: the server ends the session both tabs share.
+    const other = await context.newPage();
+    await other.goto(`${baseURL}${home}/household`);
+    await other.getByRole('button', { name: 'Sign out' }).click();
+    await other.waitForURL(/\/sign-in/);
+    await other.close();
+
+    const signInVisits: string[] = [];
+    page.on('framenavigated', (frame) => {
+      if (frame === page.mainFrame() && new URL(frame.url()).pathname === '/sign-in') signInVisits.push(frame.url());
+    });
+    await page.getByRole('navigation', { name: 'Screens' }).first().getByRole('link', { name: 'Fridge' }).click();
+    await page.getByRole('heading', { name: 'Welcome back' }).waitFor();
+    const next = new URL(page.url()).searchParams.get('next');
+    expect(next).toBe(`${home}/fridge`);
+    expect(await page.getByText('Please sign in first.').count()).toBe(0);
+
+    await page.getByLabel('E-mail').fill('keeper@larderly.test');
+    await page.getByLabel('Password').fill('pantry-demo-2026');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL((url) => url.pathname === `${home}/fridge`);
+    await page.getByRole('heading', { level: 1, name: 'Fridge' }).waitFor();
+    expect(signInVisits).toHaveLength(1);
+    await context.close();
+  });
 });
