@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { Household, User } from '../db/models';
+import { seedSealCheck } from './seal-check';
 import { seedShelf } from './shelf';
 import { seedWeek } from './week';
 import { seedProposalScenario } from './week-proposal';
@@ -18,6 +19,7 @@ export interface DemoSeedContext {
 /** Each feature adds its part of our invented demo scenario here, in dependency order. */
 export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
+  await seedSealCheck(ctx);
   await seedWeek(ctx);
   await seedProposalScenario(ctx);
   await seedTodos(ctx);

@@ -1,13 +1,14 @@
 import { Router, type Request, type Response } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
-import { batchCreate, planQuery } from '../../shared/schemas/batches';
+import { batchCreate, planQuery, sealCheckBody } from '../../shared/schemas/batches';
 import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
 import { body, params, query } from '../http/validate';
 import { batchDetail, createBatch, listBatches, previewPlan } from '../services/shelf/batches';
 import { PHOTO_SIZES } from '../services/shelf/photo-images';
+import { checkSeals } from '../services/shelf/seal-check';
 import { PHOTO_MAX_BYTES, readBatchPhoto, saveBatchPhoto } from '../services/shelf/photos';
 
 const batchParams = z.object({ hid: z.string(), batchId: z.uuid({ error: 'That batch was not found.' }) });
@@ -50,6 +51,14 @@ export function batchesRouter(ctx: AppContext) {
   router.post('/batches', householdAccess('cook'), async (req, res) => {
     const input = body(req, batchCreate);
     res.status(201).json(await createBatch(ctx.sequelize, currentMembership(req).household, input, req.user!.id));
+  });
+
+  // Any member may check seals; reprocessing (a new processing record) needs a cook, which the service checks.
+  router.post('/batches/:batchId/seal-check', householdAccess('handleJars'), async (req, res) => {
+    const { batchId } = params(req, batchParams);
+    const input = body(req, sealCheckBody);
+    const { household, role } = currentMembership(req);
+    res.json(await checkSeals(ctx.sequelize, household, role, batchId, input, req.user!.id));
   });
 
   router.post('/batches/:batchId/photo', householdAccess('cook'), async (req, res) => {

@@ -11,7 +11,8 @@ type Column = [json: string, sql: string, type: string, ref?: BackupTable];
 
 /**
  * What a backup holds, table by table in insert order. People are left out (the importer becomes
- * the keeper), and so are photos and who did what. Label codes go in, and are kept on import where no jar holds them.
+ * the keeper), and so are photos, who did what, and a batch's processings and seal check (a jar still to check
+ * comes back checked; the README says so). Label codes go in, and are kept on import where no jar holds them.
  */
 const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: false }[] = [
   {

@@ -3,6 +3,7 @@ import { addDays, allocateWeek, daysBetween, type Id, type PlannedPortion } from
 import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/today';
 import { Household, Jar, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
+import { sealChecksOf } from './shelf/seal-check';
 import { restockFromSnapshot } from './restock/view';
 import { stockSnapshot, useWithinDaysOf, type StockSnapshot } from './restock/stock-snapshot';
 
@@ -73,7 +74,7 @@ function fridgeCountdowns(snapshot: StockSnapshot): TodayFridgeJar[] {
 
 export async function todayView(household: Household, userId: string): Promise<TodayView> {
   const today = todayIn(household.timeZone);
-  const [snapshot, myTodos, openTodoCount] = await Promise.all([
+  const [snapshot, myTodos, openTodoCount, sealChecks] = await Promise.all([
     stockSnapshot(household.id, today),
     Todo.findAll({
       where: { householdId: household.id, done: false, assigneeId: userId },
@@ -81,6 +82,7 @@ export async function todayView(household: Household, userId: string): Promise<T
       order: [['position', 'ASC']],
     }),
     Todo.count({ where: { householdId: household.id, done: false } }),
+    sealChecksOf(household),
   ]);
   const fridge = fridgeCountdowns(snapshot);
   const restock = await restockFromSnapshot(snapshot);
@@ -92,5 +94,6 @@ export async function todayView(household: Household, userId: string): Promise<T
     restock: restock.suggestions,
     myTodos: myTodos.map((t) => ({ id: t.id, title: t.title, dueOn: t.dueOn ?? null, kind: t.kind })),
     openTodoCount,
+    sealChecks,
   };
 }

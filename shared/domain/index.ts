@@ -16,3 +16,4 @@ export * from './jar-size-advice';
 export * from './validate';
 export * from './plan-waste';
 export * from './meal-proposal';
+export * from './seal-check';

@@ -91,7 +91,7 @@ const jarEvent = z.object({
   id,
   jarId: id,
   batchId: id,
-  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored']),
+  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored', 'seal-checked', 'reprocessed']),
   happenedOn: date,
 });
 

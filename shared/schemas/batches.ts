@@ -5,6 +5,9 @@ import { JAR_SIZES, PROCESSING_METHODS, type JarSize, type JarState, type Method
 // A real calendar date (2026-02-30 is refused), checked by zod's ISO date format.
 export const isoDate = z.iso.date({ error: 'Enter a real date as YYYY-MM-DD.' });
 
+export const SEAL_STATES = ['checked', 'to-check'] as const;
+export type SealState = (typeof SEAL_STATES)[number];
+
 export const batchCreate = z
   .object({
     productId: z.uuid({ error: 'Choose the product.' }),
@@ -16,10 +19,62 @@ export const batchCreate = z
     method: z.enum(PROCESSING_METHODS, { error: 'Choose the canner you used.' }),
     headspaceInches: z.number().min(0).max(LIMITS.headspaceInches).optional(),
     notes: z.string().max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`).default(''),
+    /** 'to-check': recorded right after processing, every jar's seal is checked once it has cooled. */
+    seals: z.enum(SEAL_STATES, { error: 'Say whether the seals are checked already or still to check.' }).default('checked'),
   })
   .strict()
   .refine((batch) => batch.jarsSealed <= batch.jarsFilled, { path: ['jarsSealed'], message: 'More jars cannot seal than were filled.' });
 export type BatchCreate = z.input<typeof batchCreate>;
+
+/** Jars picked jar by jar, or a count (the batch's last jars by code). */
+const jarPick = z.union([
+  z.object({ jarIds: z.array(z.uuid({ error: 'A jar in the list was not found.' })).max(200) }).strict(),
+  z.object({ count: z.number({ error: 'Enter how many jars.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(200) }).strict(),
+]);
+
+/** The seal check of a batch's jars to check: every jar not named sealed; those named go to the fridge or are reprocessed. */
+export const sealCheckBody = z
+  .object({
+    fridge: jarPick.default({ count: 0 }),
+    reprocess: jarPick.default({ count: 0 }),
+  })
+  .strict();
+export type SealCheckInput = z.input<typeof sealCheckBody>;
+
+export interface ProcessingView {
+  id: string;
+  number: number;
+  processedAt: string;
+  method: Method;
+  altitudeFt: number;
+  minutes: number | null;
+  pressurePsi: number | null;
+  jars: number;
+  who: string | null;
+}
+
+/** A batch with jars still to check: from when, and until when a jar that did not seal may be reprocessed. */
+export interface SealCheckView {
+  batchId: string;
+  productName: string;
+  jarSize: JarSize;
+  processingNumber: number;
+  processedAt: string;
+  checkFrom: string;
+  /** null when reprocessing is no longer offered (past 24 hours, or already reprocessed). */
+  reprocessUntil: string | null;
+  jarIds: string[];
+  /** The household's time zone, for the times above. */
+  timeZone: string;
+}
+
+export interface SealCheckDone {
+  sealed: number;
+  toFridge: number;
+  reprocessed: number;
+  plan: ProcessingPlan | null;
+  batch: BatchDetail;
+}
 
 export const planQuery = z.object({
   recipeId: z.uuid({ error: 'Choose a recipe.' }),
@@ -58,6 +113,8 @@ export interface JarView {
   productColour: string;
   /** Sealed past the household's best-quality months. */
   pastBestQuality: boolean;
+  /** 'to-check' while the jar cools after processing. */
+  seal: SealState;
 }
 
 export interface BatchView {
@@ -91,6 +148,11 @@ export interface JarEventView {
 export interface BatchDetail extends BatchView {
   jars: JarView[];
   history: JarEventView[];
+  processings: ProcessingView[];
+  /** The household's time zone, for the processing times. */
+  timeZone: string;
+  /** The jars still to check, when there are any. */
+  sealCheck: SealCheckView | null;
 }
 
 export interface BatchCreated {

@@ -1,3 +1,4 @@
+import type { SealCheckView } from './batches';
 import type { RestockSuggestionView } from './restock';
 
 /** The plan slots, as the week stores them. */
@@ -45,4 +46,6 @@ export interface TodayView {
   restock: RestockSuggestionView[];
   myTodos: TodayTodo[];
   openTodoCount: number;
+  /** Batches whose jars are cooling or ready for their seal check. */
+  sealChecks: SealCheckView[];
 }

@@ -5,3 +5,4 @@ export * from './units';
 export * from './names';
 export * from './countdown';
 export * from './cautions';
+export * from './seal-check';

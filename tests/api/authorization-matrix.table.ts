@@ -146,6 +146,8 @@ export const TABLE: Record<string, RouteRule> = {
     access: 'cook',
     body: (ids) => ({ productId: ids.productId, recipeId: ids.recipeId, cannedOn: ids.planDate, jarSize: 'pint', jarsFilled: 2, jarsSealed: 2, method: 'boiling-water' }),
   },
+  // Any member checks seals; the service lets only a cook or keeper reprocess (tests/api/seal-check.test.ts).
+  [`POST ${H}/batches/:batchId/seal-check`]: { access: 'handleJars', body: () => ({ fridge: { count: 0 } }) },
   [`POST ${H}/batches/:batchId/photo`]: { access: 'cook' },
   [`GET ${H}/batches/:batchId/photo`]: { access: 'read' },
   [`GET ${H}/jars`]: { access: 'read' },

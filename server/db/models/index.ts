@@ -1,6 +1,7 @@
 import type { Sequelize } from 'sequelize';
 import { AppSetting } from './app-setting';
 import { Batch } from './batch';
+import { BatchProcessing } from './batch-processing';
 import { CalendarFeed } from './calendar-feed';
 import { DigestDelivery } from './digest-delivery';
 import { Household } from './household';
@@ -20,7 +21,7 @@ import { User } from './user';
 
 /** Binds every model to one connection and declares how they relate. */
 export function initModels(sequelize: Sequelize) {
-  for (const model of [User, Household, Membership, Product, Recipe, Batch, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
+  for (const model of [User, Household, Membership, Product, Recipe, Batch, BatchProcessing, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
     model.initModel(sequelize);
   }
   for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation, CalendarFeed]) model.initModel(sequelize);
@@ -42,6 +43,8 @@ export function initModels(sequelize: Sequelize) {
   Jar.hasMany(JarEvent, { as: 'events', foreignKey: 'jarId' });
   Batch.hasMany(JarEvent, { as: 'events', foreignKey: 'batchId' });
   JarEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
+  Batch.hasMany(BatchProcessing, { as: 'processings', foreignKey: 'batchId' });
+  BatchProcessing.belongsTo(User, { as: 'user', foreignKey: 'createdBy' });
 
   Meal.hasMany(MealProduct, { as: 'products', foreignKey: 'mealId' });
   MealProduct.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
@@ -52,4 +55,4 @@ export function initModels(sequelize: Sequelize) {
   Todo.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { AppSetting, Batch, CalendarFeed, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, Todo, User };
+export { AppSetting, Batch, BatchProcessing, CalendarFeed, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, Todo, User };

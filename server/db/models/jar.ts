@@ -2,6 +2,8 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { JarState } from '../../../shared/domain';
 import { decimal, requiredUuid, uuidKey } from './columns';
 
+export type JarSeal = 'checked' | 'to-check';
+
 export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar>> {
   declare id: CreationOptional<string>;
   declare householdId: string;
@@ -17,6 +19,10 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
   declare useBy: CreationOptional<string | null>;
   declare finishedOn: CreationOptional<string | null>;
   declare discardedOn: CreationOptional<string | null>;
+  /** 'to-check' while the jar cools after processing and nobody has checked its lid yet. */
+  declare seal: CreationOptional<JarSeal>;
+  /** The jar's latest processing (null for jars recorded before processings were kept). */
+  declare processingId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -37,6 +43,8 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
         useBy: { type: DataTypes.DATEONLY, allowNull: true },
         finishedOn: { type: DataTypes.DATEONLY, allowNull: true },
         discardedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        seal: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'checked' },
+        processingId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,17 +1,19 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { requiredUuid, uuidKey } from './columns';
 
-export const REMINDER_KINDS = ['soon', 'today'] as const;
+export const REMINDER_KINDS = ['soon', 'today', 'seal-check'] as const;
 export type ReminderKind = (typeof REMINDER_KINDS)[number];
 
 /** A use-by reminder claimed for one jar, kind and person; the unique key makes it go out once. */
 export class ReminderDelivery extends Model<InferAttributes<ReminderDelivery>, InferCreationAttributes<ReminderDelivery>> {
   declare id: CreationOptional<string>;
   declare householdId: string;
-  declare jarId: string;
+  /** The jar of a use-by reminder; null for a seal check, which names its processing. */
+  declare jarId: CreationOptional<string | null>;
+  declare processingId: CreationOptional<string | null>;
   declare userId: string;
   declare kind: ReminderKind;
-  declare useBy: string;
+  declare useBy: CreationOptional<string | null>;
   declare pushesSent: CreationOptional<number>;
   declare emailSent: CreationOptional<boolean>;
   declare problem: CreationOptional<string | null>;
@@ -27,10 +29,11 @@ export class ReminderDelivery extends Model<InferAttributes<ReminderDelivery>, I
       {
         id: uuidKey(),
         householdId: requiredUuid(),
-        jarId: requiredUuid(),
+        jarId: { type: DataTypes.UUID, allowNull: true },
+        processingId: { type: DataTypes.UUID, allowNull: true },
         userId: requiredUuid(),
         kind: { type: DataTypes.STRING(12), allowNull: false },
-        useBy: { type: DataTypes.DATEONLY, allowNull: false },
+        useBy: { type: DataTypes.DATEONLY, allowNull: true },
         pushesSent: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         emailSent: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         problem: { type: DataTypes.TEXT, allowNull: true },

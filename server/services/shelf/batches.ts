@@ -2,12 +2,13 @@ import type { Sequelize } from 'sequelize';
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
-import { Batch, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
+import { Batch, BatchProcessing, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
-import { todayIn } from '../clock';
+import { clock, todayIn } from '../clock';
 import { requireConfirmedAltitude } from '../households';
 import { findProduct } from './products';
 import { findRecipe } from './recipes';
+import { processingView, sealCheckView } from './seal-check-view';
 import { batchView, jarView, shelfClock } from './views';
 import { withFreshJarCodes, writeBatch } from './write-batch';
 
@@ -29,6 +30,11 @@ export async function createBatch(sequelize: Sequelize, household: Household, in
   }
   if (input.cannedOn > todayIn(household.timeZone)) {
     throw new AppError(400, 'invalid_input', 'A batch cannot be dated in the future.', { cannedOn: 'Use today or an earlier day.' });
+  }
+  if (input.seals === 'to-check' && input.cannedOn !== todayIn(household.timeZone)) {
+    throw new AppError(400, 'invalid_input', 'Seals are left to check only for a batch processed today. For an earlier batch, check the seals and enter how many sealed.', {
+      seals: 'Choose “Seals checked already” for an earlier day.',
+    });
   }
   const plan = recipeProcessingPlan(recipe, { jarSize: input.jarSize, method: input.method, altitudeFt: household.altitudeFt });
   if (!plan.allowed) throw notAllowed(plan);
@@ -52,10 +58,11 @@ export async function createBatch(sequelize: Sequelize, household: Household, in
       },
       userId,
       transaction,
+      input.seals === 'to-check' ? clock.now() : undefined,
     ),
   );
-  const clock = shelfClock(household);
-  return { batch: batchView(batch, product, recipe, jars.map((j) => j.state)), jars: jars.map((jar) => jarView(jar, batch, product, clock)), plan };
+  const shelf = shelfClock(household);
+  return { batch: batchView(batch, product, recipe, jars.map((j) => j.state)), jars: jars.map((jar) => jarView(jar, batch, product, shelf)), plan };
 }
 
 export async function listBatches(householdId: string) {
@@ -80,17 +87,18 @@ export async function findBatch(householdId: string, batchId: string) {
 
 export async function batchDetail(household: Household, batchId: string): Promise<BatchDetail> {
   const batch = await findBatch(household.id, batchId);
-  const [product, recipe, jars, events] = await Promise.all([
+  const [product, recipe, jars, events, processings] = await Promise.all([
     findProduct(household.id, batch.productId),
     batch.recipeId ? Recipe.findOne({ where: { householdId: household.id, id: batch.recipeId } }) : null,
     Jar.findAll({ where: { batchId: batch.id }, order: [['code', 'ASC']] }),
     JarEvent.findAll({ where: { batchId: batch.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['happenedOn', 'DESC'], ['createdAt', 'DESC']] }),
+    BatchProcessing.findAll({ where: { batchId: batch.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['number', 'ASC']] }),
   ]);
-  const clock = shelfClock(household);
+  const shelf = shelfClock(household);
   const codes = new Map(jars.map((jar) => [jar.id, jar.code]));
   return {
     ...batchView(batch, product, recipe, jars.map((j) => j.state)),
-    jars: jars.map((jar) => jarView(jar, batch, product, clock)),
+    jars: jars.map((jar) => jarView(jar, batch, product, shelf)),
     history: events.map((event) => ({
       id: event.id,
       kind: event.kind,
@@ -98,5 +106,8 @@ export async function batchDetail(household: Household, batchId: string): Promis
       jarCode: codes.get(event.jarId) ?? '',
       who: (event as JarEvent & { user?: User | null }).user?.name ?? null,
     })),
+    processings: processings.map(processingView),
+    timeZone: household.timeZone,
+    sealCheck: sealCheckView(batch, product, jars, processings, clock.now(), household.timeZone),
   };
 }

@@ -74,6 +74,7 @@ export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnT
     productKind: product.kind,
     productColour: product.colour,
     pastBestQuality: jar.state === 'sealed' && bestBy < clock.today,
+    seal: jar.seal ?? 'checked',
   };
 }
 

@@ -1,7 +1,7 @@
 // Writing one batch and its jars: the part the new-batch form and the CSV import share.
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import { bestQualityBy, defaultUseWithinDays, jarCapacityTbsp, useBy, type JarSize, type Method } from '../../../shared/domain';
-import { Batch, Jar, JarEvent, type Household, type Product } from '../../db/models';
+import { Batch, BatchProcessing, Jar, JarEvent, type Household, type Product } from '../../db/models';
 import { newJarCode } from './jar-codes';
 
 // NCHFP: an unsealed jar keeps "several days" in the fridge; the shortest opened default (5, from memory) stands for it.
@@ -21,9 +21,32 @@ export interface BatchRecord {
   notes: string;
 }
 
-/** Creates the batch, one sealed jar per sealed lid and one opened jar in the fridge per lid that did not seal. */
-export async function writeBatch(household: Household, product: Product, record: BatchRecord, userId: string, transaction: Transaction) {
+/**
+ * Creates the batch, one sealed jar per sealed lid and one opened jar in the fridge per lid that did not seal.
+ * With `sealsToCheckFrom` (recorded right after processing) every jar is sealed with its seal still to check,
+ * and the batch's first processing is kept with the time it came out of the canner.
+ */
+export async function writeBatch(household: Household, product: Product, record: BatchRecord, userId: string, transaction: Transaction, sealsToCheckFrom?: Date) {
+  const toCheck = sealsToCheckFrom !== undefined;
+  if (toCheck) record = { ...record, jarsSealed: record.jarsFilled };
   const batch = await Batch.create({ householdId: household.id, altitudeFt: household.altitudeFt, createdBy: userId, ...record }, { transaction });
+  const processing = toCheck
+    ? await BatchProcessing.create(
+        {
+          householdId: household.id,
+          batchId: batch.id,
+          number: 1,
+          processedAt: sealsToCheckFrom,
+          method: record.method,
+          altitudeFt: household.altitudeFt,
+          minutes: record.minutes,
+          pressurePsi: record.pressurePsi,
+          jars: record.jarsFilled,
+          createdBy: userId,
+        },
+        { transaction },
+      )
+    : null;
   const capacityTbsp = jarCapacityTbsp(record.jarSize);
   const bestBy = bestQualityBy(record.cannedOn, household.bestQualityMonths);
   const unsealedUseWithin = Math.min(product.useWithinDays ?? defaultUseWithinDays(product.kind), UNSEALED_USE_WITHIN_DAYS);
@@ -37,6 +60,8 @@ export async function writeBatch(household: Household, product: Product, record:
         code: newJarCode(),
         state: sealed ? ('sealed' as const) : ('opened' as const),
         unsealed: !sealed,
+        seal: toCheck ? ('to-check' as const) : ('checked' as const),
+        processingId: processing?.id ?? null,
         capacityTbsp,
         remainingTbsp: capacityTbsp,
         bestBy,

@@ -7,6 +7,7 @@ import { MyTodos } from '@/features/today/components/my-todos';
 import { RestockGlance } from '@/features/today/components/restock-glance';
 import { TodaySection } from '@/features/today/components/today-section';
 import { JarsForToday } from '@/features/today/components/jars-for-today';
+import { SealChecks } from '@/features/today/components/seal-checks';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { FirstProduct } from '@/features/shelf/components/first-product';
@@ -35,6 +36,11 @@ export function TodayRoute() {
       )}
       {view && (
         <div className="grid gap-4 lg:grid-cols-2">
+          {view.sealChecks.length > 0 && (
+            <TodaySection id="today-seals" title="Seal check">
+              <SealChecks hid={hid} checks={view.sealChecks} />
+            </TodaySection>
+          )}
           <TodaySection id="today-use" title="Open and use today" more={{ to: paths.week(hid), label: 'Week' }}>
             <JarsForToday use={view.use} short={view.short} />
           </TodaySection>

@@ -1,14 +1,34 @@
 import { Link } from 'react-router-dom';
 import type { BatchDetail } from '@shared/schemas/batches';
-import { altitudeWords, dateWords, headspaceWords, jarSizeWords, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
+import {
+  altitudeWords,
+  clockWords,
+  count,
+  dateWords,
+  headspaceWords,
+  jarSizeWords,
+  METHOD_NAMES,
+  minutesWords,
+  pressureWords,
+} from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';
+import { SealCheckPanel } from './seal-check-panel';
 import { JarActions } from './jar-actions';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
 import { paths } from '@/lib/paths';
 
-const EVENT_WORDS: Record<string, string> = { filled: 'filled', unsealed: 'did not seal; put in the fridge', opened: 'opened', finished: 'finished', discarded: 'discarded', restored: 'put back (the change before was undone)' };
+const EVENT_WORDS: Record<string, string> = {
+  filled: 'filled',
+  unsealed: 'did not seal; put in the fridge',
+  'seal-checked': 'seal checked: sealed',
+  reprocessed: 'did not seal; reprocessed with a new lid',
+  opened: 'opened',
+  finished: 'finished',
+  discarded: 'discarded',
+  restored: 'put back (the change before was undone)',
+};
 
 export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
   const processing =
@@ -20,13 +40,15 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
   return (
     <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
       <div className="flex flex-col gap-5">
+        <SealCheckPanel hid={hid} batch={batch} canCook={canCook} />
         <Card>
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
             <dt className="text-ink-muted">Canned</dt>
             <dd className="tabular">{dateWords(batch.cannedOn)}</dd>
             <dt className="text-ink-muted">Jars</dt>
             <dd className="tabular">
-              {batch.jarsFilled} {jarSizeWords(batch.jarSize)} filled, {batch.jarsSealed} sealed
+              {batch.jarsFilled} {jarSizeWords(batch.jarSize)} filled,{' '}
+              {batch.sealCheck ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check` : `${batch.jarsSealed} sealed`}
             </dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
@@ -49,6 +71,24 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
               )}
             </dd>
           </dl>
+          {batch.processings.length > 0 && (
+            <>
+              <h3 className="mt-3 font-bold">Processings</h3>
+              <ol className="flex flex-col gap-1 text-[0.95rem]">
+                {batch.processings.map((p) => (
+                  <li key={p.id} className="tabular">
+                    {p.number === 1 ? 'First' : 'Reprocess'}: {count(p.jars, 'jar')},{' '}
+                    {clockWords(p.processedAt, batch.timeZone)}, {METHOD_NAMES[p.method]}
+                    {p.minutes !== null ? `, ${minutesWords(p.minutes)}` : ''}
+                    {p.pressurePsi !== null ? ` at ${pressureWords(p.pressurePsi)}` : ''} at{' '}
+                    {altitudeWords(p.altitudeFt)}
+                    {p.number > 1 ? ', new lids' : ''}
+                    {p.who ? ` by ${p.who}` : ''}
+                  </li>
+                ))}
+              </ol>
+            </>
+          )}
           <div className="mt-3">
             <CautionLine about="canning" />
           </div>
@@ -92,7 +132,8 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
           <ol className="flex flex-col gap-1 text-[0.95rem]">
             {batch.history.map((event) => (
               <li key={event.id} className="tabular">
-                <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
+                <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar{' '}
+                <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
                 {event.who ? ` by ${event.who}` : ''}
               </li>
             ))}

@@ -1,5 +1,5 @@
 import type { JarView } from '@shared/schemas/batches';
-import { DATE_NAMES, dateWords, JAR_STATE_NAMES, UNSEALED_STATE_NAME } from '@shared/words';
+import { DATE_NAMES, dateWords, JAR_STATE_NAMES, SEAL_TO_CHECK_NAME, UNSEALED_STATE_NAME } from '@shared/words';
 
 export function PastBestBadge({ bestBy }: { bestBy: string }) {
   return (
@@ -16,8 +16,11 @@ const STATE_STYLE: Record<JarView['state'], string> = {
   discarded: 'bg-sunken text-ink-muted line-through',
 };
 
-export function JarStateBadge({ jar }: { jar: Pick<JarView, 'state' | 'unsealed'> }) {
+export function JarStateBadge({ jar }: { jar: Pick<JarView, 'state' | 'unsealed'> & { seal?: JarView['seal'] } }) {
   const unsealed = jar.state === 'opened' && jar.unsealed;
+  if (jar.state === 'sealed' && jar.seal === 'to-check') {
+    return <span className="inline-flex rounded-full border border-soon-fill bg-soon-soft px-2 py-0.5 text-sm font-bold text-soon">{SEAL_TO_CHECK_NAME}</span>;
+  }
   // The unsealed jar always wears the warning color (honey), as on the fridge and the batch form.
   const style = unsealed ? 'border border-soon-fill bg-soon-soft text-soon' : STATE_STYLE[jar.state];
   return <span className={`inline-flex rounded-full px-2 py-0.5 text-sm font-bold ${style}`}>{unsealed ? UNSEALED_STATE_NAME : JAR_STATE_NAMES[jar.state]}</span>;

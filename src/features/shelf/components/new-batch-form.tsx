@@ -6,7 +6,7 @@ import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
-import { jarSizeWords, METHOD_NAMES } from '@shared/words';
+import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -22,7 +22,15 @@ import { paths } from '@/lib/paths';
  * The day's work in order: what, which tested recipe, when, which jars, how many sealed, which canner.
  * The draft lives in the address (the pre-fill parameters), so a reload or a shared link keeps it.
  */
-export function NewBatchForm({ household, products, recipes }: { household: HouseholdView; products: ProductView[]; recipes: RecipeView[] }) {
+export function NewBatchForm({
+  household,
+  products,
+  recipes,
+}: {
+  household: HouseholdView;
+  products: ProductView[];
+  recipes: RecipeView[];
+}) {
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const create = useCreateBatch(household.id);
@@ -31,20 +39,30 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
 
   const productId = params.get('productId') ?? '';
   const forProduct = recipes.filter((r) => r.productId === productId);
-  const recipe = forProduct.find((r) => r.id === params.get('recipeId')) ?? (forProduct.length === 1 ? forProduct[0] : undefined);
+  const recipe =
+    forProduct.find((r) => r.id === params.get('recipeId')) ?? (forProduct.length === 1 ? forProduct[0] : undefined);
   const product = products.find((p) => p.id === productId);
   const testedSizes = recipe ? (JAR_SIZES.filter((s) => recipe.baseMinutes[s] !== undefined) as JarSize[]) : [];
-  const jarSize = (JAR_SIZES as readonly string[]).includes(params.get('jarSize') ?? '') ? (params.get('jarSize') as JarSize) : (testedSizes[0] ?? product?.jarSize ?? 'half-pint');
-  const method = (PROCESSING_METHODS as readonly string[]).includes(params.get('method') ?? '') ? (params.get('method') as Method) : (recipe?.method ?? household.defaultMethod);
+  const jarSize = (JAR_SIZES as readonly string[]).includes(params.get('jarSize') ?? '')
+    ? (params.get('jarSize') as JarSize)
+    : (testedSizes[0] ?? product?.jarSize ?? 'half-pint');
+  const method = (PROCESSING_METHODS as readonly string[]).includes(params.get('method') ?? '')
+    ? (params.get('method') as Method)
+    : (recipe?.method ?? household.defaultMethod);
   const jarsText = params.get('jars') ?? '';
   const sealedText = params.get('sealed') ?? jarsText;
   const today = calendarDateIn(household.timeZone);
   const cannedOn = params.get('date') ?? today;
+  // Seals left to check only for a batch processed today; an earlier day's seals are checked already.
+  const seals = params.get('seals') === 'to-check' && cannedOn === today ? 'to-check' : 'checked';
 
   const plan = recipe ? recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
   const filled = numberFrom(jarsText);
   const sealed = numberFrom(sealedText);
-  const unsealed = Number.isInteger(filled) && Number.isInteger(sealed) && filled > sealed ? filled - sealed : 0;
+  const unsealed =
+    seals === 'checked' && Number.isInteger(filled) && Number.isInteger(sealed) && filled > sealed
+      ? filled - sealed
+      : 0;
 
   function set(changes: Record<string, string | null>) {
     const next = new URLSearchParams(params);
@@ -59,7 +77,7 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
     event.preventDefault();
     if (!recipe || !plan?.allowed) return;
     create.mutate(
-      { productId, recipeId: recipe.id, cannedOn, jarSize, jarsFilled: filled, jarsSealed: sealed, method, notes },
+      { productId, recipeId: recipe.id, cannedOn, jarSize, jarsFilled: filled, jarsSealed: seals === 'to-check' ? filled : sealed, method, notes, seals },
       { onSuccess: (created) => navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') })) },
     );
   }
@@ -67,7 +85,12 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
   return (
     <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-[3fr_2fr] lg:items-start">
       <div className="flex flex-col gap-4">
-        <SelectField label="What did you make?" value={productId} onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null })} error={error?.fields.productId}>
+        <SelectField
+          label="What did you make?"
+          value={productId}
+          onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null })}
+          error={error?.fields.productId}
+        >
           <option value="">Choose a product</option>
           {products.map((p) => (
             <option key={p.id} value={p.id}>
@@ -84,7 +107,13 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
             first.
           </Notice>
         ) : (
-          <SelectField label="Which tested recipe?" value={recipe?.id ?? ''} disabled={!product} onChange={(e) => set({ recipeId: e.target.value, jarSize: null, method: null })} error={error?.fields.recipeId}>
+          <SelectField
+            label="Which tested recipe?"
+            value={recipe?.id ?? ''}
+            disabled={!product}
+            onChange={(e) => set({ recipeId: e.target.value, jarSize: null, method: null })}
+            error={error?.fields.recipeId}
+          >
             <option value="">{product ? 'Choose a recipe' : 'Choose a product first'}</option>
             {forProduct.map((r) => (
               <option key={r.id} value={r.id}>
@@ -93,9 +122,21 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
             ))}
           </SelectField>
         )}
-        <TextField label="Canning day" type="date" value={cannedOn} max={today} onChange={(e) => set({ date: e.target.value })} error={error?.fields.cannedOn} />
+        <TextField
+          label="Canning day"
+          type="date"
+          value={cannedOn}
+          max={today}
+          onChange={(e) => set({ date: e.target.value })}
+          error={error?.fields.cannedOn}
+        />
         <div className="grid gap-4 sm:grid-cols-3">
-          <SelectField label="Jar size" value={jarSize} onChange={(e) => set({ jarSize: e.target.value })} error={error?.fields.jarSize}>
+          <SelectField
+            label="Jar size"
+            value={jarSize}
+            onChange={(e) => set({ jarSize: e.target.value })}
+            error={error?.fields.jarSize}
+          >
             {JAR_SIZES.map((size) => (
               <option key={size} value={size}>
                 {jarSizeWords(size)}
@@ -103,29 +144,83 @@ export function NewBatchForm({ household, products, recipes }: { household: Hous
               </option>
             ))}
           </SelectField>
-          <TextField label="Jars filled" inputMode="numeric" value={jarsText} onChange={(e) => set({ jars: e.target.value })} error={error?.fields.jarsFilled} />
-          <TextField label="Jars sealed" inputMode="numeric" value={sealedText} onChange={(e) => set({ sealed: e.target.value })} error={error?.fields.jarsSealed} hint="Test each lid once cool." />
+          <TextField
+            label="Jars filled"
+            inputMode="numeric"
+            value={jarsText}
+            onChange={(e) => set({ jars: e.target.value })}
+            error={error?.fields.jarsFilled}
+          />
+          {seals === 'checked' && (
+            <TextField
+              label="Jars sealed"
+              inputMode="numeric"
+              value={sealedText}
+              onChange={(e) => set({ sealed: e.target.value })}
+              error={error?.fields.jarsSealed}
+              hint="Test each lid once cool."
+            />
+          )}
         </div>
+        {cannedOn === today && (
+          <fieldset className="flex flex-col gap-2">
+            <legend className="mb-1 font-bold">Seals</legend>
+            {(['to-check', 'checked'] as const).map((choice) => (
+              <div key={choice} className="flex items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-action has-[:checked]:bg-action-soft">
+                <input
+                  id={`seals-${choice}`}
+                  type="radio"
+                  name="seals"
+                  value={choice}
+                  checked={seals === choice}
+                  onChange={() => set({ seals: choice === 'to-check' ? 'to-check' : null })}
+                  aria-describedby={`seals-${choice}-hint`}
+                  className="mt-1 size-5 shrink-0 accent-action"
+                />
+                <div>
+                  <label htmlFor={`seals-${choice}`} className="block cursor-pointer font-bold">
+                    {SEALS_CHOICE[choice].label}
+                  </label>
+                  <p id={`seals-${choice}-hint`} className="text-sm text-ink-muted">
+                    {SEALS_CHOICE[choice].hint}
+                  </p>
+                </div>
+              </div>
+            ))}
+            {error?.fields.seals && <p className="font-bold text-past">{error.fields.seals}</p>}
+          </fieldset>
+        )}
         {unsealed > 0 && (
           <Notice tone="soon" title={`${unsealed} jar${unsealed > 1 ? 's' : ''} did not seal`}>
             {UNSEALED_JAR_ADVICE} Saving puts {unsealed > 1 ? 'them' : 'it'} in the fridge as opened on the canning day.
           </Notice>
         )}
-        <SelectField label="Canner" value={method} onChange={(e) => set({ method: e.target.value })} error={error?.fields.method}>
+        <SelectField
+          label="Canner"
+          value={method}
+          onChange={(e) => set({ method: e.target.value })}
+          error={error?.fields.method}
+        >
           {PROCESSING_METHODS.map((m) => (
             <option key={m} value={m}>
               {METHOD_NAMES[m]}
             </option>
           ))}
         </SelectField>
-        <TextAreaField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} placeholder="What was different this time?" />
+        <TextAreaField
+          label="Notes"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+          placeholder="What was different this time?"
+        />
       </div>
       <div className="flex flex-col gap-3 lg:col-start-2 lg:row-span-2 lg:row-start-1">
         {plan ? (
           <PlanPanel plan={plan} method={method} altitudeFt={household.altitudeFt} />
         ) : (
           <Notice tone="info" title="The processing plan appears here">
-            Choose the product and its tested recipe; the plan is worked out for your altitude, {household.altitudeFt.toLocaleString('en-US')} ft.
+            Choose the product and its tested recipe; the plan is worked out for your altitude,{' '}
+            {household.altitudeFt.toLocaleString('en-US')} ft.
           </Notice>
         )}
       </div>
