@@ -233,3 +233,15 @@ describe('a restock to-do’s batch plan in a backup', () => {
     expect(await householdCount()).toBe(before);
   });
 });
+
+describe('backup import limits', () => {
+  it('limits imports per person (10 an hour), whether the file is good or not', async () => {
+    const request = (await import('supertest')).default;
+    const agent = request.agent(ctx.app);
+    expect((await agent.post('/api/auth/signup').send({ email: `imports-${Date.now()}@example.test`, password: 'long enough password', name: 'Ivo', householdName: 'Ivo Larder' })).status).toBe(201);
+    const statuses: number[] = [];
+    for (let i = 0; i < 11; i += 1) statuses.push((await agent.post('/api/households/import').send({ format: 'not-a-backup' })).status);
+    expect(statuses).toEqual([...Array(10).fill(400), 429]);
+    expect((await agent.post('/api/households/import').send(exported)).body.error.message).toBe('Too many imports. Wait 60 minutes, then try again.');
+  });
+});

@@ -218,3 +218,21 @@ describe('invitations', () => {
     expect((await helper.agent.get(`/api/households/${keeper.householdId}/dev/mail`)).status).toBe(403);
   });
 });
+
+describe('invitation limits', () => {
+  it('limits invitations per person (30 a day) and per invited address (5 a day), each e-mail counted', async () => {
+    const keeper = await newHousehold(ctx.app, 'UTC');
+    const invite = (email: string) => keeper.agent.post(`/api/households/${keeper.householdId}/invitations`).send({ email, role: 'helper' });
+    const sameAddress: number[] = [];
+    for (let i = 0; i < 6; i += 1) sameAddress.push((await invite('twice.asked@example.test')).status);
+    expect(sameAddress).toEqual([201, 201, 201, 201, 201, 429]);
+    const others: number[] = [];
+    for (let i = 0; i < 25; i += 1) others.push((await invite(`guest-${i}@example.test`)).status);
+    // The refused sixth counts against the person too: 5 + 1 + 24 reach the 30 of a day.
+    expect(others.slice(0, 24).every((status) => status === 201)).toBe(true);
+    expect(others[24]).toBe(429);
+    const last = await invite('still-more@example.test');
+    expect(last.status).toBe(429);
+    expect(last.body.error.message).toBe('Too many invitations today. Wait 24 hours, then try again.');
+  });
+});
