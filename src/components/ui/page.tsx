@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { JarDrawing } from './jar-drawing';
 
 export function PageHeader({ title, lead, actions }: { title: string; lead?: ReactNode; actions?: ReactNode }) {
   return (
@@ -19,20 +20,10 @@ export function Card({ children, className = '' }: { children: ReactNode; classN
 export function EmptyState({ title, children, action }: { title: string; children?: ReactNode; action?: ReactNode }) {
   return (
     <div className="flex flex-col items-center gap-3 rounded-card border border-dashed border-line bg-surface/60 px-6 py-10 text-center">
-      <JarMark />
+      <JarDrawing level={0.45} width={44} />
       <p className="text-lg font-bold">{title}</p>
       {children && <div className="max-w-md text-ink-muted">{children}</div>}
       {action}
     </div>
-  );
-}
-
-function JarMark() {
-  return (
-    <svg width="44" height="52" viewBox="0 0 44 52" aria-hidden="true">
-      <rect x="11" y="2" width="22" height="7" rx="2" className="fill-action" />
-      <rect x="5" y="9" width="34" height="40" rx="9" className="fill-surface stroke-ink" strokeWidth="2.5" />
-      <path d="M8 30h28v10a6 6 0 0 1-6 6H14a6 6 0 0 1-6-6z" className="fill-soon-fill/70" />
-    </svg>
   );
 }

@@ -3,9 +3,9 @@ import { Link } from 'react-router-dom';
 import { count, countdown, dateWords, DATE_NAMES, JAR_ACTION_NAMES } from '@shared/words';
 import type { FridgeJar } from '@shared/schemas/fridge';
 import { Button } from '@/components/ui/button';
+import { JarDrawing } from '@/components/ui/jar-drawing';
 import { CountdownBadge } from '@/components/ui/countdown-badge';
 import type { ClosingAction } from '../api/close-jar';
-import { JarLevel } from './jar-level';
 import { paths } from '@/lib/paths';
 
 function estimateWords(jar: FridgeJar) {
@@ -22,7 +22,7 @@ export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: Fri
   return (
     <li className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
       <div className="flex items-start gap-3">
-        <JarLevel fraction={jar.capacityTbsp ? jar.remainingTbsp / jar.capacityTbsp : 0} tone={tone} />
+        <JarDrawing level={jar.capacityTbsp ? jar.remainingTbsp / jar.capacityTbsp : 0} fill={tone} lid="muted" />
         <div className="min-w-0 flex-1">
           <h2 className="text-lg font-bold">{jar.productName}</h2>
           <p className="text-sm text-ink-muted tabular">

@@ -1,5 +1,6 @@
 import { useDraggable } from '@dnd-kit/core';
 import type { WeekProduct } from '@shared/schemas/week';
+import { JarDrawing } from '@/components/ui/jar-drawing';
 
 function DraggableProduct({ product, canEdit }: { product: WeekProduct; canEdit: boolean }) {
   const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: `product:${product.id}`, data: { type: 'product', product }, disabled: !canEdit });
@@ -13,23 +14,13 @@ function DraggableProduct({ product, canEdit }: { product: WeekProduct; canEdit:
         {...listeners}
         className={`flex h-full min-h-11 w-full touch-manipulation select-none items-center gap-2 rounded-lg border bg-surface px-3 py-1 text-left hover:border-action ${product.openedJars ? 'border-info/60' : 'border-line'} ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
       >
-        <JarGlyph opened={product.openedJars > 0} />
+        <JarDrawing width={18} level={product.openedJars > 0 ? 0.25 : 0.6} lid={product.openedJars > 0 ? 'opened' : 'sealed'} />
         <span className="min-w-0">
           <span className="block font-bold leading-snug">{product.name}</span>
           <span className="tabular block text-xs text-ink-muted">{counts}</span>
         </span>
       </button>
     </li>
-  );
-}
-
-function JarGlyph({ opened }: { opened: boolean }) {
-  return (
-    <svg width="18" height="22" viewBox="0 0 18 22" aria-hidden="true" className="shrink-0">
-      <rect x="4" y="1" width="10" height="3" rx="1" className={opened ? 'fill-info' : 'fill-action'} />
-      <rect x="2" y="4" width="14" height="17" rx="4" className="fill-surface stroke-ink" strokeWidth="1.5" />
-      <path d={opened ? 'M3.5 13h11v3.5a3 3 0 0 1-3 3h-5a3 3 0 0 1-3-3z' : 'M3.5 8h11v8.5a3 3 0 0 1-3 3h-5a3 3 0 0 1-3-3z'} className="fill-soon-fill/70" />
-    </svg>
   );
 }
 
