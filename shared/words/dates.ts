@@ -1,8 +1,16 @@
 // The one way Larderly writes a calendar date, on screens, in e-mails, push messages and CSV help.
 // date-fns's intlFormat hands the words to the platform's Intl (en-US), so no locale tables ship to the browser.
-import { intlFormat, parseISO } from 'date-fns';
+import { intlFormat } from 'date-fns';
 
 const US = { locale: 'en-US' };
+
+/** Local midnight of a YYYY-MM-DD date (the words name the calendar day, whatever the zone). */
+function parseISO(isoDate: string): Date {
+  const [year, month, day] = isoDate.split('-').map(Number);
+  const date = new Date(2000, 0, 1);
+  date.setFullYear(year!, month! - 1, day);
+  return date;
+}
 
 /** "Tue, Jun 9" for 2026-06-09; with the year ("Tue, Aug 31, 2027") when it is not `thisYear`. */
 export function dateWords(isoDate: string, thisYear = new Date().getFullYear()): string {
