@@ -8,6 +8,8 @@ import { currentMembership } from '../auth/guards';
 import { AppError } from './errors';
 
 const KEY = /^[A-Za-z0-9_-]{16,100}$/;
+const inProgress = () =>
+  new AppError(409, 'conflict', 'This change is being applied right now. Try again in a moment.');
 /** Keys are kept this long: a phone offline for longer sends its changes as new ones. */
 export const KEPT_DAYS = 30;
 
@@ -38,8 +40,7 @@ export function idempotent(sequelize: Sequelize): RequestHandler {
           'SELECT fingerprint, status, body FROM applied_requests WHERE user_id = :userId AND key = :key',
           { replacements: { userId, key }, type: QueryTypes.SELECT },
         );
-        if (!earlier)
-          return next(new AppError(409, 'conflict', 'This change is being applied right now. Try again in a moment.'));
+        if (!earlier) return next(inProgress());
         if (earlier.fingerprint !== fingerprint)
           return next(
             new AppError(
@@ -48,8 +49,7 @@ export function idempotent(sequelize: Sequelize): RequestHandler {
               'This Idempotency-Key was already used for a different change. Send a new key for a new change.',
             ),
           );
-        if (earlier.status === null)
-          return next(new AppError(409, 'conflict', 'This change is being applied right now. Try again in a moment.'));
+        if (earlier.status === null) return next(inProgress());
         res.set('Idempotent-Replayed', 'true').status(earlier.status).json(earlier.body);
         return;
       }

@@ -55,4 +55,7 @@ export const notificationKeys = {
   thisDevice: ['push', 'this-device'] as const,
 };
 
+/** The signed-in person's own calendar address for a household, and the household's meal times. */
+export const calendarKeys = { feed: (hid: string) => ['households', hid, 'calendar-feed'] as const };
+
 export const publicConfigKeys = { config: ['public-config'] as const };

@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Method } from '../../../shared/domain';
-import type { MealTimes } from '../../../shared/schemas/calendar';
+import { DEFAULT_MEAL_TIMES, type MealTimes } from '../../../shared/schemas/calendar';
 import type { UnitSystem } from '../../../shared/schemas/households';
 
 export class Household extends Model<InferAttributes<Household>, InferCreationAttributes<Household>> {
@@ -49,7 +49,7 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
         cannerCapacityJars: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 },
         defaultMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
         altitudeConfirmedAt: { type: DataTypes.DATE, allowNull: true },
-        mealTimes: { type: DataTypes.JSONB, allowNull: false, defaultValue: { breakfast: '08:00', lunch: '12:30', snack: '15:30', dinner: '18:30' } },
+        mealTimes: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_MEAL_TIMES },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

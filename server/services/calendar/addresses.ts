@@ -8,14 +8,15 @@ const fingerprint = (secret: string) => createHash('sha256').update(secret).dige
 /** The address a calendar app subscribes to; the secret is 256 random bits. */
 export const feedAddress = (publicOrigin: string, secret: string) => `${publicOrigin}/api/calendar/${secret}.ics`;
 
+const viewOf = (household: Household, feed: CalendarFeed | null): CalendarFeedView => ({
+  on: feed !== null,
+  createdAt: feed?.updatedAt.toISOString() ?? null,
+  lastFetchedAt: feed?.lastFetchedAt?.toISOString() ?? null,
+  mealTimes: household.mealTimes,
+});
+
 export async function feedView(household: Household, userId: string): Promise<CalendarFeedView> {
-  const feed = await CalendarFeed.findOne({ where: { householdId: household.id, userId } });
-  return {
-    on: feed !== null,
-    createdAt: feed?.updatedAt.toISOString() ?? null,
-    lastFetchedAt: feed?.lastFetchedAt?.toISOString() ?? null,
-    mealTimes: household.mealTimes,
-  };
+  return viewOf(household, await CalendarFeed.findOne({ where: { householdId: household.id, userId } }));
 }
 
 /** Turns the address on, or renews it: the new secret replaces the old one, which stops answering at once. */
@@ -23,9 +24,10 @@ export async function renewFeed(household: Household, userId: string, publicOrig
   const secret = randomBytes(32).toString('base64url');
   const tokenHash = fingerprint(secret);
   const existing = await CalendarFeed.findOne({ where: { householdId: household.id, userId } });
-  if (existing) await existing.update({ tokenHash, lastFetchedAt: null });
-  else await CalendarFeed.create({ householdId: household.id, userId, tokenHash });
-  return { ...(await feedView(household, userId)), address: feedAddress(publicOrigin, secret) };
+  const feed = existing
+    ? await existing.update({ tokenHash, lastFetchedAt: null })
+    : await CalendarFeed.create({ householdId: household.id, userId, tokenHash });
+  return { ...viewOf(household, feed), address: feedAddress(publicOrigin, secret) };
 }
 
 export async function turnOffFeed(householdId: string, userId: string) {

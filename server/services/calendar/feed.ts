@@ -7,7 +7,6 @@ import ical, { ICalCalendarMethod } from 'ical-generator';
 import { Op } from 'sequelize';
 import { tzlib_get_ical_block } from 'timezones-ical-library';
 import { addDays } from '../../../shared/domain';
-import { DEFAULT_MEAL_TIMES, type MealTimes } from '../../../shared/schemas/calendar';
 import { SLOT_NAMES, USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
 import { Household, Jar, Pairing, PlanEntry, Product, Todo } from '../../db/models';
 import { todayIn } from '../clock';
@@ -34,7 +33,7 @@ const uid = (kind: string, id: string) => `${kind}-${id}@larderly.calendar`;
 
 export async function householdCalendar(household: Household, publicOrigin: string): Promise<string> {
   const zone = household.timeZone;
-  const times: MealTimes = { ...DEFAULT_MEAL_TIMES, ...(household.mealTimes ?? {}) };
+  const times = household.mealTimes;
   const today = todayIn(zone);
   const [entries, jars, todos] = await Promise.all([
     PlanEntry.findAll({

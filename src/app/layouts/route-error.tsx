@@ -1,4 +1,5 @@
 import { isRouteErrorResponse, Link, useLocation, useParams, useRouteError } from 'react-router-dom';
+import { paths } from '@/lib/paths';
 
 /** What went wrong, in one line a person can pass on. */
 function describe(error: unknown): string {
@@ -15,7 +16,7 @@ export function RouteError() {
   const error = useRouteError();
   const { hid } = useParams();
   const { pathname, search } = useLocation();
-  const home = hid ? `/h/${hid}` : '/';
+  const home = hid ? paths.today(hid) : paths.home();
   return (
     <section className="mx-auto w-full max-w-lg p-4 sm:p-6" role="alert" aria-labelledby="route-error-title">
       <div className="flex flex-col gap-3 rounded-card border border-past/50 bg-past-soft px-4 py-4 text-ink">

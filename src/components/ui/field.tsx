@@ -89,3 +89,24 @@ export function CheckboxField({ label, hint, ...props }: { label: ReactNode; hin
     </div>
   );
 }
+
+/** One of a few choices, as a card: its radio, its label and a hint; the card is marked while it is chosen. */
+export function ChoiceCard({ label, hint, ...props }: { label: ReactNode; hint?: ReactNode } & Omit<InputHTMLAttributes<HTMLInputElement>, 'type'>) {
+  const id = useId();
+  return (
+    <div className="flex min-h-11 items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-action has-[:checked]:bg-action-soft">
+      <input id={id} type="radio" className="mt-1 size-5 shrink-0 accent-action" aria-describedby={hint ? `${id}-hint` : undefined} {...props} />
+      <div>
+        {/* A choice with a hint reads as a title and its explanation; a lone choice is plain text. */}
+        <label htmlFor={id} className={`block cursor-pointer ${hint ? 'font-bold' : ''}`}>
+          {label}
+        </label>
+        {hint && (
+          <p id={`${id}-hint`} className="text-sm text-ink-muted">
+            {hint}
+          </p>
+        )}
+      </div>
+    </div>
+  );
+}

@@ -1,8 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CalendarFeedView, MealTimes } from '@shared/schemas/calendar';
 import { api } from '@/lib/api-client';
-
-export const calendarKeys = { feed: (hid: string) => ['households', hid, 'calendar-feed'] as const };
+import { calendarKeys } from '@/lib/query-keys';
 
 const base = (hid: string) => `/households/${hid}`;
 

@@ -8,7 +8,7 @@ import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
 import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
 import { Button } from '@/components/ui/button';
-import { SelectField, TextAreaField, TextField } from '@/components/ui/field';
+import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useCreateBatch } from '../api/create-batch';
@@ -166,26 +166,15 @@ export function NewBatchForm({
           <fieldset className="flex flex-col gap-2">
             <legend className="mb-1 font-bold">Seals</legend>
             {(['to-check', 'checked'] as const).map((choice) => (
-              <div key={choice} className="flex items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-action has-[:checked]:bg-action-soft">
-                <input
-                  id={`seals-${choice}`}
-                  type="radio"
-                  name="seals"
-                  value={choice}
-                  checked={seals === choice}
-                  onChange={() => set({ seals: choice === 'to-check' ? 'to-check' : null })}
-                  aria-describedby={`seals-${choice}-hint`}
-                  className="mt-1 size-5 shrink-0 accent-action"
-                />
-                <div>
-                  <label htmlFor={`seals-${choice}`} className="block cursor-pointer font-bold">
-                    {SEALS_CHOICE[choice].label}
-                  </label>
-                  <p id={`seals-${choice}-hint`} className="text-sm text-ink-muted">
-                    {SEALS_CHOICE[choice].hint}
-                  </p>
-                </div>
-              </div>
+              <ChoiceCard
+                key={choice}
+                name="seals"
+                value={choice}
+                checked={seals === choice}
+                onChange={() => set({ seals: choice === 'to-check' ? 'to-check' : null })}
+                label={SEALS_CHOICE[choice].label}
+                hint={SEALS_CHOICE[choice].hint}
+              />
             ))}
             {error?.fields.seals && <p className="font-bold text-past">{error.fields.seals}</p>}
           </fieldset>

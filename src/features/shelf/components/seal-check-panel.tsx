@@ -3,7 +3,7 @@ import type { BatchDetail, SealCheckDone } from '@shared/schemas/batches';
 import { clockWords, count, SEAL_CHECK_HOW, SEAL_CHECK_SOURCE, UNSEALED_CHOICES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CautionLine } from '@/components/ui/caution-line';
-import { TextField } from '@/components/ui/field';
+import { ChoiceCard, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useCheckSeals } from '../api/check-seals';
@@ -98,29 +98,14 @@ export function SealCheckPanel({ hid, batch, canCook }: { hid: string; batch: Ba
             {unsealed > 0 && (
               <fieldset className="flex flex-col gap-2">
                 <legend className="mb-1 font-bold">Where do they go?</legend>
-                <label className="flex min-h-11 items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-action has-[:checked]:bg-action-soft">
-                  <input
-                    type="radio"
-                    name="unsealed-way"
-                    checked={wayNow === 'fridge'}
-                    onChange={() => setWay('fridge')}
-                    className="mt-1 size-5 shrink-0 accent-action"
-                  />
-                  <span>{UNSEALED_CHOICES.fridge}</span>
-                </label>
+                <ChoiceCard name="unsealed-way" checked={wayNow === 'fridge'} onChange={() => setWay('fridge')} label={UNSEALED_CHOICES.fridge} />
                 {reprocessOpen && canCook ? (
-                  <label className="flex min-h-11 items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-action has-[:checked]:bg-action-soft">
-                    <input
-                      type="radio"
-                      name="unsealed-way"
-                      checked={wayNow === 'reprocess'}
-                      onChange={() => setWay('reprocess')}
-                      className="mt-1 size-5 shrink-0 accent-action"
-                    />
-                    <span>
-                      {UNSEALED_CHOICES.reprocess} Until {clockWords(check.reprocessUntil!, timeZone)}.
-                    </span>
-                  </label>
+                  <ChoiceCard
+                    name="unsealed-way"
+                    checked={wayNow === 'reprocess'}
+                    onChange={() => setWay('reprocess')}
+                    label={`${UNSEALED_CHOICES.reprocess} Until ${clockWords(check.reprocessUntil!, timeZone)}.`}
+                  />
                 ) : (
                   <p className="text-sm text-ink-muted">
                     {reprocessOpen ? 'Reprocessing is recorded by a cook or a keeper.' : UNSEALED_CHOICES.tooLate}
