@@ -79,6 +79,8 @@ describe('the household calendar address', () => {
     const dinner = events.find((e) => e.uid.includes(before.id))!;
     const breakfast = events.find((e) => e.uid.includes(after.id))!;
     expect(dinner.summary).toBe('Dinner: Bean chili with green tomato relish');
+    // The week screen takes the week to show from ?start= (src/app/routes/week.tsx).
+    expect(new URL(String(dinner.component.getFirstPropertyValue('url'))).search).toBe('?start=2027-03-12');
     expect(dinner.startDate.zone?.tzid).toBe('America/Denver');
     expect(dinner.startDate.toJSDate().toISOString()).toBe('2027-03-13T01:30:00.000Z');
     expect(breakfast.startDate.toJSDate().toISOString()).toBe('2027-03-16T13:15:00.000Z');

@@ -88,7 +88,8 @@ export async function householdCalendar(household: Household, publicOrigin: stri
       timezone: zone,
       summary: `${SLOT_NAMES[entry.slot]}: ${entry.title}`,
       description: jars.length > 0 ? `With ${jars.join(', ')}.` : undefined,
-      url: `${publicOrigin}/h/${household.id}/week?date=${entry.date}`,
+      // The week screen opens the week holding any date given as its start.
+      url: `${publicOrigin}/h/${household.id}/week?start=${entry.date}`,
     });
   }
   for (const jar of jars) {
