@@ -46,7 +46,7 @@ function isDatabaseDown(error: unknown): boolean {
   if (error instanceof ConnectionError || error instanceof TimeoutError) return true;
   const code = (error as { code?: string; parent?: { code?: string } })?.parent?.code ?? (error as { code?: string })?.code;
   return ['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', '08006', '08001', '08003'].includes(code ?? '')
-    || /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(String((error as Error)?.message));
+    || /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect|connection error and is not queryable/i.test(String((error as Error)?.message));
 }
 
 export const notFoundHandler: RequestHandler = (req, _res, next) => {

@@ -21,9 +21,12 @@ export function useOptimisticCache<T, V>({ key, hold = key, edit, onRefused, ref
   const queryClient = useQueryClient();
   return {
     onMutate: async (vars: V) => {
-      await queryClient.cancelQueries({ queryKey: hold });
+      // Cancel the reads in flight, then show the change before waiting for them: a control (a checkbox) shows its
+      // new state at once. A cancelled read puts back the last state set by hand, which is this change.
+      const cancelled = queryClient.cancelQueries({ queryKey: hold });
       const previous = queryClient.getQueryData<T>(key);
       if (previous !== undefined) queryClient.setQueryData<T>(key, edit(previous, vars));
+      await cancelled;
       return { previous };
     },
     onError: (error: Error, _vars: V, context: { previous?: T } | undefined) => {

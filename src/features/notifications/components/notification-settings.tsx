@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import type { NotificationPatch } from '@shared/schemas/notifications';
 import { SelectField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -12,10 +13,25 @@ function hourLabel(hour: number) {
   return `${hour % 12 === 0 ? 12 : hour % 12}:00 ${suffix}`;
 }
 
+/** A checkbox that shows the new choice in the same frame as the tap; the saved setting follows when it arrives. */
 function Toggle({ label, hint, checked, onChange }: { label: string; hint: string; checked: boolean; onChange: (on: boolean) => void }) {
+  const [shown, setShown] = useState(checked);
+  const [saved, setSaved] = useState(checked);
+  if (checked !== saved) {
+    setSaved(checked);
+    setShown(checked);
+  }
   return (
     <label className="flex min-h-11 cursor-pointer items-start gap-3">
-      <input type="checkbox" className="mt-1 h-5 w-5 shrink-0 accent-action" checked={checked} onChange={(e) => onChange(e.target.checked)} />
+      <input
+        type="checkbox"
+        className="mt-1 h-5 w-5 shrink-0 accent-action"
+        checked={shown}
+        onChange={(e) => {
+          setShown(e.target.checked);
+          onChange(e.target.checked);
+        }}
+      />
       <span>
         <span className="font-bold">{label}</span>
         <span className="block text-sm text-ink-muted">{hint}</span>
