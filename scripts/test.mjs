@@ -15,10 +15,8 @@ const wantsCodeRules = projects.length === 0 || projects.includes('code');
 const vitestProjects = projects.filter((name) => name !== 'code');
 const wantsVitest = projects.length === 0 || vitestProjects.length > 0;
 const wantsBrowser = projects.length === 0 || vitestProjects.includes('e2e');
-const wantsScale = vitestProjects.includes('scale');
-// The scale suite (whole processes behind nginx, `npm start` under SIGTERM) runs only when asked for:
-// `npm test -- --project scale`. Without --project every other project runs.
-const defaultProjects = projects.length === 0 ? ['--project', 'unit', '--project', 'api', '--project', 'e2e'] : [];
+// The scale suite: whole processes (two app processes behind nginx, `npm start` under SIGTERM).
+const wantsScale = projects.length === 0 || vitestProjects.includes('scale');
 // The built client is served by the browser tests' server and by nginx in the scale tests.
 const wantsClient = wantsBrowser || wantsScale;
 
@@ -54,7 +52,7 @@ try {
   mkdirSync(resultsDir, { recursive: true });
   const resultsFile = path.join(resultsDir, `vitest-${process.pid}.json`);
   try {
-    run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`, ...defaultProjects, ...extraArgs], {
+    run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`, ...extraArgs], {
       cwd: projectDir,
       env: {
         ...process.env,

@@ -42,11 +42,13 @@ export async function startJobs(ctx: AppContext) {
   await boss.schedule(REMINDERS, '*/5 * * * *');
   await boss.schedule(DIGESTS, '2,32 * * * *');
   await boss.work(REMINDERS, async () => {
-    await sweepReminders(ctx);
+    const { claimed } = await sweepReminders(ctx);
+    ctx.log?.info({ job: REMINDERS, claimed }, 'reminder sweep done');
   });
   await boss.work(DIGESTS, async () => {
-    await sweepDigests(ctx);
+    const { sent } = await sweepDigests(ctx);
     await forgetOldRequestKeys(ctx.sequelize);
+    ctx.log?.info({ job: DIGESTS, sent }, 'digest sweep done');
   });
   return {
     /** queue a reminder sweep now instead of waiting for the schedule */

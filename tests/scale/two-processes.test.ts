@@ -7,12 +7,15 @@ import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { createInterface } from 'node:readline';
+import pg from 'pg';
+import PgBoss from 'pg-boss';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startNginx } from '../../scripts/lib/nginx.mjs';
 import demo from '../../server/demo/demo-accounts.json' with { type: 'json' };
 import { createTestDatabase } from '../support/database';
 import { cameraPhoto } from '../support/photos';
 import { freePort } from '../support/ports';
+import { startStandIns, type StandIns } from '../support/stand-ins';
 
 type LogLine = {
   msg: string;
@@ -28,6 +31,7 @@ let database: Awaited<ReturnType<typeof createTestDatabase>>;
 let nginx: Awaited<ReturnType<typeof startNginx>>;
 const apps: App[] = [];
 let origin = '';
+let standIns: StandIns;
 
 async function startApp(name: string, env: NodeJS.ProcessEnv): Promise<App> {
   const port = await freePort();
@@ -57,6 +61,9 @@ beforeAll(async () => {
   if (seeded.status !== 0) throw new Error(`seeding failed:\n${seeded.stdout}${seeded.stderr}`);
   const nginxPort = await freePort();
   origin = `http://127.0.0.1:${nginxPort}`;
+  // Both processes send their mail to one local catcher, where the test counts it.
+  standIns = await startStandIns();
+  const { SMTP_HOST, SMTP_PORT, SMTP_SECURE, SMTP_FROM } = standIns.env;
   // As a deployment sets them: one secret for all, the public origin, and X-Forwarded-* believed from loopback (nginx) only.
   const env = {
     ...process.env,
@@ -69,6 +76,10 @@ beforeAll(async () => {
     STATIC_DIR: clientDir,
     AUTH_RATE_LIMIT: '10000',
     LOG_LEVEL: 'info',
+    SMTP_HOST,
+    SMTP_PORT,
+    SMTP_SECURE,
+    SMTP_FROM,
   };
   apps.push(...(await Promise.all([startApp('app-a', env), startApp('app-b', env)])));
   nginx = await startNginx({
@@ -92,6 +103,7 @@ afterAll(async () => {
           }),
       ),
   );
+  await standIns?.close();
   await database?.drop();
   rmSync(nginxDir, { recursive: true, force: true });
 });
@@ -247,14 +259,97 @@ describe('two app processes behind nginx', () => {
     );
   });
 
+  it('the reminder and digest jobs run in both processes, and each message goes out once', async () => {
+    const keeper = await signIn('keeper@larderly.test');
+    const cook = await signIn('cook@larderly.test');
+    const hid = json(await call('GET', '/api/auth/me', { cookie: keeper.cookie })).memberships[0].householdId;
+    const { timeZone } = json(await call('GET', `/api/households/${hid}`, { cookie: keeper.cookie })).household;
+    // The digest goes out on the household's first day of the week, at each person's reminder hour:
+    // make that now, in the household's own time zone.
+    const parts = Object.fromEntries(
+      new Intl.DateTimeFormat('en-US', { timeZone, weekday: 'short', hour: 'numeric', hourCycle: 'h23' })
+        .formatToParts(new Date())
+        .map((p) => [p.type, p.value]),
+    );
+    const weekday = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'].indexOf(parts.weekday!);
+    const hour = Number(parts.hour);
+    expect((await call('PATCH', `/api/households/${hid}`, { cookie: keeper.cookie, json: { weekStartsOn: weekday } })).status).toBe(200);
+    for (const person of [keeper, cook]) {
+      const saved = await call('PATCH', '/api/me/notifications', {
+        cookie: person.cookie,
+        json: { reminderHour: hour, daysBefore: 14, emailReminders: true, weeklyDigest: true },
+      });
+      expect(saved.status).toBe(200);
+    }
+
+    const boss = new PgBoss({ connectionString: database.url, schema: 'pgboss', max: 1, supervise: false, schedule: false });
+    const db = new pg.Client({ connectionString: database.url });
+    await Promise.all([boss.start(), db.connect()]);
+    const sweepsBy = (done: string) => apps.filter((a) => a.logs.some((l) => l.msg === done)).map((a) => a.name);
+    try {
+      // Sweeps are taken by whichever process polls first; send them until each process has run both kinds.
+      for (let round = 0; round < 16; round += 1) {
+        await boss.send('reminder-sweep', {});
+        await boss.send('digest-sweep', {});
+        for (let i = 0; i < 100; i += 1) {
+          const { rows } = await db.query(
+            "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
+          );
+          if (rows[0].waiting === 0) break;
+          await new Promise((resolve) => setTimeout(resolve, 200));
+        }
+        if (round >= 3 && sweepsBy('reminder sweep done').length === 2 && sweepsBy('digest sweep done').length === 2) break;
+      }
+      const reminderSweeps = sweepsBy('reminder sweep done');
+      const digestSweeps = sweepsBy('digest sweep done');
+      expect(reminderSweeps.sort()).toEqual(['app-a', 'app-b']);
+      expect(digestSweeps.sort()).toEqual(['app-a', 'app-b']);
+
+      const { rows: reminders } = await db.query(
+        `SELECT u.email, count(*)::int AS sent FROM reminder_deliveries d JOIN users u ON u.id = d.user_id
+          WHERE d.sent_at IS NOT NULL GROUP BY u.email`,
+      );
+      const { rows: digests } = await db.query(
+        `SELECT u.email, count(*)::int AS sent FROM digest_deliveries d JOIN users u ON u.id = d.user_id
+          WHERE d.email_sent GROUP BY u.email`,
+      );
+      const sentTo = (rows: { email: string; sent: number }[], email: string) => rows.find((r) => r.email === email)?.sent ?? 0;
+      for (const email of ['keeper@larderly.test', 'cook@larderly.test']) {
+        const mail = standIns.mail.to(email);
+        const digestMails = mail.filter((m) => m.subject.includes(': the week of '));
+        const reminderMails = mail.filter((m) => !m.subject.includes(': the week of '));
+        // One digest each, and one e-mail per reminder the database records as sent, however many sweeps ran.
+        expect(digestMails).toHaveLength(1);
+        expect(sentTo(digests, email)).toBe(1);
+        expect(reminderMails.length).toBe(sentTo(reminders, email));
+        console.log(`jobs: ${email} got ${digestMails.length} digest and ${reminderMails.length} reminder e-mail(s)`);
+      }
+      // The demo fridge holds opened jars within 14 days of their use-by: reminders did go out.
+      expect(sentTo(reminders, 'cook@larderly.test')).toBeGreaterThan(0);
+      const counted = apps.map((a) => `${a.name}: ${a.logs.filter((l) => l.msg.endsWith('sweep done')).length} sweeps`);
+      console.log(`jobs: ${counted.join(', ')}; ${standIns.mail.messages.length} e-mails in all`);
+    } finally {
+      await Promise.all([boss.stop({ graceful: false, wait: true }), db.end()]);
+    }
+  });
+
   it('one process killed mid-run: every request is still answered, by the one left', async () => {
     const { cookie } = await signIn('keeper@larderly.test');
     const victim = apps.find((a) => a.name === 'app-b')!;
     const answers: Answer[] = [];
     let killedAt = -1;
-    // 4 clients, 15 reads each; app-b is killed once 12 answers are in.
-    await Promise.all(
-      Array.from({ length: 4 }, async () => {
+    const hid = json(await call('GET', '/api/auth/me', { cookie })).memberships[0].householdId;
+    const db = new pg.Client({ connectionString: database.url });
+    await db.connect();
+    const { rows: recipes } = await db.query(
+      "SELECT r.id, r.product_id FROM recipes r JOIN products p ON p.id = r.product_id WHERE p.household_id = $1 AND r.name = 'Pickled beets'",
+      [hid],
+    );
+    const writes: { index: number; answer: Answer }[] = [];
+    const cannedOn = new Date().toISOString().slice(0, 10);
+    // 4 clients, 15 reads each, and 2 writers recording batches of 6 jars; app-b is killed once 12 reads are in.
+    await Promise.all([
+      ...Array.from({ length: 4 }, async () => {
         for (let i = 0; i < 15; i += 1) {
           answers.push(await call('GET', '/api/auth/me', { cookie }));
           if (answers.length >= 12 && killedAt < 0) {
@@ -263,8 +358,45 @@ describe('two app processes behind nginx', () => {
           }
         }
       }),
-    );
+      ...Array.from({ length: 2 }, async (_, writer) => {
+        for (let i = 0; i < 8; i += 1) {
+          const index = writer * 8 + i;
+          const answer = await call('POST', `/api/households/${hid}/batches`, {
+            cookie,
+            json: {
+              productId: recipes[0].product_id,
+              recipeId: recipes[0].id,
+              cannedOn,
+              jarSize: 'pint',
+              jarsFilled: 6,
+              jarsSealed: 6,
+              method: 'boiling-water',
+              notes: `killed-process run ${index}`,
+            },
+          });
+          writes.push({ index, answer });
+        }
+      }),
+    ]);
     expect(answers).toHaveLength(60);
+    // A change cut off with its process is answered with an error (nginx does not retry a POST it has sent);
+    // every change answered 201 is in the database, and every batch there is whole: all 6 jars or none of it.
+    const { rows: batches } = await db.query(
+      "SELECT b.id, b.notes, b.jars_filled, count(j.id)::int AS jars FROM batches b LEFT JOIN jars j ON j.batch_id = b.id WHERE b.notes LIKE 'killed-process run %' GROUP BY b.id",
+    );
+    await db.end();
+    const created = writes.filter((w) => w.answer.status === 201);
+    const refused = writes.filter((w) => w.answer.status !== 201);
+    expect(writes).toHaveLength(16);
+    expect(refused.filter((w) => w.answer.status < 500).map((w) => `${w.answer.status} ${w.answer.body}`)).toEqual([]);
+    expect(batches.every((b) => b.jars === 6 && b.jars_filled === 6)).toBe(true);
+    const stored = new Set(batches.map((b) => b.id));
+    expect(created.every((w) => stored.has(json(w.answer).batch.id))).toBe(true);
+    expect(batches.length).toBeGreaterThanOrEqual(created.length);
+    expect(batches.length).toBeLessThanOrEqual(writes.length);
+    console.log(
+      `kill: ${created.length} of 16 batch writes answered 201, ${refused.length} answered ${[...new Set(refused.map((w) => w.answer.status))].join('/') || '-'}; ${batches.length} batches stored, each with its 6 jars`,
+    );
     expect(answers.filter((a) => a.status !== 200)).toEqual([]);
     const before = answers.slice(0, killedAt).map((a) => a.instance);
     expect(before).toContain('app-b');
@@ -272,7 +404,6 @@ describe('two app processes behind nginx', () => {
     const last = answers.slice(-20).map((a) => a.instance);
     expect(new Set(last)).toEqual(new Set(['app-a']));
     // Writes go on through the one left.
-    const hid = json(answers[0]!).memberships[0].householdId;
     const written = await call('PATCH', `/api/households/${hid}`, {
       cookie,
       json: { name: json(await call('GET', `/api/households/${hid}`, { cookie })).household.name },
