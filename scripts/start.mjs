@@ -57,6 +57,8 @@ try {
     env: {
       ...process.env,
       NODE_ENV: process.env.NODE_ENV ?? 'development',
+      // The local demo keeps its terminal for the welcome and for warnings; LOG_LEVEL=info shows a line per request.
+      LOG_LEVEL: process.env.LOG_LEVEL ?? (production ? 'info' : 'warn'),
       DATABASE_URL: process.env.DATABASE_URL ?? databaseUrl,
       SESSION_SECRET: process.env.SESSION_SECRET ?? persistentSecret(cluster, 'session-secret'),
       PORT: port,
@@ -101,6 +103,7 @@ function printWelcome(url, production, withStandIns) {
     lines.push('');
   }
   if (withStandIns) lines.push('  E-mail, push and batch photos go to local stand-ins; a keeper reads the caught mail from Household, Invitations.', '');
+  if (!production && !process.env.LOG_LEVEL) lines.push('  Only warnings are logged here; `LOG_LEVEL=info npm start` logs one JSON line per request.', '');
   lines.push('  Press Ctrl-C (or send this process SIGTERM) to stop the server, the stand-ins and the database.', '');
   process.stdout.write(lines.join('\n') + '\n');
 }
