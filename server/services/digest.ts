@@ -8,6 +8,7 @@ import { clock, hourIn, todayIn } from './clock';
 import { digestRestockLines } from './restock/digest-lines';
 import { preferencesOf, withinReminderHours } from './notification-preferences';
 import { allocatePlan, productsOf } from './plan-allocation';
+import { paths } from '../../shared/paths';
 
 type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer'>;
 
@@ -34,7 +35,7 @@ export async function buildDigest(household: Household, today: string, origin: s
     toOpen: (plan?.allocation.openings ?? []).map((o) => ({ date: o.date, productName: nameOf(jarProduct.get(String(o.jarId)) ?? '') })),
     expiring: opened.map((j) => ({ useBy: j.useBy!, productName: nameOf(j.productId), code: j.code })),
     restock,
-    link: `${origin}/h/${household.id}/week`,
+    link: `${origin}${paths.week(household.id)}`,
   };
 }
 

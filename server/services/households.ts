@@ -3,6 +3,7 @@ import type { Role } from '../../shared/roles';
 import type { HouseholdPatch, HouseholdView, MemberView } from '../../shared/schemas/households';
 import { CalendarFeed, DigestDelivery, Household, Membership, PushSubscription, ReminderDelivery, Todo, User } from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
+import { paths } from '../../shared/paths';
 
 export function viewHousehold(household: Household, role: Role): HouseholdView {
   return { ...household.toPublic(), role };
@@ -31,7 +32,7 @@ export function requireConfirmedAltitude(household: Household) {
     'not_allowed',
     'Processing times and pressures depend on your altitude, and this household’s altitude has not been confirmed yet. A keeper confirms it under Household, then plans can be made.',
     undefined,
-    { action: { label: 'Confirm the altitude', href: `/h/${household.id}/setup` } },
+    { action: { label: 'Confirm the altitude', href: paths.setup(household.id) } },
   );
 }
 

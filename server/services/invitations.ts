@@ -7,6 +7,7 @@ import { Household, Invitation, Membership, User } from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
 import { clock } from './clock';
 import { invitationMail, invitationUsedElsewhereMail } from './mail/invitation-mail';
+import { paths } from '../../shared/paths';
 
 export const INVITATION_DAYS = 7;
 
@@ -47,7 +48,7 @@ export async function invite(ctx: Pick<AppContext, 'config' | 'mailer'>, househo
         householdName: household.name,
         inviterName: inviter.name,
         role: input.role,
-        link: `${ctx.config.publicOrigin}/invite/${token}`,
+        link: `${ctx.config.publicOrigin}${paths.invitation(token)}`,
         expiresOn: expiresAt.toISOString().slice(0, 10),
       }),
     );
@@ -150,7 +151,7 @@ async function tellKeepers(ctx: Pick<AppContext, 'config' | 'mailer' | 'log'>, i
   const keepers = await Membership.findAll({ where: { householdId: invitation.householdId, role: 'keeper' }, include: [{ model: User, as: 'user', required: true }] });
   for (const keeper of keepers) {
     await ctx.mailer
-      .send(invitationUsedElsewhereMail({ to: keeper.user!.email, householdName, invitedEmail: invitation.email, joinerName: joiner.name, joinerEmail: joiner.email, role: invitation.role, link: `${ctx.config.publicOrigin}/h/${invitation.householdId}/household` }))
+      .send(invitationUsedElsewhereMail({ to: keeper.user!.email, householdName, invitedEmail: invitation.email, joinerName: joiner.name, joinerEmail: joiner.email, role: invitation.role, link: `${ctx.config.publicOrigin}${paths.household(invitation.householdId)}` }))
       .catch((error: Error) =>
         ctx.log
           ? ctx.log.warn({ err: error, userId: keeper.userId }, 'the note to a keeper about a used invitation could not be sent')

@@ -22,6 +22,7 @@ import { reminderMail, reminderWords, type ReminderWords } from './mail/reminder
 import { clock, hourIn, todayIn } from './clock';
 import { preferencesOf, withinReminderHours, type Preferences } from './notification-preferences';
 import { subscriptionsOf } from './push/subscriptions';
+import { paths } from '../../shared/paths';
 
 type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer' | 'push'>;
 
@@ -134,7 +135,7 @@ async function deliver(
 function useByMessage(jar: Jar, product: Product, kind: 'soon' | 'today', daysLeft: number): Message {
   return {
     words: reminderWords(kind, product.name, daysLeft, jar.code),
-    path: `/j/${jar.code}`,
+    path: paths.jar(jar.code),
     tag: `jar-${jar.id}-${kind}`,
     button: 'Open the jar',
     caution: USE_BY_CAUTION_SENTENCE,
@@ -257,7 +258,7 @@ async function sweepSealChecks(ctx: Notifiers, now: Date, hooks: SweepHooks) {
     const productName = (batch as Batch & { product: Product }).product.name;
     await deliver(ctx, now, deliveryId, { user: membership.user!, prefs }, household, {
       words: { title: sealCheckTitle(productName), body: sealCheckMessage(productName, jarsLeft, reprocessBy) },
-      path: `/h/${household.id}/batches/${processing.batchId}`,
+      path: paths.batch(household.id, processing.batchId),
       tag: `seal-check-${processing.id}`,
       button: 'Check the seals',
       caution: CANNING_CAUTION_SENTENCE,

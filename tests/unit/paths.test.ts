@@ -1,7 +1,7 @@
-// The client's own addresses: the ones DEVELOPERS.md lists as relied on by labels, e-mails and to-dos keep their
-// shape, whatever builds them.
+// The app's own addresses, for the client and the server alike: the ones DEVELOPERS.md lists as relied on by
+// labels, e-mails, the calendar feed and to-dos keep their shape.
 import { describe, expect, it } from 'vitest';
-import { paths } from '../../src/lib/paths';
+import { paths } from '../../shared/paths';
 
 const hid = '7d1f2c3a-0000-4000-8000-000000000001';
 
@@ -14,6 +14,8 @@ describe('paths', () => {
     expect(paths.recipe(hid, 'r1')).toBe(`/h/${hid}/recipes/r1`);
     expect(paths.todo(hid, 't1')).toBe(`/h/${hid}/todo?open=t1`);
     expect(paths.invitation('tok_en')).toBe('/invite/tok_en');
+    expect(paths.week(hid, '2026-12-07')).toBe(`/h/${hid}/week?start=2026-12-07`);
+    expect(paths.household(hid)).toBe(`/h/${hid}/household`);
   });
 
   it('leaves out what is not given and encodes what needs it', () => {

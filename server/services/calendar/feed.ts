@@ -10,6 +10,7 @@ import { addDays } from '../../../shared/domain';
 import { SLOT_NAMES, USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
 import { Household, Jar, Pairing, PlanEntry, Product, Todo } from '../../db/models';
 import { todayIn } from '../clock';
+import { paths } from '../../../shared/paths';
 
 /** Planned meals from a week back to six weeks ahead; calendar apps keep what they fetched before. */
 const MEALS_FROM_DAYS = -7;
@@ -89,7 +90,7 @@ export async function householdCalendar(household: Household, publicOrigin: stri
       summary: `${SLOT_NAMES[entry.slot]}: ${entry.title}`,
       description: jars.length > 0 ? `With ${jars.join(', ')}.` : undefined,
       // The week screen opens the week holding any date given as its start.
-      url: `${publicOrigin}/h/${household.id}/week?start=${entry.date}`,
+      url: `${publicOrigin}${paths.week(household.id, entry.date)}`,
     });
   }
   for (const jar of jars) {
@@ -114,7 +115,7 @@ export async function householdCalendar(household: Household, publicOrigin: stri
       timezone: zone,
       summary: `To do: ${todo.title}`,
       description: todo.notes || undefined,
-      url: `${publicOrigin}/h/${household.id}/todo?open=${todo.id}`,
+      url: `${publicOrigin}${paths.todo(household.id, todo.id)}`,
     });
   }
   return calendar.toString();

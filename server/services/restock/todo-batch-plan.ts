@@ -10,6 +10,7 @@ import { todayIn } from '../clock';
 import { requireConfirmedAltitude } from '../households';
 import { stockSnapshot } from './stock-snapshot';
 import { createTodo } from '../todos';
+import { paths } from '../../../shared/paths';
 
 /** The recipe the household last made this product with, else its newest recipe. */
 async function chooseRecipe(product: Product): Promise<Recipe | null> {
@@ -54,7 +55,7 @@ export async function addRestockTodo(sequelize: Sequelize, household: Household,
   if (!recipe) {
     throw refuse(`${product.name} has no recipe yet. Add a tested recipe for it first, then plan the batch.`, {
       label: 'Add a recipe',
-      href: `/h/${household.id}/recipes/new?productId=${product.id}`,
+      href: paths.newRecipe(household.id, product.id),
     });
   }
   const jarSize = jarSizeFor(recipe, product, input.jarSize);

@@ -7,7 +7,7 @@ import { useLogout } from '@/features/auth/api/logout';
 import { SetupBanner } from '@/features/households/components/setup-banner';
 import { HouseholdSwitcher } from '@/features/households/components/household-switcher';
 import { rememberHousehold, useCurrentHousehold } from '@/features/households/use-current-household';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `flex min-h-11 items-center gap-3 rounded-lg px-3 font-bold ${isActive ? 'bg-action text-white' : 'text-ink hover:bg-sunken'}`;

@@ -1,7 +1,7 @@
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '@/features/auth/api/get-me';
 import { Notice } from '@/components/ui/notice';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Signed-in screens only: anyone else goes to sign-in and comes back here afterwards. */
 export function RequireAuth() {

@@ -1,5 +1,5 @@
 import { isRouteErrorResponse, Link, useLocation, useParams, useRouteError } from 'react-router-dom';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** What went wrong, in one line a person can pass on. */
 function describe(error: unknown): string {

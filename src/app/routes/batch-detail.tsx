@@ -6,7 +6,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { BatchDetailView } from '@/features/shelf/components/batch-detail';
 import { dateWords } from '@shared/words';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function BatchDetailRoute() {
   const { hid, role } = useCurrentHousehold();

@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/notice';
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { LabelSheet, type Paper } from '@/features/shelf/components/label-sheet';
 import { dateWords } from '@shared/words';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** A page of its own, outside the app's navigation, so it prints as nothing but labels. */
 export function BatchLabelsRoute() {

@@ -9,7 +9,7 @@ import { useProducts } from '@/features/shelf/api/get-products';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
 import { FirstProduct } from '@/features/shelf/components/first-product';
 import { NewBatchForm } from '@/features/shelf/components/new-batch-form';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function NewBatchRoute() {
   const { hid, role } = useCurrentHousehold();

@@ -7,7 +7,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useBatches } from '@/features/shelf/api/get-batches';
 import { BatchLog } from '@/features/shelf/components/batch-log';
 import { CsvImport } from '@/features/shelf/components/csv-import';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function BatchesRoute() {
   const { hid, role } = useCurrentHousehold();

@@ -3,7 +3,7 @@ import { Card, EmptyState, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useCaughtMail } from '@/features/invitations/api/caught-mail';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Development only: what Larderly sent, as the local mail catcher received it. */
 export function DevMailRoute() {

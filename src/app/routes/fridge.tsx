@@ -6,7 +6,7 @@ import { useCloseJar } from '@/features/fridge/api/close-jar';
 import { useFridge } from '@/features/fridge/api/get-fridge';
 import { FridgeJarCard } from '@/features/fridge/components/fridge-jar-card';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function FridgeRoute() {
   const { hid } = useCurrentHousehold();

@@ -2,7 +2,7 @@ import { Navigate } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/page';
 import { useMe } from '@/features/auth/api/get-me';
 import { lastHousehold } from '@/features/households/use-current-household';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Opens the household used last, or the first one. */
 export function HomeRedirect() {

@@ -9,7 +9,7 @@ import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/features/auth/api/get-me';
 import { useAcceptInvitation, useInvitationPreview, type AcceptInput } from '@/features/invitations/api/accept-invitation';
 import { ApiError } from '@/lib/api-client';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 function lead(invitation: InvitationPreview | undefined) {
   if (!invitation) return 'An invitation to share a shelf, a fridge and a week of meals on Larderly.';

@@ -10,7 +10,7 @@ import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
 import { dateWords, jarSizeWords } from '@shared/words';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** What a label's QR code opens: the jar, found by its code in whichever household of yours holds it. */
 export function JarRoute() {

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/page';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function NotFoundRoute() {
   return (

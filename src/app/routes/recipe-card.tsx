@@ -6,7 +6,7 @@ import { useHousehold } from '@/features/households/api/get-household';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useRecipe } from '@/features/shelf/api/get-recipes';
 import { RecipeCard } from '@/features/shelf/components/recipe-card';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function RecipeCardRoute() {
   const { hid, role } = useCurrentHousehold();

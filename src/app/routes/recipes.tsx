@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function RecipesRoute() {
   const { hid, role } = useCurrentHousehold();

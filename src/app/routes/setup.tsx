@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { useHousehold } from '@/features/households/api/get-household';
 import { FirstRunForm } from '@/features/households/components/first-run-form';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Only addresses inside this household are followed back, so the page cannot be used to send someone elsewhere. */
 function safeBack(hid: string, back: string | null) {

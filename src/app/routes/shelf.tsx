@@ -10,7 +10,7 @@ import { useProducts } from '@/features/shelf/api/get-products';
 import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },

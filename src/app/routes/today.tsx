@@ -12,7 +12,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useProducts } from '@/features/shelf/api/get-products';
 import { FirstProduct } from '@/features/shelf/components/first-product';
 import { can } from '@shared/roles';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function TodayRoute() {
   const { hid, role } = useCurrentHousehold();

@@ -5,7 +5,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useLogin } from '../api/login';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function SignInForm() {
   const login = useLogin();

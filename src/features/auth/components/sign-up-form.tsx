@@ -5,7 +5,7 @@ import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSignup } from '../api/signup';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function SignUpForm() {
   const signup = useSignup();

@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { BACKUP_MAX_BYTES } from '@shared/choices';
 import { Notice } from '@/components/ui/notice';
 import { useImportHousehold } from '../api/import-household';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const buttonLook = 'inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 font-bold transition-colors';
 

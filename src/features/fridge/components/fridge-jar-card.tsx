@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { JarDrawing } from '@/components/ui/jar-drawing';
 import { CountdownBadge } from '@/components/ui/countdown-badge';
 import type { ClosingAction } from '../api/close-jar';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 function estimateWords(jar: FridgeJar) {
   const round = (tbsp: number) => Math.round(tbsp * 10) / 10;

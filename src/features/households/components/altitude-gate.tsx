@@ -4,7 +4,7 @@ import { can } from '@shared/roles';
 import { Notice } from '@/components/ui/notice';
 import { useHousehold } from '../api/get-household';
 import { useCurrentHousehold } from '../use-current-household';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function setupHref(hid: string, back: string) {
   return paths.setup(hid, back);

@@ -1,7 +1,7 @@
 import { useLocation, useNavigate } from 'react-router-dom';
 import { ROLE_LABELS } from '@shared/roles';
 import type { MembershipSummary } from '@shared/schemas/auth';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Moves to the same screen in another household; a plain label when there is only one. */
 export function HouseholdSwitcher({ memberships, current }: { memberships: MembershipSummary[]; current: MembershipSummary }) {

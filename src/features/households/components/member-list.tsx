@@ -5,7 +5,7 @@ import type { MemberView } from '@shared/schemas/households';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useLeaveHousehold, useRemoveMember, useUpdateMemberRole } from '../api/update-member';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function MemberList({ hid, members, canManage, myId }: { hid: string; members: MemberView[]; canManage: boolean; myId: string }) {
   const update = useUpdateMemberRole(hid);

@@ -8,7 +8,7 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useCaughtMail } from '../api/caught-mail';
 import { useInvitations, useInvite, useRevokeInvitation } from '../api/invitations';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Keepers invite by e-mail with a role, see who has not joined yet and withdraw an invitation. */
 export function InvitationPanel({ hid }: { hid: string }) {

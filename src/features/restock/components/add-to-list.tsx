@@ -4,7 +4,7 @@ import type { JarSize } from '@shared/domain';
 import { JAR_SIZE_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { useAddRestockTodo } from '../api/add-restock-todo';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** "Add a restock batch to the to-do list", with the jar count the cook may change. */
 export function AddToList({ hid, productId, productName, suggestedJars, jarSize }: { hid: string; productId: string; productName: string; suggestedJars: number; jarSize: JarSize }) {

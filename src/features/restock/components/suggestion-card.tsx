@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
 import { dateWords, JAR_SIZE_NAMES } from '@shared/words';
 import { AddToList } from './add-to-list';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const REASON_TITLES = { 'runs-out-soon': 'Runs out soon', 'below-minimum': 'Below your minimum' } as const;
 

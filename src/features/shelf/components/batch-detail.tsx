@@ -17,7 +17,7 @@ import { BatchPhoto } from './batch-photo';
 import { SealCheckPanel } from './seal-check-panel';
 import { JarActions } from './jar-actions';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const EVENT_WORDS: Record<string, string> = {
   filled: 'filled',

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { BatchView } from '@shared/schemas/batches';
 import { dateWords, jarSizeWords, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }) {
   return (

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/page';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Where a household with no product yet is sent from every screen that needs one: to make its first. */
 export function FirstProduct({ hid, why, canCook }: { hid: string; why: string; canCook: boolean }) {

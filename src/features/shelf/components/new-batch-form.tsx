@@ -14,7 +14,7 @@ import { ApiError } from '@/lib/api-client';
 import { useCreateBatch } from '../api/create-batch';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** The household's today, as YYYY-MM-DD: the canning day the server checks against. */
 

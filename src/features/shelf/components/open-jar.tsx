@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useActOnJar } from '../api/act-on-jar';
 import { getOpeningAdvice } from '../api/get-opening-advice';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export type OpenableJar = Pick<JarView, 'id' | 'code' | 'productName'>;
 

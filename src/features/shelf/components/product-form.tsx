@@ -10,7 +10,7 @@ import { ApiError } from '@/lib/api-client';
 import { useSaveProduct } from '../api/save-product';
 import { numberFrom } from '../number-from';
 import { ColourDot } from './colour-dot';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 

@@ -10,7 +10,7 @@ import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useSaveRecipe } from '../api/save-recipe';
 import { numberFrom } from '../number-from';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 interface IngredientDraft {
   name: string;

@@ -8,7 +8,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { numberFrom } from '../number-from';
 import { Cautions } from './plan-panel';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Scales a tested recipe to the jars wanted; acid is never weakened, and the cautions come along. */
 export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: RecipeView; altitudeFt: number }) {

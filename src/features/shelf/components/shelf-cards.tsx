@@ -5,7 +5,7 @@ import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
   const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});

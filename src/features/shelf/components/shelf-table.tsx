@@ -7,7 +7,7 @@ import { CheckboxField, SelectField } from '@/components/ui/field';
 import type { ShelfBatchRow } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 const column = createColumnHelper<ShelfBatchRow>();
 const HIDDEN_COLUMNS = { pastBestQuality: false };

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { TodayTodo } from '@shared/schemas/today';
 import { dateWords } from '@shared/words';
 import { useTickTodo } from '@/features/todos';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** The signed-in person's open to-dos, tickable right here. */
 export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {

@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { JAR_SIZE_NAMES } from '@shared/words';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** The favourites that need a batch; each opens its place on the Restock screen. */
 export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: RestockSuggestionView[] }) {

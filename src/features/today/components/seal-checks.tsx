@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { SealCheckView } from '@shared/schemas/batches';
 import { clockWords, count, jarSizeWords } from '@shared/words';
 import { sealCheckTimes } from '@/features/shelf';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** Batches cooling after processing, and those ready for their seal check. */
 export function SealChecks({ hid, checks }: { hid: string; checks: SealCheckView[] }) {

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { altitudeWords, BEFORE_YOU_START, count, dateWords, headspaceWords, inCanner, JAR_SIZE_NAMES, minutesWords, pressureWords } from '@shared/words';
 import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
 import { Notice } from '@/components/ui/notice';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 function processingWords(plan: BatchPlan): string {
   const { processing } = plan;

@@ -1,5 +1,5 @@
-// The app's own addresses, built here and nowhere else. Those other parts rely on (a label's QR code, the e-mails,
-// a restock to-do's "record this batch") are listed in DEVELOPERS.md; change them only together with those parts.
+// The app's own addresses, built here and nowhere else: the client's links and routes, and the server's e-mails,
+// reminders, calendar feed and error actions. A label's QR code carries `jar()`: printed labels keep it for years.
 
 /** `?a=1&b=2` from the given values, leaving out the empty ones; '' when none is left. */
 function query(values: Record<string, string | number | null | undefined>): string {
@@ -31,7 +31,8 @@ export const paths = {
 
   screen: inHousehold,
   today: (hid: string) => inHousehold(hid),
-  week: (hid: string) => inHousehold(hid, 'week'),
+  /** The week board, at the week holding `start` (YYYY-MM-DD) when given. */
+  week: (hid: string, start?: string) => `${inHousehold(hid, 'week')}${query({ start })}`,
   shelf: (hid: string) => inHousehold(hid, 'shelf'),
   fridge: (hid: string) => inHousehold(hid, 'fridge'),
   batches: (hid: string) => inHousehold(hid, 'batches'),
