@@ -7,6 +7,7 @@ import type { useDeletePairing } from './api/delete-pairing';
 import type { useDeletePlanEntry } from './api/delete-plan-entry';
 import type { useUpdatePairing } from './api/update-pairing';
 import type { useUpdatePlanEntry } from './api/update-plan-entry';
+import type { DragSource, DropTarget, Held } from './drag';
 
 /** What every part of the board reads: the week, who may change it, and the changes it can make. */
 export interface Board {
@@ -19,6 +20,11 @@ export interface Board {
   updatePairing: ReturnType<typeof useUpdatePairing>;
   deletePairing: ReturnType<typeof useDeletePairing>;
   clearDay: ReturnType<typeof useClearDay>;
+  /** What a tap has picked up, waiting for a second tap on a place. */
+  held: Held | null;
+  hold: (held: Held | null) => void;
+  /** Puts a meal on a slot, a product on a planned meal or a planned meal elsewhere: what a drop, a tap or a menu does. */
+  put: (source: DragSource, target: DropTarget) => void;
   restock: { todo: ReturnType<typeof useAddRestockTodo>; add: (productId: string) => void; added: Set<string> };
 }
 

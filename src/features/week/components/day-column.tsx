@@ -14,7 +14,10 @@ export function DayColumn({ day }: { day: WeekDay }) {
     if (window.confirm(`Clear every meal planned for ${label}?`)) board.clearDay.mutate(day.date);
   };
   return (
-    <section aria-label={label} className={`flex min-w-0 flex-col gap-1.5 rounded-card border p-1 ${isToday ? 'border-action bg-action-soft/40' : 'border-line bg-surface/60'}`}>
+    <section
+      aria-label={label}
+      className={`flex min-w-0 flex-col gap-1 rounded-card border p-0.5 lg:p-1 ${isToday ? 'border-action bg-action-soft/40' : 'border-line bg-surface/60'}`}
+    >
       <header className="flex items-start justify-between gap-1">
         <h2 className="text-base leading-tight">
           <span className="block">{weekdayWords(day.date)}</span>
@@ -36,7 +39,12 @@ export function DayColumn({ day }: { day: WeekDay }) {
       </header>
       <DayNotes date={day.date} />
       {SLOTS.map((slot) => (
-        <SlotList key={slot} date={day.date} slot={slot} entries={day.entries.filter((e) => e.slot === slot).sort((a, b) => a.position - b.position)} />
+        <SlotList
+          key={slot}
+          date={day.date}
+          slot={slot}
+          entries={day.entries.filter((e) => e.slot === slot).sort((a, b) => a.position - b.position)}
+        />
       ))}
     </section>
   );

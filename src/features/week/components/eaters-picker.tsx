@@ -7,19 +7,25 @@ export function EatersPicker({ entry }: { entry: PlanEntryView }) {
   const members = board.week.members;
   const eating = entry.eaters === null ? members.map((m) => m.userId) : entry.eaters;
   const summary = entry.eaters === null ? 'Everyone eats' : `${eating.length} of ${members.length} eat`;
-  if (!board.canEdit) return <p className="mt-1 text-xs text-ink-muted">{summary}</p>;
   const toggle = (userId: string, on: boolean) => {
     const next = on ? [...eating, userId] : eating.filter((id) => id !== userId);
     board.updateEntry.mutate({ id: entry.id, patch: { eaters: next.length === members.length ? null : next } });
   };
   return (
     <details className="mt-1 text-xs">
-      <summary className="flex min-h-8 cursor-pointer items-center text-ink-muted pointer-coarse:min-h-11">{summary}</summary>
+      <summary className="flex min-h-8 cursor-pointer items-center text-ink-muted pointer-coarse:min-h-11">
+        {summary}
+      </summary>
       <fieldset className="flex flex-col">
         <legend className="sr-only">Who eats {entry.title}</legend>
         {members.map((member) => (
           <label key={member.userId} className="flex min-h-9 items-center gap-2 pointer-coarse:min-h-11">
-            <input type="checkbox" className="h-4 w-4 accent-action" checked={eating.includes(member.userId)} onChange={(e) => toggle(member.userId, e.target.checked)} />
+            <input
+              type="checkbox"
+              className="h-4 w-4 accent-action"
+              checked={eating.includes(member.userId)}
+              onChange={(e) => toggle(member.userId, e.target.checked)}
+            />
             {member.name}
           </label>
         ))}

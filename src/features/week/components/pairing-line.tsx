@@ -5,10 +5,16 @@ import { NumberCommit } from './number-commit';
 import { heatWords, tbspWords } from '@shared/words';
 
 /** Which jar a pairing draws from, or how much the shelf lacks. */
-function allocationLine(pairing: PairingView, entry: PlanEntryView, board: ReturnType<typeof useBoard>): { text: string; lacking: boolean } {
+function allocationLine(
+  pairing: PairingView,
+  entry: PlanEntryView,
+  board: ReturnType<typeof useBoard>,
+): { text: string; lacking: boolean } {
   const { week } = board;
-  if (entry.date < week.today) return { text: 'This day is over; its jars are no longer counted', lacking: false };
-  const draws = isPending(pairing.id) ? [] : week.allocation.assignments.filter((a) => String(a.portionId) === pairing.id);
+  if (entry.date < week.today) return { text: 'Day is over; its jars are not counted', lacking: false };
+  const draws = isPending(pairing.id)
+    ? []
+    : week.allocation.assignments.filter((a) => String(a.portionId) === pairing.id);
   if (draws.length === 0) return { text: 'Finding a jar…', lacking: false };
   const text = draws
     .map((a) => {
@@ -20,22 +26,36 @@ function allocationLine(pairing: PairingView, entry: PlanEntryView, board: Retur
   return { text, lacking: draws.some((a) => a.jarId === null) };
 }
 
-export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: PlanEntryView }) {
+export function PairingLine({
+  pairing,
+  entry,
+  editing,
+}: {
+  pairing: PairingView;
+  entry: PlanEntryView;
+  editing: boolean;
+}) {
   const board = useBoard();
   const name = productName(board.week, pairing.productId);
   const product = board.week.products.find((p) => p.id === pairing.productId);
   const line = allocationLine(pairing, entry, board);
+  const editable = board.canEdit && !isPending(pairing.id);
   return (
-    <li data-pairing={name} className="rounded-md bg-sunken/70 px-1.5 py-1 text-xs leading-snug">
-      <div className="flex items-start justify-between gap-1">
+    <li data-pairing={name} className="rounded bg-sunken/70 px-1 py-0.5 text-xs leading-tight">
+      <div className="flex items-start justify-between gap-0.5">
         <span className="min-w-0 font-bold">
           {name}
-          {product && product.heat > 0 && <span className="font-normal text-ink-muted"> · {heatWords(product.heat)}</span>}
+          {editing && product && product.heat > 0 && (
+            <span className="font-normal text-ink-muted"> · {heatWords(product.heat)}</span>
+          )}
+          {!editing && (
+            <span className="tabular font-normal text-ink-muted"> · {tbspWords(pairing.tbspPerServing)} each</span>
+          )}
         </span>
-        {board.canEdit && !isPending(pairing.id) && (
+        {editable && (
           <button
             type="button"
-            className="-m-1 grid min-h-8 min-w-8 pointer-coarse:min-h-11 pointer-coarse:min-w-11 shrink-0 place-items-center rounded text-ink-muted hover:bg-past-soft hover:text-past"
+            className="-m-0.5 grid min-h-6 min-w-6 shrink-0 place-items-center rounded text-ink-muted hover:bg-past-soft hover:text-past pointer-coarse:min-h-11 pointer-coarse:min-w-11"
             aria-label={`Unpair ${name} from ${entry.title}`}
             onClick={() => board.deletePairing.mutate(pairing.id)}
           >
@@ -46,8 +66,8 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
       <p className={`tabular ${line.lacking ? 'font-bold text-past' : 'text-info'}`} data-testid="allocation-line">
         {line.text}
       </p>
-      <div className="flex items-center gap-1 text-ink-muted">
-        {board.canEdit && !isPending(pairing.id) ? (
+      {editing && editable && (
+        <div className="flex items-center gap-1 text-ink-muted">
           <NumberCommit
             label={`Tablespoons of ${name} per serving of ${entry.title}`}
             value={pairing.tbspPerServing}
@@ -56,15 +76,17 @@ export function PairingLine({ pairing, entry }: { pairing: PairingView; entry: P
             step={0.25}
             onCommit={(tbspPerServing) => board.updatePairing.mutate({ id: pairing.id, tbspPerServing })}
           />
-        ) : (
-          <span className="tabular">{pairing.tbspPerServing}</span>
-        )}
-        <span>tbsp each</span>
-      </div>
+          <span>tbsp each</span>
+        </div>
+      )}
       {pairing.flags.length > 0 && (
-        <ul className="mt-1 flex flex-col gap-0.5">
+        <ul className="mt-0.5 flex flex-col gap-0.5">
           {pairing.flags.map((flag) => (
-            <li key={`${flag.kind}-${flag.userId}`} title={flag.reason} className="rounded bg-soon-soft px-1 font-bold text-soon">
+            <li
+              key={`${flag.kind}-${flag.userId}`}
+              title={flag.reason}
+              className="rounded bg-soon-soft px-1 font-bold text-soon"
+            >
               <span aria-hidden="true">⚑ {flag.label}</span>
               <span className="sr-only">{flag.reason}</span>
             </li>

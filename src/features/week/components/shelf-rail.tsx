@@ -1,31 +1,61 @@
 import { useDraggable } from '@dnd-kit/core';
+import type { ReactNode } from 'react';
 import type { WeekProduct } from '@shared/schemas/week';
 import { JarDrawing } from '@/components/ui/jar-drawing';
+import { useBoard } from '../board-context';
+import { ChipList } from './chip-list';
 
-function DraggableProduct({ product, canEdit }: { product: WeekProduct; canEdit: boolean }) {
-  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({ id: `product:${product.id}`, data: { type: 'product', product }, disabled: !canEdit });
-  const counts = [product.openedJars ? `${product.openedJars} open` : '', product.sealedJars ? `${product.sealedJars} sealed` : ''].filter(Boolean).join(', ');
+function ProductChip({ product, putOn }: { product: WeekProduct; putOn: ReactNode }) {
+  const board = useBoard();
+  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
+    id: `product:${product.id}`,
+    data: { type: 'product', product },
+    disabled: !board.canEdit,
+  });
+  const picked = board.held?.type === 'product' && board.held.product.id === product.id;
+  const counts = [
+    product.openedJars ? `${product.openedJars} open` : '',
+    product.sealedJars ? `${product.sealedJars} sealed` : '',
+  ]
+    .filter(Boolean)
+    .join(', ');
   return (
-    <li className="w-44 shrink-0 md:w-auto">
+    <>
       <button
         type="button"
         ref={setNodeRef}
         {...attributes}
         {...listeners}
-        className={`flex h-full min-h-11 w-full touch-manipulation select-none items-center gap-2 rounded-lg border bg-surface px-3 py-1 text-left hover:border-action ${product.openedJars ? 'border-info/60' : 'border-line'} ${canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
+        aria-pressed={board.canEdit ? picked : undefined}
+        // A click from Space or Enter starts a keyboard drag instead; only a tap or a mouse click picks the product up.
+        onClick={(e) => board.canEdit && e.detail > 0 && board.hold(picked ? null : { type: 'product', product })}
+        className={`flex min-h-11 min-w-0 flex-1 touch-manipulation select-none items-center gap-2 rounded-lg border px-3 py-1 text-left hover:border-action ${picked ? 'border-action bg-action-soft ring-2 ring-action' : product.openedJars ? 'border-info/60 bg-surface' : 'border-line bg-surface'} ${board.canEdit ? 'cursor-grab' : 'cursor-default'} ${isDragging ? 'opacity-40' : ''}`}
       >
-        <JarDrawing width={18} level={product.openedJars > 0 ? 0.25 : 0.6} lid={product.openedJars > 0 ? 'opened' : 'sealed'} />
+        <JarDrawing
+          width={18}
+          level={product.openedJars > 0 ? 0.25 : 0.6}
+          lid={product.openedJars > 0 ? 'opened' : 'sealed'}
+        />
         <span className="min-w-0">
           <span className="block font-bold leading-snug">{product.name}</span>
-          <span className="tabular block text-xs text-ink-muted">{counts}</span>
+          <span className="tabular block text-xs text-ink-muted">
+            {counts}
+            {picked && (
+              <span aria-hidden="true" className="font-bold text-action">
+                {' '}
+                · Picked
+              </span>
+            )}
+          </span>
         </span>
       </button>
-    </li>
+      {putOn}
+    </>
   );
 }
 
-/** Products with jars on the shelf or open in the fridge, the opened ones first: drag one onto a meal. */
-export function ShelfRail({ products, canEdit }: { products: WeekProduct[]; canEdit: boolean }) {
+/** Products with jars on the shelf or open in the fridge, the opened ones first: tap or drag one onto a meal. */
+export function ShelfRail({ products }: { products: WeekProduct[] }) {
   const onShelf = products
     .filter((p) => p.openedJars + p.sealedJars > 0)
     .sort((a, b) => Number(b.openedJars > 0) - Number(a.openedJars > 0) || a.name.localeCompare(b.name));
@@ -35,13 +65,17 @@ export function ShelfRail({ products, canEdit }: { products: WeekProduct[]; canE
         On the shelf
       </h2>
       {onShelf.length === 0 ? (
-        <p className="text-sm text-ink-muted">No jars on the shelf or in the fridge yet. Record a batch, then pair its jars with meals here.</p>
+        <p className="text-sm text-ink-muted">
+          No jars on the shelf or in the fridge yet. Record a batch, then pair its jars with meals here.
+        </p>
       ) : (
-        <ul className="-mx-1 flex gap-1.5 overflow-x-auto px-1 pb-1 md:mx-0 md:grid md:max-h-72 md:grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] md:overflow-x-visible md:overflow-y-auto md:px-0 md:pr-1">
-          {onShelf.map((product) => (
-            <DraggableProduct key={product.id} product={product} canEdit={canEdit} />
-          ))}
-        </ul>
+        <ChipList
+          id="shelf-rail"
+          things={onShelf}
+          noun="products"
+          sourceOf={(product) => ({ type: 'product', product })}
+          chip={(product, putOn) => <ProductChip product={product} putOn={putOn} />}
+        />
       )}
     </section>
   );

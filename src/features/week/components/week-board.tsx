@@ -1,4 +1,11 @@
-import { DndContext, DragOverlay, type CollisionDetection, type DragEndEvent, type DragStartEvent, type KeyboardCoordinateGetter } from '@dnd-kit/core';
+import {
+  DndContext,
+  DragOverlay,
+  type CollisionDetection,
+  type DragEndEvent,
+  type DragStartEvent,
+  type KeyboardCoordinateGetter,
+} from '@dnd-kit/core';
 import { useEffect, useLayoutEffect, useRef, useState } from 'react';
 import type { MealView, Slot, WeekView } from '@shared/schemas/week';
 import { Notice } from '@/components/ui/notice';
@@ -11,7 +18,17 @@ import { useDeletePlanEntry } from '../api/delete-plan-entry';
 import { useUpdatePairing } from '../api/update-pairing';
 import { useUpdatePlanEntry } from '../api/update-plan-entry';
 import { BoardContext, type Board } from '../board-context';
-import { accepts, announcements, screenReaderInstructions, sourceLabel, type DragSource, type DropTarget } from '../drag';
+import {
+  accepts,
+  announcements,
+  heldLine,
+  putLine,
+  screenReaderInstructions,
+  sourceLabel,
+  type DragSource,
+  type DropTarget,
+  type Held,
+} from '../drag';
 import { nextPlace, placesByDay } from '../keyboard-targets';
 import { useBoardSensors } from '../use-board-sensors';
 import { useMedia } from '../use-media';
@@ -21,13 +38,30 @@ import { DayPicker } from './day-picker';
 import { MealLibrary } from './meal-library';
 import { ProposalPanel } from './proposal-panel';
 import { ShelfRail } from './shelf-rail';
+import { TapHint } from './tap-hint';
 
-const sourceOf = (thing: { data: { current?: unknown } } | null | undefined) => thing?.data.current as DragSource | undefined;
-const targetOf = (thing: { data: { current?: unknown } } | null | undefined) => thing?.data.current as DropTarget | undefined;
+const sourceOf = (thing: { data: { current?: unknown } } | null | undefined) =>
+  thing?.data.current as DragSource | undefined;
+const targetOf = (thing: { data: { current?: unknown } } | null | undefined) =>
+  thing?.data.current as DropTarget | undefined;
 
-export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: WeekView; meals: MealView[]; canEdit: boolean }) {
+export function WeekBoard({
+  hid,
+  week,
+  meals,
+  canEdit,
+}: {
+  hid: string;
+  week: WeekView;
+  meals: MealView[];
+  canEdit: boolean;
+}) {
   const [message, setMessage] = useState<string | null>(null);
   const report = (text: string) => setMessage(text);
+  const refuse = (text: string) => {
+    report(text);
+    return false;
+  };
   const start = week.start;
   const createEntry = useCreatePlanEntry(hid, start, report);
   const updateEntry = useUpdatePlanEntry(hid, start, report);
@@ -36,7 +70,9 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   const [restocked, setRestocked] = useState(() => new Set<string>());
   const wide = useMedia('(min-width: 1024px)');
   const [picked, setPicked] = useState<string | null>(null);
-  const selectedDay = week.days.find((d) => d.date === picked)?.date ?? (week.days.some((d) => d.date === week.today) ? week.today : week.days[0].date);
+  const selectedDay =
+    week.days.find((d) => d.date === picked)?.date ??
+    (week.days.some((d) => d.date === week.today) ? week.today : week.days[0].date);
   const visibleDays = wide ? week.days : week.days.filter((d) => d.date === selectedDay);
   const [dragging, setDragging] = useState<DragSource | null>(null);
   // On a phone a quick sideways swipe over the day turns to the next or previous day.
@@ -55,7 +91,10 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   useLayoutEffect(() => {
     visibleRef.current = visibleDays;
   });
-  const coordinateGetter: KeyboardCoordinateGetter = (event, { context: { active, collisionRect, droppableRects } }) => {
+  const coordinateGetter: KeyboardCoordinateGetter = (
+    event,
+    { context: { active, collisionRect, droppableRects } },
+  ) => {
     const source = sourceOf(active);
     if (!source || !collisionRect) return undefined;
     const next = nextPlace(placesByDay(visibleRef.current, source), keyboardPlace.current, event.code);
@@ -64,7 +103,10 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
     keyboardPlace.current = next;
     const rect = droppableRects.get(next);
     if (!rect) return { x: collisionRect.left, y: collisionRect.top };
-    return { x: rect.left + rect.width / 2 - collisionRect.width / 2, y: rect.top + Math.min(rect.height / 2, 28) - collisionRect.height / 2 };
+    return {
+      x: rect.left + rect.width / 2 - collisionRect.width / 2,
+      y: rect.top + Math.min(rect.height / 2, 28) - collisionRect.height / 2,
+    };
   };
   const sensors = useBoardSensors(coordinateGetter);
 
@@ -72,7 +114,8 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
   const pointer = useRef<{ x: number; y: number } | null>(null);
   useEffect(() => {
     const onPointer = (event: PointerEvent) => (pointer.current = { x: event.clientX, y: event.clientY });
-    const onTouch = (event: TouchEvent) => event.touches[0] && (pointer.current = { x: event.touches[0].clientX, y: event.touches[0].clientY });
+    const onTouch = (event: TouchEvent) =>
+      event.touches[0] && (pointer.current = { x: event.touches[0].clientX, y: event.touches[0].clientY });
     // Capture, so the position is current before the drag sensors handle the same move.
     window.addEventListener('pointermove', onPointer, { passive: true, capture: true });
     window.addEventListener('touchmove', onTouch, { passive: true, capture: true });
@@ -101,10 +144,47 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
 
   const onDragStart = ({ active, activatorEvent }: DragStartEvent) => {
     const source = sourceOf(active) ?? null;
-    pointer.current = activatorEvent instanceof PointerEvent ? { x: activatorEvent.clientX, y: activatorEvent.clientY } : null;
+    pointer.current =
+      activatorEvent instanceof PointerEvent ? { x: activatorEvent.clientX, y: activatorEvent.clientY } : null;
     setDragging(source);
+    setHeld(null);
     setMessage(null);
     keyboardPlace.current = source?.type === 'entry' ? source.entry.id : null;
+  };
+
+  /** Sends the change a drop asks for; false when there is nothing to send (or only a reason why not). */
+  const put = (source: DragSource, target: DropTarget): boolean => {
+    if (!accepts(source, target)) return false;
+    if (source.type === 'product' && target.type === 'entry') {
+      if (isPending(target.entry.id)) return refuse('That meal is still being saved; pair it again in a moment.');
+      if (target.entry.pairings.some((p) => p.productId === source.product.id))
+        return refuse(`${target.entry.title} already has ${source.product.name}. Change its portion instead.`);
+      addPairing.mutate({ entryId: target.entry.id, productId: source.product.id });
+      return true;
+    }
+    const place =
+      target.type === 'slot'
+        ? { date: target.date, slot: target.slot as Slot, position: undefined }
+        : { date: target.entry.date, slot: target.entry.slot, position: target.entry.position };
+    if (source.type === 'meal') {
+      const preview = {
+        title: source.meal.name,
+        servings: source.meal.usualServings,
+        pairings: source.meal.products.map((p, i) => ({ id: `pending-${i}`, ...p, flags: [] })),
+      };
+      createEntry.mutate({ ...place, mealId: source.meal.id, preview });
+      return true;
+    }
+    if (source.type !== 'entry' || isPending(source.entry.id)) return false;
+    const { entry } = source;
+    const sameSlot = entry.date === place.date && entry.slot === place.slot;
+    const position = place.position ?? (sameSlot ? entriesOf(week, place.date, place.slot).length - 1 : undefined);
+    if (sameSlot && position === entry.position) return false;
+    updateEntry.mutate({
+      id: entry.id,
+      patch: { date: place.date, slot: place.slot, ...(position === undefined ? {} : { position }) },
+    });
+    return true;
   };
 
   const onDragEnd = ({ active, over }: DragEndEvent) => {
@@ -112,23 +192,30 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
     keyboardPlace.current = null;
     const source = sourceOf(active);
     const target = targetOf(over);
-    if (!source || !target || !accepts(source, target)) return;
-    if (source.type === 'product' && target.type === 'entry') {
-      if (isPending(target.entry.id)) return report('That meal is still being saved; pair it again in a moment.');
-      if (target.entry.pairings.some((p) => p.productId === source.product.id)) return report(`${target.entry.title} already has ${source.product.name}. Change its portion instead.`);
-      return addPairing.mutate({ entryId: target.entry.id, productId: source.product.id });
-    }
-    const place = target.type === 'slot' ? { date: target.date, slot: target.slot as Slot, position: undefined } : { date: target.entry.date, slot: target.entry.slot, position: target.entry.position };
-    if (source.type === 'meal') {
-      const preview = { title: source.meal.name, servings: source.meal.usualServings, pairings: source.meal.products.map((p, i) => ({ id: `pending-${i}`, ...p, flags: [] })) };
-      return createEntry.mutate({ ...place, mealId: source.meal.id, preview });
-    }
-    if (source.type !== 'entry' || isPending(source.entry.id)) return;
-    const { entry } = source;
-    const sameSlot = entry.date === place.date && entry.slot === place.slot;
-    const position = place.position ?? (sameSlot ? entriesOf(week, place.date, place.slot).length - 1 : undefined);
-    if (sameSlot && position === entry.position) return;
-    updateEntry.mutate({ id: entry.id, patch: { date: place.date, slot: place.slot, ...(position === undefined ? {} : { position }) } });
+    if (source && target) put(source, target);
+  };
+
+  // A tap picks a meal or a product up; a tap on a place (or a choice in a "Put on…" menu) puts it down there.
+  const [held, setHeld] = useState<Held | null>(null);
+  const [said, setSaid] = useState('');
+  const hold = (next: Held | null) => {
+    setHeld(next);
+    setSaid(next ? heldLine(next) : held ? `Nothing is picked; ${sourceLabel(held)} stayed where it was.` : '');
+  };
+  useEffect(() => {
+    if (!held) return;
+    const onKey = (event: KeyboardEvent) => {
+      if (event.key !== 'Escape') return;
+      setHeld(null);
+      setSaid(`Nothing is picked; ${sourceLabel(held)} stayed where it was.`);
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [held]);
+  const putHeld = (source: DragSource, target: DropTarget) => {
+    if (!put(source, target) || source.type === 'entry') return;
+    setHeld(null);
+    setSaid(putLine(source, target));
   };
 
   const board: Board = {
@@ -141,6 +228,9 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
     updatePairing: useUpdatePairing(hid, start, report),
     deletePairing: useDeletePairing(hid, start, report),
     clearDay: useClearDay(hid, start, report),
+    held,
+    hold,
+    put: putHeld,
     restock: {
       todo: restockTodo,
       added: restocked,
@@ -160,6 +250,8 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
       <DndContext
         sensors={sensors}
         collisionDetection={collisionDetection}
+        // Gentler than the default near the window's edges, so a meal is not carried past the slot it was meant for.
+        autoScroll={{ acceleration: 4, threshold: { x: 0.08, y: 0.12 }, interval: 10 }}
         accessibility={{ announcements, screenReaderInstructions }}
         onDragStart={onDragStart}
         onDragEnd={onDragEnd}
@@ -176,29 +268,67 @@ export function WeekBoard({ hid, week, meals, canEdit }: { hid: string; week: We
                   {message}
                 </Notice>
               </div>
-              <button type="button" onClick={() => setMessage(null)} className="min-h-11 rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+              <button
+                type="button"
+                onClick={() => setMessage(null)}
+                className="min-h-11 rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+              >
                 Dismiss
               </button>
             </div>
           )}
+          {canEdit && <TapHint />}
           <ProposalPanel hid={hid} week={week} canEdit={canEdit} />
           <div className="grid gap-4 rounded-card border border-line bg-surface p-3 md:grid-cols-2">
             <MealLibrary hid={hid} meals={meals} canEdit={canEdit} />
-            <ShelfRail products={week.products} canEdit={canEdit} />
+            <ShelfRail products={week.products} />
           </div>
           {!wide && <DayPicker days={week.days} selected={selectedDay} today={week.today} onSelect={setPicked} />}
           <div
-            className={wide ? 'grid grid-cols-7 gap-1.5' : 'flex flex-col'}
-            onTouchStart={wide ? undefined : (e) => (swipeFrom.current = { x: e.touches[0].clientX, y: e.touches[0].clientY })}
+            className={wide ? 'grid grid-cols-7 gap-1' : 'flex flex-col'}
+            onTouchStart={
+              wide ? undefined : (e) => (swipeFrom.current = { x: e.touches[0].clientX, y: e.touches[0].clientY })
+            }
             onTouchEnd={wide ? undefined : (e) => onSwipeEnd(e.changedTouches[0].clientX, e.changedTouches[0].clientY)}
           >
             {visibleDays.map((day) => (
               <DayColumn key={day.date} day={day} />
             ))}
           </div>
+          <div
+            className={`sticky bottom-20 z-10 flex items-center gap-2 lg:bottom-3 ${said ? 'rounded-lg border-2 border-action bg-surface px-3 py-1 shadow-lg' : ''}`}
+          >
+            <p role="status" aria-live="polite" className="flex-1 text-sm font-bold" data-testid="held-line">
+              {said}
+            </p>
+            {held ? (
+              <button
+                type="button"
+                onClick={() => hold(null)}
+                className="min-h-11 shrink-0 rounded-lg border border-line px-3 font-bold text-action hover:bg-action-soft"
+              >
+                Cancel
+              </button>
+            ) : (
+              said && (
+                <button
+                  type="button"
+                  onClick={() => setSaid('')}
+                  aria-label="Dismiss this line"
+                  className="min-h-11 min-w-11 shrink-0 rounded-lg font-bold text-ink-muted hover:bg-sunken"
+                >
+                  ×
+                </button>
+              )
+            )}
+          </div>
         </div>
         <DragOverlay dropAnimation={null}>
-          {dragging && <div className="max-w-56 cursor-grabbing rounded-lg border-2 border-action bg-surface px-3 py-2 font-bold shadow-lg">{sourceLabel(dragging)}</div>}
+          {dragging && (
+            <div className="max-w-56 cursor-grabbing rounded-lg border-2 border-action bg-surface px-3 py-2 font-bold shadow-lg">
+              {sourceLabel(dragging)}
+            </div>
+          )}
         </DragOverlay>
       </DndContext>
     </BoardContext.Provider>
