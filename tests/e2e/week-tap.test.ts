@@ -26,12 +26,15 @@ async function plannedOn(page: Page, start: string, date: string, slotName: stri
     .map((e) => ({ title: e.title, products: e.pairings.map((p) => names.get(p.productId)) }));
 }
 
-/** Signs the keeper in on a phone and opens the week two weeks ahead, where the demo plans nothing. */
+/**
+ * Signs the keeper in on a phone and opens the week three weeks ahead: the demo plans nothing there, and the
+ * drag tests (which share the household) use the week two ahead.
+ */
 async function openEmptyWeekOnPhone(page: Page) {
   await signIn(page, baseURL, 'keeper@larderly.test');
   await page.goto(`${baseURL}/h/${householdOf(page)}/week`);
   await page.getByRole('heading', { name: 'Meals' }).waitFor();
-  for (let i = 0; i < 2; i += 1) {
+  for (let i = 0; i < 3; i += 1) {
     const url = page.url();
     await page.getByRole('button', { name: 'Next week' }).tap();
     await page.waitForURL((next) => next.toString() !== url);
@@ -85,6 +88,9 @@ describe('the week board by tapping, on a phone', () => {
     await lentils.tap();
     await page.getByRole('navigation', { name: 'Day of the week' }).getByRole('button', { name: /^W/ }).tap();
     await screenshot(page, 'week-tap-picked-phone');
+    // As the hand sees it: the day's slots and, above the bottom navigation, what is picked and Cancel.
+    await slot(page, 'Wednesday', 'Lunch').scrollIntoViewIfNeeded();
+    await page.screenshot({ path: 'test-results/screenshots/week-tap-picked-phone-viewport.png' });
     await page.getByRole('button', { name: 'Put Lentil soup and bread on Wednesday lunch' }).tap();
     const planned = card(slot(page, 'Wednesday', 'Lunch'), 'Lentil soup and bread');
     await planned.getByRole('button', { name: 'Remove Lentil soup and bread from the plan' }).waitFor();
