@@ -21,20 +21,19 @@ import { BoardContext, type Board } from '../board-context';
 import {
   accepts,
   announcements,
-  heldLine,
-  putLine,
   screenReaderInstructions,
   sourceLabel,
   type DragSource,
   type DropTarget,
-  type Held,
 } from '../drag';
 import { nextPlace, placesByDay } from '../keyboard-targets';
 import { useBoardSensors } from '../use-board-sensors';
 import { useMedia } from '../use-media';
+import { useTapPick } from '../use-tap-pick';
 import { entriesOf, isPending } from '../week-edits';
 import { DayColumn } from './day-column';
 import { DayPicker } from './day-picker';
+import { HeldBar } from './held-bar';
 import { MealLibrary } from './meal-library';
 import { ProposalPanel } from './proposal-panel';
 import { ShelfRail } from './shelf-rail';
@@ -147,7 +146,7 @@ export function WeekBoard({
     pointer.current =
       activatorEvent instanceof PointerEvent ? { x: activatorEvent.clientX, y: activatorEvent.clientY } : null;
     setDragging(source);
-    setHeld(null);
+    tap.letGo();
     setMessage(null);
     keyboardPlace.current = source?.type === 'entry' ? source.entry.id : null;
   };
@@ -195,28 +194,7 @@ export function WeekBoard({
     if (source && target) put(source, target);
   };
 
-  // A tap picks a meal or a product up; a tap on a place (or a choice in a "Put on…" menu) puts it down there.
-  const [held, setHeld] = useState<Held | null>(null);
-  const [said, setSaid] = useState('');
-  const hold = (next: Held | null) => {
-    setHeld(next);
-    setSaid(next ? heldLine(next) : held ? `Nothing is picked; ${sourceLabel(held)} stayed where it was.` : '');
-  };
-  useEffect(() => {
-    if (!held) return;
-    const onKey = (event: KeyboardEvent) => {
-      if (event.key !== 'Escape') return;
-      setHeld(null);
-      setSaid(`Nothing is picked; ${sourceLabel(held)} stayed where it was.`);
-    };
-    window.addEventListener('keydown', onKey);
-    return () => window.removeEventListener('keydown', onKey);
-  }, [held]);
-  const putHeld = (source: DragSource, target: DropTarget) => {
-    if (!put(source, target) || source.type === 'entry') return;
-    setHeld(null);
-    setSaid(putLine(source, target));
-  };
+  const tap = useTapPick(put);
 
   const board: Board = {
     hid,
@@ -228,9 +206,9 @@ export function WeekBoard({
     updatePairing: useUpdatePairing(hid, start, report),
     deletePairing: useDeletePairing(hid, start, report),
     clearDay: useClearDay(hid, start, report),
-    held,
-    hold,
-    put: putHeld,
+    held: tap.held,
+    hold: tap.hold,
+    put: tap.put,
     restock: {
       todo: restockTodo,
       added: restocked,
@@ -295,33 +273,7 @@ export function WeekBoard({
               <DayColumn key={day.date} day={day} />
             ))}
           </div>
-          <div
-            className={`sticky bottom-20 z-10 flex items-center gap-2 lg:bottom-3 ${said ? 'rounded-lg border-2 border-action bg-surface px-3 py-1 shadow-lg' : ''}`}
-          >
-            <p role="status" aria-live="polite" className="flex-1 text-sm font-bold" data-testid="held-line">
-              {said}
-            </p>
-            {held ? (
-              <button
-                type="button"
-                onClick={() => hold(null)}
-                className="min-h-11 shrink-0 rounded-lg border border-line px-3 font-bold text-action hover:bg-action-soft"
-              >
-                Cancel
-              </button>
-            ) : (
-              said && (
-                <button
-                  type="button"
-                  onClick={() => setSaid('')}
-                  aria-label="Dismiss this line"
-                  className="min-h-11 min-w-11 shrink-0 rounded-lg font-bold text-ink-muted hover:bg-sunken"
-                >
-                  ×
-                </button>
-              )
-            )}
-          </div>
+          <HeldBar tap={tap} />
         </div>
         <DragOverlay dropAnimation={null}>
           {dragging && (
