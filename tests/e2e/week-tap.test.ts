@@ -123,6 +123,7 @@ describe('the week board by tapping, on a phone', () => {
     await page.keyboard.press('Enter');
     const menu = page.getByRole('group', { name: 'Put Black bean tacos on…' });
     await expect(menu.getByRole('heading').evaluate((h) => h === document.activeElement)).resolves.toBe(true);
+    await screenshot(page, 'week-put-on-menu-phone');
     await menu.getByRole('button', { name: 'Thursday dinner' }).focus();
     await page.keyboard.press('Enter');
     expect(await menu.count()).toBe(0);

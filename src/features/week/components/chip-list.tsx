@@ -4,7 +4,7 @@ import { sourceLabel, type Held } from '../drag';
 import { PutOnMenu } from './put-on-menu';
 
 /** How many chips a phone shows before "Show all": enough to choose from without pushing the week off the screen. */
-const FOLDED = 6;
+const FOLDED = 4;
 
 const heldId = (held: Held) => (held.type === 'meal' ? `meal-${held.meal.id}` : `product-${held.product.id}`);
 export const putOnButtonId = (held: Held) => `put-on-${heldId(held)}`;
