@@ -1,8 +1,16 @@
 import { Op } from 'sequelize';
-import { allocateWeek, defaultUseWithinDays, type AllocationJar, type PlannedPortion, type WeekAllocation } from '../../shared/domain';
+import { allocateWeek, daysBetween, defaultUseWithinDays, type AllocationJar, type PlannedPortion, type WeekAllocation } from '../../shared/domain';
 import { Jar, Pairing, PlanEntry, Product } from '../db/models';
 
 export const useWithinOf = (product: Product) => product.useWithinDays ?? defaultUseWithinDays(product.kind);
+
+/**
+ * How many days an opened jar keeps in the allocation: from its own use-by (the date the fridge shows, set when it
+ * was opened, shorter for an unsealed jar) rather than the product's rule now, which may have changed since.
+ */
+export function keepsDays(openedOn: string | null | undefined, useBy: string | null | undefined, productDays: number): number {
+  return openedOn && useBy && useBy >= openedOn ? daysBetween(openedOn, useBy) : productDays;
+}
 
 /** Every paired portion planned from `from` to `until`, both included. */
 async function plannedPortions(householdId: string, from: string, until: string): Promise<PlannedPortion[]> {
@@ -28,7 +36,7 @@ export async function allocatePlan(householdId: string, today: string, until: st
     const product = products.get(jar.productId);
     if (!product) return [];
     const state = jar.state as AllocationJar['state'];
-    return [{ id: jar.id, productId: jar.productId, state, capacityTbsp: jar.capacityTbsp, remainingTbsp: jar.remainingTbsp, bestBy: jar.bestBy, openedOn: jar.openedOn ?? undefined, useWithinDays: useWithinOf(product) }];
+    return [{ id: jar.id, productId: jar.productId, state, capacityTbsp: jar.capacityTbsp, remainingTbsp: jar.remainingTbsp, bestBy: jar.bestBy, openedOn: jar.openedOn ?? undefined, useWithinDays: keepsDays(jar.openedOn, jar.useBy, useWithinOf(product)) }];
   });
   return { allocation: allocateWeek({ today, jars, portions }), plannedProducts };
 }

@@ -3,6 +3,7 @@ import { addDays, allocateWeek, daysBetween, type Id, type PlannedPortion } from
 import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/today';
 import { Household, Jar, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
+import { keepsDays } from './plan-allocation';
 import { sealChecksOf } from './shelf/seal-check';
 import { restockFromSnapshot } from './restock/view';
 import { stockSnapshot, useWithinDaysOf, type StockSnapshot } from './restock/stock-snapshot';
@@ -10,6 +11,10 @@ import { stockSnapshot, useWithinDaysOf, type StockSnapshot } from './restock/st
 /** The fridge jars shown first; the Fridge screen has the rest. */
 const FRIDGE_SHOWN = 5;
 const SLOT_ORDER = ['breakfast', 'lunch', 'dinner', 'snack'];
+
+function openedDaysLeft(jar: Jar | undefined, today: string): number | null {
+  return jar?.state === 'opened' && jar.useBy ? daysBetween(today, jar.useBy) : null;
+}
 
 function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView['short'] } {
   const { today, products, shelfJars, planned, entryOf } = snapshot;
@@ -25,11 +30,11 @@ function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView
       remainingTbsp: Math.min(jar.remainingTbsp, jar.capacityTbsp),
       bestBy: jar.bestBy,
       openedOn: jar.openedOn ?? undefined,
-      useWithinDays: useWithinDaysOf(productOf.get(jar.productId)!),
+      useWithinDays: keepsDays(jar.openedOn, jar.useBy, useWithinDaysOf(productOf.get(jar.productId)!)),
     })),
     portions: planned.filter((portion) => portion.date <= addDays(today, 6)),
   });
-  const codeOf = new Map<Id, string>(shelfJars.map((jar) => [jar.id, jar.code]));
+  const jarOf = new Map<Id, Jar>(shelfJars.map((jar) => [jar.id, jar]));
   const openedToday = new Set<Id>(allocation.openings.filter((o) => o.date === today).map((o) => o.jarId));
   const todays = new Map<Id, PlannedPortion>(planned.filter((p) => p.date === today).map((p) => [p.id, p]));
 
@@ -44,7 +49,9 @@ function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView
       productId: String(portion.productId),
       productName: productOf.get(portion.productId)?.name ?? 'A product',
       tbsp: assignment.tbsp,
-      jarCode: assignment.jarId ? codeOf.get(assignment.jarId)! : null,
+      jarId: assignment.jarId === null ? null : String(assignment.jarId),
+      jarCode: assignment.jarId === null ? null : jarOf.get(assignment.jarId)!.code,
+      openedJarDaysLeft: openedDaysLeft(jarOf.get(assignment.jarId ?? ''), today),
       opensToday: assignment.jarId !== null && openedToday.has(assignment.jarId),
     }];
   });

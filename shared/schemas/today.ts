@@ -13,7 +13,10 @@ export interface TodayUse {
   productName: string;
   tbsp: number;
   /** null where the shelf cannot cover it. */
+  jarId: string | null;
   jarCode: string | null;
+  /** Days left before the use-by of the opened jar it draws from; null for a sealed jar or none. */
+  openedJarDaysLeft: number | null;
   /** The jar has to be opened today for this portion. */
   opensToday: boolean;
 }

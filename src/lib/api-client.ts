@@ -5,9 +5,17 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** The next step the server names with a refusal, e.g. { label: 'Add a recipe', href: '/h/…/recipes/new' }. */
+    readonly action?: { label: string; href: string },
   ) {
     super(message);
   }
+}
+
+function actionOf(details: unknown): ApiError['action'] {
+  const action = (details as { action?: { label?: unknown; href?: unknown } } | undefined)?.action;
+  // Only an address inside the app: the link is followed without a page load.
+  return typeof action?.label === 'string' && typeof action.href === 'string' && action.href.startsWith('/') && !action.href.startsWith('//') ? { label: action.label, href: action.href } : undefined;
 }
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
@@ -28,7 +36,7 @@ async function request<T>(method: Method, url: string, body?: unknown): Promise<
   const payload = await response.json().catch(() => null);
   if (!response.ok) {
     const error = payload?.error;
-    throw new ApiError(response.status, error?.code ?? 'unknown', error?.message ?? `The server answered ${response.status}. Try again.`, error?.fields);
+    throw new ApiError(response.status, error?.code ?? 'unknown', error?.message ?? `The server answered ${response.status}. Try again.`, error?.fields, actionOf(error?.details));
   }
   return payload as T;
 }

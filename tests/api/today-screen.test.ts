@@ -39,6 +39,20 @@ describe('the Today read', () => {
     expect(use.some((u: { jarCode: string }) => u.jarCode === newer.code)).toBe(false);
   });
 
+  it('serves today from an opened jar with two days left on its use-by, even after the product was set to keep fewer days, instead of opening a new one', async () => {
+    // Opened ten days ago while the product kept twelve days (use-by in two days); the household has since set seven.
+    const product = await addProduct(ctx.householdId, { name: 'Test Shortened Relish', kind: 'relish', useWithinDays: 7 });
+    const [openJar] = await addJars(product, { opened: [{ openedOn: addDays(TODAY, -10), useBy: addDays(TODAY, 2), remainingTbsp: 12 }] });
+    const [sealed] = await addJars(product, { sealed: 1 });
+    await planPortion(product, TODAY, { tbspPerServing: 1, servings: 2, slot: 'lunch', title: 'Cheese toast' });
+
+    const response = await (await ctx.signedIn('helper@larderly.test')).get(todayUrl());
+    const use = response.body.use.filter((u: { productName: string }) => u.productName === 'Test Shortened Relish');
+    expect(use).toEqual([expect.objectContaining({ jarId: openJar.id, jarCode: openJar.code, opensToday: false, openedJarDaysLeft: 2, tbsp: 2 })]);
+    expect(use.some((u: { jarCode: string }) => u.jarCode === sealed.code)).toBe(false);
+    expect(response.body.fridge).toContainEqual(expect.objectContaining({ code: openJar.code, daysLeft: 2 }));
+  });
+
   it('names what the shelf cannot cover today', async () => {
     const product = await addProduct(ctx.householdId, { name: 'Test Empty Relish', kind: 'relish' });
     await planPortion(product, TODAY, { tbspPerServing: 1, servings: 4, slot: 'breakfast', title: 'Eggs' });

@@ -4,6 +4,7 @@ import { addDays, allocateWeek, defaultUseWithinDays, type AllocationJar, type I
 import { SLOTS, weekDates, type PlanEntryView, type WeekJar, type WeekMember, type WeekView } from '../../../shared/schemas/week';
 import type { Household } from '../../db/models';
 import { todayIn } from '../clock';
+import { keepsDays } from '../plan-allocation';
 import { eaterFlags } from './eater-flags';
 import { currentJarRows, entryRows, memberRows, productRows, recipeRows, type EntryRow, type JarRow, type ProductRow } from './week-rows';
 
@@ -82,7 +83,7 @@ export function allocationJar(jar: JarRow, productById: Map<string, ProductRow>)
     remainingTbsp: Number(jar.remaining_tbsp),
     bestBy: jar.best_by,
     openedOn: jar.opened_on ?? undefined,
-    useWithinDays: product.use_within_days ?? defaultUseWithinDays(product.kind),
+    useWithinDays: keepsDays(jar.opened_on, jar.use_by, product.use_within_days ?? defaultUseWithinDays(product.kind)),
   };
 }
 

@@ -26,6 +26,7 @@ export interface JarRow {
   remaining_tbsp: string;
   best_by: string;
   opened_on: string | null;
+  use_by: string | null;
 }
 
 
@@ -57,7 +58,7 @@ export function entryRows(sequelize: Sequelize, householdId: string, from: strin
 /** Every opened jar (each may turn before it is finished), and the sealed jars of the products the plan draws on. */
 export function currentJarRows(sequelize: Sequelize, householdId: string, productIds: string[]) {
   return sequelize.query<JarRow>(
-    `SELECT id, code, product_id, state, capacity_tbsp, remaining_tbsp, best_by, opened_on
+    `SELECT id, code, product_id, state, capacity_tbsp, remaining_tbsp, best_by, opened_on, use_by
        FROM jars
       WHERE household_id = :householdId
         AND (state = 'opened' OR (state = 'sealed' AND product_id = ANY(ARRAY[:productIds]::uuid[])))`,

@@ -7,6 +7,7 @@ import { useFridge } from '@/features/fridge/api/get-fridge';
 import { FridgeJarCard } from '@/features/fridge/components/fridge-jar-card';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { paths } from '@shared/paths';
+import { ReminderOffer } from '@/features/notifications/components/reminder-offer';
 
 export function FridgeRoute() {
   const { hid } = useCurrentHousehold();
@@ -49,10 +50,16 @@ export function FridgeRoute() {
         </EmptyState>
       )}
       {jars.length > 0 && (
+        <div className="mb-4">
+          <ReminderOffer about="a jar’s use-by" />
+        </div>
+      )}
+      {jars.length > 0 && (
         <ul className="grid items-start gap-3 md:grid-cols-2 xl:grid-cols-3" aria-label="Opened jars">
           {jars.map((jar) => (
             <FridgeJarCard
               key={jar.jarId}
+              hid={hid}
               jar={jar}
               unsealedAdvice={fridge.data?.unsealedAdvice ?? ''}
               busy={closeJar.isPending}

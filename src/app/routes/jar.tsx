@@ -10,6 +10,7 @@ import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
 import { dateWords, jarSizeWords } from '@shared/words';
+import { ReminderOffer } from '@/features/notifications/components/reminder-offer';
 import { paths } from '@shared/paths';
 
 /** What a label's QR code opens: the jar, found by its code in whichever household of yours holds it. */
@@ -55,6 +56,7 @@ export function JarRoute() {
             <JarDates jar={jar} />
           </p>
           {jar.state === 'opened' && <CautionLine about="use-by" />}
+          {jar.state === 'opened' && jar.useBy && <ReminderOffer about={`this jar’s use-by (${dateWords(jar.useBy)})`} />}
           {jar.unsealed && jar.state === 'opened' && <Notice tone="soon">{UNSEALED_JAR_ADVICE}</Notice>}
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
           <PutBackJar

@@ -42,7 +42,7 @@ export function TodayRoute() {
             </TodaySection>
           )}
           <TodaySection id="today-use" title="Open and use today" more={{ to: paths.week(hid), label: 'Week' }}>
-            <JarsForToday use={view.use} short={view.short} />
+            <JarsForToday hid={hid} use={view.use} short={view.short} canHandleJars={can(role, 'handleJars')} />
           </TodaySection>
           <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: paths.fridge(hid), label: `All ${view.fridgeCount}` } : { to: paths.fridge(hid), label: 'Fridge' }}>
             <FridgeCountdowns jars={view.fridge} />

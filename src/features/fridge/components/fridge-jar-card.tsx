@@ -16,7 +16,10 @@ function estimateWords(jar: FridgeJar) {
   return `The plan uses about ${round(jar.plannedTbsp)} tbsp; about ${round(jar.estimateTbsp)} tbsp will be left on its use-by.`;
 }
 
-export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
+/** Food would be left in it on its use-by: nothing planned finishes it. */
+const leftOnUseBy = (jar: FridgeJar) => jar.daysLeft >= 0 && (jar.estimateFrom === 'jar' ? jar.remainingTbsp > 0 : jar.estimateTbsp > 0);
+
+export function FridgeJarCard({ hid, jar, unsealedAdvice, onClose, busy }: { hid: string; jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
   const [confirmDiscard, setConfirmDiscard] = useState(false);
   const { tone } = countdown(jar.daysLeft);
   return (
@@ -37,6 +40,11 @@ export function FridgeJarCard({ jar, unsealedAdvice, onClose, busy }: { jar: Fri
       <p className="tabular">
         <span className="font-bold">{DATE_NAMES.useBy} {dateWords(jar.useBy)}.</span> {estimateWords(jar)}
       </p>
+      {leftOnUseBy(jar) && (
+        <Link to={paths.week(hid)} className="-mt-1 inline-flex min-h-11 items-center self-start font-bold text-action underline underline-offset-4" aria-label={`Plan jar ${jar.code} of ${jar.productName} on a meal`}>
+          Plan it on a meal
+        </Link>
+      )}
       {jar.unsealed && (
         <p className="rounded-lg border border-soon-fill bg-soon-soft px-3 py-2 text-sm">
           <span className="font-bold">Unsealed jar.</span> {unsealedAdvice} Follow your tested recipe and your local extension service; when in doubt, throw it out.

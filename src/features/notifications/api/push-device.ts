@@ -1,5 +1,6 @@
 import { api } from '@/lib/api-client';
 import { serviceWorkerRegistration } from '@/lib/service-worker';
+import { ALLOW_NOTIFICATIONS, PUSH_BROWSERS, PushSetupError, pushSetupError } from '../push-errors';
 
 export const pushSupported = () => typeof window !== 'undefined' && 'serviceWorker' in navigator && 'PushManager' in window && 'Notification' in window;
 
@@ -14,17 +15,21 @@ export async function currentSubscription() {
   return registration ? registration.pushManager.getSubscription() : null;
 }
 
-/** Asks the browser for permission, subscribes with the server's VAPID key and tells the server. */
+/** Asks the browser for permission, subscribes with the server's VAPID key and tells the server; a failure says what to do. */
 export async function subscribeThisDevice() {
-  const permission = await Notification.requestPermission();
-  if (permission !== 'granted') {
-    throw new Error('Notifications are blocked for Larderly in this browser. Allow them in the site settings, then try again.');
+  if (!pushSupported()) throw new PushSetupError('unsupported', `This browser cannot receive push notifications. ${PUSH_BROWSERS}`);
+  try {
+    const permission = await Notification.requestPermission();
+    if (permission === 'denied') throw new PushSetupError('blocked', ALLOW_NOTIFICATIONS);
+    if (permission !== 'granted') throw new PushSetupError('dismissed', 'The browser asked without an answer. Tap Turn on again and choose Allow.');
+    const registration = await serviceWorkerRegistration();
+    const { publicKey } = await api.get<{ publicKey: string }>('/push/public-key');
+    const subscription = await registration.pushManager.subscribe({ userVisibleOnly: true, applicationServerKey: bytesFromBase64Url(publicKey) });
+    await api.post('/push/subscriptions', subscription.toJSON());
+    return subscription;
+  } catch (cause) {
+    throw pushSetupError(cause);
   }
-  const registration = await serviceWorkerRegistration();
-  const { publicKey } = await api.get<{ publicKey: string }>('/push/public-key');
-  const subscription = await registration.pushManager.subscribe({ userVisibleOnly: true, applicationServerKey: bytesFromBase64Url(publicKey) });
-  await api.post('/push/subscriptions', subscription.toJSON());
-  return subscription;
 }
 
 export async function unsubscribeThisDevice() {

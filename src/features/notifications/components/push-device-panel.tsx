@@ -1,6 +1,7 @@
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { usePushDevice } from '../api/use-push-device';
+import { PUSH_BROWSERS } from '../push-errors';
 
 /** Web Push on this browser: turn on, send a test, turn off. */
 export function PushDevicePanel({ otherDevices }: { otherDevices: number }) {
@@ -9,7 +10,7 @@ export function PushDevicePanel({ otherDevices }: { otherDevices: number }) {
   const busy = device.subscribe.isPending || device.unsubscribe.isPending || device.test.isPending;
 
   if (!device.supported) {
-    return <Notice tone="info">This browser cannot receive push notifications. Use e-mail reminders, or open Larderly in a browser that can (on a phone, add it to the home screen first).</Notice>;
+    return <Notice tone="info">This browser cannot receive push notifications. Use e-mail reminders, or open Larderly in a browser that can. {PUSH_BROWSERS}</Notice>;
   }
   return (
     <div className="flex flex-col gap-3">

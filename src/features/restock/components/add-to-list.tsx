@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import type { JarSize } from '@shared/domain';
 import { JAR_SIZE_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
+import { ErrorWithAction } from '@/components/ui/error-with-action';
 import { useAddRestockTodo } from '../api/add-restock-todo';
 import { paths } from '@shared/paths';
 
@@ -44,9 +45,9 @@ export function AddToList({ hid, productId, productName, suggestedJars, jarSize 
         {add.isPending ? 'Adding…' : 'Add to the to-do list'}
       </Button>
       {add.isError && (
-        <p role="alert" className="w-full text-sm font-bold text-past">
-          {add.error.message}
-        </p>
+        <div className="w-full">
+          <ErrorWithAction error={add.error} />
+        </div>
       )}
     </form>
   );

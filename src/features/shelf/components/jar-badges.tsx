@@ -1,10 +1,11 @@
+import { ReasonToggle } from '@/components/ui/reason-toggle';
 import type { JarView } from '@shared/schemas/batches';
 import { DATE_NAMES, dateWords, JAR_STATE_NAMES, SEAL_TO_CHECK_NAME, UNSEALED_STATE_NAME } from '@shared/words';
 
 export function PastBestBadge({ bestBy }: { bestBy: string }) {
   return (
-    <span className="inline-flex items-center rounded-full border border-soon-fill bg-soon-soft px-2 py-0.5 text-sm font-bold text-soon" title={`${DATE_NAMES.bestQuality} ${dateWords(bestBy)}`}>
-      {DATE_NAMES.pastBestQuality}
+    <span className="inline-flex items-center rounded-2xl border border-soon-fill bg-soon-soft px-2 py-0.5 text-sm text-soon">
+      <ReasonToggle label={DATE_NAMES.pastBestQuality} reason={`${DATE_NAMES.bestQuality} ${dateWords(bestBy)}: eat these first.`} />
     </span>
   );
 }

@@ -15,7 +15,6 @@ interface Props {
   jar: OpenableJar;
   label: string;
   ariaLabel?: string;
-  title?: string;
   variant?: 'primary' | 'secondary';
   className?: string;
   /** The jar actually opened (it may be the better one offered); the caller shows the checks, since this button may go away. */
@@ -26,7 +25,7 @@ interface Props {
  * Opens a jar, first asking the server whether the same product has a jar that should go first (one already open,
  * or an older sealed one); if so it says which and offers it, but the person may still open this one.
  */
-export function OpenJarButton({ hid, jar, label, ariaLabel, title, variant = 'primary', className = '', onOpened }: Props) {
+export function OpenJarButton({ hid, jar, label, ariaLabel, variant = 'primary', className = '', onOpened }: Props) {
   const act = useActOnJar(hid);
   const [advice, setAdvice] = useState<OpeningAdvice | null>(null);
   const [checking, setChecking] = useState(false);
@@ -53,7 +52,7 @@ export function OpenJarButton({ hid, jar, label, ariaLabel, title, variant = 'pr
   return (
     <div className="flex flex-col gap-2">
       {!advice && (
-        <Button variant={variant} className={className} disabled={checking || act.isPending} aria-label={ariaLabel} title={title} onClick={() => void start()}>
+        <Button variant={variant} className={className} disabled={checking || act.isPending} aria-label={ariaLabel} onClick={() => void start()}>
           {label}
         </Button>
       )}

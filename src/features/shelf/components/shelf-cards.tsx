@@ -12,14 +12,12 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
   return (
     <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
       {groups.map((group) => (
-        <li key={group.product.id} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
+        <li key={group.product.id} className="flex min-w-0 flex-col gap-3 rounded-card border border-line bg-surface p-4">
           <div className="flex items-start justify-between gap-3">
-            <div className="min-w-0">
-              <h2 className="flex items-center gap-2 text-lg">
+            <div className="min-w-0 flex-1">
+              <h2 className="flex items-baseline gap-2 text-lg">
                 <ColourDot colour={group.product.colour} />
-                <span className="truncate" title={group.product.name}>
-                  {group.product.name}
-                </span>
+                <span className="min-w-0 [overflow-wrap:anywhere]">{group.product.name}</span>
                 {group.product.favourite && (
                   <span className="text-soon" title="A household favorite" aria-label="favorite">
                     ★
@@ -31,7 +29,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
                 {group.product.heat > 0 ? ` · ${heatWords(group.product.heat)}` : ''}
               </p>
             </div>
-            <p className="text-right">
+            <p className="shrink-0 text-right">
               <span className="tabular block text-3xl font-bold leading-none">{group.sealed}</span>
               <span className="text-sm text-ink-muted">sealed</span>
             </p>
@@ -59,6 +57,7 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
               ))}
             </ul>
           )}
+          {group.nextJar && <p className="tabular text-sm text-ink-muted">Eat first: jar {group.nextJar.code}</p>}
           <div className="mt-auto flex flex-wrap gap-2">
             {canHandleJars && group.nextJar && (
               <OpenJarButton
@@ -67,7 +66,6 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
                 variant="secondary"
                 label="Open oldest jar"
                 ariaLabel={`Open oldest jar of ${group.product.name}`}
-                title={`Jar ${group.nextJar.code}, the one to eat first`}
                 onOpened={(jar) => setJustOpened((all) => ({ ...all, [group.product.id]: jar }))}
               />
             )}

@@ -1,7 +1,9 @@
+import { Link } from 'react-router-dom';
 import type { TodayFridgeJar } from '@shared/schemas/today';
 import { dateWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { CountdownBadge } from '@/components/ui/countdown-badge';
+import { paths } from '@shared/paths';
 
 /** The opened jars to finish first. */
 export function FridgeCountdowns({ jars }: { jars: TodayFridgeJar[] }) {
@@ -15,7 +17,10 @@ export function FridgeCountdowns({ jars }: { jars: TodayFridgeJar[] }) {
               <span>
                 <span className="font-bold">{jar.productName}</span>
                 <span className="block text-sm text-ink-muted">
-                  Jar {jar.code} · use by {dateWords(jar.useBy)}
+                  <Link to={paths.jar(jar.code)} className="font-bold text-action underline underline-offset-4">
+                    Jar {jar.code}
+                  </Link>{' '}
+                  · use by {dateWords(jar.useBy)}
                 </span>
               </span>
               <CountdownBadge daysLeft={jar.daysLeft} />

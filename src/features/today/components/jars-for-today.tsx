@@ -1,17 +1,72 @@
-import type { TodayView } from '@shared/schemas/today';
+import { Link } from 'react-router-dom';
+import type { TodayUse, TodayView } from '@shared/schemas/today';
+import { count } from '@shared/words';
+import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
+import { useActOnJar } from '@/features/shelf';
+import { paths } from '@shared/paths';
 
 const SLOT_NAMES = { breakfast: 'Breakfast', lunch: 'Lunch', dinner: 'Dinner', snack: 'Snack' } as const;
 
-/** What to open and use today, meal by meal, from the week's allocation. */
-export function JarsForToday({ use, short }: Pick<TodayView, 'use' | 'short'>) {
+/** An opened jar this close to its use-by is the one to reach for: say so, by name. */
+const OPENED_SOON_DAYS = 2;
+
+function JarLink({ code }: { code: string }) {
+  return (
+    <Link to={paths.jar(code)} className="font-bold text-action underline underline-offset-4">
+      jar {code}
+    </Link>
+  );
+}
+
+function whereFrom(portion: TodayUse) {
+  if (!portion.jarCode) return <span className="font-bold text-soon">none on the shelf</span>;
+  if (portion.opensToday) return <>open <JarLink code={portion.jarCode} /></>;
+  const daysLeft = portion.openedJarDaysLeft;
+  if (daysLeft !== null && daysLeft <= OPENED_SOON_DAYS) {
+    return (
+      <>
+        use the opened jar first: <JarLink code={portion.jarCode} /> ({daysLeft === 0 ? 'use by today' : `${count(daysLeft, 'day')} left`})
+      </>
+    );
+  }
+  return <>from <JarLink code={portion.jarCode} /></>;
+}
+
+/** What to open and use today, meal by meal, from the week's allocation; each new jar can be opened right here. */
+export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView, 'use' | 'short'> & { hid: string; canHandleJars: boolean }) {
+  const act = useActOnJar(hid);
   if (use.length === 0) return <p className="text-ink-muted">No jars are paired with today’s meals. Pair a product with a meal on the Week to see it here.</p>;
-  const openings = use.filter((portion) => portion.opensToday);
+  // One line per jar: two portions from the same new jar open it once.
+  const openings = [...new Map(use.filter((p) => p.opensToday && p.jarId).map((p) => [p.jarId!, p])).values()];
   return (
     <div className="flex flex-col gap-3">
       {openings.length > 0 && (
         <Notice tone="action" title={openings.length === 1 ? 'Open one new jar today' : `Open ${openings.length} new jars today`}>
-          {openings.map((portion) => `${portion.productName} (jar ${portion.jarCode})`).join(', ')}
+          <ul className="flex flex-col gap-1">
+            {openings.map((portion) => (
+              <li key={portion.jarId} className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
+                <span>
+                  {portion.productName} (<JarLink code={portion.jarCode!} />)
+                </span>
+                {canHandleJars && (
+                  <Button
+                    variant="secondary"
+                    disabled={act.isPending}
+                    aria-label={`Open it: jar ${portion.jarCode} of ${portion.productName}`}
+                    onClick={() => act.mutate({ jarId: portion.jarId!, action: 'open' })}
+                  >
+                    Open it
+                  </Button>
+                )}
+              </li>
+            ))}
+          </ul>
+          {act.error && (
+            <p role="alert" className="mt-1 font-bold text-past">
+              {act.error.message}
+            </p>
+          )}
         </Notice>
       )}
       <ul className="divide-y divide-line">
@@ -20,9 +75,7 @@ export function JarsForToday({ use, short }: Pick<TodayView, 'use' | 'short'>) {
             <span>
               <span className="font-bold">{SLOT_NAMES[portion.slot]}</span> · {portion.mealTitle}: <span className="tabular">{portion.tbsp}</span> tbsp {portion.productName}
             </span>
-            <span className={`text-sm ${portion.jarCode ? 'text-ink-muted' : 'font-bold text-soon'}`}>
-              {portion.jarCode ? `${portion.opensToday ? 'open jar' : 'from jar'} ${portion.jarCode}` : 'none on the shelf'}
-            </span>
+            <span className="text-sm text-ink-muted">{whereFrom(portion)}</span>
           </li>
         ))}
       </ul>

@@ -1,6 +1,10 @@
 import type { AllocationWarning } from '@shared/domain';
 import { jarCode, productName, useBoard } from '../board-context';
+import { useState } from 'react';
 import { tbspWords } from '@shared/words';
+import { ErrorWithAction } from '@/components/ui/error-with-action';
+import { weekday } from '../drag';
+import { nextMealFor } from '../next-meal';
 
 function warningText(warning: AllocationWarning, board: ReturnType<typeof useBoard>) {
   const name = productName(board.week, String(warning.productId));
@@ -30,26 +34,57 @@ export function DayNotes({ date }: { date: string }) {
       {warnings.map((warning, i) => (
         <div key={`${warning.kind}-${String(warning.productId)}-${i}`} role="note" className="rounded-md border border-soon-fill bg-soon-soft px-1.5 py-1">
           <p>{warningText(warning, board)}</p>
-          <RestockButton productId={String(warning.productId)} />
+          {warning.kind === 'will-expire' ? <PlanItOnAMeal productId={String(warning.productId)} jarId={String(warning.jarId)} useBy={warning.date} /> : <RestockButton productId={String(warning.productId)} />}
         </div>
       ))}
     </div>
   );
 }
 
+const LINK_BUTTON = 'mt-0.5 min-h-8 rounded px-0.5 text-left font-bold text-action underline underline-offset-2 pointer-coarse:min-h-11';
+
 function RestockButton({ productId }: { productId: string }) {
   const { canEdit, restock, week } = useBoard();
   if (!canEdit) return null;
   if (restock.added.has(productId)) return <p className="font-bold text-action">On the to-do list</p>;
+  const refusal = restock.refused.get(productId);
   return (
-    <button
-      type="button"
-      aria-label={`Add a restock to-do for ${productName(week, productId)}`}
-      className="mt-0.5 min-h-8 rounded px-0.5 text-left font-bold text-action underline underline-offset-2 pointer-coarse:min-h-11"
-      disabled={restock.todo.isPending}
-      onClick={() => restock.add(productId)}
-    >
-      Add a restock to-do
-    </button>
+    <>
+      <button type="button" aria-label={`Add a restock to-do for ${productName(week, productId)}`} className={LINK_BUTTON} disabled={restock.todo.isPending} onClick={() => restock.add(productId)}>
+        Add a restock to-do
+      </button>
+      {refusal && <ErrorWithAction error={refusal} />}
+    </>
+  );
+}
+
+/** A jar that would turn with food left goes on the next planned meal before its use-by that does not have it yet. */
+function PlanItOnAMeal({ productId, jarId, useBy }: { productId: string; jarId: string; useBy: string }) {
+  const { canEdit, week, addPairing } = useBoard();
+  const [placed, setPlaced] = useState<string | null>(null);
+  const [refusal, setRefusal] = useState<Error | null>(null);
+  if (!canEdit) return null;
+  const name = productName(week, productId);
+  if (placed) return <p role="status" className="font-bold text-action">{placed}</p>;
+  const entry = nextMealFor(week, productId, useBy);
+  if (!entry) return <p className="text-ink-muted">No planned meal before its use-by can take it: plan one by {weekday(useBy)}, then pair {name} with it.</p>;
+  const where = `${weekday(entry.date)} ${entry.slot}, ${entry.title}`;
+  return (
+    <>
+      <button
+        type="button"
+        aria-label={`Plan jar ${jarCode(week, jarId)} of ${name} on a meal: ${where}`}
+        className={LINK_BUTTON}
+        disabled={addPairing.isPending}
+        onClick={() => {
+          setRefusal(null);
+          addPairing.mutate({ entryId: entry.id, productId }, { onSuccess: () => setPlaced(`Paired with ${where}`), onError: setRefusal });
+        }}
+      >
+        Plan it on a meal
+      </button>
+      <span className="block text-ink-muted">Adds it to {where}.</span>
+      {refusal && <ErrorWithAction error={refusal} />}
+    </>
   );
 }

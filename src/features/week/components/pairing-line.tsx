@@ -3,6 +3,7 @@ import { jarCode, productName, useBoard } from '../board-context';
 import { isPending } from '../week-edits';
 import { NumberCommit } from './number-commit';
 import { heatWords, tbspWords } from '@shared/words';
+import { ReasonToggle } from '@/components/ui/reason-toggle';
 
 /** Which jar a pairing draws from, or how much the shelf lacks. */
 function allocationLine(
@@ -82,13 +83,8 @@ export function PairingLine({
       {pairing.flags.length > 0 && (
         <ul className="mt-0.5 flex flex-col gap-0.5">
           {pairing.flags.map((flag) => (
-            <li
-              key={`${flag.kind}-${flag.userId}`}
-              title={flag.reason}
-              className="rounded bg-soon-soft px-1 font-bold text-soon"
-            >
-              <span aria-hidden="true">⚑ {flag.label}</span>
-              <span className="sr-only">{flag.reason}</span>
+            <li key={`${flag.kind}-${flag.userId}`} className="rounded bg-soon-soft px-1 font-bold text-soon">
+              <ReasonToggle label={`⚑ ${flag.label}`} reason={flag.reason} />
             </li>
           ))}
         </ul>

@@ -67,6 +67,7 @@ export function WeekBoard({
   const addPairing = useAddPairing(hid, start, report);
   const restockTodo = useAddRestockTodo(hid);
   const [restocked, setRestocked] = useState(() => new Set<string>());
+  const [restockRefused, setRestockRefused] = useState(() => new Map<string, Error>());
   const wide = useMedia('(min-width: 1024px)');
   const [picked, setPicked] = useState<string | null>(null);
   const selectedDay =
@@ -212,14 +213,18 @@ export function WeekBoard({
     restock: {
       todo: restockTodo,
       added: restocked,
-      add: (productId) =>
+      refused: restockRefused,
+      add: (productId) => {
+        setRestockRefused((refused) => new Map([...refused].filter(([id]) => id !== productId)));
         restockTodo.mutate(
           { productId, input: {} },
           {
             onSuccess: () => setRestocked((set) => new Set(set).add(productId)),
-            onError: (error) => report(error.message),
+            // Shown beside the button pressed, with the server's next step (e.g. add a recipe first).
+            onError: (error) => setRestockRefused((refused) => new Map(refused).set(productId, error)),
           },
-        ),
+        );
+      },
     },
   };
 
