@@ -7,10 +7,11 @@ import { useFridge } from '@/features/fridge/api/get-fridge';
 import { FridgeJarCard } from '@/features/fridge/components/fridge-jar-card';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { paths } from '@shared/paths';
+import { can } from '@shared/roles';
 import { ReminderOffer } from '@/features/notifications/components/reminder-offer';
 
 export function FridgeRoute() {
-  const { hid } = useCurrentHousehold();
+  const { hid, role } = useCurrentHousehold();
   const fridge = useFridge(hid);
   const closeJar = useCloseJar(hid);
   const jars = fridge.data?.jars ?? [];
@@ -60,6 +61,7 @@ export function FridgeRoute() {
             <FridgeJarCard
               key={jar.jarId}
               hid={hid}
+              canPlan={can(role, 'cook')}
               jar={jar}
               unsealedAdvice={fridge.data?.unsealedAdvice ?? ''}
               busy={closeJar.isPending}

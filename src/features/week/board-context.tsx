@@ -1,5 +1,5 @@
 import { createContext, useContext } from 'react';
-import type { WeekView } from '@shared/schemas/week';
+import type { MealView, WeekView } from '@shared/schemas/week';
 import type { useAddPairing } from './api/add-pairing';
 import type { useAddRestockTodo } from '@/features/restock';
 import type { useClearDay } from './api/clear-day';
@@ -13,6 +13,7 @@ import type { DragSource, DropTarget, Held } from './drag';
 export interface Board {
   hid: string;
   week: WeekView;
+  meals: MealView[];
   canEdit: boolean;
   updateEntry: ReturnType<typeof useUpdatePlanEntry>;
   deleteEntry: ReturnType<typeof useDeletePlanEntry>;

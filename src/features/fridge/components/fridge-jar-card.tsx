@@ -19,7 +19,7 @@ function estimateWords(jar: FridgeJar) {
 /** Food would be left in it on its use-by: nothing planned finishes it. */
 const leftOnUseBy = (jar: FridgeJar) => jar.daysLeft >= 0 && (jar.estimateFrom === 'jar' ? jar.remainingTbsp > 0 : jar.estimateTbsp > 0);
 
-export function FridgeJarCard({ hid, jar, unsealedAdvice, onClose, busy }: { hid: string; jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
+export function FridgeJarCard({ hid, canPlan, jar, unsealedAdvice, onClose, busy }: { hid: string; canPlan: boolean; jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
   const [confirmDiscard, setConfirmDiscard] = useState(false);
   const { tone } = countdown(jar.daysLeft);
   return (
@@ -40,7 +40,7 @@ export function FridgeJarCard({ hid, jar, unsealedAdvice, onClose, busy }: { hid
       <p className="tabular">
         <span className="font-bold">{DATE_NAMES.useBy} {dateWords(jar.useBy)}.</span> {estimateWords(jar)}
       </p>
-      {leftOnUseBy(jar) && (
+      {canPlan && leftOnUseBy(jar) && (
         <Link to={paths.week(hid)} className="-mt-1 inline-flex min-h-11 items-center self-start font-bold text-action underline underline-offset-4" aria-label={`Plan jar ${jar.code} of ${jar.productName} on a meal`}>
           Plan it on a meal
         </Link>

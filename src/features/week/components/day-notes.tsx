@@ -60,14 +60,14 @@ function RestockButton({ productId }: { productId: string }) {
 
 /** A jar that would turn with food left goes on the next planned meal before its use-by that does not have it yet. */
 function PlanItOnAMeal({ productId, jarId, useBy }: { productId: string; jarId: string; useBy: string }) {
-  const { canEdit, week, addPairing } = useBoard();
+  const { canEdit, week, meals, addPairing } = useBoard();
   const [placed, setPlaced] = useState<string | null>(null);
   const [refusal, setRefusal] = useState<Error | null>(null);
   if (!canEdit) return null;
   const name = productName(week, productId);
   if (placed) return <p role="status" className="font-bold text-action">{placed}</p>;
-  const entry = nextMealFor(week, productId, useBy);
-  if (!entry) return <p className="text-ink-muted">No planned meal before its use-by can take it: plan one by {weekday(useBy)}, then pair {name} with it.</p>;
+  const entry = nextMealFor(week, meals, productId, useBy);
+  if (!entry) return <p className="text-ink-muted">No meal planned by {weekday(useBy)} usually takes {name}: drag it from the shelf onto one, or plan one it suits.</p>;
   const where = `${weekday(entry.date)} ${entry.slot}, ${entry.title}`;
   return (
     <>

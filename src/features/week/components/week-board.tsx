@@ -200,6 +200,7 @@ export function WeekBoard({
   const board: Board = {
     hid,
     week,
+    meals,
     canEdit,
     updateEntry,
     deleteEntry: useDeletePlanEntry(hid, start, report),
