@@ -89,7 +89,7 @@ describe('a fridge jar that would turn with food left', () => {
       const note = page.getByRole('note').filter({ hasText: `Jar ${code} of ${name} passes its use-by` });
       await note.waitFor();
       expect(await note.getByRole('button', { name: /restock/i }).count(), 'a jar that would turn is not a restock').toBe(0);
-      const planIt = note.getByRole('button', { name: new RegExp(`^Plan jar ${code} of ${name} on a meal`) });
+      const planIt = note.getByRole('button', { name: new RegExp(`^Plan it on a meal: jar ${code} of ${name}, on `) });
       if ((await planIt.count()) === 1) {
         offered = { waste, planIt };
         break;

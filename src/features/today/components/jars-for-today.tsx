@@ -1,10 +1,12 @@
+import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import type { TodayUse, TodayView } from '@shared/schemas/today';
 import { count } from '@shared/words';
-import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
-import { useActOnJar } from '@/features/shelf';
 import { paths } from '@shared/paths';
+
+// The open-jar change and its undo toast stay out of Today's first load (its script budget).
+const OpenItButton = lazy(() => import('./open-it-button'));
 
 const SLOT_NAMES = { breakfast: 'Breakfast', lunch: 'Lunch', dinner: 'Dinner', snack: 'Snack' } as const;
 
@@ -35,7 +37,6 @@ function whereFrom(portion: TodayUse) {
 
 /** What to open and use today, meal by meal, from the week's allocation; each new jar can be opened right here. */
 export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView, 'use' | 'short'> & { hid: string; canHandleJars: boolean }) {
-  const act = useActOnJar(hid);
   if (use.length === 0) return <p className="text-ink-muted">No jars are paired with today’s meals. Pair a product with a meal on the Week to see it here.</p>;
   // One line per jar: two portions from the same new jar open it once.
   const openings = [...new Map(use.filter((p) => p.opensToday && p.jarId).map((p) => [p.jarId!, p])).values()];
@@ -50,23 +51,13 @@ export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView,
                   {portion.productName} (<JarLink code={portion.jarCode!} />)
                 </span>
                 {canHandleJars && (
-                  <Button
-                    variant="secondary"
-                    disabled={act.isPending}
-                    aria-label={`Open it: jar ${portion.jarCode} of ${portion.productName}`}
-                    onClick={() => act.mutate({ jarId: portion.jarId!, action: 'open' })}
-                  >
-                    Open it
-                  </Button>
+                  <Suspense fallback={null}>
+                    <OpenItButton hid={hid} jarId={portion.jarId!} code={portion.jarCode!} productName={portion.productName} />
+                  </Suspense>
                 )}
               </li>
             ))}
           </ul>
-          {act.error && (
-            <p role="alert" className="mt-1 font-bold text-past">
-              {act.error.message}
-            </p>
-          )}
         </Notice>
       )}
       <ul className="divide-y divide-line">

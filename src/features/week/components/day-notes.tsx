@@ -73,7 +73,7 @@ function PlanItOnAMeal({ productId, jarId, useBy }: { productId: string; jarId: 
     <>
       <button
         type="button"
-        aria-label={`Plan jar ${jarCode(week, jarId)} of ${name} on a meal: ${where}`}
+        aria-label={`Plan it on a meal: jar ${jarCode(week, jarId)} of ${name}, on ${where}`}
         className={LINK_BUTTON}
         disabled={addPairing.isPending}
         onClick={() => {
