@@ -9,7 +9,8 @@ const NARROW_PHONE = { viewport: { width: 320, height: 640 }, isMobile: true, ha
 
 const householdOf = (page: Page) => /\/h\/([0-9a-f-]{36})/.exec(page.url())![1];
 const getJson = async (page: Page, path: string) => (await page.request.get(`${baseURL}/api${path}`)).json();
-const weekdayOf = (date: string) => new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', { weekday: 'long', timeZone: 'UTC' });
+const weekdayOf = (date: string) =>
+  new Date(`${date}T12:00:00Z`).toLocaleDateString('en-US', { weekday: 'long', timeZone: 'UTC' });
 
 interface WeekEntry {
   id: string;
@@ -27,8 +28,14 @@ interface WeekAnswer {
 }
 
 async function showDay(page: Page, date: string) {
-  await page.getByRole('navigation', { name: 'Day of the week' }).getByRole('button', { name: new RegExp(`^${weekdayOf(date)}`) }).tap();
-  await page.getByRole('region', { name: new RegExp(weekdayOf(date)) }).first().waitFor();
+  await page
+    .getByRole('navigation', { name: 'Day of the week' })
+    .getByRole('button', { name: new RegExp(`^${weekdayOf(date)}`) })
+    .tap();
+  await page
+    .getByRole('region', { name: new RegExp(weekdayOf(date)) })
+    .first()
+    .waitFor();
 }
 
 async function signUp(page: Page, name: string) {
@@ -47,7 +54,9 @@ describe('flag reasons on a phone', () => {
     await signIn(page, baseURL, 'cook@larderly.test');
     const hid = householdOf(page);
     const week: WeekAnswer = await getJson(page, `/households/${hid}/week`);
-    const flagged = week.days.flatMap((day) => day.entries.flatMap((entry) => entry.pairings.flatMap((p) => p.flags.map((flag) => ({ date: day.date, flag })))))[0];
+    const flagged = week.days.flatMap((day) =>
+      day.entries.flatMap((entry) => entry.pairings.flatMap((p) => p.flags.map((flag) => ({ date: day.date, flag })))),
+    )[0];
     expect(flagged, 'the demo week has a flagged pairing').toBeDefined();
     await page.goto(`${baseURL}/h/${hid}/week`);
     await showDay(page, flagged.date);
@@ -58,7 +67,9 @@ describe('flag reasons on a phone', () => {
     const reason = page.locator(`[id="${await toggle.getAttribute('aria-controls')}"]`);
     await expect(reason.isVisible()).resolves.toBe(false);
     // The reason is the button's description even before it is opened.
-    await expect(page.locator(`[id="${await toggle.getAttribute('aria-describedby')}"]`).textContent()).resolves.toBe(flagged.flag.reason);
+    await expect(page.locator(`[id="${await toggle.getAttribute('aria-describedby')}"]`).textContent()).resolves.toBe(
+      flagged.flag.reason,
+    );
 
     await toggle.tap();
     await expect(toggle.getAttribute('aria-expanded')).resolves.toBe('true');
@@ -88,7 +99,10 @@ describe('a fridge jar that would turn with food left', () => {
       await showDay(page, waste.date);
       const note = page.getByRole('note').filter({ hasText: `Jar ${code} of ${name} passes its use-by` });
       await note.waitFor();
-      expect(await note.getByRole('button', { name: /restock/i }).count(), 'a jar that would turn is not a restock').toBe(0);
+      expect(
+        await note.getByRole('button', { name: /restock/i }).count(),
+        'a jar that would turn is not a restock',
+      ).toBe(0);
       const planIt = note.getByRole('button', { name: new RegExp(`^Plan it on a meal: jar ${code} of ${name}, on `) });
       if ((await planIt.count()) === 1) {
         offered = { waste, planIt };
@@ -97,7 +111,11 @@ describe('a fridge jar that would turn with food left', () => {
     }
     expect(offered, 'a jar that would turn is offered a meal').not.toBeNull();
     const { waste, planIt } = offered!;
-    const pairedBefore = new Set(week.days.flatMap((d) => d.entries.flatMap((e) => e.pairings.filter((p) => p.productId === waste.productId).map((p) => p.id))));
+    const pairedBefore = new Set(
+      week.days.flatMap((d) =>
+        d.entries.flatMap((e) => e.pairings.filter((p) => p.productId === waste.productId).map((p) => p.id)),
+      ),
+    );
     const label = String(await planIt.getAttribute('aria-label'));
     await screenshot(page, 'surfaces-plan-it-on-a-meal-phone');
     await planIt.tap();
@@ -114,7 +132,10 @@ describe('a fridge jar that would turn with food left', () => {
     };
     await expect.poll(newPairing).not.toBeNull();
     const placed = (await newPairing())!;
-    expect(placed.date >= week.today && placed.date <= waste.date, `paired on ${placed.date}, between today and the use-by ${waste.date}`).toBe(true);
+    expect(
+      placed.date >= week.today && placed.date <= waste.date,
+      `paired on ${placed.date}, between today and the use-by ${waste.date}`,
+    ).toBe(true);
     expect(label, 'the button named the meal it went on').toContain(placed.title);
     await page.request.delete(`${baseURL}/api/households/${hid}/pairings/${placed.pairing.id}`, write);
     await page.close();
@@ -124,18 +145,41 @@ describe('a fridge jar that would turn with food left', () => {
     const page = await browser.newPage(PHONE_TOUCH);
     await signUp(page, 'Marit');
     const hid = householdOf(page);
-    expect((await page.request.patch(`${baseURL}/api/households/${hid}`, { ...write, data: { altitudeFt: 900 } })).status()).toBe(200);
-    const product = (await (await page.request.post(`${baseURL}/api/households/${hid}/products`, { ...write, data: { name: 'Quince Paste', kind: 'fruit-butter', jarSize: 'half-pint' } })).json()).product;
+    expect(
+      (await page.request.patch(`${baseURL}/api/households/${hid}`, { ...write, data: { altitudeFt: 900 } })).status(),
+    ).toBe(200);
+    const product = (
+      await (
+        await page.request.post(`${baseURL}/api/households/${hid}/products`, {
+          ...write,
+          data: { name: 'Quince Paste', kind: 'fruit-butter', jarSize: 'half-pint' },
+        })
+      ).json()
+    ).product;
     const { today } = await getJson(page, `/households/${hid}/week`);
-    const entry = await (await page.request.post(`${baseURL}/api/households/${hid}/plan-entries`, { ...write, data: { date: today, slot: 'dinner', title: 'Cheese board', servings: 2 } })).json();
-    expect((await page.request.post(`${baseURL}/api/households/${hid}/plan-entries/${entry.id}/pairings`, { ...write, data: { productId: product.id } })).status()).toBe(201);
+    const entry = await (
+      await page.request.post(`${baseURL}/api/households/${hid}/plan-entries`, {
+        ...write,
+        data: { date: today, slot: 'dinner', title: 'Cheese board', servings: 2 },
+      })
+    ).json();
+    expect(
+      (
+        await page.request.post(`${baseURL}/api/households/${hid}/plan-entries/${entry.id}/pairings`, {
+          ...write,
+          data: { productId: product.id },
+        })
+      ).status(),
+    ).toBe(201);
 
     await page.goto(`${baseURL}/h/${hid}/week`);
     const note = page.getByRole('note').filter({ hasText: 'Not enough Quince Paste on the shelf' });
     await note.getByRole('button', { name: 'Add a restock to-do for Quince Paste' }).tap();
     const refusal = note.getByRole('alert');
     await refusal.getByText(/Quince Paste has no recipe yet/).waitFor();
-    await expect(refusal.getByRole('link', { name: 'Add a recipe' }).getAttribute('href')).resolves.toBe(`/h/${hid}/recipes/new?productId=${product.id}`);
+    await expect(refusal.getByRole('link', { name: 'Add a recipe' }).getAttribute('href')).resolves.toBe(
+      `/h/${hid}/recipes/new?productId=${product.id}`,
+    );
     expect(await page.getByText('That change was not saved').count()).toBe(0);
     await screenshot(page, 'surfaces-restock-refusal-phone');
     await page.close();
@@ -150,7 +194,14 @@ describe('nothing scrolls sideways on a 320 px phone', () => {
     const products: { id: string; name: string }[] = (await getJson(page, `/households/${hid}/products`)).products;
     const relish = products.find((p) => p.name === 'Sweet Corn Relish')!;
     const longName = 'Grandmother Adelheid’s Extra-Chunky Sweet Corn and Roasted Red Pepper Relish';
-    expect((await page.request.patch(`${baseURL}/api/households/${hid}/products/${relish.id}`, { ...write, data: { name: longName } })).status()).toBe(200);
+    expect(
+      (
+        await page.request.patch(`${baseURL}/api/households/${hid}/products/${relish.id}`, {
+          ...write,
+          data: { name: longName },
+        })
+      ).status(),
+    ).toBe(200);
     try {
       const batch = (await getJson(page, `/households/${hid}/batches`)).batches[0];
       const recipe = (await getJson(page, `/households/${hid}/recipes`)).recipes[0];
@@ -170,7 +221,10 @@ describe('nothing scrolls sideways on a 320 px phone', () => {
         await page.goto(`${baseURL}${address}`);
         await page.getByRole('heading', { name: heading }).first().waitFor();
         await page.waitForLoadState('networkidle');
-        expect(await page.evaluate(() => document.documentElement.scrollWidth), `${screen} at 320 px`).toBeLessThanOrEqual(320);
+        expect(
+          await page.evaluate(() => document.documentElement.scrollWidth),
+          `${screen} at 320 px`,
+        ).toBeLessThanOrEqual(320);
         if (screen === 'Shelf') {
           const card = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: longName }) });
           const count = card.getByText('sealed', { exact: true });
@@ -180,7 +234,10 @@ describe('nothing scrolls sideways on a 320 px phone', () => {
         }
       }
     } finally {
-      await page.request.patch(`${baseURL}/api/households/${hid}/products/${relish.id}`, { ...write, data: { name: relish.name } });
+      await page.request.patch(`${baseURL}/api/households/${hid}/products/${relish.id}`, {
+        ...write,
+        data: { name: relish.name },
+      });
     }
     await page.close();
   });
@@ -196,9 +253,19 @@ describe('Today on a phone', () => {
     const opening = today.use.find((u: { opensToday: boolean }) => u.opensToday);
     expect(opening, 'the demo plan opens a new jar today').toBeDefined();
     const section = page.getByRole('region', { name: 'Open and use today' });
-    await expect(section.getByRole('link', { name: `jar ${opening.jarCode}` }).first().getAttribute('href')).resolves.toBe(`/j/${opening.jarCode}`);
+    await expect(
+      section
+        .getByRole('link', { name: `jar ${opening.jarCode}` })
+        .first()
+        .getAttribute('href'),
+    ).resolves.toBe(`/j/${opening.jarCode}`);
     const fridgeJar = today.fridge[0];
-    await expect(page.getByRole('region', { name: 'In the fridge' }).getByRole('link', { name: `Jar ${fridgeJar.code}` }).getAttribute('href')).resolves.toBe(`/j/${fridgeJar.code}`);
+    await expect(
+      page
+        .getByRole('region', { name: 'In the fridge' })
+        .getByRole('link', { name: `Jar ${fridgeJar.code}` })
+        .getAttribute('href'),
+    ).resolves.toBe(`/j/${fridgeJar.code}`);
 
     await section.getByRole('button', { name: `Open it: jar ${opening.jarCode} of ${opening.productName}` }).tap();
     const toast = page.getByTestId('undo-toast');
@@ -211,7 +278,9 @@ describe('Today on a phone', () => {
 
     const todo = today.myTodos[0];
     await page.getByRole('checkbox', { name: `Done: ${todo.title}` }).tap();
-    const todoDone = async () => (await getJson(page, `/households/${hid}/todos?filter=all`)).todos.find((t: { id: string }) => t.id === todo.id)?.done;
+    const todoDone = async () =>
+      (await getJson(page, `/households/${hid}/todos?filter=all`)).todos.find((t: { id: string }) => t.id === todo.id)
+        ?.done;
     await expect.poll(todoDone).toBe(true);
     await page.request.patch(`${baseURL}/api/households/${hid}/todos/${todo.id}`, { ...write, data: { done: false } });
     await page.close();
@@ -221,17 +290,40 @@ describe('Today on a phone', () => {
     const page = await browser.newPage(PHONE_TOUCH);
     await signIn(page, baseURL, 'cook@larderly.test');
     const hid = householdOf(page);
-    const fridge = (await getJson(page, `/households/${hid}/fridge`)).jars as { code: string; productId: string; productName: string; daysLeft: number; remainingTbsp: number }[];
+    const fridge = (await getJson(page, `/households/${hid}/fridge`)).jars as {
+      code: string;
+      productId: string;
+      productName: string;
+      daysLeft: number;
+      remainingTbsp: number;
+    }[];
     const soon = fridge.find((j) => j.daysLeft >= 1 && j.daysLeft <= 2 && j.remainingTbsp >= 2)!;
     expect(soon, 'the demo fridge has a jar with a day or two left').toBeDefined();
     const { today } = await getJson(page, `/households/${hid}/today`);
-    const entry = await (await page.request.post(`${baseURL}/api/households/${hid}/plan-entries`, { ...write, data: { date: today, slot: 'snack', title: 'Crackers', servings: 1 } })).json();
+    const entry = await (
+      await page.request.post(`${baseURL}/api/households/${hid}/plan-entries`, {
+        ...write,
+        data: { date: today, slot: 'snack', title: 'Crackers', servings: 1 },
+      })
+    ).json();
     try {
-      await page.request.post(`${baseURL}/api/households/${hid}/plan-entries/${entry.id}/pairings`, { ...write, data: { productId: soon.productId } });
+      await page.request.post(`${baseURL}/api/households/${hid}/plan-entries/${entry.id}/pairings`, {
+        ...write,
+        data: { productId: soon.productId },
+      });
       await page.reload();
-      const line = page.getByRole('region', { name: 'Open and use today' }).getByRole('listitem').filter({ hasText: `Crackers: 1 tbsp ${soon.productName}` });
-      await line.getByText(`use the opened jar first: jar ${soon.code} (${soon.daysLeft} day${soon.daysLeft === 1 ? '' : 's'} left)`).waitFor();
-      expect(await page.getByRole('button', { name: new RegExp(`^Open it: .* of ${soon.productName}$`) }).count()).toBe(0);
+      const line = page
+        .getByRole('region', { name: 'Open and use today' })
+        .getByRole('listitem')
+        .filter({ hasText: `Crackers: 1 tbsp ${soon.productName}` });
+      await line
+        .getByText(
+          `use the opened jar first: jar ${soon.code} (${soon.daysLeft} day${soon.daysLeft === 1 ? '' : 's'} left)`,
+        )
+        .waitFor();
+      expect(await page.getByRole('button', { name: new RegExp(`^Open it: .* of ${soon.productName}$`) }).count()).toBe(
+        0,
+      );
       await screenshot(page, 'surfaces-today-use-opened-first-phone');
     } finally {
       await page.request.delete(`${baseURL}/api/households/${hid}/plan-entries/${entry.id}`, write);
@@ -289,11 +381,17 @@ describe('push on this device, said in what to do', () => {
     await offer.getByText('Get a reminder on this device before a jar’s use-by.').waitFor();
     await screenshot(page, 'surfaces-fridge-reminder-offer-phone');
     await offer.getByRole('button', { name: 'Get a reminder' }).tap();
-    await offer.getByRole('alert').getByText(/Notifications are blocked for Larderly/).waitFor();
+    await offer
+      .getByRole('alert')
+      .getByText(/Notifications are blocked for Larderly/)
+      .waitFor();
 
     const jar = (await getJson(page, `/households/${hid}/fridge`)).jars[0];
     await page.goto(`${baseURL}/j/${jar.code}`);
-    await page.getByRole('region', { name: 'Reminders on this device' }).getByText(/Get a reminder on this device before this jar’s use-by/).waitFor();
+    await page
+      .getByRole('region', { name: 'Reminders on this device' })
+      .getByText(/Get a reminder on this device before this jar’s use-by/)
+      .waitFor();
     await screenshot(page, 'surfaces-jar-reminder-offer-phone');
     await page.close();
   });

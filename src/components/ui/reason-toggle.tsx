@@ -1,7 +1,15 @@
 import { useId, useState, type ReactNode } from 'react';
 
 /** A flag whose reason a tap shows inline (no hover needed): the button says what it is, the reason follows it. */
-export function ReasonToggle({ label, reason, className = '' }: { label: ReactNode; reason: string; className?: string }) {
+export function ReasonToggle({
+  label,
+  reason,
+  className = '',
+}: {
+  label: ReactNode;
+  reason: string;
+  className?: string;
+}) {
   const [open, setOpen] = useState(false);
   const reasonId = useId();
   return (

@@ -20,7 +20,10 @@ export function pushSetupError(cause: unknown): PushSetupError {
   if (cause instanceof PushSetupError) return cause;
   if (cause instanceof ApiError) {
     return cause.status === 0
-      ? new PushSetupError('network', 'Larderly could not be reached to save this device. Check your connection and try again.')
+      ? new PushSetupError(
+          'network',
+          'Larderly could not be reached to save this device. Check your connection and try again.',
+        )
       : new PushSetupError('server', cause.message);
   }
   const name = cause instanceof Error || cause instanceof DOMException ? cause.name : '';
@@ -29,8 +32,19 @@ export function pushSetupError(cause: unknown): PushSetupError {
   if (name === 'NotSupportedError' || name === 'SecurityError' || /not supported|unsupported|insecure/i.test(text)) {
     return new PushSetupError('unsupported', `This browser cannot receive push notifications. ${PUSH_BROWSERS}`);
   }
-  if (name === 'AbortError' || name === 'NetworkError' || name === 'TypeError' || /push service|network|timed? ?out/i.test(text)) {
-    return new PushSetupError('network', 'The browser’s push service could not be reached. Check your connection and try again in a minute.');
+  if (
+    name === 'AbortError' ||
+    name === 'NetworkError' ||
+    name === 'TypeError' ||
+    /push service|network|timed? ?out/i.test(text)
+  ) {
+    return new PushSetupError(
+      'network',
+      'The browser’s push service could not be reached. Check your connection and try again in a minute.',
+    );
   }
-  return new PushSetupError('unknown', 'Notifications could not be turned on for this device. Try again; if it keeps failing, use e-mail reminders (Household, Notifications) instead.');
+  return new PushSetupError(
+    'unknown',
+    'Notifications could not be turned on for this device. Try again; if it keeps failing, use e-mail reminders (Household, Notifications) instead.',
+  );
 }

@@ -16,13 +16,31 @@ export function nextMealFor(week: WeekView, meals: MealView[], productId: string
   const product = week.products.find((p) => p.id === productId);
   if (!product) return null;
   const kindOf = new Map(week.products.map((p) => [p.id, p.kind]));
-  const usualMeals = new Set(meals.filter((meal) => meal.products.some((p) => p.productId === productId)).map((meal) => meal.id));
-  const flaggedTitles = new Set(week.days.flatMap((d) => d.entries.filter((e) => e.pairings.some((p) => p.productId === productId && p.flags.length > 0)).map((e) => e.title)));
-  const suits = (entry: PlanEntryView) => (entry.mealId !== null && usualMeals.has(entry.mealId)) || entry.pairings.some((p) => kindOf.get(p.productId) === product.kind);
+  const usualMeals = new Set(
+    meals.filter((meal) => meal.products.some((p) => p.productId === productId)).map((meal) => meal.id),
+  );
+  const flaggedTitles = new Set(
+    week.days.flatMap((d) =>
+      d.entries
+        .filter((e) => e.pairings.some((p) => p.productId === productId && p.flags.length > 0))
+        .map((e) => e.title),
+    ),
+  );
+  const suits = (entry: PlanEntryView) =>
+    (entry.mealId !== null && usualMeals.has(entry.mealId)) ||
+    entry.pairings.some((p) => kindOf.get(p.productId) === product.kind);
   return (
     week.days
       .filter((day) => day.date >= week.today && day.date <= useBy)
-      .flatMap((day) => [...day.entries].sort((a, b) => SLOTS.indexOf(a.slot) - SLOTS.indexOf(b.slot) || a.position - b.position))
-      .find((entry) => suits(entry) && !entry.pairings.some((p) => p.productId === productId) && !flaggedTitles.has(entry.title) && heatSuits(week, entry, product.heat)) ?? null
+      .flatMap((day) =>
+        [...day.entries].sort((a, b) => SLOTS.indexOf(a.slot) - SLOTS.indexOf(b.slot) || a.position - b.position),
+      )
+      .find(
+        (entry) =>
+          suits(entry) &&
+          !entry.pairings.some((p) => p.productId === productId) &&
+          !flaggedTitles.has(entry.title) &&
+          heatSuits(week, entry, product.heat),
+      ) ?? null
   );
 }

@@ -13,7 +13,10 @@ export function ReminderOffer({ about }: { about: string }) {
     ) : null;
   }
   return (
-    <section aria-label="Reminders on this device" className="flex flex-col gap-2 rounded-lg border border-info/40 bg-info-soft px-3 py-2 text-sm">
+    <section
+      aria-label="Reminders on this device"
+      className="flex flex-col gap-2 rounded-lg border border-info/40 bg-info-soft px-3 py-2 text-sm"
+    >
       <div className="flex flex-wrap items-center justify-between gap-2">
         <p className="min-w-0 flex-1">Get a reminder on this device before {about}.</p>
         <Button variant="secondary" disabled={device.subscribe.isPending} onClick={() => device.subscribe.mutate()}>

@@ -2,11 +2,26 @@ import { Button } from '@/components/ui/button';
 import { useActOnJar } from '@/features/shelf';
 
 /** "Open it" for one new jar on Today, with the shelf's open-jar change and its undo toast; loaded only when a jar is due. */
-export default function OpenItButton({ hid, jarId, code, productName }: { hid: string; jarId: string; code: string; productName: string }) {
+export default function OpenItButton({
+  hid,
+  jarId,
+  code,
+  productName,
+}: {
+  hid: string;
+  jarId: string;
+  code: string;
+  productName: string;
+}) {
   const act = useActOnJar(hid);
   return (
     <span className="flex flex-col items-end gap-1">
-      <Button variant="secondary" disabled={act.isPending} aria-label={`Open it: jar ${code} of ${productName}`} onClick={() => act.mutate({ jarId, action: 'open' })}>
+      <Button
+        variant="secondary"
+        disabled={act.isPending}
+        aria-label={`Open it: jar ${code} of ${productName}`}
+        onClick={() => act.mutate({ jarId, action: 'open' })}
+      >
         Open it
       </Button>
       {act.error && (
