@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import type { MemberView } from '@shared/schemas/households';
 import type { TodoView } from '@shared/schemas/todos';
 import { Button } from '@/components/ui/button';
+import { ErrorWithAction } from '@/components/ui/error-with-action';
 import { SelectField, TextField } from '@/components/ui/field';
 import { ApiError } from '@/lib/api-client';
 import { useDeleteTodo } from '../api/delete-todo';
@@ -49,11 +50,7 @@ export function TodoEditor({ hid, todo, members, onDone }: { hid: string; todo: 
           ))}
         </SelectField>
       </div>
-      {update.isError && !Object.keys(fields).length && (
-        <p role="alert" className="font-bold text-past">
-          {update.error.message}
-        </p>
-      )}
+      {update.isError && !Object.keys(fields).length && <ErrorWithAction error={update.error} />}
       <div className="flex flex-wrap justify-between gap-3">
         <Button type="submit" disabled={update.isPending}>
           {update.isPending ? 'Saving…' : 'Save'}
