@@ -31,8 +31,8 @@ export const paths = {
 
   screen: inHousehold,
   today: (hid: string) => inHousehold(hid),
-  /** The week board, at the week holding `start` (YYYY-MM-DD) when given. */
-  week: (hid: string, start?: string) => `${inHousehold(hid, 'week')}${query({ start })}`,
+  /** The week board, at the week holding `start` (YYYY-MM-DD) when given; `day` is the day a phone shows first. */
+  week: (hid: string, start?: string, day?: string) => `${inHousehold(hid, 'week')}${query({ start, day })}`,
   shelf: (hid: string) => inHousehold(hid, 'shelf'),
   fridge: (hid: string) => inHousehold(hid, 'fridge'),
   batches: (hid: string) => inHousehold(hid, 'batches'),

@@ -90,13 +90,18 @@ describe('a fridge jar that would turn with food left', () => {
     const week: WeekAnswer = await getJson(page, `/households/${hid}/week`);
     const wastes = week.allocation.warnings.filter((w) => w.kind === 'will-expire' && w.date >= week.today);
     expect(wastes.length, 'the demo week has jars that pass their use-by with food left').toBeGreaterThan(0);
-    await page.goto(`${baseURL}/h/${hid}/week`);
     // Not every such jar has a meal it suits before its use-by; the first that has one is offered it.
     let offered: { waste: (typeof wastes)[number]; planIt: Locator } | null = null;
     for (const waste of wastes) {
       const name = week.products.find((p) => p.id === waste.productId)!.name;
       const code = week.jars[waste.jarId!]!.code;
-      await showDay(page, waste.date);
+      // The Fridge's link opens the week at the day the jar's use-by comes.
+      await page.goto(`${baseURL}/h/${hid}/fridge`);
+      await page.getByRole('link', { name: `Plan it on a meal: jar ${code} of ${name}` }).tap();
+      await page.waitForURL(new RegExp(`/week\\?start=${waste.date}&day=${waste.date}$`));
+      await expect(
+        page.getByRole('button', { name: new RegExp(`^${weekdayOf(waste.date)}`) }).getAttribute('aria-pressed'),
+      ).resolves.toBe('true');
       const note = page.getByRole('note').filter({ hasText: `Jar ${code} of ${name} passes its use-by` });
       await note.waitFor();
       expect(

@@ -15,6 +15,7 @@ describe('paths', () => {
     expect(paths.todo(hid, 't1')).toBe(`/h/${hid}/todo?open=t1`);
     expect(paths.invitation('tok_en')).toBe('/invite/tok_en');
     expect(paths.week(hid, '2026-12-07')).toBe(`/h/${hid}/week?start=2026-12-07`);
+    expect(paths.week(hid, '2026-12-09', '2026-12-09')).toBe(`/h/${hid}/week?start=2026-12-09&day=2026-12-09`);
     expect(paths.household(hid)).toBe(`/h/${hid}/household`);
   });
 

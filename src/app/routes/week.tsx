@@ -30,12 +30,13 @@ export function WeekRoute() {
   if (!household.data) return <PageHeader title="Week" lead="Loading the week…" />;
   const { timeZone, weekStartsOn } = household.data;
   const asked = validDate(params.get('start'));
+  const day = validDate(params.get('day'));
   const start = asked ? weekStartOf(asked, weekStartsOn) : currentWeekStart(timeZone, weekStartsOn);
   const goTo = (next: string) => setParams(next === currentWeekStart(timeZone, weekStartsOn) ? {} : { start: next });
-  return <WeekScreen key={start} hid={hid} start={start} canEdit={can(role, 'cook')} isKeeper={role === 'keeper'} myId={me?.user.id ?? ''} goTo={goTo} thisWeek={currentWeekStart(timeZone, weekStartsOn)} />;
+  return <WeekScreen key={start} hid={hid} start={start} canEdit={can(role, 'cook')} isKeeper={role === 'keeper'} myId={me?.user.id ?? ''} goTo={goTo} thisWeek={currentWeekStart(timeZone, weekStartsOn)} day={day} />;
 }
 
-function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek }: { hid: string; start: string; canEdit: boolean; isKeeper: boolean; myId: string; goTo: (start: string) => void; thisWeek: string }) {
+function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek, day }: { hid: string; start: string; canEdit: boolean; isKeeper: boolean; myId: string; goTo: (start: string) => void; thisWeek: string; day: string | null }) {
   const week = useWeek(hid, start);
   const meals = useMeals(hid);
   const copy = useCopyWeek(hid);
@@ -92,7 +93,7 @@ function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek }: { h
         )}
         {week.data && meals.data ? (
           <>
-            <WeekBoard hid={hid} week={week.data} meals={meals.data} canEdit={canEdit} />
+            <WeekBoard hid={hid} week={week.data} meals={meals.data} canEdit={canEdit} firstDay={day} />
             <PreferencesPanel hid={hid} members={week.data.members} myId={myId} isKeeper={isKeeper} />
           </>
         ) : (

@@ -41,7 +41,7 @@ export function FridgeJarCard({ hid, canPlan, jar, unsealedAdvice, onClose, busy
         <span className="font-bold">{DATE_NAMES.useBy} {dateWords(jar.useBy)}.</span> {estimateWords(jar)}
       </p>
       {canPlan && leftOnUseBy(jar) && (
-        <Link to={paths.week(hid)} className="-mt-1 inline-flex min-h-11 items-center self-start font-bold text-action underline underline-offset-4" aria-label={`Plan it on a meal: jar ${jar.code} of ${jar.productName}`}>
+        <Link to={paths.week(hid, jar.useBy, jar.useBy)} className="-mt-1 inline-flex min-h-11 items-center self-start font-bold text-action underline underline-offset-4" aria-label={`Plan it on a meal: jar ${jar.code} of ${jar.productName}`}>
           Plan it on a meal
         </Link>
       )}
