@@ -2,7 +2,7 @@ import { createHash } from 'node:crypto';
 import ICAL from 'ical.js';
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
-import { CalendarFeed, Membership, PlanEntry, Todo } from '../../server/db/models';
+import { BatchProcessing, CalendarFeed, Jar, Membership, PlanEntry, Todo } from '../../server/db/models';
 import { clock } from '../../server/services/clock';
 import { bareApp } from '../support/bare-app';
 import { newHousehold, openedJar } from '../support/opened-jar';
@@ -126,6 +126,53 @@ describe('the household calendar address', () => {
     expect(due.summary).toBe('To do: Buy wide-mouth lids');
     expect(due.startDate.toString()).toBe('2026-12-05');
     expect(events.some((e) => e.summary.includes('Already done'))).toBe(false);
+  });
+
+  it('holds a seal check 12 hours after processing while jars wait for it, and drops it once they are checked (USDA Complete Guide 2015: cool 12 to 24 hours, then test the seals)', async () => {
+    clock.now = () => new Date('2026-12-02T15:00:00Z');
+    const keeper = await newHousehold(ctx.app, 'America/Denver');
+    const { batch, jar: opened } = await openedJar(keeper.householdId, { productName: 'Dilly beans', openedOn: '2026-12-01', useWithinDays: 28 });
+    // Processed at 8:30 pm Denver time (03:30 UTC the next day): the check falls at 8:30 am there.
+    const processing = await BatchProcessing.create({
+      householdId: keeper.householdId,
+      batchId: batch.id,
+      number: 1,
+      processedAt: new Date('2026-12-02T03:30:00Z'),
+      method: 'boiling-water',
+      altitudeFt: 5280,
+      minutes: 15,
+      jars: 2,
+      createdBy: keeper.userId,
+    });
+    const waiting = await Promise.all(
+      ['A', 'B'].map((letter) =>
+        Jar.create({
+          householdId: keeper.householdId,
+          batchId: batch.id,
+          productId: batch.productId,
+          processingId: processing.id,
+          code: `${opened.code.slice(0, 6)}S${letter}`,
+          state: 'sealed',
+          seal: 'to-check',
+          capacityTbsp: 16,
+          remainingTbsp: 16,
+          bestBy: '2027-12-01',
+        }),
+      ),
+    );
+    const address = pathOf(await turnOn(keeper.agent, keeper.householdId));
+    const { events } = parse((await request(ctx.app).get(address)).text);
+    const check = events.find((e) => e.uid === `seal-check-${processing.id}@larderly.calendar`)!;
+    expect(check.summary).toBe('Check the seals of the Dilly beans');
+    expect(check.startDate.toJSDate().toISOString()).toBe('2026-12-02T15:30:00.000Z');
+    expect(check.startDate.zone?.tzid).toBe('America/Denver');
+    expect(check.startDate.toString()).toBe('2026-12-02T08:30:00');
+    expect(check.description).toMatch(/^2 jars still to check\./);
+    expect(check.component.getFirstPropertyValue('url')).toBe(`http://127.0.0.1:3000/h/${keeper.householdId}/batches/${batch.id}`);
+
+    await Jar.update({ seal: 'checked' }, { where: { id: waiting.map((j) => j.id) } });
+    const after = parse((await request(ctx.app).get(address)).text).events;
+    expect(after.some((e) => e.uid.startsWith('seal-check-'))).toBe(false);
   });
 
   it('keeps UIDs and text stable between fetches, answers If-None-Match with 304, and changes when the plan does', async () => {
