@@ -287,18 +287,37 @@ describe('two app processes behind nginx', () => {
     await Promise.all([boss.start(), db.connect()]);
     const sweepsBy = (done: string) => apps.filter((a) => a.logs.some((l) => l.msg === done)).map((a) => a.name);
     try {
-      // Sweeps are taken by whichever process polls first; send them until each process has run both kinds.
-      for (let round = 0; round < 16; round += 1) {
-        await boss.send('reminder-sweep', {});
-        await boss.send('digest-sweep', {});
-        for (let i = 0; i < 100; i += 1) {
-          const { rows } = await db.query(
-            "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
-          );
-          if (rows[0].waiting === 0) break;
-          await new Promise((resolve) => setTimeout(resolve, 200));
+      // A sweep is taken by whichever process polls first. After each round the processes that have run both kinds
+      // are paused (SIGSTOP) while the next round is sent, so the other one takes it; then they go on (SIGCONT).
+      const ranBoth = (app: App) =>
+        ['reminder sweep done', 'digest sweep done'].every((done) => app.logs.some((l) => l.msg === done));
+      for (let round = 0; round < 6 && !apps.every(ranBoth); round += 1) {
+        const paused = round === 0 ? [] : apps.filter(ranBoth);
+        for (const app of paused) app.child.kill('SIGSTOP');
+        try {
+          await boss.send('reminder-sweep', {});
+          await boss.send('digest-sweep', {});
+          for (let i = 0; i < 150; i += 1) {
+            const { rows } = await db.query(
+              "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
+            );
+            if (rows[0].waiting === 0) break;
+            await new Promise((resolve) => setTimeout(resolve, 200));
+          }
+          // Each process writes its log asynchronously: the line may come a moment after the job is marked done.
+          await new Promise((resolve) => setTimeout(resolve, 300));
+        } finally {
+          for (const app of paused) app.child.kill('SIGCONT');
         }
-        if (round >= 3 && sweepsBy('reminder sweep done').length === 2 && sweepsBy('digest sweep done').length === 2) break;
+      }
+      // One more round for both at once: the claims, not the timing, keep each message once.
+      await Promise.all([boss.send('reminder-sweep', {}), boss.send('digest-sweep', {})]);
+      for (let i = 0; i < 150; i += 1) {
+        const { rows } = await db.query(
+          "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
+        );
+        if (rows[0].waiting === 0) break;
+        await new Promise((resolve) => setTimeout(resolve, 200));
       }
       const reminderSweeps = sweepsBy('reminder sweep done');
       const digestSweeps = sweepsBy('digest sweep done');
