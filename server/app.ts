@@ -86,7 +86,7 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   api.use(passport.session());
   api.use(keepSessionAlive);
   const authLimit = options.authLimit ?? config.authRateLimit;
-  api.use('/auth', authRouter({ sequelize, bcryptCost: config.bcryptCost, authLimit }));
+  api.use('/auth', authRouter(ctx, { authLimit }));
   api.use('/households', householdsRouter(sequelize));
   api.use('/households', backupImportRouter(ctx));
   api.use('/jars', jarCodesRouter());

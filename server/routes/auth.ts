@@ -1,13 +1,13 @@
 import { Router, type NextFunction, type Request, type Response } from 'express';
 import passport from 'passport';
-import type { Sequelize } from 'sequelize';
-import { loginBody, signupBody } from '../../shared/schemas/auth';
+import { loginBody, signupBody, signUpToken } from '../../shared/schemas/auth';
 import { BAD_CREDENTIALS } from '../auth/passport';
 import { requireUser } from '../auth/guards';
+import type { AppContext } from '../context';
 import { AppError } from '../http/errors';
 import { limit, MINUTE, passwordHashingLimit } from '../http/rate-limits';
-import { body } from '../http/validate';
-import { describeMe, signUp } from '../services/accounts';
+import { body, params } from '../http/validate';
+import { confirmSignUp, describeMe, requestSignUp } from '../services/accounts';
 
 export function signIn(req: Request, user: Express.User) {
   // A fresh session id at sign-in, so a planted id is worth nothing.
@@ -34,15 +34,23 @@ function authenticate(req: Request, res: Response, next: NextFunction) {
   });
 }
 
-export function authRouter(options: { sequelize: Sequelize; bcryptCost: number; authLimit: number }) {
+export function authRouter(ctx: AppContext, options: { authLimit: number }) {
   const router = Router();
   // Failed sign-ins count, per address: a household signing in all day is never locked out.
-  const failedSignIns = limit(options.sequelize, 'failed-sign-in', { windowMs: 15 * MINUTE, limit: options.authLimit, what: 'attempts', failuresOnly: true });
-  const hashing = passwordHashingLimit(options.sequelize, options.authLimit);
+  const failedSignIns = limit(ctx.sequelize, 'failed-sign-in', { windowMs: 15 * MINUTE, limit: options.authLimit, what: 'attempts', failuresOnly: true });
+  const hashing = passwordHashingLimit(ctx.sequelize, options.authLimit);
+  // Tokens are 32 random bytes; the limit keeps guessing slow.
+  const confirmations = limit(ctx.sequelize, 'sign-up-confirm', { windowMs: 15 * MINUTE, limit: 100, what: 'sign-up links' });
 
+  // The same 202 whether or not the address has an account: only its mailbox learns which.
   router.post('/signup', hashing, async (req, res) => {
-    const input = body(req, signupBody);
-    const user = await signUp(options.sequelize, input, options.bcryptCost);
+    res.status(202).json(await requestSignUp(ctx, body(req, signupBody)));
+  });
+
+  // The mailed link's page posts its token: the account and household are made, and the person signed in.
+  router.post('/signup/confirm/:token', confirmations, async (req, res) => {
+    const { token } = params(req, signUpToken);
+    const user = await confirmSignUp(ctx.sequelize, token);
     await signIn(req, user);
     res.status(201).json(await describeMe(user));
   });

@@ -24,6 +24,14 @@ export const householdName = z
 export const signupBody = z.object({ email, password: newPassword, name: personName, householdName });
 export type SignupBody = z.infer<typeof signupBody>;
 
+/** The answer to every sign-up, whether or not the address has an account: the link is in the mail. */
+export interface SignUpSent {
+  email: string;
+  message: string;
+}
+
+export const signUpToken = z.object({ token: z.string({ error: 'That sign-up link is not complete.' }).min(20, 'That sign-up link is not complete.').max(100) });
+
 export const loginBody = z.object({
   email: z.string({ error: 'Enter your e-mail address.' }).trim().toLowerCase().min(1, 'Enter your e-mail address.').max(254),
   password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200),

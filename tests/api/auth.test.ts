@@ -8,49 +8,6 @@ beforeAll(async () => {
 });
 afterAll(() => ctx.close());
 
-describe('sign-up', () => {
-  it('creates a household with the new person as its keeper and signs them in', async () => {
-    const agent = request.agent(ctx.app);
-    const response = await agent
-      .post('/api/auth/signup')
-      .send({ email: 'Rosa@Example.test', password: 'long enough password', name: 'Rosa', householdName: 'Rosa’s Pantry' });
-    expect(response.status).toBe(201);
-    expect(response.body.user.email).toBe('rosa@example.test');
-    expect(response.body.memberships).toEqual([{ householdId: expect.any(String), householdName: 'Rosa’s Pantry', role: 'keeper' }]);
-    const me = await agent.get('/api/auth/me');
-    expect(me.status).toBe(200);
-    expect(me.body.user.name).toBe('Rosa');
-  });
-
-  it('refuses a password shorter than 10 characters with a 400 that names the field', async () => {
-    const response = await ctx.request.post('/api/auth/signup').send({ email: 'short@example.test', password: 'short', name: 'S', householdName: 'H' });
-    expect(response.status).toBe(400);
-    expect(response.body.error.code).toBe('invalid_input');
-    expect(response.body.error.fields.password).toMatch(/at least 10 characters/);
-  });
-
-  it('refuses a malformed e-mail and missing fields, naming each', async () => {
-    const response = await ctx.request.post('/api/auth/signup').send({ email: 'not-an-address', password: 'long enough password' });
-    expect(response.status).toBe(400);
-    expect(Object.keys(response.body.error.fields).sort()).toEqual(['email', 'householdName', 'name']);
-  });
-
-  it('answers 409 for an e-mail that is already taken, whatever its case', async () => {
-    const response = await ctx.request
-      .post('/api/auth/signup')
-      .send({ email: 'KEEPER@larderly.test', password: 'long enough password', name: 'Copy', householdName: 'Copy' });
-    expect(response.status).toBe(409);
-    expect(response.body.error.message).toMatch(/already exists/);
-  });
-
-  it('stores the password hashed with bcrypt at the configured cost, never in plain text', async () => {
-    const [rows] = await ctx.sequelize.query(`SELECT password_hash FROM users WHERE email = 'rosa@example.test'`);
-    const hash = (rows as { password_hash: string }[])[0].password_hash;
-    expect(hash).toMatch(/^\$2[aby]\$04\$/);
-    expect(hash).not.toContain('long enough password');
-  });
-});
-
 describe('sign-in and sign-out', () => {
   it('signs in with the right password and sets an httpOnly, SameSite=Lax session cookie', async () => {
     const response = await ctx.request.post('/api/auth/login').send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });

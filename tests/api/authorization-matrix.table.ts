@@ -103,6 +103,7 @@ export const TABLE: Record<string, RouteRule> = {
   'GET /api/ready': { access: 'public' },
   'GET /api/config': { access: 'public' },
   'POST /api/auth/signup': { access: 'public', body: () => ({}) },
+  'POST /api/auth/signup/confirm/:token': { access: 'public' },
   'POST /api/auth/login': { access: 'public', body: () => ({}) },
   'POST /api/auth/logout': { access: 'public', signsOut: true },
   'GET /api/auth/me': { access: 'signed-in' },

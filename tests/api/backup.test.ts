@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { QueryTypes } from 'sequelize';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BackupTable, HouseholdBackup } from '../../shared/schemas/backup';
+import { accountSignedIn } from '../support/accounts';
 import { demoApp } from '../support/app';
 
 let ctx: Awaited<ReturnType<typeof demoApp>>;
@@ -160,11 +161,9 @@ describe('household backup', () => {
 describe('one limit per value, shared by every entry point', () => {
   it('a household with every value at its limit exports a backup that imports', async () => {
     const { LIMITS } = await import('../../shared/schemas/limits');
-    const request = (await import('supertest')).default;
-    const agent = request.agent(ctx.app);
-    const signup = await agent.post('/api/auth/signup').send({ email: `limits-${Date.now()}@example.test`, password: 'long enough password', name: 'N'.repeat(LIMITS.length.personName), householdName: 'H'.repeat(LIMITS.length.householdName) });
-    expect(signup.status).toBe(201);
-    const hid = signup.body.memberships[0].householdId as string;
+    // Sign-up's own limits are pinned in sign-up.test.ts; this starts from the account it makes.
+    const { agent, me } = await accountSignedIn(ctx.app, { email: `limits-${Date.now()}@example.test`, password: 'long enough password', name: 'N'.repeat(LIMITS.length.personName), householdName: 'H'.repeat(LIMITS.length.householdName) });
+    const hid = me.memberships[0].householdId;
     const base = `/api/households/${hid}`;
     const ok = async (response: PromiseLike<import('supertest').Response>, status: number) => {
       const res = await response;
@@ -236,9 +235,7 @@ describe('a restock to-do’s batch plan in a backup', () => {
 
 describe('backup import limits', () => {
   it('limits imports per person (10 an hour), whether the file is good or not', async () => {
-    const request = (await import('supertest')).default;
-    const agent = request.agent(ctx.app);
-    expect((await agent.post('/api/auth/signup').send({ email: `imports-${Date.now()}@example.test`, password: 'long enough password', name: 'Ivo', householdName: 'Ivo Larder' })).status).toBe(201);
+    const { agent } = await accountSignedIn(ctx.app, { email: `imports-${Date.now()}@example.test`, password: 'long enough password', name: 'Ivo', householdName: 'Ivo Larder' });
     const statuses: number[] = [];
     for (let i = 0; i < 11; i += 1) statuses.push((await agent.post('/api/households/import').send({ format: 'not-a-backup' })).status);
     expect(statuses).toEqual([...Array(10).fill(400), 429]);

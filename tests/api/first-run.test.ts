@@ -1,6 +1,6 @@
-import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { TodoView } from '../../shared/schemas/todos';
+import { accountSignedIn } from '../support/accounts';
 import { demoApp } from '../support/app';
 
 let ctx: Awaited<ReturnType<typeof demoApp>>;
@@ -10,10 +10,8 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 async function newHousehold(email: string) {
-  const agent = request.agent(ctx.app);
-  const signup = await agent.post('/api/auth/signup').send({ name: 'Wren', email, password: 'a long enough password', householdName: 'Ridge Top' });
-  expect(signup.status, signup.text).toBe(201);
-  return { agent, hid: signup.body.memberships[0].householdId as string };
+  const { agent, me } = await accountSignedIn(ctx.app, { name: 'Wren', email, password: 'a long enough password', householdName: 'Ridge Top' });
+  return { agent, hid: me.memberships[0].householdId };
 }
 
 describe('first run: nothing is planned before the altitude is confirmed', () => {

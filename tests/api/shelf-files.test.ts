@@ -1,6 +1,6 @@
 import Papa from 'papaparse';
-import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { accountSignedIn } from '../support/accounts';
 import { demoApp } from '../support/app';
 import { shelfLookups } from './shelf-helpers';
 
@@ -92,11 +92,9 @@ describe('batch CSV import', () => {
 
 /** A person of their own, with a fresh household whose altitude is confirmed: "another household". */
 async function freshHousehold(tag: string) {
-  const agent = request.agent(ctx.app);
   const email = `${tag}-${Date.now()}@example.test`;
-  const signup = await agent.post('/api/auth/signup').send({ email, password: 'long enough password', name: 'Wren', householdName: `Wren ${tag}` });
-  expect(signup.status).toBe(201);
-  const hid = signup.body.memberships[0].householdId as string;
+  const { agent, me } = await accountSignedIn(ctx.app, { email, password: 'long enough password', name: 'Wren', householdName: `Wren ${tag}` });
+  const hid = me.memberships[0].householdId;
   const home = (await (await ctx.signedIn('keeper@larderly.test')).get(`/api/households/${ctx.householdId}`)).body.household as { altitudeFt: number };
   expect((await agent.patch(`/api/households/${hid}`).send({ altitudeFt: home.altitudeFt })).status).toBe(200);
   return { agent, base: `/api/households/${hid}` };

@@ -1,19 +1,16 @@
 import { randomBytes } from 'node:crypto';
-import type { Agent } from 'supertest';
-import request from 'supertest';
 import type { Express } from 'express';
 import { addDays } from '../../shared/domain';
 import { Batch, Household, Jar, Product } from '../../server/db/models';
+import { accountSignedIn } from './accounts';
 
 /** A new person with a household of their own, signed in; nothing else shares it. */
 export async function newHousehold(app: Express, timeZone: string) {
   const email = `cellar-${randomBytes(4).toString('hex')}@example.test`;
-  const agent: Agent = request.agent(app);
-  const signup = await agent.post('/api/auth/signup').send({ email, password: 'brine and patience', name: 'Ada Fenwick', householdName: 'Fenwick Cellar' });
-  if (signup.status !== 201) throw new Error(`sign-up failed: ${signup.status} ${JSON.stringify(signup.body)}`);
-  const householdId = signup.body.memberships[0].householdId as string;
+  const { agent, me } = await accountSignedIn(app, { email, password: 'brine and patience', name: 'Ada Fenwick', householdName: 'Fenwick Cellar' });
+  const householdId = me.memberships[0].householdId;
   await Household.update({ timeZone }, { where: { id: householdId } });
-  return { email, agent, householdId, userId: signup.body.user.id as string };
+  return { email, agent, householdId, userId: me.user.id };
 }
 
 /** An opened half-pint of a product that keeps `useWithinDays` once open (our invented test data). */

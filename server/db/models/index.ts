@@ -16,6 +16,7 @@ import { Product } from './product';
 import { PushSubscription } from './push-subscription';
 import { Recipe } from './recipe';
 import { ReminderDelivery } from './reminder-delivery';
+import { SignUpRequest } from './sign-up-request';
 import { Todo } from './todo';
 import { User } from './user';
 
@@ -24,7 +25,7 @@ export function initModels(sequelize: Sequelize) {
   for (const model of [User, Household, Membership, Product, Recipe, Batch, BatchProcessing, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
     model.initModel(sequelize);
   }
-  for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation, CalendarFeed]) model.initModel(sequelize);
+  for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation, CalendarFeed, SignUpRequest]) model.initModel(sequelize);
 
   Membership.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
   Invitation.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
@@ -55,4 +56,4 @@ export function initModels(sequelize: Sequelize) {
   Todo.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { AppSetting, Batch, BatchProcessing, CalendarFeed, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, Todo, User };
+export { AppSetting, Batch, BatchProcessing, CalendarFeed, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, SignUpRequest, Todo, User };
