@@ -25,6 +25,8 @@ export const paths = {
   home: () => '/',
   signIn: (next?: string | null) => `/sign-in${query({ next })}`,
   signUp: () => '/sign-up',
+  /** The link a sign-up e-mail carries: it makes the account and its household. */
+  signUpConfirm: (token: string) => `/sign-up/confirm/${encodeURIComponent(token)}`,
   invitation: (token: string) => `/invite/${encodeURIComponent(token)}`,
   /** A jar's page, which its label's QR code opens. */
   jar: (code: string) => `/j/${encodeURIComponent(code)}`,

@@ -33,6 +33,7 @@ const router = createBrowserRouter(withBoundaries([
     children: [
       { path: '/sign-in', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }) },
       { path: '/sign-up', lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }) },
+      { path: '/sign-up/confirm/:token', lazy: async () => ({ Component: (await import('./routes/sign-up-confirm')).SignUpConfirmRoute }) },
       { path: '/invite/:token', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/invite')).InviteRoute }) },
       {
         loader: warmMe,

@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
 import type { TodoView } from '../../shared/schemas/todos';
 import { browserForFile, PHONE, screenshot, signIn } from '../support/browser';
+import { signUpInBrowser } from '../support/sign-up-page';
 
 const baseURL = inject('baseURL');
 const browser = browserForFile();
@@ -9,15 +10,13 @@ const phone = { viewport: PHONE, isMobile: true, hasTouch: true } as const;
 const householdOf = (page: Page) => /\/h\/([0-9a-f-]{36})/.exec(page.url())![1];
 const write = { headers: { Origin: baseURL } };
 
-async function signUp(page: Page, name: string) {
-  await page.goto(`${baseURL}/sign-up`);
-  await page.getByLabel('Your name').fill(name);
-  await page.getByLabel('E-mail').fill(`${name.toLowerCase().replace(/\W/g, '-')}-${Date.now()}@example.test`);
-  await page.getByLabel('Password').fill('a shelf of apricot jam');
-  await page.getByLabel('Household name').fill(`${name}’s kitchen`);
-  await page.getByRole('button', { name: 'Create household' }).click();
-  await page.waitForURL(/\/h\/[0-9a-f-]{36}\/setup/);
-}
+const signUp = (page: Page, name: string) =>
+  signUpInBrowser(page, { baseURL, standInsDir: inject('standInsDir') }, {
+    name,
+    email: `${name.toLowerCase().replace(/\W/g, '-')}-${Date.now()}@example.test`,
+    password: 'a shelf of apricot jam',
+    householdName: `${name}’s kitchen`,
+  });
 
 describe('first run: the questions the canning numbers depend on', () => {
   it('asks a new household its altitude, time zone, canner and week start, shows no plan until then, and stores UTC as UTC', async () => {

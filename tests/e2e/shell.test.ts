@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { DESKTOP, launchChromium, PHONE, screenshot, signIn } from '../support/browser';
+import { signUpInBrowser } from '../support/sign-up-page';
 
 const baseURL = inject('baseURL');
 let browser: Browser;
@@ -74,13 +75,7 @@ describe('the app shell', () => {
 
   it('creates a new household through sign-up', async () => {
     const page = await browser.newPage({ viewport: PHONE });
-    await page.goto(`${baseURL}/sign-up`);
-    await page.getByLabel('Your name').fill('Ines Okafor');
-    await page.getByLabel('E-mail').fill(`ines-${Date.now()}@example.test`);
-    await page.getByLabel('Password').fill('plum jam every winter');
-    await page.getByLabel('Household name').fill('Okafor Kitchen');
-    await page.getByRole('button', { name: 'Create household' }).click();
-    await page.waitForURL(/\/h\/[0-9a-f-]{36}/);
+    await signUpInBrowser(page, { baseURL, standInsDir: inject('standInsDir') }, { name: 'Ines Okafor', email: `ines-${Date.now()}@example.test`, password: 'plum jam every winter', householdName: 'Okafor Kitchen' }, (sent) => screenshot(sent, 'sign-up-sent-phone'));
     await shownHousehold(page, /Okafor Kitchen/, 'keeper');
     await page.close();
   });

@@ -17,6 +17,7 @@ describe('paths', () => {
     expect(paths.week(hid, '2026-12-07')).toBe(`/h/${hid}/week?start=2026-12-07`);
     expect(paths.week(hid, '2026-12-09', '2026-12-09')).toBe(`/h/${hid}/week?start=2026-12-09&day=2026-12-09`);
     expect(paths.household(hid)).toBe(`/h/${hid}/household`);
+    expect(paths.signUpConfirm('tok_en')).toBe('/sign-up/confirm/tok_en');
   });
 
   it('leaves out what is not given and encodes what needs it', () => {

@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { Link, useNavigate } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -9,14 +9,27 @@ import { paths } from '@shared/paths';
 
 export function SignUpForm() {
   const signup = useSignup();
-  const navigate = useNavigate();
   const [form, setForm] = useState({ name: '', email: '', password: '', householdName: '' });
   const error = signup.error instanceof ApiError ? signup.error : null;
   const set = (key: keyof typeof form) => (event: { target: { value: string } }) => setForm({ ...form, [key]: event.target.value });
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    signup.mutate(form, { onSuccess: (me) => navigate(paths.setup(me.memberships[0].householdId), { replace: true }) });
+    signup.mutate(form);
+  }
+
+  if (signup.data) {
+    return (
+      <div className="flex flex-col gap-4">
+        <Notice tone="action" role="status" title="Check your e-mail">
+          {signup.data.message}
+        </Notice>
+        <p className="text-ink-muted">Open the link in that e-mail to finish. Nothing arrived? Check the address, look in your spam folder, or try again.</p>
+        <Button variant="secondary" onClick={() => signup.reset()}>
+          Use another address
+        </Button>
+      </div>
+    );
   }
 
   return (
@@ -47,7 +60,7 @@ export function SignUpForm() {
         required
       />
       <Button type="submit" disabled={signup.isPending}>
-        {signup.isPending ? 'Creating your household…' : 'Create household'}
+        {signup.isPending ? 'Sending your link…' : 'Create household'}
       </Button>
       <p className="text-center text-ink-muted">
         Already have an account?{' '}
