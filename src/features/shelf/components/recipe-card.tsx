@@ -1,6 +1,6 @@
 import { formatKitchenAmount, JAR_SIZES } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { headspaceWords, jarSizeWords, METHOD_NAMES, minutesWords } from '@shared/words';
+import { headspaceWords, INGREDIENT_ROLE_NAMES, jarSizeWords, METHOD_NAMES, minutesWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { AltitudeGate } from '@/features/households';
@@ -47,7 +47,7 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
                 <tr key={`${ingredient.name}-${index}`} className="border-t border-line">
                   <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">{formatKitchenAmount(ingredient.amount, ingredient.unit)}</td>
                   <td className="py-2">{ingredient.name}</td>
-                  <td className="py-2 text-sm text-ink-muted">{ingredient.role}</td>
+                  <td className="py-2 text-sm text-ink-muted">{INGREDIENT_ROLE_NAMES[ingredient.role]}</td>
                 </tr>
               ))}
             </tbody>

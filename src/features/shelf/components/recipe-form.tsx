@@ -3,11 +3,12 @@ import { useNavigate } from 'react-router-dom';
 import { defaultHeadspaceInches, INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, PROCESSING_METHODS, type IngredientRole, type IngredientUnit, type JarSize, type Method } from '@shared/domain';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { jarSizeWords, METHOD_NAMES } from '@shared/words';
+import { INGREDIENT_ROLE_NAMES, INGREDIENT_UNIT_NAMES, jarSizeWords, METHOD_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
+import { FormFooter, useFocusFirstError } from '@/components/ui/form-footer';
 import { ApiError } from '@/lib/api-client';
+import { useRecipes } from '../api/get-recipes';
 import { useSaveRecipe } from '../api/save-recipe';
 import { numberFrom } from '../number-from';
 import { paths } from '@shared/paths';
@@ -22,14 +23,12 @@ interface IngredientDraft {
 const blankIngredient = (): IngredientDraft => ({ name: '', amount: '', unit: 'cup', role: 'produce' });
 const optionalNumber = (text: string) => (text.trim() === '' ? null : numberFrom(text));
 
-/** A tested recipe, entered as its source gives it: the app never invents a time. */
-export function RecipeForm({ hid, products, recipe, productId }: { hid: string; products: ProductView[]; recipe?: RecipeView; productId?: string }) {
-  const save = useSaveRecipe(hid, recipe?.id);
-  const navigate = useNavigate();
+/** The form's fields from a saved recipe (to edit it, or to start a new one from its copy), or blank. */
+function draftFrom(products: ProductView[], recipe: RecipeView | undefined, productId: string | undefined, name = recipe?.name ?? '') {
   const firstProduct = products.find((p) => p.id === (recipe?.productId ?? productId)) ?? products[0];
-  const [form, setForm] = useState({
+  return {
     productId: firstProduct?.id ?? '',
-    name: recipe?.name ?? '',
+    name,
     yieldJars: String(recipe?.yieldJars ?? 4),
     yieldJarSize: (recipe?.yieldJarSize ?? firstProduct?.jarSize ?? 'pint') as JarSize,
     method: (recipe?.method ?? 'boiling-water') as Method,
@@ -40,9 +39,29 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
     baseMinutes: Object.fromEntries(JAR_SIZES.map((size) => [size, recipe?.baseMinutes[size] === undefined ? '' : String(recipe.baseMinutes[size])])) as Record<JarSize, string>,
     steps: recipe?.steps ?? '',
     source: recipe?.source ?? '',
-  });
-  const [ingredients, setIngredients] = useState<IngredientDraft[]>(recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient()]);
+    altitudeTable: recipe?.altitudeTable ?? null,
+  };
+}
+
+const ingredientDrafts = (recipe: RecipeView | undefined): IngredientDraft[] => (recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient()]);
+
+/** A tested recipe, entered as its source gives it: the app never invents a time. A new one may start from a copy. */
+export function RecipeForm({ hid, products, recipe, productId }: { hid: string; products: ProductView[]; recipe?: RecipeView; productId?: string }) {
+  const save = useSaveRecipe(hid, recipe?.id);
+  const navigate = useNavigate();
+  const [form, setForm] = useState(() => draftFrom(products, recipe, productId));
+  const [ingredients, setIngredients] = useState<IngredientDraft[]>(() => ingredientDrafts(recipe));
+  const [copiedFrom, setCopiedFrom] = useState('');
   const error = save.error instanceof ApiError ? save.error : null;
+  const formRef = useFocusFirstError<HTMLFormElement>(error);
+
+  function startFromCopy(recipeId: string, household: RecipeView[]) {
+    setCopiedFrom(recipeId);
+    const original = household.find((r) => r.id === recipeId);
+    setForm(draftFrom(products, original, productId, original ? `${original.name} (copy)` : ''));
+    setIngredients(ingredientDrafts(original));
+    save.reset();
+  }
 
   function submit(event: FormEvent) {
     event.preventDefault();
@@ -59,7 +78,7 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
         acidified: form.acidified,
         method: form.method,
         baseMinutes,
-        altitudeTable: recipe?.altitudeTable ?? null,
+        altitudeTable: form.altitudeTable,
         headspaceInches: numberFrom(form.headspaceInches),
         steps: form.steps,
         source: form.source,
@@ -71,7 +90,8 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
   const setIngredient = (index: number, changes: Partial<IngredientDraft>) => setIngredients(ingredients.map((i, n) => (n === index ? { ...i, ...changes } : i)));
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2">
+    <form ref={formRef} onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2">
+      {!recipe && <CopyChoice hid={hid} value={copiedFrom} onChoose={startFromCopy} />}
       <SelectField label="Product" value={form.productId} onChange={(e) => setForm({ ...form, productId: e.target.value })} error={error?.fields.productId}>
         {products.map((p) => (
           <option key={p.id} value={p.id}>
@@ -109,7 +129,11 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
       <fieldset className="sm:col-span-2">
         <legend className="font-bold">Tested minutes at 0–1,000 ft, by jar size</legend>
         <p className="text-sm text-ink-muted">Copy them from the tested recipe; leave a size empty where it gives no time.</p>
-        {error?.fields.baseMinutes && <p className="text-sm font-bold text-past" role="alert">{error.fields.baseMinutes}</p>}
+        {error?.fields.baseMinutes && (
+          <p className="text-sm font-bold text-past" role="alert" data-field-error>
+            {error.fields.baseMinutes}
+          </p>
+        )}
         <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-4">
           {JAR_SIZES.map((size) => (
             <TextField key={size} label={jarSizeWords(size)} inputMode="numeric" value={form.baseMinutes[size]} onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })} />
@@ -118,7 +142,11 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
       </fieldset>
       <fieldset className="flex flex-col gap-3 sm:col-span-2">
         <legend className="font-bold">Ingredients</legend>
-        {error?.fields.ingredients && <p className="text-sm font-bold text-past" role="alert">{error.fields.ingredients}</p>}
+        {error?.fields.ingredients && (
+          <p className="text-sm font-bold text-past" role="alert" data-field-error>
+            {error.fields.ingredients}
+          </p>
+        )}
         {ingredients.map((ingredient, index) => (
           <div key={index} className="grid grid-cols-2 items-end gap-2 rounded-lg border border-line p-2 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
             <TextField label={`Ingredient ${index + 1}`} value={ingredient.name} onChange={(e) => setIngredient(index, { name: e.target.value })} error={error?.fields[`ingredients.${index}.name`]} />
@@ -126,14 +154,14 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
             <SelectField label="Unit" value={ingredient.unit} onChange={(e) => setIngredient(index, { unit: e.target.value as IngredientUnit })}>
               {INGREDIENT_UNITS.map((unit) => (
                 <option key={unit} value={unit}>
-                  {unit}
+                  {INGREDIENT_UNIT_NAMES[unit]}
                 </option>
               ))}
             </SelectField>
             <SelectField label="Role" value={ingredient.role} onChange={(e) => setIngredient(index, { role: e.target.value as IngredientRole })}>
               {INGREDIENT_ROLES.map((role) => (
                 <option key={role} value={role}>
-                  {role}
+                  {INGREDIENT_ROLE_NAMES[role]}
                 </option>
               ))}
             </SelectField>
@@ -152,18 +180,30 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
       <div className="sm:col-span-2">
         <TextField label="Source" value={form.source} onChange={(e) => setForm({ ...form, source: e.target.value })} error={error?.fields.source} hint="Where the tested recipe comes from, for example the USDA Complete Guide to Home Canning." />
       </div>
-      {error && (
-        <div className="sm:col-span-2">
-          <Notice tone="past" role="alert">
-            {error.message}
-          </Notice>
-        </div>
-      )}
-      <div className="sm:col-span-2">
-        <Button type="submit" disabled={save.isPending}>
-          {save.isPending ? 'Saving…' : recipe ? 'Save the recipe' : 'Add the recipe'}
-        </Button>
-      </div>
+      <FormFooter className="sm:col-span-2" error={error} pending={save.isPending} submitLabel={recipe ? 'Save the recipe' : 'Add the recipe'} pendingLabel="Saving…" />
     </form>
+  );
+}
+
+/** "Start from a copy of…": fills the form from one of the household's recipes, to be saved as a new one. */
+function CopyChoice({ hid, value, onChoose }: { hid: string; value: string; onChoose: (recipeId: string, household: RecipeView[]) => void }) {
+  const recipes = useRecipes(hid);
+  if (!recipes.data?.length) return null;
+  return (
+    <div className="sm:col-span-2">
+      <SelectField
+        label="Start from a copy of…"
+        value={value}
+        onChange={(e) => onChoose(e.target.value, recipes.data)}
+        hint="Fills in everything from a recipe you keep; it is saved as a new recipe under its own name, and the original stays as it is."
+      >
+        <option value="">Nothing: a blank recipe</option>
+        {recipes.data.map((r) => (
+          <option key={r.id} value={r.id}>
+            {r.name}
+          </option>
+        ))}
+      </SelectField>
+    </div>
   );
 }
