@@ -21,18 +21,37 @@ export const signUpSent = (email: string): SignUpSent => ({
  * Mails a link that makes the account, or, when the address already has one, tells its owner that someone tried.
  * Both ways hash the password and send one e-mail, so the answer and its timing say nothing about the address.
  */
-export async function requestSignUp(ctx: Pick<AppContext, 'config' | 'mailer'>, input: SignupBody): Promise<SignUpSent> {
+export async function requestSignUp(
+  ctx: Pick<AppContext, 'config' | 'mailer'>,
+  input: SignupBody,
+): Promise<SignUpSent> {
   const passwordHash = await hashPassword(input.password, ctx.config.bcryptCost);
-  if (!ctx.mailer.enabled) throw new AppError(503, 'internal', 'E-mail is not set up on this server, so sign-up cannot send its link. Ask whoever runs Larderly to set SMTP_HOST.');
+  if (!ctx.mailer.enabled)
+    throw new AppError(
+      503,
+      'internal',
+      'E-mail is not set up on this server, so sign-up cannot send its link. Ask whoever runs Larderly to set SMTP_HOST.',
+    );
   const owner = await User.findOne({ where: { email: input.email } });
   let request: SignUpRequest | null = null;
   let mail;
   if (owner) {
-    mail = signUpWithTakenAddressMail({ to: owner.email, name: owner.name, signInLink: `${ctx.config.publicOrigin}/sign-in` });
+    mail = signUpWithTakenAddressMail({
+      to: owner.email,
+      name: owner.name,
+      signInLink: `${ctx.config.publicOrigin}/sign-in`,
+    });
   } else {
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(clock.now().getTime() + LINK_HOURS * 60 * 60 * 1000);
-    request = await SignUpRequest.create({ email: input.email, name: input.name, householdName: input.householdName, passwordHash, tokenHash: hashToken(token), expiresAt });
+    request = await SignUpRequest.create({
+      email: input.email,
+      name: input.name,
+      householdName: input.householdName,
+      passwordHash,
+      tokenHash: hashToken(token),
+      expiresAt,
+    });
     mail = confirmSignUpMail({
       to: input.email,
       name: input.name,
@@ -45,26 +64,41 @@ export async function requestSignUp(ctx: Pick<AppContext, 'config' | 'mailer'>, 
     await ctx.mailer.send(mail);
   } catch (error) {
     await request?.destroy();
-    throw new AppError(502, 'internal', `The sign-up e-mail could not be sent (${(error as Error).message}). Nothing was saved; try again later.`);
+    throw new AppError(
+      502,
+      'internal',
+      `The sign-up e-mail could not be sent (${(error as Error).message}). Nothing was saved; try again later.`,
+    );
   }
   return signUpSent(input.email);
 }
 
 /** The person and their household, with them as its keeper, inside the caller's transaction. */
-export async function createAccount(input: { email: string; name: string; householdName: string; passwordHash: string }, transaction: Transaction) {
-  const user = await User.create({ email: input.email, name: input.name, passwordHash: input.passwordHash }, { transaction });
+export async function createAccount(
+  input: { email: string; name: string; householdName: string; passwordHash: string },
+  transaction: Transaction,
+) {
+  const user = await User.create(
+    { email: input.email, name: input.name, passwordHash: input.passwordHash },
+    { transaction },
+  );
   const household = await Household.create({ name: input.householdName }, { transaction });
   await Membership.create({ householdId: household.id, userId: user.id, role: 'keeper' }, { transaction });
   return user.toPublic();
 }
 
-const EXPIRED = 'This sign-up link has expired or was already used. Sign up again for a new one, or sign in if you finished already.';
+const EXPIRED =
+  'This sign-up link has expired or was already used. Sign up again for a new one, or sign in if you finished already.';
 
 /** Uses a mailed sign-up link once: the account and household are made, and every other pending link for that address ends. */
 export async function confirmSignUp(sequelize: Sequelize, token: string) {
   try {
     return await sequelize.transaction(async (transaction) => {
-      const request = await SignUpRequest.findOne({ where: { tokenHash: hashToken(token), expiresAt: { [Op.gt]: clock.now() } }, transaction, lock: transaction.LOCK.UPDATE });
+      const request = await SignUpRequest.findOne({
+        where: { tokenHash: hashToken(token), expiresAt: { [Op.gt]: clock.now() } },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       if (!request) throw new AppError(410, 'not_allowed', EXPIRED);
       await SignUpRequest.destroy({ where: { email: request.email }, transaction });
       if (await User.findOne({ where: { email: request.email }, transaction })) {
@@ -73,7 +107,8 @@ export async function confirmSignUp(sequelize: Sequelize, token: string) {
       return await createAccount(request, transaction);
     });
   } catch (error) {
-    if (error instanceof UniqueConstraintError) throw conflict('That address already has an account. Sign in with it instead.');
+    if (error instanceof UniqueConstraintError)
+      throw conflict('That address already has an account. Sign in with it instead.');
     throw error;
   }
 }
@@ -86,6 +121,10 @@ export async function describeMe(user: Express.User): Promise<MeResponse> {
   });
   return {
     user: { id: user.id, email: user.email, name: user.name },
-    memberships: memberships.map((m) => ({ householdId: m.householdId, householdName: m.household!.name, role: m.role })),
+    memberships: memberships.map((m) => ({
+      householdId: m.householdId,
+      householdName: m.household!.name,
+      role: m.role,
+    })),
   };
 }

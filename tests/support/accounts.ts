@@ -26,14 +26,17 @@ export async function signUpByMail(app: Express, mail: MailCatcher, account: New
   const sent = await agent.post('/api/auth/signup').send(account);
   if (sent.status !== 202) throw new Error(`sign-up failed: ${sent.status} ${JSON.stringify(sent.body)}`);
   const confirmed = await agent.post(`/api/auth/signup/confirm/${signUpTokenFor(mail, account.email)}`).send({});
-  if (confirmed.status !== 201) throw new Error(`sign-up link failed: ${confirmed.status} ${JSON.stringify(confirmed.body)}`);
+  if (confirmed.status !== 201)
+    throw new Error(`sign-up link failed: ${confirmed.status} ${JSON.stringify(confirmed.body)}`);
   return { agent, me: confirmed.body as MeResponse };
 }
 
 /** A confirmed account and household made directly, for tests about what comes after sign-up; then signed in. */
 export async function accountSignedIn(app: Express, account: NewAccount) {
   const passwordHash = await hashPassword(account.password, 4);
-  await User.sequelize!.transaction((transaction) => createAccount({ ...account, email: account.email.toLowerCase(), passwordHash }, transaction));
+  await User.sequelize!.transaction((transaction) =>
+    createAccount({ ...account, email: account.email.toLowerCase(), passwordHash }, transaction),
+  );
   const agent: Agent = request.agent(app);
   const login = await agent.post('/api/auth/login').send({ email: account.email, password: account.password });
   if (login.status !== 200) throw new Error(`sign-in failed: ${login.status} ${JSON.stringify(login.body)}`);

@@ -7,6 +7,8 @@ import {
   headspaceWords,
   heatWords,
   inCanner,
+  INGREDIENT_ROLE_NAMES,
+  INGREDIENT_UNIT_NAMES,
   jarSizeWords,
   METHOD_NAMES,
   monthDayWords,
@@ -40,6 +42,35 @@ describe('one unit formatter', () => {
     expect(headspaceWords(0.5)).toBe('1/2 inch');
     expect(headspaceWords(1)).toBe('1 inch');
     expect(headspaceWords(1.25)).toBe('1 1/4 inches');
+  });
+
+  // Published: NIST Handbook 44, Appendix C names the US customary units (fluid ounce, teaspoon, tablespoon, cup,
+  // pint, quart, gallon; pound and ounce avoirdupois); NIST SP 811 gives the US spelling of liter and milliliter.
+  it('spells out every ingredient unit as the handbooks name it, the weight ounce apart from the fluid ounce', () => {
+    expect(INGREDIENT_UNIT_NAMES).toEqual({
+      tsp: 'teaspoons',
+      tbsp: 'tablespoons',
+      'fl-oz': 'fluid ounces',
+      cup: 'cups',
+      pint: 'pints',
+      quart: 'quarts',
+      gallon: 'gallons',
+      ml: 'milliliters',
+      l: 'liters',
+      lb: 'pounds',
+      oz: 'ounces (weight)',
+      g: 'grams',
+      kg: 'kilograms',
+      each: 'each (whole items)',
+    });
+  });
+
+  // Common practice: scaling keeps the acid (vinegar, lemon juice) to the produce at the tested ratio, so the role
+  // names say which ingredients count as each.
+  it('names each ingredient role with what belongs in it', () => {
+    expect(INGREDIENT_ROLE_NAMES.produce).toBe('Produce (fruit, vegetables)');
+    expect(INGREDIENT_ROLE_NAMES.acid).toBe('Acid (vinegar, lemon juice)');
+    expect(Object.values(INGREDIENT_ROLE_NAMES).every((name) => /^[A-Z]/.test(name))).toBe(true);
   });
 
   it('names jar sizes as a cook says them', () => {

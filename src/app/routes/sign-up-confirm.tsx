@@ -15,11 +15,16 @@ export function SignUpConfirmRoute() {
   useEffect(() => {
     if (sent.current) return;
     sent.current = true;
-    confirm.mutate(token, { onSuccess: (me) => navigate(paths.setup(me.memberships[0].householdId), { replace: true }) });
+    confirm.mutate(token, {
+      onSuccess: (me) => navigate(paths.setup(me.memberships[0].householdId), { replace: true }),
+    });
   }, [confirm, navigate, token]);
 
   return (
-    <AuthLayout title="Finishing your sign-up" lead="Your address is confirmed by this link; your household is being made.">
+    <AuthLayout
+      title="Finishing your sign-up"
+      lead="Your address is confirmed by this link; your household is being made."
+    >
       {confirm.error ? (
         <div className="flex flex-col gap-4">
           <Notice tone="past" role="alert">

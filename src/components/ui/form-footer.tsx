@@ -32,7 +32,9 @@ export function FormFooter({
     <div className={`flex flex-col gap-3 ${className}`}>
       {error && (
         <Notice tone="past" role="alert">
-          {marked > 0 ? `${error.message} Check the ${marked === 1 ? 'marked field' : `${marked} marked fields`}.` : error.message}
+          {marked > 0
+            ? `${error.message} Check the ${marked === 1 ? 'marked field' : `${marked} marked fields`}.`
+            : error.message}
         </Notice>
       )}
       <div className="flex flex-wrap items-center gap-3">
@@ -47,15 +49,17 @@ export function FormFooter({
 
 /**
  * After a refused submit, the first field in error (in the order the form shows them) takes the focus and is scrolled
- * into view: on a phone the mark may be far above the button. A group's error (a fieldset with `data-field-error`)
- * focuses the group's first field. Give it the form's ref and the error; each new error moves the focus again.
+ * into view: on a phone the mark may be far above the button. A group's error (marked `data-field-error` inside its
+ * fieldset) focuses the group's first field. Give it the form's ref and the error; each new error moves the focus again.
  */
 export function useFocusFirstError<T extends HTMLElement>(error: unknown) {
   const ref = useRef<T>(null);
   useEffect(() => {
     if (!error || !ref.current) return;
     const first = ref.current.querySelector<HTMLElement>('[aria-invalid="true"], [data-field-error]');
-    const target = first?.matches('input, select, textarea') ? first : first?.querySelector<HTMLElement>('input, select, textarea');
+    const target = first?.matches('input, select, textarea')
+      ? first
+      : first?.closest('fieldset')?.querySelector<HTMLElement>('input, select, textarea');
     if (!target) return;
     target.focus({ preventScroll: true });
     target.scrollIntoView({ block: 'center', behavior: 'instant' });

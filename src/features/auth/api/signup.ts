@@ -11,7 +11,8 @@ export function useSignup() {
 }
 
 /** Uses the mailed link: the account and household are made, and the person is signed in. */
-export const confirmSignUp = (token: string) => api.post<MeResponse>(`/auth/signup/confirm/${encodeURIComponent(token)}`, {});
+export const confirmSignUp = (token: string) =>
+  api.post<MeResponse>(`/auth/signup/confirm/${encodeURIComponent(token)}`, {});
 
 export function useConfirmSignUp() {
   const queryClient = useQueryClient();

@@ -11,7 +11,8 @@ export function SignUpForm() {
   const signup = useSignup();
   const [form, setForm] = useState({ name: '', email: '', password: '', householdName: '' });
   const error = signup.error instanceof ApiError ? signup.error : null;
-  const set = (key: keyof typeof form) => (event: { target: { value: string } }) => setForm({ ...form, [key]: event.target.value });
+  const set = (key: keyof typeof form) => (event: { target: { value: string } }) =>
+    setForm({ ...form, [key]: event.target.value });
 
   function submit(event: FormEvent) {
     event.preventDefault();
@@ -24,7 +25,10 @@ export function SignUpForm() {
         <Notice tone="action" role="status" title="Check your e-mail">
           {signup.data.message}
         </Notice>
-        <p className="text-ink-muted">Open the link in that e-mail to finish. Nothing arrived? Check the address, look in your spam folder, or try again.</p>
+        <p className="text-ink-muted">
+          Open the link in that e-mail to finish. Nothing arrived? Check the address, look in your spam folder, or try
+          again.
+        </p>
         <Button variant="secondary" onClick={() => signup.reset()}>
           Use another address
         </Button>
@@ -39,8 +43,23 @@ export function SignUpForm() {
           {error.message}
         </Notice>
       )}
-      <TextField label="Your name" autoComplete="name" value={form.name} onChange={set('name')} error={error?.fields.name} required />
-      <TextField label="E-mail" type="email" autoComplete="email" value={form.email} onChange={set('email')} error={error?.fields.email} required />
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        value={form.name}
+        onChange={set('name')}
+        error={error?.fields.name}
+        required
+      />
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        value={form.email}
+        onChange={set('email')}
+        error={error?.fields.email}
+        required
+      />
       <TextField
         label="Password"
         type="password"

@@ -1,6 +1,16 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { defaultHeadspaceInches, INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, PROCESSING_METHODS, type IngredientRole, type IngredientUnit, type JarSize, type Method } from '@shared/domain';
+import {
+  defaultHeadspaceInches,
+  INGREDIENT_ROLES,
+  INGREDIENT_UNITS,
+  JAR_SIZES,
+  PROCESSING_METHODS,
+  type IngredientRole,
+  type IngredientUnit,
+  type JarSize,
+  type Method,
+} from '@shared/domain';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { INGREDIENT_ROLE_NAMES, INGREDIENT_UNIT_NAMES, jarSizeWords, METHOD_NAMES } from '@shared/words';
@@ -24,7 +34,12 @@ const blankIngredient = (): IngredientDraft => ({ name: '', amount: '', unit: 'c
 const optionalNumber = (text: string) => (text.trim() === '' ? null : numberFrom(text));
 
 /** The form's fields from a saved recipe (to edit it, or to start a new one from its copy), or blank. */
-function draftFrom(products: ProductView[], recipe: RecipeView | undefined, productId: string | undefined, name = recipe?.name ?? '') {
+function draftFrom(
+  products: ProductView[],
+  recipe: RecipeView | undefined,
+  productId: string | undefined,
+  name = recipe?.name ?? '',
+) {
   const firstProduct = products.find((p) => p.id === (recipe?.productId ?? productId)) ?? products[0];
   return {
     productId: firstProduct?.id ?? '',
@@ -35,18 +50,33 @@ function draftFrom(products: ProductView[], recipe: RecipeView | undefined, prod
     acidified: recipe?.acidified ?? false,
     ph: recipe?.ph === null || recipe === undefined ? '' : String(recipe.ph),
     acidPercent: recipe?.acidPercent === null || recipe === undefined ? '' : String(recipe.acidPercent),
-    headspaceInches: String(recipe?.headspaceInches ?? (firstProduct ? defaultHeadspaceInches(firstProduct.kind) : 0.5)),
-    baseMinutes: Object.fromEntries(JAR_SIZES.map((size) => [size, recipe?.baseMinutes[size] === undefined ? '' : String(recipe.baseMinutes[size])])) as Record<JarSize, string>,
+    headspaceInches: String(
+      recipe?.headspaceInches ?? (firstProduct ? defaultHeadspaceInches(firstProduct.kind) : 0.5),
+    ),
+    baseMinutes: Object.fromEntries(
+      JAR_SIZES.map((size) => [size, recipe?.baseMinutes[size] === undefined ? '' : String(recipe.baseMinutes[size])]),
+    ) as Record<JarSize, string>,
     steps: recipe?.steps ?? '',
     source: recipe?.source ?? '',
     altitudeTable: recipe?.altitudeTable ?? null,
   };
 }
 
-const ingredientDrafts = (recipe: RecipeView | undefined): IngredientDraft[] => (recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient()]);
+const ingredientDrafts = (recipe: RecipeView | undefined): IngredientDraft[] =>
+  recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient()];
 
 /** A tested recipe, entered as its source gives it: the app never invents a time. A new one may start from a copy. */
-export function RecipeForm({ hid, products, recipe, productId }: { hid: string; products: ProductView[]; recipe?: RecipeView; productId?: string }) {
+export function RecipeForm({
+  hid,
+  products,
+  recipe,
+  productId,
+}: {
+  hid: string;
+  products: ProductView[];
+  recipe?: RecipeView;
+  productId?: string;
+}) {
   const save = useSaveRecipe(hid, recipe?.id);
   const navigate = useNavigate();
   const [form, setForm] = useState(() => draftFrom(products, recipe, productId));
@@ -65,14 +95,21 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    const baseMinutes = Object.fromEntries(JAR_SIZES.filter((size) => form.baseMinutes[size].trim() !== '').map((size) => [size, numberFrom(form.baseMinutes[size])]));
+    const baseMinutes = Object.fromEntries(
+      JAR_SIZES.filter((size) => form.baseMinutes[size].trim() !== '').map((size) => [
+        size,
+        numberFrom(form.baseMinutes[size]),
+      ]),
+    );
     save.mutate(
       {
         productId: form.productId,
         name: form.name,
         yieldJars: numberFrom(form.yieldJars),
         yieldJarSize: form.yieldJarSize,
-        ingredients: ingredients.filter((i) => i.name.trim() || i.amount.trim()).map((i) => ({ name: i.name, amount: numberFrom(i.amount), unit: i.unit, role: i.role })),
+        ingredients: ingredients
+          .filter((i) => i.name.trim() || i.amount.trim())
+          .map((i) => ({ name: i.name, amount: numberFrom(i.amount), unit: i.unit, role: i.role })),
         acidPercent: optionalNumber(form.acidPercent),
         ph: optionalNumber(form.ph),
         acidified: form.acidified,
@@ -87,35 +124,67 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
     );
   }
 
-  const setIngredient = (index: number, changes: Partial<IngredientDraft>) => setIngredients(ingredients.map((i, n) => (n === index ? { ...i, ...changes } : i)));
+  const setIngredient = (index: number, changes: Partial<IngredientDraft>) =>
+    setIngredients(ingredients.map((i, n) => (n === index ? { ...i, ...changes } : i)));
 
   return (
     <form ref={formRef} onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2">
       {!recipe && <CopyChoice hid={hid} value={copiedFrom} onChoose={startFromCopy} />}
-      <SelectField label="Product" value={form.productId} onChange={(e) => setForm({ ...form, productId: e.target.value })} error={error?.fields.productId}>
+      <SelectField
+        label="Product"
+        value={form.productId}
+        onChange={(e) => setForm({ ...form, productId: e.target.value })}
+        error={error?.fields.productId}
+      >
         {products.map((p) => (
           <option key={p.id} value={p.id}>
             {p.name}
           </option>
         ))}
       </SelectField>
-      <TextField label="Recipe name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={error?.fields.name} />
-      <TextField label="Tested yield (jars)" inputMode="numeric" value={form.yieldJars} onChange={(e) => setForm({ ...form, yieldJars: e.target.value })} error={error?.fields.yieldJars} />
-      <SelectField label="Jar size of the yield" value={form.yieldJarSize} onChange={(e) => setForm({ ...form, yieldJarSize: e.target.value as JarSize })}>
+      <TextField
+        label="Recipe name"
+        value={form.name}
+        onChange={(e) => setForm({ ...form, name: e.target.value })}
+        error={error?.fields.name}
+      />
+      <TextField
+        label="Tested yield (jars)"
+        inputMode="numeric"
+        value={form.yieldJars}
+        onChange={(e) => setForm({ ...form, yieldJars: e.target.value })}
+        error={error?.fields.yieldJars}
+      />
+      <SelectField
+        label="Jar size of the yield"
+        value={form.yieldJarSize}
+        onChange={(e) => setForm({ ...form, yieldJarSize: e.target.value as JarSize })}
+      >
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
             {jarSizeWords(size)}
           </option>
         ))}
       </SelectField>
-      <SelectField label="Tested for" value={form.method} onChange={(e) => setForm({ ...form, method: e.target.value as Method })} error={error?.fields.method}>
+      <SelectField
+        label="Tested for"
+        value={form.method}
+        onChange={(e) => setForm({ ...form, method: e.target.value as Method })}
+        error={error?.fields.method}
+      >
         {PROCESSING_METHODS.map((m) => (
           <option key={m} value={m}>
             {METHOD_NAMES[m]}
           </option>
         ))}
       </SelectField>
-      <TextField label="Headspace (inches)" inputMode="decimal" value={form.headspaceInches} onChange={(e) => setForm({ ...form, headspaceInches: e.target.value })} error={error?.fields.headspaceInches} />
+      <TextField
+        label="Headspace (inches)"
+        inputMode="decimal"
+        value={form.headspaceInches}
+        onChange={(e) => setForm({ ...form, headspaceInches: e.target.value })}
+        error={error?.fields.headspaceInches}
+      />
       <div className="sm:col-span-2">
         <CheckboxField
           label="Acid or acidified (pH 4.6 or below)"
@@ -124,11 +193,26 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
           onChange={(e) => setForm({ ...form, acidified: e.target.checked })}
         />
       </div>
-      <TextField label="Measured pH (optional)" inputMode="decimal" value={form.ph} onChange={(e) => setForm({ ...form, ph: e.target.value })} error={error?.fields.ph} />
-      <TextField label="Acid strength, % (optional)" inputMode="decimal" value={form.acidPercent} onChange={(e) => setForm({ ...form, acidPercent: e.target.value })} error={error?.fields.acidPercent} hint="5 for the usual vinegar." />
+      <TextField
+        label="Measured pH (optional)"
+        inputMode="decimal"
+        value={form.ph}
+        onChange={(e) => setForm({ ...form, ph: e.target.value })}
+        error={error?.fields.ph}
+      />
+      <TextField
+        label="Acid strength, % (optional)"
+        inputMode="decimal"
+        value={form.acidPercent}
+        onChange={(e) => setForm({ ...form, acidPercent: e.target.value })}
+        error={error?.fields.acidPercent}
+        hint="5 for the usual vinegar."
+      />
       <fieldset className="sm:col-span-2">
         <legend className="font-bold">Tested minutes at 0–1,000 ft, by jar size</legend>
-        <p className="text-sm text-ink-muted">Copy them from the tested recipe; leave a size empty where it gives no time.</p>
+        <p className="text-sm text-ink-muted">
+          Copy them from the tested recipe; leave a size empty where it gives no time.
+        </p>
         {error?.fields.baseMinutes && (
           <p className="text-sm font-bold text-past" role="alert" data-field-error>
             {error.fields.baseMinutes}
@@ -136,7 +220,13 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
         )}
         <div className="mt-2 grid grid-cols-2 gap-3 sm:grid-cols-4">
           {JAR_SIZES.map((size) => (
-            <TextField key={size} label={jarSizeWords(size)} inputMode="numeric" value={form.baseMinutes[size]} onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })} />
+            <TextField
+              key={size}
+              label={jarSizeWords(size)}
+              inputMode="numeric"
+              value={form.baseMinutes[size]}
+              onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })}
+            />
           ))}
         </div>
       </fieldset>
@@ -148,45 +238,104 @@ export function RecipeForm({ hid, products, recipe, productId }: { hid: string; 
           </p>
         )}
         {ingredients.map((ingredient, index) => (
-          <div key={index} className="grid grid-cols-2 items-end gap-2 rounded-lg border border-line p-2 sm:grid-cols-[2fr_1fr_1fr_1fr_auto]">
-            <TextField label={`Ingredient ${index + 1}`} value={ingredient.name} onChange={(e) => setIngredient(index, { name: e.target.value })} error={error?.fields[`ingredients.${index}.name`]} />
-            <TextField label="Amount" inputMode="decimal" value={ingredient.amount} onChange={(e) => setIngredient(index, { amount: e.target.value })} error={error?.fields[`ingredients.${index}.amount`]} />
-            <SelectField label="Unit" value={ingredient.unit} onChange={(e) => setIngredient(index, { unit: e.target.value as IngredientUnit })}>
+          <div
+            key={index}
+            className="grid grid-cols-2 items-end gap-2 rounded-lg border border-line p-2 sm:grid-cols-[2fr_1fr_1.2fr_1.6fr_auto]"
+          >
+            <div className="col-span-2 sm:col-span-1">
+              <TextField
+                label={`Ingredient ${index + 1}`}
+                value={ingredient.name}
+                onChange={(e) => setIngredient(index, { name: e.target.value })}
+                error={error?.fields[`ingredients.${index}.name`]}
+              />
+            </div>
+            <TextField
+              label="Amount"
+              inputMode="decimal"
+              value={ingredient.amount}
+              onChange={(e) => setIngredient(index, { amount: e.target.value })}
+              error={error?.fields[`ingredients.${index}.amount`]}
+            />
+            <SelectField
+              label="Unit"
+              value={ingredient.unit}
+              onChange={(e) => setIngredient(index, { unit: e.target.value as IngredientUnit })}
+            >
               {INGREDIENT_UNITS.map((unit) => (
                 <option key={unit} value={unit}>
                   {INGREDIENT_UNIT_NAMES[unit]}
                 </option>
               ))}
             </SelectField>
-            <SelectField label="Role" value={ingredient.role} onChange={(e) => setIngredient(index, { role: e.target.value as IngredientRole })}>
-              {INGREDIENT_ROLES.map((role) => (
-                <option key={role} value={role}>
-                  {INGREDIENT_ROLE_NAMES[role]}
-                </option>
-              ))}
-            </SelectField>
-            <Button variant="quiet" onClick={() => setIngredients(ingredients.filter((_, n) => n !== index))} aria-label={`Remove ingredient ${index + 1}`}>
+            <div className="col-span-2 sm:col-span-1">
+              <SelectField
+                label="Role"
+                value={ingredient.role}
+                onChange={(e) => setIngredient(index, { role: e.target.value as IngredientRole })}
+              >
+                {INGREDIENT_ROLES.map((role) => (
+                  <option key={role} value={role}>
+                    {INGREDIENT_ROLE_NAMES[role]}
+                  </option>
+                ))}
+              </SelectField>
+            </div>
+            <Button
+              variant="quiet"
+              onClick={() => setIngredients(ingredients.filter((_, n) => n !== index))}
+              aria-label={`Remove ingredient ${index + 1}`}
+            >
               Remove
             </Button>
           </div>
         ))}
-        <Button variant="secondary" className="self-start" onClick={() => setIngredients([...ingredients, blankIngredient()])}>
+        <Button
+          variant="secondary"
+          className="self-start"
+          onClick={() => setIngredients([...ingredients, blankIngredient()])}
+        >
           Add an ingredient
         </Button>
       </fieldset>
       <div className="sm:col-span-2">
-        <TextAreaField label="Method" value={form.steps} onChange={(e) => setForm({ ...form, steps: e.target.value })} error={error?.fields.steps} />
+        <TextAreaField
+          label="Method"
+          value={form.steps}
+          onChange={(e) => setForm({ ...form, steps: e.target.value })}
+          error={error?.fields.steps}
+        />
       </div>
       <div className="sm:col-span-2">
-        <TextField label="Source" value={form.source} onChange={(e) => setForm({ ...form, source: e.target.value })} error={error?.fields.source} hint="Where the tested recipe comes from, for example the USDA Complete Guide to Home Canning." />
+        <TextField
+          label="Source"
+          value={form.source}
+          onChange={(e) => setForm({ ...form, source: e.target.value })}
+          error={error?.fields.source}
+          hint="Where the tested recipe comes from, for example the USDA Complete Guide to Home Canning."
+        />
       </div>
-      <FormFooter className="sm:col-span-2" error={error} pending={save.isPending} submitLabel={recipe ? 'Save the recipe' : 'Add the recipe'} pendingLabel="Saving…" />
+      <FormFooter
+        className="sm:col-span-2"
+        error={error}
+        pending={save.isPending}
+        submitLabel={recipe ? 'Save the recipe' : 'Add the recipe'}
+        pendingLabel="Saving…"
+      />
     </form>
   );
 }
 
 /** "Start from a copy of…": fills the form from one of the household's recipes, to be saved as a new one. */
-function CopyChoice({ hid, value, onChoose }: { hid: string; value: string; onChoose: (recipeId: string, household: RecipeView[]) => void }) {
+function CopyChoice({
+  hid,
+  value,
+  onChoose,
+}: {
+  hid: string;
+  value: string;
+  onChoose: (recipeId: string, household: RecipeView[]) => void;
+}) {
   const recipes = useRecipes(hid);
   if (!recipes.data?.length) return null;
   return (
