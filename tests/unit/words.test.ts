@@ -103,7 +103,13 @@ describe('shared/words stays pure', () => {
   const folder = fileURLToPath(new URL('../../shared/words/', import.meta.url));
   const files = readdirSync(folder).filter((file) => file.endsWith('.ts'));
   it.each(files)('%s imports only its neighbors, the domain or date-fns', (file) => {
-    const specifiers = [...readFileSync(folder + file, 'utf8').matchAll(/\bfrom\s+['"]([^'"]+)['"]/g)].map((m) => m[1]!);
-    for (const specifier of specifiers) expect(specifier.startsWith('./') || specifier.startsWith('../domain') || specifier === 'date-fns', `${file}: ${specifier}`).toBe(true);
+    const specifiers = [...readFileSync(folder + file, 'utf8').matchAll(/\bfrom\s+['"]([^'"]+)['"]/g)].map(
+      (m) => m[1]!,
+    );
+    for (const specifier of specifiers)
+      expect(
+        specifier.startsWith('./') || specifier.startsWith('../domain') || specifier === 'date-fns',
+        `${file}: ${specifier}`,
+      ).toBe(true);
   });
 });

@@ -1,4 +1,4 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { Button } from './button';
 import { Notice } from './notice';
 
@@ -18,6 +18,8 @@ export function FormFooter({
   submitLabel,
   pendingLabel,
   secondary,
+  disabled = false,
+  wide = false,
   className = '',
 }: {
   error?: FormFooterError | null;
@@ -25,6 +27,10 @@ export function FormFooter({
   submitLabel: string;
   pendingLabel: string;
   secondary?: ReactNode;
+  /** the submit is off for another reason than a save in flight (the plan refuses, nothing to save yet) */
+  disabled?: boolean;
+  /** the button the width of the form, as on the narrow sign-in and sign-up cards */
+  wide?: boolean;
   className?: string;
 }) {
   const marked = Object.keys(error?.fields ?? {}).length;
@@ -38,31 +44,11 @@ export function FormFooter({
         </Notice>
       )}
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={pending}>
+        <Button type="submit" disabled={pending || disabled} className={wide ? 'w-full' : ''}>
           {pending ? pendingLabel : submitLabel}
         </Button>
         {secondary}
       </div>
     </div>
   );
-}
-
-/**
- * After a refused submit, the first field in error (in the order the form shows them) takes the focus and is scrolled
- * into view: on a phone the mark may be far above the button. A group's error (marked `data-field-error` inside its
- * fieldset) focuses the group's first field. Give it the form's ref and the error; each new error moves the focus again.
- */
-export function useFocusFirstError<T extends HTMLElement>(error: unknown) {
-  const ref = useRef<T>(null);
-  useEffect(() => {
-    if (!error || !ref.current) return;
-    const first = ref.current.querySelector<HTMLElement>('[aria-invalid="true"], [data-field-error]');
-    const target = first?.matches('input, select, textarea')
-      ? first
-      : first?.closest('fieldset')?.querySelector<HTMLElement>('input, select, textarea');
-    if (!target) return;
-    target.focus({ preventScroll: true });
-    target.scrollIntoView({ block: 'center', behavior: 'instant' });
-  }, [error]);
-  return ref;
 }

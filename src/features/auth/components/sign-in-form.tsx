@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
+import { FormFooter } from '@/components/ui/form-footer';
 import { ApiError } from '@/lib/api-client';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useLogin } from '../api/login';
 import { paths } from '@shared/paths';
 
@@ -14,20 +14,27 @@ export function SignInForm() {
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const error = login.error instanceof ApiError ? login.error : null;
+  const formRef = useFocusFirstError(error);
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    login.mutate({ email, password }, { onSuccess: () => navigate(safeNext(searchParams.get('next')), { replace: true }) });
+    login.mutate(
+      { email, password },
+      { onSuccess: () => navigate(safeNext(searchParams.get('next')), { replace: true }) },
+    );
   }
 
   return (
-    <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-      {error && !error.fields.email && !error.fields.password && (
-        <Notice tone="past" role="alert">
-          {error.message}
-        </Notice>
-      )}
-      <TextField label="E-mail" type="email" autoComplete="email" value={email} onChange={(e) => setEmail(e.target.value)} error={error?.fields.email} required />
+    <form ref={formRef} onSubmit={submit} className="flex flex-col gap-4" noValidate>
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        value={email}
+        onChange={(e) => setEmail(e.target.value)}
+        error={error?.fields.email}
+        required
+      />
       <TextField
         label="Password"
         type="password"
@@ -37,9 +44,7 @@ export function SignInForm() {
         error={error?.fields.password}
         required
       />
-      <Button type="submit" disabled={login.isPending}>
-        {login.isPending ? 'Signing in…' : 'Sign in'}
-      </Button>
+      <FormFooter wide error={error} pending={login.isPending} submitLabel="Sign in" pendingLabel="Signing in…" />
       <p className="text-center text-ink-muted">
         New here?{' '}
         <Link to={paths.signUp()} className="font-bold text-action underline underline-offset-4">

@@ -2,8 +2,10 @@ import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useSignup } from '../api/signup';
 import { paths } from '@shared/paths';
 
@@ -11,6 +13,7 @@ export function SignUpForm() {
   const signup = useSignup();
   const [form, setForm] = useState({ name: '', email: '', password: '', householdName: '' });
   const error = signup.error instanceof ApiError ? signup.error : null;
+  const formRef = useFocusFirstError(error);
   const set = (key: keyof typeof form) => (event: { target: { value: string } }) =>
     setForm({ ...form, [key]: event.target.value });
 
@@ -37,12 +40,7 @@ export function SignUpForm() {
   }
 
   return (
-    <form onSubmit={submit} className="flex flex-col gap-4" noValidate>
-      {error && (
-        <Notice tone="past" role="alert">
-          {error.message}
-        </Notice>
-      )}
+    <form ref={formRef} onSubmit={submit} className="flex flex-col gap-4" noValidate>
       <TextField
         label="Your name"
         autoComplete="name"
@@ -78,9 +76,13 @@ export function SignUpForm() {
         hint="You will be its keeper, and can invite the others later."
         required
       />
-      <Button type="submit" disabled={signup.isPending}>
-        {signup.isPending ? 'Sending your link…' : 'Create household'}
-      </Button>
+      <FormFooter
+        wide
+        error={error}
+        pending={signup.isPending}
+        submitLabel="Create household"
+        pendingLabel="Sending your link…"
+      />
       <p className="text-center text-ink-muted">
         Already have an account?{' '}
         <Link to={paths.signIn()} className="font-bold text-action underline underline-offset-4">

@@ -1,12 +1,11 @@
-import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { PROCESSING_METHODS, type Method } from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
 import { METHOD_NAMES, WEEKDAY_NAMES } from '@shared/words';
-import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
+import { FormFooter } from '@/components/ui/form-footer';
 import { ApiError } from '@/lib/api-client';
-import { focusFirstError } from '@/lib/focus-first-error';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useUpdateHousehold } from '../api/update-household';
 import { browserTimeZone } from '../time-zones';
 import { TimeZoneField } from './time-zone-field';
@@ -15,7 +14,6 @@ import { TimeZoneField } from './time-zone-field';
 export function FirstRunForm({ household, onConfirmed }: { household: HouseholdView; onConfirmed: () => void }) {
   const update = useUpdateHousehold(household.id);
   const fromBrowser = browserTimeZone();
-  const form = useRef<HTMLFormElement>(null);
   const [answers, setAnswers] = useState({
     // A household never confirmed may still read 0 ft only because nobody asked: start empty so nobody confirms it by accident.
     altitudeFt: household.altitudeConfirmed || household.altitudeFt !== 0 ? String(household.altitudeFt) : '',
@@ -25,18 +23,22 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
     weekStartsOn: String(household.weekStartsOn),
   });
   const error = update.error instanceof ApiError ? update.error : null;
-  // After the messages are drawn, not when the answer arrives: only then is the field marked invalid.
-  useEffect(() => {
-    if (error && Object.keys(error.fields).length) focusFirstError(form.current);
-  }, [error]);
-  const set = (key: keyof typeof answers) => (event: { target: { value: string } }) => setAnswers({ ...answers, [key]: event.target.value });
+  const form = useFocusFirstError(error);
+  const set = (key: keyof typeof answers) => (event: { target: { value: string } }) =>
+    setAnswers({ ...answers, [key]: event.target.value });
 
   function submit(event: FormEvent) {
     event.preventDefault();
     const altitude = answers.altitudeFt.trim() === '' ? Number.NaN : Number(answers.altitudeFt.replaceAll(',', ''));
     const capacity = answers.cannerCapacityJars.trim() === '' ? Number.NaN : Number(answers.cannerCapacityJars);
     update.mutate(
-      { altitudeFt: altitude, timeZone: answers.timeZone, defaultMethod: answers.defaultMethod, cannerCapacityJars: capacity, weekStartsOn: Number(answers.weekStartsOn) },
+      {
+        altitudeFt: altitude,
+        timeZone: answers.timeZone,
+        defaultMethod: answers.defaultMethod,
+        cannerCapacityJars: capacity,
+        weekStartsOn: Number(answers.weekStartsOn),
+      },
       { onSuccess: onConfirmed },
     );
   }
@@ -53,7 +55,9 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
           hint="Water boils at a lower temperature the higher you live, so jars need longer, or more pressure, to be safe."
         />
         <details className="rounded-card border border-line bg-surface px-4 py-2">
-          <summary className="min-h-11 cursor-pointer content-center font-bold text-action">How do I find my altitude?</summary>
+          <summary className="min-h-11 cursor-pointer content-center font-bold text-action">
+            How do I find my altitude?
+          </summary>
           <ul className="mb-2 list-disc pl-5 text-[0.95rem]">
             <li>Your local extension service or county office can tell you the altitude of your address.</li>
             <li>A topographic map, or a map app with a terrain or elevation layer, shows it for the spot you live.</li>
@@ -73,7 +77,13 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
 
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 text-lg font-bold">Your canner</legend>
-        <SelectField label="The canner you use most" value={answers.defaultMethod} onChange={(e) => setAnswers({ ...answers, defaultMethod: e.target.value as Method })} error={error?.fields.defaultMethod} hint="You can choose another canner for each batch.">
+        <SelectField
+          label="The canner you use most"
+          value={answers.defaultMethod}
+          onChange={(e) => setAnswers({ ...answers, defaultMethod: e.target.value as Method })}
+          error={error?.fields.defaultMethod}
+          hint="You can choose another canner for each batch."
+        >
           {PROCESSING_METHODS.map((method) => (
             <option key={method} value={method}>
               {METHOD_NAMES[method]}
@@ -90,7 +100,13 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
         />
       </fieldset>
 
-      <SelectField label="First day of your week" value={answers.weekStartsOn} onChange={set('weekStartsOn')} error={error?.fields.weekStartsOn} hint="The week board starts on it.">
+      <SelectField
+        label="First day of your week"
+        value={answers.weekStartsOn}
+        onChange={set('weekStartsOn')}
+        error={error?.fields.weekStartsOn}
+        hint="The week board starts on it."
+      >
         {WEEKDAY_NAMES.map((name, day) => (
           <option key={name} value={day}>
             {name}
@@ -98,16 +114,7 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
         ))}
       </SelectField>
 
-      {error && !Object.keys(error.fields).length && (
-        <Notice tone="past" role="alert">
-          {error.message}
-        </Notice>
-      )}
-      <div>
-        <Button type="submit" disabled={update.isPending}>
-          {update.isPending ? 'Saving…' : 'Confirm and continue'}
-        </Button>
-      </div>
+      <FormFooter error={error} pending={update.isPending} submitLabel="Confirm and continue" pendingLabel="Saving…" />
     </form>
   );
 }

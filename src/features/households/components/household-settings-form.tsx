@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import type { HouseholdView } from '@shared/schemas/households';
-import { Button } from '@/components/ui/button';
+import { FormFooter } from '@/components/ui/form-footer';
 import { SelectField, TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useUpdateHousehold } from '../api/update-household';
 import { TimeZoneField } from './time-zone-field';
 
@@ -17,18 +17,30 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
     bestQualityMonths: String(household.bestQualityMonths),
   });
   const error = update.error instanceof ApiError ? update.error : null;
+  const formRef = useFocusFirstError(error);
 
   function submit(event: FormEvent) {
     event.preventDefault();
     const altitude = form.altitudeFt.trim() === '' ? Number.NaN : Number(form.altitudeFt.replaceAll(',', ''));
     const months = form.bestQualityMonths.trim() === '' ? Number.NaN : Number(form.bestQualityMonths);
-    update.mutate({ name: form.name, altitudeFt: altitude, unitSystem: form.unitSystem, timeZone: form.timeZone, bestQualityMonths: months });
+    update.mutate({
+      name: form.name,
+      altitudeFt: altitude,
+      unitSystem: form.unitSystem,
+      timeZone: form.timeZone,
+      bestQualityMonths: months,
+    });
   }
 
   return (
-    <form onSubmit={submit} className="grid gap-4 sm:grid-cols-2" noValidate>
+    <form ref={formRef} onSubmit={submit} className="grid gap-4 sm:grid-cols-2" noValidate>
       <fieldset disabled={!canEdit} className="contents">
-        <TextField label="Household name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={error?.fields.name} />
+        <TextField
+          label="Household name"
+          value={form.name}
+          onChange={(e) => setForm({ ...form, name: e.target.value })}
+          error={error?.fields.name}
+        />
         <TextField
           label="Altitude (feet above sea level)"
           inputMode="numeric"
@@ -37,11 +49,19 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
           error={error?.fields.altitudeFt}
           hint="Processing times and pressures depend on it. Your local extension service can tell you yours."
         />
-        <SelectField label="Units" value={form.unitSystem} onChange={(e) => setForm({ ...form, unitSystem: e.target.value as HouseholdView['unitSystem'] })}>
+        <SelectField
+          label="Units"
+          value={form.unitSystem}
+          onChange={(e) => setForm({ ...form, unitSystem: e.target.value as HouseholdView['unitSystem'] })}
+        >
           <option value="us">US customary (cups, pints, quarts)</option>
           <option value="metric">Metric (milliliters, liters)</option>
         </SelectField>
-        <TimeZoneField value={form.timeZone} onChange={(e) => setForm({ ...form, timeZone: e.target.value })} error={error?.fields.timeZone} />
+        <TimeZoneField
+          value={form.timeZone}
+          onChange={(e) => setForm({ ...form, timeZone: e.target.value })}
+          error={error?.fields.timeZone}
+        />
         <TextField
           label="Best quality by: months after canning"
           inputMode="numeric"
@@ -52,21 +72,18 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
         />
       </fieldset>
       {canEdit && (
-        <div className="flex items-center gap-3 sm:col-span-2">
-          <Button type="submit" disabled={update.isPending}>
-            {update.isPending ? 'Saving…' : 'Save settings'}
-          </Button>
-          <span role="status" className="text-ink-muted">
-            {update.isSuccess && !update.isPending ? 'Saved.' : ''}
-          </span>
-        </div>
-      )}
-      {error && !Object.keys(error.fields).length && (
-        <div className="sm:col-span-2">
-          <Notice tone="past" role="alert">
-            {error.message}
-          </Notice>
-        </div>
+        <FormFooter
+          className="sm:col-span-2"
+          error={error}
+          pending={update.isPending}
+          submitLabel="Save settings"
+          pendingLabel="Saving…"
+          secondary={
+            <span role="status" className="text-ink-muted">
+              {update.isSuccess && !update.isPending ? 'Saved.' : ''}
+            </span>
+          }
+        />
       )}
     </form>
   );

@@ -7,10 +7,11 @@ import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
 import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
-import { Button } from '@/components/ui/button';
+import { FormFooter } from '@/components/ui/form-footer';
 import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useCreateBatch } from '../api/create-batch';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
@@ -36,6 +37,7 @@ export function NewBatchForm({
   const create = useCreateBatch(household.id);
   const [notes, setNotes] = useState('');
   const error = create.error instanceof ApiError ? create.error : null;
+  const formRef = useFocusFirstError(error);
 
   const productId = params.get('productId') ?? '';
   const forProduct = recipes.filter((r) => r.productId === productId);
@@ -77,13 +79,26 @@ export function NewBatchForm({
     event.preventDefault();
     if (!recipe || !plan?.allowed) return;
     create.mutate(
-      { productId, recipeId: recipe.id, cannedOn, jarSize, jarsFilled: filled, jarsSealed: seals === 'to-check' ? filled : sealed, method, notes, seals },
-      { onSuccess: (created) => navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') })) },
+      {
+        productId,
+        recipeId: recipe.id,
+        cannedOn,
+        jarSize,
+        jarsFilled: filled,
+        jarsSealed: seals === 'to-check' ? filled : sealed,
+        method,
+        notes,
+        seals,
+      },
+      {
+        onSuccess: (created) =>
+          navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') })),
+      },
     );
   }
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-[3fr_2fr] lg:items-start">
+    <form ref={formRef} onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-[3fr_2fr] lg:items-start">
       <div className="flex flex-col gap-4">
         <SelectField
           label="What did you make?"
@@ -215,17 +230,14 @@ export function NewBatchForm({
       </div>
       {/* After the plan on a phone, so the cook reads it before saving. */}
       <div className="flex flex-col gap-4">
-        {error && !Object.keys(error.fields).length && (
-          <Notice tone="past" role="alert">
-            {error.message}
-          </Notice>
-        )}
-        <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" disabled={!plan?.allowed || create.isPending}>
-            {create.isPending ? 'Saving…' : 'Save the batch'}
-          </Button>
-          {plan && !plan.allowed && <span className="font-bold text-past">Not allowed: see the plan.</span>}
-        </div>
+        <FormFooter
+          error={error}
+          pending={create.isPending}
+          disabled={!plan?.allowed}
+          submitLabel="Save the batch"
+          pendingLabel="Saving…"
+          secondary={plan && !plan.allowed && <span className="font-bold text-past">Not allowed: see the plan.</span>}
+        />
       </div>
     </form>
   );

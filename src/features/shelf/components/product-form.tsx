@@ -2,11 +2,20 @@ import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { defaultUseWithinDays, JAR_SIZES, PRODUCT_KINDS, type JarSize, type ProductKind } from '@shared/domain';
 import type { ProductView } from '@shared/schemas/products';
-import { HEAT_LEVELS, heatWords, jarSizeWords, PRODUCT_COLOUR_NAMES, PRODUCT_COLOURS, PRODUCT_KIND_NAMES, type ProductColour, USE_WITHIN_DEFAULT_HINT } from '@shared/words';
-import { Button } from '@/components/ui/button';
+import {
+  HEAT_LEVELS,
+  heatWords,
+  jarSizeWords,
+  PRODUCT_COLOUR_NAMES,
+  PRODUCT_COLOURS,
+  PRODUCT_KIND_NAMES,
+  type ProductColour,
+  USE_WITHIN_DEFAULT_HINT,
+} from '@shared/words';
+import { FormFooter } from '@/components/ui/form-footer';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useSaveProduct } from '../api/save-product';
 import { numberFrom } from '../number-from';
 import { ColourDot } from './colour-dot';
@@ -30,6 +39,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
     notes: product?.notes ?? '',
   });
   const error = save.error instanceof ApiError ? save.error : null;
+  const formRef = useFocusFirstError(error);
 
   function submit(event: FormEvent) {
     event.preventDefault();
@@ -51,26 +61,53 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
   }
 
   const toggleMonth = (month: number) =>
-    setForm({ ...form, harvestMonths: form.harvestMonths.includes(month) ? form.harvestMonths.filter((m) => m !== month) : [...form.harvestMonths, month].sort((a, b) => a - b) });
+    setForm({
+      ...form,
+      harvestMonths: form.harvestMonths.includes(month)
+        ? form.harvestMonths.filter((m) => m !== month)
+        : [...form.harvestMonths, month].sort((a, b) => a - b),
+    });
 
   return (
-    <form onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2">
-      <TextField label="Name" value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} error={error?.fields.name} />
-      <SelectField label="Kind" value={form.kind} onChange={(e) => setForm({ ...form, kind: e.target.value as ProductKind })} error={error?.fields.kind}>
+    <form ref={formRef} onSubmit={submit} noValidate className="grid gap-4 sm:grid-cols-2">
+      <TextField
+        label="Name"
+        value={form.name}
+        onChange={(e) => setForm({ ...form, name: e.target.value })}
+        error={error?.fields.name}
+      />
+      <SelectField
+        label="Kind"
+        value={form.kind}
+        onChange={(e) => setForm({ ...form, kind: e.target.value as ProductKind })}
+        error={error?.fields.kind}
+      >
         {PRODUCT_KINDS.map((kind) => (
           <option key={kind} value={kind}>
             {PRODUCT_KIND_NAMES[kind]}
           </option>
         ))}
       </SelectField>
-      <SelectField label="Heat" value={form.heat} onChange={(e) => setForm({ ...form, heat: e.target.value })} error={error?.fields.heat}>
+      <SelectField
+        label="Heat"
+        value={form.heat}
+        onChange={(e) => setForm({ ...form, heat: e.target.value })}
+        error={error?.fields.heat}
+      >
         {HEAT_LEVELS.map((heat) => (
           <option key={heat} value={heat}>
             {heatWords(heat, true)}
           </option>
         ))}
       </SelectField>
-      <TextField label="Keep at least (jars)" inputMode="numeric" value={form.minJars} onChange={(e) => setForm({ ...form, minJars: e.target.value })} error={error?.fields.minJars} hint="Restock suggests a batch below this." />
+      <TextField
+        label="Keep at least (jars)"
+        inputMode="numeric"
+        value={form.minJars}
+        onChange={(e) => setForm({ ...form, minJars: e.target.value })}
+        error={error?.fields.minJars}
+        hint="Restock suggests a batch below this."
+      />
       <TextField
         label="Once opened, use within (days)"
         inputMode="numeric"
@@ -80,7 +117,11 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         error={error?.fields.useWithinDays}
         hint={`Leave empty for the default for ${PRODUCT_KIND_NAMES[form.kind].toLowerCase()}: ${defaultUseWithinDays(form.kind)} days. ${USE_WITHIN_DEFAULT_HINT}`}
       />
-      <SelectField label="Usual jar size" value={form.jarSize} onChange={(e) => setForm({ ...form, jarSize: e.target.value as JarSize })}>
+      <SelectField
+        label="Usual jar size"
+        value={form.jarSize}
+        onChange={(e) => setForm({ ...form, jarSize: e.target.value as JarSize })}
+      >
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
             {jarSizeWords(size)}
@@ -91,8 +132,16 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         <legend className="font-bold">Harvest months</legend>
         <div className="mt-1 grid grid-cols-4 gap-2 sm:grid-cols-6 lg:grid-cols-12">
           {MONTHS.map((name, index) => (
-            <label key={name} className="flex min-h-11 items-center gap-2 rounded-lg border border-line bg-surface px-2">
-              <input type="checkbox" className="h-5 w-5 accent-action" checked={form.harvestMonths.includes(index + 1)} onChange={() => toggleMonth(index + 1)} />
+            <label
+              key={name}
+              className="flex min-h-11 items-center gap-2 rounded-lg border border-line bg-surface px-2"
+            >
+              <input
+                type="checkbox"
+                className="h-5 w-5 accent-action"
+                checked={form.harvestMonths.includes(index + 1)}
+                onChange={() => toggleMonth(index + 1)}
+              />
               {name}
             </label>
           ))}
@@ -102,30 +151,44 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         <legend className="font-bold">Color on the shelf</legend>
         <div className="mt-1 flex flex-wrap gap-2">
           {PRODUCT_COLOURS.map((colour) => (
-            <label key={colour} className="flex min-h-11 items-center gap-2 rounded-lg border border-line bg-surface px-3">
-              <input type="radio" name="colour" className="h-5 w-5 accent-action" checked={form.colour === colour} onChange={() => setForm({ ...form, colour })} />
+            <label
+              key={colour}
+              className="flex min-h-11 items-center gap-2 rounded-lg border border-line bg-surface px-3"
+            >
+              <input
+                type="radio"
+                name="colour"
+                className="h-5 w-5 accent-action"
+                checked={form.colour === colour}
+                onChange={() => setForm({ ...form, colour })}
+              />
               <ColourDot colour={colour} />
               {PRODUCT_COLOUR_NAMES[colour]}
             </label>
           ))}
         </div>
       </fieldset>
-      <CheckboxField label="A household favorite" hint="Favorites get restock suggestions before they run out." checked={form.favourite} onChange={(e) => setForm({ ...form, favourite: e.target.checked })} />
+      <CheckboxField
+        label="A household favorite"
+        hint="Favorites get restock suggestions before they run out."
+        checked={form.favourite}
+        onChange={(e) => setForm({ ...form, favourite: e.target.checked })}
+      />
       <div className="sm:col-span-2">
-        <TextAreaField label="Notes" value={form.notes} onChange={(e) => setForm({ ...form, notes: e.target.value })} error={error?.fields.notes} />
+        <TextAreaField
+          label="Notes"
+          value={form.notes}
+          onChange={(e) => setForm({ ...form, notes: e.target.value })}
+          error={error?.fields.notes}
+        />
       </div>
-      {error && !Object.keys(error.fields).length && (
-        <div className="sm:col-span-2">
-          <Notice tone="past" role="alert">
-            {error.message}
-          </Notice>
-        </div>
-      )}
-      <div className="sm:col-span-2">
-        <Button type="submit" disabled={save.isPending}>
-          {save.isPending ? 'Saving…' : product ? 'Save the product' : 'Add the product'}
-        </Button>
-      </div>
+      <FormFooter
+        className="sm:col-span-2"
+        error={error}
+        pending={save.isPending}
+        submitLabel={product ? 'Save the product' : 'Add the product'}
+        pendingLabel="Saving…"
+      />
     </form>
   );
 }

@@ -16,8 +16,9 @@ import type { RecipeView } from '@shared/schemas/recipes';
 import { INGREDIENT_ROLE_NAMES, INGREDIENT_UNIT_NAMES, jarSizeWords, METHOD_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
-import { FormFooter, useFocusFirstError } from '@/components/ui/form-footer';
+import { FormFooter } from '@/components/ui/form-footer';
 import { ApiError } from '@/lib/api-client';
+import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useRecipes } from '../api/get-recipes';
 import { useSaveRecipe } from '../api/save-recipe';
 import { numberFrom } from '../number-from';
@@ -83,7 +84,7 @@ export function RecipeForm({
   const [ingredients, setIngredients] = useState<IngredientDraft[]>(() => ingredientDrafts(recipe));
   const [copiedFrom, setCopiedFrom] = useState('');
   const error = save.error instanceof ApiError ? save.error : null;
-  const formRef = useFocusFirstError<HTMLFormElement>(error);
+  const formRef = useFocusFirstError(error);
 
   function startFromCopy(recipeId: string, household: RecipeView[]) {
     setCopiedFrom(recipeId);
