@@ -35,7 +35,7 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   const { sequelize } = database;
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
-  const passport = configurePassport();
+  const passport = configurePassport(config.bcryptCost);
   const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config, logger), photos: photoStorageFor(config), readCache: createReadCache(), log: logger };
 
   const app = express();

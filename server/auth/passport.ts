@@ -18,12 +18,13 @@ declare global {
 
 export const BAD_CREDENTIALS = 'That e-mail and password do not match an account. Check both and try again.';
 
-export function configurePassport() {
+/** `bcryptCost`: the cost new accounts are hashed at, which an unknown address's comparison takes as long as. */
+export function configurePassport(bcryptCost: number) {
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, async (email, password, done) => {
       try {
         const user = await User.findOne({ where: { email: email.trim().toLowerCase() } });
-        const ok = await checkPassword(password, user?.passwordHash);
+        const ok = await checkPassword(password, user?.passwordHash, bcryptCost);
         done(null, ok && user ? user.toPublic() : false, { message: BAD_CREDENTIALS });
       } catch (error) {
         done(error);

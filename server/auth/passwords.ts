@@ -60,11 +60,16 @@ function run(job: Job): Promise<string | boolean> {
 
 export const hashPassword = (password: string, cost: number) => run({ op: 'hash', password, cost }) as Promise<string>;
 
-// Compared against when the e-mail is unknown, so both failures take the same time; made once, in a worker.
-let unknownUserHash: Promise<string> | undefined;
+// Compared against when the e-mail is unknown, so both failures take the same time: made once per cost, in a worker,
+// at the cost new accounts are hashed with.
+const unknownUserHashes = new Map<number, Promise<string>>();
+function unknownUserHash(cost: number) {
+  if (!unknownUserHashes.has(cost)) unknownUserHashes.set(cost, hashPassword('no such user in larderly', cost));
+  return unknownUserHashes.get(cost)!;
+}
 
-export async function checkPassword(password: string, hash: string | undefined) {
-  const matches = (await run({ op: 'compare', password, hash: hash ?? (await (unknownUserHash ??= hashPassword('no such user in larderly', 12))) })) as boolean;
+export async function checkPassword(password: string, hash: string | undefined, cost: number) {
+  const matches = (await run({ op: 'compare', password, hash: hash ?? (await unknownUserHash(cost)) })) as boolean;
   return hash !== undefined && matches;
 }
 
