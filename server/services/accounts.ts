@@ -32,6 +32,8 @@ export async function requestSignUp(
       'internal',
       'E-mail is not set up on this server, so sign-up cannot send its link. Ask whoever runs Larderly to set SMTP_HOST.',
     );
+  // Expired links go on every sign-up, either way, so the table holds only the last day's.
+  await SignUpRequest.destroy({ where: { expiresAt: { [Op.lte]: clock.now() } } });
   const owner = await User.findOne({ where: { email: input.email } });
   let request: SignUpRequest | null = null;
   let mail;

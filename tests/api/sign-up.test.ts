@@ -78,14 +78,12 @@ describe('a fresh address confirms by the mailed link', () => {
     const agent = request.agent(ctx.app);
     expect(
       (
-        await agent
-          .post('/api/auth/signup')
-          .send({
-            email: email.toUpperCase(),
-            password: 'long enough password',
-            name: 'Rosa',
-            householdName: 'Rosa’s Pantry',
-          })
+        await agent.post('/api/auth/signup').send({
+          email: email.toUpperCase(),
+          password: 'long enough password',
+          name: 'Rosa',
+          householdName: 'Rosa’s Pantry',
+        })
       ).status,
     ).toBe(202);
     expect((await agent.get('/api/auth/me')).status).toBe(401);
@@ -130,6 +128,21 @@ describe('a fresh address confirms by the mailed link', () => {
           .send({})
       ).status,
     ).toBe(410);
+  });
+
+  it('refuses a link past its 24 hours, and the next sign-up clears the expired one away', async () => {
+    const email = freshAddress();
+    await ctx.request.post('/api/auth/signup').send(attempt(email));
+    const token = signUpTokenFor(standIns.mail, email);
+    await ctx.sequelize.query(
+      `UPDATE sign_up_requests SET expires_at = now() - interval '1 minute' WHERE email = '${email}'`,
+    );
+    expect((await request(ctx.app).post(`/api/auth/signup/confirm/${token}`).send({})).status).toBe(410);
+    await ctx.request.post('/api/auth/signup').send(attempt(freshAddress()));
+    const [left] = await ctx.sequelize.query(
+      `SELECT count(*)::int AS n FROM sign_up_requests WHERE email = '${email}'`,
+    );
+    expect((left as { n: number }[])[0].n).toBe(0);
   });
 
   it('accepts a name and household name at their limits (shared/schemas/limits.ts)', async () => {
