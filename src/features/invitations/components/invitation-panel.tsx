@@ -4,7 +4,7 @@ import { dateWords } from '@shared/words';
 import { ROLE_LABELS, ROLES, type Role } from '@shared/roles';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
+import { FormFooter } from '@/components/ui/form-footer';
 import { ApiError } from '@/lib/api-client';
 import { useCaughtMail } from '../api/caught-mail';
 import { useInvitations, useInvite, useRevokeInvitation } from '../api/invitations';
@@ -29,7 +29,15 @@ export function InvitationPanel({ hid }: { hid: string }) {
     <div className="flex flex-col gap-4">
       <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
         <div className="grid gap-3 sm:grid-cols-[2fr_1fr]">
-          <TextField label="Invite by e-mail" type="email" autoComplete="off" value={email} onChange={(e) => setEmail(e.target.value)} error={error?.fields.email} required />
+          <TextField
+            label="Invite by e-mail"
+            type="email"
+            autoComplete="off"
+            value={email}
+            onChange={(e) => setEmail(e.target.value)}
+            error={error?.fields.email}
+            required
+          />
           <SelectField label="As" value={role} onChange={(e) => setRole(e.target.value as Role)}>
             {ROLES.map((r) => (
               <option key={r} value={r}>
@@ -38,19 +46,12 @@ export function InvitationPanel({ hid }: { hid: string }) {
             ))}
           </SelectField>
         </div>
-        {error && !error.fields.email && (
-          <Notice tone="past" role="alert">
-            {error.message}
-          </Notice>
-        )}
         {invite.isSuccess && (
           <p role="status" className="text-sm text-action">
             Invitation sent to {invite.data.invitation.email}. The link works once, for 7 days.
           </p>
         )}
-        <Button type="submit" disabled={invite.isPending} className="self-start">
-          {invite.isPending ? 'Sending…' : 'Send invitation'}
-        </Button>
+        <FormFooter error={error} pending={invite.isPending} submitLabel="Send invitation" pendingLabel="Sending…" />
       </form>
       <div>
         <h3 className="font-bold">Waiting to join</h3>
@@ -64,7 +65,12 @@ export function InvitationPanel({ hid }: { hid: string }) {
                   {ROLE_LABELS[invitation.role]} · link valid until {dateWords(invitation.expiresAt.slice(0, 10))}
                 </span>
               </span>
-              <Button variant="quiet" disabled={revoke.isPending} onClick={() => revoke.mutate(invitation.id)} aria-label={`Withdraw the invitation to ${invitation.email}`}>
+              <Button
+                variant="quiet"
+                disabled={revoke.isPending}
+                onClick={() => revoke.mutate(invitation.id)}
+                aria-label={`Withdraw the invitation to ${invitation.email}`}
+              >
                 Withdraw
               </Button>
             </li>
