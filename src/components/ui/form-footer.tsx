@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { Button } from './button';
 import { Notice } from './notice';
 
@@ -6,6 +7,8 @@ import { Notice } from './notice';
 export interface FormFooterError {
   message: string;
   fields?: Record<string, string>;
+  /** the way forward the server named with its refusal (an ApiError's action), shown as a link */
+  action?: { href: string; label: string };
 }
 
 /**
@@ -41,6 +44,14 @@ export function FormFooter({
           {marked > 0
             ? `${error.message} Check the ${marked === 1 ? 'marked field' : `${marked} marked fields`}.`
             : error.message}
+          {error.action && (
+            <>
+              {' '}
+              <Link to={error.action.href} className="text-action underline underline-offset-2">
+                {error.action.label}
+              </Link>
+            </>
+          )}
         </Notice>
       )}
       <div className="flex flex-wrap items-center gap-3">
