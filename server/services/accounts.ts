@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { Op, UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
+import { paths } from '../../shared/paths';
 import type { MeResponse, SignupBody, SignUpSent } from '../../shared/schemas/auth';
 import { hashPassword } from '../auth/passwords';
 import type { AppContext } from '../context';
@@ -41,7 +42,7 @@ export async function requestSignUp(
     mail = signUpWithTakenAddressMail({
       to: owner.email,
       name: owner.name,
-      signInLink: `${ctx.config.publicOrigin}/sign-in`,
+      signInLink: `${ctx.config.publicOrigin}${paths.signIn()}`,
     });
   } else {
     const token = randomBytes(32).toString('base64url');
@@ -58,7 +59,7 @@ export async function requestSignUp(
       to: input.email,
       name: input.name,
       householdName: input.householdName,
-      link: `${ctx.config.publicOrigin}/sign-up/confirm/${token}`,
+      link: `${ctx.config.publicOrigin}${paths.signUpConfirm(token)}`,
       expiresOn: expiresAt.toISOString().slice(0, 10),
     });
   }

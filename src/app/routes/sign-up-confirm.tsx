@@ -3,7 +3,7 @@ import { Link, useNavigate, useParams } from 'react-router-dom';
 import { AuthLayout } from '@/app/layouts/auth-layout';
 import { Notice } from '@/components/ui/notice';
 import { useConfirmSignUp } from '@/features/auth/api/signup';
-import { paths } from '@/lib/paths';
+import { paths } from '@shared/paths';
 
 /** /sign-up/confirm/:token, the link in the sign-up e-mail: makes the household, then its first-run questions. */
 export function SignUpConfirmRoute() {
