@@ -1,6 +1,7 @@
 import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
 import { browserForFile, PHONE_TOUCH, screenshot, signIn } from '../support/browser';
+import { signUpInBrowser } from '../support/sign-up-page';
 
 const baseURL = inject('baseURL');
 const browser = browserForFile();
@@ -39,13 +40,11 @@ async function showDay(page: Page, date: string) {
 }
 
 async function signUp(page: Page, name: string) {
-  await page.goto(`${baseURL}/sign-up`);
-  await page.getByLabel('Your name').fill(name);
-  await page.getByLabel('E-mail').fill(`${name.toLowerCase()}-${Date.now()}@example.test`);
-  await page.getByLabel('Password').fill('a shelf of apricot jam');
-  await page.getByLabel('Household name').fill(`${name}’s kitchen`);
-  await page.getByRole('button', { name: 'Create household' }).click();
-  await page.waitForURL(/\/h\/[0-9a-f-]{36}\/setup/);
+  await signUpInBrowser(
+    page,
+    { baseURL, standInsDir: inject('standInsDir') },
+    { name, email: `${name.toLowerCase()}-${Date.now()}@example.test`, password: 'a shelf of apricot jam', householdName: `${name}’s kitchen` },
+  );
 }
 
 describe('flag reasons on a phone', () => {

@@ -118,7 +118,7 @@ describe('the week board by tapping, on a phone', () => {
 
     // The menu, by keyboard: Thursday dinner, without any drag.
     await page.getByLabel('Search meals').fill('tacos');
-    const putOn = page.getByRole('button', { name: 'Put Black bean tacos on…' });
+    const putOn = page.getByRole('button', { name: 'Put on… Black bean tacos' });
     await putOn.focus();
     await page.keyboard.press('Enter');
     const menu = page.getByRole('group', { name: 'Put Black bean tacos on…' });

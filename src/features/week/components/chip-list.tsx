@@ -45,13 +45,12 @@ export function ChipList<T>({
             <button
               type="button"
               id={putOnButtonId(source)}
-              aria-label={`Put ${sourceLabel(source)} on…`}
               aria-expanded={open}
               aria-controls={open ? menuId : undefined}
               onClick={() => (open ? closeMenu() : setMenuFor(source))}
               className={`min-h-11 shrink-0 rounded-lg border px-2 text-xs font-bold text-action hover:bg-action-soft ${open ? 'border-action bg-action-soft' : 'border-line bg-surface'}`}
             >
-              Put on…
+              Put on…<span className="sr-only"> {sourceLabel(source)}</span>
             </button>
           );
           return (
