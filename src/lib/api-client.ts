@@ -20,13 +20,21 @@ function actionOf(details: unknown): ApiError['action'] {
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
 
-async function request<T>(method: Method, url: string, body?: unknown): Promise<T> {
+export interface RequestOptions {
+  /** Sent as the Idempotency-Key header: the server applies a change sent again under the same key only once. */
+  idempotencyKey?: string;
+}
+
+async function request<T>(method: Method, url: string, body?: unknown, options: RequestOptions = {}): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined && !(body instanceof FormData)) headers['Content-Type'] = 'application/json';
+  if (options.idempotencyKey) headers['Idempotency-Key'] = options.idempotencyKey;
   let response: Response;
   try {
     response = await fetch(`/api${url}`, {
       method,
       credentials: 'same-origin',
-      headers: body === undefined || body instanceof FormData ? { Accept: 'application/json' } : { 'Content-Type': 'application/json', Accept: 'application/json' },
+      headers,
       body: body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
     });
   } catch {
@@ -43,8 +51,8 @@ async function request<T>(method: Method, url: string, body?: unknown): Promise<
 
 export const api = {
   get: <T>(url: string) => request<T>('GET', url),
-  post: <T>(url: string, body?: unknown) => request<T>('POST', url, body ?? {}),
-  patch: <T>(url: string, body: unknown) => request<T>('PATCH', url, body),
+  post: <T>(url: string, body?: unknown, options?: RequestOptions) => request<T>('POST', url, body ?? {}, options),
+  patch: <T>(url: string, body: unknown, options?: RequestOptions) => request<T>('PATCH', url, body, options),
   put: <T>(url: string, body: unknown) => request<T>('PUT', url, body),
   delete: <T = void>(url: string, body?: unknown) => request<T>('DELETE', url, body),
 };

@@ -16,12 +16,17 @@ function onSignedOut(error: Error) {
   queueMicrotask(() => queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.me[0] }));
 }
 
+/** What was read is kept this long, in memory and saved for offline use (src/lib/persisted-cache.ts). */
+export const KEPT_FOR_MS = 7 * 24 * 60 * 60 * 1000;
+
 export const queryClient: QueryClient = new QueryClient({
   queryCache: new QueryCache({ onError: onSignedOut }),
   mutationCache: new MutationCache({ onError: onSignedOut }),
   defaultOptions: {
     queries: {
       staleTime: 30_000,
+      // As long as the saved copy, so a screen read days ago still opens offline.
+      gcTime: KEPT_FOR_MS,
       retry: (failureCount, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failureCount < 2,
     },
   },

@@ -58,4 +58,11 @@ export const notificationKeys = {
 /** The signed-in person's own calendar address for a household, and the household's meal times. */
 export const calendarKeys = { feed: (hid: string) => ['households', hid, 'calendar-feed'] as const };
 
+/** Changes that may be made offline: kept, sent in order when the network returns, and resumed after a reload. */
+export const changeKeys = {
+  all: ['change'] as const,
+  jarAction: ['change', 'jar-action'] as const,
+  todoTick: ['change', 'todo-tick'] as const,
+};
+
 export const publicConfigKeys = { config: ['public-config'] as const };

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import { Navigate, NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { SCREENS } from '@/app/screens';
 import { Brand } from '@/components/ui/brand';
@@ -8,6 +8,9 @@ import { SetupBanner } from '@/features/households/components/setup-banner';
 import { HouseholdSwitcher } from '@/features/households/components/household-switcher';
 import { rememberHousehold, useCurrentHousehold } from '@/features/households/use-current-household';
 import { paths } from '@shared/paths';
+
+// Not needed to draw the first screen, so it loads just after it.
+const OfflineBanner = lazy(() => import('./offline-banner').then((module) => ({ default: module.OfflineBanner })));
 
 const linkClass = ({ isActive }: { isActive: boolean }) =>
   `flex min-h-11 items-center gap-3 rounded-lg px-3 font-bold ${isActive ? 'bg-action text-white' : 'text-ink hover:bg-sunken'}`;
@@ -63,6 +66,9 @@ export function AppLayout() {
           </div>
         </header>
         <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-5 sm:px-6">
+          <Suspense fallback={null}>
+            <OfflineBanner />
+          </Suspense>
           <SetupBanner hid={hid} />
           <Outlet />
         </main>

@@ -64,8 +64,8 @@ export function FridgeRoute() {
               canPlan={can(role, 'cook')}
               jar={jar}
               unsealedAdvice={fridge.data?.unsealedAdvice ?? ''}
-              busy={closeJar.isPending}
-              onClose={(action) => closeJar.mutate({ jarId: jar.jarId, action })}
+              busy={closeJar.isSending}
+              onClose={(action) => closeJar.close({ id: jar.jarId, code: jar.code, productName: jar.productName }, action)}
             />
           ))}
         </ul>

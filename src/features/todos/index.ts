@@ -1,3 +1,3 @@
 // What other features may use of the to-do list.
 export { refreshPlanning } from './api/refresh-planning';
-export { useTickTodo, useUpdateTodo } from './api/update-todo';
+export { todoTickDefaults, useTickTodo, useUpdateTodo } from './api/update-todo';

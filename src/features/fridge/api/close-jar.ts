@@ -1,24 +1,30 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
+import type { JarActed } from '@shared/schemas/batches';
 import type { FridgeView } from '@shared/schemas/fridge';
-import { actOnJar, useOfferJarUndo } from '@/features/shelf';
+import { jarChange, jarChangeDefaults, useOfferJarUndo, type ActedJar, type JarChange } from '@/features/shelf';
 import { useOptimisticCache } from '@/lib/optimistic';
-import { fridgeKeys, householdKeys } from '@/lib/query-keys';
+import { changeKeys, fridgeKeys, householdKeys } from '@/lib/query-keys';
 
 export type ClosingAction = 'finish' | 'discard';
 
-/** The shelf's own jar actions; the fridge only offers finishing and discarding. */
+/** The shelf's own jar actions; the fridge only offers finishing and discarding. Offline they wait their turn. */
 export function useCloseJar(hid: string) {
-  const queryClient = useQueryClient();
   const offerUndo = useOfferJarUndo(hid);
-  const optimistic = useOptimisticCache<FridgeView, { jarId: string }>({
+  const optimistic = useOptimisticCache<FridgeView, JarChange>({
     key: fridgeKeys.fridge(hid),
+    hold: householdKeys.all(hid),
     edit: (fridge, { jarId }) => ({ ...fridge, jars: fridge.jars.filter((j) => j.jarId !== jarId) }),
-    // The shelf, Today and the week all count this jar, so every household query refreshes.
-    refresh: () => queryClient.invalidateQueries({ queryKey: householdKeys.all(hid) }),
   });
-  return useMutation({
-    mutationFn: ({ jarId, action }: { jarId: string; action: ClosingAction }) => actOnJar(hid, jarId, action),
+  // The shelf, Today and the week all count this jar: the queue refetches every household query once it is sent.
+  const mutation = useMutation<JarActed, Error, JarChange, { previous?: FridgeView }>({
+    mutationKey: changeKeys.jarAction,
+    ...jarChangeDefaults,
     ...optimistic,
     onSuccess: (acted, { action }) => offerUndo(action, acted),
   });
+  return {
+    ...mutation,
+    isSending: mutation.isPending && !mutation.isPaused,
+    close: (jar: ActedJar, action: ClosingAction) => mutation.mutate(jarChange(hid, jar, action)),
+  };
 }

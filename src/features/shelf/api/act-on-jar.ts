@@ -1,21 +1,62 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { JarAction, JarActed } from '@shared/schemas/batches';
+import { useMutation } from '@tanstack/react-query';
+import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
-import { householdKeys, shelfKeys } from '@/lib/query-keys';
+import { useOptimisticCache } from '@/lib/optimistic';
+import { changeKeys, householdKeys, shelfKeys } from '@/lib/query-keys';
+import { newChangeKey, queuedChangeDefaults, type QueuedChange } from '@/lib/queued-changes';
 import { useOfferJarUndo } from './undo-jar-change';
 
-export const actOnJar = (hid: string, jarId: string, action: JarAction) => api.post<JarActed>(`/households/${hid}/jars/${jarId}/${action}`);
+export const actOnJar = (hid: string, jarId: string, action: JarAction, idempotencyKey?: string) =>
+  api.post<JarActed>(`/households/${hid}/jars/${jarId}/${action}`, {}, { idempotencyKey });
 
+/** Opening, finishing or discarding one jar: made at once, sent when the network allows. */
+export interface JarChange extends QueuedChange {
+  jarId: string;
+  action: JarAction;
+}
+
+export const jarChangeDefaults = queuedChangeDefaults((change: JarChange) =>
+  actOnJar(change.hid, change.jarId, change.action, change.key),
+);
+
+const DOING: Record<JarAction, string> = { open: 'Opening', finish: 'Finishing', discard: 'Discarding' };
+
+/** The jar the person acts on, as the words of a refusal name it. */
+export type ActedJar = Pick<JarView, 'id' | 'code' | 'productName'>;
+
+export function jarChange(hid: string, jar: ActedJar, action: JarAction): JarChange {
+  return {
+    hid,
+    key: newChangeKey(),
+    jarId: jar.id,
+    action,
+    what: `${DOING[action]} jar ${jar.code} of ${jar.productName}`,
+  };
+}
+
+/** One tap on a jar. The shelf shows it at once; offline it waits and is sent in order when the network returns. */
 export function useActOnJar(hid: string) {
-  const queryClient = useQueryClient();
   const offerUndo = useOfferJarUndo(hid);
-  return useMutation({
-    mutationFn: ({ jarId, action }: { jarId: string; action: JarAction }) => actOnJar(hid, jarId, action),
-    onSuccess: (acted, { action }) => offerUndo(action, acted),
-    // Also after a 409: someone else moved the jar, so every view of it should catch up.
-    onSettled: () => {
-      void queryClient.invalidateQueries({ queryKey: householdKeys.all(hid) });
-      void queryClient.invalidateQueries({ queryKey: shelfKeys.jarsByCode() });
-    },
+  const optimistic = useOptimisticCache<JarView[], JarChange>({
+    key: shelfKeys.jars(hid, 'on-hand'),
+    hold: householdKeys.all(hid),
+    edit: (jars, { jarId, action }) =>
+      action === 'open'
+        ? jars.map((jar) => (jar.id === jarId ? { ...jar, state: 'opened' as const } : jar))
+        : jars.filter((jar) => jar.id !== jarId),
   });
+  // Sending, retrying and refetching afterwards (also after a 409: someone else moved the jar) are the queue's.
+  const mutation = useMutation<JarActed, Error, JarChange, { previous?: JarView[] }>({
+    mutationKey: changeKeys.jarAction,
+    ...jarChangeDefaults,
+    ...optimistic,
+    onSuccess: (acted, { action }) => offerUndo(action, acted),
+  });
+  return {
+    ...mutation,
+    /** Busy only while a change is on its way; one waiting for the network leaves the buttons free. */
+    isSending: mutation.isPending && !mutation.isPaused,
+    act: (jar: ActedJar, action: JarAction, options?: { onSuccess?: () => void }) =>
+      mutation.mutate(jarChange(hid, jar, action), options),
+  };
 }

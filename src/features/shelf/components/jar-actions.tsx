@@ -44,11 +44,11 @@ export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: Ja
             key={action}
             variant={action === 'discard' && size === 'large' ? 'danger' : 'secondary'}
             className={`${size === 'large' ? 'min-h-14 px-6 text-lg' : ''} ${action === 'discard' && size !== 'large' ? 'text-past' : ''}`}
-            disabled={act.isPending}
+            disabled={act.isSending}
             aria-label={`${label}: jar ${jar.code}`}
             onClick={() => {
               if (action === 'discard' && !window.confirm(`Discard jar ${jar.code} of ${jar.productName}? When in doubt, throw it out.`)) return;
-              act.mutate({ jarId: jar.id, action });
+              act.act(jar, action);
             }}
           >
             {label}

@@ -1,3 +1,4 @@
+import { onlineManager } from '@tanstack/react-query';
 import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { JarView, OpeningAdvice } from '@shared/schemas/batches';
@@ -32,7 +33,11 @@ export function OpenJarButton({ hid, jar, label, ariaLabel, variant = 'primary',
 
   function open(which: OpenableJar) {
     setAdvice(null);
-    act.mutate({ jarId: which.id, action: 'open' }, { onSuccess: () => onOpened(which) });
+    // Offline the change waits for the network, but what to check before eating is shown at once.
+    if (!onlineManager.isOnline()) {
+      act.act(which, 'open');
+      onOpened(which);
+    } else act.act(which, 'open', { onSuccess: () => onOpened(which) });
   }
 
   async function start() {
@@ -52,7 +57,7 @@ export function OpenJarButton({ hid, jar, label, ariaLabel, variant = 'primary',
   return (
     <div className="flex flex-col gap-2">
       {!advice && (
-        <Button variant={variant} className={className} disabled={checking || act.isPending} aria-label={ariaLabel} onClick={() => void start()}>
+        <Button variant={variant} className={className} disabled={checking || act.isSending} aria-label={ariaLabel} onClick={() => void start()}>
           {label}
         </Button>
       )}

@@ -17,8 +17,8 @@ export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
               type="checkbox"
               className="h-6 w-6 accent-action"
               aria-label={`Done: ${todo.title}`}
-              disabled={tick.isPending}
-              onChange={() => tick.mutate({ id: todo.id, title: todo.title, done: true })}
+              disabled={tick.isSending}
+              onChange={() => tick.tick(todo, true)}
             />
           </label>
           <Link to={paths.todo(hid, todo.kind === 'restock' ? todo.id : null)} className="flex min-h-11 flex-1 flex-col justify-center hover:underline">

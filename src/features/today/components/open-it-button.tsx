@@ -18,9 +18,9 @@ export default function OpenItButton({
     <span className="flex flex-col items-end gap-1">
       <Button
         variant="secondary"
-        disabled={act.isPending}
+        disabled={act.isSending}
         aria-label={`Open it: jar ${code} of ${productName}`}
-        onClick={() => act.mutate({ jarId, action: 'open' })}
+        onClick={() => act.act({ id: jarId, code, productName }, 'open')}
       >
         Open it
       </Button>

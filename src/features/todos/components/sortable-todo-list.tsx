@@ -52,7 +52,7 @@ export function SortableTodoList({ hid, filter, todos, canMove, today, onOpen }:
               todo={todo}
               canMove={canMove}
               today={today}
-              onTick={(done) => tick.mutate({ id: todo.id, title: todo.title, done })}
+              onTick={(done) => tick.tick(todo, done)}
               onOpen={() => onOpen(todo.id)}
             />
           ))}

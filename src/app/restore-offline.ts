@@ -1,0 +1,18 @@
+import { jarChangeDefaults } from '@/features/shelf';
+import { todoTickDefaults } from '@/features/todos';
+import { watchQueuedChanges } from '@/lib/offline-state';
+import { restoreCache } from '@/lib/persisted-cache';
+import { queryClient } from '@/lib/query-client';
+import { changeKeys } from '@/lib/query-keys';
+
+/**
+ * A change restored from IndexedDB keeps only its key and variables: the defaults registered under its key say how
+ * to send it, so they are registered before the restore. The watcher refetches once the queue has drained and says
+ * why a change that waited was refused.
+ */
+export async function restoreOffline() {
+  queryClient.setMutationDefaults(changeKeys.jarAction, jarChangeDefaults);
+  queryClient.setMutationDefaults(changeKeys.todoTick, todoTickDefaults);
+  watchQueuedChanges(queryClient);
+  if (typeof indexedDB !== 'undefined') await restoreCache(queryClient);
+}
