@@ -25,7 +25,7 @@ function withBoundaries(routes: RouteObject[]): RouteObject[] {
   return routes.map((route) => ({ ErrorBoundary: RouteError, ...route, ...(route.children ? { children: withBoundaries(route.children) } : {}) }) as RouteObject);
 }
 
-const router = createBrowserRouter(withBoundaries([
+const routes = withBoundaries([
   {
     // The root: a new page starts at its top (and Back returns to where it was), and the first load shows a quiet placeholder.
     Component: RootLayout,
@@ -80,8 +80,13 @@ const router = createBrowserRouter(withBoundaries([
       { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found')).NotFoundRoute }) },
     ],
   },
-]));
+]);
+
+// Made at the first render, not on import: its loaders start at once, and must find the cache restored and
+// TanStack Query told whether there is a network (src/app/offline.ts).
+let router: ReturnType<typeof createBrowserRouter> | undefined;
 
 export function AppRouter() {
+  router ??= createBrowserRouter(routes);
   return <RouterProvider router={router} />;
 }

@@ -41,6 +41,8 @@ export async function restoreCache(queryClient: QueryClient) {
     },
   };
   await persistQueryClientRestore(options);
+  // Shown at once, but read again as each screen opens: a new page load should not trust a copy from last time.
+  await queryClient.invalidateQueries({ refetchType: 'none' });
   let person = personOf(queryClient);
   queryClient.getQueryCache().subscribe((event) => {
     if (event.query.queryHash !== JSON.stringify(authKeys.me) || event.type !== 'updated') return;

@@ -35,7 +35,10 @@ export function AppLayout() {
 
   return (
     <div className="min-h-dvh lg:grid lg:grid-cols-[16rem_1fr]">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-surface focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-surface focus:p-2"
+      >
         Skip to content
       </a>
       <aside className="hidden border-r border-line bg-surface/70 lg:sticky lg:top-0 lg:flex lg:h-dvh lg:flex-col lg:gap-6 lg:overflow-y-auto lg:p-4">
@@ -60,7 +63,11 @@ export function AppLayout() {
           </div>
           <div className="flex items-center gap-2">
             <span className="hidden text-ink-muted sm:inline">{me.user.name}</span>
-            <button type="button" onClick={signOut} className="min-h-11 rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+            <button
+              type="button"
+              onClick={signOut}
+              className="min-h-11 rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+            >
               Sign out
             </button>
           </div>
@@ -93,7 +100,9 @@ export function AppLayout() {
               <NavLink
                 to={href(screen.path)}
                 end={screen.path === ''}
-                className={({ isActive }) => `flex min-h-14 flex-col items-center justify-center text-xs font-bold ${isActive ? 'text-action' : 'text-ink-muted'}`}
+                className={({ isActive }) =>
+                  `flex min-h-14 flex-col items-center justify-center text-xs font-bold ${isActive ? 'text-action' : 'text-ink-muted'}`
+                }
               >
                 <ScreenIcon name={screen.icon} />
                 {screen.label}

@@ -1,4 +1,5 @@
-import { useMutation } from '@tanstack/react-query';
+import { onlineManager, useMutation } from '@tanstack/react-query';
+import { useState } from 'react';
 import type { JarActed } from '@shared/schemas/batches';
 import type { FridgeView } from '@shared/schemas/fridge';
 import { jarChange, jarChangeDefaults, useOfferJarUndo, type ActedJar, type JarChange } from '@/features/shelf';
@@ -22,9 +23,15 @@ export function useCloseJar(hid: string) {
     ...optimistic,
     onSuccess: (acted, { action }) => offerUndo(action, acted),
   });
+  // A refusal of a change made offline is told by the offline banner alone.
+  const [madeOffline, setMadeOffline] = useState(false);
   return {
     ...mutation,
+    error: madeOffline ? null : mutation.error,
     isSending: mutation.isPending && !mutation.isPaused,
-    close: (jar: ActedJar, action: ClosingAction) => mutation.mutate(jarChange(hid, jar, action)),
+    close: (jar: ActedJar, action: ClosingAction) => {
+      setMadeOffline(!onlineManager.isOnline());
+      mutation.mutate(jarChange(hid, jar, action));
+    },
   };
 }

@@ -1,4 +1,5 @@
-import { useMutation } from '@tanstack/react-query';
+import { onlineManager, useMutation } from '@tanstack/react-query';
+import { useState } from 'react';
 import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
 import { useOptimisticCache } from '@/lib/optimistic';
@@ -52,11 +53,16 @@ export function useActOnJar(hid: string) {
     ...optimistic,
     onSuccess: (acted, { action }) => offerUndo(action, acted),
   });
+  // A refusal of a change made offline is told by the offline banner, which stays when this button goes.
+  const [madeOffline, setMadeOffline] = useState(false);
   return {
     ...mutation,
+    error: madeOffline ? null : mutation.error,
     /** Busy only while a change is on its way; one waiting for the network leaves the buttons free. */
     isSending: mutation.isPending && !mutation.isPaused,
-    act: (jar: ActedJar, action: JarAction, options?: { onSuccess?: () => void }) =>
-      mutation.mutate(jarChange(hid, jar, action), options),
+    act: (jar: ActedJar, action: JarAction, options?: { onSuccess?: () => void }) => {
+      setMadeOffline(!onlineManager.isOnline());
+      mutation.mutate(jarChange(hid, jar, action), options);
+    },
   };
 }
