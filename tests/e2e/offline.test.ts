@@ -206,6 +206,12 @@ describe('with no network', () => {
       ).status(),
     ).toBe(200);
     expect((await keeper.request.delete(`${baseURL}/api/households/${hid}/todos/${todoId}`)).status()).toBe(204);
+
+    // Signing out forgets what was saved: the next person on this phone does not see this household offline.
+    expect(await savedCache(page)).toContain(jar.code);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await expect.poll(async () => (await savedCache(page)).includes(jar.code), { timeout: 10_000 }).toBe(false);
     await page.close();
     await keeper.close();
   }, 180_000);
