@@ -1,6 +1,6 @@
 // Loaded on its own before the first render (see src/app/offline.ts), so the first screen's chunk stays small.
 import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
-import type { QueryClient } from '@tanstack/react-query';
+import { onlineManager, type QueryClient } from '@tanstack/react-query';
 import { persistQueryClientRestore, persistQueryClientSubscribe } from '@tanstack/react-query-persist-client';
 import { createStore, del, get, set } from 'idb-keyval';
 import type { MeResponse } from '@shared/schemas/auth';
@@ -25,8 +25,9 @@ const personOf = (queryClient: QueryClient) =>
   queryClient.getQueryData<MeResponse | null>(authKeys.me)?.user.id ?? null;
 
 /**
- * Puts back what the person last read and the changes still waiting, keeps both saved as they change, and forgets
- * them when the person signs out or another signs in: one person's shelf is not the next one's to see.
+ * Puts back the changes still waiting and, when the app starts without a network, what the person last read; keeps
+ * both saved as they change, and forgets them when the person signs out or another signs in: one person's shelf is
+ * not the next one's to see.
  */
 export async function restoreCache(queryClient: QueryClient) {
   const options = {
@@ -41,7 +42,10 @@ export async function restoreCache(queryClient: QueryClient) {
     },
   };
   await persistQueryClientRestore(options);
-  // Shown at once, but read again as each screen opens: a new page load should not trust a copy from last time.
+  // With a network, a new page load reads afresh (the saved copy would show an older state first); the session
+  // is kept to open without a flash, and read again too.
+  if (onlineManager.isOnline())
+    queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.me[0] });
   await queryClient.invalidateQueries({ refetchType: 'none' });
   let person = personOf(queryClient);
   queryClient.getQueryCache().subscribe((event) => {
