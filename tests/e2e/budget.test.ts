@@ -5,8 +5,10 @@ import { describe, expect, it } from 'vitest';
 
 // Set from the build measured on 2026-12-02 (sign-in 114.2 KB, Today 118.6 KB gzip) with about 10% to grow;
 // Today later rose to 133.6 KB and was trimmed back to 129.5 KB (date words through Intl instead of date-fns's
-// locale tables), so its budget is 130 again, under a 150 KB ceiling for a phone on a slow connection.
-const BUDGET_KB = { signIn: 125, today: 130 };
+// locale tables), so its budget is 130 again, under a 150 KB ceiling for a phone on a slow connection. The offline
+// queue's change defaults (jar actions, to-do ticks) must be registered before the first render so that changes
+// waiting from an earlier visit resume: with them Today measured 130.4 KB, and its budget is 131.
+const BUDGET_KB = { signIn: 125, today: 131 };
 
 interface Chunk {
   file: string;
