@@ -16,7 +16,8 @@ module.exports = {
     {
       name: 'shared-imports-neither-side',
       severity: 'error',
-      comment: 'shared/ is imported by the client and the server alike, so it may import neither of them (nor tests, scripts or stand-ins).',
+      comment:
+        'shared/ is imported by the client and the server alike, so it may import neither of them (nor tests, scripts or stand-ins).',
       from: { path: '^shared/' },
       to: { path: '^(src|server|dev|tests|scripts)/' },
     },
@@ -32,7 +33,8 @@ module.exports = {
     {
       name: 'features-import-no-app',
       severity: 'error',
-      comment: 'src/app composes the features (router, layouts, screens); a feature importing src/app runs the arrow backwards.',
+      comment:
+        'src/app composes the features (router, layouts, screens); a feature importing src/app runs the arrow backwards.',
       from: { path: '^src/features/' },
       to: { path: '^src/app/' },
     },
@@ -108,7 +110,8 @@ module.exports = {
     {
       name: 'no-circular',
       severity: 'error',
-      comment: 'A cycle means two modules are one idea in two files, or one of them depends on the wrong side: break it.',
+      comment:
+        'A cycle means two modules are one idea in two files, or one of them depends on the wrong side: break it.',
       from: {},
       // A cycle through type imports alone is erased at build time and harmless.
       to: { circular: true, viaOnly: { dependencyTypesNot: ['type-only'] } },

@@ -12,7 +12,9 @@ function preloadFonts(): Plugin {
     transformIndexHtml: {
       order: 'post',
       handler(_html, ctx) {
-        const fonts = Object.keys(ctx.bundle ?? {}).filter((file) => /karla-latin-(400|700)-normal.*\.woff2$/.test(file));
+        const fonts = Object.keys(ctx.bundle ?? {}).filter((file) =>
+          /karla-latin-(400|700)-normal.*\.woff2$/.test(file),
+        );
         return fonts.map((file) => ({
           tag: 'link',
           attrs: { rel: 'preload', href: `/${file}`, as: 'font', type: 'font/woff2', crossorigin: '' },
@@ -25,7 +27,16 @@ function preloadFonts(): Plugin {
 
 export default defineConfig({
   // Brotli and gzip copies of every file over 1 KB beside it, which the server sends to browsers that accept them.
-  plugins: [react(), tailwindcss(), preloadFonts(), compression({ algorithms: ['brotliCompress', 'gzip'], threshold: 1024, exclude: [/\.(br|gz|woff2?|png|jpe?g|webp)$/] })],
+  plugins: [
+    react(),
+    tailwindcss(),
+    preloadFonts(),
+    compression({
+      algorithms: ['brotliCompress', 'gzip'],
+      threshold: 1024,
+      exclude: [/\.(br|gz|woff2?|png|jpe?g|webp)$/],
+    }),
+  ],
   resolve: {
     alias: {
       '@': fileURLToPath(new URL('./src', import.meta.url)),
@@ -39,12 +50,17 @@ export default defineConfig({
     sourcemap: false,
     // The service worker is a second entry, written to /sw.js so its scope is the whole app.
     rolldownOptions: {
-      input: { main: fileURLToPath(new URL('./index.html', import.meta.url)), sw: fileURLToPath(new URL('./src/sw.ts', import.meta.url)) },
+      input: {
+        main: fileURLToPath(new URL('./index.html', import.meta.url)),
+        sw: fileURLToPath(new URL('./src/sw.ts', import.meta.url)),
+      },
       output: {
         entryFileNames: (chunk) => (chunk.name === 'sw' ? 'sw.js' : 'assets/[name]-[hash].js'),
         // TanStack Query in one chunk: the offline restore (a chunk of its own) shares its classes with the first
         // screen, which otherwise splits them into several small files that compress worse.
-        codeSplitting: { groups: [{ name: 'query', test: /node_modules[\\/]@tanstack[\\/](query-core|react-query)[\\/]/ }] },
+        codeSplitting: {
+          groups: [{ name: 'query', test: /node_modules[\\/]@tanstack[\\/](query-core|react-query)[\\/]/ }],
+        },
       },
     },
   },

@@ -39,7 +39,9 @@ for (let i = 0; i < packages.length; i += AT_ONCE) {
   batch.forEach((pkg, j) => notes[j] && deprecated.push(`${pkg.name}@${pkg.version}: ${notes[j]}`));
 }
 if (deprecated.length > 0) {
-  process.stderr.write(`larderly: ${deprecated.length} deprecated production package(s):\n  ${deprecated.join('\n  ')}\n`);
+  process.stderr.write(
+    `larderly: ${deprecated.length} deprecated production package(s):\n  ${deprecated.join('\n  ')}\n`,
+  );
   process.exit(1);
 }
 log(`none of the ${packages.length} production package(s) is deprecated`);

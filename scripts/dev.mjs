@@ -22,7 +22,9 @@ const api = startChild(process.execPath, ['--import', 'tsx', '--watch', 'server/
     ...standIns?.env,
   },
 });
-const vite = startChild(process.execPath, ['node_modules/vite/bin/vite.js'], { env: { ...process.env, API_PORT: apiPort } });
+const vite = startChild(process.execPath, ['node_modules/vite/bin/vite.js'], {
+  env: { ...process.env, API_PORT: apiPort },
+});
 const stop = () => {
   api.kill('SIGTERM');
   vite.kill('SIGTERM');

@@ -36,7 +36,8 @@ try {
   setUpSchema(databaseUrl, { seedDemo: !production });
   // A client built ahead (STATIC_DIR with an index.html) is served as it is.
   const staticDir = process.env.STATIC_DIR;
-  if (staticDir && existsSync(path.join(projectDir, staticDir, 'index.html'))) log(`serving the client already built in ${staticDir}`);
+  if (staticDir && existsSync(path.join(projectDir, staticDir, 'index.html')))
+    log(`serving the client already built in ${staticDir}`);
   else {
     log('building the client');
     buildClient(staticDir);
@@ -102,8 +103,13 @@ function printWelcome(url, production, withStandIns) {
     }
     lines.push('');
   }
-  if (withStandIns) lines.push('  E-mail, push and batch photos go to local stand-ins; a keeper reads the caught mail from Household, Invitations.', '');
-  if (!production && !process.env.LOG_LEVEL) lines.push('  Only warnings are logged here; `LOG_LEVEL=info npm start` logs one JSON line per request.', '');
+  if (withStandIns)
+    lines.push(
+      '  E-mail, push and batch photos go to local stand-ins; a keeper reads the caught mail from Household, Invitations.',
+      '',
+    );
+  if (!production && !process.env.LOG_LEVEL)
+    lines.push('  Only warnings are logged here; `LOG_LEVEL=info npm start` logs one JSON line per request.', '');
   lines.push('  Press Ctrl-C (or send this process SIGTERM) to stop the server, the stand-ins and the database.', '');
   process.stdout.write(lines.join('\n') + '\n');
 }

@@ -8,9 +8,16 @@ import { ensureChromium, ensureNginx, ensureNodeModules, log, projectDir, run } 
 import { startCluster } from './lib/postgres.mjs';
 
 const givenArgs = process.argv.slice(2);
-const projects = givenArgs.flatMap((arg, i) => (arg === '--project' ? [givenArgs[i + 1]] : arg.startsWith('--project=') ? [arg.slice(10)] : []));
+const projects = givenArgs.flatMap((arg, i) =>
+  arg === '--project' ? [givenArgs[i + 1]] : arg.startsWith('--project=') ? [arg.slice(10)] : [],
+);
 // `code` is ours, not a vitest project: take it out of what vitest is given.
-const extraArgs = givenArgs.filter((arg, i) => arg !== '--project=code' && !(arg === 'code' && givenArgs[i - 1] === '--project') && !(arg === '--project' && givenArgs[i + 1] === 'code'));
+const extraArgs = givenArgs.filter(
+  (arg, i) =>
+    arg !== '--project=code' &&
+    !(arg === 'code' && givenArgs[i - 1] === '--project') &&
+    !(arg === '--project' && givenArgs[i + 1] === 'code'),
+);
 const wantsCodeRules = projects.length === 0 || projects.includes('code');
 const vitestProjects = projects.filter((name) => name !== 'code');
 const wantsVitest = projects.length === 0 || vitestProjects.length > 0;
@@ -52,17 +59,28 @@ try {
   mkdirSync(resultsDir, { recursive: true });
   const resultsFile = path.join(resultsDir, `vitest-${process.pid}.json`);
   try {
-    run(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${resultsFile}`, ...extraArgs], {
-      cwd: projectDir,
-      env: {
-        ...process.env,
-        ...objectStore.env,
-        NODE_ENV: 'test',
-        LARDERLY_TEST_ADMIN_URL: cluster.url('postgres'),
-        LARDERLY_TEST_TEMPLATE: template,
-        LARDERLY_TEST_CLIENT_DIR: clientDir,
+    run(
+      process.execPath,
+      [
+        'node_modules/vitest/vitest.mjs',
+        'run',
+        '--reporter=default',
+        '--reporter=json',
+        `--outputFile.json=${resultsFile}`,
+        ...extraArgs,
+      ],
+      {
+        cwd: projectDir,
+        env: {
+          ...process.env,
+          ...objectStore.env,
+          NODE_ENV: 'test',
+          LARDERLY_TEST_ADMIN_URL: cluster.url('postgres'),
+          LARDERLY_TEST_TEMPLATE: template,
+          LARDERLY_TEST_CLIENT_DIR: clientDir,
+        },
       },
-    });
+    );
     exitCode = 0;
   } catch {
     exitCode = 1;
@@ -88,12 +106,17 @@ function printSummary(resultsFile) {
   rmSync(resultsFile);
   const skipped = results.numPendingTests + results.numTodoTests;
   if (results.numFailedTests > 0 || results.numFailedTestSuites > 0) exitCode = 1;
-  const brokenFiles = results.testResults.filter((s) => s.status === 'failed' && s.assertionResults.every((a) => a.status !== 'failed'));
-  for (const file of brokenFiles) log(`could not run ${path.relative(projectDir, file.name)}: ${file.message?.split('\n')[0] ?? ''}`);
+  const brokenFiles = results.testResults.filter(
+    (s) => s.status === 'failed' && s.assertionResults.every((a) => a.status !== 'failed'),
+  );
+  for (const file of brokenFiles)
+    log(`could not run ${path.relative(projectDir, file.name)}: ${file.message?.split('\n')[0] ?? ''}`);
   // A run that failed before any test could (a set-up error) still counts as a failure.
   const failed = Math.max(results.numFailedTests + brokenFiles.length, exitCode === 0 ? 0 : 1) + codeRules.failed;
   if (codeRules.failed) exitCode = 1;
-  process.stdout.write(`\n${results.numPassedTests + codeRules.passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`);
+  process.stdout.write(
+    `\n${results.numPassedTests + codeRules.passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}\n`,
+  );
 }
 
 /** The lint and the import rules, each one check of the suite; a failure prints each broken rule's reason. */

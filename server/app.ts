@@ -36,7 +36,15 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   const sessionPool = new pg.Pool({ connectionString: config.databaseUrl, max: 5, connectionTimeoutMillis: 3_000 });
   sessionPool.on('error', () => {});
   const passport = configurePassport(config.bcryptCost);
-  const ctx: AppContext = { config, sequelize, mailer: createMailer(config), push: createPushSender(config, logger), photos: photoStorageFor(config), readCache: createReadCache(), log: logger };
+  const ctx: AppContext = {
+    config,
+    sequelize,
+    mailer: createMailer(config),
+    push: createPushSender(config, logger),
+    photos: photoStorageFor(config),
+    readCache: createReadCache(),
+    log: logger,
+  };
 
   const app = express();
   app.disable('x-powered-by');
@@ -59,7 +67,8 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
           connectSrc: ["'self'"],
           workerSrc: ["'self'"],
           frameAncestors: ["'none'"],
-          upgradeInsecureRequests: config.isProduction && config.appOrigins.some((o) => o.startsWith('https:')) ? [] : null,
+          upgradeInsecureRequests:
+            config.isProduction && config.appOrigins.some((o) => o.startsWith('https:')) ? [] : null,
         },
       },
       strictTransportSecurity: config.appOrigins.some((o) => o.startsWith('https:')),
@@ -82,7 +91,13 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
     res.set('Cache-Control', 'private, no-store');
     next();
   });
-  api.use(sessionMiddleware({ pool: sessionPool, secret: config.sessionSecret, secure: config.appOrigins.some((o) => o.startsWith('https:')) }));
+  api.use(
+    sessionMiddleware({
+      pool: sessionPool,
+      secret: config.sessionSecret,
+      secure: config.appOrigins.some((o) => o.startsWith('https:')),
+    }),
+  );
   api.use(passport.session());
   api.use(keepSessionAlive);
   const authLimit = options.authLimit ?? config.authRateLimit;

@@ -22,19 +22,33 @@ const schema = z.object({
   SMTP_FROM: z.string().default('Larderly <reminders@larderly.test>'),
   VAPID_PUBLIC_KEY: z.string().optional(),
   VAPID_PRIVATE_KEY: z.string().optional(),
-  VAPID_SUBJECT: z.string().regex(/^(mailto:|https:)/, 'VAPID_SUBJECT must start with mailto: or https:').optional(),
+  VAPID_SUBJECT: z
+    .string()
+    .regex(/^(mailto:|https:)/, 'VAPID_SUBJECT must start with mailto: or https:')
+    .optional(),
   PUSH_CA_FILE: z.string().optional(),
-  PUSH_LOCAL_ORIGIN: z.union([z.literal(''), z.url({ protocol: /^https$/, error: 'PUSH_LOCAL_ORIGIN must be an https:// origin' })]).optional(),
+  PUSH_LOCAL_ORIGIN: z
+    .union([z.literal(''), z.url({ protocol: /^https$/, error: 'PUSH_LOCAL_ORIGIN must be an https:// origin' })])
+    .optional(),
   MAIL_CATCHER_DIR: z.string().optional(),
   S3_ENDPOINT: z.string().url({ message: 'S3_ENDPOINT must be an http:// or https:// URL' }).optional(),
-  S3_BUCKET: z.string().regex(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, 'S3_BUCKET must be a bucket name: 3-63 lower-case letters, digits, dots and hyphens').optional(),
+  S3_BUCKET: z
+    .string()
+    .regex(
+      /^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/,
+      'S3_BUCKET must be a bucket name: 3-63 lower-case letters, digits, dots and hyphens',
+    )
+    .optional(),
   S3_REGION: z.string().min(1).default('us-east-1'),
   S3_ACCESS_KEY_ID: z.string().min(1).optional(),
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('false'),
   SHUTDOWN_TIMEOUT_MS: z.coerce.number().int().min(1_000).max(120_000).default(10_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
-  INSTANCE_NAME: z.string().regex(/^[\w.-]{1,64}$/, 'INSTANCE_NAME may hold letters, digits, dots, hyphens and underscores (64 at most)').optional(),
+  INSTANCE_NAME: z
+    .string()
+    .regex(/^[\w.-]{1,64}$/, 'INSTANCE_NAME may hold letters, digits, dots, hyphens and underscores (64 at most)')
+    .optional(),
 });
 
 export type Config = ReturnType<typeof loadConfig>;
@@ -51,13 +65,19 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     throw new Error('Larderly cannot start: set SESSION_SECRET (32+ random characters) in production.');
   }
   if (Boolean(c.VAPID_PUBLIC_KEY) !== Boolean(c.VAPID_PRIVATE_KEY)) {
-    throw new Error('Larderly cannot start: set both VAPID_PUBLIC_KEY and VAPID_PRIVATE_KEY, or neither (then keys are generated and kept).');
+    throw new Error(
+      'Larderly cannot start: set both VAPID_PUBLIC_KEY and VAPID_PRIVATE_KEY, or neither (then keys are generated and kept).',
+    );
   }
   if (Boolean(c.S3_ACCESS_KEY_ID) !== Boolean(c.S3_SECRET_ACCESS_KEY)) {
-    throw new Error('Larderly cannot start: set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither (then the SDK looks for credentials itself).');
+    throw new Error(
+      'Larderly cannot start: set both S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY, or neither (then the SDK looks for credentials itself).',
+    );
   }
   if (!c.S3_BUCKET && (c.S3_ENDPOINT || c.S3_ACCESS_KEY_ID)) {
-    throw new Error('Larderly cannot start: S3 settings are given without S3_BUCKET; name the bucket the photos go to.');
+    throw new Error(
+      'Larderly cannot start: S3 settings are given without S3_BUCKET; name the bucket the photos go to.',
+    );
   }
   return {
     env: c.NODE_ENV,
@@ -66,7 +86,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     port: c.PORT,
     databaseUrl: c.DATABASE_URL,
     sessionSecret: c.SESSION_SECRET ?? 'development-only-secret-not-for-production-use',
-    appOrigins: (c.APP_ORIGIN ?? '').split(',').map((o) => o.trim()).filter(Boolean),
+    appOrigins: (c.APP_ORIGIN ?? '')
+      .split(',')
+      .map((o) => o.trim())
+      .filter(Boolean),
     trustProxy: parseTrustProxy(c.TRUST_PROXY),
     dbPoolMax: c.DB_POOL_MAX,
     staticDir: c.STATIC_DIR,
@@ -82,7 +105,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
           endpoint: c.S3_ENDPOINT,
           region: c.S3_REGION,
           forcePathStyle: c.S3_FORCE_PATH_STYLE === 'true',
-          credentials: c.S3_ACCESS_KEY_ID && c.S3_SECRET_ACCESS_KEY ? { accessKeyId: c.S3_ACCESS_KEY_ID, secretAccessKey: c.S3_SECRET_ACCESS_KEY } : undefined,
+          credentials:
+            c.S3_ACCESS_KEY_ID && c.S3_SECRET_ACCESS_KEY
+              ? { accessKeyId: c.S3_ACCESS_KEY_ID, secretAccessKey: c.S3_SECRET_ACCESS_KEY }
+              : undefined,
         }
       : undefined,
     /** how long a stopping process finishes what it has in hand before it exits */

@@ -10,7 +10,10 @@ const database = acquireDatabase(config.databaseUrl, 2);
 try {
   const report = await movePhotosToStore(localDiskStorage(config.uploadDir), objectStorage(config.s3));
   console.log(`larderly: moved ${report.moved} photo(s) from ${config.uploadDir} to the bucket ${config.s3.bucket}`);
-  if (report.missing.length) console.log(`larderly: ${report.missing.length} batch photo(s) are not in ${config.uploadDir} (run this on the machine that has them): ${report.missing.join(', ')}`);
+  if (report.missing.length)
+    console.log(
+      `larderly: ${report.missing.length} batch photo(s) are not in ${config.uploadDir} (run this on the machine that has them): ${report.missing.join(', ')}`,
+    );
   for (const { batchId, reason } of report.refused) console.log(`larderly: batch ${batchId}: photo refused: ${reason}`);
   process.exitCode = report.refused.length ? 1 : 0;
 } finally {

@@ -4,7 +4,8 @@
 /** `?a=1&b=2` from the given values, leaving out the empty ones; '' when none is left. */
 function query(values: Record<string, string | number | null | undefined>): string {
   const search = new URLSearchParams();
-  for (const [name, value] of Object.entries(values)) if (value !== undefined && value !== null && value !== '') search.set(name, String(value));
+  for (const [name, value] of Object.entries(values))
+    if (value !== undefined && value !== null && value !== '') search.set(name, String(value));
   const text = search.toString();
   return text ? `?${text}` : '';
 }
@@ -38,7 +39,8 @@ export const paths = {
   shelf: (hid: string) => inHousehold(hid, 'shelf'),
   fridge: (hid: string) => inHousehold(hid, 'fridge'),
   batches: (hid: string) => inHousehold(hid, 'batches'),
-  newBatch: (hid: string, prefill: NewBatchPrefill = {}) => `${inHousehold(hid, 'batches/new')}${query({ ...prefill })}`,
+  newBatch: (hid: string, prefill: NewBatchPrefill = {}) =>
+    `${inHousehold(hid, 'batches/new')}${query({ ...prefill })}`,
   batch: (hid: string, batchId: string, extra: { saved?: boolean; todoId?: string | null } = {}) =>
     `${inHousehold(hid, `batches/${batchId}`)}${query({ saved: extra.saved ? 1 : undefined, todoId: extra.todoId })}`,
   batchLabels: (hid: string, batchId: string) => inHousehold(hid, `batches/${batchId}/labels`),

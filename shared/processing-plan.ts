@@ -1,5 +1,14 @@
 // The processing plan for a batch made from a recipe: the domain's plan, after checking the recipe has a tested time for it.
-import { afterProcessingSteps, cautionsFor, isPressureMethod, processingPlan, type AltitudeRow, type JarSize, type Method, type ProcessingPlan } from './domain';
+import {
+  afterProcessingSteps,
+  cautionsFor,
+  isPressureMethod,
+  processingPlan,
+  type AltitudeRow,
+  type JarSize,
+  type Method,
+  type ProcessingPlan,
+} from './domain';
 import { JAR_SIZE_NAMES } from './words';
 
 export interface PlanRecipe {
@@ -17,7 +26,15 @@ export interface ProcessingQuestion {
 }
 
 function refused(method: Method, reason: string): ProcessingPlan {
-  return { allowed: false, minutes: null, pressurePsi: null, reasons: [reason], cautions: cautionsFor(method), afterProcessing: afterProcessingSteps(method), altitudeAddMinutes: null };
+  return {
+    allowed: false,
+    minutes: null,
+    pressurePsi: null,
+    reasons: [reason],
+    cautions: cautionsFor(method),
+    afterProcessing: afterProcessingSteps(method),
+    altitudeAddMinutes: null,
+  };
 }
 
 /** Pressure times are tested for pressure canners only; boiling-water times serve the steam canner too (the domain checks its limits). */

@@ -11,12 +11,31 @@ export function ensureCertificate(dir) {
   mkdirSync(dir, { recursive: true });
   const result = spawnSync(
     'openssl',
-    ['req', '-x509', '-newkey', 'ec', '-pkeyopt', 'ec_paramgen_curve:prime256v1', '-nodes', '-days', '825', '-subj', '/CN=Larderly local push endpoint',
-      '-addext', 'subjectAltName=IP:127.0.0.1,DNS:localhost', '-keyout', keyFile, '-out', certFile],
+    [
+      'req',
+      '-x509',
+      '-newkey',
+      'ec',
+      '-pkeyopt',
+      'ec_paramgen_curve:prime256v1',
+      '-nodes',
+      '-days',
+      '825',
+      '-subj',
+      '/CN=Larderly local push endpoint',
+      '-addext',
+      'subjectAltName=IP:127.0.0.1,DNS:localhost',
+      '-keyout',
+      keyFile,
+      '-out',
+      certFile,
+    ],
     { encoding: 'utf8' },
   );
   if (result.error || result.status !== 0) {
-    throw new Error(`openssl could not make the local push endpoint's certificate (install it with: apt-get install -y openssl).\n${result.stderr ?? result.error}`);
+    throw new Error(
+      `openssl could not make the local push endpoint's certificate (install it with: apt-get install -y openssl).\n${result.stderr ?? result.error}`,
+    );
   }
   return { certFile, keyFile };
 }

@@ -12,7 +12,9 @@ const { certFile, keyFile } = ensureCertificate(dir);
 const mail = await startMailCatcher({ dir: path.join(dir, 'mail') });
 const push = await startPushEndpoint({ certFile, keyFile, dir: path.join(dir, 'push') });
 const objects = await startObjectStore(path.join(dir, 'object-store'));
-process.stdout.write(`${JSON.stringify({ smtpPort: mail.port, mailDir: path.join(dir, 'mail'), pushOrigin: push.origin, certFile, objectStore: { env: objects.env, directory: objects.directory } })}\n`);
+process.stdout.write(
+  `${JSON.stringify({ smtpPort: mail.port, mailDir: path.join(dir, 'mail'), pushOrigin: push.origin, certFile, objectStore: { env: objects.env, directory: objects.directory } })}\n`,
+);
 
 const stop = () => void Promise.all([mail.close(), push.close(), objects.close()]).then(() => process.exit(0));
 process.on('SIGTERM', stop);

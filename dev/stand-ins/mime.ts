@@ -39,7 +39,9 @@ function decodeBody(body: string, encoding = '') {
 /** RFC 2047 encoded words, as in a subject with non-ASCII letters. */
 export function decodeHeader(value: string) {
   return value.replace(/=\?([^?]+)\?([BQ])\?([^?]*)\?=\s*/gi, (_m, _charset, kind: string, data: string) =>
-    kind.toUpperCase() === 'B' ? Buffer.from(data, 'base64').toString('utf8') : decodeQuotedPrintable(data.replace(/_/g, ' ')),
+    kind.toUpperCase() === 'B'
+      ? Buffer.from(data, 'base64').toString('utf8')
+      : decodeQuotedPrintable(data.replace(/_/g, ' ')),
   );
 }
 

@@ -18,13 +18,20 @@ const LOCAL_KEY = 'S3RVER';
 export async function startObjectStore(directory, port = 0) {
   mkdirSync(directory, { recursive: true });
   const S3rver = createRequire(import.meta.url)('s3rver');
-  const store = new S3rver({ address: '127.0.0.1', port, silent: true, directory, configureBuckets: [{ name: LOCAL_BUCKET }] });
+  const store = new S3rver({
+    address: '127.0.0.1',
+    port,
+    silent: true,
+    directory,
+    configureBuckets: [{ name: LOCAL_BUCKET }],
+  });
   store.middleware.unshift(async (ctx, next) => {
     const signed = 'authorization' in ctx.headers || 'X-Amz-Algorithm' in ctx.query;
     if (!signed) {
       ctx.status = 403;
       ctx.type = 'application/xml';
-      ctx.body = '<?xml version="1.0" encoding="UTF-8"?>\n<Error><Code>AccessDenied</Code><Message>Access Denied</Message></Error>';
+      ctx.body =
+        '<?xml version="1.0" encoding="UTF-8"?>\n<Error><Code>AccessDenied</Code><Message>Access Denied</Message></Error>';
       return;
     }
     await next();
@@ -34,25 +41,35 @@ export async function startObjectStore(directory, port = 0) {
   return {
     endpoint,
     directory,
-    env: { S3_ENDPOINT: endpoint, S3_BUCKET: LOCAL_BUCKET, S3_REGION: 'us-east-1', S3_ACCESS_KEY_ID: LOCAL_KEY, S3_SECRET_ACCESS_KEY: LOCAL_KEY, S3_FORCE_PATH_STYLE: 'true' },
+    env: {
+      S3_ENDPOINT: endpoint,
+      S3_BUCKET: LOCAL_BUCKET,
+      S3_REGION: 'us-east-1',
+      S3_ACCESS_KEY_ID: LOCAL_KEY,
+      S3_SECRET_ACCESS_KEY: LOCAL_KEY,
+      S3_FORCE_PATH_STYLE: 'true',
+    },
     close: () => store.close(),
   };
 }
 
 /** The same store in a child process, for callers that block their own event loop (`npm test` waits on vitest). */
 export async function spawnObjectStore(directory) {
-  const child = spawn(process.execPath, [fileURLToPath(import.meta.url), directory], { stdio: ['ignore', 'pipe', 'inherit'] });
+  const child = spawn(process.execPath, [fileURLToPath(import.meta.url), directory], {
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
   const ready = await new Promise((resolve, reject) => {
     createInterface({ input: child.stdout }).once('line', (line) => resolve(JSON.parse(line)));
     child.once('exit', (code) => reject(new Error(`the local object store stopped while starting (exit ${code}).`)));
   });
   return {
     ...ready,
-    close: () => new Promise((resolve) => {
-      if (child.exitCode !== null) return resolve();
-      child.once('exit', resolve);
-      child.kill('SIGTERM');
-    }),
+    close: () =>
+      new Promise((resolve) => {
+        if (child.exitCode !== null) return resolve();
+        child.once('exit', resolve);
+        child.kill('SIGTERM');
+      }),
   };
 }
 

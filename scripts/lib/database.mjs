@@ -51,5 +51,7 @@ export function dropDatabase(cluster, name) {
 }
 
 export function buildClient(outDir = 'dist/client') {
-  run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--outDir', outDir], { cwd: projectDir });
+  run(process.execPath, ['node_modules/vite/bin/vite.js', 'build', '--logLevel', 'warn', '--outDir', outDir], {
+    cwd: projectDir,
+  });
 }

@@ -9,7 +9,9 @@ export function findPostgresBin() {
   if (process.env.PG_BIN) return process.env.PG_BIN;
   const root = '/usr/lib/postgresql';
   const versions = existsSync(root)
-    ? readdirSync(root).filter((v) => existsSync(path.join(root, v, 'bin', 'initdb'))).sort((a, b) => Number(b) - Number(a))
+    ? readdirSync(root)
+        .filter((v) => existsSync(path.join(root, v, 'bin', 'initdb')))
+        .sort((a, b) => Number(b) - Number(a))
     : [];
   return versions.length ? path.join(root, versions[0], 'bin') : null;
 }
@@ -52,8 +54,11 @@ function ensureOwnedFolder(dir, mode) {
 }
 
 function postgresUser() {
-  const line = readFileSync('/etc/passwd', 'utf8').split('\n').find((l) => l.startsWith('postgres:'));
-  if (!line) fail('There is no `postgres` system user. Install Debian\'s postgresql package: apt-get install -y postgresql');
+  const line = readFileSync('/etc/passwd', 'utf8')
+    .split('\n')
+    .find((l) => l.startsWith('postgres:'));
+  if (!line)
+    fail("There is no `postgres` system user. Install Debian's postgresql package: apt-get install -y postgresql");
   const [, , uid, gid] = line.split(':');
   return { uid: Number(uid), gid: Number(gid) };
 }
@@ -79,7 +84,17 @@ export function startCluster({ name = 'main', port = Number(process.env.PGPORT ?
     writeFileSync(pwFile, password, { mode: 0o600 });
     if (isRoot) chownSync(pwFile, postgresUser().uid, postgresUser().gid);
     try {
-      runAsOwner(bin, 'initdb', ['-D', dataDir, '-U', 'larderly', '--auth=scram-sha-256', `--pwfile=${pwFile}`, '-E', 'UTF8', '--locale=C.UTF-8']);
+      runAsOwner(bin, 'initdb', [
+        '-D',
+        dataDir,
+        '-U',
+        'larderly',
+        '--auth=scram-sha-256',
+        `--pwfile=${pwFile}`,
+        '-E',
+        'UTF8',
+        '--locale=C.UTF-8',
+      ]);
     } finally {
       spawnSync('rm', ['-f', pwFile]);
     }
@@ -90,7 +105,18 @@ export function startCluster({ name = 'main', port = Number(process.env.PGPORT ?
   if (status.status !== 0) {
     log(`starting PostgreSQL on 127.0.0.1:${port}`);
     const options = `-p ${port} -c listen_addresses=127.0.0.1 -k ${dataDir} -c max_connections=200 -c fsync=${process.env.PG_FSYNC ?? 'on'}`;
-    runAsOwner(bin, 'pg_ctl', ['-D', dataDir, '-l', path.join(dataDir, 'server.log'), '-o', options, '-w', '-t', '60', 'start']);
+    runAsOwner(bin, 'pg_ctl', [
+      '-D',
+      dataDir,
+      '-l',
+      path.join(dataDir, 'server.log'),
+      '-o',
+      options,
+      '-w',
+      '-t',
+      '60',
+      'start',
+    ]);
     startedHere = true;
   } else {
     log(`PostgreSQL already runs for this project (${dataDir})`);

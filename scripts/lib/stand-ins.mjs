@@ -16,11 +16,20 @@ export async function startStandIns(cluster) {
   const lines = createInterface({ input: child.stdout });
   const ready = await new Promise((resolve, reject) => {
     lines.once('line', (line) => resolve(JSON.parse(line)));
-    child.once('exit', (code) => reject(new Error(`the local mail catcher and push endpoint stopped while starting (exit ${code}).`)));
+    child.once('exit', (code) =>
+      reject(new Error(`the local mail catcher and push endpoint stopped while starting (exit ${code}).`)),
+    );
   });
   lines.on('line', (line) => process.stdout.write(`${line}\n`));
   // A mail server or bucket set in the environment wins over its stand-in.
-  const mail = process.env.SMTP_HOST ? {} : { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(ready.smtpPort), SMTP_SECURE: 'false', MAIL_CATCHER_DIR: ready.mailDir };
+  const mail = process.env.SMTP_HOST
+    ? {}
+    : {
+        SMTP_HOST: '127.0.0.1',
+        SMTP_PORT: String(ready.smtpPort),
+        SMTP_SECURE: 'false',
+        MAIL_CATCHER_DIR: ready.mailDir,
+      };
   const objects = process.env.S3_BUCKET ? {} : ready.objectStore.env;
   return {
     child,
@@ -28,7 +37,11 @@ export async function startStandIns(cluster) {
     describe: [
       process.env.SMTP_HOST ? null : `mail catcher on 127.0.0.1:${ready.smtpPort}`,
       `push endpoint at ${ready.pushOrigin}`,
-      process.env.S3_BUCKET ? null : `object store (S3) at ${ready.objectStore.env.S3_ENDPOINT}, bucket ${ready.objectStore.env.S3_BUCKET}, objects in ${ready.objectStore.directory}`,
-    ].filter(Boolean).join(', '),
+      process.env.S3_BUCKET
+        ? null
+        : `object store (S3) at ${ready.objectStore.env.S3_ENDPOINT}, bucket ${ready.objectStore.env.S3_BUCKET}, objects in ${ready.objectStore.directory}`,
+    ]
+      .filter(Boolean)
+      .join(', '),
   };
 }

@@ -35,7 +35,9 @@ export function commandExists(command) {
 /** Installs Debian packages when root; otherwise stops with the exact command to run. */
 export function ensureDebianPackages(packages, why) {
   if (!isRoot) {
-    fail(`${why} is missing. Install it with:\n\n  sudo apt-get install -y ${packages.join(' ')}\n\nthen run the command again.`);
+    fail(
+      `${why} is missing. Install it with:\n\n  sudo apt-get install -y ${packages.join(' ')}\n\nthen run the command again.`,
+    );
   }
   log(`installing ${packages.join(', ')} with apt-get (${why})`);
   run('apt-get', ['update', '-qq']);

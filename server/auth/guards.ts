@@ -38,8 +38,14 @@ async function membershipOf(sequelize: Sequelize, householdId: string, userId: s
     { replacements: { householdId, userId }, type: QueryTypes.SELECT },
   );
   if (!row) return null;
-  const attributes = Object.fromEntries(Object.entries(Household.getAttributes()).map(([name, column]) => [name, row[column.field ?? name]]));
-  return { role: row.member_role, dataVersion: String(row.data_version), household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }) };
+  const attributes = Object.fromEntries(
+    Object.entries(Household.getAttributes()).map(([name, column]) => [name, row[column.field ?? name]]),
+  );
+  return {
+    role: row.member_role,
+    dataVersion: String(row.data_version),
+    household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }),
+  };
 }
 
 /**

@@ -33,15 +33,18 @@ export function configurePassport(bcryptCost: number) {
   );
   passport.serializeUser((user, done) => done(null, user.id));
   // The session read already joined the person (see session.ts); only the columns a request needs.
-  passport.deserializeUser(async (req: IncomingMessage, id: string, done: (error: unknown, user?: Express.User | false) => void) => {
-    const joined = (req as IncomingMessage & { session?: { passport?: { [PERSON]?: SessionPerson } } }).session?.passport;
-    if (joined && PERSON in joined) return done(null, joined[PERSON]?.id === id ? joined[PERSON]! : false);
-    try {
-      const user = await User.findByPk(id, { attributes: ['id', 'email', 'name'] });
-      done(null, user ? user.toPublic() : false);
-    } catch (error) {
-      done(error);
-    }
-  });
+  passport.deserializeUser(
+    async (req: IncomingMessage, id: string, done: (error: unknown, user?: Express.User | false) => void) => {
+      const joined = (req as IncomingMessage & { session?: { passport?: { [PERSON]?: SessionPerson } } }).session
+        ?.passport;
+      if (joined && PERSON in joined) return done(null, joined[PERSON]?.id === id ? joined[PERSON]! : false);
+      try {
+        const user = await User.findByPk(id, { attributes: ['id', 'email', 'name'] });
+        done(null, user ? user.toPublic() : false);
+      } catch (error) {
+        done(error);
+      }
+    },
+  );
   return passport;
 }

@@ -20,7 +20,10 @@ const MIGRATION_LOCK = 7_420_001;
 /** Brings the schema up to date; safe to run on every start, from several processes at once. */
 export async function migrate(sequelize: Sequelize) {
   return sequelize.transaction(async (transaction) => {
-    await sequelize.query('SELECT pg_advisory_xact_lock(:lock)', { replacements: { lock: MIGRATION_LOCK }, transaction });
+    await sequelize.query('SELECT pg_advisory_xact_lock(:lock)', {
+      replacements: { lock: MIGRATION_LOCK },
+      transaction,
+    });
     const applied = await createMigrator(sequelize).up();
     return applied.map((m) => m.name);
   });

@@ -18,7 +18,10 @@ export async function seedDemo(sequelize: Sequelize, bcryptCost = 12) {
     const households: Record<string, Household> = {};
     const members: Record<string, User> = {};
     for (const h of accounts.households) {
-      const household = await Household.create({ name: h.name, altitudeFt: h.altitudeFt, timeZone: h.timeZone, altitudeConfirmedAt: new Date() }, { transaction });
+      const household = await Household.create(
+        { name: h.name, altitudeFt: h.altitudeFt, timeZone: h.timeZone, altitudeConfirmedAt: new Date() },
+        { transaction },
+      );
       households[h.name] = household;
       for (const m of h.members) {
         const user = await User.create({ email: m.email, name: m.name, passwordHash }, { transaction });
@@ -34,4 +37,3 @@ export async function seedDemo(sequelize: Sequelize, bcryptCost = 12) {
 export async function isEmpty() {
   return (await Household.count()) === 0;
 }
-

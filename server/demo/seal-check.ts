@@ -11,11 +11,20 @@ export const DEMO_SEAL_CHECK = { product: 'Roasted Salsa Verde', jars: 4, hoursA
 
 export async function seedSealCheck({ households, members, transaction }: DemoSeedContext) {
   const calloway = households['Calloway Hollow'];
-  const product = await Product.findOne({ where: { householdId: calloway.id, name: DEMO_SEAL_CHECK.product }, transaction });
-  const recipe = product ? await Recipe.findOne({ where: { householdId: calloway.id, productId: product.id }, transaction }) : null;
+  const product = await Product.findOne({
+    where: { householdId: calloway.id, name: DEMO_SEAL_CHECK.product },
+    transaction,
+  });
+  const recipe = product
+    ? await Recipe.findOne({ where: { householdId: calloway.id, productId: product.id }, transaction })
+    : null;
   if (!product || !recipe) return;
   const processedAt = new Date(clock.now().getTime() - DEMO_SEAL_CHECK.hoursAgo * 3_600_000);
-  const plan = recipeProcessingPlan(recipe, { jarSize: 'pint', method: 'boiling-water', altitudeFt: calloway.altitudeFt });
+  const plan = recipeProcessingPlan(recipe, {
+    jarSize: 'pint',
+    method: 'boiling-water',
+    altitudeFt: calloway.altitudeFt,
+  });
   await writeBatch(
     calloway,
     product,

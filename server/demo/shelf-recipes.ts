@@ -122,7 +122,8 @@ export const DEMO_RECIPES: DemoRecipe[] = [
     method: 'boiling-water',
     baseMinutes: { 'half-pint': 15, pint: 15 },
     headspaceInches: 0.5,
-    steps: 'Bring everything to a boil, stirring, and simmer 20 minutes; fill hot. Use bottled lemon juice: its acidity is standard.',
+    steps:
+      'Bring everything to a boil, stirring, and simmer 20 minutes; fill hot. Use bottled lemon juice: its acidity is standard.',
     source: 'USDA Complete Guide to Home Canning (2015), "Tomatillo Green Salsa" (from memory).',
   },
 ];

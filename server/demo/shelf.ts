@@ -4,7 +4,13 @@ import { addDays, defaultUseWithinDays, useBy } from '../../shared/domain';
 import { JarEvent, Product, Recipe, type Household, type User } from '../db/models';
 import { writeBatch } from '../services/shelf/write-batch';
 import type { DemoSeedContext } from './features';
-import { CALLOWAY_BATCHES, CALLOWAY_PRODUCTS, MARSH_END_BATCHES, MARSH_END_PRODUCTS, type DemoBatch } from './shelf-batches';
+import {
+  CALLOWAY_BATCHES,
+  CALLOWAY_PRODUCTS,
+  MARSH_END_BATCHES,
+  MARSH_END_PRODUCTS,
+  type DemoBatch,
+} from './shelf-batches';
 import { DEMO_RECIPES } from './shelf-recipes';
 
 export async function seedShelf({ households, members, transaction, today }: DemoSeedContext) {
@@ -16,7 +22,13 @@ export async function seedShelf({ households, members, transaction, today }: Dem
   const products = await seedProducts(calloway, CALLOWAY_PRODUCTS, transaction);
   const recipes = new Map<string, Recipe>();
   for (const { product, ...recipe } of DEMO_RECIPES) {
-    recipes.set(product, await Recipe.create({ householdId: calloway.id, productId: products.get(product)!.id, ...recipe }, { transaction }));
+    recipes.set(
+      product,
+      await Recipe.create(
+        { householdId: calloway.id, productId: products.get(product)!.id, ...recipe },
+        { transaction },
+      ),
+    );
   }
   await seedBatches(calloway, products, recipes, CALLOWAY_BATCHES, cook, handlers, today, transaction);
 
@@ -25,8 +37,15 @@ export async function seedShelf({ households, members, transaction, today }: Dem
   await seedBatches(marshEnd, marshProducts, new Map(), MARSH_END_BATCHES, neighbour, [neighbour], today, transaction);
 }
 
-async function seedProducts(household: Household, list: typeof CALLOWAY_PRODUCTS, transaction: DemoSeedContext['transaction']) {
-  const created = await Product.bulkCreate(list.map((p) => ({ householdId: household.id, ...p })), { transaction, returning: true });
+async function seedProducts(
+  household: Household,
+  list: typeof CALLOWAY_PRODUCTS,
+  transaction: DemoSeedContext['transaction'],
+) {
+  const created = await Product.bulkCreate(
+    list.map((p) => ({ householdId: household.id, ...p })),
+    { transaction, returning: true },
+  );
   return new Map(created.map((p) => [p.name, p]));
 }
 
@@ -45,7 +64,13 @@ async function seedBatches(
   for (const demo of batches) {
     const product = products.get(demo.product)!;
     const recipe = recipes.get(demo.product) ?? null;
-    const plan = recipe ? recipeProcessingPlan(recipe, { jarSize: demo.jarSize, method: 'boiling-water', altitudeFt: household.altitudeFt }) : null;
+    const plan = recipe
+      ? recipeProcessingPlan(recipe, {
+          jarSize: demo.jarSize,
+          method: 'boiling-water',
+          altitudeFt: household.altitudeFt,
+        })
+      : null;
     const cannedOn = addDays(today, -demo.daysAgo);
     const { batch, jars } = await writeBatch(
       household,
@@ -82,19 +107,54 @@ async function seedBatches(
       const who = nextHandler();
       if (fate.state !== 'discarded') {
         await jar.update({ state: 'opened', openedOn, useBy: useBy(openedOn, keeps) }, { transaction });
-        await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: batch.id, kind: 'opened', userId: who.id, happenedOn: jar.openedOn! }, { transaction });
+        await JarEvent.create(
+          {
+            householdId: household.id,
+            jarId: jar.id,
+            batchId: batch.id,
+            kind: 'opened',
+            userId: who.id,
+            happenedOn: jar.openedOn!,
+          },
+          { transaction },
+        );
       }
-      if (fate.state === 'finished') await jar.update({ state: 'finished', finishedOn: day, remainingTbsp: 0 }, { transaction });
+      if (fate.state === 'finished')
+        await jar.update({ state: 'finished', finishedOn: day, remainingTbsp: 0 }, { transaction });
       if (fate.state === 'discarded') await jar.update({ state: 'discarded', discardedOn: day }, { transaction });
-      if (fate.state !== 'opened') await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: batch.id, kind: fate.state, userId: who.id, happenedOn: day }, { transaction });
+      if (fate.state !== 'opened')
+        await JarEvent.create(
+          {
+            householdId: household.id,
+            jarId: jar.id,
+            batchId: batch.id,
+            kind: fate.state,
+            userId: who.id,
+            happenedOn: day,
+          },
+          { transaction },
+        );
     }
     const unsealed = jars.filter((jar) => jar.unsealed);
     for (const [index, fate] of (demo.unsealedFates ?? []).entries()) {
       const jar = unsealed[index];
       const state = fate.finished !== undefined ? 'finished' : 'discarded';
       const day = addDays(today, -(fate.finished ?? fate.discarded ?? 0));
-      await jar.update(state === 'finished' ? { state, finishedOn: day, remainingTbsp: 0 } : { state, discardedOn: day }, { transaction });
-      await JarEvent.create({ householdId: household.id, jarId: jar.id, batchId: batch.id, kind: state, userId: nextHandler().id, happenedOn: day }, { transaction });
+      await jar.update(
+        state === 'finished' ? { state, finishedOn: day, remainingTbsp: 0 } : { state, discardedOn: day },
+        { transaction },
+      );
+      await JarEvent.create(
+        {
+          householdId: household.id,
+          jarId: jar.id,
+          batchId: batch.id,
+          kind: state,
+          userId: nextHandler().id,
+          happenedOn: day,
+        },
+        { transaction },
+      );
     }
   }
 }

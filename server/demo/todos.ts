@@ -16,10 +16,34 @@ export async function seedTodos(ctx: DemoSeedContext) {
   const plan = await relishPlan(ctx);
 
   const todos = [
-    { title: 'Buy a box of half-pint lids', notes: 'The wide-mouth ones for the relish.', dueOn: addDays(today, 4), assigneeId: cook.id },
+    {
+      title: 'Buy a box of half-pint lids',
+      notes: 'The wide-mouth ones for the relish.',
+      dueOn: addDays(today, 4),
+      assigneeId: cook.id,
+    },
     { title: 'Wash the empty jars from the cellar', notes: '', dueOn: addDays(today, 2), assigneeId: helper.id },
-    ...(plan ? [{ title: restockTitle(plan), notes: '', dueOn: plan.targetOn, assigneeId: cook.id, kind: 'restock' as const, productId: plan.productId, batchPlan: plan }] : []),
-    { title: 'Take the dial gauge to the extension office for its yearly test', notes: '', dueOn: addDays(today, -10), assigneeId: keeper.id, done: true, doneAt: new Date() },
+    ...(plan
+      ? [
+          {
+            title: restockTitle(plan),
+            notes: '',
+            dueOn: plan.targetOn,
+            assigneeId: cook.id,
+            kind: 'restock' as const,
+            productId: plan.productId,
+            batchPlan: plan,
+          },
+        ]
+      : []),
+    {
+      title: 'Take the dial gauge to the extension office for its yearly test',
+      notes: '',
+      dueOn: addDays(today, -10),
+      assigneeId: keeper.id,
+      done: true,
+      doneAt: new Date(),
+    },
   ];
   await Todo.bulkCreate(
     todos.map((todo, position) => ({ householdId: calloway.id, createdBy: keeper.id, position, ...todo })),
@@ -31,8 +55,18 @@ export async function seedTodos(ctx: DemoSeedContext) {
 async function relishPlan({ households, transaction, today }: DemoSeedContext): Promise<BatchPlan | null> {
   const calloway = households['Calloway Hollow'];
   const relish = await Product.findOne({ where: { householdId: calloway.id, name: 'Sweet Corn Relish' }, transaction });
-  const recipe = relish && (await Recipe.findOne({ where: { householdId: calloway.id, productId: relish.id }, transaction }));
+  const recipe =
+    relish && (await Recipe.findOne({ where: { householdId: calloway.id, productId: relish.id }, transaction }));
   if (!relish || !recipe) return null;
   const jarSize = jarSizeFor(recipe, relish, undefined);
-  return composeBatchPlan({ household: calloway, product: relish, recipe, today, jars: oneTestedBatch(recipe, jarSize), jarSize, reason: null, runOutOn: null });
+  return composeBatchPlan({
+    household: calloway,
+    product: relish,
+    recipe,
+    today,
+    jars: oneTestedBatch(recipe, jarSize),
+    jarSize,
+    reason: null,
+    runOutOn: null,
+  });
 }

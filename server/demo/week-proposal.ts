@@ -10,7 +10,11 @@ const OPEN_LUNCH_DAYS = 9;
 export async function seedProposalScenario({ households, transaction, today }: DemoSeedContext) {
   // The chutney jar the shelf seeder opened 27 days ago keeps 30 days: without lunches that draw on it, it turns with most of it left.
   await PlanEntry.destroy({
-    where: { householdId: households['Calloway Hollow'].id, slot: 'lunch', date: { [Op.between]: [today, addDays(today, OPEN_LUNCH_DAYS - 1)] } },
+    where: {
+      householdId: households['Calloway Hollow'].id,
+      slot: 'lunch',
+      date: { [Op.between]: [today, addDays(today, OPEN_LUNCH_DAYS - 1)] },
+    },
     transaction,
   });
 }

@@ -19,10 +19,13 @@ export class PostgresRateLimitStore implements Store {
   }
 
   async get(key: string): Promise<ClientRateLimitInfo | undefined> {
-    const [row] = await this.sequelize.query<{ hits: number; reset_at: Date }>('SELECT hits, reset_at FROM rate_limit_hits WHERE key = :key AND reset_at > now()', {
-      replacements: { key: this.key(key) },
-      type: QueryTypes.SELECT,
-    });
+    const [row] = await this.sequelize.query<{ hits: number; reset_at: Date }>(
+      'SELECT hits, reset_at FROM rate_limit_hits WHERE key = :key AND reset_at > now()',
+      {
+        replacements: { key: this.key(key) },
+        type: QueryTypes.SELECT,
+      },
+    );
     return row ? { totalHits: row.hits, resetTime: row.reset_at } : undefined;
   }
 
@@ -36,16 +39,22 @@ export class PostgresRateLimitStore implements Store {
       { replacements: { key: this.key(key), seconds: this.windowMs / 1000 }, type: QueryTypes.SELECT },
     );
     // Now and then, forget counts whose window ended long ago.
-    if (Math.random() < 0.01) await this.sequelize.query("DELETE FROM rate_limit_hits WHERE reset_at < now() - interval '1 day'");
+    if (Math.random() < 0.01)
+      await this.sequelize.query("DELETE FROM rate_limit_hits WHERE reset_at < now() - interval '1 day'");
     return { totalHits: row.hits, resetTime: row.reset_at };
   }
 
   async decrement(key: string) {
-    await this.sequelize.query('UPDATE rate_limit_hits SET hits = greatest(hits - 1, 0) WHERE key = :key AND reset_at > now()', { replacements: { key: this.key(key) } });
+    await this.sequelize.query(
+      'UPDATE rate_limit_hits SET hits = greatest(hits - 1, 0) WHERE key = :key AND reset_at > now()',
+      { replacements: { key: this.key(key) } },
+    );
   }
 
   async resetKey(key: string) {
-    await this.sequelize.query('DELETE FROM rate_limit_hits WHERE key = :key', { replacements: { key: this.key(key) } });
+    await this.sequelize.query('DELETE FROM rate_limit_hits WHERE key = :key', {
+      replacements: { key: this.key(key) },
+    });
   }
 
   private key(key: string) {

@@ -34,7 +34,8 @@ export function limit(sequelize: Sequelize, name: string, rule: Rule) {
     legacyHeaders: false,
     skipSuccessfulRequests: rule.failuresOnly ?? false,
     keyGenerator: (req) => rule.key?.(req) ?? byAddress(req),
-    handler: (_req, _res, next) => next(new AppError(429, 'too_many_requests', `Too many ${rule.what}. Wait ${wait}, then try again.`)),
+    handler: (_req, _res, next) =>
+      next(new AppError(429, 'too_many_requests', `Too many ${rule.what}. Wait ${wait}, then try again.`)),
   });
 }
 

@@ -25,6 +25,12 @@ export function sameOriginOnly(appOrigins: string[]): RequestHandler {
     const own = appOrigins.length > 0 ? undefined : loopbackOrigin(req.protocol, req.get('host'));
     const allowed = origin === undefined ? fetchSite !== 'cross-site' : origin === own || appOrigins.includes(origin);
     if (allowed) return next();
-    next(new AppError(403, 'forbidden', 'This request came from another site, so it was refused. Use Larderly from its own address.'));
+    next(
+      new AppError(
+        403,
+        'forbidden',
+        'This request came from another site, so it was refused. Use Larderly from its own address.',
+      ),
+    );
   };
 }

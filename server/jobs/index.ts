@@ -27,7 +27,9 @@ export async function startJobs(ctx: AppContext) {
     application_name: 'larderly-jobs',
     maintenanceIntervalSeconds: MAINTENANCE_INTERVAL_SECONDS,
   });
-  boss.on('error', (error) => (ctx.log ? ctx.log.warn({ err: error }, 'job runner error') : console.warn(`larderly jobs: ${error.message}`)));
+  boss.on('error', (error) =>
+    ctx.log ? ctx.log.warn({ err: error }, 'job runner error') : console.warn(`larderly jobs: ${error.message}`),
+  );
   await boss.start();
   // Processes starting together would deadlock creating the same queues; an advisory lock takes turns.
   await ctx.sequelize.transaction(async (transaction) => {

@@ -37,10 +37,19 @@ function authenticate(req: Request, res: Response, next: NextFunction) {
 export function authRouter(ctx: AppContext, options: { authLimit: number }) {
   const router = Router();
   // Failed sign-ins count, per address: a household signing in all day is never locked out.
-  const failedSignIns = limit(ctx.sequelize, 'failed-sign-in', { windowMs: 15 * MINUTE, limit: options.authLimit, what: 'attempts', failuresOnly: true });
+  const failedSignIns = limit(ctx.sequelize, 'failed-sign-in', {
+    windowMs: 15 * MINUTE,
+    limit: options.authLimit,
+    what: 'attempts',
+    failuresOnly: true,
+  });
   const hashing = passwordHashingLimit(ctx.sequelize, options.authLimit);
   // Tokens are 32 random bytes; the limit keeps guessing slow.
-  const confirmations = limit(ctx.sequelize, 'sign-up-confirm', { windowMs: 15 * MINUTE, limit: 100, what: 'sign-up links' });
+  const confirmations = limit(ctx.sequelize, 'sign-up-confirm', {
+    windowMs: 15 * MINUTE,
+    limit: 100,
+    what: 'sign-up links',
+  });
 
   // The same 202 whether or not the address has an account: only its mailbox learns which.
   router.post('/signup', hashing, async (req, res) => {

@@ -12,19 +12,33 @@ import { checkSeals } from '../services/shelf/seal-check';
 import { PHOTO_MAX_BYTES, readBatchPhoto, saveBatchPhoto } from '../services/shelf/photos';
 
 const batchParams = z.object({ hid: z.string(), batchId: z.uuid({ error: 'That batch was not found.' }) });
-const photoQuery = z.object({ size: z.enum(Object.keys(PHOTO_SIZES) as [keyof typeof PHOTO_SIZES]).default('large'), v: z.string().max(40).optional() });
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 } }).single('photo');
+const photoQuery = z.object({
+  size: z.enum(Object.keys(PHOTO_SIZES) as [keyof typeof PHOTO_SIZES]).default('large'),
+  v: z.string().max(40).optional(),
+});
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: PHOTO_MAX_BYTES, files: 1, fields: 5 },
+}).single('photo');
 
 /** Runs multer and turns its errors into answers a person can act on. */
 function receivePhoto(req: Request, res: Response): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     upload(req, res, (error: unknown) => {
       if (error instanceof multer.MulterError) {
-        if (error.code === 'LIMIT_FILE_SIZE') return reject(new AppError(413, 'too_large', 'That photo is larger than 5 MB. Choose a smaller one, or lower the camera’s resolution.'));
+        if (error.code === 'LIMIT_FILE_SIZE')
+          return reject(
+            new AppError(
+              413,
+              'too_large',
+              'That photo is larger than 5 MB. Choose a smaller one, or lower the camera’s resolution.',
+            ),
+          );
         return reject(new AppError(400, 'invalid_input', 'Send one photo in the field “photo”.'));
       }
       if (error) return reject(error);
-      if (!req.file) return reject(new AppError(400, 'invalid_input', 'Choose a photo to upload.', { photo: 'Choose a photo.' }));
+      if (!req.file)
+        return reject(new AppError(400, 'invalid_input', 'Choose a photo to upload.', { photo: 'Choose a photo.' }));
       resolve(req.file.buffer);
     });
   });
@@ -72,7 +86,9 @@ export function batchesRouter(ctx: AppContext) {
     const { batchId } = params(req, batchParams);
     const { size } = query(req, photoQuery);
     const photo = await readBatchPhoto(photos, currentMembership(req).householdId, batchId, size);
-    res.set({ 'Content-Type': photo.type, 'Cache-Control': 'private, no-cache', 'Content-Disposition': 'inline' }).send(photo.bytes);
+    res
+      .set({ 'Content-Type': photo.type, 'Cache-Control': 'private, no-cache', 'Content-Disposition': 'inline' })
+      .send(photo.bytes);
   });
 
   return router;

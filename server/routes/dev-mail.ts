@@ -12,8 +12,15 @@ export function devMailRouter(ctx: AppContext) {
   const router = Router({ mergeParams: true });
   router.get('/dev/mail', householdAccess('manage'), async (req, res) => {
     const dir = ctx.config.mail.catcherDir;
-    if (!dir) throw new AppError(404, 'not_found', 'The caught-mail page exists only in development, with the local mail catcher running.');
-    res.json({ messages: await readCaughtMail(dir, await mailboxAddresses(currentMembership(req).householdId, req.user!.email)) });
+    if (!dir)
+      throw new AppError(
+        404,
+        'not_found',
+        'The caught-mail page exists only in development, with the local mail catcher running.',
+      );
+    res.json({
+      messages: await readCaughtMail(dir, await mailboxAddresses(currentMembership(req).householdId, req.user!.email)),
+    });
   });
   return router;
 }

@@ -4,7 +4,14 @@ import { z } from 'zod';
 import { householdPatch, memberPatch } from '../../shared/schemas/households';
 import { currentMembership, householdAccess } from '../auth/guards';
 import { body, params } from '../http/validate';
-import { changeRole, leaveHousehold, listMembers, removeMember, updateHousehold, viewHousehold } from '../services/households';
+import {
+  changeRole,
+  leaveHousehold,
+  listMembers,
+  removeMember,
+  updateHousehold,
+  viewHousehold,
+} from '../services/households';
 
 export function householdsRouter(sequelize: Sequelize) {
   const router = Router({ mergeParams: true });
@@ -25,14 +32,20 @@ export function householdsRouter(sequelize: Sequelize) {
   });
 
   router.patch('/:hid/members/:userId', householdAccess('manage'), async (req, res) => {
-    const { userId } = params(req, z.object({ hid: z.string(), userId: z.uuid({ error: 'That member was not found.' }) }));
+    const { userId } = params(
+      req,
+      z.object({ hid: z.string(), userId: z.uuid({ error: 'That member was not found.' }) }),
+    );
     const { role } = body(req, memberPatch);
     await changeRole(sequelize, currentMembership(req).householdId, userId, role);
     res.json({ members: await listMembers(currentMembership(req).householdId) });
   });
 
   router.delete('/:hid/members/:userId', householdAccess('manage'), async (req, res) => {
-    const { userId } = params(req, z.object({ hid: z.string(), userId: z.uuid({ error: 'That member was not found.' }) }));
+    const { userId } = params(
+      req,
+      z.object({ hid: z.string(), userId: z.uuid({ error: 'That member was not found.' }) }),
+    );
     await removeMember(sequelize, currentMembership(req).householdId, req.user!.id, userId);
     res.json({ members: await listMembers(currentMembership(req).householdId) });
   });

@@ -13,8 +13,17 @@ import { signIn } from './auth';
 export function householdInvitationsRouter(ctx: AppContext) {
   const router = Router({ mergeParams: true });
   // Each invitation sends an e-mail: a day's worth per person, per address and per invited address.
-  const perPerson = limit(ctx.sequelize, 'invitations-person', { windowMs: 24 * 60 * MINUTE, limit: 30, what: 'invitations today', key: byPerson });
-  const perAddress = limit(ctx.sequelize, 'invitations-address', { windowMs: 24 * 60 * MINUTE, limit: 100, what: 'invitations from this network today' });
+  const perPerson = limit(ctx.sequelize, 'invitations-person', {
+    windowMs: 24 * 60 * MINUTE,
+    limit: 30,
+    what: 'invitations today',
+    key: byPerson,
+  });
+  const perAddress = limit(ctx.sequelize, 'invitations-address', {
+    windowMs: 24 * 60 * MINUTE,
+    limit: 100,
+    what: 'invitations from this network today',
+  });
   const perInvitee = limit(ctx.sequelize, 'invitations-invitee', {
     windowMs: 24 * 60 * MINUTE,
     limit: 5,
@@ -46,7 +55,11 @@ const tokenParams = z.object({ token: z.string().min(20).max(100) });
 export function acceptInvitationRouter(ctx: AppContext, options: { authLimit: number }) {
   const router = Router();
   // Tokens are 32 random bytes; the limit keeps guessing, and the hashing behind a new account, slow.
-  const lookups = limit(ctx.sequelize, 'invitation-lookup', { windowMs: 15 * MINUTE, limit: 100, what: 'invitation look-ups' });
+  const lookups = limit(ctx.sequelize, 'invitation-lookup', {
+    windowMs: 15 * MINUTE,
+    limit: 100,
+    what: 'invitation look-ups',
+  });
   const hashing = passwordHashingLimit(ctx.sequelize, options.authLimit);
 
   router.get('/:token', lookups, async (req, res) => {
@@ -60,7 +73,9 @@ export function acceptInvitationRouter(ctx: AppContext, options: { authLimit: nu
     if (!req.user && !('password' in input)) {
       throw new AppError(401, 'signed_out', 'Sign in to join, or choose a name and password to create your account.');
     }
-    const who = req.user ? { user: req.user, confirmOtherAddress: 'confirmOtherAddress' in input && input.confirmOtherAddress === true } : (input as { name: string; password: string });
+    const who = req.user
+      ? { user: req.user, confirmOtherAddress: 'confirmOtherAddress' in input && input.confirmOtherAddress === true }
+      : (input as { name: string; password: string });
     const { accepted, user } = await accept(ctx, token, who);
     if (!req.user) await signIn(req, user);
     res.json({ invitation: accepted });

@@ -17,7 +17,9 @@ export function mealsRouter({ sequelize }: AppContext) {
   });
 
   router.post('/meals', householdAccess('cook'), async (req, res) => {
-    res.status(201).json({ meal: await createMeal(sequelize, currentMembership(req).householdId, body(req, mealBody)) });
+    res
+      .status(201)
+      .json({ meal: await createMeal(sequelize, currentMembership(req).householdId, body(req, mealBody)) });
   });
 
   router.patch('/meals/:id', householdAccess('cook'), async (req, res) => {

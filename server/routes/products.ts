@@ -21,7 +21,9 @@ export function productsRouter() {
   });
 
   router.post('/products', householdAccess('cook'), async (req, res) => {
-    res.status(201).json({ product: await createProduct(currentMembership(req).householdId, body(req, productCreate)) });
+    res
+      .status(201)
+      .json({ product: await createProduct(currentMembership(req).householdId, body(req, productCreate)) });
   });
 
   router.patch('/products/:productId', householdAccess('cook'), async (req, res) => {

@@ -11,15 +11,30 @@ import { checkImport, importBatches } from '../services/shelf/csv-import';
 export function shelfRouter(ctx: AppContext) {
   const router = Router({ mergeParams: true });
   // Each check reads up to 500 kB and each import writes up to 500 batches: an hour's worth per person and per address.
-  const importsPerPerson = limit(ctx.sequelize, 'shelf-imports-person', { windowMs: 60 * MINUTE, limit: 60, what: 'CSV imports and checks', key: byPerson });
-  const importsPerAddress = limit(ctx.sequelize, 'shelf-imports-address', { windowMs: 60 * MINUTE, limit: 200, what: 'CSV imports and checks from this network' });
+  const importsPerPerson = limit(ctx.sequelize, 'shelf-imports-person', {
+    windowMs: 60 * MINUTE,
+    limit: 60,
+    what: 'CSV imports and checks',
+    key: byPerson,
+  });
+  const importsPerAddress = limit(ctx.sequelize, 'shelf-imports-address', {
+    windowMs: 60 * MINUTE,
+    limit: 200,
+    what: 'CSV imports and checks from this network',
+  });
 
   router.get('/shelf.csv', householdAccess('read'), async (req, res) => {
     const { jars } = query(req, z.object({ jars: z.enum(['on-hand', 'all']).default('on-hand') }));
     const { household } = currentMembership(req);
     const csv = await shelfCsv(household, jars === 'all');
     const fileName = `larderly-shelf-${household.name.toLowerCase().replace(/[^a-z0-9]+/g, '-')}.csv`;
-    res.set({ 'Content-Type': 'text/csv; charset=utf-8', 'Content-Disposition': `attachment; filename="${fileName}"`, 'Cache-Control': 'no-store' }).send(`\uFEFF${csv}`);
+    res
+      .set({
+        'Content-Type': 'text/csv; charset=utf-8',
+        'Content-Disposition': `attachment; filename="${fileName}"`,
+        'Cache-Control': 'no-store',
+      })
+      .send(`\uFEFF${csv}`);
   });
 
   router.post('/shelf/import', householdAccess('cook'), importsPerPerson, importsPerAddress, async (req, res) => {

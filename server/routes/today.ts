@@ -8,7 +8,9 @@ export function todayRouter({ readCache }: AppContext) {
 
   router.get('/today', householdAccess('read'), async (req, res) => {
     // My to-dos make the answer each person's own.
-    await readCache.send(req, res, `today ${req.user!.id}`, () => todayView(currentMembership(req).household, req.user!.id));
+    await readCache.send(req, res, `today ${req.user!.id}`, () =>
+      todayView(currentMembership(req).household, req.user!.id),
+    );
   });
 
   return router;

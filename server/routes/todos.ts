@@ -24,7 +24,9 @@ export function todosRouter({ sequelize }: AppContext) {
 
   router.post('/todos', householdAccess('cook'), idempotent(sequelize), async (req, res) => {
     const input = body(req, todoCreate);
-    res.status(201).json({ todo: await createTodo(sequelize, currentMembership(req).householdId, req.user!.id, input) });
+    res
+      .status(201)
+      .json({ todo: await createTodo(sequelize, currentMembership(req).householdId, req.user!.id, input) });
   });
 
   // Helpers pass this guard to tick a to-do; the service refuses them anything else.

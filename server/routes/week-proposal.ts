@@ -28,7 +28,12 @@ export function weekProposalRouter({ sequelize }: AppContext) {
   router.post('/week/proposal', householdAccess('cook'), async (req, res) => {
     const household = householdOf(req);
     const request = body(req, proposalRequest);
-    res.json(await proposeWeek(sequelize, household, { ...request, start: weekStartOf(request.start, household.weekStartsOn) }));
+    res.json(
+      await proposeWeek(sequelize, household, {
+        ...request,
+        start: weekStartOf(request.start, household.weekStartsOn),
+      }),
+    );
   });
 
   router.post('/week/proposal/accept', householdAccess('cook'), async (req, res) => {

@@ -1,6 +1,15 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { pairingCreate, pairingPatch, planEntryCreate, planEntryPatch, preferencesPatch, weekCopy, weekQuery, weekStartOf } from '../../shared/schemas/week';
+import {
+  pairingCreate,
+  pairingPatch,
+  planEntryCreate,
+  planEntryPatch,
+  preferencesPatch,
+  weekCopy,
+  weekQuery,
+  weekStartOf,
+} from '../../shared/schemas/week';
 import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { body, params, query } from '../http/validate';
@@ -65,7 +74,9 @@ export function weekRouter({ sequelize, readCache }: AppContext) {
     const { id } = params(req, withId('That planned meal'));
     const { productId, tbspPerServing } = body(req, pairingCreate);
     const pairing = await addPairing(sequelize, hid(req), id, productId, tbspPerServing);
-    res.status(201).json({ pairing: { id: pairing.id, productId: pairing.productId, tbspPerServing: pairing.tbspPerServing } });
+    res
+      .status(201)
+      .json({ pairing: { id: pairing.id, productId: pairing.productId, tbspPerServing: pairing.tbspPerServing } });
   });
 
   router.patch('/pairings/:id', householdAccess('cook'), async (req, res) => {
@@ -84,7 +95,14 @@ export function weekRouter({ sequelize, readCache }: AppContext) {
   router.patch('/members/:userId/preferences', householdAccess('read'), async (req, res) => {
     const { userId } = params(req, memberParams);
     const { householdId, role } = currentMembership(req);
-    res.json({ preferences: await updatePreferences(householdId, { userId: req.user!.id, role }, userId, body(req, preferencesPatch)) });
+    res.json({
+      preferences: await updatePreferences(
+        householdId,
+        { userId: req.user!.id, role },
+        userId,
+        body(req, preferencesPatch),
+      ),
+    });
   });
 
   return router;

@@ -1,6 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import { DatabaseError, QueryTypes, UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
-import { BACKUP_FORMAT, BACKUP_VERSION, type BackupTable, type HouseholdBackup, type ImportResult } from '../../shared/schemas/backup';
+import {
+  BACKUP_FORMAT,
+  BACKUP_VERSION,
+  type BackupTable,
+  type HouseholdBackup,
+  type ImportResult,
+} from '../../shared/schemas/backup';
 import { Household, Membership } from '../db/models';
 import { AppError, conflict } from '../http/errors';
 import { newJarCode } from './shelf/jar-codes';
@@ -19,76 +25,138 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
     key: 'products',
     table: 'products',
     columns: [
-      ['name', 'name', 'varchar'], ['kind', 'kind', 'varchar'], ['heat', 'heat', 'int'], ['favourite', 'favourite', 'boolean'],
-      ['minJars', 'min_jars', 'int'], ['useWithinDays', 'use_within_days', 'int'], ['harvestMonths', 'harvest_months', 'int[]'],
-      ['jarSize', 'jar_size', 'varchar'], ['colour', 'colour', 'varchar'], ['notes', 'notes', 'text'],
+      ['name', 'name', 'varchar'],
+      ['kind', 'kind', 'varchar'],
+      ['heat', 'heat', 'int'],
+      ['favourite', 'favourite', 'boolean'],
+      ['minJars', 'min_jars', 'int'],
+      ['useWithinDays', 'use_within_days', 'int'],
+      ['harvestMonths', 'harvest_months', 'int[]'],
+      ['jarSize', 'jar_size', 'varchar'],
+      ['colour', 'colour', 'varchar'],
+      ['notes', 'notes', 'text'],
     ],
   },
   {
     key: 'recipes',
     table: 'recipes',
     columns: [
-      ['productId', 'product_id', 'uuid', 'products'], ['name', 'name', 'varchar'], ['yieldJars', 'yield_jars', 'int'],
-      ['yieldJarSize', 'yield_jar_size', 'varchar'], ['ingredients', 'ingredients', 'jsonb'], ['acidPercent', 'acid_percent', 'numeric'],
-      ['ph', 'ph', 'numeric'], ['acidified', 'acidified', 'boolean'], ['method', 'method', 'varchar'], ['baseMinutes', 'base_minutes', 'jsonb'],
-      ['altitudeTable', 'altitude_table', 'jsonb'], ['headspaceInches', 'headspace_inches', 'numeric'], ['steps', 'steps', 'text'], ['source', 'source', 'text'],
+      ['productId', 'product_id', 'uuid', 'products'],
+      ['name', 'name', 'varchar'],
+      ['yieldJars', 'yield_jars', 'int'],
+      ['yieldJarSize', 'yield_jar_size', 'varchar'],
+      ['ingredients', 'ingredients', 'jsonb'],
+      ['acidPercent', 'acid_percent', 'numeric'],
+      ['ph', 'ph', 'numeric'],
+      ['acidified', 'acidified', 'boolean'],
+      ['method', 'method', 'varchar'],
+      ['baseMinutes', 'base_minutes', 'jsonb'],
+      ['altitudeTable', 'altitude_table', 'jsonb'],
+      ['headspaceInches', 'headspace_inches', 'numeric'],
+      ['steps', 'steps', 'text'],
+      ['source', 'source', 'text'],
     ],
   },
   {
     key: 'batches',
     table: 'batches',
     columns: [
-      ['productId', 'product_id', 'uuid', 'products'], ['recipeId', 'recipe_id', 'uuid', 'recipes'], ['cannedOn', 'canned_on', 'date'],
-      ['jarSize', 'jar_size', 'varchar'], ['jarsFilled', 'jars_filled', 'int'], ['jarsSealed', 'jars_sealed', 'int'], ['method', 'method', 'varchar'],
-      ['altitudeFt', 'altitude_ft', 'int'], ['minutes', 'minutes', 'int'], ['pressurePsi', 'pressure_psi', 'int'],
-      ['headspaceInches', 'headspace_inches', 'numeric'], ['notes', 'notes', 'text'],
+      ['productId', 'product_id', 'uuid', 'products'],
+      ['recipeId', 'recipe_id', 'uuid', 'recipes'],
+      ['cannedOn', 'canned_on', 'date'],
+      ['jarSize', 'jar_size', 'varchar'],
+      ['jarsFilled', 'jars_filled', 'int'],
+      ['jarsSealed', 'jars_sealed', 'int'],
+      ['method', 'method', 'varchar'],
+      ['altitudeFt', 'altitude_ft', 'int'],
+      ['minutes', 'minutes', 'int'],
+      ['pressurePsi', 'pressure_psi', 'int'],
+      ['headspaceInches', 'headspace_inches', 'numeric'],
+      ['notes', 'notes', 'text'],
     ],
   },
   {
     key: 'jars',
     table: 'jars',
     columns: [
-      ['batchId', 'batch_id', 'uuid', 'batches'], ['productId', 'product_id', 'uuid', 'products'], ['state', 'state', 'varchar'],
-      ['capacityTbsp', 'capacity_tbsp', 'numeric'], ['remainingTbsp', 'remaining_tbsp', 'numeric'], ['unsealed', 'unsealed', 'boolean'],
-      ['bestBy', 'best_by', 'date'], ['openedOn', 'opened_on', 'date'], ['useBy', 'use_by', 'date'], ['finishedOn', 'finished_on', 'date'],
-      ['discardedOn', 'discarded_on', 'date'], ['code', 'code', 'varchar'],
+      ['batchId', 'batch_id', 'uuid', 'batches'],
+      ['productId', 'product_id', 'uuid', 'products'],
+      ['state', 'state', 'varchar'],
+      ['capacityTbsp', 'capacity_tbsp', 'numeric'],
+      ['remainingTbsp', 'remaining_tbsp', 'numeric'],
+      ['unsealed', 'unsealed', 'boolean'],
+      ['bestBy', 'best_by', 'date'],
+      ['openedOn', 'opened_on', 'date'],
+      ['useBy', 'use_by', 'date'],
+      ['finishedOn', 'finished_on', 'date'],
+      ['discardedOn', 'discarded_on', 'date'],
+      ['code', 'code', 'varchar'],
     ],
   },
   {
     key: 'jarEvents',
     table: 'jar_events',
     updatedAt: false,
-    columns: [['jarId', 'jar_id', 'uuid', 'jars'], ['batchId', 'batch_id', 'uuid', 'batches'], ['kind', 'kind', 'varchar'], ['happenedOn', 'happened_on', 'date']],
+    columns: [
+      ['jarId', 'jar_id', 'uuid', 'jars'],
+      ['batchId', 'batch_id', 'uuid', 'batches'],
+      ['kind', 'kind', 'varchar'],
+      ['happenedOn', 'happened_on', 'date'],
+    ],
   },
   {
     key: 'meals',
     table: 'meals',
-    columns: [['name', 'name', 'varchar'], ['tags', 'tags', 'varchar[]'], ['usualServings', 'usual_servings', 'int'], ['notes', 'notes', 'text']],
+    columns: [
+      ['name', 'name', 'varchar'],
+      ['tags', 'tags', 'varchar[]'],
+      ['usualServings', 'usual_servings', 'int'],
+      ['notes', 'notes', 'text'],
+    ],
   },
   {
     key: 'mealProducts',
     table: 'meal_products',
-    columns: [['mealId', 'meal_id', 'uuid', 'meals'], ['productId', 'product_id', 'uuid', 'products'], ['tbspPerServing', 'tbsp_per_serving', 'numeric']],
+    columns: [
+      ['mealId', 'meal_id', 'uuid', 'meals'],
+      ['productId', 'product_id', 'uuid', 'products'],
+      ['tbspPerServing', 'tbsp_per_serving', 'numeric'],
+    ],
   },
   {
     key: 'planEntries',
     table: 'plan_entries',
     columns: [
-      ['date', 'date', 'date'], ['slot', 'slot', 'varchar'], ['position', 'position', 'int'], ['title', 'title', 'varchar'],
-      ['mealId', 'meal_id', 'uuid', 'meals'], ['servings', 'servings', 'int'],
+      ['date', 'date', 'date'],
+      ['slot', 'slot', 'varchar'],
+      ['position', 'position', 'int'],
+      ['title', 'title', 'varchar'],
+      ['mealId', 'meal_id', 'uuid', 'meals'],
+      ['servings', 'servings', 'int'],
     ],
   },
   {
     key: 'pairings',
     table: 'pairings',
-    columns: [['planEntryId', 'plan_entry_id', 'uuid', 'planEntries'], ['productId', 'product_id', 'uuid', 'products'], ['tbspPerServing', 'tbsp_per_serving', 'numeric']],
+    columns: [
+      ['planEntryId', 'plan_entry_id', 'uuid', 'planEntries'],
+      ['productId', 'product_id', 'uuid', 'products'],
+      ['tbspPerServing', 'tbsp_per_serving', 'numeric'],
+    ],
   },
   {
     key: 'todos',
     table: 'todos',
     columns: [
-      ['title', 'title', 'varchar'], ['notes', 'notes', 'text'], ['dueOn', 'due_on', 'date'], ['done', 'done', 'boolean'], ['doneAt', 'done_at', 'timestamptz'],
-      ['position', 'position', 'int'], ['kind', 'kind', 'varchar'], ['productId', 'product_id', 'uuid', 'products'], ['batchPlan', 'batch_plan', 'jsonb'],
+      ['title', 'title', 'varchar'],
+      ['notes', 'notes', 'text'],
+      ['dueOn', 'due_on', 'date'],
+      ['done', 'done', 'boolean'],
+      ['doneAt', 'done_at', 'timestamptz'],
+      ['position', 'position', 'int'],
+      ['kind', 'kind', 'varchar'],
+      ['productId', 'product_id', 'uuid', 'products'],
+      ['batchPlan', 'batch_plan', 'jsonb'],
     ],
   },
 ];
@@ -123,13 +191,22 @@ export async function exportHousehold(sequelize: Sequelize, household: Household
 }
 
 /** A new household made from a backup, with the importer as its keeper: fresh ids, one transaction. */
-export async function importHousehold(sequelize: Sequelize, backup: HouseholdBackup, importerId: string): Promise<ImportResult> {
-  if (!isTimeZone(backup.household.timeZone)) throw new AppError(400, 'invalid_input', 'The time zone in the file is not one this server knows.');
+export async function importHousehold(
+  sequelize: Sequelize,
+  backup: HouseholdBackup,
+  importerId: string,
+): Promise<ImportResult> {
+  if (!isTimeZone(backup.household.timeZone))
+    throw new AppError(400, 'invalid_input', 'The time zone in the file is not one this server knows.');
   try {
     return await sequelize.transaction(async (transaction) => {
       const household = await Household.create({ ...backup.household }, { transaction });
       await Membership.create({ householdId: household.id, userId: importerId, role: 'keeper' }, { transaction });
-      const takenCodes = await codesInUse(sequelize, transaction, backup.jars.map((jar) => jar.code).filter((code): code is string => Boolean(code)));
+      const takenCodes = await codesInUse(
+        sequelize,
+        transaction,
+        backup.jars.map((jar) => jar.code).filter((code): code is string => Boolean(code)),
+      );
       const newIds = new Map<BackupTable, Map<string, string>>();
       const counts = {} as Record<BackupTable, number>;
       for (const spec of TABLES) {
@@ -142,9 +219,14 @@ export async function importHousehold(sequelize: Sequelize, backup: HouseholdBac
       return { household: { id: household.id, name: household.name }, counts };
     });
   } catch (error) {
-    if (error instanceof UniqueConstraintError && /code/.test(JSON.stringify(error.fields))) throw conflict('Two jars drew the same label code. Import the file again.');
+    if (error instanceof UniqueConstraintError && /code/.test(JSON.stringify(error.fields)))
+      throw conflict('Two jars drew the same label code. Import the file again.');
     if (error instanceof DatabaseError && /^2[23]/.test(String((error.parent as { code?: string }).code))) {
-      throw new AppError(400, 'invalid_input', `The backup file does not fit together, so nothing was imported: ${error.message}`);
+      throw new AppError(
+        400,
+        'invalid_input',
+        `The backup file does not fit together, so nothing was imported: ${error.message}`,
+      );
     }
     throw error;
   }
@@ -153,11 +235,21 @@ export async function importHousehold(sequelize: Sequelize, backup: HouseholdBac
 /** The backup's label codes some jar already carries; the rest stay on their jars, so a restored shelf needs no new labels. */
 async function codesInUse(sequelize: Sequelize, transaction: Transaction, codes: string[]): Promise<Set<string>> {
   if (codes.length === 0) return new Set();
-  const rows = await sequelize.query<{ code: string }>('SELECT code FROM jars WHERE code = ANY($1::varchar[])', { bind: [codes], type: QueryTypes.SELECT, transaction });
+  const rows = await sequelize.query<{ code: string }>('SELECT code FROM jars WHERE code = ANY($1::varchar[])', {
+    bind: [codes],
+    type: QueryTypes.SELECT,
+    transaction,
+  });
   return new Set(rows.map((row) => row.code));
 }
 
-function remap(key: BackupTable, columns: Column[], row: Record<string, unknown>, newIds: Map<BackupTable, Map<string, string>>, takenCodes: Set<string>) {
+function remap(
+  key: BackupTable,
+  columns: Column[],
+  row: Record<string, unknown>,
+  newIds: Map<BackupTable, Map<string, string>>,
+  takenCodes: Set<string>,
+) {
   const out: Record<string, unknown> = { ...row, id: newIds.get(key)!.get(String(row.id)) };
   for (const [json, , , ref] of columns) {
     if (!ref || row[json] === null) continue;
@@ -170,14 +262,23 @@ function remap(key: BackupTable, columns: Column[], row: Record<string, unknown>
   }
   if (key === 'todos' && row.batchPlan) {
     const plan = row.batchPlan as Record<string, unknown>;
-    out.batchPlan = { ...plan, productId: newId(newIds, 'products', plan.productId, 'todos.batchPlan.productId'), recipeId: newId(newIds, 'recipes', plan.recipeId, 'todos.batchPlan.recipeId') };
+    out.batchPlan = {
+      ...plan,
+      productId: newId(newIds, 'products', plan.productId, 'todos.batchPlan.productId'),
+      recipeId: newId(newIds, 'recipes', plan.recipeId, 'todos.batchPlan.recipeId'),
+    };
   }
   return out;
 }
 
 function newId(newIds: Map<BackupTable, Map<string, string>>, table: BackupTable, old: unknown, where: string) {
   const id = newIds.get(table)?.get(String(old));
-  if (!id) throw new AppError(400, 'invalid_input', `The backup file does not fit together: ${where} points to ${old}, which is not among its ${table}. Nothing was imported.`);
+  if (!id)
+    throw new AppError(
+      400,
+      'invalid_input',
+      `The backup file does not fit together: ${where} points to ${old}, which is not among its ${table}. Nothing was imported.`,
+    );
   return id;
 }
 
@@ -192,12 +293,27 @@ async function insertRows(
   if (rows.length === 0) return;
   const columns: Column[] = [['id', 'id', 'uuid'], ...spec.columns];
   const createdBy = spec.key === 'batches' || spec.key === 'todos';
-  const names = [...columns.map(([, sql]) => sql), 'household_id', ...(createdBy ? ['created_by'] : []), 'created_at', ...(spec.updatedAt === false ? [] : ['updated_at'])];
-  const values = [...columns.map(([, sql]) => `r.${sql}`), '$2', ...(createdBy ? ['$3'] : []), 'now()', ...(spec.updatedAt === false ? [] : ['now()'])];
+  const names = [
+    ...columns.map(([, sql]) => sql),
+    'household_id',
+    ...(createdBy ? ['created_by'] : []),
+    'created_at',
+    ...(spec.updatedAt === false ? [] : ['updated_at']),
+  ];
+  const values = [
+    ...columns.map(([, sql]) => `r.${sql}`),
+    '$2',
+    ...(createdBy ? ['$3'] : []),
+    'now()',
+    ...(spec.updatedAt === false ? [] : ['now()']),
+  ];
   const record = columns.map(([, sql, type]) => `${sql} ${type}`).join(', ');
   const asRecords = rows.map((row) => Object.fromEntries(columns.map(([json, sql]) => [sql, row[json] ?? null])));
   await sequelize.query(
     `INSERT INTO ${spec.table} (${names.join(', ')}) SELECT ${values.join(', ')} FROM jsonb_to_recordset($1::jsonb) AS r(${record})`,
-    { bind: createdBy ? [JSON.stringify(asRecords), householdId, importerId] : [JSON.stringify(asRecords), householdId], transaction },
+    {
+      bind: createdBy ? [JSON.stringify(asRecords), householdId, importerId] : [JSON.stringify(asRecords), householdId],
+      transaction,
+    },
   );
 }

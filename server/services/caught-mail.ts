@@ -5,7 +5,10 @@ import { Membership, User } from '../db/models';
 
 /** The addresses whose caught mail a member may read: the household's members and the caller. */
 export async function mailboxAddresses(householdId: string, callerEmail: string) {
-  const members = await Membership.findAll({ where: { householdId }, include: [{ model: User, as: 'user', required: true, attributes: ['email'] }] });
+  const members = await Membership.findAll({
+    where: { householdId },
+    include: [{ model: User, as: 'user', required: true, attributes: ['email'] }],
+  });
   return new Set([callerEmail, ...members.map((m) => m.user!.email)].map((a) => a.toLowerCase()));
 }
 
@@ -14,7 +17,10 @@ export async function mailboxAddresses(householdId: string, callerEmail: string)
  * every recipient is one of `addresses`: another household's invitation links stay unseen.
  */
 export async function readCaughtMail(dir: string, addresses: Set<string>, limit = 50): Promise<CaughtMail[]> {
-  const names = (await readdir(dir).catch(() => [] as string[])).filter((n) => n.endsWith('.json')).sort().reverse();
+  const names = (await readdir(dir).catch(() => [] as string[]))
+    .filter((n) => n.endsWith('.json'))
+    .sort()
+    .reverse();
   const shown: CaughtMail[] = [];
   for (const name of names) {
     if (shown.length >= limit) break;

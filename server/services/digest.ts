@@ -20,19 +20,43 @@ export async function buildDigest(household: Household, today: string, origin: s
   const products = await productsOf(household.id);
   const nameOf = (productId: string) => products.get(productId)?.name ?? 'a product';
   const [entries, opened, plan, restock] = await Promise.all([
-    PlanEntry.findAll({ where: { householdId: household.id, date: { [Op.between]: [today, weekEnd] } }, include: [{ model: Pairing, as: 'pairings' }] }),
-    Jar.findAll({ where: { householdId: household.id, state: 'opened', useBy: { [Op.lte]: weekEnd } }, order: [['useBy', 'ASC']] }),
+    PlanEntry.findAll({
+      where: { householdId: household.id, date: { [Op.between]: [today, weekEnd] } },
+      include: [{ model: Pairing, as: 'pairings' }],
+    }),
+    Jar.findAll({
+      where: { householdId: household.id, state: 'opened', useBy: { [Op.lte]: weekEnd } },
+      order: [['useBy', 'ASC']],
+    }),
     allocatePlan(household.id, today, weekEnd, products),
     digestRestockLines(household.id, today),
   ]);
-  const jarProduct = new Map((await Jar.findAll({ where: { id: (plan?.allocation.openings ?? []).map((o) => String(o.jarId)) } })).map((j) => [j.id, j.productId]));
+  const jarProduct = new Map(
+    (await Jar.findAll({ where: { id: (plan?.allocation.openings ?? []).map((o) => String(o.jarId)) } })).map((j) => [
+      j.id,
+      j.productId,
+    ]),
+  );
   return {
     householdName: household.name,
     weekOf: today,
     plan: entries
-      .sort((a, b) => a.date.localeCompare(b.date) || SLOT_ORDER.indexOf(a.slot) - SLOT_ORDER.indexOf(b.slot) || a.position - b.position)
-      .map((e) => ({ date: e.date, slot: e.slot, title: e.title, products: (e.pairings ?? []).map((p) => nameOf(p.productId)) })),
-    toOpen: (plan?.allocation.openings ?? []).map((o) => ({ date: o.date, productName: nameOf(jarProduct.get(String(o.jarId)) ?? '') })),
+      .sort(
+        (a, b) =>
+          a.date.localeCompare(b.date) ||
+          SLOT_ORDER.indexOf(a.slot) - SLOT_ORDER.indexOf(b.slot) ||
+          a.position - b.position,
+      )
+      .map((e) => ({
+        date: e.date,
+        slot: e.slot,
+        title: e.title,
+        products: (e.pairings ?? []).map((p) => nameOf(p.productId)),
+      })),
+    toOpen: (plan?.allocation.openings ?? []).map((o) => ({
+      date: o.date,
+      productName: nameOf(jarProduct.get(String(o.jarId)) ?? ''),
+    })),
     expiring: opened.map((j) => ({ useBy: j.useBy!, productName: nameOf(j.productId), code: j.code })),
     restock,
     link: `${origin}${paths.week(household.id)}`,
@@ -56,9 +80,14 @@ export async function sweepDigests(ctx: Notifiers, now = clock.now()) {
     const today = todayIn(household.timeZone, now);
     if (new Date(`${today}T00:00:00Z`).getUTCDay() !== household.weekStartsOn) continue;
     const hour = hourIn(household.timeZone, now);
-    const memberships = await Membership.findAll({ where: { householdId: household.id }, include: [{ model: User, as: 'user', required: true }] });
+    const memberships = await Membership.findAll({
+      where: { householdId: household.id },
+      include: [{ model: User, as: 'user', required: true }],
+    });
     const prefs = await preferencesOf(memberships.map((m) => m.userId));
-    const due = memberships.filter((m) => prefs.get(m.userId)!.weeklyDigest && withinReminderHours(hour, prefs.get(m.userId)!.reminderHour));
+    const due = memberships.filter(
+      (m) => prefs.get(m.userId)!.weeklyDigest && withinReminderHours(hour, prefs.get(m.userId)!.reminderHour),
+    );
     if (due.length === 0) continue;
     let digest: DigestContent | undefined;
     for (const membership of due) {

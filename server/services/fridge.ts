@@ -5,12 +5,19 @@ import { allocatePlan, productsOf } from './plan-allocation';
 
 /** The household's opened jars, soonest use-by first, with what the plan leaves in each on its use-by. */
 export async function viewFridge(householdId: string, today: string): Promise<FridgeView> {
-  const opened = await Jar.findAll({ where: { householdId, state: 'opened' }, order: [['useBy', 'ASC'], ['code', 'ASC']] });
+  const opened = await Jar.findAll({
+    where: { householdId, state: 'opened' },
+    order: [
+      ['useBy', 'ASC'],
+      ['code', 'ASC'],
+    ],
+  });
   const products = await productsOf(householdId);
   const lastUseBy = opened.reduce((last, jar) => (jar.useBy! > last ? jar.useBy! : last), today);
   const plan = opened.length ? await allocatePlan(householdId, today, lastUseBy, products) : null;
   const draws = new Map<string, number>();
-  for (const { jarId, tbsp } of plan?.allocation.assignments ?? []) if (jarId !== null) draws.set(String(jarId), (draws.get(String(jarId)) ?? 0) + tbsp);
+  for (const { jarId, tbsp } of plan?.allocation.assignments ?? [])
+    if (jarId !== null) draws.set(String(jarId), (draws.get(String(jarId)) ?? 0) + tbsp);
 
   const jars: FridgeJar[] = opened.map((jar) => {
     const product = products.get(jar.productId)!;

@@ -1,7 +1,16 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import type { Role } from '../../shared/roles';
 import type { HouseholdPatch, HouseholdView, MemberView } from '../../shared/schemas/households';
-import { CalendarFeed, DigestDelivery, Household, Membership, PushSubscription, ReminderDelivery, Todo, User } from '../db/models';
+import {
+  CalendarFeed,
+  DigestDelivery,
+  Household,
+  Membership,
+  PushSubscription,
+  ReminderDelivery,
+  Todo,
+  User,
+} from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
 import { paths } from '../../shared/paths';
 
@@ -39,7 +48,11 @@ export function requireConfirmedAltitude(household: Household) {
 /** Changes a member's role; the last keeper cannot stop being one, even under concurrent changes. */
 export async function changeRole(sequelize: Sequelize, householdId: string, userId: string, role: Role) {
   return sequelize.transaction(async (transaction) => {
-    const memberships = await Membership.findAll({ where: { householdId }, transaction, lock: transaction.LOCK.UPDATE });
+    const memberships = await Membership.findAll({
+      where: { householdId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     const target = memberships.find((m) => m.userId === userId);
     if (!target) throw notFound('That member');
     const keepers = memberships.filter((m) => m.role === 'keeper');
@@ -62,7 +75,8 @@ async function endMembership(householdId: string, userId: string, transaction: T
   await ReminderDelivery.destroy({ where: { householdId, userId }, transaction });
   await DigestDelivery.destroy({ where: { householdId, userId }, transaction });
   await CalendarFeed.destroy({ where: { householdId, userId }, transaction });
-  if ((await Membership.count({ where: { userId }, transaction })) === 0) await PushSubscription.destroy({ where: { userId }, transaction });
+  if ((await Membership.count({ where: { userId }, transaction })) === 0)
+    await PushSubscription.destroy({ where: { userId }, transaction });
 }
 
 const LAST_KEEPER = 'A household needs at least one keeper. Make someone else a keeper first, then leave.';
@@ -71,7 +85,11 @@ const LAST_KEEPER = 'A household needs at least one keeper. Make someone else a 
 export async function removeMember(sequelize: Sequelize, householdId: string, keeperId: string, userId: string) {
   if (userId === keeperId) throw conflict('To leave the household yourself, use Leave household.');
   await sequelize.transaction(async (transaction) => {
-    const memberships = await Membership.findAll({ where: { householdId }, transaction, lock: transaction.LOCK.UPDATE });
+    const memberships = await Membership.findAll({
+      where: { householdId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!memberships.some((m) => m.userId === userId)) throw notFound('That member');
     await endMembership(householdId, userId, transaction);
   });
@@ -80,10 +98,15 @@ export async function removeMember(sequelize: Sequelize, householdId: string, ke
 /** The signed-in member leaves; the last keeper must hand over first. */
 export async function leaveHousehold(sequelize: Sequelize, householdId: string, userId: string) {
   await sequelize.transaction(async (transaction) => {
-    const memberships = await Membership.findAll({ where: { householdId }, transaction, lock: transaction.LOCK.UPDATE });
+    const memberships = await Membership.findAll({
+      where: { householdId },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     const me = memberships.find((m) => m.userId === userId);
     if (!me) throw notFound('That household');
-    if (me.role === 'keeper' && memberships.filter((m) => m.role === 'keeper').length === 1) throw conflict(LAST_KEEPER);
+    if (me.role === 'keeper' && memberships.filter((m) => m.role === 'keeper').length === 1)
+      throw conflict(LAST_KEEPER);
     await endMembership(householdId, userId, transaction);
   });
 }

@@ -1,4 +1,9 @@
-import { DEFAULT_DAYS_BEFORE, DEFAULT_REMINDER_HOUR, type NotificationPatch, type NotificationSettings } from '../../shared/schemas/notifications';
+import {
+  DEFAULT_DAYS_BEFORE,
+  DEFAULT_REMINDER_HOUR,
+  type NotificationPatch,
+  type NotificationSettings,
+} from '../../shared/schemas/notifications';
 import { NotificationPreference, PushSubscription } from '../db/models';
 
 export interface Preferences {
@@ -18,11 +23,21 @@ export function withinReminderHours(hour: number, reminderHour: number): boolean
   return hour >= reminderHour && hour < reminderHour + CATCH_UP_HOURS;
 }
 
-export const DEFAULT_PREFERENCES: Preferences = { emailReminders: true, weeklyDigest: true, reminderHour: DEFAULT_REMINDER_HOUR, daysBefore: DEFAULT_DAYS_BEFORE };
+export const DEFAULT_PREFERENCES: Preferences = {
+  emailReminders: true,
+  weeklyDigest: true,
+  reminderHour: DEFAULT_REMINDER_HOUR,
+  daysBefore: DEFAULT_DAYS_BEFORE,
+};
 
 function pick(row: NotificationPreference | null | undefined): Preferences {
   if (!row) return { ...DEFAULT_PREFERENCES };
-  return { emailReminders: row.emailReminders, weeklyDigest: row.weeklyDigest, reminderHour: row.reminderHour, daysBefore: row.daysBefore };
+  return {
+    emailReminders: row.emailReminders,
+    weeklyDigest: row.weeklyDigest,
+    reminderHour: row.reminderHour,
+    daysBefore: row.daysBefore,
+  };
 }
 
 /** Each person's preferences by user id, defaults filled in. */
@@ -32,11 +47,19 @@ export async function preferencesOf(userIds: string[]) {
 }
 
 export async function viewSettings(userId: string): Promise<NotificationSettings> {
-  const [row, pushDevices] = await Promise.all([NotificationPreference.findByPk(userId), PushSubscription.count({ where: { userId } })]);
+  const [row, pushDevices] = await Promise.all([
+    NotificationPreference.findByPk(userId),
+    PushSubscription.count({ where: { userId } }),
+  ]);
   return { ...pick(row), pushDevices };
 }
 
-const COLUMNS: Record<keyof NotificationPatch, string> = { emailReminders: 'email_reminders', weeklyDigest: 'weekly_digest', reminderHour: 'reminder_hour', daysBefore: 'days_before' };
+const COLUMNS: Record<keyof NotificationPatch, string> = {
+  emailReminders: 'email_reminders',
+  weeklyDigest: 'weekly_digest',
+  reminderHour: 'reminder_hour',
+  daysBefore: 'days_before',
+};
 
 /** Writes only the fields in the patch, so two quick changes from one person never undo each other. */
 export async function updateSettings(userId: string, patch: NotificationPatch) {

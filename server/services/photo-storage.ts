@@ -2,7 +2,14 @@
 // every deployment, and the local disk for a single machine (and for photos from before the store).
 import { access, constants, mkdir, readFile, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
-import { DeleteObjectCommand, GetObjectCommand, HeadBucketCommand, NoSuchKey, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadBucketCommand,
+  NoSuchKey,
+  PutObjectCommand,
+  S3Client,
+} from '@aws-sdk/client-s3';
 import type { Config } from '../config';
 
 export interface PhotoStorage {
@@ -86,7 +93,11 @@ export function objectStorage(settings: ObjectStoreSettings): PhotoStorage {
         const object = await client.send(new GetObjectCommand({ Bucket, Key: checkedKey(key) }));
         return object.Body ? Buffer.from(await object.Body.transformToByteArray()) : null;
       } catch (error) {
-        if (error instanceof NoSuchKey || (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return null;
+        if (
+          error instanceof NoSuchKey ||
+          (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404
+        )
+          return null;
         throw error;
       }
     },

@@ -16,11 +16,27 @@ import {
   USE_BY_CAUTION_SENTENCE,
 } from '../../shared/words';
 import type { AppContext } from '../context';
-import { Batch, BatchProcessing, Household, Jar, Membership, Product, PushSubscription, ReminderDelivery, User } from '../db/models';
+import {
+  Batch,
+  BatchProcessing,
+  Household,
+  Jar,
+  Membership,
+  Product,
+  PushSubscription,
+  ReminderDelivery,
+  User,
+} from '../db/models';
 import type { ReminderKind } from '../db/models/reminder-delivery';
 import { reminderMail, reminderWords, type ReminderWords } from './mail/reminder-mail';
 import { clock, hourIn, todayIn } from './clock';
-import { CATCH_UP_HOURS, DEFAULT_PREFERENCES, preferencesOf, withinReminderHours, type Preferences } from './notification-preferences';
+import {
+  CATCH_UP_HOURS,
+  DEFAULT_PREFERENCES,
+  preferencesOf,
+  withinReminderHours,
+  type Preferences,
+} from './notification-preferences';
 import { subscriptionsOf } from './push/subscriptions';
 import { paths } from '../../shared/paths';
 
@@ -132,7 +148,12 @@ async function deliver(
   );
 }
 
-function useByMessage(jar: { id: string; code: string }, productName: string, kind: 'soon' | 'today', daysLeft: number): Message {
+function useByMessage(
+  jar: { id: string; code: string },
+  productName: string,
+  kind: 'soon' | 'today',
+  daysLeft: number,
+): Message {
   return {
     words: reminderWords(kind, productName, daysLeft, jar.code),
     path: paths.jar(jar.code),
@@ -267,7 +288,11 @@ export async function sweepReminders(ctx: Notifiers, now = clock.now(), hooks: S
   const zones = new Map<string, { today: string; hour: number }>();
   for (const candidate of await useByCandidates(ctx, now)) {
     let zone = zones.get(candidate.timeZone);
-    if (!zone) zones.set(candidate.timeZone, (zone = { today: todayIn(candidate.timeZone, now), hour: hourIn(candidate.timeZone, now) }));
+    if (!zone)
+      zones.set(
+        candidate.timeZone,
+        (zone = { today: todayIn(candidate.timeZone, now), hour: hourIn(candidate.timeZone, now) }),
+      );
     const prefs: Preferences = {
       ...DEFAULT_PREFERENCES,
       ...(candidate.emailReminders === null ? {} : { emailReminders: candidate.emailReminders }),
@@ -307,7 +332,12 @@ export async function sweepReminders(ctx: Notifiers, now = clock.now(), hooks: S
         row.deliveryId,
         { userId: row.candidate.userId, email: row.candidate.email, prefs: row.prefs, subscriptions: devices },
         row.candidate.householdName,
-        useByMessage({ id: row.candidate.jarId, code: row.candidate.code }, row.candidate.productName, row.kind, row.daysLeft),
+        useByMessage(
+          { id: row.candidate.jarId, code: row.candidate.code },
+          row.candidate.productName,
+          row.kind,
+          row.daysLeft,
+        ),
       );
     }
     await markSentWithNothingToSend(ctx, now, nothingToSend);
@@ -373,13 +403,20 @@ async function sweepSealChecks(ctx: Notifiers, now: Date, hooks: SweepHooks) {
         ? clockWords(reprocessUntil(first.processedAt), household.timeZone)
         : null;
     const productName = (batch as Batch & { product: Product }).product.name;
-    await deliver(ctx, now, deliveryId, { userId: membership.userId, email: membership.user!.email, prefs }, household.name, {
-      words: { title: sealCheckTitle(productName), body: sealCheckMessage(productName, jarsLeft, reprocessBy) },
-      path: paths.batch(household.id, processing.batchId),
-      tag: `seal-check-${processing.id}`,
-      button: 'Check the seals',
-      caution: CANNING_CAUTION_SENTENCE,
-    });
+    await deliver(
+      ctx,
+      now,
+      deliveryId,
+      { userId: membership.userId, email: membership.user!.email, prefs },
+      household.name,
+      {
+        words: { title: sealCheckTitle(productName), body: sealCheckMessage(productName, jarsLeft, reprocessBy) },
+        path: paths.batch(household.id, processing.batchId),
+        tag: `seal-check-${processing.id}`,
+        button: 'Check the seals',
+        caution: CANNING_CAUTION_SENTENCE,
+      },
+    );
   }
   return claimed;
 }

@@ -42,22 +42,26 @@ function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView
     const portion = todays.get(assignment.portionId);
     if (!portion) return [];
     const entry = entryOf.get(String(portion.id))!;
-    return [{
-      portionId: String(portion.id),
-      slot: entry.slot,
-      mealTitle: entry.title,
-      productId: String(portion.productId),
-      productName: productOf.get(portion.productId)?.name ?? 'A product',
-      tbsp: assignment.tbsp,
-      jarId: assignment.jarId === null ? null : String(assignment.jarId),
-      jarCode: assignment.jarId === null ? null : jarOf.get(assignment.jarId)!.code,
-      openedJarDaysLeft: openedDaysLeft(jarOf.get(assignment.jarId ?? ''), today),
-      opensToday: assignment.jarId !== null && openedToday.has(assignment.jarId),
-    }];
+    return [
+      {
+        portionId: String(portion.id),
+        slot: entry.slot,
+        mealTitle: entry.title,
+        productId: String(portion.productId),
+        productName: productOf.get(portion.productId)?.name ?? 'A product',
+        tbsp: assignment.tbsp,
+        jarId: assignment.jarId === null ? null : String(assignment.jarId),
+        jarCode: assignment.jarId === null ? null : jarOf.get(assignment.jarId)!.code,
+        openedJarDaysLeft: openedDaysLeft(jarOf.get(assignment.jarId ?? ''), today),
+        opensToday: assignment.jarId !== null && openedToday.has(assignment.jarId),
+      },
+    ];
   });
   use.sort((a, b) => SLOT_ORDER.indexOf(a.slot) - SLOT_ORDER.indexOf(b.slot));
   const short = allocation.warnings.flatMap((w) =>
-    w.kind === 'short' && w.date === today ? [{ productName: productOf.get(w.productId)?.name ?? 'A product', tbsp: w.tbsp }] : [],
+    w.kind === 'short' && w.date === today
+      ? [{ productName: productOf.get(w.productId)?.name ?? 'A product', tbsp: w.tbsp }]
+      : [],
   );
   return { use, short };
 }
@@ -65,7 +69,10 @@ function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView
 function fridgeCountdowns(snapshot: StockSnapshot): TodayFridgeJar[] {
   const nameOf = new Map(snapshot.products.map((p) => [p.id, p.name]));
   return snapshot.shelfJars
-    .filter((jar): jar is Jar & { openedOn: string; useBy: string } => jar.state === 'opened' && jar.useBy !== null && jar.openedOn !== null)
+    .filter(
+      (jar): jar is Jar & { openedOn: string; useBy: string } =>
+        jar.state === 'opened' && jar.useBy !== null && jar.openedOn !== null,
+    )
     .sort((a, b) => (a.useBy < b.useBy ? -1 : a.useBy > b.useBy ? 1 : a.code.localeCompare(b.code)))
     .map((jar) => ({
       jarId: jar.id,

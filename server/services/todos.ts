@@ -34,7 +34,11 @@ function whereFor(householdId: string, filter: TodoFilter, userId: string): Wher
 }
 
 export async function listTodos(householdId: string, filter: TodoFilter, userId: string): Promise<TodoView[]> {
-  const todos = await Todo.findAll({ where: whereFor(householdId, filter, userId), include: withAssignee, order: [['position', 'ASC']] });
+  const todos = await Todo.findAll({
+    where: whereFor(householdId, filter, userId),
+    include: withAssignee,
+    order: [['position', 'ASC']],
+  });
   return refreshPlans(householdId, todos.map(viewTodo));
 }
 
@@ -48,13 +52,21 @@ export async function findTodo(householdId: string, id: string): Promise<TodoVie
 /** Locks the household's list: the household row serialises adds, the todo rows are the ones moved. */
 async function lockList(householdId: string, transaction: Transaction): Promise<Todo[]> {
   await Household.findByPk(householdId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
-  return Todo.findAll({ where: { householdId }, order: [['position', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+  return Todo.findAll({
+    where: { householdId },
+    order: [['position', 'ASC']],
+    transaction,
+    lock: transaction.LOCK.UPDATE,
+  });
 }
 
 async function requireMember(householdId: string, userId: string | null | undefined, transaction: Transaction) {
   if (!userId) return;
   const member = await Membership.findOne({ where: { householdId, userId }, transaction, attributes: ['id'] });
-  if (!member) throw new AppError(400, 'invalid_input', 'Some fields need attention.', { assigneeId: 'Choose a member of this household.' });
+  if (!member)
+    throw new AppError(400, 'invalid_input', 'Some fields need attention.', {
+      assigneeId: 'Choose a member of this household.',
+    });
 }
 
 interface NewTodo extends TodoCreate {
@@ -64,7 +76,12 @@ interface NewTodo extends TodoCreate {
 }
 
 /** Adds a to-do at the end of the list. */
-export async function createTodo(sequelize: Sequelize, householdId: string, createdBy: string, input: NewTodo): Promise<TodoView> {
+export async function createTodo(
+  sequelize: Sequelize,
+  householdId: string,
+  createdBy: string,
+  input: NewTodo,
+): Promise<TodoView> {
   const id = await sequelize.transaction(async (transaction) => {
     const list = await lockList(householdId, transaction);
     await requireMember(householdId, input.assigneeId, transaction);
@@ -102,7 +119,13 @@ async function move(list: Todo[], todo: Todo, position: number, transaction: Tra
 
 const HELPER_FIELDS = new Set(['done']);
 
-export async function updateTodo(sequelize: Sequelize, householdId: string, role: Role, id: string, patch: TodoPatch): Promise<TodoView> {
+export async function updateTodo(
+  sequelize: Sequelize,
+  householdId: string,
+  role: Role,
+  id: string,
+  patch: TodoPatch,
+): Promise<TodoView> {
   if (role === 'helper' && Object.keys(patch).some((field) => !HELPER_FIELDS.has(field))) {
     throw forbidden('Helpers may tick a to-do done or not done; ask a cook or keeper to change anything else.');
   }
@@ -125,6 +148,10 @@ export async function deleteTodo(sequelize: Sequelize, householdId: string, id: 
     const todo = list.find((t) => t.id === id);
     if (!todo) throw notFound('That to-do');
     await todo.destroy({ transaction });
-    await Todo.decrement('position', { by: 1, where: { householdId, position: { [Op.gt]: todo.position } }, transaction });
+    await Todo.decrement('position', {
+      by: 1,
+      where: { householdId, position: { [Op.gt]: todo.position } },
+      transaction,
+    });
   });
 }

@@ -114,7 +114,9 @@ function requireUniqueIds(records: { id: Id }[], label: string): void {
 /** Opened jars still good on `date`, earliest use-by first: they must be finished before they turn. */
 function openedJarsFor(shelf: JarOnShelf[], productId: Id, date: string): JarOnShelf[] {
   return shelf
-    .filter((jar) => jar.state === 'opened' && jar.productId === productId && jar.useBy! >= date && jar.remainingTbsp > 0)
+    .filter(
+      (jar) => jar.state === 'opened' && jar.productId === productId && jar.useBy! >= date && jar.remainingTbsp > 0,
+    )
     .sort((a, b) => byDateThenId(a.useBy!, a.id, b.useBy!, b.id));
 }
 
@@ -162,7 +164,13 @@ export function allocateWeek(input: WeekAllocationInput): WeekAllocation {
     }
     if (needed > CRUMB_TBSP) {
       assignments.push({ portionId: portion.id, jarId: null, tbsp: needed });
-      warnings.push({ kind: 'short', productId: portion.productId, date: portion.date, tbsp: needed, portionId: portion.id });
+      warnings.push({
+        kind: 'short',
+        productId: portion.productId,
+        date: portion.date,
+        tbsp: needed,
+        portionId: portion.id,
+      });
     }
   }
 
@@ -170,10 +178,19 @@ export function allocateWeek(input: WeekAllocationInput): WeekAllocation {
   if (lastPlannedDate !== undefined) {
     // A jar is never drawn after its use-by, so what it holds now is what is left after that day's portions.
     const expiring = shelf
-      .filter((jar) => jar.state === 'opened' && jar.useBy! >= today && jar.useBy! <= lastPlannedDate && jar.remainingTbsp > 0)
+      .filter(
+        (jar) =>
+          jar.state === 'opened' && jar.useBy! >= today && jar.useBy! <= lastPlannedDate && jar.remainingTbsp > 0,
+      )
       .sort((a, b) => byDateThenId(a.useBy!, a.id, b.useBy!, b.id));
     for (const jar of expiring) {
-      warnings.push({ kind: 'will-expire', productId: jar.productId, jarId: jar.id, date: jar.useBy!, tbsp: jar.remainingTbsp });
+      warnings.push({
+        kind: 'will-expire',
+        productId: jar.productId,
+        jarId: jar.id,
+        date: jar.useBy!,
+        tbsp: jar.remainingTbsp,
+      });
     }
   }
 

@@ -13,9 +13,7 @@ export const SAFETY_CAUTIONS: readonly string[] = [
 
 const METHOD_CAUTIONS: Record<Method, readonly string[]> = {
   // Common practice, from memory of USDA Guide 1.
-  'boiling-water': [
-    'Keep the jars covered by at least 1 inch of water at a full rolling boil for the whole time.',
-  ],
+  'boiling-water': ['Keep the jars covered by at least 1 inch of water at a full rolling boil for the whole time.'],
   // University of Wisconsin-Madison research (Willmore, Etzel, Andress and Ingham, 2015), as extension services summarise it.
   'atmospheric-steam': [
     'Only for acid foods (pH 4.6 or below) with a recipe tested for the boiling-water canner, using its time with the altitude adjustment.',
@@ -38,8 +36,15 @@ const COOL_AND_TEST = [
 ];
 
 const AFTER_PROCESSING: Record<Method, readonly string[]> = {
-  'boiling-water': ['Turn off the heat and take off the canner lid.', 'Wait 5 minutes before lifting the jars out.', ...COOL_AND_TEST],
-  'atmospheric-steam': ["Turn off the heat and leave the lid on for the recipe's rest time before lifting the jars out.", ...COOL_AND_TEST],
+  'boiling-water': [
+    'Turn off the heat and take off the canner lid.',
+    'Wait 5 minutes before lifting the jars out.',
+    ...COOL_AND_TEST,
+  ],
+  'atmospheric-steam': [
+    "Turn off the heat and leave the lid on for the recipe's rest time before lifting the jars out.",
+    ...COOL_AND_TEST,
+  ],
   'pressure-dial': [
     'Turn off the heat and let the canner depressurise by itself; never cool it by force.',
     'Once it reads zero, wait 10 minutes before opening the lid.',

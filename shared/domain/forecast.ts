@@ -91,9 +91,18 @@ interface ForecastQuestion {
  * Walks forward from today: planned days draw what is planned, days after the last planned date draw
  * the history rate, and the run-out date is the first day whose draw what is left cannot cover.
  */
-export function forecastProduct({ productId, today, horizonDays, jars, finished, planned }: ForecastQuestion): ProductForecast {
+export function forecastProduct({
+  productId,
+  today,
+  horizonDays,
+  jars,
+  finished,
+  planned,
+}: ForecastQuestion): ProductForecast {
   const todayDay = dayNumber(today, 'today');
-  const shelfJars = jars.filter((jar) => jar.productId === productId && (jar.state === 'sealed' || jar.state === 'opened'));
+  const shelfJars = jars.filter(
+    (jar) => jar.productId === productId && (jar.state === 'sealed' || jar.state === 'opened'),
+  );
   const onHandTbsp = shelfJars.reduce((sum, jar) => sum + jar.remainingTbsp, 0);
 
   const historyTbsp = finished

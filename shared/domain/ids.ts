@@ -4,7 +4,8 @@ import { describeValue } from './validate';
 export type Id = string | number;
 
 export function requireId(value: unknown, label: string): Id {
-  if ((typeof value === 'string' && value !== '') || (typeof value === 'number' && Number.isFinite(value))) return value;
+  if ((typeof value === 'string' && value !== '') || (typeof value === 'number' && Number.isFinite(value)))
+    return value;
   throw new RangeError(`${label} must be a non-empty string or a number; got ${describeValue(value)}`);
 }
 

@@ -15,7 +15,10 @@ export function jarSizeAdvice(dailyTbsp: number, useWithinDays: number): JarSize
   const rate = requireNonNegative(dailyTbsp, 'dailyTbsp');
   const days = requireWholeNumber(useWithinDays, 'useWithinDays');
   if (rate === 0) {
-    return { size: null, cautions: ['Nothing is eaten from this product at the moment, so no jar size can be advised yet.'] };
+    return {
+      size: null,
+      cautions: ['Nothing is eaten from this product at the moment, so no jar size can be advised yet.'],
+    };
   }
   const sizes = JAR_SIZES.slice(0, JAR_SIZES.indexOf(LARGEST_ADVISED_JAR) + 1);
   const size = sizes.filter((candidate) => jarCapacityTbsp(candidate) <= rate * days).at(-1);

@@ -67,7 +67,11 @@ function smallestStep(unit: IngredientUnit): number {
 }
 
 /** Rounds to an amount a cook can measure in the same unit; a positive amount never becomes 0. */
-export function roundKitchenAmount(value: number, unit: IngredientUnit, direction: RoundingDirection = 'nearest'): number {
+export function roundKitchenAmount(
+  value: number,
+  unit: IngredientUnit,
+  direction: RoundingDirection = 'nearest',
+): number {
   const amount = requireNonNegative(value, 'amount');
   requireOneOf(unit, INGREDIENT_UNITS, 'unit');
   const rounded = isMetric(unit)

@@ -122,7 +122,8 @@ function readInput(input: MealProposalInput) {
   const varietyDays = requireWholeNumber(input.varietyDays ?? DEFAULT_VARIETY_DAYS, 'varietyDays', 1);
   const open = requireList<ProposalSlot>(input.open, 'open').map((s, i) => {
     const date = requireIsoDate(s.date, `open[${i}].date`);
-    if (date < today || date > until) throw new RangeError(`open[${i}].date (${date}) must fall from today (${today}) to until (${until})`);
+    if (date < today || date > until)
+      throw new RangeError(`open[${i}].date (${date}) must fall from today (${today}) to until (${until})`);
     return { date, slot: String(s.slot) };
   });
   const meals = requireList<ProposalMeal>(input.meals, 'meals').map((m, i) => {
@@ -147,7 +148,9 @@ export function breaksFlag(meal: ProposalMeal, products: Map<Id, ProposalProduct
   return meal.products.some(({ productId }) => {
     const product = products.get(productId);
     if (!product) return true;
-    return eaters.some((e) => product.heat > e.heatTolerance || product.dietConflicts.some((tag) => e.dietTags.includes(tag)));
+    return eaters.some(
+      (e) => product.heat > e.heatTolerance || product.dietConflicts.some((tag) => e.dietTags.includes(tag)),
+    );
   });
 }
 
@@ -179,8 +182,8 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
   }
   const before = sumWaste([...state.values()].map((s) => s.outcome));
 
-  const slots = [...new Map(open.map((s) => [slotKey(s), s])).values()].sort(
-    (a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : slotKinds.indexOf(a.slot) - slotKinds.indexOf(b.slot)),
+  const slots = [...new Map(open.map((s) => [slotKey(s), s])).values()].sort((a, b) =>
+    a.date < b.date ? -1 : a.date > b.date ? 1 : slotKinds.indexOf(a.slot) - slotKinds.indexOf(b.slot),
   );
   const choice = new Map<string, Id | null>(slots.map((s) => [slotKey(s), null]));
   const planned = requireList<{ date: string; mealId: Id }>(input.planned, 'planned');
@@ -189,7 +192,12 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
     slots.map((s) => [
       slotKey(s),
       meals
-        .filter((m) => !avoided.has(`${slotKey(s)}|${m.id}`) && fitsSlot(m, s.slot, slotKinds) && !breaksFlag(m, products, members))
+        .filter(
+          (m) =>
+            !avoided.has(`${slotKey(s)}|${m.id}`) &&
+            fitsSlot(m, s.slot, slotKinds) &&
+            !breaksFlag(m, products, members),
+        )
         .filter((m) => m.products.every((p) => productIds.has(p.productId)))
         .sort((a, b) => compareIds(a.id, b.id)),
     ]),
@@ -207,7 +215,13 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
       const mealId = choice.get(slotKey(s));
       const meal = mealId === null || mealId === undefined ? undefined : mealById.get(mealId);
       for (const p of meal?.products ?? []) {
-        if (p.productId === productId) proposed.push({ id: portionId(s, productId), date: s.date, productId, tbsp: p.tbspPerServing * meal!.usualServings });
+        if (p.productId === productId)
+          proposed.push({
+            id: portionId(s, productId),
+            date: s.date,
+            productId,
+            tbsp: p.tbspPerServing * meal!.usualServings,
+          });
       }
     }
     return proposed;
@@ -244,7 +258,12 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
   const tryChoice = (slot: ProposalSlot, mealId: Id | null): Score | null => {
     const key = slotKey(slot);
     const was = choice.get(key)!;
-    const touched = new Set<Id>([...(was === null ? [] : mealById.get(was)!.products), ...(mealId === null ? [] : mealById.get(mealId)!.products)].map((p) => p.productId));
+    const touched = new Set<Id>(
+      [
+        ...(was === null ? [] : mealById.get(was)!.products),
+        ...(mealId === null ? [] : mealById.get(mealId)!.products),
+      ].map((p) => p.productId),
+    );
     choice.set(key, mealId);
     sums.filled += (mealId === null ? 0 : 1) - (was === null ? 0 : 1);
     const previous = new Map<Id, AllocationOutcome>();
@@ -283,13 +302,15 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
   // Greedy by urgency: the earliest slots first, since an opened jar is eaten in date order.
   for (const slot of slots) {
     const keptMeal = kept.get(slotKey(slot));
-    const keepable = keptMeal !== undefined && mealById.get(keptMeal)?.products.every((p) => productIds.has(p.productId));
+    const keepable =
+      keptMeal !== undefined && mealById.get(keptMeal)?.products.every((p) => productIds.has(p.productId));
     if (!keepable || tryChoice(slot, keptMeal!) === null) bestFor(slot);
   }
   // Local improvement: change one slot at a time while that lowers the score.
   for (let round = 0; round < LOCAL_ROUNDS; round++) {
     let changed = false;
-    for (const slot of slots) if (choice.get(slotKey(slot)) !== kept.get(slotKey(slot)) && bestFor(slot)) changed = true;
+    for (const slot of slots)
+      if (choice.get(slotKey(slot)) !== kept.get(slotKey(slot)) && bestFor(slot)) changed = true;
     if (!changed) break;
   }
 
@@ -309,7 +330,12 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
       const ownId = portionId(slot, productId);
       return allocation.assignments
         .filter((a) => a.portionId === ownId && a.jarId !== null)
-        .map((a) => ({ productId, jarId: a.jarId!, tbsp: a.tbsp, opens: allocation.openings.some((o) => o.jarId === a.jarId && o.date === slot.date) }));
+        .map((a) => ({
+          productId,
+          jarId: a.jarId!,
+          tbsp: a.tbsp,
+          opens: allocation.openings.some((o) => o.jarId === a.jarId && o.date === slot.date),
+        }));
     });
     proposed.push({
       ...slot,
@@ -339,17 +365,41 @@ export function proposeMeals(input: MealProposalInput): MealProposal {
 }
 
 /** The most pressing jar a proposed meal draws on, in the order the proposal cares: fridge first, then past best, then oldest. */
-function reasonFor(slot: ProposalSlot, draws: ProposedMeal['draws'], jarById: Map<Id, AllocationJar>, state: Map<Id, ProductState>): ProposalReason {
+function reasonFor(
+  slot: ProposalSlot,
+  draws: ProposedMeal['draws'],
+  jarById: Map<Id, AllocationJar>,
+  state: Map<Id, ProductState>,
+): ProposalReason {
   const reasons: ProposalReason[] = draws.map((draw) => {
     const jar = jarById.get(draw.jarId)!;
     const opening = state.get(draw.productId)!.outcome.allocation.openings.find((o) => o.jarId === draw.jarId);
-    const openedOn = jar.state === 'opened' ? jar.openedOn! : opening && opening.date < slot.date ? opening.date : undefined;
+    const openedOn =
+      jar.state === 'opened' ? jar.openedOn! : opening && opening.date < slot.date ? opening.date : undefined;
     if (openedOn !== undefined) {
-      return { kind: 'opened-jar', productId: draw.productId, jarId: draw.jarId, openedOn, useBy: useBy(openedOn, jar.useWithinDays) };
+      return {
+        kind: 'opened-jar',
+        productId: draw.productId,
+        jarId: draw.jarId,
+        openedOn,
+        useBy: useBy(openedOn, jar.useWithinDays),
+      };
     }
-    return { kind: jar.bestBy < slot.date ? 'past-best' : 'nearest-best', productId: draw.productId, jarId: draw.jarId, bestBy: jar.bestBy };
+    return {
+      kind: jar.bestBy < slot.date ? 'past-best' : 'nearest-best',
+      productId: draw.productId,
+      jarId: draw.jarId,
+      bestBy: jar.bestBy,
+    };
   });
-  const rank = (r: ProposalReason) => (r.kind === 'opened-jar' ? `0${r.useBy}` : r.kind === 'past-best' ? `1${r.bestBy}` : r.kind === 'nearest-best' ? `2${r.bestBy}` : '3');
+  const rank = (r: ProposalReason) =>
+    r.kind === 'opened-jar'
+      ? `0${r.useBy}`
+      : r.kind === 'past-best'
+        ? `1${r.bestBy}`
+        : r.kind === 'nearest-best'
+          ? `2${r.bestBy}`
+          : '3';
   return reasons.sort((a, b) => (rank(a) < rank(b) ? -1 : rank(a) > rank(b) ? 1 : 0))[0] ?? { kind: 'variety' };
 }
 

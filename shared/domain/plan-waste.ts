@@ -43,7 +43,12 @@ export interface AllocationOutcome {
   allocation: WeekAllocation;
 }
 
-export function allocationOutcome(today: string, until: string, jars: AllocationJar[], portions: PlannedPortion[]): AllocationOutcome {
+export function allocationOutcome(
+  today: string,
+  until: string,
+  jars: AllocationJar[],
+  portions: PlannedPortion[],
+): AllocationOutcome {
   const served = portions.filter((p) => p.date <= until);
   const allocation = allocateWeek({ today, jars, portions: served });
   const drawn = new Map<Id, number>();
@@ -88,7 +93,14 @@ export function allocationOutcome(today: string, until: string, jars: Allocation
         : a.tbsp / (1 + Math.max(0, daysBetween(date, jar.bestBy)) / 30);
   }
   const sealedJarsPastBest = wasted.filter((w) => w.kind === 'best-quality').length;
-  return { waste: { tbspPastUseBy, sealedJarsPastBest, jars: wasted }, shortTbsp, shortPortions, freshOpenings, urgency, allocation };
+  return {
+    waste: { tbspPastUseBy, sealedJarsPastBest, jars: wasted },
+    shortTbsp,
+    shortPortions,
+    freshOpenings,
+    urgency,
+    allocation,
+  };
 }
 
 /** The waste of the plan as it stands: what the board shows before and after a proposal. */

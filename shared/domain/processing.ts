@@ -11,7 +11,15 @@ import {
   type Method,
 } from './processing-tables';
 import { JAR_SIZES, type JarSize } from './units';
-import { requireBoolean, requireList, requireNonNegative, requireNumber, requireOneOf, requirePh, requireRecord } from './validate';
+import {
+  requireBoolean,
+  requireList,
+  requireNonNegative,
+  requireNumber,
+  requireOneOf,
+  requirePh,
+  requireRecord,
+} from './validate';
 
 /** US FDA, 21 CFR Part 114: a food is acid or acidified at pH 4.6 or below. */
 export const HIGHEST_ACID_PH = 4.6;
@@ -83,19 +91,30 @@ export function processingPlan(input: ProcessingPlanInput): ProcessingPlan {
   if (isPressureMethod(method)) {
     const row = rowForAltitude(PRESSURE_TABLE, altitudeFt);
     const pressurePsi = row ? (method === 'pressure-dial' ? row.dialPsi : row.weightedPsi) : null;
-    return { allowed: reasons.length === 0, minutes: baseMinutes, pressurePsi, reasons, altitudeAddMinutes: null, ...plan };
+    return {
+      allowed: reasons.length === 0,
+      minutes: baseMinutes,
+      pressurePsi,
+      reasons,
+      altitudeAddMinutes: null,
+      ...plan,
+    };
   }
 
   const methodName = method === 'boiling-water' ? 'A boiling-water canner' : 'An atmospheric steam canner';
   const { acid, why } = acidity(ph, acidified);
   if (!acid) {
-    reasons.push(`${methodName} is only for acid foods, and ${why}. Use a pressure canner with a tested low-acid recipe.`);
+    reasons.push(
+      `${methodName} is only for acid foods, and ${why}. Use a pressure canner with a tested low-acid recipe.`,
+    );
   }
 
   const row = rowForAltitude(recipeTable ?? BOILING_WATER_ALTITUDE_TABLE, altitudeFt);
   if (!row && recipeTable && altitudeFt <= HIGHEST_TESTED_ALTITUDE_FT) {
     const highest = Math.max(0, ...recipeTable.map((entry) => entry.upToFt));
-    reasons.push(`The recipe's altitude table stops at ${feet(highest)} and has no tested time for ${feet(altitudeFt)}.`);
+    reasons.push(
+      `The recipe's altitude table stops at ${feet(highest)} and has no tested time for ${feet(altitudeFt)}.`,
+    );
   }
   const minutes = row ? baseMinutes + row.addMinutes : null;
 

@@ -2,7 +2,17 @@
 import { PROCESSING_METHODS, isPressureMethod, type Method } from './processing-tables';
 import { requireOneOf } from './validate';
 
-export const PRODUCT_KINDS = ['relish', 'pickle', 'chutney', 'jam', 'jelly', 'fruit-butter', 'sauce', 'salsa', 'other'] as const;
+export const PRODUCT_KINDS = [
+  'relish',
+  'pickle',
+  'chutney',
+  'jam',
+  'jelly',
+  'fruit-butter',
+  'sauce',
+  'salsa',
+  'other',
+] as const;
 export type ProductKind = (typeof PRODUCT_KINDS)[number];
 
 // From memory, not a published figure (NCHFP gives none for opened jars): about a month for relishes

@@ -71,7 +71,8 @@ function readProduct(product: RestockProduct, index: number): RestockProduct {
     minJars: requireWholeNumber(product.minJars, `${label}.minJars`),
     harvestMonths: requireList<number>(product.harvestMonths, `${label}.harvestMonths`).map((month, at) => {
       const checked = requireWholeNumber(month, `${label}.harvestMonths[${at}]`, 1);
-      if (checked > 12) throw new RangeError(`${label}.harvestMonths[${at}] must be a month from 1 to 12; got ${checked}`);
+      if (checked > 12)
+        throw new RangeError(`${label}.harvestMonths[${at}] must be a month from 1 to 12; got ${checked}`);
       return checked;
     }),
     jarSize: requireOneOf(product.jarSize, JAR_SIZES, `${label}.jarSize`),
@@ -86,7 +87,11 @@ export function endOfNextHarvestMonth(today: string, harvestMonths: number[]): s
   return later === undefined ? lastDayOfMonth(yearOf(today) + 1, months[0]) : lastDayOfMonth(yearOf(today), later);
 }
 
-function suggestedJars(today: string, product: RestockProduct, forecast: ProductForecast): { jars: number; lastsUntil: string } {
+function suggestedJars(
+  today: string,
+  product: RestockProduct,
+  forecast: ProductForecast,
+): { jars: number; lastsUntil: string } {
   const lastsUntil = endOfNextHarvestMonth(today, product.harvestMonths);
   const days = daysBetween(today, lastsUntil) + 1;
   const jarsNeeded = Math.ceil((forecast.dailyTbsp * days) / jarCapacityTbsp(product.jarSize) - CRUMB_JARS);

@@ -2,7 +2,14 @@
 import { roundKitchenAmount } from './kitchen-amounts';
 import type { ProductKind } from './products';
 import { INGREDIENT_UNITS, JAR_SIZES, jarFluidOunces, type IngredientUnit, type JarSize } from './units';
-import { requireList, requireNonNegative, requireOneOf, requirePositive, requireRecord, requireWholeNumber } from './validate';
+import {
+  requireList,
+  requireNonNegative,
+  requireOneOf,
+  requirePositive,
+  requireRecord,
+  requireWholeNumber,
+} from './validate';
 
 export const INGREDIENT_ROLES = ['produce', 'acid', 'sweetener', 'spice', 'other'] as const;
 export type IngredientRole = (typeof INGREDIENT_ROLES)[number];

@@ -10,7 +10,15 @@ export type MassUnit = (typeof MASS_UNITS)[number];
 export const INGREDIENT_UNITS = [...VOLUME_UNITS, ...MASS_UNITS, 'each'] as const;
 export type IngredientUnit = (typeof INGREDIENT_UNITS)[number];
 
-export const JAR_SIZES = ['quarter-pint', 'half-pint', 'twelve-ounce', 'pint', 'pint-and-half', 'quart', 'half-gallon'] as const;
+export const JAR_SIZES = [
+  'quarter-pint',
+  'half-pint',
+  'twelve-ounce',
+  'pint',
+  'pint-and-half',
+  'quart',
+  'half-gallon',
+] as const;
 export type JarSize = (typeof JAR_SIZES)[number];
 
 /** NIST Handbook 44, Appendix C: 1 US fluid ounce = 29.5735295625 mL exactly. */

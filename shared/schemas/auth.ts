@@ -13,7 +13,11 @@ export const newPassword = z
   .min(10, 'Use at least 10 characters for your password.')
   .max(200, 'Use at most 200 characters for your password.');
 
-export const personName = z.string({ error: 'Enter your name.' }).trim().min(1, 'Enter your name.').max(LIMITS.length.personName, `Use at most ${LIMITS.length.personName} characters.`);
+export const personName = z
+  .string({ error: 'Enter your name.' })
+  .trim()
+  .min(1, 'Enter your name.')
+  .max(LIMITS.length.personName, `Use at most ${LIMITS.length.personName} characters.`);
 
 export const householdName = z
   .string({ error: 'Name your household.' })
@@ -30,10 +34,20 @@ export interface SignUpSent {
   message: string;
 }
 
-export const signUpToken = z.object({ token: z.string({ error: 'That sign-up link is not complete.' }).min(20, 'That sign-up link is not complete.').max(100) });
+export const signUpToken = z.object({
+  token: z
+    .string({ error: 'That sign-up link is not complete.' })
+    .min(20, 'That sign-up link is not complete.')
+    .max(100),
+});
 
 export const loginBody = z.object({
-  email: z.string({ error: 'Enter your e-mail address.' }).trim().toLowerCase().min(1, 'Enter your e-mail address.').max(254),
+  email: z
+    .string({ error: 'Enter your e-mail address.' })
+    .trim()
+    .toLowerCase()
+    .min(1, 'Enter your e-mail address.')
+    .max(254),
   password: z.string({ error: 'Enter your password.' }).min(1, 'Enter your password.').max(200),
 });
 export type LoginBody = z.infer<typeof loginBody>;

@@ -1,5 +1,13 @@
 import { z } from 'zod';
-import { INGREDIENT_ROLES, INGREDIENT_UNITS, JAR_SIZES, JAR_STATES, PROCESSING_METHODS, PRODUCT_KINDS, RESTOCK_REASONS } from '../domain';
+import {
+  INGREDIENT_ROLES,
+  INGREDIENT_UNITS,
+  JAR_SIZES,
+  JAR_STATES,
+  PROCESSING_METHODS,
+  PRODUCT_KINDS,
+  RESTOCK_REASONS,
+} from '../domain';
 import { householdName } from './auth';
 import { mealTimesBody } from './calendar';
 import { UNIT_SYSTEMS } from './households';
@@ -20,7 +28,8 @@ const date = z.iso.date({ error: 'A date in the file is not written YYYY-MM-DD.'
 const int = (min: number, max: number) => z.number().int().min(min).max(max);
 const text = (max: number) => z.string().max(max);
 const tbsp = z.number().min(0).max(100_000);
-const list = <T extends z.ZodType>(item: T, max: number) => z.array(item).max(max, `The file has more than ${max.toLocaleString('en-US')} of these.`);
+const list = <T extends z.ZodType>(item: T, max: number) =>
+  z.array(item).max(max, `The file has more than ${max.toLocaleString('en-US')} of these.`);
 
 const product = z.object({
   id,
@@ -48,7 +57,10 @@ const recipe = z.object({
   acidified: z.boolean(),
   method: z.enum(PROCESSING_METHODS),
   baseMinutes: z.partialRecord(z.enum(JAR_SIZES), int(0, LIMITS.processingMinutes)),
-  altitudeTable: z.array(z.object({ upToFt: int(0, LIMITS.altitudeFt.max), addMinutes: int(0, LIMITS.processingMinutes) })).max(LIMITS.altitudeRows).nullable(),
+  altitudeTable: z
+    .array(z.object({ upToFt: int(0, LIMITS.altitudeFt.max), addMinutes: int(0, LIMITS.processingMinutes) }))
+    .max(LIMITS.altitudeRows)
+    .nullable(),
   headspaceInches: z.number().min(0).max(LIMITS.headspaceInches),
   steps: text(N.steps),
   source: text(N.source),
@@ -84,7 +96,10 @@ const jar = z.object({
   finishedOn: date.nullable(),
   discardedOn: date.nullable(),
   // Older files carry no label codes; the import then gives fresh ones.
-  code: z.string().regex(/^[0-9A-HJKMNP-TV-Z]{6}$/, 'A label code is 6 letters and digits.').optional(),
+  code: z
+    .string()
+    .regex(/^[0-9A-HJKMNP-TV-Z]{6}$/, 'A label code is 6 letters and digits.')
+    .optional(),
 });
 
 const jarEvent = z.object({
@@ -95,12 +110,45 @@ const jarEvent = z.object({
   happenedOn: date,
 });
 
-const meal = z.object({ id, name: text(N.mealName).min(1), tags: z.array(text(N.mealTag)).max(LIMITS.mealTags), usualServings: int(1, LIMITS.servings), notes: text(N.notes) });
-const mealProduct = z.object({ id, mealId: id, productId: id, tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing) });
-const planEntry = z.object({ id, date, slot: z.enum(SLOTS), position: int(0, LIMITS.planPosition), title: text(N.mealName).min(1), mealId: id.nullable(), servings: int(1, LIMITS.servings) });
-const pairing = z.object({ id, planEntryId: id, productId: id, tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing) });
+const meal = z.object({
+  id,
+  name: text(N.mealName).min(1),
+  tags: z.array(text(N.mealTag)).max(LIMITS.mealTags),
+  usualServings: int(1, LIMITS.servings),
+  notes: text(N.notes),
+});
+const mealProduct = z.object({
+  id,
+  mealId: id,
+  productId: id,
+  tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing),
+});
+const planEntry = z.object({
+  id,
+  date,
+  slot: z.enum(SLOTS),
+  position: int(0, LIMITS.planPosition),
+  title: text(N.mealName).min(1),
+  mealId: id.nullable(),
+  servings: int(1, LIMITS.servings),
+});
+const pairing = z.object({
+  id,
+  planEntryId: id,
+  productId: id,
+  tbspPerServing: z.number().positive().max(LIMITS.tbspPerServing),
+});
 const words = (max: number, items = 50) => z.array(text(max)).max(items);
-const shoppingItem = z.object({ name: text(N.ingredientName), role: z.enum(INGREDIENT_ROLES), amount: z.number().min(0).max(LIMITS.ingredientAmount * 100), unit: z.enum(INGREDIENT_UNITS), text: text(200) });
+const shoppingItem = z.object({
+  name: text(N.ingredientName),
+  role: z.enum(INGREDIENT_ROLES),
+  amount: z
+    .number()
+    .min(0)
+    .max(LIMITS.ingredientAmount * 100),
+  unit: z.enum(INGREDIENT_UNITS),
+  text: text(200),
+});
 /** A restock to-do's batch plan, every field as the server writes it: the to-do page draws each of them. */
 const batchPlan = z.object({
   productId: id,
@@ -118,7 +166,15 @@ const batchPlan = z.object({
     factor: z.number().positive().max(1000),
     acidFactor: z.number().positive().max(1000),
     ingredients: z
-      .array(z.object({ name: text(N.ingredientName), amount: z.number().min(0), exactAmount: z.number().min(0), unit: z.enum(INGREDIENT_UNITS), role: z.enum(INGREDIENT_ROLES) }))
+      .array(
+        z.object({
+          name: text(N.ingredientName),
+          amount: z.number().min(0),
+          exactAmount: z.number().min(0),
+          unit: z.enum(INGREDIENT_UNITS),
+          role: z.enum(INGREDIENT_ROLES),
+        }),
+      )
       .max(LIMITS.ingredientsPerRecipe),
     cautions: words(500),
   }),
@@ -137,7 +193,10 @@ const batchPlan = z.object({
     cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
     cannerLoads: z.array(int(0, LIMITS.cannerCapacityJars)).max(LIMITS.jarsPerBatch),
   }),
-  shopping: z.object({ produce: z.array(shoppingItem).max(LIMITS.ingredientsPerRecipe), pantry: z.array(shoppingItem).max(LIMITS.ingredientsPerRecipe) }),
+  shopping: z.object({
+    produce: z.array(shoppingItem).max(LIMITS.ingredientsPerRecipe),
+    pantry: z.array(shoppingItem).max(LIMITS.ingredientsPerRecipe),
+  }),
   targetOn: date,
   targetWhy: text(1000),
   plannedOn: date,
@@ -161,7 +220,9 @@ const todo = z.object({
 export const householdBackup = z
   .object({
     format: z.literal(BACKUP_FORMAT, { error: 'This is not a Larderly household backup.' }),
-    version: z.literal(BACKUP_VERSION, { error: `This backup was written by another version of Larderly (this one reads version ${BACKUP_VERSION}).` }),
+    version: z.literal(BACKUP_VERSION, {
+      error: `This backup was written by another version of Larderly (this one reads version ${BACKUP_VERSION}).`,
+    }),
     exportedAt: z.iso.datetime({ offset: true }),
     household: z.object({
       name: householdName,

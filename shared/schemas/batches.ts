@@ -1,6 +1,13 @@
 import { z } from 'zod';
 import { LIMITS, limitWords } from './limits';
-import { JAR_SIZES, PROCESSING_METHODS, type JarSize, type JarState, type Method, type ProcessingPlan } from '../domain';
+import {
+  JAR_SIZES,
+  PROCESSING_METHODS,
+  type JarSize,
+  type JarState,
+  type Method,
+  type ProcessingPlan,
+} from '../domain';
 
 // A real calendar date (2026-02-30 is refused), checked by zod's ISO date format.
 export const isoDate = z.iso.date({ error: 'Enter a real date as YYYY-MM-DD.' });
@@ -14,22 +21,46 @@ export const batchCreate = z
     recipeId: z.uuid({ error: 'Choose the tested recipe you followed.' }),
     cannedOn: isoDate,
     jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
-    jarsFilled: z.number({ error: 'Enter how many jars you filled.' }).int('Use a whole number of jars.').min(1, 'Fill at least 1 jar.').max(LIMITS.jarsPerBatch, `Use at most ${LIMITS.jarsPerBatch} jars in one batch.`),
-    jarsSealed: z.number({ error: 'Enter how many jars sealed.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(LIMITS.jarsPerBatch, `Use at most ${LIMITS.jarsPerBatch} jars.`),
+    jarsFilled: z
+      .number({ error: 'Enter how many jars you filled.' })
+      .int('Use a whole number of jars.')
+      .min(1, 'Fill at least 1 jar.')
+      .max(LIMITS.jarsPerBatch, `Use at most ${LIMITS.jarsPerBatch} jars in one batch.`),
+    jarsSealed: z
+      .number({ error: 'Enter how many jars sealed.' })
+      .int('Use a whole number of jars.')
+      .min(0, 'Use 0 or more jars.')
+      .max(LIMITS.jarsPerBatch, `Use at most ${LIMITS.jarsPerBatch} jars.`),
     method: z.enum(PROCESSING_METHODS, { error: 'Choose the canner you used.' }),
     headspaceInches: z.number().min(0).max(LIMITS.headspaceInches).optional(),
-    notes: z.string().max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`).default(''),
+    notes: z
+      .string()
+      .max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`)
+      .default(''),
     /** 'to-check': recorded right after processing, every jar's seal is checked once it has cooled. */
-    seals: z.enum(SEAL_STATES, { error: 'Say whether the seals are checked already or still to check.' }).default('checked'),
+    seals: z
+      .enum(SEAL_STATES, { error: 'Say whether the seals are checked already or still to check.' })
+      .default('checked'),
   })
   .strict()
-  .refine((batch) => batch.jarsSealed <= batch.jarsFilled, { path: ['jarsSealed'], message: 'More jars cannot seal than were filled.' });
+  .refine((batch) => batch.jarsSealed <= batch.jarsFilled, {
+    path: ['jarsSealed'],
+    message: 'More jars cannot seal than were filled.',
+  });
 export type BatchCreate = z.input<typeof batchCreate>;
 
 /** Jars picked jar by jar, or a count (the batch's last jars by code). */
 const jarPick = z.union([
   z.object({ jarIds: z.array(z.uuid({ error: 'A jar in the list was not found.' })).max(200) }).strict(),
-  z.object({ count: z.number({ error: 'Enter how many jars.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(200) }).strict(),
+  z
+    .object({
+      count: z
+        .number({ error: 'Enter how many jars.' })
+        .int('Use a whole number of jars.')
+        .min(0, 'Use 0 or more jars.')
+        .max(200),
+    })
+    .strict(),
 ]);
 
 /** The seal check of a batch's jars to check: every jar not named sealed; those named go to the fridge or are reprocessed. */
@@ -218,6 +249,9 @@ export interface ImportProblem {
 }
 
 export const importBody = z.object({
-  csv: z.string({ error: 'Choose a CSV file.' }).min(1, 'The file is empty.').max(500_000, 'Use a file of at most 500 kB.'),
+  csv: z
+    .string({ error: 'Choose a CSV file.' })
+    .min(1, 'The file is empty.')
+    .max(500_000, 'Use a file of at most 500 kB.'),
   commit: z.boolean().default(false),
 });

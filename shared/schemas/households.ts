@@ -18,14 +18,20 @@ export const householdPatch = z
       .max(LIMITS.altitudeFt.max, `The altitude cannot be above ${limitWords(LIMITS.altitudeFt.max)} ft.`)
       .optional(),
     unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose US customary or metric units.' }).optional(),
-    timeZone: z
-      .string()
-      .max(64)
-      .refine(isTimeZone, 'Choose a time zone such as America/Denver.')
+    timeZone: z.string().max(64).refine(isTimeZone, 'Choose a time zone such as America/Denver.').optional(),
+    bestQualityMonths: z
+      .number()
+      .int('Use whole months.')
+      .min(1, 'Use at least 1 month.')
+      .max(LIMITS.bestQualityMonths, `Use at most ${LIMITS.bestQualityMonths} months.`)
       .optional(),
-    bestQualityMonths: z.number().int('Use whole months.').min(1, 'Use at least 1 month.').max(LIMITS.bestQualityMonths, `Use at most ${LIMITS.bestQualityMonths} months.`).optional(),
     weekStartsOn: z.number().int().min(0, 'Choose a day of the week.').max(6, 'Choose a day of the week.').optional(),
-    cannerCapacityJars: z.number().int('Use a whole number of jars.').min(1, 'A canner holds at least 1 jar.').max(LIMITS.cannerCapacityJars, `Use at most ${LIMITS.cannerCapacityJars} jars.`).optional(),
+    cannerCapacityJars: z
+      .number()
+      .int('Use a whole number of jars.')
+      .min(1, 'A canner holds at least 1 jar.')
+      .max(LIMITS.cannerCapacityJars, `Use at most ${LIMITS.cannerCapacityJars} jars.`)
+      .optional(),
     defaultMethod: z.enum(PROCESSING_METHODS, { error: 'Choose a processing method.' }).optional(),
   })
   .strict();

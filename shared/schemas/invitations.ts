@@ -2,7 +2,9 @@ import { z } from 'zod';
 import { ROLES, type Role } from '../roles';
 import { email, newPassword, personName } from './auth';
 
-export const invitationBody = z.object({ email, role: z.enum(ROLES, { error: 'Choose keeper, cook or helper.' }) }).strict();
+export const invitationBody = z
+  .object({ email, role: z.enum(ROLES, { error: 'Choose keeper, cook or helper.' }) })
+  .strict();
 export type InvitationBody = z.infer<typeof invitationBody>;
 
 /**

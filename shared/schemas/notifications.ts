@@ -7,8 +7,18 @@ export const notificationPatch = z
   .object({
     emailReminders: z.boolean({ error: 'Choose on or off.' }).optional(),
     weeklyDigest: z.boolean({ error: 'Choose on or off.' }).optional(),
-    reminderHour: z.number({ error: 'Choose an hour.' }).int('Choose a whole hour.').min(0, 'Choose an hour from 0 to 23.').max(23, 'Choose an hour from 0 to 23.').optional(),
-    daysBefore: z.number({ error: 'Choose how many days before.' }).int('Use whole days.').min(1, 'Use at least 1 day.').max(14, 'Use at most 14 days.').optional(),
+    reminderHour: z
+      .number({ error: 'Choose an hour.' })
+      .int('Choose a whole hour.')
+      .min(0, 'Choose an hour from 0 to 23.')
+      .max(23, 'Choose an hour from 0 to 23.')
+      .optional(),
+    daysBefore: z
+      .number({ error: 'Choose how many days before.' })
+      .int('Use whole days.')
+      .min(1, 'Use at least 1 day.')
+      .max(14, 'Use at most 14 days.')
+      .optional(),
   })
   .strict();
 export type NotificationPatch = z.infer<typeof notificationPatch>;
@@ -22,7 +32,10 @@ export interface NotificationSettings {
   pushDevices: number;
 }
 
-const base64url = (what: string) => z.string({ error: `The subscription has no ${what} key.` }).regex(/^[A-Za-z0-9_-]+={0,2}$/, `The ${what} key is not base64url.`);
+const base64url = (what: string) =>
+  z
+    .string({ error: `The subscription has no ${what} key.` })
+    .regex(/^[A-Za-z0-9_-]+={0,2}$/, `The ${what} key is not base64url.`);
 
 /** What PushSubscription.toJSON() gives in a browser. */
 export const pushSubscriptionBody = z.object({
@@ -36,4 +49,6 @@ export const pushSubscriptionBody = z.object({
 });
 export type PushSubscriptionBody = z.infer<typeof pushSubscriptionBody>;
 
-export const pushUnsubscribeBody = z.object({ endpoint: z.string().min(1, 'Say which subscription to remove.').max(2000) });
+export const pushUnsubscribeBody = z.object({
+  endpoint: z.string().min(1, 'Say which subscription to remove.').max(2000),
+});

@@ -6,13 +6,30 @@ import { PRODUCT_COLOURS, type ProductColour } from '../words';
 export { PRODUCT_COLOURS, type ProductColour };
 
 const fields = {
-  name: z.string({ error: 'Give the product a name.' }).trim().min(1, 'Give the product a name.').max(LIMITS.length.productName, `Use at most ${LIMITS.length.productName} characters.`),
+  name: z
+    .string({ error: 'Give the product a name.' })
+    .trim()
+    .min(1, 'Give the product a name.')
+    .max(LIMITS.length.productName, `Use at most ${LIMITS.length.productName} characters.`),
   kind: z.enum(PRODUCT_KINDS, { error: 'Choose the kind of preserve.' }),
-  heat: z.number({ error: 'Choose a heat from 0 to 5.' }).int('Choose a heat from 0 to 5.').min(0, 'Choose a heat from 0 to 5.').max(LIMITS.heat, 'Choose a heat from 0 to 5.'),
+  heat: z
+    .number({ error: 'Choose a heat from 0 to 5.' })
+    .int('Choose a heat from 0 to 5.')
+    .min(0, 'Choose a heat from 0 to 5.')
+    .max(LIMITS.heat, 'Choose a heat from 0 to 5.'),
   favourite: z.boolean({ error: 'Say whether it is a favourite.' }),
-  minJars: z.number({ error: 'Enter the fewest jars to keep as a number.' }).int('Use a whole number of jars.').min(0, 'Use 0 or more jars.').max(LIMITS.minJars, `Use at most ${LIMITS.minJars} jars.`),
+  minJars: z
+    .number({ error: 'Enter the fewest jars to keep as a number.' })
+    .int('Use a whole number of jars.')
+    .min(0, 'Use 0 or more jars.')
+    .max(LIMITS.minJars, `Use at most ${LIMITS.minJars} jars.`),
   /** null: the default for the product's kind */
-  useWithinDays: z.number({ error: 'Enter the days as a number.' }).int('Use whole days.').min(1, 'Use at least 1 day.').max(LIMITS.useWithinDays, `Use at most ${LIMITS.useWithinDays} days.`).nullable(),
+  useWithinDays: z
+    .number({ error: 'Enter the days as a number.' })
+    .int('Use whole days.')
+    .min(1, 'Use at least 1 day.')
+    .max(LIMITS.useWithinDays, `Use at most ${LIMITS.useWithinDays} days.`)
+    .nullable(),
   harvestMonths: z.array(z.number().int().min(1, 'Months run 1 to 12.').max(12, 'Months run 1 to 12.')).max(12),
   jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
   colour: z.enum(PRODUCT_COLOURS, { error: 'Choose a colour.' }),

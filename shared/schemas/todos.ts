@@ -1,7 +1,16 @@
 import { z } from 'zod';
 import { TODO_FILTERS } from '../choices';
 import { LIMITS, limitWords } from './limits';
-import { JAR_SIZES, type IngredientRole, type IngredientUnit, type JarSize, type Method, type ProcessingPlan, type RestockReason, type ScaledRecipe } from '../domain';
+import {
+  JAR_SIZES,
+  type IngredientRole,
+  type IngredientUnit,
+  type JarSize,
+  type Method,
+  type ProcessingPlan,
+  type RestockReason,
+  type ScaledRecipe,
+} from '../domain';
 
 export const TODO_KINDS = ['plain', 'restock'] as const;
 export type TodoKind = (typeof TODO_KINDS)[number];
@@ -10,11 +19,19 @@ export { TODO_FILTERS, type TodoFilter } from '../choices';
 
 // A real calendar date (2026-02-30 is refused).
 const isoDate = z.iso.date({ error: 'Use a real date such as 2026-09-14.' });
-const title = z.string().trim().min(1, 'Give the to-do a title.').max(LIMITS.length.todoTitle, `Keep the title under ${LIMITS.length.todoTitle} characters.`);
-const notes = z.string().max(LIMITS.length.todoNotes, `Keep the notes under ${limitWords(LIMITS.length.todoNotes)} characters.`);
+const title = z
+  .string()
+  .trim()
+  .min(1, 'Give the to-do a title.')
+  .max(LIMITS.length.todoTitle, `Keep the title under ${LIMITS.length.todoTitle} characters.`);
+const notes = z
+  .string()
+  .max(LIMITS.length.todoNotes, `Keep the notes under ${limitWords(LIMITS.length.todoNotes)} characters.`);
 const assignee = z.uuid({ error: 'Choose a member of the household.' }).nullable();
 
-export const todoListQuery = z.object({ filter: z.enum(TODO_FILTERS, { error: 'Filter by open, mine, done or all.' }).default('all') });
+export const todoListQuery = z.object({
+  filter: z.enum(TODO_FILTERS, { error: 'Filter by open, mine, done or all.' }).default('all'),
+});
 
 export const todoCreate = z
   .object({ title, notes: notes.optional(), dueOn: isoDate.nullable().optional(), assigneeId: assignee.optional() })
@@ -28,7 +45,12 @@ export const todoPatch = z
     dueOn: isoDate.nullable().optional(),
     assigneeId: assignee.optional(),
     done: z.boolean({ error: 'Done is true or false.' }).optional(),
-    position: z.number().int('A position is a whole number.').min(0, 'A position starts at 0.').max(LIMITS.todoPosition).optional(),
+    position: z
+      .number()
+      .int('A position is a whole number.')
+      .min(0, 'A position starts at 0.')
+      .max(LIMITS.todoPosition)
+      .optional(),
   })
   .strict()
   .refine((patch) => Object.keys(patch).length > 0, 'Send at least one field to change.');
@@ -36,7 +58,12 @@ export type TodoPatch = z.infer<typeof todoPatch>;
 
 export const restockTodoCreate = z
   .object({
-    jars: z.number().int('Use a whole number of jars.').min(1, 'Make at least 1 jar.').max(LIMITS.jarsPerBatch, `Plan at most ${LIMITS.jarsPerBatch} jars at a time.`).optional(),
+    jars: z
+      .number()
+      .int('Use a whole number of jars.')
+      .min(1, 'Make at least 1 jar.')
+      .max(LIMITS.jarsPerBatch, `Plan at most ${LIMITS.jarsPerBatch} jars at a time.`)
+      .optional(),
     jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }).optional(),
   })
   .strict();

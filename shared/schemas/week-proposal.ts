@@ -10,7 +10,11 @@ const slotChoice = z.object({ date: isoDate, slot, mealId: id }).strict();
 /** What to fill: every open slot of the week, one day's, or one kind of slot (the lunches). */
 export const proposalScope = z.discriminatedUnion(
   'kind',
-  [z.object({ kind: z.literal('week') }).strict(), z.object({ kind: z.literal('day'), date: isoDate }).strict(), z.object({ kind: z.literal('slot'), slot }).strict()],
+  [
+    z.object({ kind: z.literal('week') }).strict(),
+    z.object({ kind: z.literal('day'), date: isoDate }).strict(),
+    z.object({ kind: z.literal('slot'), slot }).strict(),
+  ],
   { error: 'Ask for the week, a day or one kind of slot.' },
 );
 export type ProposalScope = z.infer<typeof proposalScope>;
@@ -19,7 +23,12 @@ export const proposalRequest = z
   .object({
     start: isoDate,
     scope: proposalScope,
-    varietyDays: z.number({ error: 'Variety is a number of days.' }).int('Use whole days.').min(1, 'Variety is at least 1 day.').max(14, 'Variety is at most 14 days.').default(DEFAULT_VARIETY_DAYS),
+    varietyDays: z
+      .number({ error: 'Variety is a number of days.' })
+      .int('Use whole days.')
+      .min(1, 'Variety is at least 1 day.')
+      .max(14, 'Variety is at most 14 days.')
+      .default(DEFAULT_VARIETY_DAYS),
     /** proposed meals the cook keeps while asking again or swapping one */
     keep: z.array(slotChoice).max(28, 'Keep at most 28 meals.').default([]),
     /** meals the cook turned down in a slot */
@@ -37,7 +46,11 @@ export const proposalAccept = z
             date: isoDate,
             slot,
             mealId: id,
-            servings: z.number().int('Use whole servings.').min(1, 'Plan at least 1 serving.').max(100, 'Plan at most 100 servings.'),
+            servings: z
+              .number()
+              .int('Use whole servings.')
+              .min(1, 'Plan at least 1 serving.')
+              .max(100, 'Plan at most 100 servings.'),
             eaters: z.array(id).max(50).nullable(),
           })
           .strict(),
@@ -48,7 +61,11 @@ export const proposalAccept = z
   .strict();
 export type ProposalAccept = z.input<typeof proposalAccept>;
 
-export const proposalUndo = z.object({ entryIds: z.array(id).min(1, 'Name the planned meals to take back.').max(28, 'Take back at most 28 meals at once.') }).strict();
+export const proposalUndo = z
+  .object({
+    entryIds: z.array(id).min(1, 'Name the planned meals to take back.').max(28, 'Take back at most 28 meals at once.'),
+  })
+  .strict();
 
 export const wasteQuery = z.object({ start: isoDate });
 

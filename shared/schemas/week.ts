@@ -10,22 +10,42 @@ export { dayOfWeek, weekDates, weekStartOf } from '../domain';
 const isoDate = z.iso.date({ error: 'Use a date written YYYY-MM-DD.' });
 const id = z.uuid({ error: 'That id is not valid.' });
 const slot = z.enum(SLOTS, { error: 'Choose breakfast, lunch, dinner or snack.' });
-const servings = z.number({ error: 'Servings must be a number.' }).int('Use whole servings.').min(1, 'Plan at least 1 serving.').max(LIMITS.servings, `Plan at most ${LIMITS.servings} servings.`);
+const servings = z
+  .number({ error: 'Servings must be a number.' })
+  .int('Use whole servings.')
+  .min(1, 'Plan at least 1 serving.')
+  .max(LIMITS.servings, `Plan at most ${LIMITS.servings} servings.`);
 const tbspPerServing = z
   .number({ error: 'The portion must be a number of tablespoons.' })
   .positive('A portion is more than 0 tablespoons.')
   .max(LIMITS.tbspPerServing, `A portion is at most ${LIMITS.tbspPerServing} tablespoons (a quart) per serving.`);
-const title = z.string({ error: 'Name the meal.' }).trim().min(1, 'Name the meal.').max(LIMITS.length.mealName, `Use at most ${LIMITS.length.mealName} characters.`);
-const position = z.number().int('Positions are whole numbers.').min(0, 'Positions start at 0.').max(LIMITS.planPosition);
+const title = z
+  .string({ error: 'Name the meal.' })
+  .trim()
+  .min(1, 'Name the meal.')
+  .max(LIMITS.length.mealName, `Use at most ${LIMITS.length.mealName} characters.`);
+const position = z
+  .number()
+  .int('Positions are whole numbers.')
+  .min(0, 'Positions start at 0.')
+  .max(LIMITS.planPosition);
 
 export const mealProductInput = z.object({ productId: id, tbspPerServing }).strict();
 
 export const mealBody = z
   .object({
     name: title,
-    tags: z.array(z.string().trim().min(1).max(LIMITS.length.mealTag, `A tag is at most ${LIMITS.length.mealTag} characters.`)).max(LIMITS.mealTags, `Use at most ${LIMITS.mealTags} tags.`).default([]),
+    tags: z
+      .array(
+        z.string().trim().min(1).max(LIMITS.length.mealTag, `A tag is at most ${LIMITS.length.mealTag} characters.`),
+      )
+      .max(LIMITS.mealTags, `Use at most ${LIMITS.mealTags} tags.`)
+      .default([]),
     usualServings: servings.default(2),
-    notes: z.string().max(LIMITS.length.notes, `Notes are at most ${limitWords(LIMITS.length.notes)} characters.`).default(''),
+    notes: z
+      .string()
+      .max(LIMITS.length.notes, `Notes are at most ${limitWords(LIMITS.length.notes)} characters.`)
+      .default(''),
     products: z.array(mealProductInput).max(12, 'Pair a meal with at most 12 products.').default([]),
   })
   .strict();
@@ -46,7 +66,10 @@ export const planEntryCreate = z
     servings: servings.optional(),
   })
   .strict()
-  .refine((v) => v.mealId !== undefined || v.title !== undefined, { message: 'Choose a meal from the library or name one.', path: ['title'] });
+  .refine((v) => v.mealId !== undefined || v.title !== undefined, {
+    message: 'Choose a meal from the library or name one.',
+    path: ['title'],
+  });
 export type PlanEntryCreate = z.input<typeof planEntryCreate>;
 
 export const planEntryPatch = z
@@ -66,13 +89,24 @@ export const pairingCreate = z.object({ productId: id, tbspPerServing: tbspPerSe
 export type PairingCreate = z.input<typeof pairingCreate>;
 export const pairingPatch = z.object({ tbspPerServing }).strict();
 
-export const weekCopy = z.object({ from: isoDate, to: isoDate }).strict().refine((v) => v.from !== v.to, { message: 'Copy to another week.', path: ['to'] });
+export const weekCopy = z
+  .object({ from: isoDate, to: isoDate })
+  .strict()
+  .refine((v) => v.from !== v.to, { message: 'Copy to another week.', path: ['to'] });
 export type WeekCopy = z.input<typeof weekCopy>;
 
 export const preferencesPatch = z
   .object({
-    heatTolerance: z.number({ error: 'Heat tolerance is a number from 0 to 5.' }).int().min(0, 'Heat tolerance is 0 to 5.').max(5, 'Heat tolerance is 0 to 5.').optional(),
-    dietTags: z.array(z.enum(DIET_TAGS, { error: 'Choose no-added-sugar or low-salt.' })).max(DIET_TAGS.length).optional(),
+    heatTolerance: z
+      .number({ error: 'Heat tolerance is a number from 0 to 5.' })
+      .int()
+      .min(0, 'Heat tolerance is 0 to 5.')
+      .max(5, 'Heat tolerance is 0 to 5.')
+      .optional(),
+    dietTags: z
+      .array(z.enum(DIET_TAGS, { error: 'Choose no-added-sugar or low-salt.' }))
+      .max(DIET_TAGS.length)
+      .optional(),
   })
   .strict();
 export type PreferencesPatch = z.input<typeof preferencesPatch>;
@@ -160,4 +194,3 @@ export interface WeekView {
   products: WeekProduct[];
   members: WeekMember[];
 }
-

@@ -15,7 +15,11 @@ function parseISO(isoDate: string): Date {
 /** "Tue, Jun 9" for 2026-06-09; with the year ("Tue, Aug 31, 2027") when it is not `thisYear`. */
 export function dateWords(isoDate: string, thisYear = new Date().getFullYear()): string {
   const day = parseISO(isoDate);
-  return intlFormat(day, { weekday: 'short', month: 'short', day: 'numeric', year: day.getFullYear() === thisYear ? undefined : 'numeric' }, US);
+  return intlFormat(
+    day,
+    { weekday: 'short', month: 'short', day: 'numeric', year: day.getFullYear() === thisYear ? undefined : 'numeric' },
+    US,
+  );
 }
 
 /** "Jun 9", for the week board's column heads and a week's range. */

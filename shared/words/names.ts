@@ -5,7 +5,13 @@ import type { JarState, Method, ProductKind } from '../domain';
 export const PRODUCT_COLOURS = ['honey', 'leaf', 'brine', 'earth', 'wheat'] as const;
 export type ProductColour = (typeof PRODUCT_COLOURS)[number];
 
-export const PRODUCT_COLOUR_NAMES: Record<ProductColour, string> = { honey: 'Honey', leaf: 'Leaf green', brine: 'Brine teal', earth: 'Earth brown', wheat: 'Wheat' };
+export const PRODUCT_COLOUR_NAMES: Record<ProductColour, string> = {
+  honey: 'Honey',
+  leaf: 'Leaf green',
+  brine: 'Brine teal',
+  earth: 'Earth brown',
+  wheat: 'Wheat',
+};
 
 export const PRODUCT_KIND_NAMES: Record<ProductKind, string> = {
   relish: 'Relish',
@@ -43,7 +49,12 @@ export function heatWords(heat: number, asChoice = false): string {
 }
 
 /** A jar's state as a badge says it. */
-export const JAR_STATE_NAMES: Record<JarState, string> = { sealed: 'sealed', opened: 'opened, in the fridge', finished: 'finished', discarded: 'discarded' };
+export const JAR_STATE_NAMES: Record<JarState, string> = {
+  sealed: 'sealed',
+  opened: 'opened, in the fridge',
+  finished: 'finished',
+  discarded: 'discarded',
+};
 export const UNSEALED_STATE_NAME = 'did not seal, in the fridge';
 
 /** What a person does with a jar; the fridge, the jar's page and the shelf say the same. */

@@ -22,7 +22,14 @@ function FirstLoad() {
 
 /** Every route its own error boundary: a screen that fails shows what happened inside the layout, whose navigation still works. */
 function withBoundaries(routes: RouteObject[]): RouteObject[] {
-  return routes.map((route) => ({ ErrorBoundary: RouteError, ...route, ...(route.children ? { children: withBoundaries(route.children) } : {}) }) as RouteObject);
+  return routes.map(
+    (route) =>
+      ({
+        ErrorBoundary: RouteError,
+        ...route,
+        ...(route.children ? { children: withBoundaries(route.children) } : {}),
+      }) as RouteObject,
+  );
 }
 
 const routes = withBoundaries([
@@ -31,10 +38,21 @@ const routes = withBoundaries([
     Component: RootLayout,
     HydrateFallback: FirstLoad,
     children: [
-      { path: '/sign-in', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }) },
+      {
+        path: '/sign-in',
+        loader: warmMe,
+        lazy: async () => ({ Component: (await import('./routes/sign-in')).SignInRoute }),
+      },
       { path: '/sign-up', lazy: async () => ({ Component: (await import('./routes/sign-up')).SignUpRoute }) },
-      { path: '/sign-up/confirm/:token', lazy: async () => ({ Component: (await import('./routes/sign-up-confirm')).SignUpConfirmRoute }) },
-      { path: '/invite/:token', loader: warmMe, lazy: async () => ({ Component: (await import('./routes/invite')).InviteRoute }) },
+      {
+        path: '/sign-up/confirm/:token',
+        lazy: async () => ({ Component: (await import('./routes/sign-up-confirm')).SignUpConfirmRoute }),
+      },
+      {
+        path: '/invite/:token',
+        loader: warmMe,
+        lazy: async () => ({ Component: (await import('./routes/invite')).InviteRoute }),
+      },
       {
         loader: warmMe,
         lazy: async () => ({ Component: (await import('@/app/layouts/require-auth')).RequireAuth }),
@@ -42,7 +60,10 @@ const routes = withBoundaries([
           { path: '/', lazy: async () => ({ Component: (await import('./routes/home-redirect')).HomeRedirect }) },
           // Outside the household layout: a label's page finds its household from the jar, and a label sheet prints bare.
           { path: '/j/:code', lazy: async () => ({ Component: (await import('./routes/jar')).JarRoute }) },
-          { path: '/h/:hid/batches/:batchId/labels', lazy: async () => ({ Component: (await import('./routes/batch-labels')).BatchLabelsRoute }) },
+          {
+            path: '/h/:hid/batches/:batchId/labels',
+            lazy: async () => ({ Component: (await import('./routes/batch-labels')).BatchLabelsRoute }),
+          },
           {
             path: '/h/:hid',
             lazy: async () => ({ Component: (await import('@/app/layouts/app-layout')).AppLayout }),
@@ -60,19 +81,46 @@ const routes = withBoundaries([
               { path: 'shelf', lazy: async () => ({ Component: (await import('./routes/shelf')).ShelfRoute }) },
               { path: 'fridge', lazy: async () => ({ Component: (await import('./routes/fridge')).FridgeRoute }) },
               { path: 'batches', lazy: async () => ({ Component: (await import('./routes/batches')).BatchesRoute }) },
-              { path: 'batches/new', lazy: async () => ({ Component: (await import('./routes/batch-new')).NewBatchRoute }) },
-              { path: 'batches/:batchId', lazy: async () => ({ Component: (await import('./routes/batch-detail')).BatchDetailRoute }) },
+              {
+                path: 'batches/new',
+                lazy: async () => ({ Component: (await import('./routes/batch-new')).NewBatchRoute }),
+              },
+              {
+                path: 'batches/:batchId',
+                lazy: async () => ({ Component: (await import('./routes/batch-detail')).BatchDetailRoute }),
+              },
               { path: 'recipes', lazy: async () => ({ Component: (await import('./routes/recipes')).RecipesRoute }) },
-              { path: 'recipes/new', lazy: async () => ({ Component: (await import('./routes/recipe-edit')).RecipeEditRoute }) },
-              { path: 'recipes/:recipeId', lazy: async () => ({ Component: (await import('./routes/recipe-card')).RecipeCardRoute }) },
-              { path: 'recipes/:recipeId/edit', lazy: async () => ({ Component: (await import('./routes/recipe-edit')).RecipeEditRoute }) },
-              { path: 'products/new', lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }) },
-              { path: 'products/:productId', lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }) },
+              {
+                path: 'recipes/new',
+                lazy: async () => ({ Component: (await import('./routes/recipe-edit')).RecipeEditRoute }),
+              },
+              {
+                path: 'recipes/:recipeId',
+                lazy: async () => ({ Component: (await import('./routes/recipe-card')).RecipeCardRoute }),
+              },
+              {
+                path: 'recipes/:recipeId/edit',
+                lazy: async () => ({ Component: (await import('./routes/recipe-edit')).RecipeEditRoute }),
+              },
+              {
+                path: 'products/new',
+                lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }),
+              },
+              {
+                path: 'products/:productId',
+                lazy: async () => ({ Component: (await import('./routes/product-edit')).ProductEditRoute }),
+              },
               { path: 'restock', lazy: async () => ({ Component: (await import('./routes/restock')).RestockRoute }) },
               { path: 'todo', lazy: async () => ({ Component: (await import('./routes/todo')).TodoRoute }) },
               { path: 'setup', lazy: async () => ({ Component: (await import('./routes/setup')).SetupRoute }) },
-              { path: 'household', lazy: async () => ({ Component: (await import('./routes/household')).HouseholdRoute }) },
-              { path: 'household/mail', lazy: async () => ({ Component: (await import('./routes/dev-mail')).DevMailRoute }) },
+              {
+                path: 'household',
+                lazy: async () => ({ Component: (await import('./routes/household')).HouseholdRoute }),
+              },
+              {
+                path: 'household/mail',
+                lazy: async () => ({ Component: (await import('./routes/dev-mail')).DevMailRoute }),
+              },
             ],
           },
         ],

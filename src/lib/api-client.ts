@@ -15,7 +15,12 @@ export class ApiError extends Error {
 function actionOf(details: unknown): ApiError['action'] {
   const action = (details as { action?: { label?: unknown; href?: unknown } } | undefined)?.action;
   // Only an address inside the app: the link is followed without a page load.
-  return typeof action?.label === 'string' && typeof action.href === 'string' && action.href.startsWith('/') && !action.href.startsWith('//') ? { label: action.label, href: action.href } : undefined;
+  return typeof action?.label === 'string' &&
+    typeof action.href === 'string' &&
+    action.href.startsWith('/') &&
+    !action.href.startsWith('//')
+    ? { label: action.label, href: action.href }
+    : undefined;
 }
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
@@ -44,7 +49,13 @@ async function request<T>(method: Method, url: string, body?: unknown, options: 
   const payload = await response.json().catch(() => null);
   if (!response.ok) {
     const error = payload?.error;
-    throw new ApiError(response.status, error?.code ?? 'unknown', error?.message ?? `The server answered ${response.status}. Try again.`, error?.fields, actionOf(error?.details));
+    throw new ApiError(
+      response.status,
+      error?.code ?? 'unknown',
+      error?.message ?? `The server answered ${response.status}. Try again.`,
+      error?.fields,
+      actionOf(error?.details),
+    );
   }
   return payload as T;
 }

@@ -7,6 +7,11 @@ export interface PublicConfig {
   publicOrigin: string | null;
 }
 
-export const publicConfigQueryOptions = () => queryOptions({ queryKey: publicConfigKeys.config, queryFn: () => api.get<PublicConfig>('/config'), staleTime: Infinity });
+export const publicConfigQueryOptions = () =>
+  queryOptions({
+    queryKey: publicConfigKeys.config,
+    queryFn: () => api.get<PublicConfig>('/config'),
+    staleTime: Infinity,
+  });
 
 export const usePublicConfig = () => useQuery(publicConfigQueryOptions());

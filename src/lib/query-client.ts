@@ -27,7 +27,8 @@ export const queryClient: QueryClient = new QueryClient({
       staleTime: 30_000,
       // As long as the saved copy, so a screen read days ago still opens offline.
       gcTime: KEPT_FOR_MS,
-      retry: (failureCount, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failureCount < 2,
+      retry: (failureCount, error) =>
+        !(error instanceof ApiError && error.status >= 400 && error.status < 500) && failureCount < 2,
     },
   },
 });

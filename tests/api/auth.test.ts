@@ -10,7 +10,9 @@ afterAll(() => ctx.close());
 
 describe('sign-in and sign-out', () => {
   it('signs in with the right password and sets an httpOnly, SameSite=Lax session cookie', async () => {
-    const response = await ctx.request.post('/api/auth/login').send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });
+    const response = await ctx.request
+      .post('/api/auth/login')
+      .send({ email: 'keeper@larderly.test', password: DEMO_PASSWORD });
     expect(response.status).toBe(200);
     expect(response.body.user).toMatchObject({ email: 'keeper@larderly.test', name: 'Wren Calloway' });
     const cookie = String(response.headers['set-cookie']);
@@ -20,8 +22,12 @@ describe('sign-in and sign-out', () => {
   });
 
   it('gives the same 401 for a wrong password and for an unknown e-mail', async () => {
-    const wrongPassword = await ctx.request.post('/api/auth/login').send({ email: 'keeper@larderly.test', password: 'not the password' });
-    const unknownEmail = await ctx.request.post('/api/auth/login').send({ email: 'nobody@larderly.test', password: 'not the password' });
+    const wrongPassword = await ctx.request
+      .post('/api/auth/login')
+      .send({ email: 'keeper@larderly.test', password: 'not the password' });
+    const unknownEmail = await ctx.request
+      .post('/api/auth/login')
+      .send({ email: 'nobody@larderly.test', password: 'not the password' });
     expect(wrongPassword.status).toBe(401);
     expect(unknownEmail.status).toBe(401);
     expect(wrongPassword.body).toEqual(unknownEmail.body);
@@ -30,15 +36,25 @@ describe('sign-in and sign-out', () => {
   it('issues a new session id at sign-in', async () => {
     const agent = request.agent(ctx.app);
     await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD });
-    const first = String((await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD })).headers['set-cookie']);
-    const second = String((await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD })).headers['set-cookie']);
+    const first = String(
+      (await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD })).headers[
+        'set-cookie'
+      ],
+    );
+    const second = String(
+      (await agent.post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD })).headers[
+        'set-cookie'
+      ],
+    );
     expect(first.split(';')[0]).not.toBe(second.split(';')[0]);
   });
 
   it('keeps the session in PostgreSQL', async () => {
     const agent = await ctx.signedIn('helper@larderly.test');
     expect((await agent.get('/api/auth/me')).status).toBe(200);
-    const [rows] = await ctx.sequelize.query(`SELECT count(*)::int AS n FROM sessions WHERE sess::text LIKE '%passport%'`);
+    const [rows] = await ctx.sequelize.query(
+      `SELECT count(*)::int AS n FROM sessions WHERE sess::text LIKE '%passport%'`,
+    );
     expect((rows as { n: number }[])[0].n).toBeGreaterThan(0);
   });
 
@@ -53,7 +69,9 @@ describe('sign-in and sign-out', () => {
   it('lists every household of a person with the role held in each', async () => {
     const agent = await ctx.signedIn('keeper@larderly.test');
     const me = await agent.get('/api/auth/me');
-    expect(me.body.memberships).toEqual([{ householdId: ctx.householdId, householdName: 'Calloway Hollow', role: 'keeper' }]);
+    expect(me.body.memberships).toEqual([
+      { householdId: ctx.householdId, householdName: 'Calloway Hollow', role: 'keeper' },
+    ]);
   });
 });
 
@@ -69,7 +87,10 @@ describe('requests from another site', () => {
 
   it('refuses a cross-site PATCH even with a valid session', async () => {
     const agent = await ctx.signedIn('keeper@larderly.test');
-    const response = await agent.patch(`/api/households/${ctx.householdId}`).set('Origin', 'https://elsewhere.example').send({ name: 'Taken over' });
+    const response = await agent
+      .patch(`/api/households/${ctx.householdId}`)
+      .set('Origin', 'https://elsewhere.example')
+      .send({ name: 'Taken over' });
     expect(response.status).toBe(403);
     const after = await agent.get(`/api/households/${ctx.householdId}`);
     expect(after.body.household.name).toBe('Calloway Hollow');

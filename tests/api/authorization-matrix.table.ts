@@ -130,22 +130,39 @@ export const TABLE: Record<string, RouteRule> = {
   [`GET ${H}/calendar-feed`]: { access: 'read' },
   [`POST ${H}/calendar-feed`]: { access: 'read' },
   [`DELETE ${H}/calendar-feed`]: { access: 'read' },
-  [`PUT ${H}/meal-times`]: { access: 'manage', body: () => ({ breakfast: '08:00', lunch: '12:30', snack: '15:30', dinner: '18:30' }) },
+  [`PUT ${H}/meal-times`]: {
+    access: 'manage',
+    body: () => ({ breakfast: '08:00', lunch: '12:30', snack: '15:30', dinner: '18:30' }),
+  },
 
   [`GET ${H}/products`]: { access: 'read' },
   [`GET ${H}/products/:productId`]: { access: 'read' },
-  [`POST ${H}/products`]: { access: 'cook', body: () => ({ name: `Quince paste ${Math.random().toString(36).slice(2, 8)}`, kind: 'other' }) },
+  [`POST ${H}/products`]: {
+    access: 'cook',
+    body: () => ({ name: `Quince paste ${Math.random().toString(36).slice(2, 8)}`, kind: 'other' }),
+  },
   [`PATCH ${H}/products/:productId`]: { access: 'cook', body: () => ({ notes: 'Keeps well.' }) },
   [`GET ${H}/recipes`]: { access: 'read' },
   [`GET ${H}/recipes/:recipeId`]: { access: 'read' },
   [`POST ${H}/recipes`]: { access: 'cook', body: (ids) => ({ productId: ids.productId }) },
   [`PATCH ${H}/recipes/:recipeId`]: { access: 'cook', body: () => ({ steps: 'Follow the tested recipe.' }) },
   [`GET ${H}/batches`]: { access: 'read' },
-  [`GET ${H}/batches/plan`]: { access: 'read', query: (ids) => `recipeId=${ids.recipeId}&jarSize=pint&method=boiling-water` },
+  [`GET ${H}/batches/plan`]: {
+    access: 'read',
+    query: (ids) => `recipeId=${ids.recipeId}&jarSize=pint&method=boiling-water`,
+  },
   [`GET ${H}/batches/:batchId`]: { access: 'read' },
   [`POST ${H}/batches`]: {
     access: 'cook',
-    body: (ids) => ({ productId: ids.productId, recipeId: ids.recipeId, cannedOn: ids.planDate, jarSize: 'pint', jarsFilled: 2, jarsSealed: 2, method: 'boiling-water' }),
+    body: (ids) => ({
+      productId: ids.productId,
+      recipeId: ids.recipeId,
+      cannedOn: ids.planDate,
+      jarSize: 'pint',
+      jarsFilled: 2,
+      jarsSealed: 2,
+      method: 'boiling-water',
+    }),
   },
   // Any member checks seals; the service lets only a cook or keeper reprocess (tests/api/seal-check.test.ts).
   [`POST ${H}/batches/:batchId/seal-check`]: { access: 'handleJars', body: () => ({ fridge: { count: 0 } }) },
@@ -156,7 +173,10 @@ export const TABLE: Record<string, RouteRule> = {
   [`GET ${H}/jars/:jarId/opening-advice`]: { access: 'read' },
   [`POST ${H}/jars/:jarId/:action`]: { access: 'handleJars', destructive: true },
   // Any member reaches the service, which lets a helper undo only their own recent change (tests/api/jar-undo.test.ts).
-  [`POST ${H}/jars/:jarId/undo`]: { access: 'handleJars', body: () => ({ eventId: '00000000-0000-4000-8000-000000000000' }) },
+  [`POST ${H}/jars/:jarId/undo`]: {
+    access: 'handleJars',
+    body: () => ({ eventId: '00000000-0000-4000-8000-000000000000' }),
+  },
   [`GET ${H}/shelf.csv`]: { access: 'read' },
   [`POST ${H}/shelf/import`]: { access: 'cook', body: () => ({ csv: 'product,canned on\n', commit: false }) },
 
@@ -168,10 +188,25 @@ export const TABLE: Record<string, RouteRule> = {
   [`POST ${H}/week/copy`]: { access: 'cook', body: (ids) => ({ from: ids.weekStart, to: '2030-01-07' }) },
   [`DELETE ${H}/week/days/:date`]: { access: 'cook' },
   [`GET ${H}/week/waste`]: { access: 'read', query: (ids) => `start=${ids.weekStart}` },
-  [`POST ${H}/week/proposal`]: { access: 'cook', body: (ids) => ({ start: ids.weekStart, scope: { kind: 'slot', slot: 'lunch' } }) },
-  [`POST ${H}/week/proposal/accept`]: { access: 'cook', body: (ids) => ({ entries: [{ date: ids.planDate, slot: 'snack', mealId: ids.mealId, servings: 2, eaters: null }] }) },
-  [`POST ${H}/week/proposal/undo`]: { access: 'cook', body: (ids) => ({ entryIds: [ids.planEntryId] }), destructive: true },
-  [`POST ${H}/plan-entries`]: { access: 'cook', body: (ids) => ({ date: ids.planDate, slot: 'snack', title: 'Crackers' }) },
+  [`POST ${H}/week/proposal`]: {
+    access: 'cook',
+    body: (ids) => ({ start: ids.weekStart, scope: { kind: 'slot', slot: 'lunch' } }),
+  },
+  [`POST ${H}/week/proposal/accept`]: {
+    access: 'cook',
+    body: (ids) => ({
+      entries: [{ date: ids.planDate, slot: 'snack', mealId: ids.mealId, servings: 2, eaters: null }],
+    }),
+  },
+  [`POST ${H}/week/proposal/undo`]: {
+    access: 'cook',
+    body: (ids) => ({ entryIds: [ids.planEntryId] }),
+    destructive: true,
+  },
+  [`POST ${H}/plan-entries`]: {
+    access: 'cook',
+    body: (ids) => ({ date: ids.planDate, slot: 'snack', title: 'Crackers' }),
+  },
   [`PATCH ${H}/plan-entries/:id`]: { access: 'cook', body: () => ({ servings: 3 }) },
   [`DELETE ${H}/plan-entries/:id`]: { access: 'cook' },
   [`POST ${H}/plan-entries/:id/pairings`]: { access: 'cook', body: (ids) => ({ productId: ids.productId }) },

@@ -39,10 +39,15 @@ function byContent(backup: HouseholdBackup) {
     const rows = (backup[table] as Record<string, unknown>[]).map((row) => {
       // Label codes are kept only where free, so two households' copies differ in them.
       const { id, code: _code, ...rest } = row;
-      for (const [column, target] of Object.entries(refs)) if (rest[column] !== null) rest[column] = `${target}:${names.get(String(rest[column]))}`;
+      for (const [column, target] of Object.entries(refs))
+        if (rest[column] !== null) rest[column] = `${target}:${names.get(String(rest[column]))}`;
       if (rest.batchPlan) {
         const plan = rest.batchPlan as Record<string, unknown>;
-        rest.batchPlan = { ...plan, productId: names.get(String(plan.productId)), recipeId: names.get(String(plan.recipeId)) };
+        rest.batchPlan = {
+          ...plan,
+          productId: names.get(String(plan.productId)),
+          recipeId: names.get(String(plan.recipeId)),
+        };
       }
       const name = JSON.stringify(rest);
       names.set(String(id), name);
@@ -54,22 +59,41 @@ function byContent(backup: HouseholdBackup) {
 }
 
 async function householdCount() {
-  const [row] = await ctx.sequelize.query<{ n: string }>('SELECT count(*) AS n FROM households', { type: QueryTypes.SELECT });
+  const [row] = await ctx.sequelize.query<{ n: string }>('SELECT count(*) AS n FROM households', {
+    type: QueryTypes.SELECT,
+  });
   return Number(row!.n);
 }
 
 describe('household backup', () => {
   it('exports every table of the household, and no secret', async () => {
-    expect(exported).toMatchObject({ format: 'larderly-household-backup', version: 1, household: { name: 'Calloway Hollow', altitudeFt: 2350 } });
+    expect(exported).toMatchObject({
+      format: 'larderly-household-backup',
+      version: 1,
+      household: { name: 'Calloway Hollow', altitudeFt: 2350 },
+    });
     for (const [table] of REFS) expect((exported[table] as unknown[]).length, table).toBeGreaterThan(0);
     const text = JSON.stringify(exported);
-    for (const secret of ['passwordHash', 'password_hash', 'tokenHash', 'token_hash', 'p256dh', 'session', '@larderly.test', '$2a$', '$2b$']) {
+    for (const secret of [
+      'passwordHash',
+      'password_hash',
+      'tokenHash',
+      'token_hash',
+      'p256dh',
+      'session',
+      '@larderly.test',
+      '$2a$',
+      '$2b$',
+    ]) {
       expect(text, `the backup must not hold ${secret}`).not.toContain(secret);
     }
-    const [neighbourProduct] = await ctx.sequelize.query<{ name: string }>('SELECT name FROM products WHERE household_id = $1 LIMIT 1', {
-      bind: [ctx.neighbourHouseholdId],
-      type: QueryTypes.SELECT,
-    });
+    const [neighbourProduct] = await ctx.sequelize.query<{ name: string }>(
+      'SELECT name FROM products WHERE household_id = $1 LIMIT 1',
+      {
+        bind: [ctx.neighbourHouseholdId],
+        type: QueryTypes.SELECT,
+      },
+    );
     expect(text).not.toContain(neighbourProduct!.name);
   });
 
@@ -91,7 +115,9 @@ describe('household backup', () => {
     const shared = [...ids(copy)].filter((id) => ids(exported).has(id));
     expect(shared, 'ids are new').toEqual([]);
     const members = await neighbour.get(`/api/households/${newId}/members`);
-    expect(members.body.members).toEqual([expect.objectContaining({ email: 'neighbor@larderly.test', role: 'keeper' })]);
+    expect(members.body.members).toEqual([
+      expect.objectContaining({ email: 'neighbor@larderly.test', role: 'keeper' }),
+    ]);
     // The first household cannot see the copy.
     expect((await keeper.get(`/api/households/${newId}/products`)).status).toBe(404);
   });
@@ -99,7 +125,10 @@ describe('household backup', () => {
   it('keeps each jar’s label code on import when no jar holds it, and gives a fresh one when one does', async () => {
     const neighbour = await ctx.signedIn('neighbor@larderly.test');
     const codes = (b: HouseholdBackup) => b.jars.map((jar) => jar.code).sort();
-    expect(codes(exported).every((code) => /^[0-9A-HJKMNP-TV-Z]{6}$/.test(code ?? '')), 'the export carries every label code').toBe(true);
+    expect(
+      codes(exported).every((code) => /^[0-9A-HJKMNP-TV-Z]{6}$/.test(code ?? '')),
+      'the export carries every label code',
+    ).toBe(true);
 
     // The first household still holds its codes, so its copy gets fresh ones.
     const first = await neighbour.post('/api/households/import').send(exported);
@@ -140,20 +169,37 @@ describe('household backup', () => {
   it('accepts a file over 1 MB on the import route only, and refuses one over 10 MB with 413', async () => {
     // Many more jar events than the demo has: a long-kept household's history.
     const events = exported.jarEvents;
-    const overOneMb = JSON.stringify({ ...exported, jarEvents: [...events, ...Array.from({ length: 9000 }, (_, i) => ({ ...events[i % events.length]!, id: randomUUID() }))] });
+    const overOneMb = JSON.stringify({
+      ...exported,
+      jarEvents: [
+        ...events,
+        ...Array.from({ length: 9000 }, (_, i) => ({ ...events[i % events.length]!, id: randomUUID() })),
+      ],
+    });
     expect(overOneMb.length).toBeGreaterThan(1024 * 1024);
-    const accepted = await keeper.post('/api/households/import').set('Content-Type', 'application/json').send(overOneMb);
+    const accepted = await keeper
+      .post('/api/households/import')
+      .set('Content-Type', 'application/json')
+      .send(overOneMb);
     expect(accepted.status, accepted.text.slice(0, 300)).toBe(201);
 
-    const tooBig = await keeper.post('/api/households/import').set('Content-Type', 'application/json').send(`{"pad":"${'x'.repeat(10 * 1024 * 1024 + 10)}"}`);
+    const tooBig = await keeper
+      .post('/api/households/import')
+      .set('Content-Type', 'application/json')
+      .send(`{"pad":"${'x'.repeat(10 * 1024 * 1024 + 10)}"}`);
     expect(tooBig.status).toBe(413);
     expect(tooBig.body.error.code).toBe('too_large');
-    const elsewhere = await keeper.post(`/api/households/${ctx.householdId}/todos`).set('Content-Type', 'application/json').send(`{"title":"${'x'.repeat(1024 * 1024 + 10)}"}`);
+    const elsewhere = await keeper
+      .post(`/api/households/${ctx.householdId}/todos`)
+      .set('Content-Type', 'application/json')
+      .send(`{"title":"${'x'.repeat(1024 * 1024 + 10)}"}`);
     expect(elsewhere.status).toBe(413);
   });
 
   it('keeps the export to keepers and the import to signed-in people', async () => {
-    expect((await (await ctx.signedIn('cook@larderly.test')).get(`/api/households/${ctx.householdId}/backup`)).status).toBe(403);
+    expect(
+      (await (await ctx.signedIn('cook@larderly.test')).get(`/api/households/${ctx.householdId}/backup`)).status,
+    ).toBe(403);
     expect((await ctx.request.post('/api/households/import').send(exported)).status).toBe(401);
   });
 });
@@ -162,7 +208,12 @@ describe('one limit per value, shared by every entry point', () => {
   it('a household with every value at its limit exports a backup that imports', async () => {
     const { LIMITS } = await import('../../shared/schemas/limits');
     // Sign-up's own limits are pinned in sign-up.test.ts; this starts from the account it makes.
-    const { agent, me } = await accountSignedIn(ctx.app, { email: `limits-${Date.now()}@example.test`, password: 'long enough password', name: 'N'.repeat(LIMITS.length.personName), householdName: 'H'.repeat(LIMITS.length.householdName) });
+    const { agent, me } = await accountSignedIn(ctx.app, {
+      email: `limits-${Date.now()}@example.test`,
+      password: 'long enough password',
+      name: 'N'.repeat(LIMITS.length.personName),
+      householdName: 'H'.repeat(LIMITS.length.householdName),
+    });
     const hid = me.memberships[0].householdId;
     const base = `/api/households/${hid}`;
     const ok = async (response: PromiseLike<import('supertest').Response>, status: number) => {
@@ -170,10 +221,28 @@ describe('one limit per value, shared by every entry point', () => {
       expect(res.status, JSON.stringify(res.body)).toBe(status);
       return res.body;
     };
-    await ok(agent.patch(base).send({ altitudeFt: LIMITS.altitudeFt.max, bestQualityMonths: LIMITS.bestQualityMonths, cannerCapacityJars: LIMITS.cannerCapacityJars }), 200);
+    await ok(
+      agent
+        .patch(base)
+        .send({
+          altitudeFt: LIMITS.altitudeFt.max,
+          bestQualityMonths: LIMITS.bestQualityMonths,
+          cannerCapacityJars: LIMITS.cannerCapacityJars,
+        }),
+      200,
+    );
     const name = 'P'.repeat(LIMITS.length.productName);
     const { product } = await ok(
-      agent.post(`${base}/products`).send({ name, kind: 'pickle', heat: LIMITS.heat, minJars: LIMITS.minJars, useWithinDays: LIMITS.useWithinDays, notes: 'n'.repeat(LIMITS.length.notes) }),
+      agent
+        .post(`${base}/products`)
+        .send({
+          name,
+          kind: 'pickle',
+          heat: LIMITS.heat,
+          minJars: LIMITS.minJars,
+          useWithinDays: LIMITS.useWithinDays,
+          notes: 'n'.repeat(LIMITS.length.notes),
+        }),
       201,
     );
     await ok(
@@ -182,11 +251,19 @@ describe('one limit per value, shared by every entry point', () => {
         name: 'R'.repeat(LIMITS.length.recipeName),
         yieldJars: LIMITS.recipeYieldJars,
         yieldJarSize: 'pint',
-        ingredients: Array.from({ length: LIMITS.ingredientsPerRecipe }, (_, i) => ({ name: `${i}`.padEnd(LIMITS.length.ingredientName, 'i'), amount: LIMITS.ingredientAmount, unit: 'g', role: 'other' })),
+        ingredients: Array.from({ length: LIMITS.ingredientsPerRecipe }, (_, i) => ({
+          name: `${i}`.padEnd(LIMITS.length.ingredientName, 'i'),
+          amount: LIMITS.ingredientAmount,
+          unit: 'g',
+          role: 'other',
+        })),
         acidified: true,
         method: 'boiling-water',
         baseMinutes: { pint: LIMITS.processingMinutes },
-        altitudeTable: Array.from({ length: LIMITS.altitudeRows }, (_, i) => ({ upToFt: i * 1000, addMinutes: LIMITS.processingMinutes })),
+        altitudeTable: Array.from({ length: LIMITS.altitudeRows }, (_, i) => ({
+          upToFt: i * 1000,
+          addMinutes: LIMITS.processingMinutes,
+        })),
         headspaceInches: LIMITS.headspaceInches,
         steps: 's'.repeat(LIMITS.length.steps),
         source: 'u'.repeat(LIMITS.length.source),
@@ -206,12 +283,24 @@ describe('one limit per value, shared by every entry point', () => {
       }),
       201,
     );
-    await ok(agent.post(`${base}/todos`).send({ title: 'T'.repeat(LIMITS.length.todoTitle), notes: 'n'.repeat(LIMITS.length.todoNotes) }), 201);
+    await ok(
+      agent
+        .post(`${base}/todos`)
+        .send({ title: 'T'.repeat(LIMITS.length.todoTitle), notes: 'n'.repeat(LIMITS.length.todoNotes) }),
+      201,
+    );
 
     const backup = await ok(agent.get(`${base}/backup`), 200);
     expect(backup.batches[0]).toMatchObject({ minutes: LIMITS.batchMinutes, jarsFilled: LIMITS.jarsPerBatch });
     const imported = await ok(agent.post('/api/households/import').send(backup), 201);
-    expect(imported.counts).toMatchObject({ products: 1, recipes: 1, batches: 1, jars: LIMITS.jarsPerBatch, meals: 1, todos: 1 });
+    expect(imported.counts).toMatchObject({
+      products: 1,
+      recipes: 1,
+      batches: 1,
+      jars: LIMITS.jarsPerBatch,
+      meals: 1,
+      todos: 1,
+    });
   });
 });
 
@@ -222,10 +311,21 @@ describe('a restock to-do’s batch plan in a backup', () => {
     const before = await householdCount();
     const freeForm = structuredClone(exported);
     // What once took down the to-do page: ids that fit, the rest of the plan anything at all.
-    freeForm.todos[index].batchPlan = { productId: exported.todos[index].batchPlan!.productId, recipeId: exported.todos[index].batchPlan!.recipeId, plannedOn: 'next spring', jars: 'many' } as never;
+    freeForm.todos[index].batchPlan = {
+      productId: exported.todos[index].batchPlan!.productId,
+      recipeId: exported.todos[index].batchPlan!.recipeId,
+      plannedOn: 'next spring',
+      jars: 'many',
+    } as never;
     const refused = await keeper.post('/api/households/import').send(freeForm);
     expect(refused.status).toBe(400);
-    expect(Object.keys(refused.body.error.fields)).toEqual(expect.arrayContaining([`todos.${index}.batchPlan.plannedOn`, `todos.${index}.batchPlan.jars`, `todos.${index}.batchPlan.processing`]));
+    expect(Object.keys(refused.body.error.fields)).toEqual(
+      expect.arrayContaining([
+        `todos.${index}.batchPlan.plannedOn`,
+        `todos.${index}.batchPlan.jars`,
+        `todos.${index}.batchPlan.processing`,
+      ]),
+    );
     const badDate = structuredClone(exported);
     badDate.todos[index].batchPlan!.targetOn = '2026-02-30';
     expect((await keeper.post('/api/households/import').send(badDate)).status).toBe(400);
@@ -235,10 +335,18 @@ describe('a restock to-do’s batch plan in a backup', () => {
 
 describe('backup import limits', () => {
   it('limits imports per person (10 an hour), whether the file is good or not', async () => {
-    const { agent } = await accountSignedIn(ctx.app, { email: `imports-${Date.now()}@example.test`, password: 'long enough password', name: 'Ivo', householdName: 'Ivo Larder' });
+    const { agent } = await accountSignedIn(ctx.app, {
+      email: `imports-${Date.now()}@example.test`,
+      password: 'long enough password',
+      name: 'Ivo',
+      householdName: 'Ivo Larder',
+    });
     const statuses: number[] = [];
-    for (let i = 0; i < 11; i += 1) statuses.push((await agent.post('/api/households/import').send({ format: 'not-a-backup' })).status);
+    for (let i = 0; i < 11; i += 1)
+      statuses.push((await agent.post('/api/households/import').send({ format: 'not-a-backup' })).status);
     expect(statuses).toEqual([...Array(10).fill(400), 429]);
-    expect((await agent.post('/api/households/import').send(exported)).body.error.message).toBe('Too many imports. Wait 60 minutes, then try again.');
+    expect((await agent.post('/api/households/import').send(exported)).body.error.message).toBe(
+      'Too many imports. Wait 60 minutes, then try again.',
+    );
   });
 });

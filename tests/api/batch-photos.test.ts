@@ -21,7 +21,10 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 // The smallest valid PNG (a 1x1 pixel), so the sniffer has real image bytes.
-const PNG = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==', 'base64');
+const PNG = Buffer.from(
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==',
+  'base64',
+);
 
 async function batchOf(productName: string) {
   return (await lookups.sealedJars(productName))[0].batchId;
@@ -33,7 +36,9 @@ describe('batch photos in the object store', () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const batchId = await batchOf('Pickled Beets');
     const original = await cameraPhoto(4032, 3024);
-    const response = await cook.post(`${lookups.base}/batches/${batchId}/photo`).attach('photo', original, { filename: 'beets.jpg', contentType: 'image/jpeg' });
+    const response = await cook
+      .post(`${lookups.base}/batches/${batchId}/photo`)
+      .attach('photo', original, { filename: 'beets.jpg', contentType: 'image/jpeg' });
     expect(response.status).toBe(200);
     expect(response.body.batch.hasPhoto).toBe(true);
 
@@ -45,11 +50,15 @@ describe('batch photos in the object store', () => {
     expect(await sharp(large.body).metadata()).toMatchObject({ format: 'webp', width: 1600, height: 1200 });
     expect(await sharp(small.body).metadata()).toMatchObject({ format: 'webp', width: 320, height: 240 });
     expect(large.body.length).toBeLessThan(original.length / 4);
-    console.log(`photo sizes: uploaded JPEG 4032x3024 ${original.length} bytes; kept WebP large 1600x1200 ${large.body.length} bytes, small 320x240 ${small.body.length} bytes`);
+    console.log(
+      `photo sizes: uploaded JPEG 4032x3024 ${original.length} bytes; kept WebP large 1600x1200 ${large.body.length} bytes, small 320x240 ${small.body.length} bytes`,
+    );
 
     const keys = await storedPhotoKeys(ctx.householdId);
     expect(keys.filter((k) => /\/(large|small)\.webp$/.test(k))).toHaveLength(2);
-    expect((await (await ctx.signedIn('neighbor@larderly.test')).get(`${lookups.base}/batches/${batchId}/photo`)).status).toBe(404);
+    expect(
+      (await (await ctx.signedIn('neighbor@larderly.test')).get(`${lookups.base}/batches/${batchId}/photo`)).status,
+    ).toBe(404);
     expect((await ctx.request.get(`${lookups.base}/batches/${batchId}/photo`)).status).toBe(401);
     // Nothing in the bucket answers without the app's signature.
     const direct = await fetch(`${process.env.S3_ENDPOINT}/${process.env.S3_BUCKET}/${keys[0]}`);
@@ -63,7 +72,9 @@ describe('batch photos in the object store', () => {
     const before = await sharp(original).metadata();
     expect(hasGpsBlock(before.exif)).toBe(true);
     expect(original.includes(Buffer.from('Calloway Hollow pantry shelf'))).toBe(true);
-    expect((await cook.post(`${lookups.base}/batches/${batchId}/photo`).attach('photo', original, 'pear-butter.jpg')).status).toBe(200);
+    expect(
+      (await cook.post(`${lookups.base}/batches/${batchId}/photo`).attach('photo', original, 'pear-butter.jpg')).status,
+    ).toBe(200);
     for (const size of ['large', 'small']) {
       const kept = (await cook.get(`${lookups.base}/batches/${batchId}/photo?size=${size}`)).body as Buffer;
       const after = await sharp(kept).metadata();
@@ -83,7 +94,10 @@ describe('batch photos in the object store', () => {
     const rssBefore = process.memoryUsage().rss;
     const response = await cook.post(`${lookups.base}/batches/${batchId}/photo`).attach('photo', flood, 'carrots.png');
     expect(response.status).toBe(413);
-    expect(response.body.error).toMatchObject({ code: 'too_large', message: expect.stringMatching(/50 megapixels at most/) });
+    expect(response.body.error).toMatchObject({
+      code: 'too_large',
+      message: expect.stringMatching(/50 megapixels at most/),
+    });
     // Decoding it whole would take 400 MB (one byte a pixel); refusing it from the header takes next to nothing.
     expect(process.memoryUsage().rss - rssBefore).toBeLessThan(100 * 1024 * 1024);
     expect((await cook.get(`${lookups.base}/batches/${batchId}`)).body.batch.hasPhoto).toBe(false);
@@ -95,7 +109,9 @@ describe('batch photos in the object store', () => {
     const batchId = await batchOf('Plum Ketchup');
     await cook.post(`${lookups.base}/batches/${batchId}/photo`).attach('photo', PNG, 'ketchup.png');
     const first = await storedPhotoKeys(ctx.householdId);
-    await cook.post(`${lookups.base}/batches/${batchId}/photo`).attach('photo', await cameraPhoto(640, 480), 'ketchup.jpg');
+    await cook
+      .post(`${lookups.base}/batches/${batchId}/photo`)
+      .attach('photo', await cameraPhoto(640, 480), 'ketchup.jpg');
     const second = await storedPhotoKeys(ctx.householdId);
     expect(second).toHaveLength(first.length);
     expect(second).not.toEqual(first);
@@ -107,9 +123,15 @@ describe('batch photos in the object store', () => {
     const before = await storedPhotoKeys(ctx.householdId);
     const response = await cook
       .post(`${lookups.base}/batches/${batchId}/photo`)
-      .attach('photo', Buffer.from('These are my notes about the carrots, not a photo.\n'), { filename: 'carrots.jpg', contentType: 'image/jpeg' });
+      .attach('photo', Buffer.from('These are my notes about the carrots, not a photo.\n'), {
+        filename: 'carrots.jpg',
+        contentType: 'image/jpeg',
+      });
     expect(response.status).toBe(415);
-    expect(response.body.error).toMatchObject({ code: 'unsupported_type', message: expect.stringMatching(/not a JPEG, PNG or WebP/) });
+    expect(response.body.error).toMatchObject({
+      code: 'unsupported_type',
+      message: expect.stringMatching(/not a JPEG, PNG or WebP/),
+    });
     expect((await cook.get(`${lookups.base}/batches/${batchId}`)).body.batch.hasPhoto).toBe(false);
     expect(await storedPhotoKeys(ctx.householdId)).toEqual(before);
   });
@@ -117,14 +139,18 @@ describe('batch photos in the object store', () => {
   it('refuses a photo over 5 MB with 413', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const big = Buffer.concat([PNG, Buffer.alloc(5 * 1024 * 1024)]);
-    const response = await cook.post(`${lookups.base}/batches/${await batchOf('Dilly Carrots')}/photo`).attach('photo', big, 'big.png');
+    const response = await cook
+      .post(`${lookups.base}/batches/${await batchOf('Dilly Carrots')}/photo`)
+      .attach('photo', big, 'big.png');
     expect(response.status).toBe(413);
     expect(response.body.error.message).toMatch(/larger than 5 MB/);
   });
 
   it('answers 400 when no photo is attached', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    expect((await cook.post(`${lookups.base}/batches/${await batchOf('Dilly Carrots')}/photo`).field('note', 'x')).status).toBe(400);
+    expect(
+      (await cook.post(`${lookups.base}/batches/${await batchOf('Dilly Carrots')}/photo`).field('note', 'x')).status,
+    ).toBe(400);
   });
 });
 
@@ -137,7 +163,10 @@ describe('moving photos from the local disk to the object store', () => {
     writeFileSync(path.join(uploads, onDisk), original);
     const [withFile, withoutFile] = [await batchOf('Sweet Corn Relish'), await batchOf('Hot Pepper Jelly')];
     await Batch.update({ photoKey: onDisk, photoType: 'image/jpeg' }, { where: { id: withFile } });
-    await Batch.update({ photoKey: `${ctx.householdId}/${randomUUID()}.png`, photoType: 'image/png' }, { where: { id: withoutFile } });
+    await Batch.update(
+      { photoKey: `${ctx.householdId}/${randomUUID()}.png`, photoType: 'image/png' },
+      { where: { id: withoutFile } },
+    );
 
     const first = await movePhotosToStore(localDiskStorage(uploads), ctx.ctx.photos);
     expect(first).toEqual({ moved: 1, missing: [withoutFile], refused: [] });

@@ -131,7 +131,11 @@ describe('the household calendar address', () => {
   it('holds a seal check 12 hours after processing while jars wait for it, and drops it once they are checked (USDA Complete Guide 2015: cool 12 to 24 hours, then test the seals)', async () => {
     clock.now = () => new Date('2026-12-02T15:00:00Z');
     const keeper = await newHousehold(ctx.app, 'America/Denver');
-    const { batch, jar: opened } = await openedJar(keeper.householdId, { productName: 'Dilly beans', openedOn: '2026-12-01', useWithinDays: 28 });
+    const { batch, jar: opened } = await openedJar(keeper.householdId, {
+      productName: 'Dilly beans',
+      openedOn: '2026-12-01',
+      useWithinDays: 28,
+    });
     // Processed at 8:30 pm Denver time (03:30 UTC the next day): the check falls at 8:30 am there.
     const processing = await BatchProcessing.create({
       householdId: keeper.householdId,
@@ -168,7 +172,9 @@ describe('the household calendar address', () => {
     expect(check.startDate.zone?.tzid).toBe('America/Denver');
     expect(check.startDate.toString()).toBe('2026-12-02T08:30:00');
     expect(check.description).toMatch(/^2 jars still to check\./);
-    expect(check.component.getFirstPropertyValue('url')).toBe(`http://127.0.0.1:3000/h/${keeper.householdId}/batches/${batch.id}`);
+    expect(check.component.getFirstPropertyValue('url')).toBe(
+      `http://127.0.0.1:3000/h/${keeper.householdId}/batches/${batch.id}`,
+    );
 
     await Jar.update({ seal: 'checked' }, { where: { id: waiting.map((j) => j.id) } });
     const after = parse((await request(ctx.app).get(address)).text).events;
@@ -282,6 +288,8 @@ describe('the household calendar address', () => {
     const good = await keeper.agent.put(`/api/households/${keeper.householdId}/meal-times`).send(times);
     expect(good.body.feed.mealTimes).toEqual(times);
     // The household's backup carries them, so a restored household keeps its calendar times.
-    expect((await keeper.agent.get(`/api/households/${keeper.householdId}/backup`)).body.household.mealTimes).toEqual(times);
+    expect((await keeper.agent.get(`/api/households/${keeper.householdId}/backup`)).body.household.mealTimes).toEqual(
+      times,
+    );
   });
 });

@@ -12,7 +12,14 @@ import { freePort } from '../support/ports';
 // A cluster of this file's own: stopping it cannot disturb the other test files.
 let cluster: ReturnType<typeof startCluster>;
 let built: ReturnType<typeof createApp>;
-const config = () => loadConfig({ ...process.env, NODE_ENV: 'test', BCRYPT_COST: '4', DATABASE_URL: cluster.url('postgres'), STATIC_DIR: 'none' });
+const config = () =>
+  loadConfig({
+    ...process.env,
+    NODE_ENV: 'test',
+    BCRYPT_COST: '4',
+    DATABASE_URL: cluster.url('postgres'),
+    STATIC_DIR: 'none',
+  });
 let hid: string;
 let cookie: string;
 let productId: string;
@@ -30,9 +37,14 @@ beforeAll(async () => {
   });
   if (setup.status !== 0) throw new Error(`setting up the outage database failed: ${setup.stderr}`);
   built = createApp(config());
-  const [household] = await built.sequelize.query<{ id: string }>(`SELECT id FROM households WHERE name = 'Calloway Hollow'`, { type: QueryTypes.SELECT });
+  const [household] = await built.sequelize.query<{ id: string }>(
+    `SELECT id FROM households WHERE name = 'Calloway Hollow'`,
+    { type: QueryTypes.SELECT },
+  );
   hid = household!.id;
-  const login = await request(built.app).post('/api/auth/login').send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
+  const login = await request(built.app)
+    .post('/api/auth/login')
+    .send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
   expect(login.status).toBe(200);
   cookie = String(login.headers['set-cookie']).split(';')[0]!;
   const [ids] = await built.sequelize.query<{ product: string; recipe: string; jarSize: string; method: string }>(
@@ -60,8 +72,25 @@ function write(n: number) {
       ? request(built.app).post(`${base}/todos`).send({ title: tag })
       : request(built.app)
           .post(`${base}/batches`)
-          .send({ productId, recipeId, cannedOn: '2026-09-14', jarSize, jarsFilled: 6, jarsSealed: 6, method, notes: tag });
-  return pending.set('Cookie', cookie).then((response) => ({ n, tag, kind: n % 2 === 0 ? 'todo' : 'batch', status: response.status, body: response.body }));
+          .send({
+            productId,
+            recipeId,
+            cannedOn: '2026-09-14',
+            jarSize,
+            jarsFilled: 6,
+            jarsSealed: 6,
+            method,
+            notes: tag,
+          });
+  return pending
+    .set('Cookie', cookie)
+    .then((response) => ({
+      n,
+      tag,
+      kind: n % 2 === 0 ? 'todo' : 'batch',
+      status: response.status,
+      body: response.body,
+    }));
 }
 
 type Answer = Awaited<ReturnType<typeof write>>;
@@ -94,19 +123,31 @@ describe('PostgreSQL stopped during a run of writes', () => {
     const after: Answer[] = [];
     for (let n = 36; n < 46; n += 1) after.push(await write(n));
 
-    const tally = (list: Answer[]) => JSON.stringify(list.reduce<Record<number, number>>((t, a) => ({ ...t, [a.status]: (t[a.status] ?? 0) + 1 }), {}));
-    console.info(`database faults: in flight at the stop ${tally(racing)}; during the outage ${outage.length + 1} requests ${tally(outage)} + a read ${read.status}; after the start ${tally(after)}`);
+    const tally = (list: Answer[]) =>
+      JSON.stringify(list.reduce<Record<number, number>>((t, a) => ({ ...t, [a.status]: (t[a.status] ?? 0) + 1 }), {}));
+    console.info(
+      `database faults: in flight at the stop ${tally(racing)}; during the outage ${outage.length + 1} requests ${tally(outage)} + a read ${read.status}; after the start ${tally(after)}`,
+    );
 
-    expect(racing.every((a) => a.status === 201 || a.status === 503), tally(racing)).toBe(true);
+    expect(
+      racing.every((a) => a.status === 201 || a.status === 503),
+      tally(racing),
+    ).toBe(true);
     for (const answer of [...outage, ...racing.filter((a) => a.status !== 201)]) {
       expect(answer.status).toBe(503);
-      expect(answer.body.error).toEqual({ code: 'database_unavailable', message: expect.stringMatching(/Nothing was saved; try again/) });
+      expect(answer.body.error).toEqual({
+        code: 'database_unavailable',
+        message: expect.stringMatching(/Nothing was saved; try again/),
+      });
     }
     expect(read.status).toBe(503);
     expect(after.map((a) => a.status)).toEqual(Array(10).fill(201));
 
     // Exactly the writes that answered 201 are saved, each whole.
-    const acknowledged = [...answers, ...racing, ...after].filter((a) => a.status === 201).map((a) => a.tag).sort();
+    const acknowledged = [...answers, ...racing, ...after]
+      .filter((a) => a.status === 201)
+      .map((a) => a.tag)
+      .sort();
     expect(await saved()).toEqual(acknowledged);
     const halfWritten = await built.sequelize.query(
       `SELECT b.id FROM batches b LEFT JOIN jars j ON j.batch_id = b.id WHERE b.household_id = :hid GROUP BY b.id HAVING b.jars_filled <> count(j.id)`,

@@ -24,9 +24,26 @@ describe('the weekly digest', () => {
     const today = todayIn(zone);
     const weekday = new Date(`${today}T00:00:00Z`).getUTCDay();
     await Household.update({ weekStartsOn: weekday }, { where: { id: home.householdId } });
-    const { product } = await openedJar(home.householdId, { productName: 'Blackcurrant Jam', openedOn: addDays(today, -18), useWithinDays: 21, remainingTbsp: 2 });
-    const entry = await PlanEntry.create({ householdId: home.householdId, date: addDays(today, 1), slot: 'breakfast', position: 0, title: 'Oat scones', servings: 4 });
-    await Pairing.create({ householdId: home.householdId, planEntryId: entry.id, productId: product.id, tbspPerServing: 1 });
+    const { product } = await openedJar(home.householdId, {
+      productName: 'Blackcurrant Jam',
+      openedOn: addDays(today, -18),
+      useWithinDays: 21,
+      remainingTbsp: 2,
+    });
+    const entry = await PlanEntry.create({
+      householdId: home.householdId,
+      date: addDays(today, 1),
+      slot: 'breakfast',
+      position: 0,
+      title: 'Oat scones',
+      servings: 4,
+    });
+    await Pairing.create({
+      householdId: home.householdId,
+      planEntryId: entry.id,
+      productId: product.id,
+      tbspPerServing: 1,
+    });
 
     await sweepDigests(built.ctx, instantAt(today, 7, 50, zone));
     expect(standIns.mail.to(home.email)).toHaveLength(0);
@@ -52,7 +69,10 @@ describe('the weekly digest', () => {
     const zone = 'UTC';
     const home = await newHousehold(built.app, zone);
     const today = todayIn(zone);
-    await Household.update({ weekStartsOn: (new Date(`${today}T00:00:00Z`).getUTCDay() + 1) % 7 }, { where: { id: home.householdId } });
+    await Household.update(
+      { weekStartsOn: (new Date(`${today}T00:00:00Z`).getUTCDay() + 1) % 7 },
+      { where: { id: home.householdId } },
+    );
     await sweepDigests(built.ctx, instantAt(today, 12, 0, zone));
     expect(standIns.mail.to(home.email)).toHaveLength(0);
   });

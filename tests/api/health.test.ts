@@ -14,7 +14,9 @@ let built: ReturnType<typeof createApp>;
 beforeAll(async () => {
   const port = await freePort();
   cluster = startCluster({ name: `outage-${process.pid}-${port}`, port });
-  built = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: cluster.url('postgres'), STATIC_DIR: 'none' }));
+  built = createApp(
+    loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: cluster.url('postgres'), STATIC_DIR: 'none' }),
+  );
 });
 
 afterAll(async () => {
@@ -39,9 +41,14 @@ describe('GET /api/health', () => {
     expect(notReady.status).toBe(503);
     expect(notReady.body).toEqual({ ready: false, db: 'down', photoStore: { kind: 's3', state: 'up' } });
 
-    const login = await request(built.app).post('/api/auth/login').send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
+    const login = await request(built.app)
+      .post('/api/auth/login')
+      .send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
     expect(login.status).toBe(503);
-    expect(login.body.error).toMatchObject({ code: 'database_unavailable', message: expect.stringMatching(/try again/) });
+    expect(login.body.error).toMatchObject({
+      code: 'database_unavailable',
+      message: expect.stringMatching(/try again/),
+    });
 
     pgCtl(cluster.bin, cluster.dataDir, 'start', cluster.port);
     const up = await request(built.app).get('/api/health');
@@ -59,7 +66,15 @@ describe('GET /api/ready', () => {
 
   it('answers 503 while the object store does not answer', async () => {
     const nowhere = `http://127.0.0.1:${await freePort()}`;
-    const storeDown = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: cluster.url('postgres'), STATIC_DIR: 'none', S3_ENDPOINT: nowhere }));
+    const storeDown = createApp(
+      loadConfig({
+        ...process.env,
+        NODE_ENV: 'test',
+        DATABASE_URL: cluster.url('postgres'),
+        STATIC_DIR: 'none',
+        S3_ENDPOINT: nowhere,
+      }),
+    );
     try {
       const response = await request(storeDown.app).get('/api/ready');
       expect(response.status).toBe(503);

@@ -32,7 +32,9 @@ beforeAll(async () => {
   server = http.createServer(ctx.app).listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   keeper = request.agent(`http://127.0.0.1:${(server.address() as AddressInfo).port}`);
-  const login = await keeper.post('/api/auth/login').send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
+  const login = await keeper
+    .post('/api/auth/login')
+    .send({ email: 'keeper@larderly.test', password: 'pantry-demo-2026' });
   expect(login.status).toBe(200);
   ids = await lookUpIds(ctx);
   const neighbour = await ctx.signedIn('neighbor@larderly.test');
@@ -48,14 +50,52 @@ afterAll(async () => {
 function seedBody(key: string): unknown {
   const H = '/api/households/:hid';
   const seeds: Record<string, unknown> = {
-    'POST /api/auth/signup': { email: 'fresh@larderly.test', password: 'a-long-enough-password', name: 'Ada Fenwick', householdName: 'Fenwick Cellar' },
+    'POST /api/auth/signup': {
+      email: 'fresh@larderly.test',
+      password: 'a-long-enough-password',
+      name: 'Ada Fenwick',
+      householdName: 'Fenwick Cellar',
+    },
     'POST /api/auth/login': { email: 'keeper@larderly.test', password: 'pantry-demo-2026' },
     'POST /api/invitations/:token/accept': { name: 'Ada Fenwick', password: 'a-long-enough-password' },
     'POST /api/households/import': neighbourBackup,
-    'POST /api/push/subscriptions': { endpoint: 'https://push.larderly.test/sub/1', expirationTime: null, keys: { p256dh: 'BCuf4fmp9_tdT2ZhgBWF6mCEgXE7geTWCAXj9jdSxUo_hwAJi5Qtwn-tPxrikoQc8BvLjslKGArQ7qHy7oe5808', auth: 'kYbaxzbGpXbyS2fjbb3hQQ' } },
-    [`PATCH ${H}`]: { name: 'Calloway Hollow', altitudeFt: 2350, unitSystem: 'us', timeZone: 'America/New_York', bestQualityMonths: 12, weekStartsOn: 1, cannerCapacityJars: 7, defaultMethod: 'boiling-water' },
-    [`POST ${H}/products`]: { name: 'Quince Paste', kind: 'other', heat: 0, favourite: false, minJars: 2, useWithinDays: 30, harvestMonths: [10], jarSize: 'half-pint', colour: 'honey', notes: '' },
-    [`PATCH ${H}/products/:productId`]: { heat: 1, minJars: 3, useWithinDays: null, harvestMonths: [8, 9], notes: 'Keeps well.' },
+    'POST /api/push/subscriptions': {
+      endpoint: 'https://push.larderly.test/sub/1',
+      expirationTime: null,
+      keys: {
+        p256dh: 'BCuf4fmp9_tdT2ZhgBWF6mCEgXE7geTWCAXj9jdSxUo_hwAJi5Qtwn-tPxrikoQc8BvLjslKGArQ7qHy7oe5808',
+        auth: 'kYbaxzbGpXbyS2fjbb3hQQ',
+      },
+    },
+    [`PATCH ${H}`]: {
+      name: 'Calloway Hollow',
+      altitudeFt: 2350,
+      unitSystem: 'us',
+      timeZone: 'America/New_York',
+      bestQualityMonths: 12,
+      weekStartsOn: 1,
+      cannerCapacityJars: 7,
+      defaultMethod: 'boiling-water',
+    },
+    [`POST ${H}/products`]: {
+      name: 'Quince Paste',
+      kind: 'other',
+      heat: 0,
+      favourite: false,
+      minJars: 2,
+      useWithinDays: 30,
+      harvestMonths: [10],
+      jarSize: 'half-pint',
+      colour: 'honey',
+      notes: '',
+    },
+    [`PATCH ${H}/products/:productId`]: {
+      heat: 1,
+      minJars: 3,
+      useWithinDays: null,
+      harvestMonths: [8, 9],
+      notes: 'Keeps well.',
+    },
     [`POST ${H}/recipes`]: {
       productId: ids.productId,
       name: 'Pickled beets, small batch',
@@ -73,17 +113,53 @@ function seedBody(key: string): unknown {
       source: '',
     },
     [`POST ${H}/restock/:productId/todo`]: { jars: 4, jarSize: 'pint' },
-    [`PATCH ${H}/todos/:id`]: { title: 'Buy lids', notes: '', dueOn: '2026-12-20', assigneeId: ids.helperId, done: false, position: 1 },
+    [`PATCH ${H}/todos/:id`]: {
+      title: 'Buy lids',
+      notes: '',
+      dueOn: '2026-12-20',
+      assigneeId: ids.helperId,
+      done: false,
+      position: 1,
+    },
     [`POST ${H}/todos`]: { title: 'Buy lids', notes: '', dueOn: '2026-12-20', assigneeId: ids.helperId },
-    [`POST ${H}/meals`]: { name: 'Cheese board', tags: ['quick'], usualServings: 2, notes: '', products: [{ productId: ids.productId, tbspPerServing: 1 }] },
-    [`PATCH ${H}/meals/:id`]: { name: 'Cheese board', tags: ['quick'], usualServings: 3, products: [{ productId: ids.productId, tbspPerServing: 1 }] },
+    [`POST ${H}/meals`]: {
+      name: 'Cheese board',
+      tags: ['quick'],
+      usualServings: 2,
+      notes: '',
+      products: [{ productId: ids.productId, tbspPerServing: 1 }],
+    },
+    [`PATCH ${H}/meals/:id`]: {
+      name: 'Cheese board',
+      tags: ['quick'],
+      usualServings: 3,
+      products: [{ productId: ids.productId, tbspPerServing: 1 }],
+    },
     [`POST ${H}/plan-entries`]: { date: ids.planDate, slot: 'dinner', position: 0, mealId: ids.mealId, servings: 2 },
-    [`PATCH ${H}/plan-entries/:id`]: { date: ids.planDate, slot: 'lunch', position: 0, servings: 3, title: 'Soup', eaters: [ids.helperId] },
-    [`POST ${H}/week/proposal`]: { start: ids.weekStart, scope: { kind: 'day', date: ids.planDate }, varietyDays: 3, keep: [{ date: ids.planDate, slot: 'lunch', mealId: ids.mealId }], avoid: [] },
-    [`POST ${H}/week/proposal/accept`]: { entries: [{ date: ids.planDate, slot: 'lunch', mealId: ids.mealId, servings: 2, eaters: [ids.helperId] }] },
+    [`PATCH ${H}/plan-entries/:id`]: {
+      date: ids.planDate,
+      slot: 'lunch',
+      position: 0,
+      servings: 3,
+      title: 'Soup',
+      eaters: [ids.helperId],
+    },
+    [`POST ${H}/week/proposal`]: {
+      start: ids.weekStart,
+      scope: { kind: 'day', date: ids.planDate },
+      varietyDays: 3,
+      keep: [{ date: ids.planDate, slot: 'lunch', mealId: ids.mealId }],
+      avoid: [],
+    },
+    [`POST ${H}/week/proposal/accept`]: {
+      entries: [{ date: ids.planDate, slot: 'lunch', mealId: ids.mealId, servings: 2, eaters: [ids.helperId] }],
+    },
     [`POST ${H}/week/proposal/undo`]: { entryIds: [ids.planEntryId] },
     [`POST ${H}/invitations`]: { email: 'new.member@larderly.test', role: 'helper' },
-    [`POST ${H}/shelf/import`]: { csv: 'product,canned on,jar size,jars filled,jars sealed\nPickled Beets,2026-09-01,pint,4,4\n', commit: true },
+    [`POST ${H}/shelf/import`]: {
+      csv: 'product,canned on,jar size,jars filled,jars sealed\nPickled Beets,2026-09-01,pint,4,4\n',
+      commit: true,
+    },
     'PATCH /api/me/notifications': { emailReminders: true, weeklyDigest: false, reminderHour: 8, daysBefore: 2 },
   };
   return key in seeds ? seeds[key] : (TABLE[key]?.body?.(ids) ?? {});
@@ -91,12 +167,52 @@ function seedBody(key: string): unknown {
 
 const NO_SUCH_ID = 'ffffffff-ffff-4fff-bfff-ffffffffffff';
 const NASTY_STRINGS = [
-  '', ' ', '\u0000', '\uD800', '\u202Eevil', 'ǅ̶̡̛̜̗̞̈́̓̆', '🫙🍯🥒', 'NaN', 'Infinity', '-0', '1e999', 'null', 'true', '[]', '{}',
-  '2026-02-30', '2026-13-01', '0000-00-00', '9999-99-99', '+275760-09-13', '2026-1-1', '2026-12-01T25:00:00Z', 'yesterday',
-  '<script>alert(1)</script>', "'; DROP TABLE jars; --", '../../etc/passwd', '%00', '__proto__', '00000000-0000-0000-0000-000000000000',
+  '',
+  ' ',
+  '\u0000',
+  '\uD800',
+  '\u202Eevil',
+  'ǅ̶̡̛̜̗̞̈́̓̆',
+  '🫙🍯🥒',
+  'NaN',
+  'Infinity',
+  '-0',
+  '1e999',
+  'null',
+  'true',
+  '[]',
+  '{}',
+  '2026-02-30',
+  '2026-13-01',
+  '0000-00-00',
+  '9999-99-99',
+  '+275760-09-13',
+  '2026-1-1',
+  '2026-12-01T25:00:00Z',
+  'yesterday',
+  '<script>alert(1)</script>',
+  "'; DROP TABLE jars; --",
+  '../../etc/passwd',
+  '%00',
+  '__proto__',
+  '00000000-0000-0000-0000-000000000000',
   NO_SUCH_ID,
 ];
-const NASTY_NUMBERS = [-1, -0, 0, 0.5, -0.5, 1e308, -1e308, 2 ** 31, -(2 ** 31) - 1, Number.MAX_SAFE_INTEGER + 2, 1e-320, 501, 100_001];
+const NASTY_NUMBERS = [
+  -1,
+  -0,
+  0,
+  0.5,
+  -0.5,
+  1e308,
+  -1e308,
+  2 ** 31,
+  -(2 ** 31) - 1,
+  Number.MAX_SAFE_INTEGER + 2,
+  1e-320,
+  501,
+  100_001,
+];
 
 const nested = (depth: number) => Array.from({ length: depth }).reduce<unknown>((inner) => ({ a: [inner] }), 1);
 
@@ -121,7 +237,10 @@ function mutated(seed: unknown, depth = 0): fc.Arbitrary<unknown> {
       fc.oneof(
         { weight: 4, arbitrary: fc.constant([key, value] as const) },
         { weight: 3, arbitrary: hostileValue.map((v) => [key, v] as const) },
-        { weight: depth < 2 && value && typeof value === 'object' ? 2 : 0, arbitrary: mutated(value, depth + 1).map((v) => [key, v] as const) },
+        {
+          weight: depth < 2 && value && typeof value === 'object' ? 2 : 0,
+          arbitrary: mutated(value, depth + 1).map((v) => [key, v] as const),
+        },
         { weight: 1, arbitrary: fc.constant(null) },
       ),
     );
@@ -139,20 +258,44 @@ function hostileBody(seed: unknown): fc.Arbitrary<string> {
     { weight: 60, arbitrary: json },
     {
       weight: 10,
-      arbitrary: fc.tuple(json, fc.constantFrom('"__proto__":{"isKeeper":true}', '"constructor":{"prototype":{"isKeeper":true}}', '"householdId":"x"', `"id":"${NO_SUCH_ID}"`, '"role":"keeper"', '"extra":[1,2,3]')).map(([body, extra]) =>
-        body.startsWith('{') && body !== '{}' ? `{${extra},${body.slice(1)}` : body,
-      ),
+      arbitrary: fc
+        .tuple(
+          json,
+          fc.constantFrom(
+            '"__proto__":{"isKeeper":true}',
+            '"constructor":{"prototype":{"isKeeper":true}}',
+            '"householdId":"x"',
+            `"id":"${NO_SUCH_ID}"`,
+            '"role":"keeper"',
+            '"extra":[1,2,3]',
+          ),
+        )
+        .map(([body, extra]) => (body.startsWith('{') && body !== '{}' ? `{${extra},${body.slice(1)}` : body)),
     },
     {
       weight: 10,
-      arbitrary: fc.tuple(fc.constantFrom(...keys), fc.constantFrom('1e999', '-1e999', 'NaN', 'Infinity', '-0', '1e-400', '123456789012345678901234567890')).map(
-        ([key, literal]) => `{"${key}":${literal}}`,
-      ),
+      arbitrary: fc
+        .tuple(
+          fc.constantFrom(...keys),
+          fc.constantFrom('1e999', '-1e999', 'NaN', 'Infinity', '-0', '1e-400', '123456789012345678901234567890'),
+        )
+        .map(([key, literal]) => `{"${key}":${literal}}`),
     },
     { weight: 10, arbitrary: fc.jsonValue({ maxDepth: 3 }).map((v) => JSON.stringify(v)) },
-    { weight: 5, arbitrary: fc.constantFrom('{', '{"a":}', "{'a':1}", '[1,2', '\u0000', '', 'undefined', '{"a":1}{"b":2}') },
-    { weight: 5, arbitrary: fc.integer({ min: 1000, max: 20000 }).map((depth) => '['.repeat(depth) + ']'.repeat(depth)) },
-    { weight: 1, arbitrary: fc.constantFrom(...keys).map((key) => JSON.stringify({ ...(seed as object), [key]: 'ŧ'.repeat(300_000) })) },
+    {
+      weight: 5,
+      arbitrary: fc.constantFrom('{', '{"a":}', "{'a':1}", '[1,2', '\u0000', '', 'undefined', '{"a":1}{"b":2}'),
+    },
+    {
+      weight: 5,
+      arbitrary: fc.integer({ min: 1000, max: 20000 }).map((depth) => '['.repeat(depth) + ']'.repeat(depth)),
+    },
+    {
+      weight: 1,
+      arbitrary: fc
+        .constantFrom(...keys)
+        .map((key) => JSON.stringify({ ...(seed as object), [key]: 'ŧ'.repeat(300_000) })),
+    },
   );
 }
 
@@ -166,7 +309,9 @@ async function fingerprinter() {
   const { rows: tables } = await client.query<{ name: string }>(
     `SELECT tablename AS name FROM pg_tables WHERE schemaname = 'public' AND tablename NOT IN ('sessions', 'rate_limit_hits') ORDER BY tablename`,
   );
-  const parts = tables.map(({ name }) => `(SELECT count(*) || ':' || coalesce(sum(hashtextextended(t::text, 0)), 0) FROM "${name}" t)`);
+  const parts = tables.map(
+    ({ name }) => `(SELECT count(*) || ':' || coalesce(sum(hashtextextended(t::text, 0)), 0) FROM "${name}" t)`,
+  );
   const text = `SELECT md5(concat_ws('|', ${parts.join(', ')})) AS md5`;
   return {
     tables: tables.length,
@@ -177,7 +322,9 @@ async function fingerprinter() {
 
 describe('hostile input on every write route', () => {
   it(`never answers 5xx, always answers the JSON error shape, and a refused request changes nothing (${CASES_PER_ROUTE} cases a route)`, async () => {
-    const writes = listRoutes(ctx.app).filter((r) => ['POST', 'PATCH', 'PUT', 'DELETE'].includes(r.method) && !(`${r.method} ${r.path}` in LEFT_OUT));
+    const writes = listRoutes(ctx.app).filter(
+      (r) => ['POST', 'PATCH', 'PUT', 'DELETE'].includes(r.method) && !(`${r.method} ${r.path}` in LEFT_OUT),
+    );
     const failures: string[] = [];
     const statuses: Record<string, number> = {};
     const fingerprint = await fingerprinter();
@@ -204,8 +351,15 @@ describe('hostile input on every write route', () => {
         if (response.status >= 500) failures.push(`${shown} -> ${response.status} ${response.text.slice(0, 300)}`);
         else if (response.status >= 400) {
           const error = response.body?.error;
-          if (!/json/.test(response.headers['content-type'] ?? '') || typeof error?.code !== 'string' || typeof error?.message !== 'string' || !error.message) {
-            failures.push(`${shown} -> ${response.status} without the JSON error shape: ${response.text.slice(0, 200)}`);
+          if (
+            !/json/.test(response.headers['content-type'] ?? '') ||
+            typeof error?.code !== 'string' ||
+            typeof error?.message !== 'string' ||
+            !error.message
+          ) {
+            failures.push(
+              `${shown} -> ${response.status} without the JSON error shape: ${response.text.slice(0, 200)}`,
+            );
           }
           if (after !== before) failures.push(`${shown} -> ${response.status}, yet the database changed`);
         }
@@ -215,16 +369,31 @@ describe('hostile input on every write route', () => {
       timings.push([key, Date.now() - started]);
     }
     await fingerprint.close();
-    console.info(`hostile input: ${writes.length} write routes, ${cases} cases (seed ${SEED}); ${fingerprint.tables} tables fingerprinted after each; statuses ${JSON.stringify(statuses)}; left out: ${Object.keys(LEFT_OUT).join(', ')}`);
-    console.info(`time in requests ${(spent.requests / 1000).toFixed(1)} s, in fingerprints ${(spent.fingerprints / 1000).toFixed(1)} s`);
-    console.info(`slowest routes: ${timings.sort((a, b) => b[1] - a[1]).slice(0, 5).map(([k, ms]) => `${k} ${(ms / 1000).toFixed(1)} s`).join('; ')}`);
+    console.info(
+      `hostile input: ${writes.length} write routes, ${cases} cases (seed ${SEED}); ${fingerprint.tables} tables fingerprinted after each; statuses ${JSON.stringify(statuses)}; left out: ${Object.keys(LEFT_OUT).join(', ')}`,
+    );
+    console.info(
+      `time in requests ${(spent.requests / 1000).toFixed(1)} s, in fingerprints ${(spent.fingerprints / 1000).toFixed(1)} s`,
+    );
+    console.info(
+      `slowest routes: ${timings
+        .sort((a, b) => b[1] - a[1])
+        .slice(0, 5)
+        .map(([k, ms]) => `${k} ${(ms / 1000).toFixed(1)} s`)
+        .join('; ')}`,
+    );
     expect(({} as Record<string, unknown>).isKeeper, 'no prototype pollution').toBeUndefined();
     expect(failures).toEqual([]);
     expect(cases).toBeGreaterThanOrEqual(writes.length * CASES_PER_ROUTE);
   }, 900_000);
 });
 
-function send(agent: ReturnType<typeof request.agent> | ReturnType<typeof request>, route: RouteInfo, url: string, text: string) {
+function send(
+  agent: ReturnType<typeof request.agent> | ReturnType<typeof request>,
+  route: RouteInfo,
+  url: string,
+  text: string,
+) {
   const method = route.method.toLowerCase() as 'post';
   return (agent as ReturnType<typeof request.agent>)[method](url).set('Content-Type', 'application/json').send(text);
 }

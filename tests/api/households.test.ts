@@ -54,8 +54,14 @@ describe('changing household settings', () => {
       .patch(`/api/households/${ctx.householdId}`)
       .send({ name: 'Calloway Hollow', altitudeFt: 3100, unitSystem: 'metric', timeZone: 'America/Denver' });
     expect(response.status).toBe(200);
-    expect(response.body.household).toMatchObject({ altitudeFt: 3100, unitSystem: 'metric', timeZone: 'America/Denver' });
-    await keeper.patch(`/api/households/${ctx.householdId}`).send({ altitudeFt: 2350, unitSystem: 'us', timeZone: 'America/New_York' });
+    expect(response.body.household).toMatchObject({
+      altitudeFt: 3100,
+      unitSystem: 'metric',
+      timeZone: 'America/Denver',
+    });
+    await keeper
+      .patch(`/api/households/${ctx.householdId}`)
+      .send({ altitudeFt: 2350, unitSystem: 'us', timeZone: 'America/New_York' });
   });
 
   it("refuses a helper's PATCH with 403 and changes nothing", async () => {
@@ -78,7 +84,9 @@ describe('changing household settings', () => {
 
   it('refuses invalid settings with 400 naming each field', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const response = await keeper.patch(`/api/households/${ctx.householdId}`).send({ altitudeFt: 'high', timeZone: 'Mars/Olympus', unitSystem: 'cubits' });
+    const response = await keeper
+      .patch(`/api/households/${ctx.householdId}`)
+      .send({ altitudeFt: 'high', timeZone: 'Mars/Olympus', unitSystem: 'cubits' });
     expect(response.status).toBe(400);
     expect(Object.keys(response.body.error.fields).sort()).toEqual(['altitudeFt', 'timeZone', 'unitSystem']);
   });
@@ -93,14 +101,19 @@ describe('changing household settings', () => {
 describe('roles', () => {
   async function memberId(email: string) {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const members = (await keeper.get(`/api/households/${ctx.householdId}/members`)).body.members as { userId: string; email: string }[];
+    const members = (await keeper.get(`/api/households/${ctx.householdId}/members`)).body.members as {
+      userId: string;
+      email: string;
+    }[];
     return members.find((m) => m.email === email)!.userId;
   }
 
   it('lets the keeper change a role', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
     const helperId = await memberId('helper@larderly.test');
-    const response = await keeper.patch(`/api/households/${ctx.householdId}/members/${helperId}`).send({ role: 'cook' });
+    const response = await keeper
+      .patch(`/api/households/${ctx.householdId}/members/${helperId}`)
+      .send({ role: 'cook' });
     expect(response.status).toBe(200);
     expect(response.body.members.find((m: { userId: string }) => m.userId === helperId).role).toBe('cook');
     await keeper.patch(`/api/households/${ctx.householdId}/members/${helperId}`).send({ role: 'helper' });
@@ -109,7 +122,9 @@ describe('roles', () => {
   it('keeps at least one keeper: the last keeper cannot step down (409)', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
     const keeperId = await memberId('keeper@larderly.test');
-    const response = await keeper.patch(`/api/households/${ctx.householdId}/members/${keeperId}`).send({ role: 'cook' });
+    const response = await keeper
+      .patch(`/api/households/${ctx.householdId}/members/${keeperId}`)
+      .send({ role: 'cook' });
     expect(response.status).toBe(409);
     expect(response.body.error.message).toMatch(/at least one keeper/);
   });
@@ -117,19 +132,25 @@ describe('roles', () => {
   it('refuses a cook changing roles with 403', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const helperId = await memberId('helper@larderly.test');
-    expect((await cook.patch(`/api/households/${ctx.householdId}/members/${helperId}`).send({ role: 'keeper' })).status).toBe(403);
+    expect(
+      (await cook.patch(`/api/households/${ctx.householdId}/members/${helperId}`).send({ role: 'keeper' })).status,
+    ).toBe(403);
   });
 
   it('answers 404 for a person who is not a member', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const response = await keeper.patch(`/api/households/${ctx.householdId}/members/00000000-0000-4000-8000-000000000000`).send({ role: 'cook' });
+    const response = await keeper
+      .patch(`/api/households/${ctx.householdId}/members/00000000-0000-4000-8000-000000000000`)
+      .send({ role: 'cook' });
     expect(response.status).toBe(404);
   });
 
   it('refuses an unknown role with 400', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
     const helperId = await memberId('helper@larderly.test');
-    const response = await keeper.patch(`/api/households/${ctx.householdId}/members/${helperId}`).send({ role: 'owner' });
+    const response = await keeper
+      .patch(`/api/households/${ctx.householdId}/members/${helperId}`)
+      .send({ role: 'owner' });
     expect(response.status).toBe(400);
     expect(response.body.error.fields.role).toBeDefined();
   });
@@ -143,7 +164,10 @@ describe('error shape', () => {
   });
 
   it('answers malformed JSON with a 400 in the same shape', async () => {
-    const response = await ctx.request.post('/api/auth/login').set('Content-Type', 'application/json').send('{"email":');
+    const response = await ctx.request
+      .post('/api/auth/login')
+      .set('Content-Type', 'application/json')
+      .send('{"email":');
     expect(response.status).toBe(400);
     expect(response.body.error.code).toBe('invalid_input');
   });

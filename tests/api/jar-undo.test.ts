@@ -19,7 +19,9 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 const history = async (agent: Agent, batchId: string, code: string) =>
-  ((await agent.get(`${lookups.base}/batches/${batchId}`)).body.batch.history as { kind: string; jarCode: string }[]).filter((e) => e.jarCode === code).map((e) => e.kind);
+  ((await agent.get(`${lookups.base}/batches/${batchId}`)).body.batch.history as { kind: string; jarCode: string }[])
+    .filter((e) => e.jarCode === code)
+    .map((e) => e.kind);
 
 async function sealedJar(index: number) {
   const jars = await lookups.sealedJars();
@@ -50,7 +52,11 @@ describe('undoing a jar change', () => {
   it('undoes one change once when ten requests race, and answers the others with 409', async () => {
     const jar = await sealedJar(2);
     const discarded = await helper.post(`${lookups.base}/jars/${jar.id}/discard`);
-    const answers = await Promise.all(Array.from({ length: 10 }, () => helper.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: discarded.body.eventId })));
+    const answers = await Promise.all(
+      Array.from({ length: 10 }, () =>
+        helper.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: discarded.body.eventId }),
+      ),
+    );
     expect(answers.map((a) => a.status).sort()).toEqual([200, ...Array(9).fill(409)]);
     expect((await history(helper, jar.batchId, jar.code)).filter((k) => k === 'restored')).toHaveLength(1);
   });
@@ -67,8 +73,12 @@ describe('undoing a jar change', () => {
   it("refuses a helper someone else's change, and their own once the minutes are up; a cook puts the jar back", async () => {
     const jar = await sealedJar(4);
     const byCook = await cook.post(`${lookups.base}/jars/${jar.id}/discard`);
-    expect((await helper.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: byCook.body.eventId })).status).toBe(403);
-    expect((await cook.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: byCook.body.eventId })).body.jar.state).toBe('sealed');
+    expect(
+      (await helper.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: byCook.body.eventId })).status,
+    ).toBe(403);
+    expect(
+      (await cook.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: byCook.body.eventId })).body.jar.state,
+    ).toBe('sealed');
 
     const older = await sealedJar(6);
     const own = await helper.post(`${lookups.base}/jars/${older.id}/discard`);
@@ -82,17 +92,24 @@ describe('undoing a jar change', () => {
     }
     expect(late.status).toBe(403);
     expect(late.body.error.message).toMatch(/Ask a cook or keeper/);
-    expect((await cook.post(`${lookups.base}/jars/${older.id}/undo`).send({ eventId: own.body.eventId })).body.jar.state).toBe('sealed');
+    expect(
+      (await cook.post(`${lookups.base}/jars/${older.id}/undo`).send({ eventId: own.body.eventId })).body.jar.state,
+    ).toBe('sealed');
   });
 
   it('lets a cook put back a demo jar finished before undo existed, from its page', async () => {
-    const [finished] = await ctx.sequelize.query<{ id: string; code: string }>(`SELECT id, code FROM jars WHERE household_id = :hid AND state = 'finished' ORDER BY code LIMIT 1`, {
-      replacements: { hid: ctx.householdId },
-      type: QueryTypes.SELECT,
-    });
+    const [finished] = await ctx.sequelize.query<{ id: string; code: string }>(
+      `SELECT id, code FROM jars WHERE household_id = :hid AND state = 'finished' ORDER BY code LIMIT 1`,
+      {
+        replacements: { hid: ctx.householdId },
+        type: QueryTypes.SELECT,
+      },
+    );
     const page = (await cook.get(`/api/jars/by-code/${finished!.code}`)).body;
     expect(page.lastChange).toMatchObject({ kind: 'finished' });
-    const back = await cook.post(`${lookups.base}/jars/${finished!.id}/undo`).send({ eventId: page.lastChange.eventId });
+    const back = await cook
+      .post(`${lookups.base}/jars/${finished!.id}/undo`)
+      .send({ eventId: page.lastChange.eventId });
     expect(back.body.jar.state).toBe('opened');
     expect(back.body.jar.remainingTbsp).toBeGreaterThan(0);
   });
@@ -101,6 +118,8 @@ describe('undoing a jar change', () => {
     const jar = await sealedJar(5);
     const opened = await helper.post(`${lookups.base}/jars/${jar.id}/open`);
     const neighbour = await ctx.signedIn('neighbor@larderly.test');
-    expect((await neighbour.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: opened.body.eventId })).status).toBe(404);
+    expect(
+      (await neighbour.post(`${lookups.base}/jars/${jar.id}/undo`).send({ eventId: opened.body.eventId })).status,
+    ).toBe(404);
   });
 });

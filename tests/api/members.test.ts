@@ -24,15 +24,32 @@ async function householdWith(role: 'helper' | 'cook' | 'keeper') {
 describe('removing a member', () => {
   it("ends the member's access on their very next request, on every app process, and takes their reminders and to-dos with it", async () => {
     const { keeper, member } = await householdWith('helper');
-    const second = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', BCRYPT_COST: '4', STATIC_DIR: 'none' }), { authLimit: 1000 });
+    const second = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', BCRYPT_COST: '4', STATIC_DIR: 'none' }), {
+      authLimit: 1000,
+    });
     try {
       const onSecond = request.agent(second.app);
       await onSecond.post('/api/auth/login').send({ email: member.email, password: 'brine and patience' });
       expect((await member.agent.get(`/api/households/${keeper.householdId}/members`)).status).toBe(200);
       expect((await onSecond.get(`/api/households/${keeper.householdId}`)).status).toBe(200);
-      const { jar } = await openedJar(keeper.householdId, { productName: 'Green tomato chutney', openedOn: '2026-11-28', useWithinDays: 28 });
-      await ReminderDelivery.create({ householdId: keeper.householdId, jarId: jar.id, userId: member.userId, kind: 'soon', useBy: jar.useBy! });
-      const todo = await Todo.create({ householdId: keeper.householdId, title: 'Wash the jars', position: 0, assigneeId: member.userId });
+      const { jar } = await openedJar(keeper.householdId, {
+        productName: 'Green tomato chutney',
+        openedOn: '2026-11-28',
+        useWithinDays: 28,
+      });
+      await ReminderDelivery.create({
+        householdId: keeper.householdId,
+        jarId: jar.id,
+        userId: member.userId,
+        kind: 'soon',
+        useBy: jar.useBy!,
+      });
+      const todo = await Todo.create({
+        householdId: keeper.householdId,
+        title: 'Wash the jars',
+        position: 0,
+        assigneeId: member.userId,
+      });
 
       const removed = await keeper.agent.delete(`/api/households/${keeper.householdId}/members/${member.userId}`);
       expect(removed.status).toBe(200);
@@ -41,8 +58,12 @@ describe('removing a member', () => {
       expect((await member.agent.get(`/api/households/${keeper.householdId}/members`)).status).toBe(404);
       expect((await onSecond.get(`/api/households/${keeper.householdId}`)).status).toBe(404);
       expect((await onSecond.get(`/api/households/${keeper.householdId}/fridge`)).status).toBe(404);
-      expect((await member.agent.get('/api/auth/me')).body.memberships.map((m: { householdId: string }) => m.householdId)).toEqual([member.householdId]);
-      expect(await ReminderDelivery.count({ where: { householdId: keeper.householdId, userId: member.userId } })).toBe(0);
+      expect(
+        (await member.agent.get('/api/auth/me')).body.memberships.map((m: { householdId: string }) => m.householdId),
+      ).toEqual([member.householdId]);
+      expect(await ReminderDelivery.count({ where: { householdId: keeper.householdId, userId: member.userId } })).toBe(
+        0,
+      );
       expect((await Todo.findByPk(todo.id))!.assigneeId).toBeNull();
       // They still keep their own household, so their own devices keep getting its reminders.
       expect((await member.agent.get(`/api/households/${member.householdId}`)).status).toBe(200);
@@ -58,8 +79,15 @@ describe('removing a member', () => {
     // The keeper's household is now the only one the helper belongs to.
     await Membership.destroy({ where: { householdId: helper.householdId, userId: helper.userId } });
     const { keys } = browserPushKeys();
-    await PushSubscription.create({ userId: helper.userId, endpoint: 'https://push.example.test/helper-device', p256dh: keys.p256dh, auth: keys.auth });
-    expect((await keeper.agent.delete(`/api/households/${keeper.householdId}/members/${helper.userId}`)).status).toBe(200);
+    await PushSubscription.create({
+      userId: helper.userId,
+      endpoint: 'https://push.example.test/helper-device',
+      p256dh: keys.p256dh,
+      auth: keys.auth,
+    });
+    expect((await keeper.agent.delete(`/api/households/${keeper.householdId}/members/${helper.userId}`)).status).toBe(
+      200,
+    );
     expect(await PushSubscription.count({ where: { userId: helper.userId } })).toBe(0);
   });
 
@@ -69,12 +97,16 @@ describe('removing a member', () => {
     expect(self.status).toBe(409);
     expect(self.body.error.message).toMatch(/Leave household/);
     const stranger = await newHousehold(ctx.app, 'UTC');
-    expect((await keeper.agent.delete(`/api/households/${keeper.householdId}/members/${stranger.userId}`)).status).toBe(404);
+    expect((await keeper.agent.delete(`/api/households/${keeper.householdId}/members/${stranger.userId}`)).status).toBe(
+      404,
+    );
   });
 
   it('lets only a keeper remove: a cook is refused with 403', async () => {
     const { keeper, member } = await householdWith('cook');
-    expect((await member.agent.delete(`/api/households/${keeper.householdId}/members/${keeper.userId}`)).status).toBe(403);
+    expect((await member.agent.delete(`/api/households/${keeper.householdId}/members/${keeper.userId}`)).status).toBe(
+      403,
+    );
   });
 });
 
@@ -91,9 +123,16 @@ describe('leaving a household', () => {
     const refused = await keeper.agent.post(`/api/households/${keeper.householdId}/leave`).send({});
     expect(refused.status).toBe(409);
     expect(refused.body.error.message).toMatch(/Make someone else a keeper first/);
-    await keeper.agent.patch(`/api/households/${keeper.householdId}/members/${member.userId}`).send({ role: 'keeper' }).expect(200);
+    await keeper.agent
+      .patch(`/api/households/${keeper.householdId}/members/${member.userId}`)
+      .send({ role: 'keeper' })
+      .expect(200);
     expect((await keeper.agent.post(`/api/households/${keeper.householdId}/leave`).send({})).status).toBe(204);
     expect((await keeper.agent.get(`/api/households/${keeper.householdId}`)).status).toBe(404);
-    expect((await member.agent.get(`/api/households/${keeper.householdId}/members`)).body.members.map((m: { role: string }) => m.role)).toEqual(['keeper']);
+    expect(
+      (await member.agent.get(`/api/households/${keeper.householdId}/members`)).body.members.map(
+        (m: { role: string }) => m.role,
+      ),
+    ).toEqual(['keeper']);
   });
 });

@@ -76,7 +76,8 @@ describe('which push endpoints the server will connect to', () => {
 describe('push subscriptions per person', () => {
   it(`caps a person at ${MAX_PUSH_DEVICES} devices`, async () => {
     const person = await newHousehold(development.app, 'UTC');
-    for (let i = 0; i < MAX_PUSH_DEVICES; i += 1) expect((await subscribe(person.agent, `${LOCAL}/push/cap-${person.userId}-${i}`)).status).toBe(201);
+    for (let i = 0; i < MAX_PUSH_DEVICES; i += 1)
+      expect((await subscribe(person.agent, `${LOCAL}/push/cap-${person.userId}-${i}`)).status).toBe(201);
     const over = await subscribe(person.agent, `${LOCAL}/push/cap-${person.userId}-over`);
     expect(over.status).toBe(409);
     expect(over.body.error.message).toMatch(/already on for 10 of your devices/);

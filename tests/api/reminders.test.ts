@@ -31,12 +31,21 @@ async function scenario(productName: string) {
   const home = await newHousehold(built.app, ZONE);
   const browser = browserPushKeys();
   const endpoint = standIns.push.newEndpoint();
-  expect((await home.agent.post('/api/push/subscriptions').send({ endpoint, expirationTime: null, keys: browser.keys })).status).toBe(201);
+  expect(
+    (await home.agent.post('/api/push/subscriptions').send({ endpoint, expirationTime: null, keys: browser.keys }))
+      .status,
+  ).toBe(201);
   const openedOn = todayIn(ZONE);
   const { jar } = await openedJar(home.householdId, { productName, openedOn, useWithinDays: 10 });
   // The default reminder: 2 days before the use-by, at 8 in the household's time zone.
   const reminderDay = addDays(openedOn, 8);
-  return { ...home, browser, endpoint, jar, at: (hour: number, minute = 5) => instantAt(reminderDay, hour, minute, ZONE) };
+  return {
+    ...home,
+    browser,
+    endpoint,
+    jar,
+    at: (hour: number, minute = 5) => instantAt(reminderDay, hour, minute, ZONE),
+  };
 }
 
 function runSweepProcess(at: Date) {
@@ -47,7 +56,9 @@ function runSweepProcess(at: Date) {
     let output = '';
     child.stdout.on('data', (chunk) => (output += chunk));
     child.stderr.on('data', (chunk) => (output += chunk));
-    child.on('exit', (code) => (code === 0 ? resolve(output) : reject(new Error(`sweep process exited with ${code}: ${output}`))));
+    child.on('exit', (code) =>
+      code === 0 ? resolve(output) : reject(new Error(`sweep process exited with ${code}: ${output}`)),
+    );
   });
 }
 
@@ -91,7 +102,9 @@ describe('use-by reminders', () => {
     expect(standIns.mail.to(home.email)).toHaveLength(0);
     // A sweep within the catch-up hours after the reminder hour still sends the missed one.
     await sweepReminders(built.ctx, instantAt(addDays(home.jar.useBy!, -1), 9, 40, ZONE));
-    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual(['Use the Cherry Plum Chutney within 1 day']);
+    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual([
+      'Use the Cherry Plum Chutney within 1 day',
+    ]);
     expect(standIns.mail.to(home.email)).toHaveLength(1);
   });
 
@@ -116,7 +129,9 @@ describe('use-by reminders', () => {
   it('retries a claim whose sweep crashed between the claim and the send, once it is stale, and then sends once', async () => {
     const home = await scenario('Rowan Berry Jelly');
     const crash = new Error('the process died here');
-    await expect(sweepReminders(built.ctx, home.at(8, 5), { afterClaim: () => Promise.reject(crash) })).rejects.toBe(crash);
+    await expect(sweepReminders(built.ctx, home.at(8, 5), { afterClaim: () => Promise.reject(crash) })).rejects.toBe(
+      crash,
+    );
     const claimed = await ReminderDelivery.findOne({ where: { jarId: home.jar.id } });
     expect(claimed).toMatchObject({ sentAt: null, attempts: 1 });
     expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
@@ -128,7 +143,9 @@ describe('use-by reminders', () => {
     await sweepReminders(built.ctx, home.at(8, 6 + STALE_CLAIM_MINUTES));
     await sweepReminders(built.ctx, home.at(9, 0));
     await sweepReminders(built.ctx, home.at(10, 0));
-    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual(['Use the Rowan Berry Jelly within 2 days']);
+    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual([
+      'Use the Rowan Berry Jelly within 2 days',
+    ]);
     expect(standIns.mail.to(home.email)).toHaveLength(1);
     const sent = await ReminderDelivery.findOne({ where: { jarId: home.jar.id } });
     expect(sent!.sentAt).not.toBeNull();
@@ -140,7 +157,10 @@ describe('use-by reminders', () => {
   it('expires a sweep whose worker died within a minute, so the next sweep is not blocked longer', async () => {
     const runner = await startJobs(built.ctx);
     try {
-      const [queue] = await built.sequelize.query<{ expire_seconds: number }>("SELECT expire_seconds FROM pgboss.queue WHERE name = 'reminder-sweep'", { type: QueryTypes.SELECT });
+      const [queue] = await built.sequelize.query<{ expire_seconds: number }>(
+        "SELECT expire_seconds FROM pgboss.queue WHERE name = 'reminder-sweep'",
+        { type: QueryTypes.SELECT },
+      );
       expect(queue.expire_seconds).toBe(SWEEP_EXPIRE_SECONDS);
       expect(SWEEP_EXPIRE_SECONDS + MAINTENANCE_INTERVAL_SECONDS).toBeLessThanOrEqual(60);
     } finally {
@@ -155,7 +175,8 @@ describe('use-by reminders', () => {
     const runners = await Promise.all([startJobs(built.ctx), startJobs(built.ctx)]);
     try {
       await Promise.all(runners.map((r) => r.sweepNow()));
-      for (let i = 0; i < 60 && standIns.push.receivedBy(home.endpoint).length === 0; i += 1) await new Promise((r) => setTimeout(r, 250));
+      for (let i = 0; i < 60 && standIns.push.receivedBy(home.endpoint).length === 0; i += 1)
+        await new Promise((r) => setTimeout(r, 250));
       await new Promise((r) => setTimeout(r, 3_000));
     } finally {
       await Promise.all(runners.map((r) => r.stop()));
@@ -167,11 +188,16 @@ describe('use-by reminders', () => {
 
   it('respects a later reminder hour and more days before', async () => {
     const home = await scenario('Sloe Gin Jelly');
-    expect((await home.agent.patch('/api/me/notifications').send({ reminderHour: 18, daysBefore: 3, emailReminders: false })).status).toBe(200);
+    expect(
+      (await home.agent.patch('/api/me/notifications').send({ reminderHour: 18, daysBefore: 3, emailReminders: false }))
+        .status,
+    ).toBe(200);
     await sweepReminders(built.ctx, instantAt(addDays(home.jar.useBy!, -3), 17, 30, ZONE));
     expect(standIns.push.receivedBy(home.endpoint)).toHaveLength(0);
     await sweepReminders(built.ctx, instantAt(addDays(home.jar.useBy!, -3), 18, 5, ZONE));
-    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual(['Use the Sloe Gin Jelly within 3 days']);
+    expect(standIns.push.receivedBy(home.endpoint).map((p) => home.browser.read(p).title)).toEqual([
+      'Use the Sloe Gin Jelly within 3 days',
+    ]);
     expect(standIns.mail.to(home.email)).toHaveLength(0);
   });
 });
@@ -209,10 +235,18 @@ describe('push subscriptions', () => {
 
   it('refuses a subscription that is not https and answers 401 when signed out', async () => {
     const home = await newHousehold(built.app, ZONE);
-    const bad = await home.agent.post('/api/push/subscriptions').send({ endpoint: 'http://example.test/push/1', keys: browserPushKeys().keys });
+    const bad = await home.agent
+      .post('/api/push/subscriptions')
+      .send({ endpoint: 'http://example.test/push/1', keys: browserPushKeys().keys });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.endpoint).toMatch(/https/);
-    expect((await built.request.post('/api/push/subscriptions').send({ endpoint: standIns.push.newEndpoint(), keys: browserPushKeys().keys })).status).toBe(401);
+    expect(
+      (
+        await built.request
+          .post('/api/push/subscriptions')
+          .send({ endpoint: standIns.push.newEndpoint(), keys: browserPushKeys().keys })
+      ).status,
+    ).toBe(401);
   });
 
   it('keeps the VAPID keys it made on first start, and lets the environment override them', async () => {
@@ -221,7 +255,12 @@ describe('push subscriptions', () => {
     expect(((await AppSetting.findByPk('vapid-keys'))!.value as VapidKeys).publicKey).toBe(first);
     expect((await loadVapidKeys(built.ctx.config)).publicKey).toBe(first);
     const fromEnvironment = webpush.generateVAPIDKeys();
-    const config = loadConfig({ ...process.env, NODE_ENV: 'test', VAPID_PUBLIC_KEY: fromEnvironment.publicKey, VAPID_PRIVATE_KEY: fromEnvironment.privateKey });
+    const config = loadConfig({
+      ...process.env,
+      NODE_ENV: 'test',
+      VAPID_PUBLIC_KEY: fromEnvironment.publicKey,
+      VAPID_PRIVATE_KEY: fromEnvironment.privateKey,
+    });
     expect((await loadVapidKeys(config)).publicKey).toBe(fromEnvironment.publicKey);
   });
 });
@@ -230,7 +269,13 @@ describe('notification settings', () => {
   it('starts from the defaults: 2 days before, e-mail on', async () => {
     const home = await newHousehold(built.app, ZONE);
     const response = await home.agent.get('/api/me/notifications');
-    expect(response.body.settings).toEqual({ emailReminders: true, weeklyDigest: true, reminderHour: 8, daysBefore: 2, pushDevices: 0 });
+    expect(response.body.settings).toEqual({
+      emailReminders: true,
+      weeklyDigest: true,
+      reminderHour: 8,
+      daysBefore: 2,
+      pushDevices: 0,
+    });
   });
 
   it('refuses an hour outside 0-23 naming the field', async () => {

@@ -19,7 +19,9 @@ describe('restock in the weekly digest', () => {
     const household = (await Household.findByPk(ctx.householdId))!;
     const digest = await buildDigest(household, TODAY, 'http://127.0.0.1');
     const line = digest.restock.find((r) => r.productName === 'Test Digest Butter');
-    expect(line?.reason).toMatch(/^2 sealed jars left; you keep at least 5\. About \d+ half-pint jars would last until the next harvest\.$/);
+    expect(line?.reason).toMatch(
+      /^2 sealed jars left; you keep at least 5\. About \d+ half-pint jars would last until the next harvest\.$/,
+    );
     const mail = digestMail('keeper@larderly.test', digest);
     expect(mail.text).toMatch(/Restock suggestions\n(- .*\n)*- Test Digest Butter: 2 sealed jars left/);
   });

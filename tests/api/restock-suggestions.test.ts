@@ -21,7 +21,9 @@ interface Suggestion {
   suggestedJars: number;
 }
 
-async function restock(email: 'keeper@larderly.test' | 'helper@larderly.test' | 'neighbor@larderly.test' = 'keeper@larderly.test') {
+async function restock(
+  email: 'keeper@larderly.test' | 'helper@larderly.test' | 'neighbor@larderly.test' = 'keeper@larderly.test',
+) {
   const agent = await ctx.signedIn(email);
   return agent.get(`/api/households/${ctx.householdId}/restock`);
 }
@@ -39,7 +41,9 @@ describe('restock suggestions over the real shelf', () => {
     const mine = suggestions.find((s) => s.productId === favourite.id);
     expect(mine).toMatchObject({ reason: 'below-minimum', why: '2 sealed jars left; you keep at least 4.' });
     expect(suggestions.some((s) => s.productId === plain.id)).toBe(false);
-    const favouriteIds = response.body.forecasts.filter((f: { favourite: boolean }) => f.favourite).map((f: { productId: string }) => f.productId);
+    const favouriteIds = response.body.forecasts
+      .filter((f: { favourite: boolean }) => f.favourite)
+      .map((f: { productId: string }) => f.productId);
     for (const suggestion of suggestions) expect(favouriteIds).toContain(suggestion.productId);
   });
 
@@ -47,7 +51,8 @@ describe('restock suggestions over the real shelf', () => {
     const favourite = await addProduct(ctx.householdId, { name: 'Test Rose Hip Butter', favourite: true, minJars: 0 });
     await addJars(favourite, { sealed: 1 });
     // 2 tbsp a serving for 2 people, five days running: 4 tbsp a day against one half-pint.
-    for (let day = 0; day < 5; day += 1) await planPortion(favourite, addDays(TODAY, day), { tbspPerServing: 2, servings: 2 });
+    for (let day = 0; day < 5; day += 1)
+      await planPortion(favourite, addDays(TODAY, day), { tbspPerServing: 2, servings: 2 });
 
     const response = await restock();
     const mine = (response.body.suggestions as Suggestion[]).find((s) => s.productId === favourite.id);
@@ -65,9 +70,18 @@ describe('restock suggestions over the real shelf', () => {
   });
 
   it('gives each product its history rate, on-hand jars, run-out date, jar size advice and monthly use', async () => {
-    const product = await addProduct(ctx.householdId, { name: 'Test Sloe Butter', favourite: true, minJars: 1, jarSize: 'half-pint', useWithinDays: 21 });
+    const product = await addProduct(ctx.householdId, {
+      name: 'Test Sloe Butter',
+      favourite: true,
+      minJars: 1,
+      jarSize: 'half-pint',
+      useWithinDays: 21,
+    });
     // Six half-pints finished in the 84 days before today: 96 tbsp / 84 days.
-    await addJars(product, { sealed: 3, finishedOn: ['2026-10-01', '2026-10-20', '2026-11-03', '2026-11-10', '2026-11-20', '2026-12-01'] });
+    await addJars(product, {
+      sealed: 3,
+      finishedOn: ['2026-10-01', '2026-10-20', '2026-11-03', '2026-11-10', '2026-11-20', '2026-12-01'],
+    });
     const response = await restock();
     const forecast = response.body.forecasts.find((f: { productId: string }) => f.productId === product.id);
     const rate = (6 * 16) / 84;
@@ -91,11 +105,18 @@ describe('restock suggestions over the real shelf', () => {
     await addJars(product, { sealed: 1 });
     const cook = await ctx.signedIn('cook@larderly.test');
     expect((await restock()).body.suggestions.some((s: Suggestion) => s.productId === product.id)).toBe(false);
-    const changed = await cook.patch(`/api/households/${ctx.householdId}/products/${product.id}`).send({ favourite: true, minJars: 3 });
+    const changed = await cook
+      .patch(`/api/households/${ctx.householdId}/products/${product.id}`)
+      .send({ favourite: true, minJars: 3 });
     expect(changed.status).toBe(200);
     const after = await restock();
-    expect(after.body.suggestions.find((s: Suggestion) => s.productId === product.id)).toMatchObject({ reason: 'below-minimum' });
-    expect(after.body.forecasts.find((f: { productId: string }) => f.productId === product.id)).toMatchObject({ favourite: true, minJars: 3 });
+    expect(after.body.suggestions.find((s: Suggestion) => s.productId === product.id)).toMatchObject({
+      reason: 'below-minimum',
+    });
+    expect(after.body.forecasts.find((f: { productId: string }) => f.productId === product.id)).toMatchObject({
+      favourite: true,
+      minJars: 3,
+    });
   });
 
   it("shows the neighbour nothing of this household's restock list", async () => {
@@ -107,6 +128,8 @@ describe('restock suggestions over the real shelf', () => {
     const own = await neighbour.get(`/api/households/${ctx.neighbourHouseholdId}/restock`);
     expect(own.status).toBe(200);
     expect(JSON.stringify(own.body)).not.toMatch(/Test /);
-    expect((await neighbour.post(`/api/households/${ctx.neighbourHouseholdId}/restock/${product.id}/todo`).send({})).status).toBe(404);
+    expect(
+      (await neighbour.post(`/api/households/${ctx.neighbourHouseholdId}/restock/${product.id}/todo`).send({})).status,
+    ).toBe(404);
   });
 });

@@ -15,22 +15,41 @@ const todoUrl = (productId: string) => `/api/households/${ctx.householdId}/resto
 
 describe('adding a restock batch to the to-do list', () => {
   it("scales the tested recipe to the jars asked for and plans its processing for the household's altitude", async () => {
-    const product = await addProduct(ctx.householdId, { name: 'Test Apple Butter', favourite: true, minJars: 6, harvestMonths: [9, 10] });
+    const product = await addProduct(ctx.householdId, {
+      name: 'Test Apple Butter',
+      favourite: true,
+      minJars: 6,
+      harvestMonths: [9, 10],
+    });
     await addAppleButterRecipe(product);
     const cook = await ctx.signedIn('cook@larderly.test');
     const response = await cook.post(todoUrl(product.id)).send({ jars: 12, jarSize: 'half-pint' });
     expect(response.status).toBe(201);
     const { todo } = response.body;
-    expect(todo).toMatchObject({ kind: 'restock', productId: product.id, title: 'Make 12 half-pint jars of Test Apple Butter', done: false });
+    expect(todo).toMatchObject({
+      kind: 'restock',
+      productId: product.id,
+      title: 'Make 12 half-pint jars of Test Apple Butter',
+      done: false,
+    });
     const plan = todo.batchPlan;
 
-    const expectedScale = scaleRecipe({ yield: { jars: 8, jarSize: 'pint' }, ingredients: APPLE_BUTTER_INGREDIENTS, kind: 'fruit-butter' }, { jars: 12, jarSize: 'half-pint' });
+    const expectedScale = scaleRecipe(
+      { yield: { jars: 8, jarSize: 'pint' }, ingredients: APPLE_BUTTER_INGREDIENTS, kind: 'fruit-butter' },
+      { jars: 12, jarSize: 'half-pint' },
+    );
     expect(plan.scaled).toEqual(expectedScale);
     // 12 half-pints are 96 fl oz against the tested 8 pints (128 fl oz): three quarters of the batch.
     expect(plan.scaled.factor).toBe(0.75);
     expect(plan.scaled.ingredients.find((i: { name: string }) => i.name === 'apples').amount).toBe(6);
 
-    const expectedPlan = processingPlan({ method: 'boiling-water', altitudeFt: 2350, jarSize: 'half-pint', baseMinutes: 5, acidified: true });
+    const expectedPlan = processingPlan({
+      method: 'boiling-water',
+      altitudeFt: 2350,
+      jarSize: 'half-pint',
+      baseMinutes: 5,
+      acidified: true,
+    });
     expect(plan.processing).toEqual(expectedPlan);
     // USDA Complete Guide to Home Canning (2015), Guide 1: 1,001-3,000 ft adds 5 minutes in a boiling-water canner.
     expect(plan.processing.minutes).toBe(10);
@@ -38,9 +57,13 @@ describe('adding a restock batch to the to-do list', () => {
 
     // Calloway Hollow's canner holds 7 jars (the household default); flat lids seal once (common practice).
     expect(plan.equipment).toEqual({ jars: 12, newLids: 12, cannerCapacityJars: 7, cannerLoads: [7, 5] });
-    expect(plan.shopping.produce).toEqual([{ name: 'apples', role: 'produce', amount: 6, unit: 'lb', text: '6 lb apples' }]);
+    expect(plan.shopping.produce).toEqual([
+      { name: 'apples', role: 'produce', amount: 6, unit: 'lb', text: '6 lb apples' },
+    ]);
     expect(plan.shopping.pantry.map((item: { text: string }) => item.text)).toEqual(
-      expectedScale.ingredients.filter((i) => i.role !== 'produce').map((i) => `${formatKitchenAmount(i.amount, i.unit)} ${i.name}`),
+      expectedScale.ingredients
+        .filter((i) => i.role !== 'produce')
+        .map((i) => `${formatKitchenAmount(i.amount, i.unit)} ${i.name}`),
     );
     // Harvest in September and October: the next window ends on 31 October 2027.
     expect(plan.targetOn).toBe('2027-10-31');
@@ -61,10 +84,15 @@ describe('adding a restock batch to the to-do list', () => {
     expect(response.body.todo.batchPlan.jars).toBe(suggestion.suggestedJars);
     expect(response.body.todo.batchPlan.reason).toBe('below-minimum');
     expect(response.body.todo.batchPlan.scaled).toEqual(
-      scaleRecipe({ yield: { jars: 8, jarSize: 'pint' }, ingredients: APPLE_BUTTER_INGREDIENTS, kind: 'fruit-butter' }, { jars: suggestion.suggestedJars, jarSize: 'half-pint' }),
+      scaleRecipe(
+        { yield: { jars: 8, jarSize: 'pint' }, ingredients: APPLE_BUTTER_INGREDIENTS, kind: 'fruit-butter' },
+        { jars: suggestion.suggestedJars, jarSize: 'half-pint' },
+      ),
     );
     const again = await keeper.get(`/api/households/${ctx.householdId}/restock`);
-    expect(again.body.suggestions.find((s: { productId: string }) => s.productId === product.id).openTodoId).toBe(response.body.todo.id);
+    expect(again.body.suggestions.find((s: { productId: string }) => s.productId === product.id).openTodoId).toBe(
+      response.body.todo.id,
+    );
   });
 
   it('refuses a product with no recipe, saying why and where to add one', async () => {
@@ -97,7 +125,10 @@ describe('adding a restock batch to the to-do list', () => {
     expect((await neighbour.post(todoUrl(product.id)).send({ jars: 4 })).status).toBe(404);
     expect((await neighbour.get(`/api/households/${ctx.householdId}/todos/${body.todo.id}`)).status).toBe(404);
     expect((await neighbour.get(`/api/households/${ctx.neighbourHouseholdId}/todos/${body.todo.id}`)).status).toBe(404);
-    expect((await neighbour.post(`/api/households/${ctx.neighbourHouseholdId}/restock/${product.id}/todo`).send({ jars: 4 })).status).toBe(404);
+    expect(
+      (await neighbour.post(`/api/households/${ctx.neighbourHouseholdId}/restock/${product.id}/todo`).send({ jars: 4 }))
+        .status,
+    ).toBe(404);
     const ownList = await neighbour.get(`/api/households/${ctx.neighbourHouseholdId}/todos`);
     expect(ownList.status).toBe(200);
     expect(JSON.stringify(ownList.body)).not.toMatch(/Hidden Butter/);

@@ -25,7 +25,9 @@ beforeAll(async () => {
   const cook = await ctx.signedIn('cook@larderly.test');
   lookups = await shelfLookups(ctx, cook);
   endpoint = standIns.push.newEndpoint();
-  expect((await cook.post('/api/push/subscriptions').send({ endpoint, expirationTime: null, keys: browser.keys })).status).toBe(201);
+  expect(
+    (await cook.post('/api/push/subscriptions').send({ endpoint, expirationTime: null, keys: browser.keys })).status,
+  ).toBe(201);
 });
 afterAll(async () => {
   await ctx.close();
@@ -44,7 +46,11 @@ const processingAt = (hour: number, daysAgo = 0) => instantAt(addDays(todayIn(ZO
 const later = (from: Date, hours: number, minutes = 0) => new Date(from.getTime() + hours * HOUR + minutes * 60_000);
 
 /** A batch of pickled beets recorded as it comes out of the canner, its seals still to check. */
-async function justProcessed(processedAt: Date, jars = 6, email: 'cook@larderly.test' | 'keeper@larderly.test' = 'cook@larderly.test') {
+async function justProcessed(
+  processedAt: Date,
+  jars = 6,
+  email: 'cook@larderly.test' | 'keeper@larderly.test' = 'cook@larderly.test',
+) {
   at(processedAt);
   const agent = await ctx.signedIn(email);
   const response = await agent.post(`${lookups.base}/batches`).send({
@@ -58,11 +64,21 @@ async function justProcessed(processedAt: Date, jars = 6, email: 'cook@larderly.
     seals: 'to-check',
   });
   expect(response.status, JSON.stringify(response.body)).toBe(201);
-  return { agent, batchId: response.body.batch.id as string, jars: response.body.jars as { id: string; code: string; seal: string; state: string }[], plan: response.body.plan };
+  return {
+    agent,
+    batchId: response.body.batch.id as string,
+    jars: response.body.jars as { id: string; code: string; seal: string; state: string }[],
+    plan: response.body.plan,
+  };
 }
 
-const detail = async (batchId: string) => (await (await ctx.signedIn('keeper@larderly.test')).get(`${lookups.base}/batches/${batchId}`)).body.batch;
-const sealPushes = () => standIns.push.receivedBy(endpoint).map((p) => browser.read(p)).filter((m) => /seals/.test(m.title));
+const detail = async (batchId: string) =>
+  (await (await ctx.signedIn('keeper@larderly.test')).get(`${lookups.base}/batches/${batchId}`)).body.batch;
+const sealPushes = () =>
+  standIns.push
+    .receivedBy(endpoint)
+    .map((p) => browser.read(p))
+    .filter((m) => /seals/.test(m.title));
 const sealMails = () => standIns.mail.to('cook@larderly.test').filter((m) => /seals/.test(m.subject));
 
 describe('the seal check after processing', () => {
@@ -71,7 +87,9 @@ describe('the seal check after processing', () => {
     const { agent, batchId, jars } = await justProcessed(processedAt);
     expect(jars.map((j) => [j.state, j.seal])).toEqual(Array(6).fill(['sealed', 'to-check']));
     const batch = await detail(batchId);
-    expect(batch.processings).toMatchObject([{ number: 1, jars: 6, processedAt: processedAt.toISOString(), altitudeFt: 2350, who: expect.any(String) }]);
+    expect(batch.processings).toMatchObject([
+      { number: 1, jars: 6, processedAt: processedAt.toISOString(), altitudeFt: 2350, who: expect.any(String) },
+    ]);
     expect(batch.sealCheck).toMatchObject({
       processingNumber: 1,
       checkFrom: later(processedAt, SEAL_CHECK_AFTER_HOURS).toISOString(),
@@ -94,7 +112,11 @@ describe('the seal check after processing', () => {
       method: 'boiling-water',
     });
     expect(response.status).toBe(201);
-    expect(response.body.jars.map((j: { state: string; seal: string }) => `${j.state}/${j.seal}`).sort()).toEqual(['opened/checked', 'sealed/checked', 'sealed/checked']);
+    expect(response.body.jars.map((j: { state: string; seal: string }) => `${j.state}/${j.seal}`).sort()).toEqual([
+      'opened/checked',
+      'sealed/checked',
+      'sealed/checked',
+    ]);
     expect((await detail(response.body.batch.id)).sealCheck).toBeNull();
   });
 
@@ -134,7 +156,10 @@ describe('the seal check after processing', () => {
     await sweepReminders(ctx.ctx, later(processedAt, 12, 10));
     await sweepReminders(ctx.ctx, later(processedAt, 14));
     expect(mine()).toHaveLength(1);
-    expect(mine()[0]).toMatchObject({ title: 'Check the seals of the Pickled Beets', url: `/h/${ctx.householdId}/batches/${batchId}` });
+    expect(mine()[0]).toMatchObject({
+      title: 'Check the seals of the Pickled Beets',
+      url: `/h/${ctx.householdId}/batches/${batchId}`,
+    });
     expect(mine()[0].body).toMatch(/6 jars of Pickled Beets have cooled 12 hours/);
     const mails = sealMails().filter((m) => m.text.includes(batchId));
     expect(mails).toHaveLength(1);
@@ -176,13 +201,23 @@ describe('the seal check after processing', () => {
     const batch = response.body.batch;
     const inFridge = batch.jars.filter((j: { state: string }) => j.state === 'opened');
     expect(inFridge).toHaveLength(2);
-    for (const jar of inFridge) expect(jar).toMatchObject({ unsealed: true, seal: 'checked', openedOn: checkDay, useBy: addDays(checkDay, product!.useWithinDays ?? defaultUseWithinDays(product!.kind)) });
-    expect(batch.jars.filter((j: { state: string; seal: string }) => j.state === 'sealed' && j.seal === 'checked')).toHaveLength(4);
+    for (const jar of inFridge)
+      expect(jar).toMatchObject({
+        unsealed: true,
+        seal: 'checked',
+        openedOn: checkDay,
+        useBy: addDays(checkDay, product!.useWithinDays ?? defaultUseWithinDays(product!.kind)),
+      });
+    expect(
+      batch.jars.filter((j: { state: string; seal: string }) => j.state === 'sealed' && j.seal === 'checked'),
+    ).toHaveLength(4);
     expect(batch.jarsSealed).toBe(4);
     expect(batch.sealCheck).toBeNull();
     expect(batch.history.filter((e: { kind: string }) => e.kind === 'seal-checked')).toHaveLength(4);
     expect(batch.history.filter((e: { kind: string }) => e.kind === 'unsealed')).toHaveLength(2);
-    expect((await agent.get(`${lookups.base}/fridge`)).body.jars.map((j: { code: string }) => j.code)).toEqual(expect.arrayContaining(inFridge.map((j: { code: string }) => j.code)));
+    expect((await agent.get(`${lookups.base}/fridge`)).body.jars.map((j: { code: string }) => j.code)).toEqual(
+      expect.arrayContaining(inFridge.map((j: { code: string }) => j.code)),
+    );
     const again = await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({});
     expect(again.status).toBe(409);
   });
@@ -192,26 +227,47 @@ describe('the seal check after processing', () => {
     const { agent, batchId, jars, plan } = await justProcessed(processedAt, 4);
     at(later(processedAt, 20));
     const redo = [jars[0].id, jars[2].id];
-    const response = await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ reprocess: { jarIds: redo } });
+    const response = await agent
+      .post(`${lookups.base}/batches/${batchId}/seal-check`)
+      .send({ reprocess: { jarIds: redo } });
     expect(response.status, JSON.stringify(response.body)).toBe(200);
     expect(response.body).toMatchObject({ sealed: 2, toFridge: 0, reprocessed: 2 });
     // The same altitude rule and the full time: the reprocess plan equals the first (shared/processing-plan.ts).
-    expect(response.body.plan).toMatchObject({ allowed: true, minutes: plan.minutes, altitudeAddMinutes: plan.altitudeAddMinutes });
+    expect(response.body.plan).toMatchObject({
+      allowed: true,
+      minutes: plan.minutes,
+      altitudeAddMinutes: plan.altitudeAddMinutes,
+    });
     const batch = response.body.batch;
-    expect(batch.processings.map((p: { number: number; jars: number; minutes: number }) => [p.number, p.jars, p.minutes])).toEqual([
+    expect(
+      batch.processings.map((p: { number: number; jars: number; minutes: number }) => [p.number, p.jars, p.minutes]),
+    ).toEqual([
       [1, 4, plan.minutes],
       [2, 2, plan.minutes],
     ]);
-    expect(batch.sealCheck).toMatchObject({ processingNumber: 2, reprocessUntil: null, checkFrom: later(processedAt, 32).toISOString() });
+    expect(batch.sealCheck).toMatchObject({
+      processingNumber: 2,
+      reprocessUntil: null,
+      checkFrom: later(processedAt, 32).toISOString(),
+    });
     expect([...batch.sealCheck.jarIds].sort()).toEqual([...redo].sort());
-    expect(batch.history.filter((e: { kind: string }) => e.kind === 'reprocessed').map((e: { jarCode: string }) => e.jarCode).sort()).toEqual([jars[0].code, jars[2].code].sort());
+    expect(
+      batch.history
+        .filter((e: { kind: string }) => e.kind === 'reprocessed')
+        .map((e: { jarCode: string }) => e.jarCode)
+        .sort(),
+    ).toEqual([jars[0].code, jars[2].code].sort());
 
     // The second check: a jar that fails again goes only to the fridge (one reprocess).
     at(later(processedAt, 33));
-    const twice = await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ reprocess: { jarIds: [jars[0].id] } });
+    const twice = await agent
+      .post(`${lookups.base}/batches/${batchId}/seal-check`)
+      .send({ reprocess: { jarIds: [jars[0].id] } });
     expect(twice.status).toBe(422);
     expect(twice.body.error.message).toMatch(/reprocessed once already.*fridge/);
-    const done = await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ fridge: { jarIds: [jars[0].id] } });
+    const done = await agent
+      .post(`${lookups.base}/batches/${batchId}/seal-check`)
+      .send({ fridge: { jarIds: [jars[0].id] } });
     expect(done.status).toBe(200);
     expect(done.body).toMatchObject({ sealed: 1, toFridge: 1, reprocessed: 0 });
     expect(done.body.batch.sealCheck).toBeNull();
@@ -222,10 +278,16 @@ describe('the seal check after processing', () => {
     const { agent, batchId } = await justProcessed(processedAt, 3);
     at(later(processedAt, 24, 1));
     expect((await detail(batchId)).sealCheck.reprocessUntil).toBeNull();
-    const response = await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ reprocess: { count: 1 } });
+    const response = await agent
+      .post(`${lookups.base}/batches/${batchId}/seal-check`)
+      .send({ reprocess: { count: 1 } });
     expect(response.status).toBe(422);
-    expect(response.body.error.message).toMatch(/More than 24 hours have passed since the first processing.*only go to the fridge/);
-    expect((await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ fridge: { count: 1 } })).status).toBe(200);
+    expect(response.body.error.message).toMatch(
+      /More than 24 hours have passed since the first processing.*only go to the fridge/,
+    );
+    expect(
+      (await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ fridge: { count: 1 } })).status,
+    ).toBe(200);
   });
 
   it('lets a helper check seals and put jars in the fridge, but not record a reprocess', async () => {
@@ -233,8 +295,12 @@ describe('the seal check after processing', () => {
     const { batchId } = await justProcessed(processedAt, 3);
     at(later(processedAt, 13));
     const helper = await ctx.signedIn('helper@larderly.test');
-    expect((await helper.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ reprocess: { count: 1 } })).status).toBe(403);
-    expect((await helper.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ fridge: { count: 1 } })).status).toBe(200);
+    expect(
+      (await helper.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ reprocess: { count: 1 } })).status,
+    ).toBe(403);
+    expect(
+      (await helper.post(`${lookups.base}/batches/${batchId}/seal-check`).send({ fridge: { count: 1 } })).status,
+    ).toBe(200);
   });
 
   it('answers 400 for a jar that is not to check, more jars than are to check, or one jar named both ways', async () => {
@@ -242,9 +308,15 @@ describe('the seal check after processing', () => {
     const { agent, batchId, jars } = await justProcessed(processedAt, 3);
     at(later(processedAt, 13));
     const url = `${lookups.base}/batches/${batchId}/seal-check`;
-    expect((await agent.post(url).send({ fridge: { jarIds: ['00000000-0000-4000-8000-000000000000'] } })).status).toBe(400);
-    expect((await agent.post(url).send({ fridge: { count: 4 } })).body.error.message).toMatch(/Only 3 jars are still to check/);
-    expect((await agent.post(url).send({ fridge: { jarIds: [jars[0].id] }, reprocess: { jarIds: [jars[0].id] } })).status).toBe(400);
+    expect((await agent.post(url).send({ fridge: { jarIds: ['00000000-0000-4000-8000-000000000000'] } })).status).toBe(
+      400,
+    );
+    expect((await agent.post(url).send({ fridge: { count: 4 } })).body.error.message).toMatch(
+      /Only 3 jars are still to check/,
+    );
+    expect(
+      (await agent.post(url).send({ fridge: { jarIds: [jars[0].id] }, reprocess: { jarIds: [jars[0].id] } })).status,
+    ).toBe(400);
     expect((await agent.post(url).send({ fridge: { count: -1 } })).status).toBe(400);
   });
 });

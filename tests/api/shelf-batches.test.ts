@@ -33,14 +33,25 @@ describe('recording a batch', () => {
     const recipe = (await cook.get(`${lookups.base}/recipes/${lookups.recipe('Pickled beets').id}`)).body.recipe;
     const added = BOILING_WATER_ALTITUDE_TABLE.find((row) => 2350 <= row.upToFt)!.addMinutes;
     expect(added).toBe(5);
-    expect(response.body.plan).toMatchObject({ allowed: true, minutes: recipe.baseMinutes.pint + 5, altitudeAddMinutes: 5 });
+    expect(response.body.plan).toMatchObject({
+      allowed: true,
+      minutes: recipe.baseMinutes.pint + 5,
+      altitudeAddMinutes: 5,
+    });
     expect(response.body.plan.cautions).toContain('When in doubt, throw it out.');
-    expect(response.body.batch).toMatchObject({ altitudeFt: 2350, minutes: recipe.baseMinutes.pint + 5, jarsFilled: 6, jarsSealed: 5, headspaceInches: 0.5 });
+    expect(response.body.batch).toMatchObject({
+      altitudeFt: 2350,
+      minutes: recipe.baseMinutes.pint + 5,
+      jarsFilled: 6,
+      jarsSealed: 5,
+      headspaceInches: 0.5,
+    });
   });
 
   it('puts sealed jars on the shelf and the unsealed jar in the fridge, opened on the canning day', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const { jars } = (await cook.post(`${lookups.base}/batches`).send(beetsBatch({ jarsFilled: 4, jarsSealed: 3 }))).body;
+    const { jars } = (await cook.post(`${lookups.base}/batches`).send(beetsBatch({ jarsFilled: 4, jarsSealed: 3 })))
+      .body;
     const sealed = jars.filter((j: { state: string }) => j.state === 'sealed');
     const unsealed = jars.filter((j: { unsealed: boolean }) => j.unsealed);
     expect(sealed).toHaveLength(3);
@@ -55,7 +66,8 @@ describe('recording a batch', () => {
 
   it('keeps the history of who filled each jar', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const { batch } = (await cook.post(`${lookups.base}/batches`).send(beetsBatch({ jarsFilled: 2, jarsSealed: 1 }))).body;
+    const { batch } = (await cook.post(`${lookups.base}/batches`).send(beetsBatch({ jarsFilled: 2, jarsSealed: 1 })))
+      .body;
     const detail = (await cook.get(`${lookups.base}/batches/${batch.id}`)).body.batch;
     expect(detail.history.map((e: { kind: string }) => e.kind).sort()).toEqual(['filled', 'filled', 'unsealed']);
     expect(new Set(detail.history.map((e: { who: string }) => e.who))).toEqual(new Set(['Tobias Calloway']));
@@ -78,7 +90,9 @@ describe('recording a batch', () => {
       })
     ).body.recipe;
     const before = await lookups.counts();
-    const response = await cook.post(`${lookups.base}/batches`).send({ ...beetsBatch(), productId: lookups.product('Sweet Corn Relish').id, recipeId: recipe.id });
+    const response = await cook
+      .post(`${lookups.base}/batches`)
+      .send({ ...beetsBatch(), productId: lookups.product('Sweet Corn Relish').id, recipeId: recipe.id });
     expect(response.status).toBe(422);
     expect(response.body.error.code).toBe('not_allowed');
     // US FDA 21 CFR Part 114: only foods at pH 4.6 or below go in a boiling-water canner.
@@ -115,17 +129,24 @@ describe('recording a batch', () => {
     expect(counts.body.error.fields.jarsSealed).toMatch(/cannot seal/);
     const future = await cook.post(`${lookups.base}/batches`).send(beetsBatch({ cannedOn: '2099-01-01' }));
     expect(future.body.error.fields.cannedOn).toBeDefined();
-    const mismatch = await cook.post(`${lookups.base}/batches`).send(beetsBatch({ recipeId: lookups.recipe('Corn relish').id }));
+    const mismatch = await cook
+      .post(`${lookups.base}/batches`)
+      .send(beetsBatch({ recipeId: lookups.recipe('Corn relish').id }));
     expect(mismatch.body.error.fields.recipeId).toMatch(/another product/);
   });
 
   it('previews the same plan the batch POST computes', async () => {
     const helper = await ctx.signedIn('helper@larderly.test');
     const recipeId = lookups.recipe('Corn relish').id;
-    const preview = await helper.get(`${lookups.base}/batches/plan?recipeId=${recipeId}&jarSize=half-pint&method=atmospheric-steam`);
+    const preview = await helper.get(
+      `${lookups.base}/batches/plan?recipeId=${recipeId}&jarSize=half-pint&method=atmospheric-steam`,
+    );
     expect(preview.status).toBe(200);
     expect(preview.body.plan).toMatchObject({ allowed: true, minutes: 20 });
-    expect((await helper.get(`${lookups.base}/batches/plan?recipeId=${recipeId}&jarSize=half-pint&method=pressure-dial`)).body.plan.allowed).toBe(false);
+    expect(
+      (await helper.get(`${lookups.base}/batches/plan?recipeId=${recipeId}&jarSize=half-pint&method=pressure-dial`))
+        .body.plan.allowed,
+    ).toBe(false);
   });
 });
 
@@ -139,17 +160,37 @@ describe('products and recipes', () => {
 
   it('creates a product with the kind defaults and reports its effective opened days', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const response = await cook.post(`${lookups.base}/products`).send({ name: 'Peach Salsa', kind: 'salsa', heat: 2, harvestMonths: [8] });
+    const response = await cook
+      .post(`${lookups.base}/products`)
+      .send({ name: 'Peach Salsa', kind: 'salsa', heat: 2, harvestMonths: [8] });
     expect(response.status).toBe(201);
-    expect(response.body.product).toMatchObject({ useWithinDays: null, effectiveUseWithinDays: 7, favourite: false, minJars: 0 });
+    expect(response.body.product).toMatchObject({
+      useWithinDays: null,
+      effectiveUseWithinDays: 7,
+      favourite: false,
+      minJars: 0,
+    });
   });
 
   it('refuses a recipe without a tested time or with a bad heat, naming the fields', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const recipe = await cook.post(`${lookups.base}/recipes`).send({ productId: lookups.product('Pickled Beets').id, name: 'x', yieldJars: 1, yieldJarSize: 'pint', ingredients: [], method: 'boiling-water', baseMinutes: {}, headspaceInches: 0.5 });
+    const recipe = await cook
+      .post(`${lookups.base}/recipes`)
+      .send({
+        productId: lookups.product('Pickled Beets').id,
+        name: 'x',
+        yieldJars: 1,
+        yieldJarSize: 'pint',
+        ingredients: [],
+        method: 'boiling-water',
+        baseMinutes: {},
+        headspaceInches: 0.5,
+      });
     expect(recipe.status).toBe(400);
     expect(Object.keys(recipe.body.error.fields).sort()).toEqual(['baseMinutes', 'ingredients']);
-    const product = await cook.patch(`${lookups.base}/products/${lookups.product('Pickled Beets').id}`).send({ heat: 9 });
+    const product = await cook
+      .patch(`${lookups.base}/products/${lookups.product('Pickled Beets').id}`)
+      .send({ heat: 9 });
     expect(product.body.error.fields.heat).toMatch(/0 to 5/);
   });
 });

@@ -15,19 +15,31 @@ afterAll(() => ctx.close());
 describe('shelf CSV export', () => {
   it('writes one row a jar on hand, with a header, and keeps spreadsheet formulas as text', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    await keeper.patch(`${lookups.base}/products/${lookups.product('Plum Ketchup').id}`).send({ name: '=HYPERLINK("x")' });
-    const response = await keeper.get(`${lookups.base}/shelf.csv`).buffer(true).parse((res, done) => {
-      let text = '';
-      res.on('data', (chunk: Buffer) => (text += chunk.toString('utf8')));
-      res.on('end', () => done(null, text));
-    });
+    await keeper
+      .patch(`${lookups.base}/products/${lookups.product('Plum Ketchup').id}`)
+      .send({ name: '=HYPERLINK("x")' });
+    const response = await keeper
+      .get(`${lookups.base}/shelf.csv`)
+      .buffer(true)
+      .parse((res, done) => {
+        let text = '';
+        res.on('data', (chunk: Buffer) => (text += chunk.toString('utf8')));
+        res.on('end', () => done(null, text));
+      });
     await keeper.patch(`${lookups.base}/products/${lookups.product('Plum Ketchup').id}`).send({ name: 'Plum Ketchup' });
     expect(response.headers['content-type']).toMatch(/text\/csv/);
-    expect(response.headers['content-disposition']).toMatch(/attachment; filename="larderly-shelf-calloway-hollow.csv"/);
-    const parsed = Papa.parse<Record<string, string>>(String(response.body).replace(/^\uFEFF/, ''), { header: true, skipEmptyLines: true });
+    expect(response.headers['content-disposition']).toMatch(
+      /attachment; filename="larderly-shelf-calloway-hollow.csv"/,
+    );
+    const parsed = Papa.parse<Record<string, string>>(String(response.body).replace(/^\uFEFF/, ''), {
+      header: true,
+      skipEmptyLines: true,
+    });
     const onHand = (await keeper.get(`${lookups.base}/jars`)).body.jars as { code: string }[];
     expect(parsed.data.map((row) => row.jar_code).sort()).toEqual(onHand.map((j) => j.code).sort());
-    expect(parsed.meta.fields).toEqual(expect.arrayContaining(['jar_code', 'product', 'state', 'canned_on', 'best_by', 'use_by']));
+    expect(parsed.meta.fields).toEqual(
+      expect.arrayContaining(['jar_code', 'product', 'state', 'canned_on', 'best_by', 'use_by']),
+    );
     expect(parsed.data.some((row) => row.product === `'=HYPERLINK("x")`)).toBe(true);
   });
 });
@@ -65,7 +77,12 @@ describe('batch CSV import', () => {
 
   it('names every problem: an unknown product, a bad date, more sealed than filled', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const csv = [header, 'Quince Paste,,2025-10-01,pint,4,4,boiling-water,,', 'Pickled Beets,,2025-02-30,pint,4,4,boiling-water,,', 'Pickled Beets,,2025-10-01,pint,4,5,boiling-water,,'].join('\n');
+    const csv = [
+      header,
+      'Quince Paste,,2025-10-01,pint,4,4,boiling-water,,',
+      'Pickled Beets,,2025-02-30,pint,4,4,boiling-water,,',
+      'Pickled Beets,,2025-10-01,pint,4,5,boiling-water,,',
+    ].join('\n');
     const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv })).body;
     expect(problems.map((p: { row: number; field: string }) => [p.row, p.field])).toEqual([
       [2, 'product'],
@@ -77,7 +94,9 @@ describe('batch CSV import', () => {
   it('imports a valid file in one go: the batches and a jar for each one filled', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const before = await lookups.counts();
-    const response = await cook.post(`${lookups.base}/shelf/import`).send({ csv: [header, ...good].join('\r\n'), commit: true });
+    const response = await cook
+      .post(`${lookups.base}/shelf/import`)
+      .send({ csv: [header, ...good].join('\r\n'), commit: true });
     expect(response.status).toBe(201);
     expect(response.body).toEqual({ imported: 2, jars: 13 });
     expect(await lookups.counts()).toEqual({ batches: before.batches + 2, jars: before.jars + 13 });
@@ -85,17 +104,27 @@ describe('batch CSV import', () => {
 
   it('refuses a file without the needed columns', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: 'name,date\nBeets,2025-01-01' })).body;
-    expect(problems[0]).toMatchObject({ row: 1, message: expect.stringMatching(/needs the columns product, canned_on/) });
+    const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: 'name,date\nBeets,2025-01-01' }))
+      .body;
+    expect(problems[0]).toMatchObject({
+      row: 1,
+      message: expect.stringMatching(/needs the columns product, canned_on/),
+    });
   });
 });
 
 /** A person of their own, with a fresh household whose altitude is confirmed: "another household". */
 async function freshHousehold(tag: string) {
   const email = `${tag}-${Date.now()}@example.test`;
-  const { agent, me } = await accountSignedIn(ctx.app, { email, password: 'long enough password', name: 'Wren', householdName: `Wren ${tag}` });
+  const { agent, me } = await accountSignedIn(ctx.app, {
+    email,
+    password: 'long enough password',
+    name: 'Wren',
+    householdName: `Wren ${tag}`,
+  });
   const hid = me.memberships[0].householdId;
-  const home = (await (await ctx.signedIn('keeper@larderly.test')).get(`/api/households/${ctx.householdId}`)).body.household as { altitudeFt: number };
+  const home = (await (await ctx.signedIn('keeper@larderly.test')).get(`/api/households/${ctx.householdId}`)).body
+    .household as { altitudeFt: number };
   expect((await agent.patch(`/api/households/${hid}`).send({ altitudeFt: home.altitudeFt })).status).toBe(200);
   return { agent, base: `/api/households/${hid}` };
 }
@@ -107,8 +136,39 @@ describe('shelf CSV round trip', () => {
   async function shelfOf(agent: import('supertest').Agent, base: string) {
     const jars = (await agent.get(`${base}/jars?state=all`)).body.jars as Record<string, unknown>[];
     return jars
-      .map(({ productName, productKind, state, unsealed, bestBy, openedOn, useBy, finishedOn, discardedOn, cannedOn, jarSize, batchNotes, pastBestQuality, remainingTbsp }) =>
-        JSON.stringify({ productName, productKind, state, unsealed, bestBy, openedOn, useBy, finishedOn, discardedOn, cannedOn, jarSize, batchNotes, pastBestQuality, remainingTbsp }),
+      .map(
+        ({
+          productName,
+          productKind,
+          state,
+          unsealed,
+          bestBy,
+          openedOn,
+          useBy,
+          finishedOn,
+          discardedOn,
+          cannedOn,
+          jarSize,
+          batchNotes,
+          pastBestQuality,
+          remainingTbsp,
+        }) =>
+          JSON.stringify({
+            productName,
+            productKind,
+            state,
+            unsealed,
+            bestBy,
+            openedOn,
+            useBy,
+            finishedOn,
+            discardedOn,
+            cannedOn,
+            jarSize,
+            batchNotes,
+            pastBestQuality,
+            remainingTbsp,
+          }),
       )
       .sort();
   }
@@ -132,10 +192,17 @@ describe('shelf CSV round trip', () => {
 
     // The same batches, canned together as before, and the file exported again reads the same but for label codes.
     const batches = async (agent: import('supertest').Agent, base: string) =>
-      ((await agent.get(`${base}/batches`)).body.batches as Record<string, unknown>[]).map(({ productName, cannedOn, jarSize, jarsFilled, jarsSealed, method, minutes }) => JSON.stringify({ productName, cannedOn, jarSize, jarsFilled, jarsSealed, method, minutes })).sort();
+      ((await agent.get(`${base}/batches`)).body.batches as Record<string, unknown>[])
+        .map(({ productName, cannedOn, jarSize, jarsFilled, jarsSealed, method, minutes }) =>
+          JSON.stringify({ productName, cannedOn, jarSize, jarsFilled, jarsSealed, method, minutes }),
+        )
+        .sort();
     expect(await batches(other.agent, other.base)).toEqual(await batches(keeper, lookups.base));
     const again = csvText(await other.agent.get(`${other.base}/shelf.csv?jars=all`).buffer(true));
-    const withoutCodes = (text: string) => Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true }).data.map(({ jar_code: _c, batch: _b, ...rest }) => JSON.stringify(rest)).sort();
+    const withoutCodes = (text: string) =>
+      Papa.parse<Record<string, string>>(text, { header: true, skipEmptyLines: true })
+        .data.map(({ jar_code: _c, batch: _b, ...rest }) => JSON.stringify(rest))
+        .sort();
     expect(withoutCodes(again)).toEqual(withoutCodes(csv));
   });
 
@@ -156,18 +223,37 @@ describe('shelf CSV round trip', () => {
       ['pint-and-half', 'pressure-dial'],
       ['half-pint', 'pressure-weighted'],
     ]);
-    const wrong = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nHot Pepper Jelly,2025-08-30,gallon,1,1,kettle' })).body.problems;
+    const wrong = (
+      await cook
+        .post(`${lookups.base}/shelf/import`)
+        .send({
+          csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nHot Pepper Jelly,2025-08-30,gallon,1,1,kettle',
+        })
+    ).body.problems;
     expect(wrong).toEqual([
-      { row: 2, field: 'jar_size', message: 'Use one of: quarter-pint, half-pint, 12-ounce, pint, pint-and-a-half, quart, half-gallon.' },
-      { row: 2, field: 'method', message: 'Use one of: Boiling-water canner, Atmospheric steam canner, Pressure canner, dial gauge, Pressure canner, weighted gauge.' },
+      {
+        row: 2,
+        field: 'jar_size',
+        message: 'Use one of: quarter-pint, half-pint, 12-ounce, pint, pint-and-a-half, quart, half-gallon.',
+      },
+      {
+        row: 2,
+        field: 'method',
+        message:
+          'Use one of: Boiling-water canner, Atmospheric steam canner, Pressure canner, dial gauge, Pressure canner, weighted gauge.',
+      },
     ]);
   });
 
   it('adds a product the household does not have when the row gives its kind', async () => {
     const other = await freshHousehold('new-product');
-    const csv = 'product,kind,canned_on,jar_size,jars_filled,jars_sealed,method,minutes\nQuince Paste,Fruit butter,2025-10-01,half-pint,4,3,Boiling-water canner,10';
+    const csv =
+      'product,kind,canned_on,jar_size,jars_filled,jars_sealed,method,minutes\nQuince Paste,Fruit butter,2025-10-01,half-pint,4,3,Boiling-water canner,10';
     expect((await other.agent.post(`${other.base}/shelf/import`).send({ csv, commit: true })).status).toBe(201);
-    const products = (await other.agent.get(`${other.base}/products`)).body.products as { name: string; kind: string }[];
+    const products = (await other.agent.get(`${other.base}/products`)).body.products as {
+      name: string;
+      kind: string;
+    }[];
     expect(products).toEqual([expect.objectContaining({ name: 'Quince Paste', kind: 'fruit-butter' })]);
   });
 
@@ -176,7 +262,9 @@ describe('shelf CSV round trip', () => {
     const csv = `product,canned_on,jar_size,jars_filled,jars_sealed,method\n"'=Hot Pepper Jelly",2025-08-30,pint,1,1,boiling-water`;
     const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv })).body;
     // "=Hot Pepper Jelly" is not a product here: the apostrophe the export adds is not part of the name.
-    expect(problems).toEqual([expect.objectContaining({ field: 'product', message: expect.stringContaining('“=Hot Pepper Jelly”') })]);
+    expect(problems).toEqual([
+      expect.objectContaining({ field: 'product', message: expect.stringContaining('“=Hot Pepper Jelly”') }),
+    ]);
   });
 });
 
@@ -184,7 +272,11 @@ describe('one limit per value', () => {
   it('refuses minutes and jars past the shared limits, naming them', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const header = 'product,canned_on,jar_size,jars_filled,jars_sealed,method,minutes';
-    const { problems } = (await cook.post(`${lookups.base}/shelf/import`).send({ csv: `${header}\nHot Pepper Jelly,2025-08-30,pint,201,1,boiling-water,1201` })).body;
+    const { problems } = (
+      await cook
+        .post(`${lookups.base}/shelf/import`)
+        .send({ csv: `${header}\nHot Pepper Jelly,2025-08-30,pint,201,1,boiling-water,1201` })
+    ).body;
     expect(problems).toEqual([
       { row: 2, field: 'minutes', message: 'Use at most 1,200 minutes.' },
       { row: 2, field: 'jars_filled', message: 'Use at most 200 jars.' },
@@ -196,7 +288,8 @@ describe('CSV import limits', () => {
   it('limits checks and imports per person', async () => {
     const other = await freshHousehold('import-limit');
     const statuses: number[] = [];
-    for (let i = 0; i < 61; i += 1) statuses.push((await other.agent.post(`${other.base}/shelf/import`).send({ csv: 'x' })).status);
+    for (let i = 0; i < 61; i += 1)
+      statuses.push((await other.agent.post(`${other.base}/shelf/import`).send({ csv: 'x' })).status);
     expect(statuses.slice(0, 60).every((status) => status === 200)).toBe(true);
     const refused = await other.agent.post(`${other.base}/shelf/import`).send({ csv: 'x' });
     expect(refused.status).toBe(429);

@@ -7,13 +7,22 @@ type Agent = Awaited<ReturnType<Ctx['signedIn']>>;
 export async function shelfLookups(ctx: Ctx, agent: Agent) {
   const base = `/api/households/${ctx.householdId}`;
   const products = (await agent.get(`${base}/products`)).body.products as { id: string; name: string }[];
-  const recipes = (await agent.get(`${base}/recipes`)).body.recipes as { id: string; name: string; productId: string }[];
+  const recipes = (await agent.get(`${base}/recipes`)).body.recipes as {
+    id: string;
+    name: string;
+    productId: string;
+  }[];
   return {
     base,
     product: (name: string) => products.find((p) => p.name === name)!,
     recipe: (name: string) => recipes.find((r) => r.name === name)!,
     async sealedJars(productName?: string) {
-      const jars = (await agent.get(`${base}/jars?state=sealed`)).body.jars as { id: string; code: string; productName: string; batchId: string }[];
+      const jars = (await agent.get(`${base}/jars?state=sealed`)).body.jars as {
+        id: string;
+        code: string;
+        productName: string;
+        batchId: string;
+      }[];
       return productName ? jars.filter((j) => j.productName === productName) : jars;
     },
     async counts() {

@@ -18,13 +18,23 @@ describe('opening a jar', () => {
   it('opens it exactly once when 20 requests race, and answers the other 19 with 409', async () => {
     const helper = await ctx.signedIn('helper@larderly.test');
     const [jar] = await lookups.sealedJars('Sweet Corn Relish');
-    const answers = await Promise.all(Array.from({ length: 20 }, () => helper.post(`${lookups.base}/jars/${jar.id}/open`)));
+    const answers = await Promise.all(
+      Array.from({ length: 20 }, () => helper.post(`${lookups.base}/jars/${jar.id}/open`)),
+    );
     const statuses = answers.map((a) => a.status).sort();
     expect(statuses.filter((s) => s === 200)).toHaveLength(1);
     expect(statuses.filter((s) => s === 409)).toHaveLength(19);
-    expect(answers.find((a) => a.status === 409)!.body.error.message).toMatch(new RegExp(`Jar ${jar.code} was opened on`));
-    const history = (await helper.get(`${lookups.base}/batches/${jar.batchId}`)).body.batch.history as { kind: string; jarCode: string; who: string }[];
-    expect(history.filter((e) => e.kind === 'opened' && e.jarCode === jar.code)).toEqual([expect.objectContaining({ who: 'Juniper Calloway' })]);
+    expect(answers.find((a) => a.status === 409)!.body.error.message).toMatch(
+      new RegExp(`Jar ${jar.code} was opened on`),
+    );
+    const history = (await helper.get(`${lookups.base}/batches/${jar.batchId}`)).body.batch.history as {
+      kind: string;
+      jarCode: string;
+      who: string;
+    }[];
+    expect(history.filter((e) => e.kind === 'opened' && e.jarCode === jar.code)).toEqual([
+      expect.objectContaining({ who: 'Juniper Calloway' }),
+    ]);
   });
 
   it("sets the use-by from the product's opened days (the kind's default, from memory) in the household's today", async () => {
@@ -32,7 +42,11 @@ describe('opening a jar', () => {
     const [jar] = await lookups.sealedJars('Green Tomato Chutney');
     const response = await cook.post(`${lookups.base}/jars/${jar.id}/open`);
     expect(response.status).toBe(200);
-    expect(response.body.jar).toMatchObject({ state: 'opened', openedOn: today(), useBy: useBy(today(), defaultUseWithinDays('chutney')) });
+    expect(response.body.jar).toMatchObject({
+      state: 'opened',
+      openedOn: today(),
+      useBy: useBy(today(), defaultUseWithinDays('chutney')),
+    });
   });
 
   it("uses the product's own opened days where the household set them", async () => {
@@ -89,7 +103,12 @@ describe('jars by their label code', () => {
     const typed = jar.code.toLowerCase().replaceAll('0', 'o').replaceAll('1', 'l');
     const response = await helper.get(`/api/jars/by-code/${typed}`);
     expect(response.status).toBe(200);
-    expect(response.body).toMatchObject({ householdId: ctx.householdId, householdName: 'Calloway Hollow', role: 'helper', jar: { code: jar.code, productName: 'Hot Pepper Jelly' } });
+    expect(response.body).toMatchObject({
+      householdId: ctx.householdId,
+      householdName: 'Calloway Hollow',
+      role: 'helper',
+      jar: { code: jar.code, productName: 'Hot Pepper Jelly' },
+    });
   });
 
   it('answers 404 for a code nobody printed', async () => {
@@ -100,7 +119,9 @@ describe('jars by their label code', () => {
 
   it('gives every jar a distinct six-character code from the unambiguous alphabet', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const codes = ((await keeper.get(`${lookups.base}/jars?state=all`)).body.jars as { code: string }[]).map((j) => j.code);
+    const codes = ((await keeper.get(`${lookups.base}/jars?state=all`)).body.jars as { code: string }[]).map(
+      (j) => j.code,
+    );
     expect(codes.length).toBeGreaterThan(100);
     expect(new Set(codes).size).toBe(codes.length);
     for (const code of codes) expect(code).toMatch(/^[0-9A-HJKMNP-TV-Z]{6}$/);
@@ -110,7 +131,11 @@ describe('jars by their label code', () => {
 describe('the shelf list', () => {
   it('lists sealed and opened jars by default, oldest best-quality date first, and marks jars past it', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const jars = (await keeper.get(`${lookups.base}/jars`)).body.jars as { state: string; bestBy: string; pastBestQuality: boolean }[];
+    const jars = (await keeper.get(`${lookups.base}/jars`)).body.jars as {
+      state: string;
+      bestBy: string;
+      pastBestQuality: boolean;
+    }[];
     expect(new Set(jars.map((j) => j.state))).toEqual(new Set(['sealed', 'opened']));
     expect(jars.map((j) => j.bestBy)).toEqual([...jars.map((j) => j.bestBy)].sort());
     const past = jars.filter((j) => j.pastBestQuality);
@@ -120,7 +145,10 @@ describe('the shelf list', () => {
 
   it("moves every badge when the household changes its best-quality months (NCHFP's one year is only the default)", async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const pastBest = async () => ((await keeper.get(`${lookups.base}/jars`)).body.jars as { pastBestQuality: boolean }[]).filter((j) => j.pastBestQuality).length;
+    const pastBest = async () =>
+      ((await keeper.get(`${lookups.base}/jars`)).body.jars as { pastBestQuality: boolean }[]).filter(
+        (j) => j.pastBestQuality,
+      ).length;
     expect(await pastBest()).toBeGreaterThan(0);
     await keeper.patch(`/api/households/${ctx.householdId}`).send({ bestQualityMonths: 24 });
     try {

@@ -14,9 +14,18 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 type Agent = Awaited<ReturnType<typeof ctx.signedIn>>;
-type Route = { name: string; may: 'read' | 'cook' | 'handleJars'; send: (agent: Agent, who: DemoEmail) => Promise<{ status: number; body: unknown }> };
+type Route = {
+  name: string;
+  may: 'read' | 'cook' | 'handleJars';
+  send: (agent: Agent, who: DemoEmail) => Promise<{ status: number; body: unknown }>;
+};
 
-const PEOPLE: DemoEmail[] = ['keeper@larderly.test', 'cook@larderly.test', 'helper@larderly.test', 'neighbor@larderly.test'];
+const PEOPLE: DemoEmail[] = [
+  'keeper@larderly.test',
+  'cook@larderly.test',
+  'helper@larderly.test',
+  'neighbor@larderly.test',
+];
 const ALLOWED: Record<Route['may'], DemoEmail[]> = {
   read: ['keeper@larderly.test', 'cook@larderly.test', 'helper@larderly.test'],
   handleJars: ['keeper@larderly.test', 'cook@larderly.test', 'helper@larderly.test'],
@@ -26,7 +35,8 @@ const ALLOWED: Record<Route['may'], DemoEmail[]> = {
 const tag = (who: DemoEmail) => who.split('@')[0];
 /** Each action gets a jar of its own, so one person's action never blocks the next person's. */
 async function jarFor(state: 'sealed' | 'opened') {
-  const jars = (await (await ctx.signedIn('keeper@larderly.test')).get(`${lookups.base}/jars?state=${state}`)).body.jars as { id: string }[];
+  const jars = (await (await ctx.signedIn('keeper@larderly.test')).get(`${lookups.base}/jars?state=${state}`)).body
+    .jars as { id: string }[];
   usedJars.add(jars.find((j) => !usedJars.has(j.id))!.id);
   return [...usedJars].at(-1)!;
 }
@@ -34,11 +44,27 @@ const usedJars = new Set<string>();
 
 const ROUTES: Route[] = [
   { name: 'GET products', may: 'read', send: (a) => a.get(`${lookups.base}/products`) },
-  { name: 'GET a product', may: 'read', send: (a) => a.get(`${lookups.base}/products/${lookups.product('Pickled Beets').id}`) },
-  { name: 'POST products', may: 'cook', send: (a, who) => a.post(`${lookups.base}/products`).send({ name: `Quince paste (${tag(who)})`, kind: 'other' }) },
-  { name: 'PATCH a product', may: 'cook', send: (a) => a.patch(`${lookups.base}/products/${lookups.product('Pickled Beets').id}`).send({ minJars: 3 }) },
+  {
+    name: 'GET a product',
+    may: 'read',
+    send: (a) => a.get(`${lookups.base}/products/${lookups.product('Pickled Beets').id}`),
+  },
+  {
+    name: 'POST products',
+    may: 'cook',
+    send: (a, who) => a.post(`${lookups.base}/products`).send({ name: `Quince paste (${tag(who)})`, kind: 'other' }),
+  },
+  {
+    name: 'PATCH a product',
+    may: 'cook',
+    send: (a) => a.patch(`${lookups.base}/products/${lookups.product('Pickled Beets').id}`).send({ minJars: 3 }),
+  },
   { name: 'GET recipes', may: 'read', send: (a) => a.get(`${lookups.base}/recipes`) },
-  { name: 'GET a recipe', may: 'read', send: (a) => a.get(`${lookups.base}/recipes/${lookups.recipe('Pickled beets').id}`) },
+  {
+    name: 'GET a recipe',
+    may: 'read',
+    send: (a) => a.get(`${lookups.base}/recipes/${lookups.recipe('Pickled beets').id}`),
+  },
   {
     name: 'POST recipes',
     may: 'cook',
@@ -54,32 +80,89 @@ const ROUTES: Route[] = [
         headspaceInches: 0.5,
       }),
   },
-  { name: 'PATCH a recipe', may: 'cook', send: (a) => a.patch(`${lookups.base}/recipes/${lookups.recipe('Pickled beets').id}`).send({ source: 'USDA Complete Guide, Guide 6' }) },
+  {
+    name: 'PATCH a recipe',
+    may: 'cook',
+    send: (a) =>
+      a
+        .patch(`${lookups.base}/recipes/${lookups.recipe('Pickled beets').id}`)
+        .send({ source: 'USDA Complete Guide, Guide 6' }),
+  },
   { name: 'GET batches', may: 'read', send: (a) => a.get(`${lookups.base}/batches`) },
-  { name: 'GET a batch', may: 'read', send: async (a) => a.get(`${lookups.base}/batches/${(await lookups.sealedJars('Pickled Beets'))[0].batchId}`) },
-  { name: 'GET a plan preview', may: 'read', send: (a) => a.get(`${lookups.base}/batches/plan?recipeId=${lookups.recipe('Pickled beets').id}&jarSize=pint&method=boiling-water`) },
+  {
+    name: 'GET a batch',
+    may: 'read',
+    send: async (a) => a.get(`${lookups.base}/batches/${(await lookups.sealedJars('Pickled Beets'))[0].batchId}`),
+  },
+  {
+    name: 'GET a plan preview',
+    may: 'read',
+    send: (a) =>
+      a.get(
+        `${lookups.base}/batches/plan?recipeId=${lookups.recipe('Pickled beets').id}&jarSize=pint&method=boiling-water`,
+      ),
+  },
   {
     name: 'POST batches',
     may: 'cook',
     send: (a) =>
-      a.post(`${lookups.base}/batches`).send({ productId: lookups.product('Pickled Beets').id, recipeId: lookups.recipe('Pickled beets').id, cannedOn: '2026-07-01', jarSize: 'pint', jarsFilled: 2, jarsSealed: 2, method: 'boiling-water' }),
+      a
+        .post(`${lookups.base}/batches`)
+        .send({
+          productId: lookups.product('Pickled Beets').id,
+          recipeId: lookups.recipe('Pickled beets').id,
+          cannedOn: '2026-07-01',
+          jarSize: 'pint',
+          jarsFilled: 2,
+          jarsSealed: 2,
+          method: 'boiling-water',
+        }),
   },
   {
     name: 'POST a batch photo',
     may: 'cook',
-    send: async (a) => a.post(`${lookups.base}/batches/${(await lookups.sealedJars('Pickled Beets'))[0].batchId}/photo`).attach('photo', Buffer.from(ONE_PIXEL_PNG, 'base64'), 'beets.png'),
+    send: async (a) =>
+      a
+        .post(`${lookups.base}/batches/${(await lookups.sealedJars('Pickled Beets'))[0].batchId}/photo`)
+        .attach('photo', Buffer.from(ONE_PIXEL_PNG, 'base64'), 'beets.png'),
   },
   { name: 'GET jars', may: 'read', send: (a) => a.get(`${lookups.base}/jars?state=sealed`) },
-  { name: 'GET a jar by code', may: 'read', send: async (a) => a.get(`${lookups.base}/jars/by-code/${(await lookups.sealedJars())[0].code}`) },
-  { name: 'POST open', may: 'handleJars', send: async (a) => a.post(`${lookups.base}/jars/${await jarFor('sealed')}/open`) },
-  { name: 'POST finish', may: 'handleJars', send: async (a) => a.post(`${lookups.base}/jars/${await jarFor('opened')}/finish`) },
-  { name: 'POST discard', may: 'handleJars', send: async (a) => a.post(`${lookups.base}/jars/${await jarFor('sealed')}/discard`) },
+  {
+    name: 'GET a jar by code',
+    may: 'read',
+    send: async (a) => a.get(`${lookups.base}/jars/by-code/${(await lookups.sealedJars())[0].code}`),
+  },
+  {
+    name: 'POST open',
+    may: 'handleJars',
+    send: async (a) => a.post(`${lookups.base}/jars/${await jarFor('sealed')}/open`),
+  },
+  {
+    name: 'POST finish',
+    may: 'handleJars',
+    send: async (a) => a.post(`${lookups.base}/jars/${await jarFor('opened')}/finish`),
+  },
+  {
+    name: 'POST discard',
+    may: 'handleJars',
+    send: async (a) => a.post(`${lookups.base}/jars/${await jarFor('sealed')}/discard`),
+  },
   { name: 'GET shelf.csv', may: 'read', send: (a) => a.get(`${lookups.base}/shelf.csv`) },
-  { name: 'POST shelf/import (preview)', may: 'cook', send: (a) => a.post(`${lookups.base}/shelf/import`).send({ csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nPickled Beets,2026-07-02,pint,2,2,boiling-water\n' }) },
+  {
+    name: 'POST shelf/import (preview)',
+    may: 'cook',
+    send: (a) =>
+      a
+        .post(`${lookups.base}/shelf/import`)
+        .send({
+          csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nPickled Beets,2026-07-02,pint,2,2,boiling-water\n',
+        }),
+  },
 ];
 
 // A 1x1 PNG (the smallest valid image), so the photo route has real image bytes to sniff.
-const ONE_PIXEL_PNG = 'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==';
+const ONE_PIXEL_PNG =
+  'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNk+M9QDwADhgGAWjR9awAAAABJRU5ErkJggg==';
 
 describe.each(ROUTES)('$name', (route) => {
   it.each(PEOPLE)('answers %s as the role allows', async (who) => {
@@ -115,7 +198,9 @@ describe('signed out and cross-household ids', () => {
 
   it("lists only the household's own products", async () => {
     const neighbour = await ctx.signedIn('neighbor@larderly.test');
-    const names = (await neighbour.get(`/api/households/${ctx.neighbourHouseholdId}/products`)).body.products.map((p: { name: string }) => p.name);
+    const names = (await neighbour.get(`/api/households/${ctx.neighbourHouseholdId}/products`)).body.products.map(
+      (p: { name: string }) => p.name,
+    );
     expect(names).toEqual(['Crabapple Jelly', 'Marsh End Bread Pickles']);
   });
 });

@@ -8,7 +8,14 @@ beforeAll(async () => {
 afterAll(() => ctx.close());
 
 const url = (path = '') => `/api/households/${ctx.householdId}/todos${path}`;
-type Listed = { id: string; title: string; position: number; done: boolean; doneAt: string | null; assigneeId: string | null };
+type Listed = {
+  id: string;
+  title: string;
+  position: number;
+  done: boolean;
+  doneAt: string | null;
+  assigneeId: string | null;
+};
 
 async function list(filter = 'all') {
   const keeper = await ctx.signedIn('keeper@larderly.test');
@@ -34,7 +41,12 @@ function expectDense(todos: Listed[]) {
 
 describe('the household to-do list', () => {
   it('adds to-dos at the end and keeps positions dense through moves and deletes', async () => {
-    const [wash, lids, vinegar, jars] = await add('Wash the half-pint jars', 'Buy new lids', 'Buy cider vinegar', 'Sort the jars in the cellar');
+    const [wash, lids, vinegar, jars] = await add(
+      'Wash the half-pint jars',
+      'Buy new lids',
+      'Buy cider vinegar',
+      'Sort the jars in the cellar',
+    );
     const cook = await ctx.signedIn('cook@larderly.test');
     const start = (await list()).length - 4;
     expect([wash, lids, vinegar, jars].map((t) => t.position)).toEqual([start, start + 1, start + 2, start + 3]);
@@ -44,16 +56,30 @@ describe('the household to-do list', () => {
     expect(moved.body.todo.position).toBe(start);
     let all = await list();
     expectDense(all);
-    expect(all.slice(start).map((t) => t.title)).toEqual(['Sort the jars in the cellar', 'Wash the half-pint jars', 'Buy new lids', 'Buy cider vinegar']);
+    expect(all.slice(start).map((t) => t.title)).toEqual([
+      'Sort the jars in the cellar',
+      'Wash the half-pint jars',
+      'Buy new lids',
+      'Buy cider vinegar',
+    ]);
 
     await cook.patch(url(`/${jars.id}`)).send({ position: start + 2 });
     all = await list();
-    expect(all.slice(start).map((t) => t.title)).toEqual(['Wash the half-pint jars', 'Buy new lids', 'Sort the jars in the cellar', 'Buy cider vinegar']);
+    expect(all.slice(start).map((t) => t.title)).toEqual([
+      'Wash the half-pint jars',
+      'Buy new lids',
+      'Sort the jars in the cellar',
+      'Buy cider vinegar',
+    ]);
 
     expect((await cook.delete(url(`/${lids.id}`))).status).toBe(204);
     all = await list();
     expectDense(all);
-    expect(all.slice(start).map((t) => t.title)).toEqual(['Wash the half-pint jars', 'Sort the jars in the cellar', 'Buy cider vinegar']);
+    expect(all.slice(start).map((t) => t.title)).toEqual([
+      'Wash the half-pint jars',
+      'Sort the jars in the cellar',
+      'Buy cider vinegar',
+    ]);
   });
 
   it('keeps positions a dense permutation when many moves and adds race', async () => {
@@ -84,11 +110,21 @@ describe('the household to-do list', () => {
   it('saves notes, a due date and an assignee from the household, and refuses an outsider as assignee', async () => {
     const [todo] = await add('Pick the green tomatoes');
     const cook = await ctx.signedIn('cook@larderly.test');
-    const members = (await cook.get(`/api/households/${ctx.householdId}/members`)).body.members as { userId: string; email: string }[];
+    const members = (await cook.get(`/api/households/${ctx.householdId}/members`)).body.members as {
+      userId: string;
+      email: string;
+    }[];
     const helperId = members.find((m) => m.email === 'helper@larderly.test')!.userId;
-    const response = await cook.patch(url(`/${todo.id}`)).send({ notes: 'The ones by the fence', dueOn: '2026-09-14', assigneeId: helperId });
+    const response = await cook
+      .patch(url(`/${todo.id}`))
+      .send({ notes: 'The ones by the fence', dueOn: '2026-09-14', assigneeId: helperId });
     expect(response.status).toBe(200);
-    expect(response.body.todo).toMatchObject({ notes: 'The ones by the fence', dueOn: '2026-09-14', assigneeId: helperId, assigneeName: expect.any(String) });
+    expect(response.body.todo).toMatchObject({
+      notes: 'The ones by the fence',
+      dueOn: '2026-09-14',
+      assigneeId: helperId,
+      assigneeName: expect.any(String),
+    });
 
     const neighbour = await ctx.signedIn('neighbor@larderly.test');
     const neighbourId = (await neighbour.get('/api/auth/me')).body.user.id;
@@ -117,7 +153,9 @@ describe('the household to-do list', () => {
     expect((await helper.patch(url(`/${todo.id}`)).send({ position: 0 })).status).toBe(403);
     expect((await helper.post(url()).send({ title: 'Helper list' })).status).toBe(403);
     expect((await helper.delete(url(`/${todo.id}`))).status).toBe(403);
-    expect((await ctx.signedIn('keeper@larderly.test')).get(url(`/${todo.id}`)).then((r) => r.body.todo.done)).resolves.toBe(false);
+    expect(
+      (await ctx.signedIn('keeper@larderly.test')).get(url(`/${todo.id}`)).then((r) => r.body.todo.done),
+    ).resolves.toBe(false);
   });
 
   it('filters by open, done and mine', async () => {
@@ -126,7 +164,8 @@ describe('the household to-do list', () => {
     const [mine, done] = await add('Filter: mine', 'Filter: done');
     await cook.patch(url(`/${mine.id}`)).send({ assigneeId: me });
     await cook.patch(url(`/${done.id}`)).send({ done: true, assigneeId: me });
-    const titles = async (filter: string) => ((await cook.get(url(`?filter=${filter}`))).body.todos as Listed[]).map((t) => t.title);
+    const titles = async (filter: string) =>
+      ((await cook.get(url(`?filter=${filter}`))).body.todos as Listed[]).map((t) => t.title);
     const mineListed = (await cook.get(url('?filter=mine'))).body.todos as Listed[];
     expect(mineListed.map((t) => t.title)).toContain('Filter: mine');
     expect(mineListed.every((t) => t.assigneeId === me && !t.done)).toBe(true);

@@ -27,7 +27,14 @@ describe('security headers', () => {
 
   it('marks the session cookie Secure when the public origin is https', async () => {
     const secure = createApp(
-      loadConfig({ ...process.env, NODE_ENV: 'test', BCRYPT_COST: '4', STATIC_DIR: 'none', APP_ORIGIN: 'https://larder.example', TRUST_PROXY: '1' }),
+      loadConfig({
+        ...process.env,
+        NODE_ENV: 'test',
+        BCRYPT_COST: '4',
+        STATIC_DIR: 'none',
+        APP_ORIGIN: 'https://larder.example',
+        TRUST_PROXY: '1',
+      }),
     );
     try {
       const response = await request(secure.app)
@@ -70,11 +77,20 @@ describe('error bodies', () => {
 
 describe('sessions', () => {
   it('survive a restart of the app, because they live in PostgreSQL', async () => {
-    const login = await request(ctx.app).post('/api/auth/login').send({ email: 'cook@larderly.test', password: DEMO_PASSWORD });
+    const login = await request(ctx.app)
+      .post('/api/auth/login')
+      .send({ email: 'cook@larderly.test', password: DEMO_PASSWORD });
     const sessionCookie = String(login.headers['set-cookie']).split(';')[0];
     expect(sessionCookie).toMatch(/^larderly\.sid=/);
 
-    const restarted = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', STATIC_DIR: 'none', SESSION_SECRET: 'a-test-secret-that-is-long-enough-1234567890' }));
+    const restarted = createApp(
+      loadConfig({
+        ...process.env,
+        NODE_ENV: 'test',
+        STATIC_DIR: 'none',
+        SESSION_SECRET: 'a-test-secret-that-is-long-enough-1234567890',
+      }),
+    );
     try {
       const me = await request(restarted.app).get('/api/auth/me').set('Cookie', sessionCookie);
       expect(me.status).toBe(200);

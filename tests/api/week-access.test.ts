@@ -8,26 +8,33 @@ const date = '2031-06-02';
 beforeAll(async () => {
   ctx = await demoApp();
   const cook = await ctx.signedIn('cook@larderly.test');
-  entryId = (await cook.post(`/api/households/${ctx.householdId}/plan-entries`).send({ date, slot: 'lunch', title: 'Bean salad' })).body.id;
+  entryId = (
+    await cook
+      .post(`/api/households/${ctx.householdId}/plan-entries`)
+      .send({ date, slot: 'lunch', title: 'Bean salad' })
+  ).body.id;
 });
 afterAll(() => ctx.close());
 
 const url = (path: string) => `/api/households/${ctx.householdId}${path}`;
-const writes = () => [
-  ['post', '/meals', { name: 'Omelette' }],
-  ['post', '/plan-entries', { date, slot: 'dinner', title: 'Stew' }],
-  ['patch', `/plan-entries/${entryId}`, { slot: 'dinner' }],
-  ['delete', `/plan-entries/${entryId}`, undefined],
-  ['post', '/week/copy', { from: date, to: '2031-06-09' }],
-  ['delete', `/week/days/${date}`, undefined],
-] as const;
+const writes = () =>
+  [
+    ['post', '/meals', { name: 'Omelette' }],
+    ['post', '/plan-entries', { date, slot: 'dinner', title: 'Stew' }],
+    ['patch', `/plan-entries/${entryId}`, { slot: 'dinner' }],
+    ['delete', `/plan-entries/${entryId}`, undefined],
+    ['post', '/week/copy', { from: date, to: '2031-06-09' }],
+    ['delete', `/week/days/${date}`, undefined],
+  ] as const;
 
 describe('who may plan the week', () => {
   it('lets a helper read the week and the meals', async () => {
     const helper = await ctx.signedIn('helper@larderly.test');
     const week = await helper.get(url(`/week?start=${date}`));
     expect(week.status).toBe(200);
-    expect(week.body.days.flatMap((d: { entries: { title: string }[] }) => d.entries.map((e) => e.title))).toContain('Bean salad');
+    expect(week.body.days.flatMap((d: { entries: { title: string }[] }) => d.entries.map((e) => e.title))).toContain(
+      'Bean salad',
+    );
     expect((await helper.get(url('/meals'))).status).toBe(200);
   });
 
@@ -38,7 +45,9 @@ describe('who may plan the week', () => {
       expect(response.status, `${method} ${path}`).toBe(403);
     }
     const week = await helper.get(url(`/week?start=${date}`));
-    expect(week.body.days[0].entries.map((e: { title: string; slot: string }) => `${e.slot} ${e.title}`)).toEqual(['lunch Bean salad']);
+    expect(week.body.days[0].entries.map((e: { title: string; slot: string }) => `${e.slot} ${e.title}`)).toEqual([
+      'lunch Bean salad',
+    ]);
   });
 
   it("answers the neighbour 404 on the first household's week, meals and entries, never the data", async () => {
@@ -55,7 +64,9 @@ describe('who may plan the week', () => {
 
   it("answers 404 when the neighbour names the first household's entry under its own household", async () => {
     const neighbour = await ctx.signedIn('neighbor@larderly.test');
-    const response = await neighbour.patch(`/api/households/${ctx.neighbourHouseholdId}/plan-entries/${entryId}`).send({ slot: 'snack' });
+    const response = await neighbour
+      .patch(`/api/households/${ctx.neighbourHouseholdId}/plan-entries/${entryId}`)
+      .send({ slot: 'snack' });
     expect(response.status).toBe(404);
   });
 
@@ -76,13 +87,18 @@ describe('who may plan the week', () => {
 describe('member preferences', () => {
   async function memberId(email: string) {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const members = (await keeper.get(`/api/households/${ctx.householdId}/members`)).body.members as { userId: string; email: string }[];
+    const members = (await keeper.get(`/api/households/${ctx.householdId}/members`)).body.members as {
+      userId: string;
+      email: string;
+    }[];
     return members.find((m) => m.email === email)!.userId;
   }
 
   it('lets a member set their own heat tolerance and diet', async () => {
     const helper = await ctx.signedIn('helper@larderly.test');
-    const response = await helper.patch(url(`/members/${await memberId('helper@larderly.test')}/preferences`)).send({ heatTolerance: 1, dietTags: ['low-salt'] });
+    const response = await helper
+      .patch(url(`/members/${await memberId('helper@larderly.test')}/preferences`))
+      .send({ heatTolerance: 1, dietTags: ['low-salt'] });
     expect(response.status).toBe(200);
     expect(response.body.preferences).toMatchObject({ heatTolerance: 1, dietTags: ['low-salt'] });
   });
@@ -97,7 +113,9 @@ describe('member preferences', () => {
 
   it('refuses a tolerance outside 0-5 and an unknown diet', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const response = await keeper.patch(url(`/members/${await memberId('keeper@larderly.test')}/preferences`)).send({ heatTolerance: 9, dietTags: ['paleo'] });
+    const response = await keeper
+      .patch(url(`/members/${await memberId('keeper@larderly.test')}/preferences`))
+      .send({ heatTolerance: 9, dietTags: ['paleo'] });
     expect(response.status).toBe(400);
     expect(Object.keys(response.body.error.fields).sort()).toEqual(['dietTags.0', 'heatTolerance']);
   });

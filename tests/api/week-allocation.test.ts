@@ -28,13 +28,20 @@ async function planWith(date: string, title: string, productId: string, tbspPerS
 
 describe('the allocation on GET /week', () => {
   it('names the jar each portion draws from, and the day a jar is opened', async () => {
-    const { product, jars } = await productWithJars(ctx.householdId, { name: 'Test Quince Chutney', kind: 'chutney', jars: 1 });
+    const { product, jars } = await productWithJars(ctx.householdId, {
+      name: 'Test Quince Chutney',
+      kind: 'chutney',
+      jars: 1,
+    });
     const { pairingId } = await planWith(addDays(start, 1), 'Roast chicken', product.id, 2, 4);
     const week = (await cook.get(url(`/week?start=${start}`))).body;
     expect(week.allocation.assignments).toContainEqual({ portionId: pairingId, jarId: jars[0].id, tbsp: 8 });
     expect(week.allocation.openings).toContainEqual({ jarId: jars[0].id, date: addDays(start, 1) });
     expect(week.jars[jars[0].id].code).toBe(jars[0].code);
-    expect(week.products.find((p: { id: string }) => p.id === product.id)).toMatchObject({ sealedJars: 1, openedJars: 0 });
+    expect(week.products.find((p: { id: string }) => p.id === product.id)).toMatchObject({
+      sealedJars: 1,
+      openedJars: 0,
+    });
   });
 
   it('warns `short` when the shelf cannot cover a pairing', async () => {
@@ -48,23 +55,41 @@ describe('the allocation on GET /week', () => {
       { portionId: pairingId, jarId: jars[0].id, tbsp: 16 },
       { portionId: pairingId, jarId: null, tbsp: 8 },
     ]);
-    expect(week.allocation.warnings).toContainEqual({ kind: 'short', productId: product.id, date, tbsp: 8, portionId: pairingId });
+    expect(week.allocation.warnings).toContainEqual({
+      kind: 'short',
+      productId: product.id,
+      date,
+      tbsp: 8,
+      portionId: pairingId,
+    });
   });
 
   it('warns `short` for a product with no jars at all', async () => {
     const { product } = await productWithJars(ctx.householdId, { name: 'Test Empty Salsa', kind: 'salsa', jars: 0 });
     const { pairingId } = await planWith(addDays(start, 3), 'Tacos', product.id, 1, 2);
     const week = (await cook.get(url(`/week?start=${start}`))).body;
-    expect(week.allocation.warnings).toContainEqual(expect.objectContaining({ kind: 'short', productId: product.id, tbsp: 2, portionId: pairingId }));
+    expect(week.allocation.warnings).toContainEqual(
+      expect.objectContaining({ kind: 'short', productId: product.id, tbsp: 2, portionId: pairingId }),
+    );
   });
 
   it('warns `will-expire` for an opened jar that turns this week with food left, even when no meal draws on it', async () => {
     // The jam default of 21 days once opened is from memory (shared/domain/products.ts), not a published figure.
-    const { product, jars } = await productWithJars(ctx.householdId, { name: 'Test Open Damson Jam', kind: 'jam', jars: 1 });
+    const { product, jars } = await productWithJars(ctx.householdId, {
+      name: 'Test Open Damson Jam',
+      kind: 'jam',
+      jars: 1,
+    });
     const openedOn = addDays(start, -20);
     await jars[0].update({ state: 'opened', openedOn, useBy: addDays(openedOn, 21), remainingTbsp: 10 });
     const week = (await cook.get(url(`/week?start=${start}`))).body;
-    expect(week.allocation.warnings).toContainEqual({ kind: 'will-expire', productId: product.id, jarId: jars[0].id, date: addDays(start, 1), tbsp: 10 });
+    expect(week.allocation.warnings).toContainEqual({
+      kind: 'will-expire',
+      productId: product.id,
+      jarId: jars[0].id,
+      date: addDays(start, 1),
+      tbsp: 10,
+    });
     expect(week.jars[jars[0].id]).toMatchObject({ code: jars[0].code, state: 'opened' });
   });
 
@@ -85,10 +110,21 @@ describe('the allocation on GET /week', () => {
 describe('who eats: flags on a pairing', () => {
   it('flags a product hotter than an eater keeps to, and a sugar-sweetened recipe for a no-added-sugar eater, with reasons', async () => {
     const keeper = await ctx.signedIn('keeper@larderly.test');
-    const members = (await keeper.get(url('/members'))).body.members as { userId: string; email: string; name: string }[];
+    const members = (await keeper.get(url('/members'))).body.members as {
+      userId: string;
+      email: string;
+      name: string;
+    }[];
     const helper = members.find((m) => m.email === 'helper@larderly.test')!;
-    await keeper.patch(url(`/members/${helper.userId}/preferences`)).send({ heatTolerance: 1, dietTags: ['no-added-sugar'] });
-    const { product } = await productWithJars(ctx.householdId, { name: 'Test Fiery Jelly', kind: 'jelly', heat: 4, jars: 2 });
+    await keeper
+      .patch(url(`/members/${helper.userId}/preferences`))
+      .send({ heatTolerance: 1, dietTags: ['no-added-sugar'] });
+    const { product } = await productWithJars(ctx.householdId, {
+      name: 'Test Fiery Jelly',
+      kind: 'jelly',
+      heat: 4,
+      jars: 2,
+    });
     await recipeFor(ctx.householdId, product.id, 'Test fiery jelly card', [
       { name: 'Hot peppers', role: 'produce' },
       { name: 'Cider vinegar', role: 'acid' },
@@ -108,19 +144,34 @@ describe('who eats: flags on a pairing', () => {
     // Without the helper at the table the flags go away.
     const others = members.filter((m) => m.userId !== helper.userId).map((m) => m.userId);
     expect((await cook.patch(url(`/plan-entries/${entryId}`)).send({ eaters: others })).status).toBe(200);
-    expect((await entryOf()).pairings[0].flags.filter((f: { userId: string }) => f.userId === helper.userId)).toEqual([]);
+    expect((await entryOf()).pairings[0].flags.filter((f: { userId: string }) => f.userId === helper.userId)).toEqual(
+      [],
+    );
   });
 });
 
 describe('the meal library and copying a week', () => {
   it('creates a meal with its usual product, plans it with that pairing, and copies the week', async () => {
     const { product } = await productWithJars(ctx.householdId, { name: 'Test Plum Sauce', kind: 'sauce', jars: 3 });
-    const meal = await cook.post(url('/meals')).send({ name: 'Test pork buns', tags: ['weekend'], usualServings: 4, products: [{ productId: product.id, tbspPerServing: 1.5 }] });
+    const meal = await cook
+      .post(url('/meals'))
+      .send({
+        name: 'Test pork buns',
+        tags: ['weekend'],
+        usualServings: 4,
+        products: [{ productId: product.id, tbspPerServing: 1.5 }],
+      });
     expect(meal.status).toBe(201);
-    expect(meal.body.meal).toMatchObject({ name: 'Test pork buns', usualServings: 4, products: [{ productId: product.id, tbspPerServing: 1.5 }] });
+    expect(meal.body.meal).toMatchObject({
+      name: 'Test pork buns',
+      usualServings: 4,
+      products: [{ productId: product.id, tbspPerServing: 1.5 }],
+    });
 
     const from = addDays(start, 14);
-    const created = await cook.post(url('/plan-entries')).send({ date: addDays(from, 5), slot: 'lunch', mealId: meal.body.meal.id });
+    const created = await cook
+      .post(url('/plan-entries'))
+      .send({ date: addDays(from, 5), slot: 'lunch', mealId: meal.body.meal.id });
     expect(created.status).toBe(201);
     const copied = await cook.post(url('/week/copy')).send({ from, to: addDays(from, 7) });
     expect(copied.body.copied).toBe(1);
@@ -134,8 +185,13 @@ describe('the meal library and copying a week', () => {
   });
 
   it("refuses a meal paired with another household's product", async () => {
-    const { product } = await productWithJars(ctx.neighbourHouseholdId, { name: 'Test Neighbour Jelly', kind: 'jelly' });
-    const response = await cook.post(url('/meals')).send({ name: 'Toast', products: [{ productId: product.id, tbspPerServing: 1 }] });
+    const { product } = await productWithJars(ctx.neighbourHouseholdId, {
+      name: 'Test Neighbour Jelly',
+      kind: 'jelly',
+    });
+    const response = await cook
+      .post(url('/meals'))
+      .send({ name: 'Toast', products: [{ productId: product.id, tbspPerServing: 1 }] });
     expect(response.status).toBe(400);
   });
 });

@@ -18,14 +18,19 @@ afterAll(() => ctx.close());
 const url = (path: string) => `/api/households/${ctx.householdId}${path}`;
 
 async function plan(date: string, slot: string, title: string, position?: number) {
-  const response = await cook.post(url('/plan-entries')).send({ date, slot, title, ...(position === undefined ? {} : { position }) });
+  const response = await cook
+    .post(url('/plan-entries'))
+    .send({ date, slot, title, ...(position === undefined ? {} : { position }) });
   expect(response.status).toBe(201);
   return response.body.id as string;
 }
 
 /** Titles of one slot in position order, with the positions themselves. */
 async function slot(date: string, name: string) {
-  const rows = await PlanEntry.findAll({ where: { householdId: ctx.householdId, date, slot: name }, order: [['position', 'ASC']] });
+  const rows = await PlanEntry.findAll({
+    where: { householdId: ctx.householdId, date, slot: name },
+    order: [['position', 'ASC']],
+  });
   return { titles: rows.map((r) => r.title), positions: rows.map((r) => r.position) };
 }
 
@@ -38,14 +43,17 @@ describe('moving planned meals keeps each slot dense and ordered', () => {
   });
 
   it('reorders within a slot', async () => {
-    const [soup] = (await PlanEntry.findAll({ where: { householdId: ctx.householdId, date: monday, slot: 'lunch', title: 'Soup' } })).map((e) => e.id);
+    const [soup] = (
+      await PlanEntry.findAll({ where: { householdId: ctx.householdId, date: monday, slot: 'lunch', title: 'Soup' } })
+    ).map((e) => e.id);
     expect((await cook.patch(url(`/plan-entries/${soup}`)).send({ position: 2 })).status).toBe(200);
     expect(await slot(monday, 'lunch')).toEqual({ titles: ['Cheese board', 'Bread', 'Soup'], positions: [0, 1, 2] });
   });
 
   it('moves across slots: the gap closes and the new slot opens one', async () => {
     await plan(monday, 'dinner', 'Pork chops');
-    const bread = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Bread' } }))!.id;
+    const bread = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Bread' } }))!
+      .id;
     expect((await cook.patch(url(`/plan-entries/${bread}`)).send({ slot: 'dinner', position: 0 })).status).toBe(200);
     expect(await slot(monday, 'lunch')).toEqual({ titles: ['Cheese board', 'Soup'], positions: [0, 1] });
     expect(await slot(monday, 'dinner')).toEqual({ titles: ['Bread', 'Pork chops'], positions: [0, 1] });
@@ -53,21 +61,30 @@ describe('moving planned meals keeps each slot dense and ordered', () => {
 
   it('moves across days to the end of the slot when no position is given', async () => {
     await plan(tuesday, 'dinner', 'Lentil stew');
-    const soup = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Soup' } }))!.id;
+    const soup = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Soup' } }))!
+      .id;
     expect((await cook.patch(url(`/plan-entries/${soup}`)).send({ date: tuesday, slot: 'dinner' })).status).toBe(200);
     expect(await slot(monday, 'lunch')).toEqual({ titles: ['Cheese board'], positions: [0] });
     expect(await slot(tuesday, 'dinner')).toEqual({ titles: ['Lentil stew', 'Soup'], positions: [0, 1] });
   });
 
   it('clamps a position past the end to the end', async () => {
-    const cheese = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: monday, title: 'Cheese board' } }))!.id;
-    expect((await cook.patch(url(`/plan-entries/${cheese}`)).send({ date: tuesday, slot: 'dinner', position: 99 })).status).toBe(200);
-    expect(await slot(tuesday, 'dinner')).toEqual({ titles: ['Lentil stew', 'Soup', 'Cheese board'], positions: [0, 1, 2] });
+    const cheese = (await PlanEntry.findOne({
+      where: { householdId: ctx.householdId, date: monday, title: 'Cheese board' },
+    }))!.id;
+    expect(
+      (await cook.patch(url(`/plan-entries/${cheese}`)).send({ date: tuesday, slot: 'dinner', position: 99 })).status,
+    ).toBe(200);
+    expect(await slot(tuesday, 'dinner')).toEqual({
+      titles: ['Lentil stew', 'Soup', 'Cheese board'],
+      positions: [0, 1, 2],
+    });
     expect(await slot(monday, 'lunch')).toEqual({ titles: [], positions: [] });
   });
 
   it('closes the gap when an entry is removed', async () => {
-    const soup = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: tuesday, title: 'Soup' } }))!.id;
+    const soup = (await PlanEntry.findOne({ where: { householdId: ctx.householdId, date: tuesday, title: 'Soup' } }))!
+      .id;
     expect((await cook.delete(url(`/plan-entries/${soup}`))).status).toBe(204);
     expect(await slot(tuesday, 'dinner')).toEqual({ titles: ['Lentil stew', 'Cheese board'], positions: [0, 1] });
   });
@@ -76,7 +93,9 @@ describe('moving planned meals keeps each slot dense and ordered', () => {
     const week = (await cook.get(url(`/week?start=${monday}`))).body;
     expect(week.start).toBe(monday);
     const tue = week.days.find((d: { date: string }) => d.date === tuesday);
-    expect(tue.entries.map((e: { title: string; slot: string; position: number }) => `${e.slot}:${e.position}:${e.title}`)).toEqual(['dinner:0:Lentil stew', 'dinner:1:Cheese board']);
+    expect(
+      tue.entries.map((e: { title: string; slot: string; position: number }) => `${e.slot}:${e.position}:${e.title}`),
+    ).toEqual(['dinner:0:Lentil stew', 'dinner:1:Cheese board']);
   });
 });
 
@@ -89,7 +108,11 @@ describe('concurrent moves', () => {
     for (let i = 0; i < 4; i += 1) ids.push(await plan(other, 'lunch', `Lunch ${i}`));
     // Every entry moves at once: half to the top of one slot, half to the top of the other.
     const responses = await Promise.all(
-      ids.map((id, i) => cook.patch(url(`/plan-entries/${id}`)).send(i % 2 ? { date: day, slot: 'dinner', position: 0 } : { date: other, slot: 'lunch', position: 0 })),
+      ids.map((id, i) =>
+        cook
+          .patch(url(`/plan-entries/${id}`))
+          .send(i % 2 ? { date: day, slot: 'dinner', position: 0 } : { date: other, slot: 'lunch', position: 0 }),
+      ),
     );
     expect(responses.map((r) => r.status)).toEqual(ids.map(() => 200));
     const dinner = await slot(day, 'dinner');

@@ -12,11 +12,15 @@ async function call(path: string, init: RequestInit & { cookie?: string } = {}) 
     ...init,
     headers: { 'Content-Type': 'application/json', Origin: BASE_URL, ...(init.cookie ? { Cookie: init.cookie } : {}) },
   });
-  if (!response.ok) throw new Error(`${init.method ?? 'GET'} ${path} answered ${response.status}: ${await response.text()}`);
+  if (!response.ok)
+    throw new Error(`${init.method ?? 'GET'} ${path} answered ${response.status}: ${await response.text()}`);
   return response;
 }
 
-const login = await call('/api/auth/login', { method: 'POST', body: JSON.stringify({ email: 'cook@larderly.test', password: 'pantry-demo-2026' }) });
+const login = await call('/api/auth/login', {
+  method: 'POST',
+  body: JSON.stringify({ email: 'cook@larderly.test', password: 'pantry-demo-2026' }),
+});
 const cookie = login.headers.get('set-cookie')!.split(';')[0]!;
 const me = await (await call('/api/auth/me', { cookie })).json();
 const hid: string = me.memberships[0].householdId;
@@ -24,8 +28,13 @@ const base = `/api/households/${hid}`;
 const todos: { id: string }[] = (await (await call(`${base}/todos`, { cookie })).json()).todos;
 const products: { id: string }[] = (await (await call(`${base}/products`, { cookie })).json()).products;
 const week = await (await call(`${base}/week`, { cookie })).json();
-const entries: { id: string; servings: number }[] = week.days.flatMap((d: { entries: { id: string; servings: number }[] }) => d.entries);
-if (todos.length === 0 || entries.length === 0) throw new Error('The demo household needs to-dos and planned meals: seed it with `server/setup.ts setup --seed-demo`.');
+const entries: { id: string; servings: number }[] = week.days.flatMap(
+  (d: { entries: { id: string; servings: number }[] }) => d.entries,
+);
+if (todos.length === 0 || entries.length === 0)
+  throw new Error(
+    'The demo household needs to-dos and planned meals: seed it with `server/setup.ts setup --seed-demo`.',
+  );
 
 // Seven reads to three writes; every write is one a cook may repeat without running out of anything.
 const json = (body: unknown) => JSON.stringify(body);
@@ -42,7 +51,9 @@ const requests = [
   { method: 'GET', path: `${base}/fridge` },
 ];
 
-console.log(`load: ${CONNECTIONS} connections for ${SECONDS} s against ${BASE_URL}, ${requests.length} requests in turn (7 reads, 3 writes), as cook@larderly.test`);
+console.log(
+  `load: ${CONNECTIONS} connections for ${SECONDS} s against ${BASE_URL}, ${requests.length} requests in turn (7 reads, 3 writes), as cook@larderly.test`,
+);
 const result = await autocannon({
   url: BASE_URL,
   connections: CONNECTIONS,
@@ -52,8 +63,12 @@ const result = await autocannon({
 });
 
 const failures = result.errors + result.timeouts + result.non2xx;
-console.log(`requests: ${result.requests.total} (${Math.round(result.requests.average)}/s), 2xx ${result['2xx']}, non-2xx ${result.non2xx}, errors ${result.errors}, timeouts ${result.timeouts}`);
-console.log(`answers by status: ${JSON.stringify(Object.fromEntries(Object.entries(result.statusCodeStats ?? {}).map(([code, s]) => [code, (s as { count: number }).count])))}`);
+console.log(
+  `requests: ${result.requests.total} (${Math.round(result.requests.average)}/s), 2xx ${result['2xx']}, non-2xx ${result.non2xx}, errors ${result.errors}, timeouts ${result.timeouts}`,
+);
+console.log(
+  `answers by status: ${JSON.stringify(Object.fromEntries(Object.entries(result.statusCodeStats ?? {}).map(([code, s]) => [code, (s as { count: number }).count])))}`,
+);
 console.log(`latency: median ${result.latency.p50} ms, p99 ${result.latency.p99} ms, max ${result.latency.max} ms`);
 console.log(failures === 0 ? 'zero errors: yes' : `zero errors: NO (${failures} failed requests)`);
 process.exit(failures === 0 ? 0 : 1);

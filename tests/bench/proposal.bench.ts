@@ -1,6 +1,16 @@
 // The meal proposal over a household with three years behind it, in memory: the domain alone, no database.
 // Run: npm run bench:proposal   (prints the median and slowest of each scope; the target is well under 200 ms on 2 cores)
-import { addDays, addMonths, bestQualityBy, jarCapacityTbsp, planWaste, proposeMeals, type AllocationJar, type MealProposalInput, type PlannedPortion } from '../../shared/domain';
+import {
+  addDays,
+  addMonths,
+  bestQualityBy,
+  jarCapacityTbsp,
+  planWaste,
+  proposeMeals,
+  type AllocationJar,
+  type MealProposalInput,
+  type PlannedPortion,
+} from '../../shared/domain';
 import { SLOTS, weekDates, weekStartOf } from '../../shared/schemas/week';
 
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 30);
@@ -10,7 +20,11 @@ const until = addDays(start, 6);
 
 // The same shape as the week bench's household: 60 products, 400 batches of ten half-pints over three years.
 const capacity = jarCapacityTbsp('half-pint');
-const products = Array.from({ length: 60 }, (_, i) => ({ id: `product-${i}`, heat: i % 4, dietConflicts: i % 5 === 0 ? ['low-salt'] : [] }));
+const products = Array.from({ length: 60 }, (_, i) => ({
+  id: `product-${i}`,
+  heat: i % 4,
+  dietConflicts: i % 5 === 0 ? ['low-salt'] : [],
+}));
 const jars: AllocationJar[] = [];
 const opened = new Set<string>();
 for (let b = 0; b < 400; b++) {
@@ -21,18 +35,38 @@ for (let b = 0; b < 400; b++) {
     if (!recent || j < 3) {
       if (recent && j === 0 && !opened.has(productId)) {
         opened.add(productId);
-        jars.push({ id: `jar-${b}-${j}`, productId, state: 'opened', capacityTbsp: capacity, remainingTbsp: capacity / 2, bestBy: bestQualityBy(cannedOn), openedOn: addDays(today, -((b % 10) + 1)), useWithinDays: 14 + (b % 3) * 7 });
+        jars.push({
+          id: `jar-${b}-${j}`,
+          productId,
+          state: 'opened',
+          capacityTbsp: capacity,
+          remainingTbsp: capacity / 2,
+          bestBy: bestQualityBy(cannedOn),
+          openedOn: addDays(today, -((b % 10) + 1)),
+          useWithinDays: 14 + (b % 3) * 7,
+        });
       }
       continue; // eaten or discarded long ago: not on the shelf
     }
-    jars.push({ id: `jar-${b}-${j}`, productId, state: 'sealed', capacityTbsp: capacity, remainingTbsp: capacity, bestBy: bestQualityBy(cannedOn), useWithinDays: 21 });
+    jars.push({
+      id: `jar-${b}-${j}`,
+      productId,
+      state: 'sealed',
+      capacityTbsp: capacity,
+      remainingTbsp: capacity,
+      bestBy: bestQualityBy(cannedOn),
+      useWithinDays: 21,
+    });
   }
 }
 const meals = Array.from({ length: 48 }, (_, i) => ({
   id: `meal-${i}`,
   tags: [SLOTS[i % 4]],
   usualServings: 2 + (i % 3),
-  products: [{ productId: products[(i * 7) % 60].id, tbspPerServing: 1 + (i % 2) }, ...(i % 3 === 0 ? [{ productId: products[(i * 11 + 3) % 60].id, tbspPerServing: 1 }] : [])],
+  products: [
+    { productId: products[(i * 7) % 60].id, tbspPerServing: 1 + (i % 2) },
+    ...(i % 3 === 0 ? [{ productId: products[(i * 11 + 3) % 60].id, tbspPerServing: 1 }] : []),
+  ],
   eaters: i % 5 === 0 ? ['keeper', 'cook'] : null,
 }));
 const members = [
@@ -41,17 +75,34 @@ const members = [
   { id: 'helper', heatTolerance: 3, dietTags: [] },
 ];
 // The week as planned: the dinners, each paired with one product.
-const portions: PlannedPortion[] = weekDates(start).flatMap((date, d) => (date >= today ? [{ id: `dinner-${d}`, date, productId: products[(d * 13) % 60].id, tbsp: 3 }] : []));
+const portions: PlannedPortion[] = weekDates(start).flatMap((date, d) =>
+  date >= today ? [{ id: `dinner-${d}`, date, productId: products[(d * 13) % 60].id, tbsp: 3 }] : [],
+);
 const days = weekDates(start).filter((d) => d >= today);
 const scopes: Record<string, MealProposalInput['open']> = {
-  'whole week (breakfast, lunch, snack)': days.flatMap((date) => ['breakfast', 'lunch', 'snack'].map((slot) => ({ date, slot }))),
+  'whole week (breakfast, lunch, snack)': days.flatMap((date) =>
+    ['breakfast', 'lunch', 'snack'].map((slot) => ({ date, slot })),
+  ),
   'the lunches': days.map((date) => ({ date, slot: 'lunch' })),
   'one day': ['breakfast', 'lunch', 'snack'].map((slot) => ({ date: days[0], slot })),
 };
 
-console.log(`household: ${products.length} products, ${jars.length} jars on the shelf and in the fridge, ${meals.length} meals, ${portions.length} planned portions; week of ${start}`);
+console.log(
+  `household: ${products.length} products, ${jars.length} jars on the shelf and in the fridge, ${meals.length} meals, ${portions.length} planned portions; week of ${start}`,
+);
 for (const [scope, open] of Object.entries(scopes)) {
-  const input: MealProposalInput = { today, until, jars, portions, planned: [], open, slotKinds: SLOTS, meals, products, members };
+  const input: MealProposalInput = {
+    today,
+    until,
+    jars,
+    portions,
+    planned: [],
+    open,
+    slotKinds: SLOTS,
+    meals,
+    products,
+    members,
+  };
   const times: number[] = [];
   const cpu: number[] = [];
   let result = proposeMeals(input);

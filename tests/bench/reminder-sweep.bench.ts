@@ -44,7 +44,9 @@ function sweepProcess(url: string, at: Date) {
 const loadBefore = os.loadavg()[0];
 await recreateDatabase(cluster, database);
 const url = cluster.url(database);
-const built = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: url, STATIC_DIR: 'no-static-in-bench' }));
+const built = createApp(
+  loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: url, STATIC_DIR: 'no-static-in-bench' }),
+);
 try {
   await migrate(built.sequelize);
   const began = performance.now();
@@ -64,7 +66,9 @@ try {
   await q(`UPDATE jars SET use_by = current_date + (abs(hashtext(id::text)) % 14) WHERE state = 'opened'`);
   // Everyone's reminder hour is now, in the households' time zone, 14 days before the use-by.
   const now = new Date();
-  const hour = Number(new Intl.DateTimeFormat('en-US', { timeZone: ZONE, hour: 'numeric', hourCycle: 'h23' }).format(now));
+  const hour = Number(
+    new Intl.DateTimeFormat('en-US', { timeZone: ZONE, hour: 'numeric', hourCycle: 'h23' }).format(now),
+  );
   await q(
     `INSERT INTO notification_preferences (user_id, email_reminders, weekly_digest, reminder_hour, days_before, created_at, updated_at)
      SELECT id, true, false, :hour, 14, now(), now() FROM users`,
@@ -88,16 +92,23 @@ try {
   );
 
   console.log(`\nreminder sweep: ${made}`);
-  console.log(`machine: ${os.cpus().length} cores, load average ${loadBefore.toFixed(1)} before and ${os.loadavg()[0].toFixed(1)} after`);
+  console.log(
+    `machine: ${os.cpus().length} cores, load average ${loadBefore.toFixed(1)} before and ${os.loadavg()[0].toFixed(1)} after`,
+  );
   console.table({
     'process one': { ms: Math.round(one.ms), claimed: one.claimed },
     'process two': { ms: Math.round(two.ms), claimed: two.claimed },
     'both, wall clock': { ms: Math.round(bothMs), claimed: one.claimed + two.claimed },
     'a third sweep after': { ms: Math.round(again.ms), claimed: again.claimed },
   });
-  console.log(`reminders due ${due.toLocaleString('en-US')}; delivery rows ${rows.toLocaleString('en-US')} (${people.toLocaleString('en-US')} distinct jar, kind and person), ${sent.toLocaleString('en-US')} recorded sent`);
-  const once = rows === due && people === due && sent === due && one.claimed + two.claimed === due && again.claimed === 0;
-  console.log(`each reminder exactly once: ${once ? 'yes' : 'NO'}; both processes done in ${(bothMs / 1000).toFixed(1)} s (aim <= 10 s, process start-up included)`);
+  console.log(
+    `reminders due ${due.toLocaleString('en-US')}; delivery rows ${rows.toLocaleString('en-US')} (${people.toLocaleString('en-US')} distinct jar, kind and person), ${sent.toLocaleString('en-US')} recorded sent`,
+  );
+  const once =
+    rows === due && people === due && sent === due && one.claimed + two.claimed === due && again.claimed === 0;
+  console.log(
+    `each reminder exactly once: ${once ? 'yes' : 'NO'}; both processes done in ${(bothMs / 1000).toFixed(1)} s (aim <= 10 s, process start-up included)`,
+  );
   if (!once) process.exitCode = 1;
 } finally {
   await built.close();

@@ -8,10 +8,19 @@ export const BENCH_EMAIL = 'bench-keeper@larderly.test';
 export const BENCH_PASSWORD = 'bench household password';
 
 export async function generateHousehold(today: string) {
-  const household = await Household.create({ name: 'Bench Holler', timeZone: 'America/New_York', altitudeFt: 1200, altitudeConfirmedAt: new Date() });
+  const household = await Household.create({
+    name: 'Bench Holler',
+    timeZone: 'America/New_York',
+    altitudeFt: 1200,
+    altitudeConfirmedAt: new Date(),
+  });
   const hid = household.id;
   const people = await User.bulkCreate(
-    ['Keeper', 'Cook', 'Helper'].map((role, i) => ({ email: i === 0 ? BENCH_EMAIL : `bench-${role.toLowerCase()}@larderly.test`, name: `Bench ${role}`, passwordHash: '' })),
+    ['Keeper', 'Cook', 'Helper'].map((role, i) => ({
+      email: i === 0 ? BENCH_EMAIL : `bench-${role.toLowerCase()}@larderly.test`,
+      name: `Bench ${role}`,
+      passwordHash: '',
+    })),
   );
   const passwordHash = await hashPassword(BENCH_PASSWORD, 4);
   await User.update({ passwordHash }, { where: { id: people.map((p) => p.id) } });
@@ -22,7 +31,12 @@ export async function generateHousehold(today: string) {
   ]);
 
   const products = await Product.bulkCreate(
-    Array.from({ length: 60 }, (_, i) => ({ householdId: hid, name: `Preserve ${String(i + 1).padStart(2, '0')}`, kind: PRODUCT_KINDS[i % PRODUCT_KINDS.length], heat: i % 6 })),
+    Array.from({ length: 60 }, (_, i) => ({
+      householdId: hid,
+      name: `Preserve ${String(i + 1).padStart(2, '0')}`,
+      kind: PRODUCT_KINDS[i % PRODUCT_KINDS.length],
+      heat: i % 6,
+    })),
   );
   await Recipe.bulkCreate(
     products.map((p) => ({
@@ -94,6 +108,13 @@ export async function generateHousehold(today: string) {
       servings: 2 + (i % 3),
     })),
   );
-  await Pairing.bulkCreate(entries.map((e, i) => ({ householdId: hid, planEntryId: e.id, productId: products[(i * 7) % 60].id, tbspPerServing: 1 })));
+  await Pairing.bulkCreate(
+    entries.map((e, i) => ({
+      householdId: hid,
+      planEntryId: e.id,
+      productId: products[(i * 7) % 60].id,
+      tbspPerServing: 1,
+    })),
+  );
   return { household, jars: jars.length, entries: entries.length };
 }

@@ -27,7 +27,15 @@ const databaseUrl = cluster.url(database);
 const children: ChildProcess[] = [];
 
 try {
-  const built = createApp(loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: databaseUrl, STATIC_DIR: 'no-static-in-bench', BCRYPT_COST: '4' }));
+  const built = createApp(
+    loadConfig({
+      ...process.env,
+      NODE_ENV: 'test',
+      DATABASE_URL: databaseUrl,
+      STATIC_DIR: 'no-static-in-bench',
+      BCRYPT_COST: '4',
+    }),
+  );
   await migrate(built.sequelize);
   const today = todayIn('America/New_York');
   const { household, jars, entries } = await generateHousehold(today);
@@ -41,7 +49,7 @@ try {
   const texts: string[] = [];
   const query = pg.Client.prototype.query;
   pg.Client.prototype.query = function counted(this: pg.Client, ...args: unknown[]) {
-    const sql = typeof args[0] === 'string' ? args[0] : (args[0] as { text?: string })?.text ?? '';
+    const sql = typeof args[0] === 'string' ? args[0] : ((args[0] as { text?: string })?.text ?? '');
     texts.push(sql.replace(/\s+/g, ' ').slice(0, 90));
     return (query as (...a: unknown[]) => unknown).apply(this, args);
   } as typeof query;
@@ -51,23 +59,42 @@ try {
   const sequentialMs = (performance.now() - began) / rounds;
   pg.Client.prototype.query = query;
   console.log(`one at a time, in process: ${sequentialMs.toFixed(1)} ms per GET /week`);
-  console.log(`\nqueries per GET /week: ${texts.length / rounds} (${rounds} requests, ${texts.length} queries); one request's:`);
+  console.log(
+    `\nqueries per GET /week: ${texts.length / rounds} (${rounds} requests, ${texts.length} queries); one request's:`,
+  );
   for (const sql of texts.slice(0, texts.length / rounds)) console.log(`  ${sql}`);
   const payload = (await agent.get(path)).body;
-  console.log(`payload: ${payload.days.reduce((n: number, d: { entries: unknown[] }) => n + d.entries.length, 0)} entries, ${payload.allocation.assignments.length} assignments, ${payload.allocation.openings.length} openings, ${payload.allocation.warnings.length} warnings`);
-  const cookie = (await request(built.app).post('/api/auth/login').send({ email: BENCH_EMAIL, password: BENCH_PASSWORD })).headers['set-cookie']![0].split(';')[0];
+  console.log(
+    `payload: ${payload.days.reduce((n: number, d: { entries: unknown[] }) => n + d.entries.length, 0)} entries, ${payload.allocation.assignments.length} assignments, ${payload.allocation.openings.length} openings, ${payload.allocation.warnings.length} warnings`,
+  );
+  const cookie = (
+    await request(built.app).post('/api/auth/login').send({ email: BENCH_EMAIL, password: BENCH_PASSWORD })
+  ).headers['set-cookie']![0].split(';')[0];
   await built.close();
 
   // The real server and a bare Express route, each in its own process, so the load generator does not share their event loop.
   // BENCH_CPU_PROF=<dir> writes the server's CPU profile there when it stops (node --cpu-prof).
   const profile = process.env.BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [];
   const server = spawn(process.execPath, [...profile, '--import', 'tsx', 'server/index.ts'], {
-    env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: databaseUrl, PORT: String(APP_PORT), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: 'no-static-in-bench', LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      DATABASE_URL: databaseUrl,
+      PORT: String(APP_PORT),
+      HOST: '127.0.0.1',
+      SESSION_SECRET: randomBytes(32).toString('hex'),
+      STATIC_DIR: 'no-static-in-bench',
+      LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
+    },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const bare = spawn(
     process.execPath,
-    ['--input-type=module', '-e', `import express from 'express'; const app = express(); app.get('/bare', (_req, res) => res.json({ ok: true, start: '${start}' })); app.listen(${BARE_PORT}, '127.0.0.1');`],
+    [
+      '--input-type=module',
+      '-e',
+      `import express from 'express'; const app = express(); app.get('/bare', (_req, res) => res.json({ ok: true, start: '${start}' })); app.listen(${BARE_PORT}, '127.0.0.1');`,
+    ],
     { stdio: ['ignore', 'inherit', 'inherit'] },
   );
   children.push(server, bare);
@@ -75,10 +102,17 @@ try {
   await waitFor(`http://127.0.0.1:${BARE_PORT}/bare`);
 
   // The session cookie was signed with the test secret; sign in again against the real server.
-  const login = await fetch(`http://127.0.0.1:${APP_PORT}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email: BENCH_EMAIL, password: BENCH_PASSWORD }) });
+  const login = await fetch(`http://127.0.0.1:${APP_PORT}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: BENCH_EMAIL, password: BENCH_PASSWORD }),
+  });
   const serverCookie = login.headers.get('set-cookie')?.split(';')[0] ?? cookie;
   const probe = await fetch(`http://127.0.0.1:${APP_PORT}${path}`, { headers: { cookie: serverCookie } });
-  if (!probe.ok) throw new Error(`GET /week answered ${probe.status} on the server (sign-in ${login.status} ${await login.clone().text()}): ${(await probe.text()).slice(0, 300)}`);
+  if (!probe.ok)
+    throw new Error(
+      `GET /week answered ${probe.status} on the server (sign-in ${login.status} ${await login.clone().text()}): ${(await probe.text()).slice(0, 300)}`,
+    );
 
   const os = await import('node:os');
   const loadBefore = os.loadavg()[0];
@@ -86,29 +120,44 @@ try {
   // The same session and household guard with almost no work behind them: what any household route costs here.
   const guarded = await load(`http://127.0.0.1:${APP_PORT}/api/households/${household.id}`, { cookie: serverCookie });
   const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {});
-  console.log(`\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; machine load average before the run: ${loadBefore.toFixed(1)}`);
+  console.log(
+    `\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; machine load average before the run: ${loadBefore.toFixed(1)}`,
+  );
   console.table({
     'GET /week': week,
     'GET /households/:hid (same session and guard)': guarded,
     'bare Express JSON': base,
   });
-  console.log(`throughput ratio (week / bare): ${(week.requestsPerSecond / base.requestsPerSecond).toFixed(3)}; aim: p99 < 25 ms and ratio >= 0.333`);
+  console.log(
+    `throughput ratio (week / bare): ${(week.requestsPerSecond / base.requestsPerSecond).toFixed(3)}; aim: p99 < 25 ms and ratio >= 0.333`,
+  );
 } finally {
   // Waits for each child to exit (up to 6 s), so a CPU profile is written before the database goes.
-  await Promise.all(children.map((child) => new Promise((resolve) => {
-    if (child.exitCode !== null) return resolve(null);
-    child.once('exit', resolve);
-    child.kill('SIGTERM');
-    setTimeout(resolve, 6_000).unref();
-  })));
+  await Promise.all(
+    children.map(
+      (child) =>
+        new Promise((resolve) => {
+          if (child.exitCode !== null) return resolve(null);
+          child.once('exit', resolve);
+          child.kill('SIGTERM');
+          setTimeout(resolve, 6_000).unref();
+        }),
+    ),
+  );
   await dropDatabase(cluster, database).catch(() => {});
   cluster.stop();
 }
 
 async function load(url: string, headers: Record<string, string>) {
   const result = await autocannon({ url, connections: CONNECTIONS, duration: SECONDS, headers });
-  if (result.non2xx > 0 || result.errors > 0) console.log(`  ${url}: ${result.non2xx} non-2xx, ${result.errors} errors`);
-  return { medianMs: result.latency.p50, p99Ms: result.latency.p99, requestsPerSecond: result.requests.average, non2xx: result.non2xx };
+  if (result.non2xx > 0 || result.errors > 0)
+    console.log(`  ${url}: ${result.non2xx} non-2xx, ${result.errors} errors`);
+  return {
+    medianMs: result.latency.p50,
+    p99Ms: result.latency.p99,
+    requestsPerSecond: result.requests.average,
+    non2xx: result.non2xx,
+  };
 }
 
 async function waitFor(url: string) {

@@ -25,14 +25,22 @@ async function seriousViolations(page: Page) {
   // Evaluated through DevTools, as a test tool, so the app's own CSP stays strict.
   await page.evaluate(axeSource);
   const violations = await page.evaluate(async () => {
-    const result = await (window as unknown as { axe: { run: (o: object) => Promise<{ violations: Violation[] }> } }).axe.run({
+    const result = await (
+      window as unknown as { axe: { run: (o: object) => Promise<{ violations: Violation[] }> } }
+    ).axe.run({
       resultTypes: ['violations'],
     });
     return result.violations;
   });
   return violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map((v) => `${v.id} (${v.impact}): ${v.help} at ${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(', ')}`);
+    .map(
+      (v) =>
+        `${v.id} (${v.impact}): ${v.help} at ${v.nodes
+          .map((n) => n.target.join(' '))
+          .slice(0, 3)
+          .join(', ')}`,
+    );
 }
 
 describe('accessibility (axe-core, WCAG 2 A and AA rules)', () => {
@@ -46,7 +54,10 @@ describe('accessibility (axe-core, WCAG 2 A and AA rules)', () => {
     await page.close();
   });
 
-  for (const [name, viewport] of [['desktop', DESKTOP], ['phone', PHONE]] as const) {
+  for (const [name, viewport] of [
+    ['desktop', DESKTOP],
+    ['phone', PHONE],
+  ] as const) {
     it(`finds no serious or critical violations on any screen with the demo data (${name})`, async () => {
       const page = await browser.newPage({ viewport });
       await signIn(page, baseURL, 'keeper@larderly.test');
@@ -61,7 +72,13 @@ describe('accessibility (axe-core, WCAG 2 A and AA rules)', () => {
       const api = `${baseURL}/api/households/${home.split('/')[2]}`;
       const jar = (await (await page.request.get(`${api}/jars?state=sealed`)).json()).jars[0];
       const recipe = (await (await page.request.get(`${api}/recipes`)).json()).recipes[0];
-      for (const path of [`/j/${jar.code}`, `${home}/recipes/${recipe.id}`, `${home}/batches/new`, `${home}/batches/${jar.batchId}/labels`, '/invite/not-a-real-invitation-token-0000']) {
+      for (const path of [
+        `/j/${jar.code}`,
+        `${home}/recipes/${recipe.id}`,
+        `${home}/batches/new`,
+        `${home}/batches/${jar.batchId}/labels`,
+        '/invite/not-a-real-invitation-token-0000',
+      ]) {
         await page.goto(`${baseURL}${path}`);
         await page.getByRole('heading', { level: 1 }).first().waitFor();
         await page.waitForLoadState('networkidle');
@@ -70,5 +87,4 @@ describe('accessibility (axe-core, WCAG 2 A and AA rules)', () => {
       await page.close();
     }, 240_000);
   }
-
 });

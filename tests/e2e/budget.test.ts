@@ -17,7 +17,8 @@ interface Chunk {
 }
 
 const clientDir = process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client';
-const manifest = (): Record<string, Chunk> => JSON.parse(readFileSync(path.join(clientDir, '.vite', 'manifest.json'), 'utf8'));
+const manifest = (): Record<string, Chunk> =>
+  JSON.parse(readFileSync(path.join(clientDir, '.vite', 'manifest.json'), 'utf8'));
 
 /** The JavaScript files a page loads before it shows: these chunks and everything they import statically. */
 function staticClosure(chunks: Record<string, Chunk>, starts: string[]) {
@@ -33,23 +34,33 @@ function staticClosure(chunks: Record<string, Chunk>, starts: string[]) {
   return [...files].filter((file) => file.endsWith('.js'));
 }
 
-const gzipKb = (files: string[]) => files.reduce((sum, file) => sum + gzipSync(readFileSync(path.join(clientDir, file)), { level: 9 }).length, 0) / 1024;
+const gzipKb = (files: string[]) =>
+  files.reduce((sum, file) => sum + gzipSync(readFileSync(path.join(clientDir, file)), { level: 9 }).length, 0) / 1024;
 
 describe('what the first screens load', () => {
   it('keeps the gzip JavaScript of the sign-in page and of the Today screen under budget', () => {
     const chunks = manifest();
     const signIn = gzipKb(staticClosure(chunks, ['index.html', 'src/app/routes/sign-in.tsx']));
     const today = gzipKb(
-      staticClosure(chunks, ['index.html', 'src/app/layouts/require-auth.tsx', 'src/app/layouts/app-layout.tsx', 'src/app/routes/today.tsx']),
+      staticClosure(chunks, [
+        'index.html',
+        'src/app/layouts/require-auth.tsx',
+        'src/app/layouts/app-layout.tsx',
+        'src/app/routes/today.tsx',
+      ]),
     );
-    console.info(`gzip JavaScript: sign-in ${signIn.toFixed(1)} KB (budget ${BUDGET_KB.signIn}), Today ${today.toFixed(1)} KB (budget ${BUDGET_KB.today})`);
+    console.info(
+      `gzip JavaScript: sign-in ${signIn.toFixed(1)} KB (budget ${BUDGET_KB.signIn}), Today ${today.toFixed(1)} KB (budget ${BUDGET_KB.today})`,
+    );
     expect(signIn).toBeLessThan(BUDGET_KB.signIn);
     expect(today).toBeLessThan(BUDGET_KB.today);
   });
 
   it('self-hosts the Karla fonts and preloads them from index.html', () => {
     const html = readFileSync(path.join(clientDir, 'index.html'), 'utf8');
-    const preloads = [...html.matchAll(/<link[^>]+rel="preload"[^>]*>/g)].map((m) => m[0]).filter((tag) => /as="font"/.test(tag));
+    const preloads = [...html.matchAll(/<link[^>]+rel="preload"[^>]*>/g)]
+      .map((m) => m[0])
+      .filter((tag) => /as="font"/.test(tag));
     expect(preloads.length).toBeGreaterThanOrEqual(2);
     for (const tag of preloads) {
       const href = /href="\/?([^"]+)"/.exec(tag)![1]!;

@@ -11,12 +11,16 @@ const householdOf = (page: Page) => /\/h\/([0-9a-f-]{36})/.exec(page.url())![1];
 const write = { headers: { Origin: baseURL } };
 
 const signUp = (page: Page, name: string) =>
-  signUpInBrowser(page, { baseURL, standInsDir: inject('standInsDir') }, {
-    name,
-    email: `${name.toLowerCase().replace(/\W/g, '-')}-${Date.now()}@example.test`,
-    password: 'a shelf of apricot jam',
-    householdName: `${name}’s kitchen`,
-  });
+  signUpInBrowser(
+    page,
+    { baseURL, standInsDir: inject('standInsDir') },
+    {
+      name,
+      email: `${name.toLowerCase().replace(/\W/g, '-')}-${Date.now()}@example.test`,
+      password: 'a shelf of apricot jam',
+      householdName: `${name}’s kitchen`,
+    },
+  );
 
 describe('first run: the questions the canning numbers depend on', () => {
   it('asks a new household its altitude, time zone, canner and week start, shows no plan until then, and stores UTC as UTC', async () => {
@@ -54,7 +58,14 @@ describe('first run: the questions the canning numbers depend on', () => {
     expect(await page.getByText('First, your altitude').count()).toBe(0);
 
     const household = (await (await page.request.get(`${baseURL}/api/households/${hid}`)).json()).household;
-    expect(household).toMatchObject({ altitudeFt: 5200, altitudeConfirmed: true, timeZone: 'UTC', defaultMethod: 'atmospheric-steam', cannerCapacityJars: 8, weekStartsOn: 0 });
+    expect(household).toMatchObject({
+      altitudeFt: 5200,
+      altitudeConfirmed: true,
+      timeZone: 'UTC',
+      defaultMethod: 'atmospheric-steam',
+      cannerCapacityJars: 8,
+      weekStartsOn: 0,
+    });
     // The settings form shows UTC as UTC, and saving keeps it (it used to fall to the first zone in the list).
     await page.goto(`${baseURL}/h/${hid}/household`);
     expect(await page.getByLabel('Time zone').inputValue()).toBe('UTC');
@@ -68,13 +79,27 @@ describe('first run: the questions the canning numbers depend on', () => {
     const page = await browser.newPage(phone);
     await signUp(page, 'Tobias');
     const hid = householdOf(page);
-    const product = await (await page.request.post(`${baseURL}/api/households/${hid}/products`, { ...write, data: { name: 'Ridge Pepper Jelly', kind: 'jelly', jarSize: 'half-pint' } })).json();
+    const product = await (
+      await page.request.post(`${baseURL}/api/households/${hid}/products`, {
+        ...write,
+        data: { name: 'Ridge Pepper Jelly', kind: 'jelly', jarSize: 'half-pint' },
+      })
+    ).json();
     const recipe = await page.request.post(`${baseURL}/api/households/${hid}/recipes`, {
       ...write,
       // Our own test recipe; only its shape matters here, no number from it is checked.
       data: {
-        productId: product.product.id, name: 'Pepper jelly', yieldJars: 6, yieldJarSize: 'half-pint', method: 'boiling-water', baseMinutes: { 'half-pint': 10 },
-        headspaceInches: 0.25, acidified: true, acidPercent: 5, ph: null, ingredients: [{ name: 'sweet peppers', amount: 2, unit: 'cup', role: 'produce' }],
+        productId: product.product.id,
+        name: 'Pepper jelly',
+        yieldJars: 6,
+        yieldJarSize: 'half-pint',
+        method: 'boiling-water',
+        baseMinutes: { 'half-pint': 10 },
+        headspaceInches: 0.25,
+        acidified: true,
+        acidPercent: 5,
+        ph: null,
+        ingredients: [{ name: 'sweet peppers', amount: 2, unit: 'cup', role: 'produce' }],
       },
     });
     expect(recipe.status(), await recipe.text()).toBe(201);
@@ -109,7 +134,9 @@ describe('a restock to-do’s batch plan on canning day', () => {
       await dialog.getByText(`${now} minutes in a boiling-water canner at 5,200 ft`).waitFor();
       await dialog.getByText(/Updated since it was planned on/).waitFor();
       await dialog.getByText(/altitude is now 5,200 ft \(it was 2,350 ft/).waitFor();
-      await dialog.getByText(`Processing is now ${now} minutes (it was ${planned.processing.minutes} minutes).`).waitFor();
+      await dialog
+        .getByText(`Processing is now ${now} minutes (it was ${planned.processing.minutes} minutes).`)
+        .waitFor();
       expect(await dialog.getByText(`at 2,350 ft`).count()).toBe(0);
       await screenshot(page, 'restock-plan-after-altitude-change-phone');
     } finally {
@@ -124,8 +151,14 @@ describe('first run without dead ends', () => {
     const page = await browser.newPage(phone);
     await signUp(page, 'Henrike');
     const hid = householdOf(page);
-    expect((await page.request.patch(`${baseURL}/api/households/${hid}`, { ...write, data: { altitudeFt: 800 } })).status()).toBe(200);
-    for (const [path, name] of [['', 'today'], ['/recipes/new', 'recipe'], ['/batches/new', 'batch']] as const) {
+    expect(
+      (await page.request.patch(`${baseURL}/api/households/${hid}`, { ...write, data: { altitudeFt: 800 } })).status(),
+    ).toBe(200);
+    for (const [path, name] of [
+      ['', 'today'],
+      ['/recipes/new', 'recipe'],
+      ['/batches/new', 'batch'],
+    ] as const) {
       await page.goto(`${baseURL}/h/${hid}${path}`);
       await page.getByText('Start with your first product').waitFor();
       await screenshot(page, `first-run-no-product-${name}-phone`);

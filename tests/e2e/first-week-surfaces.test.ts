@@ -43,7 +43,12 @@ async function signUp(page: Page, name: string) {
   await signUpInBrowser(
     page,
     { baseURL, standInsDir: inject('standInsDir') },
-    { name, email: `${name.toLowerCase()}-${Date.now()}@example.test`, password: 'a shelf of apricot jam', householdName: `${name}’s kitchen` },
+    {
+      name,
+      email: `${name.toLowerCase()}-${Date.now()}@example.test`,
+      password: 'a shelf of apricot jam',
+      householdName: `${name}’s kitchen`,
+    },
   );
 }
 

@@ -36,8 +36,13 @@ describe('the fridge', () => {
     await screenshot(page, 'fridge-desktop');
     const first = (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars[0];
     await page.getByRole('button', { name: `Mark finished: jar ${first.code} of ${first.productName}` }).click();
-    await page.getByRole('button', { name: `Mark finished: jar ${first.code} of ${first.productName}` }).waitFor({ state: 'detached' });
-    const openJarIds = async () => (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars.map((j: { jarId: string }) => j.jarId);
+    await page
+      .getByRole('button', { name: `Mark finished: jar ${first.code} of ${first.productName}` })
+      .waitFor({ state: 'detached' });
+    const openJarIds = async () =>
+      (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars.map(
+        (j: { jarId: string }) => j.jarId,
+      );
     await expect.poll(openJarIds).not.toContain(first.jarId);
     const after = (await (await page.request.get(`${baseURL}/api/households/${hid}/fridge`)).json()).jars;
 

@@ -14,16 +14,27 @@ declare module 'vitest' {
 export default async function startServer(project: TestProject) {
   const database = await createTestDatabase('e2e');
   const env = { ...process.env, DATABASE_URL: database.url };
-  const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'server/setup.ts', 'setup', '--seed-demo'], { env, encoding: 'utf8' });
-  if (seeded.status !== 0) throw new Error(`seeding the browser-test database failed:\n${seeded.stdout}${seeded.stderr}`);
+  const seeded = spawnSync(process.execPath, ['--import', 'tsx', 'server/setup.ts', 'setup', '--seed-demo'], {
+    env,
+    encoding: 'utf8',
+  });
+  if (seeded.status !== 0)
+    throw new Error(`seeding the browser-test database failed:\n${seeded.stdout}${seeded.stderr}`);
 
   const port = await freePort();
   const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
-    env: { ...env, NODE_ENV: 'production', PORT: String(port), HOST: '127.0.0.1', SESSION_SECRET: randomBytes(32).toString('hex'), STATIC_DIR: process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client',
+    env: {
+      ...env,
+      NODE_ENV: 'production',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      SESSION_SECRET: randomBytes(32).toString('hex'),
+      STATIC_DIR: process.env.LARDERLY_TEST_CLIENT_DIR ?? 'dist/client',
       // Every browser test signs in from 127.0.0.1; the limit itself has its own API test.
       AUTH_RATE_LIMIT: '10000',
       // Only warnings and errors: a line per request would bury the test output.
-      LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn' },
+      LOG_LEVEL: process.env.LOG_LEVEL ?? 'warn',
+    },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const baseURL = `http://127.0.0.1:${port}`;

@@ -28,10 +28,15 @@ interface TestSubscription {
  */
 function standInPushManager(origin: string) {
   const base64url = (bytes: ArrayBuffer | Uint8Array) =>
-    btoa(String.fromCharCode(...new Uint8Array(bytes instanceof Uint8Array ? bytes : new Uint8Array(bytes)))).replace(/\+/g, '-').replace(/\//g, '_').replace(/=+$/, '');
+    btoa(String.fromCharCode(...new Uint8Array(bytes instanceof Uint8Array ? bytes : new Uint8Array(bytes))))
+      .replace(/\+/g, '-')
+      .replace(/\//g, '_')
+      .replace(/=+$/, '');
   let current: PushSubscription | null = null;
   PushManager.prototype.subscribe = async function subscribe(options?: PushSubscriptionOptionsInit) {
-    const pair = (await crypto.subtle.generateKey({ name: 'ECDH', namedCurve: 'P-256' }, true, ['deriveBits'])) as CryptoKeyPair;
+    const pair = (await crypto.subtle.generateKey({ name: 'ECDH', namedCurve: 'P-256' }, true, [
+      'deriveBits',
+    ])) as CryptoKeyPair;
     const publicRaw = await crypto.subtle.exportKey('raw', pair.publicKey);
     const privateJwk = await crypto.subtle.exportKey('jwk', pair.privateKey);
     const auth = crypto.getRandomValues(new Uint8Array(16));
@@ -42,7 +47,8 @@ function standInPushManager(origin: string) {
       endpoint,
       keys,
       privateJwk,
-      applicationServerKey: serverKey instanceof ArrayBuffer || serverKey instanceof Uint8Array ? base64url(serverKey) : String(serverKey),
+      applicationServerKey:
+        serverKey instanceof ArrayBuffer || serverKey instanceof Uint8Array ? base64url(serverKey) : String(serverKey),
     };
     current = {
       endpoint,
@@ -65,7 +71,13 @@ function standInPushManager(origin: string) {
 function decryptWith(subscription: TestSubscription, body: string) {
   const receiver = createECDH('prime256v1');
   receiver.setPrivateKey(Buffer.from(subscription.privateJwk.d!, 'base64url'));
-  return JSON.parse(decrypt(Buffer.from(body, 'base64'), { version: 'aes128gcm', privateKey: receiver, authSecret: subscription.keys.auth }).toString('utf8'));
+  return JSON.parse(
+    decrypt(Buffer.from(body, 'base64'), {
+      version: 'aes128gcm',
+      privateKey: receiver,
+      authSecret: subscription.keys.auth,
+    }).toString('utf8'),
+  );
 }
 
 async function householdPage(context: BrowserContext, email: string) {
@@ -80,7 +92,9 @@ async function householdPage(context: BrowserContext, email: string) {
 async function serviceWorkerRegistrationId(page: Page) {
   const cdp = await page.context().newCDPSession(page);
   const registrations: { registrationId: string; scopeURL: string; isDeleted: boolean }[] = [];
-  cdp.on('ServiceWorker.workerRegistrationUpdated', (event: { registrations: typeof registrations }) => registrations.push(...event.registrations));
+  cdp.on('ServiceWorker.workerRegistrationUpdated', (event: { registrations: typeof registrations }) =>
+    registrations.push(...event.registrations),
+  );
   await cdp.send('ServiceWorker.enable');
   const registration = await eventually(() => registrations.find((r) => r.scopeURL === `${baseURL}/` && !r.isDeleted));
   return { cdp, registrationId: registration.registrationId };
@@ -119,7 +133,9 @@ describe('notifications on this device', () => {
     await page.getByText('Saved.').waitFor();
     await page.getByLabel('Reminder time').selectOption('18');
     await page.getByLabel('E-mail reminders').uncheck();
-    await expect.poll(async () => (await page.request.get(`${baseURL}/api/me/notifications`)).json()).toMatchObject({ settings: { daysBefore: 3, reminderHour: 18, emailReminders: false } });
+    await expect
+      .poll(async () => (await page.request.get(`${baseURL}/api/me/notifications`)).json())
+      .toMatchObject({ settings: { daysBefore: 3, reminderHour: 18, emailReminders: false } });
     await page.reload();
     await expect(page.getByLabel('Remind me').inputValue()).resolves.toBe('3');
     await screenshot(page, 'notifications-desktop');
@@ -139,11 +155,28 @@ describe('the service worker', () => {
       navigator.serviceWorker.addEventListener('message', (event) => messages.push(event.data));
     });
     const { cdp, registrationId } = await serviceWorkerRegistrationId(page);
-    const reminder = { title: 'Use the Spiced Pear Butter within 2 days', body: 'The opened jar of Spiced Pear Butter should be finished within 2 days.', url: '/j/TESTJAR', tag: 'jar-test-soon' };
-    await cdp.send('ServiceWorker.deliverPushMessage', { origin: baseURL, registrationId, data: JSON.stringify(reminder) });
+    const reminder = {
+      title: 'Use the Spiced Pear Butter within 2 days',
+      body: 'The opened jar of Spiced Pear Butter should be finished within 2 days.',
+      url: '/j/TESTJAR',
+      tag: 'jar-test-soon',
+    };
+    await cdp.send('ServiceWorker.deliverPushMessage', {
+      origin: baseURL,
+      registrationId,
+      data: JSON.stringify(reminder),
+    });
 
-    await expect.poll(() => page.evaluate(() => (window as unknown as { __pushed: unknown[] }).__pushed)).toEqual([{ type: 'larderly-push', ...reminder }]);
-    const shown = await page.evaluate(async () => (await (await navigator.serviceWorker.ready).getNotifications()).map((n) => ({ title: n.title, body: n.body, data: n.data })));
+    await expect
+      .poll(() => page.evaluate(() => (window as unknown as { __pushed: unknown[] }).__pushed))
+      .toEqual([{ type: 'larderly-push', ...reminder }]);
+    const shown = await page.evaluate(async () =>
+      (await (await navigator.serviceWorker.ready).getNotifications()).map((n) => ({
+        title: n.title,
+        body: n.body,
+        data: n.data,
+      })),
+    );
     expect(shown).toEqual([{ title: reminder.title, body: reminder.body, data: { url: '/j/TESTJAR' } }]);
     await context.close();
   });

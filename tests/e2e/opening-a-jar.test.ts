@@ -21,7 +21,9 @@ describe('opening a jar when a better one is there', () => {
     // The demo's Smoky Tomato Jam: one jar open in the fridge, one sealed from last year's batch, newer ones sealed.
     const jam = await jarsOf(page, hid, 'Smoky Tomato Jam');
     const open = jam.filter((jar) => jar.state === 'opened');
-    const sealed = jam.filter((jar) => jar.state === 'sealed').sort((a, b) => a.cannedOn.localeCompare(b.cannedOn) || a.code.localeCompare(b.code));
+    const sealed = jam
+      .filter((jar) => jar.state === 'sealed')
+      .sort((a, b) => a.cannedOn.localeCompare(b.cannedOn) || a.code.localeCompare(b.code));
     const oldest = sealed[0]!;
     const newest = sealed.at(-1)!;
     expect(open.length).toBeGreaterThan(0);
@@ -63,7 +65,9 @@ describe('opening a jar when a better one is there', () => {
     await screenshot(page, 'opening-a-jar-shelf-advice-phone');
     await card.getByRole('button', { name: /Open jar .* anyway/ }).click();
     await card.getByText(/is open\. Before you eat from it:/).waitFor();
-    await expect.poll(async () => (await jarsOf(page, hid, 'Dilly Carrots')).filter((jar) => jar.state === 'sealed').length).toBe(sealedBefore - 1);
+    await expect
+      .poll(async () => (await jarsOf(page, hid, 'Dilly Carrots')).filter((jar) => jar.state === 'sealed').length)
+      .toBe(sealedBefore - 1);
     await page.close();
   });
 });

@@ -23,54 +23,72 @@ async function forecastFor(page: Page, hid: string, name: string): Promise<Forec
 }
 
 describe('from a restock suggestion to a recorded batch', () => {
-  it('follows the suggestion from Today, plans the batch, records it, and the suggestion goes away', { timeout: 120_000 }, async () => {
-    const page = await browser.newPage({ viewport: DESKTOP });
-    await signIn(page, baseURL, 'cook@larderly.test');
-    const hid = householdOf(page);
-    // Pickled Beets has a tested recipe; making it a favourite with a minimum above its count makes it due.
-    const before = await forecastFor(page, hid, 'Pickled Beets');
-    const changed = await page.request.patch(`${baseURL}/api/households/${hid}/products/${before.productId}`, {
-      data: { favourite: true, minJars: before.sealedJars + 2 },
-      headers: { Origin: baseURL },
-    });
-    expect(changed.status()).toBe(200);
+  it(
+    'follows the suggestion from Today, plans the batch, records it, and the suggestion goes away',
+    { timeout: 120_000 },
+    async () => {
+      const page = await browser.newPage({ viewport: DESKTOP });
+      await signIn(page, baseURL, 'cook@larderly.test');
+      const hid = householdOf(page);
+      // Pickled Beets has a tested recipe; making it a favourite with a minimum above its count makes it due.
+      const before = await forecastFor(page, hid, 'Pickled Beets');
+      const changed = await page.request.patch(`${baseURL}/api/households/${hid}/products/${before.productId}`, {
+        data: { favourite: true, minJars: before.sealedJars + 2 },
+        headers: { Origin: baseURL },
+      });
+      expect(changed.status()).toBe(200);
 
-    await page.goto(`${baseURL}/h/${hid}`);
-    const runningLow = page.getByRole('region', { name: 'Restock suggestions' });
-    await runningLow.getByRole('link', { name: /Pickled Beets/ }).click();
-    await page.waitForURL(/\/restock\?product=/);
-    const needsBatch = page.getByRole('region', { name: 'Restock suggestions' });
-    const card = needsBatch.getByRole('article', { name: 'Pickled Beets' });
-    await card.getByText(/sealed jars? left; you keep at least/).waitFor();
-    const jars = Number(await card.getByRole('spinbutton', { name: 'Jars of Pickled Beets to make' }).inputValue());
-    expect(jars).toBeGreaterThan(0);
-    await card.getByRole('button', { name: 'Add to the to-do list' }).click();
-    await card.getByRole('link', { name: 'Open the batch plan' }).click();
+      await page.goto(`${baseURL}/h/${hid}`);
+      const runningLow = page.getByRole('region', { name: 'Restock suggestions' });
+      await runningLow.getByRole('link', { name: /Pickled Beets/ }).click();
+      await page.waitForURL(/\/restock\?product=/);
+      const needsBatch = page.getByRole('region', { name: 'Restock suggestions' });
+      const card = needsBatch.getByRole('article', { name: 'Pickled Beets' });
+      await card.getByText(/sealed jars? left; you keep at least/).waitFor();
+      const jars = Number(await card.getByRole('spinbutton', { name: 'Jars of Pickled Beets to make' }).inputValue());
+      expect(jars).toBeGreaterThan(0);
+      await card.getByRole('button', { name: 'Add to the to-do list' }).click();
+      await card.getByRole('link', { name: 'Open the batch plan' }).click();
 
-    await page.waitForURL(/\/todo\?open=/);
-    const plan = page.getByRole('dialog', { name: new RegExp(`Make ${jars} pint jars? of Pickled Beets`) });
-    await plan.getByRole('heading', { name: 'Shopping list' }).waitFor();
-    await expect(plan.getByText(/minutes in a boiling-water canner at 2,350 ft/).count()).resolves.toBe(1);
-    await plan.getByText('Never reduce the vinegar, lemon juice or other acid in a tested recipe.').waitFor();
-    await screenshot(page, 'restock-batch-plan-desktop');
-    await plan.getByRole('link', { name: 'Record this batch' }).click();
+      await page.waitForURL(/\/todo\?open=/);
+      const plan = page.getByRole('dialog', { name: new RegExp(`Make ${jars} pint jars? of Pickled Beets`) });
+      await plan.getByRole('heading', { name: 'Shopping list' }).waitFor();
+      await expect(plan.getByText(/minutes in a boiling-water canner at 2,350 ft/).count()).resolves.toBe(1);
+      await plan.getByText('Never reduce the vinegar, lemon juice or other acid in a tested recipe.').waitFor();
+      await screenshot(page, 'restock-batch-plan-desktop');
+      await plan.getByRole('link', { name: 'Record this batch' }).click();
 
-    await page.waitForURL(/\/batches\/new\?/);
-    const url = new URL(page.url());
-    expect(Object.fromEntries(url.searchParams)).toMatchObject({ productId: before.productId, jars: String(jars), jarSize: 'pint' });
-    expect(url.searchParams.get('todoId')).toMatch(/^[0-9a-f-]{36}$/);
-    await page.getByRole('button', { name: 'Save the batch' }).click();
-    await page.getByText('Batch saved').waitFor();
+      await page.waitForURL(/\/batches\/new\?/);
+      const url = new URL(page.url());
+      expect(Object.fromEntries(url.searchParams)).toMatchObject({
+        productId: before.productId,
+        jars: String(jars),
+        jarSize: 'pint',
+      });
+      expect(url.searchParams.get('todoId')).toMatch(/^[0-9a-f-]{36}$/);
+      await page.getByRole('button', { name: 'Save the batch' }).click();
+      await page.getByText('Batch saved').waitFor();
 
-    await page.goto(`${baseURL}/h/${hid}/restock`);
-    const productCard = page.getByRole('region', { name: 'Every product' }).getByRole('article', { name: 'Pickled Beets' });
-    await productCard.getByText(`${before.sealedJars + jars} sealed jars`).waitFor();
-    await expect(page.getByRole('region', { name: 'Restock suggestions' }).getByRole('article', { name: 'Pickled Beets' }).count()).resolves.toBe(0);
-    expect((await forecastFor(page, hid, 'Pickled Beets')).sealedJars).toBe(before.sealedJars + jars);
-    await page.close();
-  });
+      await page.goto(`${baseURL}/h/${hid}/restock`);
+      const productCard = page
+        .getByRole('region', { name: 'Every product' })
+        .getByRole('article', { name: 'Pickled Beets' });
+      await productCard.getByText(`${before.sealedJars + jars} sealed jars`).waitFor();
+      await expect(
+        page
+          .getByRole('region', { name: 'Restock suggestions' })
+          .getByRole('article', { name: 'Pickled Beets' })
+          .count(),
+      ).resolves.toBe(0);
+      expect((await forecastFor(page, hid, 'Pickled Beets')).sealedJars).toBe(before.sealedJars + jars);
+      await page.close();
+    },
+  );
 
-  for (const [size, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
+  for (const [size, viewport] of [
+    ['phone', PHONE],
+    ['desktop', DESKTOP],
+  ] as const) {
     it(`shows Today, Restock and the to-do list on a ${size}`, { timeout: 120_000 }, async () => {
       const page = await browser.newPage({ viewport, ...(size === 'phone' ? { isMobile: true, hasTouch: true } : {}) });
       await signIn(page, baseURL, 'cook@larderly.test');
@@ -88,7 +106,10 @@ describe('from a restock suggestion to a recorded batch', () => {
         }
         window.scrollTo(0, 0);
       });
-      await page.getByRole('img', { name: /used per month/ }).first().waitFor();
+      await page
+        .getByRole('img', { name: /used per month/ })
+        .first()
+        .waitFor();
       await screenshot(page, `restock-${size}`);
       await page.screenshot({ path: `test-results/screenshots/restock-${size}-first-screen.png` });
       await page.goto(`${baseURL}/h/${hid}/todo`);
@@ -105,7 +126,16 @@ describe('from a restock suggestion to a recorded batch', () => {
     await page.goto(`${baseURL}/h/${hid}/todo`);
     const list = page.getByRole('list', { name: 'To-dos' });
     await list.waitFor();
-    const titles = () => list.getByRole('listitem').evaluateAll((items) => items.map((item) => item.querySelector('input[type=checkbox]')?.getAttribute('aria-label')?.replace(/^Done: /, '') ?? ''));
+    const titles = () =>
+      list.getByRole('listitem').evaluateAll((items) =>
+        items.map(
+          (item) =>
+            item
+              .querySelector('input[type=checkbox]')
+              ?.getAttribute('aria-label')
+              ?.replace(/^Done: /, '') ?? '',
+        ),
+      );
     const first = (await titles())[0];
     const handle = page.getByRole('button', { name: `Move: ${first}` });
     // dnd-kit measures the list after a pick-up; a key pressed before that is lost on a busy machine.
@@ -115,7 +145,9 @@ describe('from a restock suggestion to a recorded batch', () => {
     await page.keyboard.press('ArrowDown');
     await page.waitForTimeout(400);
     // The list shows the move at once; the reload must wait for the server to have it.
-    const saved = page.waitForResponse((response) => response.request().method() === 'PATCH' && /\/todos\//.test(response.url()));
+    const saved = page.waitForResponse(
+      (response) => response.request().method() === 'PATCH' && /\/todos\//.test(response.url()),
+    );
     await page.keyboard.press('Space');
     await expect.poll(async () => (await titles())[1], { timeout: 10_000 }).toBe(first);
     expect((await saved).status()).toBe(200);

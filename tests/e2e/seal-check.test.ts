@@ -22,7 +22,11 @@ describe('the seal check on a phone', () => {
     await panel.getByRole('button', { name: 'Jar by jar' }).click();
     const boxes = panel.getByRole('checkbox');
     await expect(boxes.count()).resolves.toBe(4);
-    const code = (await panel.locator('label').filter({ has: page.getByRole('checkbox') }).first().textContent())!.trim();
+    const code = (await panel
+      .locator('label')
+      .filter({ has: page.getByRole('checkbox') })
+      .first()
+      .textContent())!.trim();
     await boxes.first().check();
     // Within 24 hours a cook may reprocess; the fridge is the first choice.
     await panel.getByText(/Reprocess within 24 hours/).waitFor();

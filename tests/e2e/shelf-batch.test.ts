@@ -63,9 +63,15 @@ describe('recording a batch', () => {
 
   it('shows the plan on a phone too, pre-filled from the address', async () => {
     const { page, hid } = await signedInPage('cook@larderly.test', PHONE);
-    const recipes = (await (await page.request.get(`${baseURL}/api/households/${hid}/recipes`)).json()).recipes as { id: string; name: string; productId: string }[];
+    const recipes = (await (await page.request.get(`${baseURL}/api/households/${hid}/recipes`)).json()).recipes as {
+      id: string;
+      name: string;
+      productId: string;
+    }[];
     const beets = recipes.find((r) => r.name === 'Pickled beets')!;
-    await page.goto(`${baseURL}/h/${hid}/batches/new?productId=${beets.productId}&recipeId=${beets.id}&jars=7&jarSize=pint`);
+    await page.goto(
+      `${baseURL}/h/${hid}/batches/new?productId=${beets.productId}&recipeId=${beets.id}&jars=7&jarSize=pint`,
+    );
     // Pickled beets: 30 minutes at 0-1,000 ft, plus 5 at 2,350 ft (USDA Complete Guide, Guides 1 and 6).
     await page.getByText('Process 35 minutes at a full rolling boil').waitFor();
     await expect(page.getByLabel('Jars filled').inputValue()).resolves.toBe('7');

@@ -12,7 +12,9 @@ const { newPage } = browserForFile();
 async function decodeQrCodes(page: Page) {
   await page.evaluate(jsqrSource);
   return page.evaluate(async () => {
-    const decode = (window as unknown as { jsQR: (d: Uint8ClampedArray, w: number, h: number) => { data: string } | null }).jsQR;
+    const decode = (
+      window as unknown as { jsQR: (d: Uint8ClampedArray, w: number, h: number) => { data: string } | null }
+    ).jsQR;
     const images = [...document.querySelectorAll<HTMLImageElement>('img[alt^="QR code for jar"]')];
     const texts: (string | null)[] = [];
     for (const img of images) {
@@ -36,11 +38,18 @@ describe('label sheets', () => {
     const page = await newPage({ viewport: DESKTOP });
     await signIn(page, baseURL, 'cook@larderly.test');
     const hid = page.url().match(/\/h\/([0-9a-f-]{36})/)![1];
-    const jars = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; batchId: string; productName: string }[];
+    const jars = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as {
+      code: string;
+      batchId: string;
+      productName: string;
+    }[];
     const beets = jars.filter((j) => j.productName === 'Pickled Beets');
     // The batch with the most jars left, so the sheet shows a full row or two.
-    const batchId = [...new Set(beets.map((j) => j.batchId))].sort((a, b) => beets.filter((j) => j.batchId === b).length - beets.filter((j) => j.batchId === a).length)[0];
-    const batch = (await (await page.request.get(`${baseURL}/api/households/${hid}/batches/${batchId}`)).json()).batch as { jars: { code: string; state: string }[] };
+    const batchId = [...new Set(beets.map((j) => j.batchId))].sort(
+      (a, b) => beets.filter((j) => j.batchId === b).length - beets.filter((j) => j.batchId === a).length,
+    )[0];
+    const batch = (await (await page.request.get(`${baseURL}/api/households/${hid}/batches/${batchId}`)).json())
+      .batch as { jars: { code: string; state: string }[] };
     const onHand = batch.jars.filter((j) => j.state === 'sealed' || j.state === 'opened').map((j) => j.code);
 
     await page.goto(`${baseURL}/h/${hid}/batches/${batchId}`);
@@ -67,21 +76,30 @@ describe('labels for a phone to scan', () => {
   it('point their QR codes at the configured public origin, carry the best-quality date, and print US Letter text at 9 pt or more', async () => {
     const page = await newPage({ viewport: DESKTOP });
     // The server's answer when APP_ORIGIN is set (its API test checks that); here the sheet is printed from a local address.
-    await page.route('**/api/config', (route) => route.fulfill({ json: { publicOrigin: 'https://larder.example.test' } }));
+    await page.route('**/api/config', (route) =>
+      route.fulfill({ json: { publicOrigin: 'https://larder.example.test' } }),
+    );
     await signIn(page, baseURL, 'cook@larderly.test');
     const hid = page.url().match(/\/h\/([0-9a-f-]{36})/)![1];
-    const [jar] = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; batchId: string; bestBy: string }[];
+    const [jar] = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json())
+      .jars as { code: string; batchId: string; bestBy: string }[];
     await page.goto(`${baseURL}/h/${hid}/batches/${jar!.batchId}/labels?paper=letter`);
     await page.locator('img[alt^="QR code for jar"]').first().waitFor();
     const decoded = await decodeQrCodes(page);
     expect(decoded.length).toBeGreaterThan(0);
     for (const text of decoded) expect(text).toMatch(/^https:\/\/larder\.example\.test\/j\/[0-9A-Z]{6}$/);
     const label = page.locator(`li.jar-label[data-code="${jar!.code}"]`);
-    const bestBy = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' }).format(new Date(`${jar!.bestBy}T00:00:00Z`));
-    await expect(label.getByText(/^Best quality by /).textContent()).resolves.toMatch(new RegExp(`^Best quality by \\w{3}, ${bestBy}(, \\d{4})?$`));
+    const bestBy = new Intl.DateTimeFormat('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' }).format(
+      new Date(`${jar!.bestBy}T00:00:00Z`),
+    );
+    await expect(label.getByText(/^Best quality by /).textContent()).resolves.toMatch(
+      new RegExp(`^Best quality by \\w{3}, ${bestBy}(, \\d{4})?$`),
+    );
     await page.emulateMedia({ media: 'print' });
     // 9 pt is 12 CSS px; every line of text on a Letter label is at least that.
-    const sizes = await page.locator('li.jar-label span span, li.jar-label > span > span').evaluateAll((spans) => spans.map((s) => parseFloat(getComputedStyle(s).fontSize)));
+    const sizes = await page
+      .locator('li.jar-label span span, li.jar-label > span > span')
+      .evaluateAll((spans) => spans.map((s) => parseFloat(getComputedStyle(s).fontSize)));
     expect(sizes.length).toBeGreaterThan(0);
     expect(Math.min(...sizes)).toBeGreaterThanOrEqual(12);
     await screenshot(page, 'shelf-labels-letter-public-origin');
@@ -94,9 +112,12 @@ describe('a jar’s page', () => {
     const cook = await newPage({ viewport: DESKTOP });
     await signIn(cook, baseURL, 'cook@larderly.test');
     const hid = cook.url().match(/\/h\/([0-9a-f-]{36})/)![1];
-    const jar = ((await (await cook.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; productName: string }[]).find(
-      (j) => j.productName === 'Hot Pepper Jelly',
-    )!;
+    const jar = (
+      (await (await cook.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as {
+        code: string;
+        productName: string;
+      }[]
+    ).find((j) => j.productName === 'Hot Pepper Jelly')!;
     await cook.close();
 
     const page = await newPage({ viewport: PHONE, isMobile: true, hasTouch: true });
@@ -112,7 +133,10 @@ describe('a jar’s page', () => {
 
     await page.getByRole('button', { name: `Mark opened: jar ${jar.code}` }).click();
     await page.getByText('opened, in the fridge').first().waitFor();
-    await page.getByText(/use by/).first().waitFor();
+    await page
+      .getByText(/use by/)
+      .first()
+      .waitFor();
     await page.getByRole('button', { name: `Mark finished: jar ${jar.code}` }).waitFor();
     await page.close();
   }, 150_000);
@@ -121,7 +145,8 @@ describe('a jar’s page', () => {
     const page = await newPage({ viewport: PHONE });
     await signIn(page, baseURL, 'keeper@larderly.test');
     const hid = page.url().match(/\/h\/([0-9a-f-]{36})/)![1];
-    const [jar] = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json()).jars as { code: string; productName: string }[];
+    const [jar] = (await (await page.request.get(`${baseURL}/api/households/${hid}/jars?state=sealed`)).json())
+      .jars as { code: string; productName: string }[];
     await page.context().clearCookies();
     await signIn(page, baseURL, 'neighbor@larderly.test');
     await page.goto(`${baseURL}/j/${jar.code}`);

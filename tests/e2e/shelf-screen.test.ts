@@ -38,7 +38,9 @@ describe('the shelf screen', () => {
     await page.getByLabel('Kind').selectOption({ label: 'Every kind' });
     await page.getByLabel('Only jars past best quality').check();
     await expect(page.locator('tbody tr').count()).resolves.toBeGreaterThan(0);
-    expect(await page.locator('tbody tr').count()).toBe(await page.locator('tbody tr', { hasText: 'Past best quality' }).count());
+    expect(await page.locator('tbody tr').count()).toBe(
+      await page.locator('tbody tr', { hasText: 'Past best quality' }).count(),
+    );
     await screenshot(page, 'shelf-table-desktop');
     await page.close();
   }, 150_000);

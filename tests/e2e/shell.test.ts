@@ -15,7 +15,13 @@ async function shownHousehold(page: Page, name: RegExp, role: string) {
   const header = page.getByRole('banner');
   const switcher = header.getByRole('combobox', { name: 'Household' });
   await expect
-    .poll(async () => ((await switcher.count()) ? await switcher.evaluate((s: HTMLSelectElement) => s.selectedOptions[0]?.text ?? '') : await header.innerText()), { timeout: 15_000 })
+    .poll(
+      async () =>
+        (await switcher.count())
+          ? await switcher.evaluate((s: HTMLSelectElement) => s.selectedOptions[0]?.text ?? '')
+          : await header.innerText(),
+      { timeout: 15_000 },
+    )
     .toMatch(new RegExp(`${name.source}[\\s\\S]*${role}`, 'i'));
 }
 
@@ -45,7 +51,11 @@ describe('the app shell', () => {
     await screenshot(page, 'shell-desktop');
 
     const nav = page.getByRole('navigation', { name: 'Screens' }).first();
-    for (const [label, heading] of [['Shelf', 'Shelf'], ['Week', 'Week'], ['Household', 'Household']] as const) {
+    for (const [label, heading] of [
+      ['Shelf', 'Shelf'],
+      ['Week', 'Week'],
+      ['Household', 'Household'],
+    ] as const) {
       await nav.getByRole('link', { name: label }).click();
       await page.getByRole('heading', { level: 1, name: heading }).waitFor();
     }
@@ -75,7 +85,17 @@ describe('the app shell', () => {
 
   it('creates a new household through sign-up', async () => {
     const page = await browser.newPage({ viewport: PHONE });
-    await signUpInBrowser(page, { baseURL, standInsDir: inject('standInsDir') }, { name: 'Ines Okafor', email: `ines-${Date.now()}@example.test`, password: 'plum jam every winter', householdName: 'Okafor Kitchen' }, (sent) => screenshot(sent, 'sign-up-sent-phone'));
+    await signUpInBrowser(
+      page,
+      { baseURL, standInsDir: inject('standInsDir') },
+      {
+        name: 'Ines Okafor',
+        email: `ines-${Date.now()}@example.test`,
+        password: 'plum jam every winter',
+        householdName: 'Okafor Kitchen',
+      },
+      (sent) => screenshot(sent, 'sign-up-sent-phone'),
+    );
     await shownHousehold(page, /Okafor Kitchen/, 'keeper');
     await page.close();
   });

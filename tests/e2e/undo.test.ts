@@ -50,14 +50,20 @@ describe('one-tap actions can be undone', () => {
     await page.getByRole('button', { name: `Mark opened: jar ${jar.code}` }).focus();
     await page.keyboard.press('Enter');
     const toast = page.getByTestId('undo-toast');
-    await toast.getByText(new RegExp(`^Opened jar ${jar.code} of ${jar.productName}\\. It is in the fridge now; use by`)).waitFor();
+    await toast
+      .getByText(new RegExp(`^Opened jar ${jar.code} of ${jar.productName}\\. It is in the fridge now; use by`))
+      .waitFor();
     await screenshot(page, 'undo-jar-page-toast-phone');
     // The opened jar's buttons replaced the one pressed; Tab still reaches Undo, and Ctrl+Z works from the page.
-    await expect(toast.getByRole('button', { name: 'Undo' }).evaluate((b) => (b as HTMLButtonElement).tabIndex)).resolves.toBe(0);
+    await expect(
+      toast.getByRole('button', { name: 'Undo' }).evaluate((b) => (b as HTMLButtonElement).tabIndex),
+    ).resolves.toBe(0);
     await page.keyboard.press('Control+z');
     await toast.getByText(`Jar ${jar.code} is back on the shelf, sealed.`).waitFor();
     await page.getByRole('button', { name: `Mark opened: jar ${jar.code}` }).waitFor();
-    const history = (await getJson(page, `/households/${hid}/batches/${jar.batchId}`)).batch.history.filter((e: { jarCode: string }) => e.jarCode === jar.code);
+    const history = (await getJson(page, `/households/${hid}/batches/${jar.batchId}`)).batch.history.filter(
+      (e: { jarCode: string }) => e.jarCode === jar.code,
+    );
     expect(history.map((e: { kind: string }) => e.kind).slice(0, 2)).toEqual(['restored', 'opened']);
     await page.close();
   });
@@ -89,7 +95,9 @@ describe('one-tap actions can be undone', () => {
     await signIn(page, baseURL, 'helper@larderly.test');
     const hid = householdOf(page);
     await page.goto(`${baseURL}/h/${hid}/todo`);
-    const open = (await getJson(page, `/households/${hid}/todos?filter=all`)).todos.filter((t: { done: boolean }) => !t.done);
+    const open = (await getJson(page, `/households/${hid}/todos?filter=all`)).todos.filter(
+      (t: { done: boolean }) => !t.done,
+    );
     const todo = open[0];
     await page.getByRole('checkbox', { name: `Done: ${todo.title}` }).tap();
     const toast = page.getByTestId('undo-toast');

@@ -23,7 +23,8 @@ async function openEmptyWeek(page: Page) {
 }
 
 const day = (page: Page, weekday: string) => page.getByRole('region', { name: new RegExp(`^${weekday},`) });
-const slot = (page: Page, weekday: string, name: string) => day(page, weekday).getByRole('region', { name, exact: true });
+const slot = (page: Page, weekday: string, name: string) =>
+  day(page, weekday).getByRole('region', { name, exact: true });
 const card = (scope: Page | Locator, title: string) => scope.locator(`article[data-entry="${title}"]`);
 const liveRegion = (page: Page) => page.locator('[id^="DndLiveRegion"]');
 
@@ -82,7 +83,10 @@ describe('the week board', () => {
     await signIn(page, baseURL, 'cook@larderly.test');
     await page.goto(page.url().replace(/\/h\/([0-9a-f-]{36}).*/, '/h/$1/week'));
     await page.getByRole('heading', { name: 'On the shelf' }).waitFor();
-    await page.getByText(/^Open (a new jar|\d+ new jars) of/).first().waitFor();
+    await page
+      .getByText(/^Open (a new jar|\d+ new jars) of/)
+      .first()
+      .waitFor();
     await page.getByRole('note').first().waitFor();
     await screenshot(page, 'week-desktop');
     const url = page.url();
@@ -103,15 +107,25 @@ describe('the week board', () => {
     await openEmptyWeek(page);
     await addMeal(page, 'Harvest hash');
 
-    await mouseDrag(page, page.getByRole('button', { name: /^Harvest hash\s*serves/ }), slot(page, 'Wednesday', 'Lunch'));
+    await mouseDrag(
+      page,
+      page.getByRole('button', { name: /^Harvest hash\s*serves/ }),
+      slot(page, 'Wednesday', 'Lunch'),
+    );
     const planned = card(slot(page, 'Wednesday', 'Lunch'), 'Harvest hash');
     await planned.getByRole('button', { name: 'Remove Harvest hash from the plan' }).waitFor();
 
     await mouseDrag(page, page.getByRole('button', { name: /^Pickled Beets\s*\d/ }), planned);
     await planned.getByRole('button', { name: 'Unpair Pickled Beets from Harvest hash' }).waitFor();
 
-    await mouseDrag(page, planned.getByRole('button', { name: 'Move Harvest hash', exact: true }), slot(page, 'Thursday', 'Lunch'));
-    await card(slot(page, 'Thursday', 'Lunch'), 'Harvest hash').getByRole('button', { name: 'Remove Harvest hash from the plan' }).waitFor();
+    await mouseDrag(
+      page,
+      planned.getByRole('button', { name: 'Move Harvest hash', exact: true }),
+      slot(page, 'Thursday', 'Lunch'),
+    );
+    await card(slot(page, 'Thursday', 'Lunch'), 'Harvest hash')
+      .getByRole('button', { name: 'Remove Harvest hash from the plan' })
+      .waitFor();
     await expectPlannedOnThursday(page, 'Harvest hash', 'Pickled Beets');
     await screenshot(page, 'week-mouse-drag');
     await page.close();
@@ -142,7 +156,9 @@ describe('the week board', () => {
     await keyTo(page, 'ArrowRight', /over Thursday lunch/);
     await page.keyboard.press('Space');
     await expect(liveRegion(page).textContent()).resolves.toMatch(/Corn fritters was dropped on Thursday lunch/);
-    await card(slot(page, 'Thursday', 'Lunch'), 'Corn fritters').getByRole('button', { name: 'Remove Corn fritters from the plan' }).waitFor();
+    await card(slot(page, 'Thursday', 'Lunch'), 'Corn fritters')
+      .getByRole('button', { name: 'Remove Corn fritters from the plan' })
+      .waitFor();
     await expectPlannedOnThursday(page, 'Corn fritters', 'Green Tomato Chutney');
     await page.close();
   });

@@ -30,7 +30,9 @@ async function acceptTwoChutneyLunches(page: Page, name: string) {
   const proposed = page.getByRole('list', { name: 'Proposed meals' }).locator(':scope > li');
   await proposed.first().waitFor();
   await expect(proposed.first().textContent()).resolves.toMatch(/lunch/);
-  await expect(page.getByRole('list', { name: 'Proposed meals' }).textContent()).resolves.toMatch(/Uses the Green Tomato Chutney opened on [\w, ]+ before \w+/);
+  await expect(page.getByRole('list', { name: 'Proposed meals' }).textContent()).resolves.toMatch(
+    /Uses the Green Tomato Chutney opened on [\w, ]+ before \w+/,
+  );
 
   // Keep two that draw on the chutney, and leave the rest unticked.
   const rows = await proposed.all();
@@ -47,7 +49,9 @@ async function acceptTwoChutneyLunches(page: Page, name: string) {
   await screenshot(page, `week-proposal-${name}-proposed`);
   await page.getByRole('button', { name: 'Accept chosen (2)' }).click();
   await page.getByRole('status').filter({ hasText: 'Planned 2 proposed meals.' }).waitFor();
-  await expect.poll(async () => tbspOf(await page.getByTestId('week-waste').textContent()), { timeout: 30_000 }).toBeLessThan(before);
+  await expect
+    .poll(async () => tbspOf(await page.getByTestId('week-waste').textContent()), { timeout: 30_000 })
+    .toBeLessThan(before);
 
   // Each accepted meal sits in its slot, and its pairing says which jar it draws from.
   for (const meal of kept) {
@@ -55,8 +59,12 @@ async function acceptTwoChutneyLunches(page: Page, name: string) {
     const picker = page.getByRole('navigation', { name: 'Day of the week' });
     if (await picker.isVisible()) await picker.getByRole('button', { name: new RegExp(`^${weekday}`) }).click();
     const day = page.getByRole('region', { name: new RegExp(`^${weekday},`) });
-    const line = day.locator(`article[data-entry="${meal.title}"] li[data-pairing="Green Tomato Chutney"] [data-testid="allocation-line"]`);
-    await expect.poll(() => line.textContent(), { timeout: 30_000 }).toMatch(new RegExp(`(from|opens) jar ${meal.code}`));
+    const line = day.locator(
+      `article[data-entry="${meal.title}"] li[data-pairing="Green Tomato Chutney"] [data-testid="allocation-line"]`,
+    );
+    await expect
+      .poll(() => line.textContent(), { timeout: 30_000 })
+      .toMatch(new RegExp(`(from|opens) jar ${meal.code}`));
     await line.scrollIntoViewIfNeeded();
     await screenshot(page, `week-proposal-${name}-planned-${weekday.toLowerCase()}`);
   }
@@ -64,7 +72,9 @@ async function acceptTwoChutneyLunches(page: Page, name: string) {
   // Undo takes both back, and the figure returns to where it was.
   await page.getByRole('heading', { name: 'Plan from the shelf' }).scrollIntoViewIfNeeded();
   await page.getByRole('button', { name: 'Undo' }).click();
-  await expect.poll(async () => tbspOf(await page.getByTestId('week-waste').textContent()), { timeout: 30_000 }).toBe(before);
+  await expect
+    .poll(async () => tbspOf(await page.getByTestId('week-waste').textContent()), { timeout: 30_000 })
+    .toBe(before);
 }
 
 describe('planning lunches from the shelf', () => {

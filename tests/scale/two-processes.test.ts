@@ -273,7 +273,10 @@ describe('two app processes behind nginx', () => {
     );
     const weekday = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'].indexOf(parts.weekday!);
     const hour = Number(parts.hour);
-    expect((await call('PATCH', `/api/households/${hid}`, { cookie: keeper.cookie, json: { weekStartsOn: weekday } })).status).toBe(200);
+    expect(
+      (await call('PATCH', `/api/households/${hid}`, { cookie: keeper.cookie, json: { weekStartsOn: weekday } }))
+        .status,
+    ).toBe(200);
     for (const person of [keeper, cook]) {
       const saved = await call('PATCH', '/api/me/notifications', {
         cookie: person.cookie,
@@ -282,7 +285,13 @@ describe('two app processes behind nginx', () => {
       expect(saved.status).toBe(200);
     }
 
-    const boss = new PgBoss({ connectionString: database.url, schema: 'pgboss', max: 1, supervise: false, schedule: false });
+    const boss = new PgBoss({
+      connectionString: database.url,
+      schema: 'pgboss',
+      max: 1,
+      supervise: false,
+      schedule: false,
+    });
     const db = new pg.Client({ connectionString: database.url });
     await Promise.all([boss.start(), db.connect()]);
     const sweepsBy = (done: string) => apps.filter((a) => a.logs.some((l) => l.msg === done)).map((a) => a.name);
@@ -332,7 +341,8 @@ describe('two app processes behind nginx', () => {
         `SELECT u.email, count(*)::int AS sent FROM digest_deliveries d JOIN users u ON u.id = d.user_id
           WHERE d.email_sent GROUP BY u.email`,
       );
-      const sentTo = (rows: { email: string; sent: number }[], email: string) => rows.find((r) => r.email === email)?.sent ?? 0;
+      const sentTo = (rows: { email: string; sent: number }[], email: string) =>
+        rows.find((r) => r.email === email)?.sent ?? 0;
       for (const email of ['keeper@larderly.test', 'cook@larderly.test']) {
         const mail = standIns.mail.to(email);
         const digestMails = mail.filter((m) => m.subject.includes(': the week of '));

@@ -3,7 +3,8 @@ import pg from 'pg';
 
 export function adminUrl() {
   const url = process.env.LARDERLY_TEST_ADMIN_URL;
-  if (!url) throw new Error('Run the tests with `npm test`: it starts PostgreSQL and prepares the test template database.');
+  if (!url)
+    throw new Error('Run the tests with `npm test`: it starts PostgreSQL and prepares the test template database.');
   return url;
 }
 

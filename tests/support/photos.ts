@@ -20,11 +20,21 @@ export async function cameraPhoto(width: number, height: number, options: { gps?
     <rect y="${height * 0.8}" width="100%" height="${height * 0.05}" fill="#5b3a1e"/>
   </svg>`;
   // Grain made small and stretched, so it costs little to make and still defeats easy compression.
-  const grain = await sharp({ create: { width: Math.ceil(width / 4), height: Math.ceil(height / 4), channels: 3, background: '#808080', noise: { type: 'gaussian', mean: 128, sigma: 24 } } })
+  const grain = await sharp({
+    create: {
+      width: Math.ceil(width / 4),
+      height: Math.ceil(height / 4),
+      channels: 3,
+      background: '#808080',
+      noise: { type: 'gaussian', mean: 128, sigma: 24 },
+    },
+  })
     .resize(width, height, { kernel: 'nearest' })
     .png({ compressionLevel: 0 })
     .toBuffer();
-  let image = sharp(Buffer.from(shelf)).composite([{ input: grain, blend: 'soft-light' }]).jpeg({ quality: 92 });
+  let image = sharp(Buffer.from(shelf))
+    .composite([{ input: grain, blend: 'soft-light' }])
+    .jpeg({ quality: 92 });
   if (options.gps) {
     image = image.withExif({
       IFD0: { Make: 'Larderly test camera', ImageDescription: 'Calloway Hollow pantry shelf' },
@@ -37,7 +47,10 @@ export async function cameraPhoto(width: number, height: number, options: { gps?
 
 /** The EXIF GPS IFD pointer (tag 0x8825) in either byte order: present when a file carries a GPS block. */
 export function hasGpsBlock(exif: Buffer | undefined) {
-  return Boolean(exif && (exif.includes(Buffer.from([0x88, 0x25, 0x00, 0x04])) || exif.includes(Buffer.from([0x25, 0x88, 0x04, 0x00]))));
+  return Boolean(
+    exif &&
+    (exif.includes(Buffer.from([0x88, 0x25, 0x00, 0x04])) || exif.includes(Buffer.from([0x25, 0x88, 0x04, 0x00]))),
+  );
 }
 
 /**
@@ -59,14 +72,24 @@ export function pixelFloodPng(width: number, height: number) {
   header.set([1, 0, 0, 0, 0], 8); // bit depth 1, greyscale, deflate, no filter method, no interlace
   const row = Math.ceil(width / 8) + 1; // a filter byte, then the packed bits
   const pixels = deflateSync(Buffer.alloc(row * height), { level: 9 });
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', header), chunk('IDAT', pixels), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', header),
+    chunk('IDAT', pixels),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 /** The keys in the test run's photo bucket under a household, read with the app's own S3 settings. */
 export async function storedPhotoKeys(householdId: string) {
   const { s3 } = loadConfig({ ...process.env });
   if (!s3) throw new Error('The photo tests need the object store `npm test` starts (S3_BUCKET is not set).');
-  const client = new S3Client({ endpoint: s3.endpoint, region: s3.region, forcePathStyle: s3.forcePathStyle, credentials: s3.credentials });
+  const client = new S3Client({
+    endpoint: s3.endpoint,
+    region: s3.region,
+    forcePathStyle: s3.forcePathStyle,
+    credentials: s3.credentials,
+  });
   const listed = await client.send(new ListObjectsV2Command({ Bucket: s3.bucket, Prefix: `${householdId}/` }));
   return (listed.Contents ?? []).map((object) => object.Key!).sort();
 }

@@ -10,6 +10,13 @@ export function browserPushKeys() {
   return {
     keys: { p256dh: ecdh.getPublicKey('base64url'), auth },
     /** Decrypts a caught push as the browser would (RFC 8291, aes128gcm), and reads its JSON. */
-    read: (push: CaughtPush) => JSON.parse(decrypt(Buffer.from(push.body, 'base64'), { version: 'aes128gcm', privateKey: ecdh, authSecret: auth }).toString('utf8')),
+    read: (push: CaughtPush) =>
+      JSON.parse(
+        decrypt(Buffer.from(push.body, 'base64'), {
+          version: 'aes128gcm',
+          privateKey: ecdh,
+          authSecret: auth,
+        }).toString('utf8'),
+      ),
   };
 }

@@ -6,7 +6,15 @@ const code = () => randomBytes(6).toString('hex').toUpperCase().slice(0, 10);
 
 export function addProduct(
   householdId: string,
-  fields: { name: string; kind?: ProductKind; favourite?: boolean; minJars?: number; harvestMonths?: number[]; jarSize?: JarSize; useWithinDays?: number },
+  fields: {
+    name: string;
+    kind?: ProductKind;
+    favourite?: boolean;
+    minJars?: number;
+    harvestMonths?: number[];
+    jarSize?: JarSize;
+    useWithinDays?: number;
+  },
 ) {
   return Product.create({ householdId, kind: 'fruit-butter', ...fields });
 }
@@ -21,7 +29,10 @@ interface JarsWanted {
 }
 
 /** One batch of the product's jar size holding every jar asked for, in its state. */
-export async function addJars(product: Product, { sealed = 0, opened = [], finishedOn = [], cannedOn = '2026-09-01' }: JarsWanted) {
+export async function addJars(
+  product: Product,
+  { sealed = 0, opened = [], finishedOn = [], cannedOn = '2026-09-01' }: JarsWanted,
+) {
   const capacity = jarCapacityTbsp(product.jarSize);
   const total = sealed + opened.length + finishedOn.length;
   const batch = await Batch.create({
@@ -35,19 +46,50 @@ export async function addJars(product: Product, { sealed = 0, opened = [], finis
     altitudeFt: 2350,
     minutes: 10,
   });
-  const base = { householdId: product.householdId, batchId: batch.id, productId: product.id, capacityTbsp: capacity, bestBy: addMonths(cannedOn, 12) };
+  const base = {
+    householdId: product.householdId,
+    batchId: batch.id,
+    productId: product.id,
+    capacityTbsp: capacity,
+    bestBy: addMonths(cannedOn, 12),
+  };
   return Jar.bulkCreate([
-    ...Array.from({ length: sealed }, () => ({ ...base, code: code(), state: 'sealed' as const, remainingTbsp: capacity })),
+    ...Array.from({ length: sealed }, () => ({
+      ...base,
+      code: code(),
+      state: 'sealed' as const,
+      remainingTbsp: capacity,
+    })),
     ...opened.map((jar) => ({ ...base, code: code(), state: 'opened' as const, ...jar })),
-    ...finishedOn.map((day) => ({ ...base, code: code(), state: 'finished' as const, remainingTbsp: 0, finishedOn: day })),
+    ...finishedOn.map((day) => ({
+      ...base,
+      code: code(),
+      state: 'finished' as const,
+      remainingTbsp: 0,
+      finishedOn: day,
+    })),
   ]);
 }
 
 /** A planned meal on `date` paired with the product: tbspPerServing x servings tablespoons. */
-export async function planPortion(product: Product, date: string, { tbspPerServing, servings, slot = 'dinner' as const, title = 'Supper' }: { tbspPerServing: number; servings: number; slot?: 'breakfast' | 'lunch' | 'dinner' | 'snack'; title?: string }) {
+export async function planPortion(
+  product: Product,
+  date: string,
+  {
+    tbspPerServing,
+    servings,
+    slot = 'dinner' as const,
+    title = 'Supper',
+  }: { tbspPerServing: number; servings: number; slot?: 'breakfast' | 'lunch' | 'dinner' | 'snack'; title?: string },
+) {
   const position = await PlanEntry.count({ where: { householdId: product.householdId, date, slot } });
   const entry = await PlanEntry.create({ householdId: product.householdId, date, slot, position, title, servings });
-  await Pairing.create({ householdId: product.householdId, planEntryId: entry.id, productId: product.id, tbspPerServing });
+  await Pairing.create({
+    householdId: product.householdId,
+    planEntryId: entry.id,
+    productId: product.id,
+    tbspPerServing,
+  });
   return entry;
 }
 

@@ -27,13 +27,21 @@ export async function lookUpIds(ctx: DemoApp): Promise<Ids> {
     jarId: await one(`SELECT id AS v FROM jars WHERE household_id = :hid AND state = 'sealed' ORDER BY code LIMIT 1`),
     jarCode: await one(`SELECT code AS v FROM jars WHERE household_id = :hid ORDER BY code LIMIT 1`),
     mealId: await one(`SELECT id AS v FROM meals WHERE household_id = :hid ORDER BY name LIMIT 1`),
-    planEntryId: await one(`SELECT id AS v FROM plan_entries WHERE household_id = :hid ORDER BY date, slot, position LIMIT 1`),
-    pairingId: await one(`SELECT p.id AS v FROM pairings p JOIN plan_entries e ON e.id = p.plan_entry_id WHERE p.household_id = :hid ORDER BY e.date DESC LIMIT 1`),
+    planEntryId: await one(
+      `SELECT id AS v FROM plan_entries WHERE household_id = :hid ORDER BY date, slot, position LIMIT 1`,
+    ),
+    pairingId: await one(
+      `SELECT p.id AS v FROM pairings p JOIN plan_entries e ON e.id = p.plan_entry_id WHERE p.household_id = :hid ORDER BY e.date DESC LIMIT 1`,
+    ),
     todoId: await one(`SELECT id AS v FROM todos WHERE household_id = :hid ORDER BY position LIMIT 1`),
     invitationId: invited!.id,
     helperId: await one(`SELECT id AS v FROM users WHERE email = 'helper@larderly.test'`),
-    planDate: await one(`SELECT to_char(date, 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid ORDER BY date DESC LIMIT 1`),
-    weekStart: await one(`SELECT to_char(date_trunc('week', min(date)), 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid`),
+    planDate: await one(
+      `SELECT to_char(date, 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid ORDER BY date DESC LIMIT 1`,
+    ),
+    weekStart: await one(
+      `SELECT to_char(date_trunc('week', min(date)), 'YYYY-MM-DD') AS v FROM plan_entries WHERE household_id = :hid`,
+    ),
   };
 }
 
@@ -42,7 +50,9 @@ export function resolvePath(route: RouteInfo, ids: Ids): string {
     const segment = route.path.slice(0, offset).split('/').filter(Boolean).at(-1);
     const source = PARAMS[`${segment}/:${name}`] ?? PARAMS[name];
     if (source === undefined) {
-      throw new Error(`${route.method} ${route.path}: no real value for the path parameter :${name}. Add it to PARAMS in authorization-matrix.table.ts.`);
+      throw new Error(
+        `${route.method} ${route.path}: no real value for the path parameter :${name}. Add it to PARAMS in authorization-matrix.table.ts.`,
+      );
     }
     return encodeURIComponent(typeof source === 'string' ? ids[source] : source.literal);
   });

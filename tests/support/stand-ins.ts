@@ -9,13 +9,25 @@ import { freePort } from './ports';
 export async function startStandIns(dir?: string) {
   const { certFile, keyFile } = ensureCertificate(path.join(os.tmpdir(), 'larderly-test-push-certificate'));
   const mail = await startMailCatcher({ port: await freePort(), dir: dir && path.join(dir, 'mail') });
-  const push = await startPushEndpoint({ certFile, keyFile, port: await freePort(), dir: dir && path.join(dir, 'push') });
+  const push = await startPushEndpoint({
+    certFile,
+    keyFile,
+    port: await freePort(),
+    dir: dir && path.join(dir, 'push'),
+  });
   return {
     mail,
     push,
     certFile,
     /** what the app needs to send through them */
-    env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(mail.port), SMTP_SECURE: 'false', SMTP_FROM: 'Larderly <reminders@larderly.test>', PUSH_CA_FILE: certFile, PUSH_LOCAL_ORIGIN: push.origin },
+    env: {
+      SMTP_HOST: '127.0.0.1',
+      SMTP_PORT: String(mail.port),
+      SMTP_SECURE: 'false',
+      SMTP_FROM: 'Larderly <reminders@larderly.test>',
+      PUSH_CA_FILE: certFile,
+      PUSH_LOCAL_ORIGIN: push.origin,
+    },
     close: () => Promise.all([mail.close(), push.close()]),
   };
 }

@@ -5,7 +5,14 @@ import { Batch, Jar, Product, Recipe } from '../../server/db/models';
 /** A product of our own with one batch of sealed jars, made straight through the models. */
 export async function productWithJars(
   householdId: string,
-  { name, kind = 'relish', heat = 0, jars = 1, jarSize = 'half-pint', cannedOn = '2026-08-20' }: { name: string; kind?: ProductKind; heat?: number; jars?: number; jarSize?: JarSize; cannedOn?: string },
+  {
+    name,
+    kind = 'relish',
+    heat = 0,
+    jars = 1,
+    jarSize = 'half-pint',
+    cannedOn = '2026-08-20',
+  }: { name: string; kind?: ProductKind; heat?: number; jars?: number; jarSize?: JarSize; cannedOn?: string },
 ) {
   const product = await Product.create({ householdId, name, kind, heat });
   const batch = await Batch.create({
@@ -36,7 +43,12 @@ export async function productWithJars(
 }
 
 /** A recipe card with the ingredient lines a diet check reads; no processing numbers are checked here. */
-export function recipeFor(householdId: string, productId: string, name: string, ingredients: { name: string; role: 'produce' | 'acid' | 'sweetener' | 'spice' | 'other' }[]) {
+export function recipeFor(
+  householdId: string,
+  productId: string,
+  name: string,
+  ingredients: { name: string; role: 'produce' | 'acid' | 'sweetener' | 'spice' | 'other' }[],
+) {
   return Recipe.create({
     householdId,
     productId,

@@ -13,7 +13,12 @@ const jar = (overrides: Partial<AllocationJar> & Pick<AllocationJar, 'id'>): All
   useWithinDays: 21,
   ...overrides,
 });
-const portion = (id: string, date: string, tbsp: number, productId = 'pear-butter'): PlannedPortion => ({ id, date, productId, tbsp });
+const portion = (id: string, date: string, tbsp: number, productId = 'pear-butter'): PlannedPortion => ({
+  id,
+  date,
+  productId,
+  tbsp,
+});
 
 describe('allocateWeek (worked by hand from the contract)', () => {
   it('draws from the opened jar first, then opens the sealed jar with the earliest best-by', () => {
@@ -89,7 +94,9 @@ describe('allocateWeek (worked by hand from the contract)', () => {
       { portionId: 'p1', jarId: 'A', tbsp: 2 },
       { portionId: 'p2', jarId: 'B', tbsp: 2 },
     ]);
-    expect(result.warnings).toEqual([{ kind: 'will-expire', productId: 'pear-butter', jarId: 'A', date: '2025-06-05', tbsp: 8 }]);
+    expect(result.warnings).toEqual([
+      { kind: 'will-expire', productId: 'pear-butter', jarId: 'A', date: '2025-06-05', tbsp: 8 },
+    ]);
   });
 
   it('warns about a jar the plan opens when its use-by falls before the last planned date', () => {
@@ -103,7 +110,9 @@ describe('allocateWeek (worked by hand from the contract)', () => {
       { jarId: 'J1', date: today },
       { jarId: 'J2', date: '2025-06-09' },
     ]);
-    expect(result.warnings).toEqual([{ kind: 'will-expire', productId: 'pear-butter', jarId: 'J1', date: '2025-06-04', tbsp: 15 }]);
+    expect(result.warnings).toEqual([
+      { kind: 'will-expire', productId: 'pear-butter', jarId: 'J1', date: '2025-06-04', tbsp: 15 },
+    ]);
   });
 
   it('includes a use-by on today and on the last planned date, but not after it', () => {
@@ -116,7 +125,9 @@ describe('allocateWeek (worked by hand from the contract)', () => {
       ],
       portions: [portion('p1', '2025-06-05', 0, 'courgette-relish')],
     });
-    expect(result.warnings.map((warning) => [warning.kind, 'jarId' in warning ? warning.jarId : null, warning.date])).toEqual([
+    expect(
+      result.warnings.map((warning) => [warning.kind, 'jarId' in warning ? warning.jarId : null, warning.date]),
+    ).toEqual([
       ['will-expire', 'ends-today', '2025-06-02'],
       ['will-expire', 'ends-last-day', '2025-06-05'],
     ]);
@@ -132,7 +143,9 @@ describe('allocateWeek (worked by hand from the contract)', () => {
       { portionId: 'p1', jarId: 'A', tbsp: 4 },
       { portionId: 'p1', jarId: null, tbsp: 6 },
     ]);
-    expect(result.warnings).toEqual([{ kind: 'short', productId: 'pear-butter', date: '2025-06-03', tbsp: 6, portionId: 'p1' }]);
+    expect(result.warnings).toEqual([
+      { kind: 'short', productId: 'pear-butter', date: '2025-06-03', tbsp: 6, portionId: 'p1' },
+    ]);
   });
 
   it('skips empty jars and jars already finished or discarded', () => {
@@ -151,10 +164,20 @@ describe('allocateWeek (worked by hand from the contract)', () => {
 
 describe('allocateWeek refuses malformed input with a RangeError', () => {
   it.each<[string, AllocationJar[], PlannedPortion[], RegExp]>([
-    ['an opened jar without openedOn', [jar({ id: 'A', state: 'opened' })], [], /jars\[0\] is opened but has no openedOn date/],
+    [
+      'an opened jar without openedOn',
+      [jar({ id: 'A', state: 'opened' })],
+      [],
+      /jars\[0\] is opened but has no openedOn date/,
+    ],
     ['more left than the jar holds', [jar({ id: 'A', remainingTbsp: 20 })], [], /more than the jar holds/],
     ['a part day of use-within', [jar({ id: 'A', useWithinDays: 1.5 })], [], /useWithinDays must be a whole number/],
-    ['an impossible best-by', [jar({ id: 'A', bestBy: '2025-02-30' })], [], /bestBy 2025-02-30 is not a real calendar date/],
+    [
+      'an impossible best-by',
+      [jar({ id: 'A', bestBy: '2025-02-30' })],
+      [],
+      /bestBy 2025-02-30 is not a real calendar date/,
+    ],
     ['an unknown state', [jar({ id: 'A', state: 'cracked' as never })], [], /state must be one of/],
     ['the same jar twice', [jar({ id: 'A' }), jar({ id: 'A' })], [], /jar id A appears more than once/],
     ['a negative portion', [], [portion('p1', today, -2)], /portions\[0\].tbsp must not be negative/],
@@ -165,7 +188,9 @@ describe('allocateWeek refuses malformed input with a RangeError', () => {
   });
 
   it('an impossible today', () => {
-    expect(() => allocateWeek({ today: '2025-6-2', jars: [], portions: [] })).toThrow(/today must be a date written YYYY-MM-DD/);
+    expect(() => allocateWeek({ today: '2025-6-2', jars: [], portions: [] })).toThrow(
+      /today must be a date written YYYY-MM-DD/,
+    );
   });
 });
 
@@ -252,7 +277,9 @@ describe('allocateWeek properties (fast-check)', () => {
           const total = mine.reduce((sum, assignment) => sum + assignment.tbsp, 0);
           expect(total).toBeCloseTo(planned.date >= today ? planned.tbsp : 0, 9);
           const short = mine.filter((assignment) => assignment.jarId === null).reduce((sum, a) => sum + a.tbsp, 0);
-          const warned = warnings.filter((w) => w.kind === 'short' && w.portionId === planned.id).reduce((sum, w) => sum + w.tbsp, 0);
+          const warned = warnings
+            .filter((w) => w.kind === 'short' && w.portionId === planned.id)
+            .reduce((sum, w) => sum + w.tbsp, 0);
           expect(warned).toBeCloseTo(short, 9);
         }
       }),

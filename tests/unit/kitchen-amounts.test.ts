@@ -46,10 +46,14 @@ describe('formatKitchenAmount', () => {
 
   it('never shows a positive amount as 0, for any amount and unit (fast-check)', () => {
     fc.assert(
-      fc.property(fc.double({ min: Number.MIN_VALUE, max: 1e4, noNaN: true }), fc.constantFrom(...INGREDIENT_UNITS), (value, unit) => {
-        expect(roundKitchenAmount(value, unit)).toBeGreaterThan(0);
-        expect(formatKitchenAmount(value, unit)).not.toMatch(/^0( |$)/);
-      }),
+      fc.property(
+        fc.double({ min: Number.MIN_VALUE, max: 1e4, noNaN: true }),
+        fc.constantFrom(...INGREDIENT_UNITS),
+        (value, unit) => {
+          expect(roundKitchenAmount(value, unit)).toBeGreaterThan(0);
+          expect(formatKitchenAmount(value, unit)).not.toMatch(/^0( |$)/);
+        },
+      ),
     );
   });
 

@@ -25,7 +25,9 @@ describe('paths', () => {
     expect(paths.todo(hid, null)).toBe(`/h/${hid}/todo`);
     expect(paths.batch(hid, 'b1', { saved: true, todoId: null })).toBe(`/h/${hid}/batches/b1?saved=1`);
     expect(paths.signIn()).toBe('/sign-in');
-    expect(paths.signIn(`/h/${hid}/week?start=2026-12-07`)).toBe(`/sign-in?next=%2Fh%2F${hid}%2Fweek%3Fstart%3D2026-12-07`);
+    expect(paths.signIn(`/h/${hid}/week?start=2026-12-07`)).toBe(
+      `/sign-in?next=%2Fh%2F${hid}%2Fweek%3Fstart%3D2026-12-07`,
+    );
     expect(paths.setup(hid, `/h/${hid}/shelf`)).toBe(`/h/${hid}/setup?back=%2Fh%2F${hid}%2Fshelf`);
     expect(paths.screen(hid, '')).toBe(`/h/${hid}`);
     expect(paths.screen(hid, 'fridge')).toBe(`/h/${hid}/fridge`);

@@ -76,28 +76,36 @@ describe(`boiling-water canner altitude additions (${USDA})`, () => {
 });
 
 describe(`pressure canner pounds per square inch (${USDA})`, () => {
-  it.each(PRESSURE_ROWS)(`at %d ft: dial gauge %d psi, weighted gauge %d psi (${USDA})`, (altitudeFt, dialPsi, weightedPsi) => {
-    const lowAcid = { altitudeFt, jarSize: 'quart' as JarSize, baseMinutes: BASE_MINUTES };
-    expect(processingPlan({ method: 'pressure-dial', ...lowAcid })).toMatchObject({
-      allowed: true,
-      minutes: BASE_MINUTES,
-      pressurePsi: dialPsi,
-    });
-    expect(processingPlan({ method: 'pressure-weighted', ...lowAcid })).toMatchObject({
-      allowed: true,
-      minutes: BASE_MINUTES,
-      pressurePsi: weightedPsi,
-    });
-  });
+  it.each(PRESSURE_ROWS)(
+    `at %d ft: dial gauge %d psi, weighted gauge %d psi (${USDA})`,
+    (altitudeFt, dialPsi, weightedPsi) => {
+      const lowAcid = { altitudeFt, jarSize: 'quart' as JarSize, baseMinutes: BASE_MINUTES };
+      expect(processingPlan({ method: 'pressure-dial', ...lowAcid })).toMatchObject({
+        allowed: true,
+        minutes: BASE_MINUTES,
+        pressurePsi: dialPsi,
+      });
+      expect(processingPlan({ method: 'pressure-weighted', ...lowAcid })).toMatchObject({
+        allowed: true,
+        minutes: BASE_MINUTES,
+        pressurePsi: weightedPsi,
+      });
+    },
+  );
 
-  it.each<Method>(['pressure-dial', 'pressure-weighted'])(`%s refuses at 10,001 ft (${USDA}), keeping the minutes`, (method) => {
-    const plan = processingPlan({ method, altitudeFt: 10_001, jarSize: 'pint', baseMinutes: BASE_MINUTES });
-    expect(plan).toMatchObject({ allowed: false, minutes: BASE_MINUTES, pressurePsi: null });
-    expect(plan.reasons).toHaveLength(1);
-  });
+  it.each<Method>(['pressure-dial', 'pressure-weighted'])(
+    `%s refuses at 10,001 ft (${USDA}), keeping the minutes`,
+    (method) => {
+      const plan = processingPlan({ method, altitudeFt: 10_001, jarSize: 'pint', baseMinutes: BASE_MINUTES });
+      expect(plan).toMatchObject({ allowed: false, minutes: BASE_MINUTES, pressurePsi: null });
+      expect(plan.reasons).toHaveLength(1);
+    },
+  );
 
   it('is allowed for low-acid food with no pH given: that is what a pressure canner is for (US FDA, 21 CFR Part 114)', () => {
-    expect(processingPlan({ method: 'pressure-dial', altitudeFt: 500, jarSize: 'pint', baseMinutes: 25, ph: 6.2 }).allowed).toBe(true);
+    expect(
+      processingPlan({ method: 'pressure-dial', altitudeFt: 500, jarSize: 'pint', baseMinutes: 25, ph: 6.2 }).allowed,
+    ).toBe(true);
   });
 });
 
@@ -111,14 +119,24 @@ describe('acid foods only in boiling water and steam (US FDA, 21 CFR Part 114: a
   });
 
   it('refuses when neither pH nor acidified says the food is acid', () => {
-    const input = { method: 'boiling-water' as Method, altitudeFt: 0, jarSize: 'pint' as JarSize, baseMinutes: BASE_MINUTES };
+    const input = {
+      method: 'boiling-water' as Method,
+      altitudeFt: 0,
+      jarSize: 'pint' as JarSize,
+      baseMinutes: BASE_MINUTES,
+    };
     expect(processingPlan(input).allowed).toBe(false);
     expect(processingPlan({ ...input, acidified: false }).allowed).toBe(false);
     expect(processingPlan({ ...input, acidified: true }).allowed).toBe(true);
   });
 
   it('lets a measured pH win over the acidified flag', () => {
-    const input = { method: 'boiling-water' as Method, altitudeFt: 0, jarSize: 'pint' as JarSize, baseMinutes: BASE_MINUTES };
+    const input = {
+      method: 'boiling-water' as Method,
+      altitudeFt: 0,
+      jarSize: 'pint' as JarSize,
+      baseMinutes: BASE_MINUTES,
+    };
     expect(processingPlan({ ...input, ph: 5.0, acidified: true }).allowed).toBe(false);
     expect(processingPlan({ ...input, ph: 3.5, acidified: false }).allowed).toBe(true);
   });
@@ -126,7 +144,14 @@ describe('acid foods only in boiling water and steam (US FDA, 21 CFR Part 114: a
 
 describe(`atmospheric steam canner limits (${STEAM})`, () => {
   const steam = (overrides: Partial<ProcessingPlanInput>) =>
-    processingPlan({ method: 'atmospheric-steam', altitudeFt: 0, jarSize: 'pint', baseMinutes: BASE_MINUTES, acidified: true, ...overrides });
+    processingPlan({
+      method: 'atmospheric-steam',
+      altitudeFt: 0,
+      jarSize: 'pint',
+      baseMinutes: BASE_MINUTES,
+      acidified: true,
+      ...overrides,
+    });
 
   it(`uses the boiling-water time with its altitude adjustment (${STEAM}; additions: ${USDA})`, () => {
     for (const [altitudeFt, addMinutes] of BOILING_WATER_ROWS) {
@@ -169,17 +194,32 @@ describe("a recipe's own altitude table (worked by hand from the contract)", () 
   ];
 
   it('wins over the general table', () => {
-    const plan = processingPlan({ method: 'boiling-water', altitudeFt: 5_000, ...acidPint, altitudeTable: recipeTable });
+    const plan = processingPlan({
+      method: 'boiling-water',
+      altitudeFt: 5_000,
+      ...acidPint,
+      altitudeTable: recipeTable,
+    });
     expect(plan).toMatchObject({ allowed: true, minutes: BASE_MINUTES + 5 });
   });
 
   it('is read in altitude order whatever order its rows come in', () => {
-    const plan = processingPlan({ method: 'boiling-water', altitudeFt: 500, ...acidPint, altitudeTable: [...recipeTable].reverse() });
+    const plan = processingPlan({
+      method: 'boiling-water',
+      altitudeFt: 500,
+      ...acidPint,
+      altitudeTable: [...recipeTable].reverse(),
+    });
     expect(plan.minutes).toBe(BASE_MINUTES);
   });
 
   it('refuses where the table does not reach the altitude, with no minutes', () => {
-    const plan = processingPlan({ method: 'boiling-water', altitudeFt: 6_001, ...acidPint, altitudeTable: recipeTable });
+    const plan = processingPlan({
+      method: 'boiling-water',
+      altitudeFt: 6_001,
+      ...acidPint,
+      altitudeTable: recipeTable,
+    });
     expect(plan).toMatchObject({ allowed: false, minutes: null });
     expect(plan.reasons.join(' ')).toMatch(/stops at 6,000 ft/);
   });
@@ -196,14 +236,23 @@ describe('cautions and after-processing steps', () => {
 
   it('the usual cautions: tested recipes, never reduce acid, altitude, seals, when in doubt throw it out, defer to extension services', () => {
     const text = SAFETY_CAUTIONS.join(' ');
-    for (const words of [/tested recipes/, /Never reduce/, /altitude/, /seal/, /When in doubt, throw it out/, /extension service/]) {
+    for (const words of [
+      /tested recipes/,
+      /Never reduce/,
+      /altitude/,
+      /seal/,
+      /When in doubt, throw it out/,
+      /extension service/,
+    ]) {
       expect(text).toMatch(words);
     }
   });
 
   // After processing: common practice, from memory (REFERENCE.md); the tested recipe's own steps win.
   it('boiling water waits 5 minutes with the lid off before lifting jars (common practice, from memory)', () => {
-    expect(processingPlan({ method: 'boiling-water', altitudeFt: 0, ...acidPint }).afterProcessing.join(' ')).toMatch(/5 minutes/);
+    expect(processingPlan({ method: 'boiling-water', altitudeFt: 0, ...acidPint }).afterProcessing.join(' ')).toMatch(
+      /5 minutes/,
+    );
   });
 
   it('pressure canners depressurise by themselves, then wait 10 minutes (common practice, from memory)', () => {
@@ -214,13 +263,21 @@ describe('cautions and after-processing steps', () => {
 
   it('every method ends with 12-24 hours of cooling and a seal test (common practice, from memory)', () => {
     for (const method of PROCESSING_METHODS) {
-      expect(processingPlan({ method, altitudeFt: 0, ...acidPint }).afterProcessing.join(' ')).toMatch(/12 to 24 hours.*seal/);
+      expect(processingPlan({ method, altitudeFt: 0, ...acidPint }).afterProcessing.join(' ')).toMatch(
+        /12 to 24 hours.*seal/,
+      );
     }
   });
 });
 
 describe('processingPlan refuses malformed input with a RangeError', () => {
-  const valid: ProcessingPlanInput = { method: 'boiling-water', altitudeFt: 0, jarSize: 'pint', baseMinutes: 10, acidified: true };
+  const valid: ProcessingPlanInput = {
+    method: 'boiling-water',
+    altitudeFt: 0,
+    jarSize: 'pint',
+    baseMinutes: 10,
+    acidified: true,
+  };
   it.each<[string, Partial<Record<keyof ProcessingPlanInput, unknown>>, RegExp]>([
     ['an unknown method', { method: 'oven' }, /method must be one of/],
     ['a NaN altitude', { altitudeFt: Number.NaN }, /altitudeFt must be a finite number/],
@@ -229,7 +286,11 @@ describe('processingPlan refuses malformed input with a RangeError', () => {
     ['a pH above 14', { ph: 14.5 }, /ph must be between 0 and 14/],
     ['a pH below 0', { ph: -1 }, /ph must be between 0 and 14/],
     ['an acidified flag that is not true or false', { acidified: 'yes' }, /acidified must be true or false/],
-    ['a recipe table row with a negative addition', { altitudeTable: [{ upToFt: 1000, addMinutes: -5 }] }, /addMinutes must not be negative/],
+    [
+      'a recipe table row with a negative addition',
+      { altitudeTable: [{ upToFt: 1000, addMinutes: -5 }] },
+      /addMinutes must not be negative/,
+    ],
   ])('%s', (_, overrides, message) => {
     expect(() => processingPlan({ ...valid, ...overrides } as ProcessingPlanInput)).toThrow(RangeError);
     expect(() => processingPlan({ ...valid, ...overrides } as ProcessingPlanInput)).toThrow(message);

@@ -14,7 +14,13 @@ import {
 // Our own household's courgette relish in half-pints (16 tbsp, common practice); expected values worked by hand
 // from the contract.
 const today = '2025-03-10';
-const relish: RestockProduct = { id: 'relish', favourite: true, minJars: 2, harvestMonths: [8, 9], jarSize: 'half-pint' };
+const relish: RestockProduct = {
+  id: 'relish',
+  favourite: true,
+  minJars: 2,
+  harvestMonths: [8, 9],
+  jarSize: 'half-pint',
+};
 const sealed = (remainingTbsp = 16): ForecastJar => ({ productId: 'relish', state: 'sealed', remainingTbsp });
 const opened = (remainingTbsp: number): ForecastJar => ({ productId: 'relish', state: 'opened', remainingTbsp });
 // 84 tbsp over the 84 days before today: 1 tbsp a day. 2024-12-16 is today - 84 days, 2025-03-09 is today - 1.
@@ -83,7 +89,9 @@ describe('restockSuggestions: the forecast (worked by hand from the contract)', 
 
   it('counts sealed and opened jars on hand, never finished or discarded ones', () => {
     const jars: ForecastJar[] = [sealed(), opened(3), { productId: 'relish', state: 'finished', remainingTbsp: 0 }];
-    const [forecast] = ask({ jars: [...jars, { productId: 'relish', state: 'discarded', remainingTbsp: 10 }] }).forecasts;
+    const [forecast] = ask({
+      jars: [...jars, { productId: 'relish', state: 'discarded', remainingTbsp: 10 }],
+    }).forecasts;
     expect(forecast).toMatchObject({ onHandTbsp: 19, jarsOnHand: 2, sealedJars: 1 });
   });
 });
@@ -91,8 +99,14 @@ describe('restockSuggestions: the forecast (worked by hand from the contract)', 
 describe('restockSuggestions: reasons and suggested jars (worked by hand from the contract)', () => {
   it("'runs-out-soon' when the run-out date comes strictly before today + leadDays", () => {
     // 13 tbsp at 1 a day runs out on 03-23, the day before 03-24 (today + 14).
-    const suggestion = ask({ jars: [opened(13)], finished: oneTbspADay, products: [{ ...relish, minJars: 0 }] }).suggestions[0];
-    expect(suggestion).toMatchObject({ productId: 'relish', reason: 'runs-out-soon', runOutOn: '2025-03-23', dailyTbsp: 1 });
+    const suggestion = ask({ jars: [opened(13)], finished: oneTbspADay, products: [{ ...relish, minJars: 0 }] })
+      .suggestions[0];
+    expect(suggestion).toMatchObject({
+      productId: 'relish',
+      reason: 'runs-out-soon',
+      runOutOn: '2025-03-23',
+      dailyTbsp: 1,
+    });
   });
 
   it('a run-out exactly on today + leadDays is not soon', () => {
@@ -106,12 +120,23 @@ describe('restockSuggestions: reasons and suggested jars (worked by hand from th
     // minus 2 jars on hand, plus 2 minimum = 11.
     const result = ask({ jars: [sealed(), opened(4)], finished: oneTbspADay });
     expect(result.suggestions).toEqual([
-      { productId: 'relish', reason: 'below-minimum', runOutOn: '2025-03-30', dailyTbsp: 1, suggestedJars: 11, lastsUntil: '2025-08-31' },
+      {
+        productId: 'relish',
+        reason: 'below-minimum',
+        runOutOn: '2025-03-30',
+        dailyTbsp: 1,
+        suggestedJars: 11,
+        lastsUntil: '2025-08-31',
+      },
     ]);
   });
 
   it("'below-minimum' when enough jars are sealed now but too few are projected at today + leadDays", () => {
-    const result = ask({ jars: [sealed(), sealed(), sealed(), sealed()], finished: oneTbspADay, products: [{ ...relish, minJars: 4 }] });
+    const result = ask({
+      jars: [sealed(), sealed(), sealed(), sealed()],
+      finished: oneTbspADay,
+      products: [{ ...relish, minJars: 4 }],
+    });
     expect(result.suggestions[0]).toMatchObject({ reason: 'below-minimum', suggestedJars: 11 - 4 + 4 });
   });
 
@@ -132,7 +157,12 @@ describe('restockSuggestions: reasons and suggested jars (worked by hand from th
   });
 
   it('uses the leadDays given', () => {
-    const result = ask({ jars: [opened(13)], finished: oneTbspADay, products: [{ ...relish, minJars: 0 }], leadDays: 7 });
+    const result = ask({
+      jars: [opened(13)],
+      finished: oneTbspADay,
+      products: [{ ...relish, minJars: 0 }],
+      leadDays: 7,
+    });
     expect(result.suggestions).toEqual([]);
   });
 });
@@ -185,7 +215,10 @@ describe('restockSuggestions properties (fast-check)', () => {
     fc.assert(
       fc.property(input, fc.double({ min: 1, max: 20, noNaN: true }), (shelf, faster) => {
         const slow = ask(shelf).forecasts[0];
-        const quick = ask({ ...shelf, finished: shelf.finished.map((entry) => ({ ...entry, tbsp: entry.tbsp * faster })) }).forecasts[0];
+        const quick = ask({
+          ...shelf,
+          finished: shelf.finished.map((entry) => ({ ...entry, tbsp: entry.tbsp * faster })),
+        }).forecasts[0];
         expect(quick.historyTbspPerDay).toBeGreaterThanOrEqual(slow.historyTbspPerDay);
         expect(dayOrNever(quick.runOutOn)).toBeLessThanOrEqual(dayOrNever(slow.runOutOn));
       }),
@@ -207,14 +240,30 @@ describe('restockSuggestions properties (fast-check)', () => {
 describe('restockSuggestions refuses malformed input with a RangeError', () => {
   it.each<[string, Partial<RestockInput>, RegExp]>([
     ['a part day of lead time', { leadDays: 1.5 }, /leadDays must be a whole number/],
-    ['a thirteenth month', { products: [{ ...relish, harvestMonths: [13] }] }, /harvestMonths\[0\] must be a month from 1 to 12/],
+    [
+      'a thirteenth month',
+      { products: [{ ...relish, harvestMonths: [13] }] },
+      /harvestMonths\[0\] must be a month from 1 to 12/,
+    ],
     ['month 0', { products: [{ ...relish, harvestMonths: [0] }] }, /harvestMonths\[0\] must be at least 1/],
     ['a negative minimum', { products: [{ ...relish, minJars: -1 }] }, /minJars must be at least 0/],
     ['an unknown jar size', { products: [{ ...relish, jarSize: 'crock' as never }] }, /jarSize must be one of/],
-    ['an unknown jar state', { jars: [{ productId: 'relish', state: 'lost' as never, remainingTbsp: 1 }] }, /state must be one of/],
+    [
+      'an unknown jar state',
+      { jars: [{ productId: 'relish', state: 'lost' as never, remainingTbsp: 1 }] },
+      /state must be one of/,
+    ],
     ['a negative amount left', { jars: [opened(-1)] }, /remainingTbsp must not be negative/],
-    ['an impossible finished date', { finished: [{ productId: 'relish', finishedOn: '2025-02-29', tbsp: 1 }] }, /not a real calendar date/],
-    ['a NaN planned portion', { planned: [{ productId: 'relish', date: today, tbsp: Number.NaN }] }, /planned\[0\].tbsp must be a finite number/],
+    [
+      'an impossible finished date',
+      { finished: [{ productId: 'relish', finishedOn: '2025-02-29', tbsp: 1 }] },
+      /not a real calendar date/,
+    ],
+    [
+      'a NaN planned portion',
+      { planned: [{ productId: 'relish', date: today, tbsp: Number.NaN }] },
+      /planned\[0\].tbsp must be a finite number/,
+    ],
     ['an impossible today', { today: '10/03/2025' }, /today must be a date written YYYY-MM-DD/],
   ])('%s', (_, overrides, message) => {
     expect(() => ask(overrides)).toThrow(RangeError);

@@ -120,7 +120,11 @@ describe('scaleRecipe: batch cautions (common practice)', () => {
   });
 
   it('recognises pectin by the recipe flag where the ingredient name does not say so', () => {
-    const renamed: Recipe = { ...jam, usesPectin: true, ingredients: jam.ingredients.filter((i) => !/pectin/.test(i.name)) };
+    const renamed: Recipe = {
+      ...jam,
+      usesPectin: true,
+      ingredients: jam.ingredients.filter((i) => !/pectin/.test(i.name)),
+    };
     expect(scaleRecipe(renamed, { factor: 2 }).cautions).toEqual([PECTIN_BATCH_CAUTION]);
   });
 
@@ -149,7 +153,10 @@ describe('scaleRecipe properties (fast-check)', () => {
         fc.array(ingredient('acid', volumeUnit), { minLength: 1, maxLength: 2 }),
         fc.array(ingredient('spice', anyUnit), { maxLength: 3 }),
       )
-      .map(([yieldOf, produce, acid, spices]): Recipe => ({ yield: yieldOf, ingredients: [...produce, ...acid, ...spices] }));
+      .map(([yieldOf, produce, acid, spices]): Recipe => ({
+        yield: yieldOf,
+        ingredients: [...produce, ...acid, ...spices],
+      }));
 
   const millilitres = (ingredients: { amount: number; unit: IngredientUnit; role: string }[], role: string) =>
     ingredients
@@ -161,7 +168,10 @@ describe('scaleRecipe properties (fast-check)', () => {
       fc.property(recipeWith(anyUnit), factor, factor, (recipe, a, b) => {
         const once = scaleRecipe(recipe, { factor: a });
         const rescaled = scaleRecipe(
-          { ...recipe, ingredients: once.ingredients.map(({ exactAmount, ...rest }) => ({ ...rest, amount: exactAmount })) },
+          {
+            ...recipe,
+            ingredients: once.ingredients.map(({ exactAmount, ...rest }) => ({ ...rest, amount: exactAmount })),
+          },
           { factor: b },
         );
         const direct = scaleRecipe(recipe, { factor: a * b });
@@ -212,12 +222,32 @@ describe('scaleRecipe refuses malformed input with a RangeError', () => {
     ({ ...relish, ingredients: [{ ...relish.ingredients[0], ...change }] }) as Recipe;
 
   it.each<[string, Recipe, ScaleTarget, RegExp]>([
-    ['a negative amount', withIngredient({ amount: -1 }), { factor: 1 }, /amount of chopped cucumbers must not be negative/],
-    ['a NaN amount', withIngredient({ amount: Number.NaN }), { factor: 1 }, /amount of chopped cucumbers must be a finite number/],
+    [
+      'a negative amount',
+      withIngredient({ amount: -1 }),
+      { factor: 1 },
+      /amount of chopped cucumbers must not be negative/,
+    ],
+    [
+      'a NaN amount',
+      withIngredient({ amount: Number.NaN }),
+      { factor: 1 },
+      /amount of chopped cucumbers must be a finite number/,
+    ],
     ['an unknown unit', withIngredient({ unit: 'pinch' }), { factor: 1 }, /unit of chopped cucumbers must be one of/],
     ['an unknown role', withIngredient({ role: 'garnish' }), { factor: 1 }, /role of chopped cucumbers must be one of/],
-    ['a part jar in the yield', { ...relish, yield: { jars: 2.5, jarSize: 'pint' } }, { factor: 1 }, /recipe.yield.jars must be a whole number/],
-    ['an unknown jar size', { ...relish, yield: { jars: 2, jarSize: 'magnum' } } as unknown as Recipe, { factor: 1 }, /jarSize must be one of/],
+    [
+      'a part jar in the yield',
+      { ...relish, yield: { jars: 2.5, jarSize: 'pint' } },
+      { factor: 1 },
+      /recipe.yield.jars must be a whole number/,
+    ],
+    [
+      'an unknown jar size',
+      { ...relish, yield: { jars: 2, jarSize: 'magnum' } } as unknown as Recipe,
+      { factor: 1 },
+      /jarSize must be one of/,
+    ],
     ['a target of 0 jars', relish, { jars: 0, jarSize: 'pint' }, /target.jars must be at least 1/],
     ['a target of a part jar', relish, { jars: 1.5, jarSize: 'pint' }, /target.jars must be a whole number/],
     ['a factor of 0', relish, { factor: 0 }, /factor must be more than 0/],

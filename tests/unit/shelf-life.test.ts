@@ -1,6 +1,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { BEST_QUALITY_MONTHS, UNSEALED_JAR_ADVICE, addDays, addMonths, bestQualityBy, daysBetween, useBy } from '@shared/domain';
+import {
+  BEST_QUALITY_MONTHS,
+  UNSEALED_JAR_ADVICE,
+  addDays,
+  addMonths,
+  bestQualityBy,
+  daysBetween,
+  useBy,
+} from '@shared/domain';
 
 const NCHFP = 'NCHFP, "Storing Home Canned Foods"';
 

@@ -1,7 +1,15 @@
 import convert from 'convert-units';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { JAR_SIZES, VOLUME_UNITS, convertVolume, jarCapacityMl, jarCapacityTbsp, type JarSize, type VolumeUnit } from '@shared/domain';
+import {
+  JAR_SIZES,
+  VOLUME_UNITS,
+  convertVolume,
+  jarCapacityMl,
+  jarCapacityTbsp,
+  type JarSize,
+  type VolumeUnit,
+} from '@shared/domain';
 
 // Relative to the size of the amount, with a floor so amounts near zero are not held to zero error.
 function expectClose(actual: number, expected: number, relative = 1e-12): void {
@@ -57,7 +65,11 @@ describe('convertVolume cross-checked with the convert-units package (library, v
   for (const from of VOLUME_UNITS) {
     for (const to of VOLUME_UNITS) {
       it(`1 ${from} in ${to} agrees with convert-units`, () => {
-        expectClose(convertVolume(1, from, to), convert(1).from(convertUnitsName[from]).to(convertUnitsName[to]), LIBRARY_TOLERANCE);
+        expectClose(
+          convertVolume(1, from, to),
+          convert(1).from(convertUnitsName[from]).to(convertUnitsName[to]),
+          LIBRARY_TOLERANCE,
+        );
       });
     }
   }

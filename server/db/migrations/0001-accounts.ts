@@ -34,8 +34,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       'memberships',
       {
         id: { type: DataTypes.UUID, primaryKey: true },
-        household_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'households', key: 'id' }, onDelete: 'CASCADE' },
-        user_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' },
+        household_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'households', key: 'id' },
+          onDelete: 'CASCADE',
+        },
+        user_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'users', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         role: { type: DataTypes.STRING(10), allowNull: false },
         ...timestamps,
       },

@@ -4,17 +4,42 @@ const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },
   updated_at: { type: DataTypes.DATE, allowNull: false },
 };
-const householdRef = { type: DataTypes.UUID, allowNull: false, references: { model: 'households', key: 'id' }, onDelete: 'CASCADE' };
+const householdRef = {
+  type: DataTypes.UUID,
+  allowNull: false,
+  references: { model: 'households', key: 'id' },
+  onDelete: 'CASCADE',
+};
 const JAR_SIZES = ['quarter-pint', 'half-pint', 'twelve-ounce', 'pint', 'pint-and-half', 'quart', 'half-gallon'];
 const METHODS = ['boiling-water', 'atmospheric-steam', 'pressure-dial', 'pressure-weighted'];
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {
     const t = { transaction };
-    await qi.addColumn('households', 'best_quality_months', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 12 }, t);
-    await qi.addColumn('households', 'week_starts_on', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 }, t);
-    await qi.addColumn('households', 'canner_capacity_jars', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 }, t);
-    await qi.addColumn('households', 'default_method', { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' }, t);
+    await qi.addColumn(
+      'households',
+      'best_quality_months',
+      { type: DataTypes.INTEGER, allowNull: false, defaultValue: 12 },
+      t,
+    );
+    await qi.addColumn(
+      'households',
+      'week_starts_on',
+      { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      t,
+    );
+    await qi.addColumn(
+      'households',
+      'canner_capacity_jars',
+      { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 },
+      t,
+    );
+    await qi.addColumn(
+      'households',
+      'default_method',
+      { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
+      t,
+    );
 
     await qi.createTable(
       'products',
@@ -37,14 +62,22 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     );
     await qi.addIndex('products', ['household_id'], t);
     await qi.sequelize.query('CREATE UNIQUE INDEX products_household_name ON products (household_id, lower(name))', t);
-    await qi.sequelize.query('ALTER TABLE products ADD CONSTRAINT products_heat_range CHECK (heat BETWEEN 0 AND 5), ADD CONSTRAINT products_min_jars CHECK (min_jars >= 0)', t);
+    await qi.sequelize.query(
+      'ALTER TABLE products ADD CONSTRAINT products_heat_range CHECK (heat BETWEEN 0 AND 5), ADD CONSTRAINT products_min_jars CHECK (min_jars >= 0)',
+      t,
+    );
 
     await qi.createTable(
       'recipes',
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        product_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'products', key: 'id' }, onDelete: 'CASCADE' },
+        product_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'products', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         name: { type: DataTypes.STRING(120), allowNull: false },
         yield_jars: { type: DataTypes.INTEGER, allowNull: false },
         yield_jar_size: { type: DataTypes.STRING(20), allowNull: false },
@@ -73,8 +106,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        product_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'products', key: 'id' }, onDelete: 'CASCADE' },
-        recipe_id: { type: DataTypes.UUID, allowNull: true, references: { model: 'recipes', key: 'id' }, onDelete: 'SET NULL' },
+        product_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'products', key: 'id' },
+          onDelete: 'CASCADE',
+        },
+        recipe_id: {
+          type: DataTypes.UUID,
+          allowNull: true,
+          references: { model: 'recipes', key: 'id' },
+          onDelete: 'SET NULL',
+        },
         canned_on: { type: DataTypes.DATEONLY, allowNull: false },
         jar_size: { type: DataTypes.STRING(20), allowNull: false },
         jars_filled: { type: DataTypes.INTEGER, allowNull: false },
@@ -87,7 +130,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         photo_key: { type: DataTypes.STRING(200), allowNull: true },
         photo_type: { type: DataTypes.STRING(40), allowNull: true },
-        created_by: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+        created_by: {
+          type: DataTypes.UUID,
+          allowNull: true,
+          references: { model: 'users', key: 'id' },
+          onDelete: 'SET NULL',
+        },
         ...timestamps,
       },
       t,
@@ -108,8 +156,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        batch_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'batches', key: 'id' }, onDelete: 'CASCADE' },
-        product_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'products', key: 'id' }, onDelete: 'CASCADE' },
+        batch_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'batches', key: 'id' },
+          onDelete: 'CASCADE',
+        },
+        product_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'products', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         // Short code printed on the label; /j/<code> opens the jar.
         code: { type: DataTypes.STRING(12), allowNull: false, unique: true },
         state: { type: DataTypes.STRING(10), allowNull: false },
@@ -140,10 +198,25 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        jar_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'jars', key: 'id' }, onDelete: 'CASCADE' },
-        batch_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'batches', key: 'id' }, onDelete: 'CASCADE' },
+        jar_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'jars', key: 'id' },
+          onDelete: 'CASCADE',
+        },
+        batch_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'batches', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         kind: { type: DataTypes.STRING(12), allowNull: false },
-        user_id: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+        user_id: {
+          type: DataTypes.UUID,
+          allowNull: true,
+          references: { model: 'users', key: 'id' },
+          onDelete: 'SET NULL',
+        },
         happened_on: { type: DataTypes.DATEONLY, allowNull: false },
         created_at: { type: DataTypes.DATE, allowNull: false },
       },
@@ -158,5 +231,6 @@ export async function up({ context: qi }: { context: QueryInterface }) {
 
 export async function down({ context: qi }: { context: QueryInterface }) {
   for (const table of ['jar_events', 'jars', 'batches', 'recipes', 'products']) await qi.dropTable(table);
-  for (const column of ['best_quality_months', 'week_starts_on', 'canner_capacity_jars', 'default_method']) await qi.removeColumn('households', column);
+  for (const column of ['best_quality_months', 'week_starts_on', 'canner_capacity_jars', 'default_method'])
+    await qi.removeColumn('households', column);
 }

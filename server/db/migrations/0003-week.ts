@@ -4,14 +4,29 @@ const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },
   updated_at: { type: DataTypes.DATE, allowNull: false },
 };
-const householdRef = { type: DataTypes.UUID, allowNull: false, references: { model: 'households', key: 'id' }, onDelete: 'CASCADE' };
+const householdRef = {
+  type: DataTypes.UUID,
+  allowNull: false,
+  references: { model: 'households', key: 'id' },
+  onDelete: 'CASCADE',
+};
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {
     const t = { transaction };
     // Who eats: each member's heat tolerance and diet.
-    await qi.addColumn('memberships', 'heat_tolerance', { type: DataTypes.INTEGER, allowNull: false, defaultValue: 5 }, t);
-    await qi.addColumn('memberships', 'diet_tags', { type: DataTypes.ARRAY(DataTypes.STRING(30)), allowNull: false, defaultValue: [] }, t);
+    await qi.addColumn(
+      'memberships',
+      'heat_tolerance',
+      { type: DataTypes.INTEGER, allowNull: false, defaultValue: 5 },
+      t,
+    );
+    await qi.addColumn(
+      'memberships',
+      'diet_tags',
+      { type: DataTypes.ARRAY(DataTypes.STRING(30)), allowNull: false, defaultValue: [] },
+      t,
+    );
 
     await qi.createTable(
       'meals',
@@ -34,8 +49,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        meal_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'meals', key: 'id' }, onDelete: 'CASCADE' },
-        product_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'products', key: 'id' }, onDelete: 'CASCADE' },
+        meal_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'meals', key: 'id' },
+          onDelete: 'CASCADE',
+        },
+        product_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'products', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         tbsp_per_serving: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
         ...timestamps,
       },
@@ -54,7 +79,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
         slot: { type: DataTypes.STRING(10), allowNull: false },
         position: { type: DataTypes.INTEGER, allowNull: false },
         title: { type: DataTypes.STRING(100), allowNull: false },
-        meal_id: { type: DataTypes.UUID, allowNull: true, references: { model: 'meals', key: 'id' }, onDelete: 'SET NULL' },
+        meal_id: {
+          type: DataTypes.UUID,
+          allowNull: true,
+          references: { model: 'meals', key: 'id' },
+          onDelete: 'SET NULL',
+        },
         servings: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 2 },
         // Member user ids who eat this meal; null means everybody.
         eaters: { type: DataTypes.ARRAY(DataTypes.UUID), allowNull: true },
@@ -76,8 +106,18 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        plan_entry_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'plan_entries', key: 'id' }, onDelete: 'CASCADE' },
-        product_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'products', key: 'id' }, onDelete: 'CASCADE' },
+        plan_entry_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'plan_entries', key: 'id' },
+          onDelete: 'CASCADE',
+        },
+        product_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'products', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         tbsp_per_serving: { type: DataTypes.DECIMAL(6, 2), allowNull: false },
         ...timestamps,
       },

@@ -4,8 +4,18 @@ const timestamps = {
   created_at: { type: DataTypes.DATE, allowNull: false },
   updated_at: { type: DataTypes.DATE, allowNull: false },
 };
-const householdRef = { type: DataTypes.UUID, allowNull: false, references: { model: 'households', key: 'id' }, onDelete: 'CASCADE' };
-const userRef = { type: DataTypes.UUID, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'CASCADE' };
+const householdRef = {
+  type: DataTypes.UUID,
+  allowNull: false,
+  references: { model: 'households', key: 'id' },
+  onDelete: 'CASCADE',
+};
+const userRef = {
+  type: DataTypes.UUID,
+  allowNull: false,
+  references: { model: 'users', key: 'id' },
+  onDelete: 'CASCADE',
+};
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {
@@ -62,7 +72,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       {
         id: { type: DataTypes.UUID, primaryKey: true },
         household_id: householdRef,
-        jar_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'jars', key: 'id' }, onDelete: 'CASCADE' },
+        jar_id: {
+          type: DataTypes.UUID,
+          allowNull: false,
+          references: { model: 'jars', key: 'id' },
+          onDelete: 'CASCADE',
+        },
         user_id: userRef,
         kind: { type: DataTypes.STRING(12), allowNull: false },
         use_by: { type: DataTypes.DATEONLY, allowNull: false },
@@ -73,10 +88,17 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       },
       t,
     );
-    await qi.addIndex('reminder_deliveries', ['jar_id', 'kind', 'user_id'], { unique: true, name: 'reminder_deliveries_once', ...t });
+    await qi.addIndex('reminder_deliveries', ['jar_id', 'kind', 'user_id'], {
+      unique: true,
+      name: 'reminder_deliveries_once',
+      ...t,
+    });
     await qi.addIndex('reminder_deliveries', ['household_id'], t);
     await qi.addIndex('reminder_deliveries', ['user_id'], t);
-    await qi.sequelize.query(`ALTER TABLE reminder_deliveries ADD CONSTRAINT reminder_deliveries_kind CHECK (kind IN ('soon','today'))`, t);
+    await qi.sequelize.query(
+      `ALTER TABLE reminder_deliveries ADD CONSTRAINT reminder_deliveries_kind CHECK (kind IN ('soon','today'))`,
+      t,
+    );
 
     // The weekly digest's claim: once per household, person and week.
     await qi.createTable(
@@ -92,7 +114,11 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       },
       t,
     );
-    await qi.addIndex('digest_deliveries', ['household_id', 'user_id', 'week_of'], { unique: true, name: 'digest_deliveries_once', ...t });
+    await qi.addIndex('digest_deliveries', ['household_id', 'user_id', 'week_of'], {
+      unique: true,
+      name: 'digest_deliveries_once',
+      ...t,
+    });
     await qi.addIndex('digest_deliveries', ['user_id'], t);
 
     await qi.createTable(
@@ -104,10 +130,20 @@ export async function up({ context: qi }: { context: QueryInterface }) {
         role: { type: DataTypes.STRING(10), allowNull: false },
         // SHA-256 of the link's token; the token itself is only ever in the e-mail.
         token_hash: { type: DataTypes.STRING(64), allowNull: false, unique: true },
-        invited_by: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+        invited_by: {
+          type: DataTypes.UUID,
+          allowNull: true,
+          references: { model: 'users', key: 'id' },
+          onDelete: 'SET NULL',
+        },
         expires_at: { type: DataTypes.DATE, allowNull: false },
         accepted_at: { type: DataTypes.DATE, allowNull: true },
-        accepted_by: { type: DataTypes.UUID, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
+        accepted_by: {
+          type: DataTypes.UUID,
+          allowNull: true,
+          references: { model: 'users', key: 'id' },
+          onDelete: 'SET NULL',
+        },
         revoked_at: { type: DataTypes.DATE, allowNull: true },
         ...timestamps,
       },
@@ -116,12 +152,22 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     await qi.addIndex('invitations', ['household_id'], t);
     await qi.addIndex('invitations', ['invited_by'], t);
     await qi.addIndex('invitations', ['accepted_by'], t);
-    await qi.sequelize.query(`ALTER TABLE invitations ADD CONSTRAINT invitations_role CHECK (role IN ('keeper','cook','helper'))`, t);
+    await qi.sequelize.query(
+      `ALTER TABLE invitations ADD CONSTRAINT invitations_role CHECK (role IN ('keeper','cook','helper'))`,
+      t,
+    );
   });
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  for (const table of ['invitations', 'digest_deliveries', 'reminder_deliveries', 'notification_preferences', 'push_subscriptions', 'app_settings']) {
+  for (const table of [
+    'invitations',
+    'digest_deliveries',
+    'reminder_deliveries',
+    'notification_preferences',
+    'push_subscriptions',
+    'app_settings',
+  ]) {
     await qi.dropTable(table);
   }
 }

@@ -7,7 +7,12 @@ import { DataTypes, type QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.transaction(async (transaction) => {
     const t = { transaction };
-    await qi.addColumn('jar_events', 'undoes_event_id', { type: DataTypes.UUID, allowNull: true, references: { model: 'jar_events', key: 'id' }, onDelete: 'CASCADE' }, t);
+    await qi.addColumn(
+      'jar_events',
+      'undoes_event_id',
+      { type: DataTypes.UUID, allowNull: true, references: { model: 'jar_events', key: 'id' }, onDelete: 'CASCADE' },
+      t,
+    );
     // What the jar looked like before this event, so undoing it restores exactly that.
     await qi.addColumn('jar_events', 'state_before', { type: DataTypes.JSONB, allowNull: true }, t);
     // PostgreSQL lets many rows share NULL under a unique index, so only real undos collide.

@@ -12,13 +12,23 @@ export async function up({ context: qi }: { context: QueryInterface }) {
       { transaction },
     );
     // Every claim made before this change went through its sends in the same step.
-    await qi.sequelize.query('UPDATE reminder_deliveries SET claimed_at = created_at, sent_at = updated_at', { transaction });
-    await qi.sequelize.query('ALTER TABLE reminder_deliveries ALTER COLUMN claimed_at SET NOT NULL, ALTER COLUMN claimed_at SET DEFAULT now()', { transaction });
-    await qi.sequelize.query('CREATE INDEX reminder_deliveries_unsent ON reminder_deliveries (claimed_at) WHERE sent_at IS NULL', { transaction });
+    await qi.sequelize.query('UPDATE reminder_deliveries SET claimed_at = created_at, sent_at = updated_at', {
+      transaction,
+    });
+    await qi.sequelize.query(
+      'ALTER TABLE reminder_deliveries ALTER COLUMN claimed_at SET NOT NULL, ALTER COLUMN claimed_at SET DEFAULT now()',
+      { transaction },
+    );
+    await qi.sequelize.query(
+      'CREATE INDEX reminder_deliveries_unsent ON reminder_deliveries (claimed_at) WHERE sent_at IS NULL',
+      { transaction },
+    );
   });
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.query('DROP INDEX IF EXISTS reminder_deliveries_unsent');
-  await qi.sequelize.query('ALTER TABLE reminder_deliveries DROP COLUMN claimed_at, DROP COLUMN sent_at, DROP COLUMN attempts');
+  await qi.sequelize.query(
+    'ALTER TABLE reminder_deliveries DROP COLUMN claimed_at, DROP COLUMN sent_at, DROP COLUMN attempts',
+  );
 }

@@ -1,7 +1,12 @@
 import { DataTypes, type ModelAttributeColumnOptions } from 'sequelize';
 
 /** A NUMERIC column read back as a JavaScript number (pg returns NUMERIC as a string to keep precision). */
-export function decimal(name: string, precision: number, scale: number, allowNull = false): ModelAttributeColumnOptions {
+export function decimal(
+  name: string,
+  precision: number,
+  scale: number,
+  allowNull = false,
+): ModelAttributeColumnOptions {
   return {
     type: DataTypes.DECIMAL(precision, scale),
     allowNull,

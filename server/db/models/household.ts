@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { Method } from '../../../shared/domain';
 import { DEFAULT_MEAL_TIMES, type MealTimes } from '../../../shared/schemas/calendar';
 import type { UnitSystem } from '../../../shared/schemas/households';

@@ -22,10 +22,35 @@ import { User } from './user';
 
 /** Binds every model to one connection and declares how they relate. */
 export function initModels(sequelize: Sequelize) {
-  for (const model of [User, Household, Membership, Product, Recipe, Batch, BatchProcessing, Jar, JarEvent, Meal, MealProduct, PlanEntry, Pairing, Todo]) {
+  for (const model of [
+    User,
+    Household,
+    Membership,
+    Product,
+    Recipe,
+    Batch,
+    BatchProcessing,
+    Jar,
+    JarEvent,
+    Meal,
+    MealProduct,
+    PlanEntry,
+    Pairing,
+    Todo,
+  ]) {
     model.initModel(sequelize);
   }
-  for (const model of [AppSetting, PushSubscription, NotificationPreference, ReminderDelivery, DigestDelivery, Invitation, CalendarFeed, SignUpRequest]) model.initModel(sequelize);
+  for (const model of [
+    AppSetting,
+    PushSubscription,
+    NotificationPreference,
+    ReminderDelivery,
+    DigestDelivery,
+    Invitation,
+    CalendarFeed,
+    SignUpRequest,
+  ])
+    model.initModel(sequelize);
 
   Membership.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
   Invitation.belongsTo(Household, { as: 'household', foreignKey: 'householdId' });
@@ -56,4 +81,27 @@ export function initModels(sequelize: Sequelize) {
   Todo.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
 }
 
-export { AppSetting, Batch, BatchProcessing, CalendarFeed, DigestDelivery, Household, Invitation, Jar, JarEvent, Meal, MealProduct, Membership, NotificationPreference, Pairing, PlanEntry, Product, PushSubscription, Recipe, ReminderDelivery, SignUpRequest, Todo, User };
+export {
+  AppSetting,
+  Batch,
+  BatchProcessing,
+  CalendarFeed,
+  DigestDelivery,
+  Household,
+  Invitation,
+  Jar,
+  JarEvent,
+  Meal,
+  MealProduct,
+  Membership,
+  NotificationPreference,
+  Pairing,
+  PlanEntry,
+  Product,
+  PushSubscription,
+  Recipe,
+  ReminderDelivery,
+  SignUpRequest,
+  Todo,
+  User,
+};

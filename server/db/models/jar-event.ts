@@ -1,8 +1,24 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { JarState } from '../../../shared/domain';
 import { requiredUuid, uuidKey } from './columns';
 
-export const JAR_EVENT_KINDS = ['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored', 'seal-checked', 'reprocessed'] as const;
+export const JAR_EVENT_KINDS = [
+  'filled',
+  'unsealed',
+  'opened',
+  'finished',
+  'discarded',
+  'restored',
+  'seal-checked',
+  'reprocessed',
+] as const;
 export type JarEventKind = (typeof JAR_EVENT_KINDS)[number];
 
 export interface JarBefore {

@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** One person's reminder choices; a person without a row has the defaults. */
-export class NotificationPreference extends Model<InferAttributes<NotificationPreference>, InferCreationAttributes<NotificationPreference>> {
+export class NotificationPreference extends Model<
+  InferAttributes<NotificationPreference>,
+  InferCreationAttributes<NotificationPreference>
+> {
   declare userId: string;
   declare emailReminders: CreationOptional<boolean>;
   declare weeklyDigest: CreationOptional<boolean>;

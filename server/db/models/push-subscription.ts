@@ -1,8 +1,18 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { requiredUuid, uuidKey } from './columns';
 
 /** A browser's push address and the keys its payloads are encrypted for. */
-export class PushSubscription extends Model<InferAttributes<PushSubscription>, InferCreationAttributes<PushSubscription>> {
+export class PushSubscription extends Model<
+  InferAttributes<PushSubscription>,
+  InferCreationAttributes<PushSubscription>
+> {
   declare id: CreationOptional<string>;
   declare userId: string;
   declare endpoint: string;

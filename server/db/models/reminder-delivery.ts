@@ -1,11 +1,21 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import { requiredUuid, uuidKey } from './columns';
 
 export const REMINDER_KINDS = ['soon', 'today', 'seal-check'] as const;
 export type ReminderKind = (typeof REMINDER_KINDS)[number];
 
 /** A use-by reminder claimed for one jar, kind and person; the unique key makes it go out once. */
-export class ReminderDelivery extends Model<InferAttributes<ReminderDelivery>, InferCreationAttributes<ReminderDelivery>> {
+export class ReminderDelivery extends Model<
+  InferAttributes<ReminderDelivery>,
+  InferCreationAttributes<ReminderDelivery>
+> {
   declare id: CreationOptional<string>;
   declare householdId: string;
   /** The jar of a use-by reminder; null for a seal check, which names its processing. */

@@ -141,7 +141,10 @@ export async function householdCalendar(household: Household, publicOrigin: stri
 /** The processings of the last week whose jars still wait for their seal check, with the product's name. */
 async function sealChecksToDo(householdId: string) {
   const processings = await BatchProcessing.findAll({
-    where: { householdId, processedAt: { [Op.gte]: new Date(clock.now().getTime() - SEAL_CHECKS_FROM_DAYS * 86_400_000) } },
+    where: {
+      householdId,
+      processedAt: { [Op.gte]: new Date(clock.now().getTime() - SEAL_CHECKS_FROM_DAYS * 86_400_000) },
+    },
     order: [
       ['processedAt', 'ASC'],
       ['id', 'ASC'],

@@ -17,7 +17,9 @@ function section(title: string, lines: string[], empty: string, note = '') {
   return {
     text: `${title}\n${lines.length ? lines.map((l) => `- ${l}`).join('\n') : empty}\n${note && lines.length ? `${note}\n` : ''}`,
     html: `<h2 style="font-size:17px;margin:20px 0 6px">${escapeHtml(title)}</h2>${
-      lines.length ? `<ul style="padding-left:20px;margin:0">${lines.map((l) => `<li>${escapeHtml(l)}</li>`).join('')}</ul>` : `<p style="margin:0">${escapeHtml(empty)}</p>`
+      lines.length
+        ? `<ul style="padding-left:20px;margin:0">${lines.map((l) => `<li>${escapeHtml(l)}</li>`).join('')}</ul>`
+        : `<p style="margin:0">${escapeHtml(empty)}</p>`
     }${note && lines.length ? `<p style="margin:6px 0 0;font-size:14px">${escapeHtml(note)}</p>` : ''}`,
   };
 }
@@ -29,10 +31,34 @@ export function digestMail(to: string, digest: DigestContent): MailMessage {
   const thisYear = Number(digest.weekOf.slice(0, 4));
   const day = (isoDate: string) => dateWords(isoDate, thisYear);
   const sections = [
-    section('This week’s plan', digest.plan.map((p) => `${day(p.date)} at ${slotName(p.slot).toLowerCase()}: ${p.title}${p.products.length ? ` with ${p.products.join(', ')}` : ''}`), 'Nothing is planned yet.'),
-    section('Jars to open', digest.toOpen.map((o) => `${day(o.date)}: open a new jar of ${o.productName}`), 'No new jars need opening.'),
-    section('Use by this week', digest.expiring.map((e) => `${day(e.useBy)}: ${e.productName} (jar ${e.code})`), 'No opened jar reaches its use-by this week.', USE_BY_CAUTION_SENTENCE),
-    ...(digest.restock.length ? [section('Restock suggestions', digest.restock.map((r) => `${r.productName}: ${r.reason}`), '')] : []),
+    section(
+      'This week’s plan',
+      digest.plan.map(
+        (p) =>
+          `${day(p.date)} at ${slotName(p.slot).toLowerCase()}: ${p.title}${p.products.length ? ` with ${p.products.join(', ')}` : ''}`,
+      ),
+      'Nothing is planned yet.',
+    ),
+    section(
+      'Jars to open',
+      digest.toOpen.map((o) => `${day(o.date)}: open a new jar of ${o.productName}`),
+      'No new jars need opening.',
+    ),
+    section(
+      'Use by this week',
+      digest.expiring.map((e) => `${day(e.useBy)}: ${e.productName} (jar ${e.code})`),
+      'No opened jar reaches its use-by this week.',
+      USE_BY_CAUTION_SENTENCE,
+    ),
+    ...(digest.restock.length
+      ? [
+          section(
+            'Restock suggestions',
+            digest.restock.map((r) => `${r.productName}: ${r.reason}`),
+            '',
+          ),
+        ]
+      : []),
   ];
   const subject = `${digest.householdName}: the week of ${day(digest.weekOf)}`;
   return {

@@ -8,7 +8,8 @@ const PAPER = '#faf6ee';
 const INK = '#2a2520';
 const GREEN = '#2f5d3a';
 
-const HOUSEHOLD_FOOTER = 'You get this because you share a household on Larderly. Change what you receive under Household, Notifications.';
+const HOUSEHOLD_FOOTER =
+  'You get this because you share a household on Larderly. Change what you receive under Household, Notifications.';
 
 /** The frame every Larderly e-mail shares; `body` is already-escaped HTML, `footer` plain text. */
 export function mailLayout(title: string, body: string, footer = HOUSEHOLD_FOOTER) {

@@ -12,19 +12,40 @@ export interface ReminderWords {
 const PUSH_CAUTION = 'The use-by is a default; the jar’s look and smell come first. When in doubt, throw it out.';
 
 /** The words of a use-by reminder, shared by the push notification and the e-mail. */
-export function reminderWords(kind: Exclude<ReminderKind, 'seal-check'>, productName: string, daysLeft: number, code: string): ReminderWords {
+export function reminderWords(
+  kind: Exclude<ReminderKind, 'seal-check'>,
+  productName: string,
+  daysLeft: number,
+  code: string,
+): ReminderWords {
   if (kind === 'today') {
-    return { title: `Use the ${productName} today`, body: `The opened jar ${code} of ${productName} reaches its use-by today. Finish it, or discard what is left. ${PUSH_CAUTION}` };
+    return {
+      title: `Use the ${productName} today`,
+      body: `The opened jar ${code} of ${productName} reaches its use-by today. Finish it, or discard what is left. ${PUSH_CAUTION}`,
+    };
   }
   const days = daysLeft === 1 ? '1 day' : `${daysLeft} days`;
-  return { title: `Use the ${productName} within ${days}`, body: `The opened jar ${code} of ${productName} should be finished within ${days}. ${PUSH_CAUTION}` };
+  return {
+    title: `Use the ${productName} within ${days}`,
+    body: `The opened jar ${code} of ${productName} should be finished within ${days}. ${PUSH_CAUTION}`,
+  };
 }
 
 /** A reminder e-mail: a use-by reminder by default; a seal check names its own button and carries the canning caution. */
-export function reminderMail(input: { to: string; words: ReminderWords; householdName: string; link: string; button?: string; caution?: string }): MailMessage {
+export function reminderMail(input: {
+  to: string;
+  words: ReminderWords;
+  householdName: string;
+  link: string;
+  button?: string;
+  caution?: string;
+}): MailMessage {
   const { title, body } = input.words;
   const caution = input.caution ?? USE_BY_CAUTION_SENTENCE;
   const text = `${body}\n\n${input.householdName}: ${input.link}\n\n${caution}${TEXT_FOOTER}`;
-  const html = mailLayout(title, `<p>${escapeHtml(body)}</p>${mailButton(input.link, input.button ?? 'Open the jar')}<p style="font-size:14px">${escapeHtml(caution)}</p>`);
+  const html = mailLayout(
+    title,
+    `<p>${escapeHtml(body)}</p>${mailButton(input.link, input.button ?? 'Open the jar')}<p style="font-size:14px">${escapeHtml(caution)}</p>`,
+  );
   return { to: input.to, subject: `${title} (${input.householdName})`, text, html };
 }

@@ -9,14 +9,38 @@ import { AppError } from '../../http/errors';
 // BlockList checks an IPv4-mapped IPv6 address (::ffff:a.b.c.d) against the IPv4 rules.
 const notPublic = new BlockList();
 for (const [net, prefix] of [
-  ['0.0.0.0', 8], ['10.0.0.0', 8], ['100.64.0.0', 10], ['127.0.0.0', 8], ['169.254.0.0', 16], ['172.16.0.0', 12],
-  ['192.0.0.0', 24], ['192.0.2.0', 24], ['192.88.99.0', 24], ['192.168.0.0', 16], ['198.18.0.0', 15], ['198.51.100.0', 24],
-  ['203.0.113.0', 24], ['224.0.0.0', 4], ['240.0.0.0', 4],
-] as const) notPublic.addSubnet(net, prefix, 'ipv4');
+  ['0.0.0.0', 8],
+  ['10.0.0.0', 8],
+  ['100.64.0.0', 10],
+  ['127.0.0.0', 8],
+  ['169.254.0.0', 16],
+  ['172.16.0.0', 12],
+  ['192.0.0.0', 24],
+  ['192.0.2.0', 24],
+  ['192.88.99.0', 24],
+  ['192.168.0.0', 16],
+  ['198.18.0.0', 15],
+  ['198.51.100.0', 24],
+  ['203.0.113.0', 24],
+  ['224.0.0.0', 4],
+  ['240.0.0.0', 4],
+] as const)
+  notPublic.addSubnet(net, prefix, 'ipv4');
 for (const [net, prefix] of [
-  ['::', 128], ['::1', 128], ['64:ff9b::', 96], ['64:ff9b:1::', 48], ['100::', 64], ['2001::', 23],
-  ['2001:db8::', 32], ['2002::', 16], ['fc00::', 7], ['fe80::', 10], ['fec0::', 10], ['ff00::', 8],
-] as const) notPublic.addSubnet(net, prefix, 'ipv6');
+  ['::', 128],
+  ['::1', 128],
+  ['64:ff9b::', 96],
+  ['64:ff9b:1::', 48],
+  ['100::', 64],
+  ['2001::', 23],
+  ['2001:db8::', 32],
+  ['2002::', 16],
+  ['fc00::', 7],
+  ['fe80::', 10],
+  ['fec0::', 10],
+  ['ff00::', 8],
+] as const)
+  notPublic.addSubnet(net, prefix, 'ipv6');
 
 export function isPublicAddress(address: string) {
   const family = isIP(address);
@@ -24,7 +48,13 @@ export function isPublicAddress(address: string) {
   return !notPublic.check(address, family === 4 ? 'ipv4' : 'ipv6');
 }
 
-const refuse = (why: string) => new AppError(400, 'invalid_input', `That push address cannot be used: ${why}. Turn notifications off and on again in this browser.`, { endpoint: why });
+const refuse = (why: string) =>
+  new AppError(
+    400,
+    'invalid_input',
+    `That push address cannot be used: ${why}. Turn notifications off and on again in this browser.`,
+    { endpoint: why },
+  );
 
 /** The local push endpoint's origin when its development setting is on; its endpoints skip the public-address rule. */
 export type LocalPushOrigin = string | undefined;
@@ -60,7 +90,10 @@ function publicOnlyLookup(hostname: string, options: LookupOptions, callback: Lo
   lookup(hostname, { ...options, all: true }, (error, addresses) => {
     if (error) return callback(error, []);
     if (addresses.length === 0 || !addresses.every((a) => isPublicAddress(a.address))) {
-      return callback(Object.assign(new Error(`${hostname} resolves to an address that is not public`), { code: 'ENOTPUBLIC' }), []);
+      return callback(
+        Object.assign(new Error(`${hostname} resolves to an address that is not public`), { code: 'ENOTPUBLIC' }),
+        [],
+      );
     }
     if (options.all) return callback(null, addresses);
     callback(null, addresses[0].address, addresses[0].family);

@@ -25,10 +25,11 @@ export interface PushSender {
 
 export function createPushSender(config: Config, log?: Logger): PushSender {
   let keys: Promise<VapidKeys> | undefined;
-  const vapid = () => (keys ??= loadVapidKeys(config).catch((error) => {
-    keys = undefined;
-    throw error;
-  }));
+  const vapid = () =>
+    (keys ??= loadVapidKeys(config).catch((error) => {
+      keys = undefined;
+      throw error;
+    }));
   // The local push endpoint's self-signed certificate, trusted only for that endpoint outside production.
   const localAgent = config.push.caFile ? new https.Agent({ ca: readFileSync(config.push.caFile) }) : undefined;
   const publicAgent = publicPushAgent();
@@ -37,13 +38,21 @@ export function createPushSender(config: Config, log?: Logger): PushSender {
     publicKey: async () => (await vapid()).publicKey,
     async send(subscription, message, options = {}) {
       const { publicKey, privateKey } = await vapid();
-      const local = config.push.localOrigin !== undefined && new URL(subscription.endpoint).origin === config.push.localOrigin;
+      const local =
+        config.push.localOrigin !== undefined && new URL(subscription.endpoint).origin === config.push.localOrigin;
       const agent = local ? localAgent : publicAgent;
       try {
         await webpush.sendNotification(
           { endpoint: subscription.endpoint, keys: { p256dh: subscription.p256dh, auth: subscription.auth } },
           JSON.stringify(message),
-          { vapidDetails: { subject: config.push.vapidSubject, publicKey, privateKey }, TTL: 24 * 60 * 60, urgency: 'normal', agent, timeout: 10_000, topic: options.topic },
+          {
+            vapidDetails: { subject: config.push.vapidSubject, publicKey, privateKey },
+            TTL: 24 * 60 * 60,
+            urgency: 'normal',
+            agent,
+            timeout: 10_000,
+            topic: options.topic,
+          },
         );
         return 'sent';
       } catch (error) {

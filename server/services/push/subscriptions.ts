@@ -10,16 +10,27 @@ export const MAX_PUSH_DEVICES = 10;
  * Keeps a browser's subscription for the person. An endpoint another person holds stays theirs:
  * knowing an endpoint is not enough to take over its notifications.
  */
-export async function saveSubscription(userId: string, body: PushSubscriptionBody, userAgent: string, localOrigin: LocalPushOrigin) {
+export async function saveSubscription(
+  userId: string,
+  body: PushSubscriptionBody,
+  userAgent: string,
+  localOrigin: LocalPushOrigin,
+) {
   await checkEndpoint(body.endpoint, localOrigin);
   const existing = await PushSubscription.findOne({ where: { endpoint: body.endpoint } });
   if (existing && existing.userId !== userId) {
-    throw conflict('This browser already gets notifications for another Larderly account. Sign in as that person and turn them off there first.');
+    throw conflict(
+      'This browser already gets notifications for another Larderly account. Sign in as that person and turn them off there first.',
+    );
   }
   const values = { p256dh: body.keys.p256dh, auth: body.keys.auth, userAgent: userAgent.slice(0, 300) };
   if (existing) return existing.update(values);
   if ((await PushSubscription.count({ where: { userId } })) >= MAX_PUSH_DEVICES) {
-    throw new AppError(409, 'conflict', `Notifications are already on for ${MAX_PUSH_DEVICES} of your devices. Turn them off on one you no longer use, then try again.`);
+    throw new AppError(
+      409,
+      'conflict',
+      `Notifications are already on for ${MAX_PUSH_DEVICES} of your devices. Turn them off on one you no longer use, then try again.`,
+    );
   }
   return PushSubscription.create({ userId, endpoint: body.endpoint, ...values });
 }

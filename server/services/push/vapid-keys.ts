@@ -18,7 +18,10 @@ export async function loadVapidKeys(config: Config): Promise<VapidKeys> {
   if (vapidPublicKey && vapidPrivateKey) return { publicKey: vapidPublicKey, privateKey: vapidPrivateKey };
   const kept = await AppSetting.findByPk(SETTING);
   if (kept) return kept.value as VapidKeys;
-  await AppSetting.findOrCreate({ where: { key: SETTING }, defaults: { key: SETTING, value: webpush.generateVAPIDKeys() } }).catch(() => null);
+  await AppSetting.findOrCreate({
+    where: { key: SETTING },
+    defaults: { key: SETTING, value: webpush.generateVAPIDKeys() },
+  }).catch(() => null);
   const stored = await AppSetting.findByPk(SETTING);
   if (!stored) throw new Error('The VAPID keys could not be stored in app_settings.');
   return stored.value as VapidKeys;

@@ -8,7 +8,9 @@ export async function digestRestockLines(householdId: string, today: string): Pr
   return suggestions.map((suggestion) => ({
     productName: suggestion.productName,
     reason: `${suggestion.why} ${
-      suggestion.openTodoId ? 'A batch is already on the to-do list.' : `About ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars would last until the next harvest.`
+      suggestion.openTodoId
+        ? 'A batch is already on the to-do list.'
+        : `About ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars would last until the next harvest.`
     }`,
   }));
 }

@@ -1,6 +1,13 @@
 // One read of what the forecast, the restock list and Today work from: products, jars, history and plan.
 import { Op } from 'sequelize';
-import { addDays, addMonths, defaultUseWithinDays, HISTORY_DAYS, type FinishedPortion, type PlannedPortion } from '../../../shared/domain';
+import {
+  addDays,
+  addMonths,
+  defaultUseWithinDays,
+  HISTORY_DAYS,
+  type FinishedPortion,
+  type PlannedPortion,
+} from '../../../shared/domain';
 import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
 
 /** The months a use chart shows, the current one included. */
@@ -43,13 +50,19 @@ export async function stockSnapshot(householdId: string, today: string): Promise
       include: [{ model: Pairing, as: 'pairings', required: true }],
     }),
   ]);
-  const entryOf = new Map(entries.flatMap((entry) => (entry.pairings ?? []).map((pairing) => [pairing.id, entry] as const)));
+  const entryOf = new Map(
+    entries.flatMap((entry) => (entry.pairings ?? []).map((pairing) => [pairing.id, entry] as const)),
+  );
   return {
     householdId,
     today,
     products,
     shelfJars,
-    finished: finishedJars.map((jar) => ({ productId: jar.productId, finishedOn: jar.finishedOn!, tbsp: jar.capacityTbsp })),
+    finished: finishedJars.map((jar) => ({
+      productId: jar.productId,
+      finishedOn: jar.finishedOn!,
+      tbsp: jar.capacityTbsp,
+    })),
     planned: entries.flatMap((entry) =>
       (entry.pairings ?? []).map((pairing) => ({
         id: pairing.id,

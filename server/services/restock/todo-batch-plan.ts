@@ -16,11 +16,17 @@ import { paths } from '../../../shared/paths';
 async function chooseRecipe(product: Product): Promise<Recipe | null> {
   const lastBatch = await Batch.findOne({
     where: { householdId: product.householdId, productId: product.id },
-    order: [['cannedOn', 'DESC'], ['createdAt', 'DESC']],
+    order: [
+      ['cannedOn', 'DESC'],
+      ['createdAt', 'DESC'],
+    ],
     include: [{ model: Recipe, as: 'recipe', required: true }],
   });
   if (lastBatch) return (lastBatch as Batch & { recipe: Recipe }).recipe;
-  return Recipe.findOne({ where: { householdId: product.householdId, productId: product.id }, order: [['createdAt', 'DESC']] });
+  return Recipe.findOne({
+    where: { householdId: product.householdId, productId: product.id },
+    order: [['createdAt', 'DESC']],
+  });
 }
 
 function refuse(message: string, action?: { label: string; href: string }): AppError {
@@ -32,7 +38,9 @@ export function jarSizeFor(recipe: Recipe, product: Product, wanted: JarSize | u
   const size = wanted ?? (tested.includes(product.jarSize) ? product.jarSize : recipe.yieldJarSize);
   if (recipe.baseMinutes[size] === undefined) {
     const names = tested.map((s) => JAR_SIZE_NAMES[s]).join(', ') || 'none';
-    throw refuse(`"${recipe.name}" has no tested time for ${JAR_SIZE_NAMES[size]} jars. Choose a size it was tested for: ${names}.`);
+    throw refuse(
+      `"${recipe.name}" has no tested time for ${JAR_SIZE_NAMES[size]} jars. Choose a size it was tested for: ${names}.`,
+    );
   }
   return size;
 }
@@ -47,7 +55,13 @@ export function restockTitle(plan: BatchPlan): string {
 }
 
 /** Makes the restock to-do, or refuses with what to do first. */
-export async function addRestockTodo(sequelize: Sequelize, household: Household, userId: string, productId: string, input: RestockTodoCreate): Promise<TodoView> {
+export async function addRestockTodo(
+  sequelize: Sequelize,
+  household: Household,
+  userId: string,
+  productId: string,
+  input: RestockTodoCreate,
+): Promise<TodoView> {
   requireConfirmedAltitude(household);
   const product = await Product.findOne({ where: { id: productId, householdId: household.id } });
   if (!product) throw notFound('That product');
@@ -64,14 +78,42 @@ export async function addRestockTodo(sequelize: Sequelize, household: Household,
   const snapshot = await stockSnapshot(household.id, today);
   const { forecasts, suggestions } = restockSuggestions({
     today,
-    products: [{ id: product.id, favourite: product.favourite, minJars: product.minJars, harvestMonths: product.harvestMonths, jarSize: product.jarSize }],
-    jars: snapshot.shelfJars.map((jar) => ({ productId: jar.productId, state: jar.state, remainingTbsp: jar.remainingTbsp })),
+    products: [
+      {
+        id: product.id,
+        favourite: product.favourite,
+        minJars: product.minJars,
+        harvestMonths: product.harvestMonths,
+        jarSize: product.jarSize,
+      },
+    ],
+    jars: snapshot.shelfJars.map((jar) => ({
+      productId: jar.productId,
+      state: jar.state,
+      remainingTbsp: jar.remainingTbsp,
+    })),
     finished: snapshot.finished,
     planned: snapshot.planned,
   });
   const suggestion = suggestions[0];
-  const suggestedInSize = suggestion && Math.ceil((suggestion.suggestedJars * jarFluidOunces(product.jarSize)) / jarFluidOunces(jarSize));
+  const suggestedInSize =
+    suggestion && Math.ceil((suggestion.suggestedJars * jarFluidOunces(product.jarSize)) / jarFluidOunces(jarSize));
   const jars = input.jars ?? suggestedInSize ?? oneTestedBatch(recipe, jarSize);
-  const plan = composeBatchPlan({ household, product, recipe, today, jars, jarSize, reason: suggestion?.reason ?? null, runOutOn: forecasts[0].runOutOn });
-  return createTodo(sequelize, household.id, userId, { title: restockTitle(plan), dueOn: plan.targetOn, kind: 'restock', productId: product.id, batchPlan: plan });
+  const plan = composeBatchPlan({
+    household,
+    product,
+    recipe,
+    today,
+    jars,
+    jarSize,
+    reason: suggestion?.reason ?? null,
+    runOutOn: forecasts[0].runOutOn,
+  });
+  return createTodo(sequelize, household.id, userId, {
+    title: restockTitle(plan),
+    dueOn: plan.targetOn,
+    kind: 'restock',
+    productId: product.id,
+    batchPlan: plan,
+  });
 }

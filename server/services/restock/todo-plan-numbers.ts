@@ -1,6 +1,12 @@
 // The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
-import { formatKitchenAmount, scaleRecipe, type JarSize, type RestockReason, type ScaledIngredient } from '../../../shared/domain';
+import {
+  formatKitchenAmount,
+  scaleRecipe,
+  type JarSize,
+  type RestockReason,
+  type ScaledIngredient,
+} from '../../../shared/domain';
 import { altitudeWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
 import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
@@ -9,7 +15,13 @@ import { targetDate } from './harvest-target';
 
 function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
   const amount = formatKitchenAmount(ingredient.amount, ingredient.unit);
-  return { name: ingredient.name, role: ingredient.role, amount: ingredient.amount, unit: ingredient.unit, text: `${amount} ${ingredient.name}`.trim() };
+  return {
+    name: ingredient.name,
+    role: ingredient.role,
+    amount: ingredient.amount,
+    unit: ingredient.unit,
+    text: `${amount} ${ingredient.name}`.trim(),
+  };
 }
 
 function cannerLoads(jars: number, capacity: number): number[] {
@@ -30,7 +42,14 @@ export interface PlanQuestion {
 
 /** The batch plan for a count of jars, worked out for the household as it is now; its processing may be refused. */
 function planFor({ household, product, recipe, today, jars, jarSize, reason, runOutOn }: PlanQuestion): BatchPlan {
-  const scaled = scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients, kind: product.kind }, { jars, jarSize });
+  const scaled = scaleRecipe(
+    {
+      yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize },
+      ingredients: recipe.ingredients,
+      kind: product.kind,
+    },
+    { jars, jarSize },
+  );
   const processing = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt: household.altitudeFt });
   const target = targetDate(today, product.harvestMonths, runOutOn);
   return {
@@ -48,7 +67,12 @@ function planFor({ household, product, recipe, today, jars, jarSize, reason, run
     scaled,
     processing,
     // Flat lids seal once (common practice); bands and jars are reused.
-    equipment: { jars, newLids: jars, cannerCapacityJars: household.cannerCapacityJars, cannerLoads: cannerLoads(jars, household.cannerCapacityJars) },
+    equipment: {
+      jars,
+      newLids: jars,
+      cannerCapacityJars: household.cannerCapacityJars,
+      cannerLoads: cannerLoads(jars, household.cannerCapacityJars),
+    },
     shopping: {
       produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
       pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
@@ -63,7 +87,11 @@ function planFor({ household, product, recipe, today, jars, jarSize, reason, run
 export function composeBatchPlan(question: PlanQuestion): BatchPlan {
   const plan = planFor(question);
   if (!plan.processing.allowed) {
-    throw new AppError(422, 'not_allowed', `There is no tested process for this batch at ${altitudeWords(question.household.altitudeFt)}: ${plan.processing.reasons.join(' ')}`);
+    throw new AppError(
+      422,
+      'not_allowed',
+      `There is no tested process for this batch at ${altitudeWords(question.household.altitudeFt)}: ${plan.processing.reasons.join(' ')}`,
+    );
   }
   return plan;
 }
@@ -78,14 +106,28 @@ function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
 export function planChanges(made: BatchPlan, now: BatchPlan): string[] {
   const since = `when it was planned on ${dateWords(made.plannedOn)}`;
   const changes: string[] = [];
-  if (made.altitudeFt !== now.altitudeFt) changes.push(`The household’s altitude is now ${altitudeWords(now.altitudeFt)} (it was ${altitudeWords(made.altitudeFt)} ${since}).`);
-  if (processingWords(made) !== processingWords(now)) changes.push(`Processing is now ${processingWords(now)} (it was ${processingWords(made)}).`);
-  if (made.method !== now.method) changes.push(`The recipe now uses a ${METHOD_NAMES[now.method].toLowerCase()} (it was a ${METHOD_NAMES[made.method].toLowerCase()}).`);
+  if (made.altitudeFt !== now.altitudeFt)
+    changes.push(
+      `The household’s altitude is now ${altitudeWords(now.altitudeFt)} (it was ${altitudeWords(made.altitudeFt)} ${since}).`,
+    );
+  if (processingWords(made) !== processingWords(now))
+    changes.push(`Processing is now ${processingWords(now)} (it was ${processingWords(made)}).`);
+  if (made.method !== now.method)
+    changes.push(
+      `The recipe now uses a ${METHOD_NAMES[now.method].toLowerCase()} (it was a ${METHOD_NAMES[made.method].toLowerCase()}).`,
+    );
   if (made.equipment.cannerCapacityJars !== now.equipment.cannerCapacityJars) {
-    changes.push(`Your canner now holds ${now.equipment.cannerCapacityJars} jars a load (it was ${made.equipment.cannerCapacityJars}), so the loads are ${now.equipment.cannerLoads.join(' + ')}.`);
+    changes.push(
+      `Your canner now holds ${now.equipment.cannerCapacityJars} jars a load (it was ${made.equipment.cannerCapacityJars}), so the loads are ${now.equipment.cannerLoads.join(' + ')}.`,
+    );
   }
-  const ingredients = (plan: BatchPlan) => JSON.stringify([...plan.shopping.produce, ...plan.shopping.pantry].map((item) => item.text));
-  if (ingredients(made) !== ingredients(now) || made.headspaceInches !== now.headspaceInches || made.recipeName !== now.recipeName) {
+  const ingredients = (plan: BatchPlan) =>
+    JSON.stringify([...plan.shopping.produce, ...plan.shopping.pantry].map((item) => item.text));
+  if (
+    ingredients(made) !== ingredients(now) ||
+    made.headspaceInches !== now.headspaceInches ||
+    made.recipeName !== now.recipeName
+  ) {
     changes.push(`The recipe “${now.recipeName}” was edited since; the amounts below follow it as it is now.`);
   }
   return changes;
@@ -95,7 +137,14 @@ export function planChanges(made: BatchPlan, now: BatchPlan): string[] {
 function orphaned(made: BatchPlan, why: string): BatchPlan {
   return {
     ...made,
-    processing: { ...made.processing, allowed: false, minutes: null, pressurePsi: null, altitudeAddMinutes: null, reasons: [why] },
+    processing: {
+      ...made.processing,
+      allowed: false,
+      minutes: null,
+      pressurePsi: null,
+      altitudeAddMinutes: null,
+      reasons: [why],
+    },
     changes: [why],
   };
 }
@@ -104,7 +153,10 @@ function orphaned(made: BatchPlan, why: string): BatchPlan {
  * Restock to-dos keep the plan as made; every read works it out again for the household's altitude, canner and
  * recipe as they are now, and says what changed, so canning day never follows stale numbers.
  */
-export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(householdId: string, views: T[]): Promise<T[]> {
+export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
+  householdId: string,
+  views: T[],
+): Promise<T[]> {
   const planned = views.filter((view) => view.batchPlan);
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
@@ -120,11 +172,35 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(ho
     if (!made) return view;
     const recipe = recipes.find((r) => r.id === made.recipeId);
     const product = products.find((p) => p.id === made.productId);
-    if (!recipe || !product) return { ...view, batchPlan: orphaned(made, 'The recipe or product this plan was made from has been removed; plan the batch again from Restock.') };
-    const now = planFor({ household, product, recipe, today: made.plannedOn, jars: made.jars, jarSize: made.jarSize, reason: made.reason, runOutOn: null });
-    const fresh: BatchPlan = { ...now, targetOn: made.targetOn, targetWhy: made.targetWhy, changes: planChanges(made, now) };
-    if (!household.altitudeConfirmedAt) return { ...view, batchPlan: orphaned(fresh, 'Confirm the household’s altitude first: processing depends on it.') };
+    if (!recipe || !product)
+      return {
+        ...view,
+        batchPlan: orphaned(
+          made,
+          'The recipe or product this plan was made from has been removed; plan the batch again from Restock.',
+        ),
+      };
+    const now = planFor({
+      household,
+      product,
+      recipe,
+      today: made.plannedOn,
+      jars: made.jars,
+      jarSize: made.jarSize,
+      reason: made.reason,
+      runOutOn: null,
+    });
+    const fresh: BatchPlan = {
+      ...now,
+      targetOn: made.targetOn,
+      targetWhy: made.targetWhy,
+      changes: planChanges(made, now),
+    };
+    if (!household.altitudeConfirmedAt)
+      return {
+        ...view,
+        batchPlan: orphaned(fresh, 'Confirm the household’s altitude first: processing depends on it.'),
+      };
     return { ...view, batchPlan: fresh };
   });
 }
-

@@ -1,8 +1,21 @@
 // The restock list: each product's forecast, the favourites that need a batch and why, in plain words.
 import { Op } from 'sequelize';
-import { addMonths, jarSizeAdvice, yearOf, restockSuggestions, type Id, type RestockForecast, type RestockSuggestion } from '../../../shared/domain';
+import {
+  addMonths,
+  jarSizeAdvice,
+  yearOf,
+  restockSuggestions,
+  type Id,
+  type RestockForecast,
+  type RestockSuggestion,
+} from '../../../shared/domain';
 import { count, dateWords, tbspPerDay } from '../../../shared/words';
-import type { MonthlyUse, RestockForecastView, RestockSuggestionView, RestockView } from '../../../shared/schemas/restock';
+import type {
+  MonthlyUse,
+  RestockForecastView,
+  RestockSuggestionView,
+  RestockView,
+} from '../../../shared/schemas/restock';
 import { Household, Recipe, Todo, type Product } from '../../db/models';
 import { todayIn } from '../clock';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
@@ -16,7 +29,9 @@ function whyInWords(today: string, suggestion: RestockSuggestion, forecast: Rest
 }
 
 function monthlyUse(snapshot: StockSnapshot, productId: string): MonthlyUse[] {
-  const months = Array.from({ length: CHART_MONTHS }, (_, i) => addMonths(snapshot.today, i + 1 - CHART_MONTHS).slice(0, 7));
+  const months = Array.from({ length: CHART_MONTHS }, (_, i) =>
+    addMonths(snapshot.today, i + 1 - CHART_MONTHS).slice(0, 7),
+  );
   const byMonth = new Map(months.map((month) => [month, 0]));
   for (const entry of snapshot.finished) {
     const month = entry.finishedOn.slice(0, 7);
@@ -28,7 +43,11 @@ function monthlyUse(snapshot: StockSnapshot, productId: string): MonthlyUse[] {
 async function planningState(householdId: string) {
   const [recipes, todos] = await Promise.all([
     Recipe.findAll({ where: { householdId }, attributes: ['productId'] }),
-    Todo.findAll({ where: { householdId, kind: 'restock', done: false, productId: { [Op.ne]: null } }, attributes: ['id', 'productId'], order: [['position', 'ASC']] }),
+    Todo.findAll({
+      where: { householdId, kind: 'restock', done: false, productId: { [Op.ne]: null } },
+      attributes: ['id', 'productId'],
+      order: [['position', 'ASC']],
+    }),
   ]);
   const openTodo = new Map<string, string>();
   for (const todo of todos) if (!openTodo.has(todo.productId!)) openTodo.set(todo.productId!, todo.id);
@@ -47,8 +66,18 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
   const { withRecipe, openTodo } = await planningState(snapshot.householdId);
   const result = restockSuggestions({
     today,
-    products: products.map((p) => ({ id: p.id, favourite: p.favourite, minJars: p.minJars, harvestMonths: p.harvestMonths, jarSize: p.jarSize })),
-    jars: snapshot.shelfJars.map((jar) => ({ productId: jar.productId, state: jar.state, remainingTbsp: jar.remainingTbsp })),
+    products: products.map((p) => ({
+      id: p.id,
+      favourite: p.favourite,
+      minJars: p.minJars,
+      harvestMonths: p.harvestMonths,
+      jarSize: p.jarSize,
+    })),
+    jars: snapshot.shelfJars.map((jar) => ({
+      productId: jar.productId,
+      state: jar.state,
+      remainingTbsp: jar.remainingTbsp,
+    })),
     finished: snapshot.finished,
     planned: snapshot.planned,
   });

@@ -22,21 +22,42 @@ export async function previewPlan(household: Household, recipeId: string, jarSiz
   return recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt });
 }
 
-export async function createBatch(sequelize: Sequelize, household: Household, input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number }, userId: string): Promise<BatchCreated> {
+export async function createBatch(
+  sequelize: Sequelize,
+  household: Household,
+  input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number },
+  userId: string,
+): Promise<BatchCreated> {
   requireConfirmedAltitude(household);
-  const [product, recipe] = await Promise.all([findProduct(household.id, input.productId), findRecipe(household.id, input.recipeId)]);
+  const [product, recipe] = await Promise.all([
+    findProduct(household.id, input.productId),
+    findRecipe(household.id, input.recipeId),
+  ]);
   if (recipe.productId !== product.id) {
-    throw new AppError(400, 'invalid_input', 'That recipe makes another product. Choose a recipe for this product.', { recipeId: 'This recipe is for another product.' });
-  }
-  if (input.cannedOn > todayIn(household.timeZone)) {
-    throw new AppError(400, 'invalid_input', 'A batch cannot be dated in the future.', { cannedOn: 'Use today or an earlier day.' });
-  }
-  if (input.seals === 'to-check' && input.cannedOn !== todayIn(household.timeZone)) {
-    throw new AppError(400, 'invalid_input', 'Seals are left to check only for a batch processed today. For an earlier batch, check the seals and enter how many sealed.', {
-      seals: 'Choose “Seals checked already” for an earlier day.',
+    throw new AppError(400, 'invalid_input', 'That recipe makes another product. Choose a recipe for this product.', {
+      recipeId: 'This recipe is for another product.',
     });
   }
-  const plan = recipeProcessingPlan(recipe, { jarSize: input.jarSize, method: input.method, altitudeFt: household.altitudeFt });
+  if (input.cannedOn > todayIn(household.timeZone)) {
+    throw new AppError(400, 'invalid_input', 'A batch cannot be dated in the future.', {
+      cannedOn: 'Use today or an earlier day.',
+    });
+  }
+  if (input.seals === 'to-check' && input.cannedOn !== todayIn(household.timeZone)) {
+    throw new AppError(
+      400,
+      'invalid_input',
+      'Seals are left to check only for a batch processed today. For an earlier batch, check the seals and enter how many sealed.',
+      {
+        seals: 'Choose “Seals checked already” for an earlier day.',
+      },
+    );
+  }
+  const plan = recipeProcessingPlan(recipe, {
+    jarSize: input.jarSize,
+    method: input.method,
+    altitudeFt: household.altitudeFt,
+  });
   if (!plan.allowed) throw notAllowed(plan);
 
   const { batch, jars } = await withFreshJarCodes(sequelize, (transaction) =>
@@ -62,12 +83,27 @@ export async function createBatch(sequelize: Sequelize, household: Household, in
     ),
   );
   const shelf = shelfClock(household);
-  return { batch: batchView(batch, product, recipe, jars.map((j) => j.state)), jars: jars.map((jar) => jarView(jar, batch, product, shelf)), plan };
+  return {
+    batch: batchView(
+      batch,
+      product,
+      recipe,
+      jars.map((j) => j.state),
+    ),
+    jars: jars.map((jar) => jarView(jar, batch, product, shelf)),
+    plan,
+  };
 }
 
 export async function listBatches(householdId: string) {
   const [batches, products, recipes, jars] = await Promise.all([
-    Batch.findAll({ where: { householdId }, order: [['cannedOn', 'DESC'], ['createdAt', 'DESC']] }),
+    Batch.findAll({
+      where: { householdId },
+      order: [
+        ['cannedOn', 'DESC'],
+        ['createdAt', 'DESC'],
+      ],
+    }),
     Product.findAll({ where: { householdId } }),
     Recipe.findAll({ where: { householdId }, attributes: ['id', 'name'] }),
     Jar.findAll({ where: { householdId }, attributes: ['batchId', 'state'] }),
@@ -75,7 +111,12 @@ export async function listBatches(householdId: string) {
   const productById = new Map(products.map((p) => [p.id, p]));
   const recipeById = new Map(recipes.map((r) => [r.id, r]));
   return batches.map((batch) =>
-    batchView(batch, productById.get(batch.productId)!, batch.recipeId ? (recipeById.get(batch.recipeId) ?? null) : null, jars.filter((j) => j.batchId === batch.id).map((j) => j.state)),
+    batchView(
+      batch,
+      productById.get(batch.productId)!,
+      batch.recipeId ? (recipeById.get(batch.recipeId) ?? null) : null,
+      jars.filter((j) => j.batchId === batch.id).map((j) => j.state),
+    ),
   );
 }
 
@@ -91,13 +132,29 @@ export async function batchDetail(household: Household, batchId: string): Promis
     findProduct(household.id, batch.productId),
     batch.recipeId ? Recipe.findOne({ where: { householdId: household.id, id: batch.recipeId } }) : null,
     Jar.findAll({ where: { batchId: batch.id }, order: [['code', 'ASC']] }),
-    JarEvent.findAll({ where: { batchId: batch.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['happenedOn', 'DESC'], ['createdAt', 'DESC']] }),
-    BatchProcessing.findAll({ where: { batchId: batch.id }, include: [{ model: User, as: 'user', attributes: ['name'] }], order: [['number', 'ASC']] }),
+    JarEvent.findAll({
+      where: { batchId: batch.id },
+      include: [{ model: User, as: 'user', attributes: ['name'] }],
+      order: [
+        ['happenedOn', 'DESC'],
+        ['createdAt', 'DESC'],
+      ],
+    }),
+    BatchProcessing.findAll({
+      where: { batchId: batch.id },
+      include: [{ model: User, as: 'user', attributes: ['name'] }],
+      order: [['number', 'ASC']],
+    }),
   ]);
   const shelf = shelfClock(household);
   const codes = new Map(jars.map((jar) => [jar.id, jar.code]));
   return {
-    ...batchView(batch, product, recipe, jars.map((j) => j.state)),
+    ...batchView(
+      batch,
+      product,
+      recipe,
+      jars.map((j) => j.state),
+    ),
     jars: jars.map((jar) => jarView(jar, batch, product, shelf)),
     history: events.map((event) => ({
       id: event.id,

@@ -15,13 +15,21 @@ const AFTER: Record<Reversible, JarState> = { opened: 'opened', finished: 'finis
 
 export function jarBefore(jar: Jar): JarBefore {
   const { state, openedOn, useBy, finishedOn, discardedOn, remainingTbsp } = jar;
-  return { state, openedOn: openedOn ?? null, useBy: useBy ?? null, finishedOn: finishedOn ?? null, discardedOn: discardedOn ?? null, remainingTbsp: Number(remainingTbsp) };
+  return {
+    state,
+    openedOn: openedOn ?? null,
+    useBy: useBy ?? null,
+    finishedOn: finishedOn ?? null,
+    discardedOn: discardedOn ?? null,
+    remainingTbsp: Number(remainingTbsp),
+  };
 }
 
 /** Events written before undo existed carry no snapshot; their earlier state follows from the jar's dates. */
 function inferredBefore(kind: Reversible, jar: Jar): JarBefore {
   const now = jarBefore(jar);
-  if (kind === 'opened') return { ...now, state: 'sealed', openedOn: null, useBy: null, remainingTbsp: Number(jar.capacityTbsp) };
+  if (kind === 'opened')
+    return { ...now, state: 'sealed', openedOn: null, useBy: null, remainingTbsp: Number(jar.capacityTbsp) };
   const wasOpened = kind === 'finished' || jar.openedOn !== null;
   // How much a finished jar held is not recorded; a full jar's worth errs toward showing it, not hiding it.
   const remainingTbsp = kind === 'finished' || now.remainingTbsp <= 0 ? Number(jar.capacityTbsp) : now.remainingTbsp;
@@ -29,7 +37,15 @@ function inferredBefore(kind: Reversible, jar: Jar): JarBefore {
 }
 
 const latestEvent = (jarId: string, transaction?: Transaction) =>
-  JarEvent.findOne({ where: { jarId }, order: [['createdAt', 'DESC'], ['id', 'DESC']], include: [{ model: User, as: 'user', attributes: ['name'] }], transaction });
+  JarEvent.findOne({
+    where: { jarId },
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    include: [{ model: User, as: 'user', attributes: ['name'] }],
+    transaction,
+  });
 
 /** The jar's latest change, which is what a put-back would reverse. */
 export async function lastJarChange(householdId: string, jarId: string): Promise<JarChange | null> {
@@ -50,36 +66,65 @@ export async function lastJarChange(householdId: string, jarId: string): Promise
  * locked while we look), so two people undoing at once, or an undo racing a new action, cannot both win.
  * Helpers may undo their own action for a short while; cooks and keepers may put a jar back any time.
  */
-export async function undoJarEvent(sequelize: Sequelize, household: Household, role: Role, userId: string, jarId: string, eventId: string): Promise<JarActed> {
+export async function undoJarEvent(
+  sequelize: Sequelize,
+  household: Household,
+  role: Role,
+  userId: string,
+  jarId: string,
+  eventId: string,
+): Promise<JarActed> {
   try {
     return await sequelize.transaction(async (transaction) => {
-      const jar = await Jar.findOne({ where: { id: jarId, householdId: household.id }, transaction, lock: transaction.LOCK.UPDATE });
+      const jar = await Jar.findOne({
+        where: { id: jarId, householdId: household.id },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       if (!jar) throw notFound('That jar');
       const event = await latestEvent(jar.id, transaction);
       if (!event || event.id !== eventId) {
-        throw conflict(`Jar ${jar.code} has changed since (it is ${jar.state} now), so that can no longer be undone. Refresh to see its state.`);
+        throw conflict(
+          `Jar ${jar.code} has changed since (it is ${jar.state} now), so that can no longer be undone. Refresh to see its state.`,
+        );
       }
-      if (!(REVERSIBLE as readonly string[]).includes(event.kind)) throw conflict(`Jar ${jar.code} has nothing to put back.`);
+      if (!(REVERSIBLE as readonly string[]).includes(event.kind))
+        throw conflict(`Jar ${jar.code} has nothing to put back.`);
       const kind = event.kind as Reversible;
       if (!can(role, 'cook')) {
         const recent = clock.now().getTime() - event.createdAt.getTime() <= JAR_UNDO_MINUTES * 60_000;
         if (event.userId !== userId || !recent) {
-          throw forbidden(`A helper can undo only their own change, within ${JAR_UNDO_MINUTES} minutes. Ask a cook or keeper to put jar ${jar.code} back.`);
+          throw forbidden(
+            `A helper can undo only their own change, within ${JAR_UNDO_MINUTES} minutes. Ask a cook or keeper to put jar ${jar.code} back.`,
+          );
         }
       }
       const before = event.stateBefore ?? inferredBefore(kind, jar);
       const [count] = await Jar.update(before, { where: { id: jar.id, state: AFTER[kind] }, transaction });
       if (count === 0) throw conflict(`Jar ${jar.code} is ${jar.state} now; refresh to see its state.`);
       const restored = await JarEvent.create(
-        { householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: 'restored', userId, happenedOn: todayIn(household.timeZone), undoesEventId: event.id, stateBefore: jarBefore(jar) },
+        {
+          householdId: household.id,
+          jarId: jar.id,
+          batchId: jar.batchId,
+          kind: 'restored',
+          userId,
+          happenedOn: todayIn(household.timeZone),
+          undoesEventId: event.id,
+          stateBefore: jarBefore(jar),
+        },
         { transaction },
       );
-      const [batch, product] = await Promise.all([Batch.findByPk(jar.batchId, { transaction }), Product.findByPk(jar.productId, { transaction })]);
+      const [batch, product] = await Promise.all([
+        Batch.findByPk(jar.batchId, { transaction }),
+        Product.findByPk(jar.productId, { transaction }),
+      ]);
       await jar.reload({ transaction });
       return { jar: jarView(jar, batch!, product!, shelfClock(household)), eventId: restored.id };
     });
   } catch (error) {
-    if (error instanceof UniqueConstraintError) throw conflict('That change was already undone. Refresh to see the jar now.');
+    if (error instanceof UniqueConstraintError)
+      throw conflict('That change was already undone. Refresh to see the jar now.');
     throw error;
   }
 }

@@ -15,22 +15,45 @@ const withParts = [
   { model: Product, as: 'product', required: true },
 ];
 
-export async function listJars(household: Household, filter: { state?: JarState | 'all'; productId?: string; batchId?: string }) {
+export async function listJars(
+  household: Household,
+  filter: { state?: JarState | 'all'; productId?: string; batchId?: string },
+) {
   const where: WhereOptions<Jar> = { householdId: household.id };
   if (filter.state !== 'all') Object.assign(where, { state: filter.state ?? { [Op.in]: ['sealed', 'opened'] } });
   if (filter.productId) Object.assign(where, { productId: filter.productId });
   if (filter.batchId) Object.assign(where, { batchId: filter.batchId });
-  const jars = (await Jar.findAll({ where, include: withParts, order: [['bestBy', 'ASC'], ['code', 'ASC']] })) as JarWithParts[];
+  const jars = (await Jar.findAll({
+    where,
+    include: withParts,
+    order: [
+      ['bestBy', 'ASC'],
+      ['code', 'ASC'],
+    ],
+  })) as JarWithParts[];
   const clock = shelfClock(household);
   return jars.map((jar) => jarView(jar, jar.batch, jar.product, clock));
 }
 
 const FROM: Record<JarAction, JarState[]> = { open: ['sealed'], finish: ['opened'], discard: ['sealed', 'opened'] };
-const EVENT: Record<JarAction, 'opened' | 'finished' | 'discarded'> = { open: 'opened', finish: 'finished', discard: 'discarded' };
+const EVENT: Record<JarAction, 'opened' | 'finished' | 'discarded'> = {
+  open: 'opened',
+  finish: 'finished',
+  discard: 'discarded',
+};
 
 function refusal(action: JarAction, jar: Jar): string {
-  const already = { opened: `was opened on ${jar.openedOn}`, finished: `was finished on ${jar.finishedOn}`, discarded: `was discarded on ${jar.discardedOn}`, sealed: 'is still sealed' }[jar.state];
-  const what = { open: 'Only a sealed jar can be opened.', finish: 'Only an opened jar can be finished; open it first.', discard: 'A finished or discarded jar cannot be discarded.' }[action];
+  const already = {
+    opened: `was opened on ${jar.openedOn}`,
+    finished: `was finished on ${jar.finishedOn}`,
+    discarded: `was discarded on ${jar.discardedOn}`,
+    sealed: 'is still sealed',
+  }[jar.state];
+  const what = {
+    open: 'Only a sealed jar can be opened.',
+    finish: 'Only an opened jar can be finished; open it first.',
+    discard: 'A finished or discarded jar cannot be discarded.',
+  }[action];
   return `Jar ${jar.code} ${already}. ${what} Refresh to see its state now.`;
 }
 
@@ -38,24 +61,50 @@ function refusal(action: JarAction, jar: Jar): string {
  * Moves a jar along sealed -> opened -> finished, or to discarded. The conditional UPDATE is the
  * lock: of many people acting on one jar at once, exactly one changes it and the others get 409.
  */
-export async function actOnJar(sequelize: Sequelize, household: Household, jarId: string, action: JarAction, userId: string): Promise<JarActed> {
+export async function actOnJar(
+  sequelize: Sequelize,
+  household: Household,
+  jarId: string,
+  action: JarAction,
+  userId: string,
+): Promise<JarActed> {
   const today = todayIn(household.timeZone);
   return sequelize.transaction(async (transaction) => {
-    const jar = (await Jar.findOne({ where: { id: jarId, householdId: household.id }, include: withParts, transaction })) as JarWithParts | null;
+    const jar = (await Jar.findOne({
+      where: { id: jarId, householdId: household.id },
+      include: withParts,
+      transaction,
+    })) as JarWithParts | null;
     if (!jar) throw notFound('That jar');
     const changes: Partial<Jar> =
       action === 'open'
-        ? { state: 'opened', openedOn: today, useBy: useBy(today, jar.product.useWithinDays ?? defaultUseWithinDays(jar.product.kind)) }
+        ? {
+            state: 'opened',
+            openedOn: today,
+            useBy: useBy(today, jar.product.useWithinDays ?? defaultUseWithinDays(jar.product.kind)),
+          }
         : action === 'finish'
           ? { state: 'finished', finishedOn: today, remainingTbsp: 0 }
           : { state: 'discarded', discardedOn: today };
-    const [count, rows] = await Jar.update(changes, { where: { id: jar.id, state: { [Op.in]: FROM[action] } }, returning: true, transaction });
+    const [count, rows] = await Jar.update(changes, {
+      where: { id: jar.id, state: { [Op.in]: FROM[action] } },
+      returning: true,
+      transaction,
+    });
     if (count === 0) {
       await jar.reload({ transaction });
       throw conflict(refusal(action, jar));
     }
     const event = await JarEvent.create(
-      { householdId: household.id, jarId: jar.id, batchId: jar.batchId, kind: EVENT[action], userId, happenedOn: today, stateBefore: jarBefore(jar) },
+      {
+        householdId: household.id,
+        jarId: jar.id,
+        batchId: jar.batchId,
+        kind: EVENT[action],
+        userId,
+        happenedOn: today,
+        stateBefore: jarBefore(jar),
+      },
       { transaction },
     );
     return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
@@ -70,14 +119,25 @@ export async function openingAdvice(household: Household, jarId: string): Promis
   const jar = await Jar.findOne({ where: { id: jarId, householdId: household.id }, include: withParts });
   if (!jar) throw notFound('That jar');
   const others = (await Jar.findAll({
-    where: { householdId: household.id, productId: jar.productId, id: { [Op.ne]: jar.id }, state: { [Op.in]: ['sealed', 'opened'] } },
+    where: {
+      householdId: household.id,
+      productId: jar.productId,
+      id: { [Op.ne]: jar.id },
+      state: { [Op.in]: ['sealed', 'opened'] },
+    },
     include: withParts,
-    order: [['useBy', 'ASC'], ['bestBy', 'ASC'], ['code', 'ASC']],
+    order: [
+      ['useBy', 'ASC'],
+      ['bestBy', 'ASC'],
+      ['code', 'ASC'],
+    ],
   })) as JarWithParts[];
   const cannedOn = (jar as JarWithParts).batch.cannedOn;
   const clock = shelfClock(household);
   return {
-    openedJars: others.filter((other) => other.state === 'opened').map((other) => jarView(other, other.batch, other.product, clock)),
+    openedJars: others
+      .filter((other) => other.state === 'opened')
+      .map((other) => jarView(other, other.batch, other.product, clock)),
     olderSealed: others
       .filter((other) => other.state === 'sealed' && other.batch.cannedOn < cannedOn)
       .sort((a, b) => a.batch.cannedOn.localeCompare(b.batch.cannedOn) || a.code.localeCompare(b.code))
@@ -87,7 +147,9 @@ export async function openingAdvice(household: Household, jarId: string): Promis
 
 export async function jarInHousehold(household: Household, rawCode: string) {
   const code = normaliseJarCode(rawCode);
-  const jar = code ? ((await Jar.findOne({ where: { code, householdId: household.id }, include: withParts })) as JarWithParts | null) : null;
+  const jar = code
+    ? ((await Jar.findOne({ where: { code, householdId: household.id }, include: withParts })) as JarWithParts | null)
+    : null;
   if (!jar) throw notFound('That jar');
   return jarView(jar, jar.batch, jar.product, shelfClock(household));
 }
@@ -97,7 +159,10 @@ export async function jarByCode(rawCode: string, userId: string): Promise<JarByC
   const code = normaliseJarCode(rawCode);
   const jar = code ? await Jar.findOne({ where: { code }, attributes: ['id', 'householdId'] }) : null;
   const membership = jar
-    ? await Membership.findOne({ where: { householdId: jar.householdId, userId }, include: [{ model: Household, as: 'household', required: true }] })
+    ? await Membership.findOne({
+        where: { householdId: jar.householdId, userId },
+        include: [{ model: Household, as: 'household', required: true }],
+      })
     : null;
   if (!membership?.household) throw notFound('That jar');
   return {

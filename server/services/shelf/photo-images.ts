@@ -12,7 +12,11 @@ sharp.concurrency(1);
 sharp.cache(false);
 
 const tooLarge = () =>
-  new AppError(413, 'too_large', `That image is too large to show: ${PHOTO_MAX_PIXELS / 1_000_000} megapixels at most. Choose a camera or phone photo, or make it smaller first.`);
+  new AppError(
+    413,
+    'too_large',
+    `That image is too large to show: ${PHOTO_MAX_PIXELS / 1_000_000} megapixels at most. Choose a camera or phone photo, or make it smaller first.`,
+  );
 
 /**
  * Decodes the upload and writes each kept version as a fresh WebP. Dimensions are read from
@@ -45,4 +49,9 @@ export async function reencodePhoto(bytes: Buffer): Promise<Record<PhotoSize, Bu
 }
 
 const isPixelLimit = (error: unknown) => /pixel limit/i.test(String((error as Error)?.message));
-const unreadable = () => new AppError(415, 'unsupported_type', 'That photo could not be read; it may be damaged. Choose another JPEG, PNG or WebP photo.');
+const unreadable = () =>
+  new AppError(
+    415,
+    'unsupported_type',
+    'That photo could not be read; it may be damaged. Choose another JPEG, PNG or WebP photo.',
+  );

@@ -19,7 +19,10 @@ export interface MoveReport {
  */
 export async function movePhotosToStore(disk: PhotoStorage, store: PhotoStorage): Promise<MoveReport> {
   const report: MoveReport = { moved: 0, missing: [], refused: [] };
-  const batches = await Batch.findAll({ where: { photoKey: { [Op.regexp]: '\\.(jpg|png|webp)$' } }, order: [['createdAt', 'ASC']] });
+  const batches = await Batch.findAll({
+    where: { photoKey: { [Op.regexp]: '\\.(jpg|png|webp)$' } },
+    order: [['createdAt', 'ASC']],
+  });
   for (const batch of batches) {
     const oldKey = batch.photoKey!;
     if (!isKeptAsUploaded(oldKey)) continue;
@@ -35,7 +38,10 @@ export async function movePhotosToStore(disk: PhotoStorage, store: PhotoStorage)
       report.refused.push({ batchId: batch.id, reason: (error as Error).message });
       continue;
     }
-    const [updated] = await Batch.update({ photoKey, photoType: 'image/webp' }, { where: { id: batch.id, photoKey: oldKey } });
+    const [updated] = await Batch.update(
+      { photoKey, photoType: 'image/webp' },
+      { where: { id: batch.id, photoKey: oldKey } },
+    );
     if (updated === 1) report.moved += 1;
   }
   return report;

@@ -17,13 +17,16 @@ export const isKeptAsUploaded = (photoKey: string) => /\.(jpg|png|webp)$/.test(p
 export async function storeVersions(storage: PhotoStorage, householdId: string, bytes: Buffer) {
   const versions = await reencodePhoto(bytes);
   const photoKey = `${householdId}/${randomUUID()}`;
-  for (const size of Object.keys(PHOTO_SIZES) as PhotoSize[]) await storage.save(photoObjectKey(photoKey, size), versions[size], 'image/webp');
+  for (const size of Object.keys(PHOTO_SIZES) as PhotoSize[])
+    await storage.save(photoObjectKey(photoKey, size), versions[size], 'image/webp');
   return { photoKey, versions };
 }
 
 export async function removeVersions(storage: PhotoStorage, photoKey: string) {
   if (isKeptAsUploaded(photoKey)) return storage.remove(photoKey);
-  await Promise.all((Object.keys(PHOTO_SIZES) as PhotoSize[]).map((size) => storage.remove(photoObjectKey(photoKey, size))));
+  await Promise.all(
+    (Object.keys(PHOTO_SIZES) as PhotoSize[]).map((size) => storage.remove(photoObjectKey(photoKey, size))),
+  );
 }
 
 /** Stores a batch photo, judged by its bytes, never by its name or the type the browser claims. */
@@ -31,7 +34,11 @@ export async function saveBatchPhoto(storage: PhotoStorage, householdId: string,
   const batch = await findBatch(householdId, batchId);
   const sniffed = await fileTypeFromBuffer(bytes);
   if (!sniffed || !PHOTO_TYPES.has(sniffed.mime)) {
-    throw new AppError(415, 'unsupported_type', 'That file is not a JPEG, PNG or WebP photo. Choose a photo taken with a camera or phone.');
+    throw new AppError(
+      415,
+      'unsupported_type',
+      'That file is not a JPEG, PNG or WebP photo. Choose a photo taken with a camera or phone.',
+    );
   }
   const { photoKey } = await storeVersions(storage, householdId, bytes);
   const previous = batch.photoKey;
@@ -41,7 +48,8 @@ export async function saveBatchPhoto(storage: PhotoStorage, householdId: string,
 
 export async function readBatchPhoto(storage: PhotoStorage, householdId: string, batchId: string, size: PhotoSize) {
   const batch = await findBatch(householdId, batchId);
-  const key = batch.photoKey && (isKeptAsUploaded(batch.photoKey) ? batch.photoKey : photoObjectKey(batch.photoKey, size));
+  const key =
+    batch.photoKey && (isKeptAsUploaded(batch.photoKey) ? batch.photoKey : photoObjectKey(batch.photoKey, size));
   const bytes = key ? await storage.read(key) : null;
   if (!bytes || !batch.photoType) throw notFound('That batch’s photo');
   return { bytes, type: batch.photoType };

@@ -6,7 +6,12 @@ import { productView } from './views';
 
 function sameName(error: unknown, name: string | undefined): never {
   if (error instanceof UniqueConstraintError) {
-    throw new AppError(409, 'conflict', `The household already has a product called “${name}”. Choose another name or edit that one.`, { name: 'That name is taken.' });
+    throw new AppError(
+      409,
+      'conflict',
+      `The household already has a product called “${name}”. Choose another name or edit that one.`,
+      { name: 'That name is taken.' },
+    );
   }
   throw error;
 }

@@ -79,7 +79,9 @@ export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnT
 }
 
 export function batchView(batch: Batch, product: Product, recipe: Recipe | null, jarStates: JarState[]): BatchView {
-  const jarCounts = Object.fromEntries(JAR_STATES.map((state) => [state, jarStates.filter((s) => s === state).length])) as Record<JarState, number>;
+  const jarCounts = Object.fromEntries(
+    JAR_STATES.map((state) => [state, jarStates.filter((s) => s === state).length]),
+  ) as Record<JarState, number>;
   return {
     id: batch.id,
     productId: product.id,

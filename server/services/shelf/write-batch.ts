@@ -1,6 +1,13 @@
 // Writing one batch and its jars: the part the new-batch form and the CSV import share.
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
-import { bestQualityBy, defaultUseWithinDays, jarCapacityTbsp, useBy, type JarSize, type Method } from '../../../shared/domain';
+import {
+  bestQualityBy,
+  defaultUseWithinDays,
+  jarCapacityTbsp,
+  useBy,
+  type JarSize,
+  type Method,
+} from '../../../shared/domain';
 import { Batch, BatchProcessing, Jar, JarEvent, type Household, type Product } from '../../db/models';
 import { newJarCode } from './jar-codes';
 
@@ -26,10 +33,20 @@ export interface BatchRecord {
  * With `sealsToCheckFrom` (recorded right after processing) every jar is sealed with its seal still to check,
  * and the batch's first processing is kept with the time it came out of the canner.
  */
-export async function writeBatch(household: Household, product: Product, record: BatchRecord, userId: string, transaction: Transaction, sealsToCheckFrom?: Date) {
+export async function writeBatch(
+  household: Household,
+  product: Product,
+  record: BatchRecord,
+  userId: string,
+  transaction: Transaction,
+  sealsToCheckFrom?: Date,
+) {
   const toCheck = sealsToCheckFrom !== undefined;
   if (toCheck) record = { ...record, jarsSealed: record.jarsFilled };
-  const batch = await Batch.create({ householdId: household.id, altitudeFt: household.altitudeFt, createdBy: userId, ...record }, { transaction });
+  const batch = await Batch.create(
+    { householdId: household.id, altitudeFt: household.altitudeFt, createdBy: userId, ...record },
+    { transaction },
+  );
   const processing = toCheck
     ? await BatchProcessing.create(
         {
@@ -49,7 +66,10 @@ export async function writeBatch(household: Household, product: Product, record:
     : null;
   const capacityTbsp = jarCapacityTbsp(record.jarSize);
   const bestBy = bestQualityBy(record.cannedOn, household.bestQualityMonths);
-  const unsealedUseWithin = Math.min(product.useWithinDays ?? defaultUseWithinDays(product.kind), UNSEALED_USE_WITHIN_DAYS);
+  const unsealedUseWithin = Math.min(
+    product.useWithinDays ?? defaultUseWithinDays(product.kind),
+    UNSEALED_USE_WITHIN_DAYS,
+  );
   const jars = await Jar.bulkCreate(
     Array.from({ length: record.jarsFilled }, (_, index) => {
       const sealed = index < record.jarsSealed;
@@ -73,8 +93,26 @@ export async function writeBatch(household: Household, product: Product, record:
   );
   await JarEvent.bulkCreate(
     jars.flatMap((jar) => [
-      { householdId: household.id, jarId: jar.id, batchId: batch.id, kind: 'filled' as const, userId, happenedOn: record.cannedOn },
-      ...(jar.unsealed ? [{ householdId: household.id, jarId: jar.id, batchId: batch.id, kind: 'unsealed' as const, userId, happenedOn: record.cannedOn }] : []),
+      {
+        householdId: household.id,
+        jarId: jar.id,
+        batchId: batch.id,
+        kind: 'filled' as const,
+        userId,
+        happenedOn: record.cannedOn,
+      },
+      ...(jar.unsealed
+        ? [
+            {
+              householdId: household.id,
+              jarId: jar.id,
+              batchId: batch.id,
+              kind: 'unsealed' as const,
+              userId,
+              happenedOn: record.cannedOn,
+            },
+          ]
+        : []),
     ]),
     { transaction },
   );
@@ -82,7 +120,10 @@ export async function writeBatch(household: Household, product: Product, record:
 }
 
 /** A fresh jar code colliding with an existing one is rare; the whole write is retried with new codes. */
-export async function withFreshJarCodes<T>(sequelize: Sequelize, work: (transaction: Transaction) => Promise<T>): Promise<T> {
+export async function withFreshJarCodes<T>(
+  sequelize: Sequelize,
+  work: (transaction: Transaction) => Promise<T>,
+): Promise<T> {
   for (let attempt = 1; ; attempt += 1) {
     try {
       return await sequelize.transaction(work);

@@ -12,7 +12,11 @@ export async function copyWeek(sequelize: Sequelize, householdId: string, from: 
     const sources = await PlanEntry.findAll({
       where: { householdId, date: weekDates(from) },
       include: [{ model: Pairing, as: 'pairings' }],
-      order: [['date', 'ASC'], ['slot', 'ASC'], ['position', 'ASC']],
+      order: [
+        ['date', 'ASC'],
+        ['slot', 'ASC'],
+        ['position', 'ASC'],
+      ],
       transaction,
     });
     const nextPosition = new Map<string, number>();
@@ -21,11 +25,31 @@ export async function copyWeek(sequelize: Sequelize, householdId: string, from: 
       const key = `${date}|${source.slot}`;
       const position = nextPosition.get(key) ?? slotOf(targets, date, source.slot).length;
       nextPosition.set(key, position + 1);
-      return { source, row: { householdId, date, slot: source.slot, position, title: source.title, mealId: source.mealId, servings: source.servings, eaters: source.eaters } };
+      return {
+        source,
+        row: {
+          householdId,
+          date,
+          slot: source.slot,
+          position,
+          title: source.title,
+          mealId: source.mealId,
+          servings: source.servings,
+          eaters: source.eaters,
+        },
+      };
     });
-    const created = await PlanEntry.bulkCreate(copies.map((c) => c.row), { transaction });
+    const created = await PlanEntry.bulkCreate(
+      copies.map((c) => c.row),
+      { transaction },
+    );
     const pairings = copies.flatMap((c, i) =>
-      (c.source.pairings ?? []).map((p) => ({ householdId, planEntryId: created[i].id, productId: p.productId, tbspPerServing: p.tbspPerServing })),
+      (c.source.pairings ?? []).map((p) => ({
+        householdId,
+        planEntryId: created[i].id,
+        productId: p.productId,
+        tbspPerServing: p.tbspPerServing,
+      })),
     );
     if (pairings.length) await Pairing.bulkCreate(pairings, { transaction });
     return created.length;

@@ -15,14 +15,23 @@ export interface FlagRecipe {
 }
 
 /** What in a recipe goes against each diet, and how to say so. */
-const DIET_CONFLICTS: Record<DietTag, { finds: (ingredient: RecipeIngredient) => boolean; says: string; word: string }> = {
-  'no-added-sugar': { finds: (i) => i.role === 'sweetener' && /sugar/i.test(i.name), says: 'sweetens with sugar', word: 'Sugar' },
+const DIET_CONFLICTS: Record<
+  DietTag,
+  { finds: (ingredient: RecipeIngredient) => boolean; says: string; word: string }
+> = {
+  'no-added-sugar': {
+    finds: (i) => i.role === 'sweetener' && /sugar/i.test(i.name),
+    says: 'sweetens with sugar',
+    word: 'Sugar',
+  },
   'low-salt': { finds: (i) => /salt/i.test(i.name), says: 'has added salt', word: 'Salt' },
 };
 
 /** The diets a product's recipes go against, by the same rules as the flags. */
 export function dietConflictsOf(productId: string, recipes: FlagRecipe[]): DietTag[] {
-  return (Object.keys(DIET_CONFLICTS) as DietTag[]).filter((tag) => recipes.some((r) => r.productId === productId && r.ingredients.some(DIET_CONFLICTS[tag].finds)));
+  return (Object.keys(DIET_CONFLICTS) as DietTag[]).filter((tag) =>
+    recipes.some((r) => r.productId === productId && r.ingredients.some(DIET_CONFLICTS[tag].finds)),
+  );
 }
 
 const firstName = (name: string) => name.split(' ')[0];

@@ -18,29 +18,54 @@ function view(meal: MealWithProducts): MealView {
 }
 
 export async function listMeals(householdId: string) {
-  const meals = await Meal.findAll({ where: { householdId }, include: [{ model: MealProduct, as: 'products' }], order: [['name', 'ASC'], ['id', 'ASC']] });
+  const meals = await Meal.findAll({
+    where: { householdId },
+    include: [{ model: MealProduct, as: 'products' }],
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+  });
   return meals.map(view);
 }
 
 async function findMeal(householdId: string, id: string, transaction?: Transaction) {
-  const meal = await Meal.findOne({ where: { id, householdId }, include: [{ model: MealProduct, as: 'products' }], transaction });
+  const meal = await Meal.findOne({
+    where: { id, householdId },
+    include: [{ model: MealProduct, as: 'products' }],
+    transaction,
+  });
   if (!meal) throw notFound('That meal');
   return meal;
 }
 
-async function replaceProducts(householdId: string, mealId: string, products: NonNullable<MealBody['products']>, transaction: Transaction) {
+async function replaceProducts(
+  householdId: string,
+  mealId: string,
+  products: NonNullable<MealBody['products']>,
+  transaction: Transaction,
+) {
   const ids = [...new Set(products.map((p) => p.productId))];
-  if (ids.length !== products.length) throw new AppError(400, 'invalid_input', 'List each product once.', { products: 'List each product once.' });
+  if (ids.length !== products.length)
+    throw new AppError(400, 'invalid_input', 'List each product once.', { products: 'List each product once.' });
   if (ids.length && (await Product.count({ where: { id: ids, householdId }, transaction })) !== ids.length) {
-    throw new AppError(400, 'invalid_input', 'One of those products is not on this household’s list.', { products: 'Choose products of this household.' });
+    throw new AppError(400, 'invalid_input', 'One of those products is not on this household’s list.', {
+      products: 'Choose products of this household.',
+    });
   }
   await MealProduct.destroy({ where: { mealId, householdId }, transaction });
-  await MealProduct.bulkCreate(products.map((p) => ({ householdId, mealId, productId: p.productId, tbspPerServing: p.tbspPerServing })), { transaction });
+  await MealProduct.bulkCreate(
+    products.map((p) => ({ householdId, mealId, productId: p.productId, tbspPerServing: p.tbspPerServing })),
+    { transaction },
+  );
 }
 
 export async function createMeal(sequelize: Sequelize, householdId: string, body: MealBody) {
   const id = await sequelize.transaction(async (transaction) => {
-    const meal = await Meal.create({ householdId, name: body.name, tags: body.tags, usualServings: body.usualServings, notes: body.notes }, { transaction });
+    const meal = await Meal.create(
+      { householdId, name: body.name, tags: body.tags, usualServings: body.usualServings, notes: body.notes },
+      { transaction },
+    );
     await replaceProducts(householdId, meal.id, body.products ?? [], transaction);
     return meal.id;
   });

@@ -8,7 +8,9 @@ import { densePlacements, lockDays, slotOf, writePlacements, type Placement } fr
 const clamp = (value: number, max: number) => Math.max(0, Math.min(value, max));
 
 function placementsOf(entries: PlanEntry[]) {
-  return new Map<string, Placement>(entries.map((e) => [e.id, { id: e.id, date: e.date, slot: e.slot, position: e.position }]));
+  return new Map<string, Placement>(
+    entries.map((e) => [e.id, { id: e.id, date: e.date, slot: e.slot, position: e.position }]),
+  );
 }
 
 /** Adds a meal to a slot, from the library (with its usual products) or by name. */
@@ -23,9 +25,19 @@ export async function createPlanEntry(sequelize: Sequelize, householdId: string,
  * The write behind a drop on the board, inside a transaction that already holds the day's lock:
  * `entries` are the locked days' entries, and the new one joins them.
  */
-export async function insertPlanEntry(sequelize: Sequelize, transaction: Transaction, householdId: string, input: PlanEntryCreate, entries: PlanEntry[]) {
+export async function insertPlanEntry(
+  sequelize: Sequelize,
+  transaction: Transaction,
+  householdId: string,
+  input: PlanEntryCreate,
+  entries: PlanEntry[],
+) {
   const meal = input.mealId
-    ? await Meal.findOne({ where: { id: input.mealId, householdId }, include: [{ model: MealProduct, as: 'products' }], transaction })
+    ? await Meal.findOne({
+        where: { id: input.mealId, householdId },
+        include: [{ model: MealProduct, as: 'products' }],
+        transaction,
+      })
     : null;
   if (input.mealId && !meal) throw notFound('That meal');
   const slot = slotOf(entries, input.date, input.slot as Slot);
@@ -45,12 +57,22 @@ export async function insertPlanEntry(sequelize: Sequelize, transaction: Transac
   const ids = slot.map((e) => e.id);
   ids.splice(position, 0, entry.id);
   const current = placementsOf([...entries, entry]);
-  await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: input.date, slot: input.slot as Slot, ids }], current));
+  await writePlacements(
+    sequelize,
+    transaction,
+    householdId,
+    densePlacements([{ date: input.date, slot: input.slot as Slot, ids }], current),
+  );
   entries.push(entry);
   const usual = (meal as (Meal & { products?: MealProduct[] }) | null)?.products ?? [];
   if (usual.length) {
     await Pairing.bulkCreate(
-      usual.map((mp) => ({ householdId, planEntryId: entry.id, productId: mp.productId, tbspPerServing: mp.tbspPerServing })),
+      usual.map((mp) => ({
+        householdId,
+        planEntryId: entry.id,
+        productId: mp.productId,
+        tbspPerServing: mp.tbspPerServing,
+      })),
       { transaction },
     );
   }
@@ -73,14 +95,20 @@ export async function updatePlanEntry(sequelize: Sequelize, householdId: string,
     // Read again under the locks: a concurrent move may have changed it while we waited.
     const entry = await lockedEntry(householdId, id, transaction);
     if (entry.date !== peek.date && entry.date !== target.date) {
-      throw new AppError(409, 'conflict', 'Someone moved this meal at the same moment. The board has been refreshed; try again.');
+      throw new AppError(
+        409,
+        'conflict',
+        'Someone moved this meal at the same moment. The board has been refreshed; try again.',
+      );
     }
     if (patch.eaters) await requireMembers(householdId, patch.eaters, transaction);
     const date = patch.date ?? entry.date;
     const slot = (patch.slot ?? entry.slot) as Slot;
     const moves = patch.date !== undefined || patch.slot !== undefined || patch.position !== undefined;
     if (moves) {
-      const source = slotOf(entries, entry.date, entry.slot).map((e) => e.id).filter((e) => e !== id);
+      const source = slotOf(entries, entry.date, entry.slot)
+        .map((e) => e.id)
+        .filter((e) => e !== id);
       const sameSlot = entry.date === date && entry.slot === slot;
       const destination = sameSlot ? source : slotOf(entries, date, slot).map((e) => e.id);
       const position = clamp(patch.position ?? destination.length, destination.length);
@@ -100,7 +128,10 @@ export async function updatePlanEntry(sequelize: Sequelize, householdId: string,
 
 export async function requireMembers(householdId: string, userIds: string[], transaction: Transaction) {
   const count = await Membership.count({ where: { householdId, userId: [...new Set(userIds)] }, transaction });
-  if (count !== new Set(userIds).size) throw new AppError(400, 'invalid_input', 'Choose eaters from the household’s members.', { eaters: 'Choose members of this household.' });
+  if (count !== new Set(userIds).size)
+    throw new AppError(400, 'invalid_input', 'Choose eaters from the household’s members.', {
+      eaters: 'Choose members of this household.',
+    });
 }
 
 /** Removes an entry (and its pairings) and closes the gap in its slot. */
@@ -112,8 +143,15 @@ export async function deletePlanEntry(sequelize: Sequelize, householdId: string,
     const entry = entries.find((e) => e.id === id);
     if (!entry) throw notFound('That planned meal');
     await PlanEntry.destroy({ where: { id, householdId }, transaction });
-    const rest = slotOf(entries, entry.date, entry.slot).map((e) => e.id).filter((e) => e !== id);
-    await writePlacements(sequelize, transaction, householdId, densePlacements([{ date: entry.date, slot: entry.slot, ids: rest }], placementsOf(entries)));
+    const rest = slotOf(entries, entry.date, entry.slot)
+      .map((e) => e.id)
+      .filter((e) => e !== id);
+    await writePlacements(
+      sequelize,
+      transaction,
+      householdId,
+      densePlacements([{ date: entry.date, slot: entry.slot, ids: rest }], placementsOf(entries)),
+    );
   });
 }
 
@@ -123,12 +161,23 @@ export async function deletePlanEntries(sequelize: Sequelize, householdId: strin
     const unique = [...new Set(ids)];
     const peeks = await PlanEntry.findAll({ where: { id: unique, householdId }, attributes: ['date'], transaction });
     if (peeks.length !== unique.length) throw notFound('One of those planned meals');
-    const entries = await lockDays(sequelize, transaction, householdId, peeks.map((p) => p.date));
+    const entries = await lockDays(
+      sequelize,
+      transaction,
+      householdId,
+      peeks.map((p) => p.date),
+    );
     const gone = entries.filter((e) => unique.includes(e.id));
     if (gone.length !== unique.length) throw notFound('One of those planned meals');
     await PlanEntry.destroy({ where: { id: unique, householdId }, transaction });
     const slots = [...new Map(gone.map((e) => [`${e.date}|${e.slot}`, e])).values()];
-    const lists = slots.map(({ date, slot }) => ({ date, slot, ids: slotOf(entries, date, slot).map((e) => e.id).filter((id) => !unique.includes(id)) }));
+    const lists = slots.map(({ date, slot }) => ({
+      date,
+      slot,
+      ids: slotOf(entries, date, slot)
+        .map((e) => e.id)
+        .filter((id) => !unique.includes(id)),
+    }));
     await writePlacements(sequelize, transaction, householdId, densePlacements(lists, placementsOf(entries)));
     return gone.length;
   });

@@ -4,8 +4,14 @@ import type { PreferencesPatch } from '../../../shared/schemas/week';
 import { Membership } from '../../db/models';
 import { forbidden, notFound } from '../../http/errors';
 
-export async function updatePreferences(householdId: string, actor: { userId: string; role: Role }, userId: string, patch: PreferencesPatch) {
-  if (actor.userId !== userId && actor.role !== 'keeper') throw forbidden('Only the member themselves or a keeper can change what they eat.');
+export async function updatePreferences(
+  householdId: string,
+  actor: { userId: string; role: Role },
+  userId: string,
+  patch: PreferencesPatch,
+) {
+  if (actor.userId !== userId && actor.role !== 'keeper')
+    throw forbidden('Only the member themselves or a keeper can change what they eat.');
   const membership = await Membership.findOne({ where: { householdId, userId } });
   if (!membership) throw notFound('That member');
   await membership.update(patch);

@@ -38,18 +38,33 @@ async function weekPlan(sequelize: Sequelize, household: Household, start: strin
   const today = todayIn(household.timeZone);
   const end = addDays(start, 6);
   const earliest = today < start ? today : start;
-  const [rows, products] = await Promise.all([entryRows(sequelize, household.id, addDays(earliest, -VARIETY_REACH), addDays(end, VARIETY_REACH)), productRows(sequelize, household.id)]);
-  const jarRows = await currentJarRows(sequelize, household.id, products.map((p) => p.id));
+  const [rows, products] = await Promise.all([
+    entryRows(sequelize, household.id, addDays(earliest, -VARIETY_REACH), addDays(end, VARIETY_REACH)),
+    productRows(sequelize, household.id),
+  ]);
+  const jarRows = await currentJarRows(
+    sequelize,
+    household.id,
+    products.map((p) => p.id),
+  );
   const productById = new Map(products.map((p) => [p.id, p]));
   const jars: AllocationJar[] = jarRows.map((j) => allocationJar(j, productById));
   // Portions from today draw first, including any before this week's start.
   const portions: PlannedPortion[] = rows
     .filter((r) => r.pairing_id && r.product_id && r.date >= today && r.date <= end)
-    .map((r) => ({ id: r.pairing_id!, date: r.date, productId: r.product_id!, tbsp: Number(r.tbsp_per_serving) * r.servings }));
+    .map((r) => ({
+      id: r.pairing_id!,
+      date: r.date,
+      productId: r.product_id!,
+      tbsp: Number(r.tbsp_per_serving) * r.servings,
+    }));
   return { today, end, rows, products, productById, jars, jarRows, portions };
 }
 
-const figure = (waste: PlanWaste): WasteFigure => ({ tbspPastUseBy: Math.round(waste.tbspPastUseBy * 100) / 100, sealedJarsPastBest: waste.sealedJarsPastBest });
+const figure = (waste: PlanWaste): WasteFigure => ({
+  tbspPastUseBy: Math.round(waste.tbspPastUseBy * 100) / 100,
+  sealedJarsPastBest: waste.sealedJarsPastBest,
+});
 
 /** The week's waste as planned; nothing when the week is over. */
 export async function weekWaste(sequelize: Sequelize, household: Household, start: string): Promise<WasteFigure> {
@@ -58,19 +73,37 @@ export async function weekWaste(sequelize: Sequelize, household: Household, star
   return figure(planWaste({ today, until: end, jars, portions }));
 }
 
-export async function proposeWeek(sequelize: Sequelize, household: Household, request: ProposalRequest): Promise<ProposalView> {
+export async function proposeWeek(
+  sequelize: Sequelize,
+  household: Household,
+  request: ProposalRequest,
+): Promise<ProposalView> {
   const start = request.start;
-  const { today, end, rows, products, productById, jars, jarRows, portions } = await weekPlan(sequelize, household, start);
+  const { today, end, rows, products, productById, jars, jarRows, portions } = await weekPlan(
+    sequelize,
+    household,
+    start,
+  );
   const { scope } = request;
   if (scope.kind === 'day' && (scope.date < start || scope.date > end)) {
     throw new AppError(400, 'invalid_input', 'Choose a day of this week.', { scope: 'Choose a day of this week.' });
   }
-  if (end < today) return { start, end, before: { tbspPastUseBy: 0, sealedJarsPastBest: 0 }, after: { tbspPastUseBy: 0, sealedJarsPastBest: 0 }, proposed: [], unfilled: [] };
+  if (end < today)
+    return {
+      start,
+      end,
+      before: { tbspPastUseBy: 0, sealedJarsPastBest: 0 },
+      after: { tbspPastUseBy: 0, sealedJarsPastBest: 0 },
+      proposed: [],
+      unfilled: [],
+    };
 
   const taken = new Set(rows.map((r) => `${r.date}|${r.slot}`));
   const days = weekDates(start).filter((d) => d >= today && (scope.kind !== 'day' || d === scope.date));
   const kinds: readonly Slot[] = scope.kind === 'slot' ? [scope.slot] : SLOTS;
-  const open = days.flatMap((date) => kinds.filter((slot) => !taken.has(`${date}|${slot}`)).map((slot) => ({ date, slot })));
+  const open = days.flatMap((date) =>
+    kinds.filter((slot) => !taken.has(`${date}|${slot}`)).map((slot) => ({ date, slot })),
+  );
 
   const [meals, recipes, memberList, eaters] = await Promise.all([
     listMeals(household.id),
@@ -81,7 +114,9 @@ export async function proposeWeek(sequelize: Sequelize, household: Household, re
   const flagRecipes = recipes.map((r) => ({ productId: r.product_id, name: r.name, ingredients: r.ingredients }));
   const eatersOf = new Map(eaters.map((e) => [e.meal_id, e.eaters]));
   const mealById = new Map(meals.map((m) => [m.id, m]));
-  const planned = [...new Map(rows.filter((r) => r.meal_id).map((r) => [r.id, { date: r.date, mealId: r.meal_id! }])).values()];
+  const planned = [
+    ...new Map(rows.filter((r) => r.meal_id).map((r) => [r.id, { date: r.date, mealId: r.meal_id! }])).values(),
+  ];
 
   const result = proposeMeals({
     today,
@@ -91,7 +126,13 @@ export async function proposeWeek(sequelize: Sequelize, household: Household, re
     planned,
     open,
     slotKinds: SLOTS,
-    meals: meals.map((m) => ({ id: m.id, tags: m.tags, usualServings: m.usualServings, products: m.products, eaters: eatersOf.get(m.id) ?? null })),
+    meals: meals.map((m) => ({
+      id: m.id,
+      tags: m.tags,
+      usualServings: m.usualServings,
+      products: m.products,
+      eaters: eatersOf.get(m.id) ?? null,
+    })),
     products: products.map((p) => ({ id: p.id, heat: p.heat, dietConflicts: dietConflictsOf(p.id, flagRecipes) })),
     members: memberList.map((m) => ({ id: m.user_id, heatTolerance: m.heat_tolerance, dietTags: m.diet_tags ?? [] })),
     varietyDays: request.varietyDays,
@@ -119,7 +160,14 @@ export async function proposeWeek(sequelize: Sequelize, household: Household, re
           productId: mp.productId,
           name: nameOf(mp.productId),
           tbspPerServing: mp.tbspPerServing,
-          jars: p.draws.filter((d) => d.productId === mp.productId).map((d) => ({ jarId: String(d.jarId), code: codeOf.get(String(d.jarId)) ?? '', tbsp: d.tbsp, opens: d.opens })),
+          jars: p.draws
+            .filter((d) => d.productId === mp.productId)
+            .map((d) => ({
+              jarId: String(d.jarId),
+              code: codeOf.get(String(d.jarId)) ?? '',
+              tbsp: d.tbsp,
+              opens: d.opens,
+            })),
         })),
         reason: proposalReasonWords(p.reason, nameOf, p.date),
         alternatives: p.alternatives.map((id) => ({ mealId: String(id), title: mealById.get(String(id))!.name })),
@@ -132,10 +180,21 @@ export async function proposeWeek(sequelize: Sequelize, household: Household, re
 /** Writes the accepted meals as the board's drops would, all in one transaction under the days' locks. */
 export async function acceptProposal(sequelize: Sequelize, householdId: string, accept: ProposalAccept) {
   return sequelize.transaction(async (transaction) => {
-    const entries = await lockDays(sequelize, transaction, householdId, accept.entries.map((e) => e.date));
+    const entries = await lockDays(
+      sequelize,
+      transaction,
+      householdId,
+      accept.entries.map((e) => e.date),
+    );
     const ids: string[] = [];
     for (const proposed of accept.entries) {
-      const entry = await insertPlanEntry(sequelize, transaction, householdId, { date: proposed.date, slot: proposed.slot, mealId: proposed.mealId, servings: proposed.servings }, entries);
+      const entry = await insertPlanEntry(
+        sequelize,
+        transaction,
+        householdId,
+        { date: proposed.date, slot: proposed.slot, mealId: proposed.mealId, servings: proposed.servings },
+        entries,
+      );
       if (proposed.eaters !== null) {
         await requireMembers(householdId, proposed.eaters, transaction);
         await PlanEntry.update({ eaters: proposed.eaters }, { where: { id: entry.id, householdId }, transaction });

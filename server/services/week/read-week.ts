@@ -1,12 +1,36 @@
 // GET /week: the board's days, the members at the table, the shelf, and which jar serves each portion.
 import type { Sequelize } from 'sequelize';
-import { addDays, allocateWeek, defaultUseWithinDays, type AllocationJar, type Id, type PlannedPortion, type WeekAllocation } from '../../../shared/domain';
-import { SLOTS, weekDates, type PlanEntryView, type WeekJar, type WeekMember, type WeekView } from '../../../shared/schemas/week';
+import {
+  addDays,
+  allocateWeek,
+  defaultUseWithinDays,
+  type AllocationJar,
+  type Id,
+  type PlannedPortion,
+  type WeekAllocation,
+} from '../../../shared/domain';
+import {
+  SLOTS,
+  weekDates,
+  type PlanEntryView,
+  type WeekJar,
+  type WeekMember,
+  type WeekView,
+} from '../../../shared/schemas/week';
 import type { Household } from '../../db/models';
 import { todayIn } from '../clock';
 import { keepsDays } from '../plan-allocation';
 import { eaterFlags } from './eater-flags';
-import { currentJarRows, entryRows, memberRows, productRows, recipeRows, type EntryRow, type JarRow, type ProductRow } from './week-rows';
+import {
+  currentJarRows,
+  entryRows,
+  memberRows,
+  productRows,
+  recipeRows,
+  type EntryRow,
+  type JarRow,
+  type ProductRow,
+} from './week-rows';
 
 export async function readWeek(sequelize: Sequelize, household: Household, start: string): Promise<WeekView> {
   const today = todayIn(household.timeZone);
@@ -23,11 +47,25 @@ export async function readWeek(sequelize: Sequelize, household: Household, start
     memberRows(sequelize, household.id),
   ]);
 
-  const members: WeekMember[] = memberList.map((m) => ({ userId: m.user_id, name: m.name, heatTolerance: m.heat_tolerance, dietTags: m.diet_tags ?? [] }));
+  const members: WeekMember[] = memberList.map((m) => ({
+    userId: m.user_id,
+    name: m.name,
+    heatTolerance: m.heat_tolerance,
+    dietTags: m.diet_tags ?? [],
+  }));
   const productById = new Map(products.map((p) => [p.id, p]));
-  const entries = entryViews(rows, productById, recipes.map((r) => ({ productId: r.product_id, name: r.name, ingredients: r.ingredients })), members);
+  const entries = entryViews(
+    rows,
+    productById,
+    recipes.map((r) => ({ productId: r.product_id, name: r.name, ingredients: r.ingredients })),
+    members,
+  );
 
-  const allocation = allocateWeek({ today, jars: jarRows.map((j) => allocationJar(j, productById)), portions: portionsOf(entries) });
+  const allocation = allocateWeek({
+    today,
+    jars: jarRows.map((j) => allocationJar(j, productById)),
+    portions: portionsOf(entries),
+  });
   const inWeek = (date: string) => date >= start && date <= end;
   const weekEntries = entries.filter((e) => inWeek(e.date));
   const weekPortionIds = new Set<string>(weekEntries.flatMap((e) => e.pairings.map((p) => p.id)));
@@ -45,32 +83,64 @@ export async function readWeek(sequelize: Sequelize, household: Household, start
     days: weekDates(start).map((date) => ({ date, entries: weekEntries.filter((e) => e.date === date) })),
     allocation: weekAllocation,
     jars: jarsNamedIn(weekAllocation, jarRows),
-    products: products.map((p) => ({ id: p.id, name: p.name, kind: p.kind, heat: p.heat, colour: p.colour, openedJars: p.opened_jars, sealedJars: p.sealed_jars })),
+    products: products.map((p) => ({
+      id: p.id,
+      name: p.name,
+      kind: p.kind,
+      heat: p.heat,
+      colour: p.colour,
+      openedJars: p.opened_jars,
+      sealedJars: p.sealed_jars,
+    })),
     members,
   };
 }
 
-function entryViews(rows: EntryRow[], productById: Map<string, ProductRow>, recipes: Parameters<typeof eaterFlags>[1], members: WeekMember[]): PlanEntryView[] {
+function entryViews(
+  rows: EntryRow[],
+  productById: Map<string, ProductRow>,
+  recipes: Parameters<typeof eaterFlags>[1],
+  members: WeekMember[],
+): PlanEntryView[] {
   const byId = new Map<string, PlanEntryView>();
   for (const row of rows) {
     let entry = byId.get(row.id);
     if (!entry) {
-      entry = { id: row.id, date: row.date, slot: row.slot, position: row.position, title: row.title, mealId: row.meal_id, servings: row.servings, eaters: row.eaters, pairings: [] };
+      entry = {
+        id: row.id,
+        date: row.date,
+        slot: row.slot,
+        position: row.position,
+        title: row.title,
+        mealId: row.meal_id,
+        servings: row.servings,
+        eaters: row.eaters,
+        pairings: [],
+      };
       byId.set(row.id, entry);
     }
     const product = row.product_id ? productById.get(row.product_id) : undefined;
     if (row.pairing_id && product) {
       const eaters = entry.eaters === null ? members : members.filter((m) => entry.eaters!.includes(m.userId));
-      entry.pairings.push({ id: row.pairing_id, productId: product.id, tbspPerServing: Number(row.tbsp_per_serving), flags: eaterFlags(product, recipes, eaters) });
+      entry.pairings.push({
+        id: row.pairing_id,
+        productId: product.id,
+        tbspPerServing: Number(row.tbsp_per_serving),
+        flags: eaterFlags(product, recipes, eaters),
+      });
     }
   }
   const slotOrder = (slot: string) => SLOTS.indexOf(slot as (typeof SLOTS)[number]);
-  return [...byId.values()].sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : slotOrder(a.slot) - slotOrder(b.slot) || a.position - b.position));
+  return [...byId.values()].sort((a, b) =>
+    a.date < b.date ? -1 : a.date > b.date ? 1 : slotOrder(a.slot) - slotOrder(b.slot) || a.position - b.position,
+  );
 }
 
 /** Each pairing is one portion: its tablespoons per serving times the servings planned. */
 function portionsOf(entries: PlanEntryView[]): PlannedPortion[] {
-  return entries.flatMap((e) => e.pairings.map((p) => ({ id: p.id, date: e.date, productId: p.productId, tbsp: p.tbspPerServing * e.servings })));
+  return entries.flatMap((e) =>
+    e.pairings.map((p) => ({ id: p.id, date: e.date, productId: p.productId, tbsp: p.tbspPerServing * e.servings })),
+  );
 }
 
 export function allocationJar(jar: JarRow, productById: Map<string, ProductRow>): AllocationJar {

@@ -29,7 +29,6 @@ export interface JarRow {
   use_by: string | null;
 }
 
-
 export interface RecipeRow {
   product_id: string;
   name: string;
@@ -62,7 +61,13 @@ export function currentJarRows(sequelize: Sequelize, householdId: string, produc
        FROM jars
       WHERE household_id = :householdId
         AND (state = 'opened' OR (state = 'sealed' AND product_id = ANY(ARRAY[:productIds]::uuid[])))`,
-    { replacements: { householdId, productIds: productIds.length ? productIds : ['00000000-0000-0000-0000-000000000000'] }, type: QueryTypes.SELECT },
+    {
+      replacements: {
+        householdId,
+        productIds: productIds.length ? productIds : ['00000000-0000-0000-0000-000000000000'],
+      },
+      type: QueryTypes.SELECT,
+    },
   );
 }
 
@@ -91,10 +96,13 @@ export function productRows(sequelize: Sequelize, householdId: string) {
 }
 
 export function recipeRows(sequelize: Sequelize, householdId: string) {
-  return sequelize.query<RecipeRow>('SELECT product_id, name, ingredients FROM recipes WHERE household_id = :householdId ORDER BY created_at, id', {
-    replacements: { householdId },
-    type: QueryTypes.SELECT,
-  });
+  return sequelize.query<RecipeRow>(
+    'SELECT product_id, name, ingredients FROM recipes WHERE household_id = :householdId ORDER BY created_at, id',
+    {
+      replacements: { householdId },
+      type: QueryTypes.SELECT,
+    },
+  );
 }
 
 export function memberRows(sequelize: Sequelize, householdId: string) {

@@ -19,7 +19,10 @@ export function BatchDetailRoute() {
         title={batch.data ? batch.data.productName : 'Batch'}
         lead={batch.data ? `Canned ${dateWords(batch.data.cannedOn)}` : undefined}
         actions={
-          <Link to={paths.batches(hid)} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+          <Link
+            to={paths.batches(hid)}
+            className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+          >
             All batches
           </Link>
         }
@@ -27,7 +30,11 @@ export function BatchDetailRoute() {
       {params.get('saved') && batch.data && (
         <div className="mb-5">
           <Notice tone="action" role="status" title="Batch saved">
-            {batch.data.jarsSealed} sealed jars are on the shelf{batch.data.jarsFilled > batch.data.jarsSealed ? ` and ${batch.data.jarsFilled - batch.data.jarsSealed} in the fridge` : ''}. Print their labels so each jar can be scanned.
+            {batch.data.jarsSealed} sealed jars are on the shelf
+            {batch.data.jarsFilled > batch.data.jarsSealed
+              ? ` and ${batch.data.jarsFilled - batch.data.jarsSealed} in the fridge`
+              : ''}
+            . Print their labels so each jar can be scanned.
             {params.get('todoId') && (
               <>
                 {' '}

@@ -16,8 +16,12 @@ export function BatchLabelsRoute() {
     <main className="mx-auto max-w-5xl p-4 print:max-w-none print:p-0">
       <div className="mb-4 flex flex-wrap items-end justify-between gap-3 print:hidden">
         <div>
-          <h1 className="text-2xl">Labels{batch.data ? `: ${batch.data.productName}, ${dateWords(batch.data.cannedOn)}` : ''}</h1>
-          <p className="text-ink-muted">One label a jar. Scanning a label opens the jar’s page to mark it opened, finished or discarded.</p>
+          <h1 className="text-2xl">
+            Labels{batch.data ? `: ${batch.data.productName}, ${dateWords(batch.data.cannedOn)}` : ''}
+          </h1>
+          <p className="text-ink-muted">
+            One label a jar. Scanning a label opens the jar’s page to mark it opened, finished or discarded.
+          </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">
           <div role="group" aria-label="Paper" className="flex rounded-lg border border-line bg-surface p-1">
@@ -34,7 +38,10 @@ export function BatchLabelsRoute() {
             ))}
           </div>
           <Button onClick={() => window.print()}>Print</Button>
-          <Link to={paths.batch(hid, batchId)} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+          <Link
+            to={paths.batch(hid, batchId)}
+            className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+          >
             Back to the batch
           </Link>
         </div>

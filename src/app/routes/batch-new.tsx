@@ -20,7 +20,10 @@ export function NewBatchRoute() {
   const failed = household.error ?? products.error ?? recipes.error;
   return (
     <>
-      <PageHeader title="Record a batch" lead="Fill it in as the day goes: the processing plan follows your choices and your altitude." />
+      <PageHeader
+        title="Record a batch"
+        lead="Fill it in as the day goes: the processing plan follows your choices and your altitude."
+      />
       {failed && (
         <Notice tone="past" role="alert">
           {failed.message}
@@ -29,7 +32,11 @@ export function NewBatchRoute() {
       {household.data && products.data && recipes.data ? (
         <AltitudeGate hid={hid}>
           {products.data.length === 0 ? (
-            <FirstProduct hid={hid} why="A batch is a canning session of one product, made from its tested recipe." canCook />
+            <FirstProduct
+              hid={hid}
+              why="A batch is a canning session of one product, made from its tested recipe."
+              canCook
+            />
           ) : (
             <NewBatchForm household={household.data} products={products.data} recipes={recipes.data} />
           )}

@@ -22,10 +22,18 @@ export function BatchesRoute() {
         actions={
           canCook && (
             <>
-              <button type="button" aria-expanded={importing} onClick={() => setImporting((open) => !open)} className="min-h-11 rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken">
+              <button
+                type="button"
+                aria-expanded={importing}
+                onClick={() => setImporting((open) => !open)}
+                className="min-h-11 rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken"
+              >
                 Import CSV
               </button>
-              <Link to={paths.newBatch(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+              <Link
+                to={paths.newBatch(hid)}
+                className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong"
+              >
                 Record a batch
               </Link>
             </>
@@ -46,7 +54,16 @@ export function BatchesRoute() {
       {batches.isPending ? (
         <p className="text-ink-muted">Reading the log…</p>
       ) : batches.data?.length === 0 ? (
-        <EmptyState title="No batches yet" action={canCook ? <Link to={paths.newBatch(hid)} className="font-bold text-action underline">Record your first batch</Link> : undefined}>
+        <EmptyState
+          title="No batches yet"
+          action={
+            canCook ? (
+              <Link to={paths.newBatch(hid)} className="font-bold text-action underline">
+                Record your first batch
+              </Link>
+            ) : undefined
+          }
+        >
           Your first batch will show its processing plan for your altitude here.
         </EmptyState>
       ) : (

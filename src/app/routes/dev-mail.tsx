@@ -15,13 +15,18 @@ export function DevMailRoute() {
         title="Caught mail"
         lead="In development Larderly sends e-mail to a local catcher instead of real mailboxes. Newest first."
         actions={
-          <Link to={paths.household(hid)} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold">
+          <Link
+            to={paths.household(hid)}
+            className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold"
+          >
             Back to Household
           </Link>
         }
       />
       {mail.error && <Notice tone="info">{mail.error.message}</Notice>}
-      {mail.data?.length === 0 && <EmptyState title="No mail caught yet">Invite someone, or wait for a reminder.</EmptyState>}
+      {mail.data?.length === 0 && (
+        <EmptyState title="No mail caught yet">Invite someone, or wait for a reminder.</EmptyState>
+      )}
       <div className="flex flex-col gap-3">
         {mail.data?.map((message) => (
           <Card key={message.id}>

@@ -65,7 +65,9 @@ export function FridgeRoute() {
               jar={jar}
               unsealedAdvice={fridge.data?.unsealedAdvice ?? ''}
               busy={closeJar.isSending}
-              onClose={(action) => closeJar.close({ id: jar.jarId, code: jar.code, productName: jar.productName }, action)}
+              onClose={(action) =>
+                closeJar.close({ id: jar.jarId, code: jar.code, productName: jar.productName }, action)
+              }
             />
           ))}
         </ul>

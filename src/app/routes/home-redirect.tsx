@@ -13,7 +13,9 @@ export function HomeRedirect() {
   if (!target) {
     return (
       <main className="mx-auto max-w-lg p-6">
-        <EmptyState title="You are not in a household yet">Ask a keeper to invite you, then open the link from the e-mail.</EmptyState>
+        <EmptyState title="You are not in a household yet">
+          Ask a keeper to invite you, then open the link from the e-mail.
+        </EmptyState>
       </main>
     );
   }

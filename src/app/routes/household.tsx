@@ -27,20 +27,33 @@ export function HouseholdRoute() {
       <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
         <Card>
           <h2 className="mb-4 text-xl">Settings</h2>
-          {household.data ? <HouseholdSettingsForm key={household.data.id} household={household.data} canEdit={canManage} /> : <p className="text-ink-muted">Loading…</p>}
+          {household.data ? (
+            <HouseholdSettingsForm key={household.data.id} household={household.data} canEdit={canManage} />
+          ) : (
+            <p className="text-ink-muted">Loading…</p>
+          )}
         </Card>
         <Card>
           <h2 className="mb-2 text-xl">Members</h2>
-          {members.data && me ? <MemberList hid={hid} members={members.data} canManage={canManage} myId={me.user.id} /> : <p className="text-ink-muted">Loading…</p>}
+          {members.data && me ? (
+            <MemberList hid={hid} members={members.data} canManage={canManage} myId={me.user.id} />
+          ) : (
+            <p className="text-ink-muted">Loading…</p>
+          )}
         </Card>
         <Card>
           <h2 className="mb-1 text-xl">Notifications</h2>
-          <p className="mb-4 text-ink-muted">Yours alone: a reminder before an opened jar reaches its use-by, by push on this device or by e-mail.</p>
+          <p className="mb-4 text-ink-muted">
+            Yours alone: a reminder before an opened jar reaches its use-by, by push on this device or by e-mail.
+          </p>
           <NotificationSettingsPanel />
         </Card>
         <Card>
           <h2 className="mb-1 text-xl">Calendar</h2>
-          <p className="mb-4 text-ink-muted">Yours alone: the planned meals, the use-by dates of opened jars and the to-dos with a due date, in the calendar app you already use.</p>
+          <p className="mb-4 text-ink-muted">
+            Yours alone: the planned meals, the use-by dates of opened jars and the to-dos with a due date, in the
+            calendar app you already use.
+          </p>
           <CalendarPanel hid={hid} canManage={canManage} />
         </Card>
         {canManage && (

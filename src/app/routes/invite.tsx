@@ -7,7 +7,11 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { useMe } from '@/features/auth/api/get-me';
-import { useAcceptInvitation, useInvitationPreview, type AcceptInput } from '@/features/invitations/api/accept-invitation';
+import {
+  useAcceptInvitation,
+  useInvitationPreview,
+  type AcceptInput,
+} from '@/features/invitations/api/accept-invitation';
 import { ApiError } from '@/lib/api-client';
 import { paths } from '@shared/paths';
 
@@ -28,14 +32,20 @@ export function InviteRoute() {
   const [password, setPassword] = useState('');
   const error = accept.error instanceof ApiError ? accept.error : null;
   const invitation = preview.data;
-  const joined = (input?: AcceptInput) => accept.mutate(input, { onSuccess: (accepted) => navigate(paths.today(accepted.householdId), { replace: true }) });
+  const joined = (input?: AcceptInput) =>
+    accept.mutate(input, { onSuccess: (accepted) => navigate(paths.today(accepted.householdId), { replace: true }) });
 
   function createAccount(event: FormEvent) {
     event.preventDefault();
     joined({ name, password });
   }
 
-  const unusable = preview.error instanceof ApiError ? preview.error.message : invitation && invitation.state !== 'pending' ? invitation.message : null;
+  const unusable =
+    preview.error instanceof ApiError
+      ? preview.error.message
+      : invitation && invitation.state !== 'pending'
+        ? invitation.message
+        : null;
   const otherAddress = me && invitation && me.user.email.toLowerCase() !== invitation.email.toLowerCase();
 
   return (
@@ -53,7 +63,10 @@ export function InviteRoute() {
             <Notice tone="past" role="alert">
               {unusable}
             </Notice>
-            <Link to={me ? paths.home() : paths.signIn()} className="text-center font-bold text-action underline underline-offset-4">
+            <Link
+              to={me ? paths.home() : paths.signIn()}
+              className="text-center font-bold text-action underline underline-offset-4"
+            >
               {me ? 'Go to your households' : 'Sign in'}
             </Link>
           </>
@@ -65,8 +78,9 @@ export function InviteRoute() {
             {otherAddress ? (
               <>
                 <Notice tone="soon">
-                  This invitation was sent to {invitation!.email}, not to your address. Sign in with {invitation!.email} to join as the person invited, or join
-                  with this account: the keepers of {invitation!.householdName} will be told.
+                  This invitation was sent to {invitation!.email}, not to your address. Sign in with {invitation!.email}{' '}
+                  to join as the person invited, or join with this account: the keepers of {invitation!.householdName}{' '}
+                  will be told.
                 </Notice>
                 <Button disabled={accept.isPending} onClick={() => joined({ confirmOtherAddress: true })}>
                   {accept.isPending ? 'Joining…' : `Join as ${me.user.email}`}
@@ -81,16 +95,37 @@ export function InviteRoute() {
         ) : (
           <>
             <form onSubmit={createAccount} className="flex flex-col gap-4" noValidate>
-              <p className="text-ink-muted">New to Larderly? Your account uses the address the invitation was sent to, {invitation?.email}.</p>
-              <TextField label="Your name" autoComplete="name" value={name} onChange={(e) => setName(e.target.value)} error={error?.fields.name} required />
-              <TextField label="Choose a password" type="password" autoComplete="new-password" hint="At least 10 characters." value={password} onChange={(e) => setPassword(e.target.value)} error={error?.fields.password} required />
+              <p className="text-ink-muted">
+                New to Larderly? Your account uses the address the invitation was sent to, {invitation?.email}.
+              </p>
+              <TextField
+                label="Your name"
+                autoComplete="name"
+                value={name}
+                onChange={(e) => setName(e.target.value)}
+                error={error?.fields.name}
+                required
+              />
+              <TextField
+                label="Choose a password"
+                type="password"
+                autoComplete="new-password"
+                hint="At least 10 characters."
+                value={password}
+                onChange={(e) => setPassword(e.target.value)}
+                error={error?.fields.password}
+                required
+              />
               <Button type="submit" disabled={accept.isPending}>
                 {accept.isPending ? 'Joining…' : 'Create account and join'}
               </Button>
             </form>
             <p className="text-center text-ink-muted">
               Already have an account?{' '}
-              <Link to={paths.signIn(paths.invitation(token))} className="font-bold text-action underline underline-offset-4">
+              <Link
+                to={paths.signIn(paths.invitation(token))}
+                className="font-bold text-action underline underline-offset-4"
+              >
                 Sign in to join
               </Link>
             </p>

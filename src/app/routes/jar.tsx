@@ -56,7 +56,9 @@ export function JarRoute() {
             <JarDates jar={jar} />
           </p>
           {jar.state === 'opened' && <CautionLine about="use-by" />}
-          {jar.state === 'opened' && jar.useBy && <ReminderOffer about={`this jar’s use-by (${dateWords(jar.useBy)})`} />}
+          {jar.state === 'opened' && jar.useBy && (
+            <ReminderOffer about={`this jar’s use-by (${dateWords(jar.useBy)})`} />
+          )}
           {jar.unsealed && jar.state === 'opened' && <Notice tone="soon">{UNSEALED_JAR_ADVICE}</Notice>}
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
           <PutBackJar

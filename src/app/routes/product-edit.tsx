@@ -13,7 +13,10 @@ export function ProductEditRoute() {
   const editing = productId !== undefined;
   return (
     <>
-      <PageHeader title={editing ? (product?.name ?? 'Product') : 'New product'} lead="A preserve the household keeps: what it is, how hot, and how long an opened jar keeps." />
+      <PageHeader
+        title={editing ? (product?.name ?? 'Product') : 'New product'}
+        lead="A preserve the household keeps: what it is, how hot, and how long an opened jar keeps."
+      />
       {products.error && (
         <Notice tone="past" role="alert">
           {products.error.message}

@@ -20,7 +20,10 @@ export function RecipeCardRoute() {
         lead={recipe.data ? `For ${recipe.data.productName}` : undefined}
         actions={
           can(role, 'cook') && recipe.data ? (
-            <Link to={paths.editRecipe(hid, recipeId)} className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken">
+            <Link
+              to={paths.editRecipe(hid, recipeId)}
+              className="inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken"
+            >
               Edit
             </Link>
           ) : undefined
@@ -31,7 +34,9 @@ export function RecipeCardRoute() {
           {recipe.error.message}
         </Notice>
       )}
-      {recipe.data && household.data && <RecipeCard hid={hid} recipe={recipe.data} altitudeFt={household.data.altitudeFt} />}
+      {recipe.data && household.data && (
+        <RecipeCard hid={hid} recipe={recipe.data} altitudeFt={household.data.altitudeFt} />
+      )}
     </>
   );
 }

@@ -18,16 +18,30 @@ export function RecipeEditRoute() {
   const ready = products.data && (!editing || recipe.data);
   return (
     <>
-      <PageHeader title={editing ? 'Edit the recipe' : 'New recipe'} lead="Enter a tested recipe as its source gives it: times, headspace and acid exactly as written." />
+      <PageHeader
+        title={editing ? 'Edit the recipe' : 'New recipe'}
+        lead="Enter a tested recipe as its source gives it: times, headspace and acid exactly as written."
+      />
       {(products.error ?? (editing ? recipe.error : null)) && (
         <Notice tone="past" role="alert">
           {(products.error ?? recipe.error)?.message}
         </Notice>
       )}
-      {ready && products.data!.length === 0 && <FirstProduct hid={hid} why="A recipe is how a product is made, so the product comes first." canCook={can(role, 'cook')} />}
+      {ready && products.data!.length === 0 && (
+        <FirstProduct
+          hid={hid}
+          why="A recipe is how a product is made, so the product comes first."
+          canCook={can(role, 'cook')}
+        />
+      )}
       {ready && products.data!.length > 0 && (
         <Card>
-          <RecipeForm hid={hid} products={products.data!} recipe={editing ? recipe.data : undefined} productId={params.get('productId') ?? undefined} />
+          <RecipeForm
+            hid={hid}
+            products={products.data!}
+            recipe={editing ? recipe.data : undefined}
+            productId={params.get('productId') ?? undefined}
+          />
         </Card>
       )}
     </>

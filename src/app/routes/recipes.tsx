@@ -18,7 +18,10 @@ export function RecipesRoute() {
         lead="Tested recipes, scaled to the jars you want without weakening their acid."
         actions={
           canCook && (
-            <Link to={paths.newRecipe(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+            <Link
+              to={paths.newRecipe(hid)}
+              className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong"
+            >
               New recipe
             </Link>
           )
@@ -37,11 +40,15 @@ export function RecipesRoute() {
         <ul className="grid gap-3 sm:grid-cols-2">
           {recipes.data?.map((recipe) => (
             <li key={recipe.id}>
-              <Link to={paths.recipe(hid, recipe.id)} className="flex h-full flex-col gap-1 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60">
+              <Link
+                to={paths.recipe(hid, recipe.id)}
+                className="flex h-full flex-col gap-1 rounded-card border border-line bg-surface p-4 hover:bg-sunken/60"
+              >
                 <span className="text-lg font-bold">{recipe.name}</span>
                 <span className="text-ink-muted">for {recipe.productName}</span>
                 <span className="text-[0.95rem]">
-                  Makes {recipe.yieldJars} {jarSizeWords(recipe.yieldJarSize)} jars · {METHOD_NAMES[recipe.method].toLowerCase()}
+                  Makes {recipe.yieldJars} {jarSizeWords(recipe.yieldJarSize)} jars ·{' '}
+                  {METHOD_NAMES[recipe.method].toLowerCase()}
                 </span>
               </Link>
             </li>

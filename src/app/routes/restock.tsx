@@ -21,7 +21,10 @@ export function RestockRoute() {
 
   return (
     <>
-      <PageHeader title="Restock" lead="Favorites running low, and the batch that would carry you to the next harvest." />
+      <PageHeader
+        title="Restock"
+        lead="Favorites running low, and the batch that would carry you to the next harvest."
+      />
       {restock.isError && (
         <Notice tone="past" role="alert" title="The restock list could not be loaded">
           {restock.error.message}
@@ -35,11 +38,19 @@ export function RestockRoute() {
               Restock suggestions
             </h2>
             {restock.data.suggestions.length === 0 ? (
-              <EmptyState title="Nothing is running low">Mark your favorites and set a minimum below; Larderly watches the count for you.</EmptyState>
+              <EmptyState title="Nothing is running low">
+                Mark your favorites and set a minimum below; Larderly watches the count for you.
+              </EmptyState>
             ) : (
               <div className="grid gap-4 md:grid-cols-2">
                 {restock.data.suggestions.map((suggestion) => (
-                  <SuggestionCard key={suggestion.productId} hid={hid} suggestion={suggestion} canCook={canCook} focused={suggestion.productId === focus} />
+                  <SuggestionCard
+                    key={suggestion.productId}
+                    hid={hid}
+                    suggestion={suggestion}
+                    canCook={canCook}
+                    focused={suggestion.productId === focus}
+                  />
                 ))}
               </div>
             )}
@@ -52,7 +63,9 @@ export function RestockRoute() {
               The rate is the larger of the last twelve weeks’ finished jars and the meals planned from today.
             </p>
             {restock.data.forecasts.length === 0 ? (
-              <EmptyState title="No products yet">Add products and record a batch on the Shelf to see how fast each one goes.</EmptyState>
+              <EmptyState title="No products yet">
+                Add products and record a batch on the Shelf to see how fast each one goes.
+              </EmptyState>
             ) : (
               <div className="grid gap-4 md:grid-cols-2 xl:grid-cols-3">
                 {restock.data.forecasts.map((forecast) => (

@@ -20,10 +20,16 @@ export function SetupRoute() {
   if (role && !can(role, 'manage')) return <Navigate to={paths.today(hid)} replace />;
   return (
     <>
-      <PageHeader title="Before the first plan" lead="Processing times and pressures, “today” and the week all depend on these. Answer once; change them later under Household." />
+      <PageHeader
+        title="Before the first plan"
+        lead="Processing times and pressures, “today” and the week all depend on these. Answer once; change them later under Household."
+      />
       <Card>
         {household.data ? (
-          <FirstRunForm household={household.data} onConfirmed={() => navigate(safeBack(hid, params.get('back')), { replace: true })} />
+          <FirstRunForm
+            household={household.data}
+            onConfirmed={() => navigate(safeBack(hid, params.get('back')), { replace: true })}
+          />
         ) : household.error ? (
           <Notice tone="past" role="alert">
             {household.error.message}

@@ -17,7 +17,8 @@ const VIEWS = [
   { id: 'table', label: 'Table' },
 ] as const;
 
-const linkButton = 'inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold text-ink hover:bg-sunken';
+const linkButton =
+  'inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold text-ink hover:bg-sunken';
 
 export function ShelfRoute() {
   const { hid, role } = useCurrentHousehold();
@@ -28,7 +29,10 @@ export function ShelfRoute() {
   const [text, setText] = useState('');
 
   const rows = useMemo(() => shelfBatchRows(jars.data ?? [], products.data ?? []), [jars.data, products.data]);
-  const groups = useMemo(() => shelfProductGroups(jars.data ?? [], products.data ?? [], rows), [jars.data, products.data, rows]);
+  const groups = useMemo(
+    () => shelfProductGroups(jars.data ?? [], products.data ?? [], rows),
+    [jars.data, products.data, rows],
+  );
   const found = useMemo(() => searchShelf(rows, products.data ?? [], text), [rows, products.data, text]);
   const shownRows = found ? rows.filter((r) => found.batchIds.has(r.batchId)) : rows;
   const shownGroups = found ? groups.filter((g) => found.productIds.has(g.product.id)) : groups;
@@ -39,14 +43,21 @@ export function ShelfRoute() {
     <>
       <PageHeader
         title="Shelf"
-        lead={jars.data ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.` : 'Every sealed jar, by product and batch, oldest first.'}
+        lead={
+          jars.data
+            ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.`
+            : 'Every sealed jar, by product and batch, oldest first.'
+        }
         actions={
           <>
             <a href={`/api/households/${hid}/shelf.csv`} download className={linkButton}>
               Export CSV
             </a>
             {canCook && (
-              <Link to={paths.newProduct(hid)} className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+              <Link
+                to={paths.newProduct(hid)}
+                className="inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong"
+              >
                 New product
               </Link>
             )}
@@ -61,14 +72,30 @@ export function ShelfRoute() {
       {jars.isPending || products.isPending ? (
         <p className="text-ink-muted">Counting jars…</p>
       ) : products.data?.length === 0 ? (
-        <EmptyState title="The shelf is empty" action={canCook ? <Link to={paths.newProduct(hid)} className="font-bold text-action underline">Add your first product</Link> : undefined}>
+        <EmptyState
+          title="The shelf is empty"
+          action={
+            canCook ? (
+              <Link to={paths.newProduct(hid)} className="font-bold text-action underline">
+                Add your first product
+              </Link>
+            ) : undefined
+          }
+        >
           Add the preserves your household makes, then record a batch: its sealed jars line up here, oldest first.
         </EmptyState>
       ) : (
         <div className="flex flex-col gap-4">
           <div className="flex flex-wrap items-end justify-between gap-3">
             <div className="w-full sm:w-96">
-              <TextField label="Search the shelf" type="search" placeholder="Product, kind, batch note…" value={text} onChange={(e) => setText(e.target.value)} hint="Finds near matches too: “chutny” finds the chutney." />
+              <TextField
+                label="Search the shelf"
+                type="search"
+                placeholder="Product, kind, batch note…"
+                value={text}
+                onChange={(e) => setText(e.target.value)}
+                hint="Finds near matches too: “chutny” finds the chutney."
+              />
             </div>
             <div role="group" aria-label="Show the shelf" className="flex rounded-lg border border-line bg-surface p-1">
               {VIEWS.map((option) => (
@@ -84,7 +111,9 @@ export function ShelfRoute() {
               ))}
             </div>
           </div>
-          {found && shownGroups.length === 0 && <p className="text-ink-muted">Nothing on the shelf matches “{text}”.</p>}
+          {found && shownGroups.length === 0 && (
+            <p className="text-ink-muted">Nothing on the shelf matches “{text}”.</p>
+          )}
           {view === 'table' ? (
             <ShelfTable hid={hid} rows={shownRows} />
           ) : (

@@ -22,7 +22,10 @@ export function TodayRoute() {
 
   return (
     <>
-      <PageHeader title="Today" lead={view ? dateWords(view.today) : 'What to open and use, the fridge, restock and your to-dos.'} />
+      <PageHeader
+        title="Today"
+        lead={view ? dateWords(view.today) : 'What to open and use, the fridge, restock and your to-dos.'}
+      />
       {today.isError && (
         <Notice tone="past" role="alert" title="Today could not be loaded">
           {today.error.message}
@@ -31,7 +34,11 @@ export function TodayRoute() {
       {!view && !today.isError && <p className="text-ink-muted">Loading…</p>}
       {view && products.data?.length === 0 && (
         <div className="mb-4">
-          <FirstProduct hid={hid} why="Today fills in once your shelf has jars: add what you preserve, its recipe, then record a batch." canCook={can(role, 'cook')} />
+          <FirstProduct
+            hid={hid}
+            why="Today fills in once your shelf has jars: add what you preserve, its recipe, then record a batch."
+            canCook={can(role, 'cook')}
+          />
         </div>
       )}
       {view && (
@@ -44,13 +51,29 @@ export function TodayRoute() {
           <TodaySection id="today-use" title="Open and use today" more={{ to: paths.week(hid), label: 'Week' }}>
             <JarsForToday hid={hid} use={view.use} short={view.short} canHandleJars={can(role, 'handleJars')} />
           </TodaySection>
-          <TodaySection id="today-fridge" title="In the fridge" more={view.fridgeCount > view.fridge.length ? { to: paths.fridge(hid), label: `All ${view.fridgeCount}` } : { to: paths.fridge(hid), label: 'Fridge' }}>
+          <TodaySection
+            id="today-fridge"
+            title="In the fridge"
+            more={
+              view.fridgeCount > view.fridge.length
+                ? { to: paths.fridge(hid), label: `All ${view.fridgeCount}` }
+                : { to: paths.fridge(hid), label: 'Fridge' }
+            }
+          >
             <FridgeCountdowns jars={view.fridge} />
           </TodaySection>
-          <TodaySection id="today-restock" title="Restock suggestions" more={{ to: paths.restock(hid), label: 'Restock' }}>
+          <TodaySection
+            id="today-restock"
+            title="Restock suggestions"
+            more={{ to: paths.restock(hid), label: 'Restock' }}
+          >
             <RestockGlance hid={hid} suggestions={view.restock} />
           </TodaySection>
-          <TodaySection id="today-todos" title="My to-dos" more={{ to: paths.todo(hid), label: view.openTodoCount ? `All ${view.openTodoCount} open` : 'To-do' }}>
+          <TodaySection
+            id="today-todos"
+            title="My to-dos"
+            more={{ to: paths.todo(hid), label: view.openTodoCount ? `All ${view.openTodoCount} open` : 'To-do' }}
+          >
             <MyTodos hid={hid} todos={view.myTodos} />
           </TodaySection>
         </div>

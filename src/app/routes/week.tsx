@@ -33,10 +33,40 @@ export function WeekRoute() {
   const day = validDate(params.get('day'));
   const start = asked ? weekStartOf(asked, weekStartsOn) : currentWeekStart(timeZone, weekStartsOn);
   const goTo = (next: string) => setParams(next === currentWeekStart(timeZone, weekStartsOn) ? {} : { start: next });
-  return <WeekScreen key={start} hid={hid} start={start} canEdit={can(role, 'cook')} isKeeper={role === 'keeper'} myId={me?.user.id ?? ''} goTo={goTo} thisWeek={currentWeekStart(timeZone, weekStartsOn)} day={day} />;
+  return (
+    <WeekScreen
+      key={start}
+      hid={hid}
+      start={start}
+      canEdit={can(role, 'cook')}
+      isKeeper={role === 'keeper'}
+      myId={me?.user.id ?? ''}
+      goTo={goTo}
+      thisWeek={currentWeekStart(timeZone, weekStartsOn)}
+      day={day}
+    />
+  );
 }
 
-function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek, day }: { hid: string; start: string; canEdit: boolean; isKeeper: boolean; myId: string; goTo: (start: string) => void; thisWeek: string; day: string | null }) {
+function WeekScreen({
+  hid,
+  start,
+  canEdit,
+  isKeeper,
+  myId,
+  goTo,
+  thisWeek,
+  day,
+}: {
+  hid: string;
+  start: string;
+  canEdit: boolean;
+  isKeeper: boolean;
+  myId: string;
+  goTo: (start: string) => void;
+  thisWeek: string;
+  day: string | null;
+}) {
   const week = useWeek(hid, start);
   const meals = useMeals(hid);
   const copy = useCopyWeek(hid);
@@ -45,7 +75,14 @@ function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek, day }
   const copyLastWeek = () =>
     copy.mutate(
       { from: shiftWeek(start, -1), to: start },
-      { onSuccess: ({ copied: count }) => setCopied(count ? `Copied ${count} planned meal${count === 1 ? '' : 's'} from last week.` : 'Last week had nothing planned to copy.') },
+      {
+        onSuccess: ({ copied: count }) =>
+          setCopied(
+            count
+              ? `Copied ${count} planned meal${count === 1 ? '' : 's'} from last week.`
+              : 'Last week had nothing planned to copy.',
+          ),
+      },
     );
   return (
     <>
@@ -54,7 +91,8 @@ function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek, day }
         lead={
           <>
             <span className="tabular font-bold text-ink">{title}</span>
-            {start === thisWeek ? ' · this week' : ''}. Plan meals and pair them with jars from the shelf; the board says which jar each one draws from.
+            {start === thisWeek ? ' · this week' : ''}. Plan meals and pair them with jars from the shelf; the board
+            says which jar each one draws from.
           </>
         }
         actions={
@@ -80,7 +118,11 @@ function WeekScreen({ hid, start, canEdit, isKeeper, myId, goTo, thisWeek, day }
       />
       <div className="flex flex-col gap-4">
         {!canEdit && <Notice tone="info">You can see the plan; cooks and keepers change it.</Notice>}
-        {copied && <Notice tone="action" role="status">{copied}</Notice>}
+        {copied && (
+          <Notice tone="action" role="status">
+            {copied}
+          </Notice>
+        )}
         {copy.error && (
           <Notice tone="past" role="alert">
             {copy.error.message}

@@ -9,7 +9,12 @@ const variants: Record<Variant, string> = {
   danger: 'bg-past text-white hover:brightness-95',
 };
 
-export function Button({ variant = 'primary', className = '', type = 'button', ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
+export function Button({
+  variant = 'primary',
+  className = '',
+  type = 'button',
+  ...props
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
   return (
     <button
       type={type}

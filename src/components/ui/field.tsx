@@ -1,4 +1,10 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import {
+  useId,
+  type InputHTMLAttributes,
+  type ReactNode,
+  type SelectHTMLAttributes,
+  type TextareaHTMLAttributes,
+} from 'react';
 
 interface FieldProps {
   label: string;
@@ -30,7 +36,13 @@ function FieldFrame({ id, label, error, hint, children }: FieldProps & { id: str
   );
 }
 
-export function TextField({ label, error, hint, className = '', ...props }: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
+export function TextField({
+  label,
+  error,
+  hint,
+  className = '',
+  ...props
+}: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
   const id = useId();
   return (
     <FieldFrame id={id} label={label} error={error} hint={hint}>
@@ -45,7 +57,14 @@ export function TextField({ label, error, hint, className = '', ...props }: Fiel
   );
 }
 
-export function SelectField({ label, error, hint, children, className = '', ...props }: FieldProps & SelectHTMLAttributes<HTMLSelectElement>) {
+export function SelectField({
+  label,
+  error,
+  hint,
+  children,
+  className = '',
+  ...props
+}: FieldProps & SelectHTMLAttributes<HTMLSelectElement>) {
   const id = useId();
   return (
     <FieldFrame id={id} label={label} error={error} hint={hint}>
@@ -56,7 +75,13 @@ export function SelectField({ label, error, hint, children, className = '', ...p
   );
 }
 
-export function TextAreaField({ label, error, hint, className = '', ...props }: FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+export function TextAreaField({
+  label,
+  error,
+  hint,
+  className = '',
+  ...props
+}: FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>) {
   const id = useId();
   return (
     <FieldFrame id={id} label={label} error={error} hint={hint}>
@@ -71,11 +96,21 @@ export function TextAreaField({ label, error, hint, className = '', ...props }: 
   );
 }
 
-export function CheckboxField({ label, hint, ...props }: { label: ReactNode; hint?: ReactNode } & InputHTMLAttributes<HTMLInputElement>) {
+export function CheckboxField({
+  label,
+  hint,
+  ...props
+}: { label: ReactNode; hint?: ReactNode } & InputHTMLAttributes<HTMLInputElement>) {
   const id = useId();
   return (
     <div className="flex items-start gap-3">
-      <input id={id} type="checkbox" className="mt-1 h-6 w-6 shrink-0 accent-action" aria-describedby={hint ? `${id}-hint` : undefined} {...props} />
+      <input
+        id={id}
+        type="checkbox"
+        className="mt-1 h-6 w-6 shrink-0 accent-action"
+        aria-describedby={hint ? `${id}-hint` : undefined}
+        {...props}
+      />
       <div>
         <label htmlFor={id} className="font-bold">
           {label}
@@ -91,11 +126,21 @@ export function CheckboxField({ label, hint, ...props }: { label: ReactNode; hin
 }
 
 /** One of a few choices, as a card: its radio, its label and a hint; the card is marked while it is chosen. */
-export function ChoiceCard({ label, hint, ...props }: { label: ReactNode; hint?: ReactNode } & Omit<InputHTMLAttributes<HTMLInputElement>, 'type'>) {
+export function ChoiceCard({
+  label,
+  hint,
+  ...props
+}: { label: ReactNode; hint?: ReactNode } & Omit<InputHTMLAttributes<HTMLInputElement>, 'type'>) {
   const id = useId();
   return (
     <div className="flex min-h-11 items-start gap-3 rounded-lg border border-line p-3 has-[:checked]:border-action has-[:checked]:bg-action-soft">
-      <input id={id} type="radio" className="mt-1 size-5 shrink-0 accent-action" aria-describedby={hint ? `${id}-hint` : undefined} {...props} />
+      <input
+        id={id}
+        type="radio"
+        className="mt-1 size-5 shrink-0 accent-action"
+        aria-describedby={hint ? `${id}-hint` : undefined}
+        {...props}
+      />
       <div>
         {/* A choice with a hint reads as a title and its explanation; a lone choice is plain text. */}
         <label htmlFor={id} className={`block cursor-pointer ${hint ? 'font-bold' : ''}`}>

@@ -9,7 +9,17 @@ const tones: Record<Tone, string> = {
   action: 'border-action/40 bg-action-soft text-ink',
 };
 
-export function Notice({ tone = 'info', title, children, role }: { tone?: Tone; title?: string; children?: ReactNode; role?: 'alert' | 'status' }) {
+export function Notice({
+  tone = 'info',
+  title,
+  children,
+  role,
+}: {
+  tone?: Tone;
+  title?: string;
+  children?: ReactNode;
+  role?: 'alert' | 'status';
+}) {
   return (
     <div className={`rounded-card border px-4 py-3 ${tones[tone]}`} role={role}>
       {title && <p className="font-bold">{title}</p>}

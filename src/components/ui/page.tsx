@@ -14,7 +14,13 @@ export function PageHeader({ title, lead, actions }: { title: string; lead?: Rea
 }
 
 export function Card({ children, className = '' }: { children: ReactNode; className?: string }) {
-  return <section className={`rounded-card border border-line bg-surface p-4 shadow-[0_1px_0_rgba(42,37,32,0.04)] ${className}`}>{children}</section>;
+  return (
+    <section
+      className={`rounded-card border border-line bg-surface p-4 shadow-[0_1px_0_rgba(42,37,32,0.04)] ${className}`}
+    >
+      {children}
+    </section>
+  );
 }
 
 export function EmptyState({ title, children, action }: { title: string; children?: ReactNode; action?: ReactNode }) {

@@ -17,7 +17,8 @@ const UndoContext = createContext<(offer: UndoOffer) => void>(() => {});
 /** Offer an undo for a one-tap action; the newest offer replaces the one before. */
 export const useUndoToast = () => useContext(UndoContext);
 
-const isTyping = (target: EventTarget | null) => target instanceof HTMLElement && (target.isContentEditable || /^(INPUT|TEXTAREA|SELECT)$/.test(target.tagName));
+const isTyping = (target: EventTarget | null) =>
+  target instanceof HTMLElement && (target.isContentEditable || /^(INPUT|TEXTAREA|SELECT)$/.test(target.tagName));
 
 export function UndoToastProvider({ children }: { children: ReactNode }) {
   const [toast, setToast] = useState<Toast | null>(null);
@@ -38,7 +39,11 @@ export function UndoToastProvider({ children }: { children: ReactNode }) {
       const outcome = await toast.undo();
       setToast((current) => (current?.id === id ? { ...current, phase: 'undone', outcome } : current));
     } catch (error) {
-      setToast((current) => (current?.id === id ? { ...current, phase: 'failed', outcome: `Could not undo: ${(error as Error).message}` } : current));
+      setToast((current) =>
+        current?.id === id
+          ? { ...current, phase: 'failed', outcome: `Could not undo: ${(error as Error).message}` }
+          : current,
+      );
     }
   }, [toast]);
 
@@ -46,7 +51,10 @@ export function UndoToastProvider({ children }: { children: ReactNode }) {
   useEffect(() => {
     if (!toast || held || toast.phase === 'undoing') return;
     const seconds = toast.phase === 'undone' ? 4 : UNDO_SECONDS;
-    const timer = window.setTimeout(() => setToast((current) => (current?.id === toast.id ? null : current)), seconds * 1000);
+    const timer = window.setTimeout(
+      () => setToast((current) => (current?.id === toast.id ? null : current)),
+      seconds * 1000,
+    );
     return () => window.clearTimeout(timer);
   }, [toast, held]);
 
@@ -63,7 +71,12 @@ export function UndoToastProvider({ children }: { children: ReactNode }) {
   useEffect(() => {
     if (toast?.phase !== 'offered') return;
     const onKey = (event: KeyboardEvent) => {
-      if ((event.ctrlKey || event.metaKey) && event.key.toLowerCase() === 'z' && !event.shiftKey && !isTyping(event.target)) {
+      if (
+        (event.ctrlKey || event.metaKey) &&
+        event.key.toLowerCase() === 'z' &&
+        !event.shiftKey &&
+        !isTyping(event.target)
+      ) {
         event.preventDefault();
         void runUndo();
       }
@@ -84,7 +97,12 @@ export function UndoToastProvider({ children }: { children: ReactNode }) {
     <UndoContext.Provider value={offer}>
       {children}
       {/* Always in the page, so screen readers hear each message as it changes. */}
-      <div className="pointer-events-none fixed inset-x-0 bottom-20 z-40 flex justify-center px-3 lg:bottom-6" role="status" aria-live="polite" aria-atomic="true">
+      <div
+        className="pointer-events-none fixed inset-x-0 bottom-20 z-40 flex justify-center px-3 lg:bottom-6"
+        role="status"
+        aria-live="polite"
+        aria-atomic="true"
+      >
         {toast && (
           <div
             key={toast.id}
@@ -95,7 +113,9 @@ export function UndoToastProvider({ children }: { children: ReactNode }) {
             onFocus={() => setHeld(true)}
             onBlur={() => setHeld(false)}
           >
-            <p className={`min-w-0 flex-1 text-[0.95rem] leading-snug ${toast.phase === 'failed' ? 'font-bold' : ''}`}>{words}</p>
+            <p className={`min-w-0 flex-1 text-[0.95rem] leading-snug ${toast.phase === 'failed' ? 'font-bold' : ''}`}>
+              {words}
+            </p>
             {toast.phase === 'offered' && (
               <button
                 ref={undoButton}
@@ -121,4 +141,3 @@ export function UndoToastProvider({ children }: { children: ReactNode }) {
     </UndoContext.Provider>
   );
 }
-

@@ -55,10 +55,16 @@ export function shelfBatchRows(jars: JarView[], products: ProductView[]): ShelfB
       notes: jar.batchNotes,
     });
   }
-  return [...rows.values()].sort((a, b) => a.bestBy.localeCompare(b.bestBy) || a.productName.localeCompare(b.productName));
+  return [...rows.values()].sort(
+    (a, b) => a.bestBy.localeCompare(b.bestBy) || a.productName.localeCompare(b.productName),
+  );
 }
 
-export function shelfProductGroups(jars: JarView[], products: ProductView[], rows: ShelfBatchRow[]): ShelfProductGroup[] {
+export function shelfProductGroups(
+  jars: JarView[],
+  products: ProductView[],
+  rows: ShelfBatchRow[],
+): ShelfProductGroup[] {
   const groups = products.map((product) => {
     const own = jars.filter((jar) => jar.productId === product.id);
     const sealed = own.filter((jar) => jar.state === 'sealed');
@@ -73,7 +79,11 @@ export function shelfProductGroups(jars: JarView[], products: ProductView[], row
     };
   });
   // Oldest best-quality date first, so the jars to eat soonest lead; empty products last.
-  return groups.sort((a, b) => (a.oldestBestBy ?? '9999').localeCompare(b.oldestBestBy ?? '9999') || a.product.name.localeCompare(b.product.name));
+  return groups.sort(
+    (a, b) =>
+      (a.oldestBestBy ?? '9999').localeCompare(b.oldestBestBy ?? '9999') ||
+      a.product.name.localeCompare(b.product.name),
+  );
 }
 
 /** Fuzzy search over products, batches and notes; returns the batch rows and product ids that match. */
@@ -93,6 +103,9 @@ export function searchShelf(rows: ShelfBatchRow[], products: ProductView[], text
   });
   const productFuse = new Fuse(products, { keys: ['name', 'kind', 'notes'], threshold: 0.38, ignoreLocation: true });
   const batchIds = new Set(fuse.search(query).map((hit) => hit.item.batchId));
-  const productIds = new Set([...productFuse.search(query).map((hit) => hit.item.id), ...rows.filter((r) => batchIds.has(r.batchId)).map((r) => r.productId)]);
+  const productIds = new Set([
+    ...productFuse.search(query).map((hit) => hit.item.id),
+    ...rows.filter((r) => batchIds.has(r.batchId)).map((r) => r.productId),
+  ]);
   return { batchIds, productIds };
 }

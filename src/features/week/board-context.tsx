@@ -26,7 +26,12 @@ export interface Board {
   hold: (held: Held | null) => void;
   /** Puts a meal on a slot, a product on a planned meal or a planned meal elsewhere: what a drop, a tap or a menu does. */
   put: (source: DragSource, target: DropTarget) => void;
-  restock: { todo: ReturnType<typeof useAddRestockTodo>; add: (productId: string) => void; added: Set<string>; refused: Map<string, Error> };
+  restock: {
+    todo: ReturnType<typeof useAddRestockTodo>;
+    add: (productId: string) => void;
+    added: Set<string>;
+    refused: Map<string, Error>;
+  };
 }
 
 export const BoardContext = createContext<Board | null>(null);

@@ -1,4 +1,11 @@
-import { KeyboardSensor, PointerSensor, TouchSensor, useSensor, useSensors, type KeyboardCoordinateGetter } from '@dnd-kit/core';
+import {
+  KeyboardSensor,
+  PointerSensor,
+  TouchSensor,
+  useSensor,
+  useSensors,
+  type KeyboardCoordinateGetter,
+} from '@dnd-kit/core';
 import type { PointerEvent } from 'react';
 
 /** Mouse and pen only: a finger goes through the touch sensor, which waits a moment so the page still scrolls. */
@@ -6,7 +13,8 @@ class MousePointerSensor extends PointerSensor {
   static activators = [
     {
       eventName: 'onPointerDown' as const,
-      handler: ({ nativeEvent }: PointerEvent) => nativeEvent.isPrimary && nativeEvent.button === 0 && nativeEvent.pointerType !== 'touch',
+      handler: ({ nativeEvent }: PointerEvent) =>
+        nativeEvent.isPrimary && nativeEvent.button === 0 && nativeEvent.pointerType !== 'touch',
     },
   ];
 }

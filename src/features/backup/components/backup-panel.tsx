@@ -19,12 +19,15 @@ export function BackupPanel({ hid }: { hid: string }) {
     setProblem(null);
     importing.reset();
     if (!file) return;
-    if (file.size > BACKUP_MAX_BYTES) return setProblem('That file is larger than 10 MB, so it cannot be a Larderly backup.');
+    if (file.size > BACKUP_MAX_BYTES)
+      return setProblem('That file is larger than 10 MB, so it cannot be a Larderly backup.');
     let backup: unknown;
     try {
       backup = JSON.parse(await file.text());
     } catch {
-      return setProblem('That file is not a Larderly backup: it is not JSON. Choose the .json file the export gave you.');
+      return setProblem(
+        'That file is not a Larderly backup: it is not JSON. Choose the .json file the export gave you.',
+      );
     }
     importing.mutate(backup);
   }
@@ -36,21 +39,36 @@ export function BackupPanel({ hid }: { hid: string }) {
       <div>
         <h3 className="font-bold">Export</h3>
         <p className="mb-2 text-ink-muted">
-          One JSON file with the products, recipes, batches, jars and their history, meals, the planned weeks and the to-dos. It holds no
-          passwords, members or invitation links. Photos and label codes are not in it.
+          One JSON file with the products, recipes, batches, jars and their history, meals, the planned weeks and the
+          to-dos. It holds no passwords, members or invitation links. Photos and label codes are not in it.
         </p>
-        <a href={`/api/households/${hid}/backup`} download className={`${buttonLook} border border-line bg-surface text-ink hover:bg-sunken`}>
+        <a
+          href={`/api/households/${hid}/backup`}
+          download
+          className={`${buttonLook} border border-line bg-surface text-ink hover:bg-sunken`}
+        >
           Download a backup
         </a>
       </div>
       <div>
         <h3 className="font-bold">Import</h3>
         <p className="mb-2 text-ink-muted">
-          A backup becomes a new household with you as its keeper, next to this one; nothing here changes. Invite the others again from there.
+          A backup becomes a new household with you as its keeper, next to this one; nothing here changes. Invite the
+          others again from there.
         </p>
-        <label htmlFor={fileId} className={`${buttonLook} cursor-pointer border border-line bg-surface text-ink hover:bg-sunken has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-action`}>
+        <label
+          htmlFor={fileId}
+          className={`${buttonLook} cursor-pointer border border-line bg-surface text-ink hover:bg-sunken has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-action`}
+        >
           {importing.isPending ? 'Importing…' : 'Choose a backup file'}
-          <input id={fileId} type="file" accept="application/json,.json" className="sr-only" onChange={choose} disabled={importing.isPending} />
+          <input
+            id={fileId}
+            type="file"
+            accept="application/json,.json"
+            className="sr-only"
+            onChange={choose}
+            disabled={importing.isPending}
+          />
         </label>
       </div>
       {error && (
@@ -61,8 +79,9 @@ export function BackupPanel({ hid }: { hid: string }) {
       {result && (
         <Notice tone="action" role="status" title={`Imported as a new household: ${result.household.name}`}>
           <p>
-            {result.counts.products} products, {result.counts.batches} batches, {result.counts.jars} jars, {result.counts.meals} meals and {result.counts.todos} to-dos.
-            New jars have new label codes: print fresh labels from each batch.
+            {result.counts.products} products, {result.counts.batches} batches, {result.counts.jars} jars,{' '}
+            {result.counts.meals} meals and {result.counts.todos} to-dos. New jars have new label codes: print fresh
+            labels from each batch.
           </p>
           <Link to={paths.today(result.household.id)} className="font-bold text-action underline underline-offset-4">
             Open {result.household.name}

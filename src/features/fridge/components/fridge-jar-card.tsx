@@ -10,16 +10,33 @@ import { paths } from '@shared/paths';
 
 function estimateWords(jar: FridgeJar) {
   const round = (tbsp: number) => Math.round(tbsp * 10) / 10;
-  if (jar.estimateFrom === 'jar') return `About ${round(jar.remainingTbsp)} of ${round(jar.capacityTbsp)} tbsp left. No meal in the plan uses it yet.`;
+  if (jar.estimateFrom === 'jar')
+    return `About ${round(jar.remainingTbsp)} of ${round(jar.capacityTbsp)} tbsp left. No meal in the plan uses it yet.`;
   if (jar.estimateTbsp <= 0) return 'The planned meals finish it before its use-by.';
-  if (jar.plannedTbsp === 0) return `No planned meal draws from this jar before its use-by; about ${round(jar.estimateTbsp)} tbsp left.`;
+  if (jar.plannedTbsp === 0)
+    return `No planned meal draws from this jar before its use-by; about ${round(jar.estimateTbsp)} tbsp left.`;
   return `The plan uses about ${round(jar.plannedTbsp)} tbsp; about ${round(jar.estimateTbsp)} tbsp will be left on its use-by.`;
 }
 
 /** Food would be left in it on its use-by: nothing planned finishes it. */
-const leftOnUseBy = (jar: FridgeJar) => jar.daysLeft >= 0 && (jar.estimateFrom === 'jar' ? jar.remainingTbsp > 0 : jar.estimateTbsp > 0);
+const leftOnUseBy = (jar: FridgeJar) =>
+  jar.daysLeft >= 0 && (jar.estimateFrom === 'jar' ? jar.remainingTbsp > 0 : jar.estimateTbsp > 0);
 
-export function FridgeJarCard({ hid, canPlan, jar, unsealedAdvice, onClose, busy }: { hid: string; canPlan: boolean; jar: FridgeJar; unsealedAdvice: string; onClose: (action: ClosingAction) => void; busy: boolean }) {
+export function FridgeJarCard({
+  hid,
+  canPlan,
+  jar,
+  unsealedAdvice,
+  onClose,
+  busy,
+}: {
+  hid: string;
+  canPlan: boolean;
+  jar: FridgeJar;
+  unsealedAdvice: string;
+  onClose: (action: ClosingAction) => void;
+  busy: boolean;
+}) {
   const [confirmDiscard, setConfirmDiscard] = useState(false);
   const { tone } = countdown(jar.daysLeft);
   return (
@@ -38,16 +55,24 @@ export function FridgeJarCard({ hid, canPlan, jar, unsealedAdvice, onClose, busy
         <CountdownBadge daysLeft={jar.daysLeft} />
       </div>
       <p className="tabular">
-        <span className="font-bold">{DATE_NAMES.useBy} {dateWords(jar.useBy)}.</span> {estimateWords(jar)}
+        <span className="font-bold">
+          {DATE_NAMES.useBy} {dateWords(jar.useBy)}.
+        </span>{' '}
+        {estimateWords(jar)}
       </p>
       {canPlan && leftOnUseBy(jar) && (
-        <Link to={paths.week(hid, jar.useBy, jar.useBy)} className="-mt-1 inline-flex min-h-11 items-center self-start font-bold text-action underline underline-offset-4" aria-label={`Plan it on a meal: jar ${jar.code} of ${jar.productName}`}>
+        <Link
+          to={paths.week(hid, jar.useBy, jar.useBy)}
+          className="-mt-1 inline-flex min-h-11 items-center self-start font-bold text-action underline underline-offset-4"
+          aria-label={`Plan it on a meal: jar ${jar.code} of ${jar.productName}`}
+        >
           Plan it on a meal
         </Link>
       )}
       {jar.unsealed && (
         <p className="rounded-lg border border-soon-fill bg-soon-soft px-3 py-2 text-sm">
-          <span className="font-bold">Unsealed jar.</span> {unsealedAdvice} Follow your tested recipe and your local extension service; when in doubt, throw it out.
+          <span className="font-bold">Unsealed jar.</span> {unsealedAdvice} Follow your tested recipe and your local
+          extension service; when in doubt, throw it out.
         </p>
       )}
       {confirmDiscard ? (
@@ -62,10 +87,19 @@ export function FridgeJarCard({ hid, canPlan, jar, unsealedAdvice, onClose, busy
         </div>
       ) : (
         <div className="flex flex-wrap gap-2">
-          <Button disabled={busy} onClick={() => onClose('finish')} aria-label={`${JAR_ACTION_NAMES.finish}: jar ${jar.code} of ${jar.productName}`}>
+          <Button
+            disabled={busy}
+            onClick={() => onClose('finish')}
+            aria-label={`${JAR_ACTION_NAMES.finish}: jar ${jar.code} of ${jar.productName}`}
+          >
             {JAR_ACTION_NAMES.finish}
           </Button>
-          <Button variant="secondary" disabled={busy} onClick={() => setConfirmDiscard(true)} aria-label={`Discard jar ${jar.code} of ${jar.productName}`}>
+          <Button
+            variant="secondary"
+            disabled={busy}
+            onClick={() => setConfirmDiscard(true)}
+            aria-label={`Discard jar ${jar.code} of ${jar.productName}`}
+          >
             Discard
           </Button>
         </div>

@@ -17,7 +17,8 @@ export function useUpdateMemberRole(hid: string) {
 }
 
 /** A keeper takes someone out of the household; their access ends on their next request. */
-export const removeMember = (hid: string, userId: string) => api.delete<{ members: MemberView[] }>(`/households/${hid}/members/${userId}`).then((r) => r.members);
+export const removeMember = (hid: string, userId: string) =>
+  api.delete<{ members: MemberView[] }>(`/households/${hid}/members/${userId}`).then((r) => r.members);
 
 export function useRemoveMember(hid: string) {
   const queryClient = useQueryClient();

@@ -20,10 +20,14 @@ export function AltitudeGate({ hid, children }: { hid: string; children: ReactNo
   return (
     <Notice tone="soon" title="First, your altitude" role="status">
       <p>
-        Processing times and pressures depend on how high you live, so Larderly shows no processing plan until the household’s altitude is confirmed.
+        Processing times and pressures depend on how high you live, so Larderly shows no processing plan until the
+        household’s altitude is confirmed.
       </p>
       {can(role, 'manage') ? (
-        <Link to={setupHref(hid, location.pathname + location.search)} className="mt-2 inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+        <Link
+          to={setupHref(hid, location.pathname + location.search)}
+          className="mt-2 inline-flex min-h-11 items-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong"
+        >
           Confirm the altitude
         </Link>
       ) : (

@@ -4,7 +4,13 @@ import type { MembershipSummary } from '@shared/schemas/auth';
 import { paths } from '@shared/paths';
 
 /** Moves to the same screen in another household; a plain label when there is only one. */
-export function HouseholdSwitcher({ memberships, current }: { memberships: MembershipSummary[]; current: MembershipSummary }) {
+export function HouseholdSwitcher({
+  memberships,
+  current,
+}: {
+  memberships: MembershipSummary[];
+  current: MembershipSummary;
+}) {
   const navigate = useNavigate();
   const location = useLocation();
   const screen = location.pathname.split('/').slice(3).join('/');

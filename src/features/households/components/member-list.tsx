@@ -7,7 +7,17 @@ import { Notice } from '@/components/ui/notice';
 import { useLeaveHousehold, useRemoveMember, useUpdateMemberRole } from '../api/update-member';
 import { paths } from '@shared/paths';
 
-export function MemberList({ hid, members, canManage, myId }: { hid: string; members: MemberView[]; canManage: boolean; myId: string }) {
+export function MemberList({
+  hid,
+  members,
+  canManage,
+  myId,
+}: {
+  hid: string;
+  members: MemberView[];
+  canManage: boolean;
+  myId: string;
+}) {
   const update = useUpdateMemberRole(hid);
   const remove = useRemoveMember(hid);
   const [removing, setRemoving] = useState<MemberView | null>(null);
@@ -48,7 +58,11 @@ export function MemberList({ hid, members, canManage, myId }: { hid: string; mem
                     </select>
                   </label>
                   {member.userId !== myId && (
-                    <Button variant="secondary" aria-label={`Remove ${member.name}`} onClick={() => setRemoving(member)}>
+                    <Button
+                      variant="secondary"
+                      aria-label={`Remove ${member.name}`}
+                      onClick={() => setRemoving(member)}
+                    >
                       Remove
                     </Button>
                   )}
@@ -58,9 +72,19 @@ export function MemberList({ hid, members, canManage, myId }: { hid: string; mem
               )}
             </div>
             {removing?.userId === member.userId && (
-              <div className="flex flex-wrap items-center gap-2 rounded-card border border-past/50 bg-past-soft px-3 py-2" role="group" aria-label={`Confirm removing ${member.name}`}>
-                <p className="grow">Remove {member.name}? They lose access at once, and their reminders for this household stop.</p>
-                <Button variant="danger" disabled={remove.isPending} onClick={() => remove.mutate(member.userId, { onSuccess: () => setRemoving(null) })}>
+              <div
+                className="flex flex-wrap items-center gap-2 rounded-card border border-past/50 bg-past-soft px-3 py-2"
+                role="group"
+                aria-label={`Confirm removing ${member.name}`}
+              >
+                <p className="grow">
+                  Remove {member.name}? They lose access at once, and their reminders for this household stop.
+                </p>
+                <Button
+                  variant="danger"
+                  disabled={remove.isPending}
+                  onClick={() => remove.mutate(member.userId, { onSuccess: () => setRemoving(null) })}
+                >
                   {remove.isPending ? 'Removing…' : `Yes, remove ${member.name}`}
                 </Button>
                 <Button variant="quiet" onClick={() => setRemoving(null)}>
@@ -95,9 +119,16 @@ function LeaveHousehold({ hid }: { hid: string }) {
           {leave.error.message}
         </p>
       )}
-      <p>Leave this household? You will no longer see its shelf, fridge or week, and its reminders stop. A keeper can invite you again.</p>
+      <p>
+        Leave this household? You will no longer see its shelf, fridge or week, and its reminders stop. A keeper can
+        invite you again.
+      </p>
       <div className="flex flex-wrap gap-2">
-        <Button variant="danger" disabled={leave.isPending} onClick={() => leave.mutate(undefined, { onSuccess: () => navigate(paths.home(), { replace: true }) })}>
+        <Button
+          variant="danger"
+          disabled={leave.isPending}
+          onClick={() => leave.mutate(undefined, { onSuccess: () => navigate(paths.home(), { replace: true }) })}
+        >
           {leave.isPending ? 'Leaving…' : 'Yes, leave'}
         </Button>
         <Button variant="quiet" onClick={() => setAsking(false)}>

@@ -17,7 +17,10 @@ export function SetupBanner({ hid }: { hid: string }) {
         {can(role, 'manage') ? (
           <p>
             Tell Larderly how high you live, your time zone and your canner before the first processing plan.{' '}
-            <Link to={setupHref(hid, location.pathname + location.search)} className="font-bold text-action underline underline-offset-4">
+            <Link
+              to={setupHref(hid, location.pathname + location.search)}
+              className="font-bold text-action underline underline-offset-4"
+            >
               Answer four questions
             </Link>
           </p>

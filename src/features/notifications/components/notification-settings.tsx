@@ -14,7 +14,17 @@ function hourLabel(hour: number) {
 }
 
 /** A checkbox that shows the new choice in the same frame as the tap; the saved setting follows when it arrives. */
-function Toggle({ label, hint, checked, onChange }: { label: string; hint: string; checked: boolean; onChange: (on: boolean) => void }) {
+function Toggle({
+  label,
+  hint,
+  checked,
+  onChange,
+}: {
+  label: string;
+  hint: string;
+  checked: boolean;
+  onChange: (on: boolean) => void;
+}) {
   const [shown, setShown] = useState(checked);
   const [saved, setSaved] = useState(checked);
   if (checked !== saved) {
@@ -61,14 +71,23 @@ export function NotificationSettingsPanel() {
           Use-by reminders
         </h3>
         <div className="grid gap-3 sm:grid-cols-2">
-          <SelectField label="Remind me" value={s.daysBefore} onChange={(e) => change({ daysBefore: Number(e.target.value) })}>
+          <SelectField
+            label="Remind me"
+            value={s.daysBefore}
+            onChange={(e) => change({ daysBefore: Number(e.target.value) })}
+          >
             {DAYS.map((d) => (
               <option key={d} value={d}>
                 {d === 1 ? '1 day' : `${d} days`} before the use-by
               </option>
             ))}
           </SelectField>
-          <SelectField label="Reminder time" hint="In the household's time zone. A reminder missed at that hour is sent up to 3 hours late, never later in the day." value={s.reminderHour} onChange={(e) => change({ reminderHour: Number(e.target.value) })}>
+          <SelectField
+            label="Reminder time"
+            hint="In the household's time zone. A reminder missed at that hour is sent up to 3 hours late, never later in the day."
+            value={s.reminderHour}
+            onChange={(e) => change({ reminderHour: Number(e.target.value) })}
+          >
             {HOURS.map((h) => (
               <option key={h} value={h}>
                 {hourLabel(h)}
@@ -76,8 +95,18 @@ export function NotificationSettingsPanel() {
             ))}
           </SelectField>
         </div>
-        <Toggle label="E-mail reminders" hint="The same reminders by e-mail, for when push is off." checked={s.emailReminders} onChange={(on) => change({ emailReminders: on })} />
-        <Toggle label="Weekly digest by e-mail" hint="On the first day of the week: the plan, jars to open and the opened jars that reach their use-by." checked={s.weeklyDigest} onChange={(on) => change({ weeklyDigest: on })} />
+        <Toggle
+          label="E-mail reminders"
+          hint="The same reminders by e-mail, for when push is off."
+          checked={s.emailReminders}
+          onChange={(on) => change({ emailReminders: on })}
+        />
+        <Toggle
+          label="Weekly digest by e-mail"
+          hint="On the first day of the week: the plan, jars to open and the opened jars that reach their use-by."
+          checked={s.weeklyDigest}
+          onChange={(on) => change({ weeklyDigest: on })}
+        />
         {update.error && (
           <Notice tone="past" role="alert">
             {update.error.message}

@@ -10,12 +10,21 @@ export function PushDevicePanel({ otherDevices }: { otherDevices: number }) {
   const busy = device.subscribe.isPending || device.unsubscribe.isPending || device.test.isPending;
 
   if (!device.supported) {
-    return <Notice tone="info">This browser cannot receive push notifications. Use e-mail reminders, or open Larderly in a browser that can. {PUSH_BROWSERS}</Notice>;
+    return (
+      <Notice tone="info">
+        This browser cannot receive push notifications. Use e-mail reminders, or open Larderly in a browser that can.{' '}
+        {PUSH_BROWSERS}
+      </Notice>
+    );
   }
   return (
     <div className="flex flex-col gap-3">
       <p role="status" className="tabular">
-        {device.checking ? 'Checking this device…' : device.subscribed ? 'Notifications are on for this device.' : 'Notifications are off for this device.'}
+        {device.checking
+          ? 'Checking this device…'
+          : device.subscribed
+            ? 'Notifications are on for this device.'
+            : 'Notifications are off for this device.'}
         {otherDevices > 0 && <span className="text-ink-muted"> Devices with notifications on: {otherDevices}.</span>}
       </p>
       {error && (

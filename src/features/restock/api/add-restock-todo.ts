@@ -9,7 +9,8 @@ export const addRestockTodo = (hid: string, productId: string, input: RestockTod
 export function useAddRestockTodo(hid: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ productId, input }: { productId: string; input: RestockTodoCreate }) => addRestockTodo(hid, productId, input),
+    mutationFn: ({ productId, input }: { productId: string; input: RestockTodoCreate }) =>
+      addRestockTodo(hid, productId, input),
     onSuccess: () => refreshPlanning(queryClient, hid),
   });
 }

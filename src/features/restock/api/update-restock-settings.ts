@@ -13,7 +13,12 @@ export const updateRestockSettings = (hid: string, productId: string, patch: Res
 export function useUpdateRestockSettings(hid: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ productId, patch }: { productId: string; patch: RestockSettings }) => updateRestockSettings(hid, productId, patch),
-    onSettled: () => Promise.all([refreshPlanning(queryClient, hid), queryClient.invalidateQueries({ queryKey: shelfKeys.products(hid) })]),
+    mutationFn: ({ productId, patch }: { productId: string; patch: RestockSettings }) =>
+      updateRestockSettings(hid, productId, patch),
+    onSettled: () =>
+      Promise.all([
+        refreshPlanning(queryClient, hid),
+        queryClient.invalidateQueries({ queryKey: shelfKeys.products(hid) }),
+      ]),
   });
 }

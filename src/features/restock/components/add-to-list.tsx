@@ -8,7 +8,19 @@ import { useAddRestockTodo } from '../api/add-restock-todo';
 import { paths } from '@shared/paths';
 
 /** "Add a restock batch to the to-do list", with the jar count the cook may change. */
-export function AddToList({ hid, productId, productName, suggestedJars, jarSize }: { hid: string; productId: string; productName: string; suggestedJars: number; jarSize: JarSize }) {
+export function AddToList({
+  hid,
+  productId,
+  productName,
+  suggestedJars,
+  jarSize,
+}: {
+  hid: string;
+  productId: string;
+  productName: string;
+  suggestedJars: number;
+  jarSize: JarSize;
+}) {
   const add = useAddRestockTodo(hid);
   const [jars, setJars] = useState(String(suggestedJars));
   const submit = (event: FormEvent) => {

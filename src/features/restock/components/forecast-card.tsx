@@ -10,10 +10,21 @@ function runOutWords(forecast: RestockForecastView) {
 }
 
 /** One product's rate, stock, run-out date and jar size advice, with its use chart. */
-export function ForecastCard({ hid, forecast, canCook }: { hid: string; forecast: RestockForecastView; canCook: boolean }) {
+export function ForecastCard({
+  hid,
+  forecast,
+  canCook,
+}: {
+  hid: string;
+  forecast: RestockForecastView;
+  canCook: boolean;
+}) {
   const advice = forecast.jarSizeAdvice;
   return (
-    <article aria-labelledby={`forecast-${forecast.productId}`} className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
+    <article
+      aria-labelledby={`forecast-${forecast.productId}`}
+      className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4"
+    >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h3 id={`forecast-${forecast.productId}`} className="text-lg">
           {forecast.productName}

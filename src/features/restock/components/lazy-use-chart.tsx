@@ -10,7 +10,9 @@ export function LazyUseChart({ productName, months }: { productName: string; mon
   useEffect(() => {
     const element = holder.current;
     if (!element || near) return;
-    const observer = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setNear(true), { rootMargin: '200px' });
+    const observer = new IntersectionObserver((entries) => entries.some((e) => e.isIntersecting) && setNear(true), {
+      rootMargin: '200px',
+    });
     observer.observe(element);
     return () => observer.disconnect();
   }, [near]);
@@ -21,7 +23,11 @@ export function LazyUseChart({ productName, months }: { productName: string; mon
         <p className="text-sm text-ink-muted">No jars finished in the last six months.</p>
       ) : (
         <Suspense fallback={<div className="h-[5.5rem] rounded-lg bg-sunken/50" />}>
-          {near ? <UseChart productName={productName} months={months} /> : <div className="h-[5.5rem] rounded-lg bg-sunken/50" />}
+          {near ? (
+            <UseChart productName={productName} months={months} />
+          ) : (
+            <div className="h-[5.5rem] rounded-lg bg-sunken/50" />
+          )}
         </Suspense>
       )}
     </div>

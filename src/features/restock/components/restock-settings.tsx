@@ -3,10 +3,19 @@ import type { RestockForecastView } from '@shared/schemas/restock';
 import { useUpdateRestockSettings } from '../api/update-restock-settings';
 
 /** Favourite and minimum jars, edited in place; a helper sees them read-only. */
-export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forecast: RestockForecastView; canEdit: boolean }) {
+export function RestockSettings({
+  hid,
+  forecast,
+  canEdit,
+}: {
+  hid: string;
+  forecast: RestockForecastView;
+  canEdit: boolean;
+}) {
   const update = useUpdateRestockSettings(hid);
   const [minJars, setMinJars] = useState(String(forecast.minJars));
-  const save = (patch: { favourite?: boolean; minJars?: number }) => update.mutate({ productId: forecast.productId, patch });
+  const save = (patch: { favourite?: boolean; minJars?: number }) =>
+    update.mutate({ productId: forecast.productId, patch });
   const saveMinimum = () => {
     const value = Number(minJars);
     if (Number.isInteger(value) && value >= 0 && value !== forecast.minJars) save({ minJars: value });
@@ -22,7 +31,11 @@ export function RestockSettings({ hid, forecast, canEdit }: { hid: string; forec
         className={`inline-flex min-h-11 items-center gap-2 rounded-lg border px-3 font-bold ${forecast.favourite ? 'border-soon-fill bg-soon-soft text-ink' : 'border-line bg-surface text-ink-muted'} disabled:cursor-default`}
       >
         <svg viewBox="0 0 24 24" className="h-5 w-5" aria-hidden="true">
-          <path d="M12 3l2.7 5.6 6.1.9-4.4 4.3 1 6.1L12 17l-5.4 2.9 1-6.1L3.2 9.5l6.1-.9z" className={forecast.favourite ? 'fill-soon-fill stroke-soon' : 'fill-none stroke-ink-muted'} strokeWidth="1.5" />
+          <path
+            d="M12 3l2.7 5.6 6.1.9-4.4 4.3 1 6.1L12 17l-5.4 2.9 1-6.1L3.2 9.5l6.1-.9z"
+            className={forecast.favourite ? 'fill-soon-fill stroke-soon' : 'fill-none stroke-ink-muted'}
+            strokeWidth="1.5"
+          />
         </svg>
         Favorite
       </button>

@@ -7,7 +7,17 @@ import { paths } from '@shared/paths';
 const REASON_TITLES = { 'runs-out-soon': 'Runs out soon', 'below-minimum': 'Below your minimum' } as const;
 
 /** A favourite that needs a batch: why, how many jars, and the step that puts it on the list. */
-export function SuggestionCard({ hid, suggestion, canCook, focused }: { hid: string; suggestion: RestockSuggestionView; canCook: boolean; focused: boolean }) {
+export function SuggestionCard({
+  hid,
+  suggestion,
+  canCook,
+  focused,
+}: {
+  hid: string;
+  suggestion: RestockSuggestionView;
+  canCook: boolean;
+  focused: boolean;
+}) {
   return (
     <article
       id={`restock-${suggestion.productId}`}
@@ -21,11 +31,15 @@ export function SuggestionCard({ hid, suggestion, canCook, focused }: { hid: str
         </h3>
         <p>{suggestion.why}</p>
         <p className="text-ink-muted">
-          About {suggestion.suggestedJars} {JAR_SIZE_NAMES[suggestion.jarSize]} jars last until {dateWords(suggestion.lastsUntil)}, the end of the next harvest month.
+          About {suggestion.suggestedJars} {JAR_SIZE_NAMES[suggestion.jarSize]} jars last until{' '}
+          {dateWords(suggestion.lastsUntil)}, the end of the next harvest month.
         </p>
       </div>
       {suggestion.openTodoId ? (
-        <Link to={paths.todo(hid, suggestion.openTodoId)} className="inline-flex min-h-11 items-center font-bold text-action underline">
+        <Link
+          to={paths.todo(hid, suggestion.openTodoId)}
+          className="inline-flex min-h-11 items-center font-bold text-action underline"
+        >
           On the to-do list: open the batch plan
         </Link>
       ) : !suggestion.hasRecipe ? (
@@ -36,7 +50,13 @@ export function SuggestionCard({ hid, suggestion, canCook, focused }: { hid: str
           </Link>
         </p>
       ) : canCook ? (
-        <AddToList hid={hid} productId={suggestion.productId} productName={suggestion.productName} suggestedJars={suggestion.suggestedJars} jarSize={suggestion.jarSize} />
+        <AddToList
+          hid={hid}
+          productId={suggestion.productId}
+          productName={suggestion.productName}
+          suggestedJars={suggestion.suggestedJars}
+          jarSize={suggestion.jarSize}
+        />
       ) : (
         <p className="text-ink-muted">A cook or keeper can put this batch on the to-do list.</p>
       )}

@@ -11,7 +11,12 @@ export default function UseChart({ productName, months }: { productName: string;
   const slot = WIDTH / months.length;
   const summary = months.map((m) => `${monthWords(m.month)} ${Math.round(m.tbsp)} tbsp`).join(', ');
   return (
-    <svg viewBox={`0 0 ${WIDTH} ${HEIGHT + LABEL}`} className="h-auto w-full max-w-xs" role="img" aria-label={`${productName}, used per month: ${summary}`}>
+    <svg
+      viewBox={`0 0 ${WIDTH} ${HEIGHT + LABEL}`}
+      className="h-auto w-full max-w-xs"
+      role="img"
+      aria-label={`${productName}, used per month: ${summary}`}
+    >
       <line x1="0" x2={WIDTH} y1={HEIGHT} y2={HEIGHT} className="stroke-line" strokeWidth="1" />
       {months.map((month, index) => {
         const height = (month.tbsp / most) * (HEIGHT - 8);

@@ -3,7 +3,8 @@ import type { SealCheckDone, SealCheckInput } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
 import { householdKeys, shelfKeys } from '@/lib/query-keys';
 
-export const checkSeals = (hid: string, batchId: string, input: SealCheckInput) => api.post<SealCheckDone>(`/households/${hid}/batches/${batchId}/seal-check`, input);
+export const checkSeals = (hid: string, batchId: string, input: SealCheckInput) =>
+  api.post<SealCheckDone>(`/households/${hid}/batches/${batchId}/seal-check`, input);
 
 export function useCheckSeals(hid: string, batchId: string) {
   const queryClient = useQueryClient();

@@ -3,7 +3,8 @@ import type { BatchCreate, BatchCreated } from '@shared/schemas/batches';
 import { api } from '@/lib/api-client';
 import { householdKeys } from '@/lib/query-keys';
 
-export const createBatch = (hid: string, batch: BatchCreate) => api.post<BatchCreated>(`/households/${hid}/batches`, batch);
+export const createBatch = (hid: string, batch: BatchCreate) =>
+  api.post<BatchCreated>(`/households/${hid}/batches`, batch);
 
 export function useCreateBatch(hid: string) {
   const queryClient = useQueryClient();

@@ -4,7 +4,10 @@ import { api } from '@/lib/api-client';
 import { shelfKeys } from '@/lib/query-keys';
 
 export const saveProduct = (hid: string, productId: string | undefined, product: ProductCreate) =>
-  (productId ? api.patch<{ product: ProductView }>(`/households/${hid}/products/${productId}`, product) : api.post<{ product: ProductView }>(`/households/${hid}/products`, product)).then((r) => r.product);
+  (productId
+    ? api.patch<{ product: ProductView }>(`/households/${hid}/products/${productId}`, product)
+    : api.post<{ product: ProductView }>(`/households/${hid}/products`, product)
+  ).then((r) => r.product);
 
 export function useSaveProduct(hid: string, productId?: string) {
   const queryClient = useQueryClient();

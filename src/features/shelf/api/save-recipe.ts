@@ -4,7 +4,10 @@ import { api } from '@/lib/api-client';
 import { shelfKeys } from '@/lib/query-keys';
 
 export const saveRecipe = (hid: string, recipeId: string | undefined, recipe: RecipeCreate) =>
-  (recipeId ? api.patch<{ recipe: RecipeView }>(`/households/${hid}/recipes/${recipeId}`, recipe) : api.post<{ recipe: RecipeView }>(`/households/${hid}/recipes`, recipe)).then((r) => r.recipe);
+  (recipeId
+    ? api.patch<{ recipe: RecipeView }>(`/households/${hid}/recipes/${recipeId}`, recipe)
+    : api.post<{ recipe: RecipeView }>(`/households/${hid}/recipes`, recipe)
+  ).then((r) => r.recipe);
 
 export function useSaveRecipe(hid: string, recipeId?: string) {
   const queryClient = useQueryClient();

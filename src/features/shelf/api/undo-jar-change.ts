@@ -7,7 +7,8 @@ import { api } from '@/lib/api-client';
 import { householdKeys, shelfKeys } from '@/lib/query-keys';
 
 /** Reverses one open, finish or discard on the server; the jar's history keeps both. */
-export const undoJarChange = (hid: string, jarId: string, eventId: string) => api.post<JarActed>(`/households/${hid}/jars/${jarId}/undo`, { eventId });
+export const undoJarChange = (hid: string, jarId: string, eventId: string) =>
+  api.post<JarActed>(`/households/${hid}/jars/${jarId}/undo`, { eventId });
 
 /** Every view of a jar sits under the household, and a label's page under its code. */
 function useRefreshJarViews(hid: string) {
@@ -25,15 +26,20 @@ function useRefreshJarViews(hid: string) {
 /** A jar page's "Put back": a cook reverses a finish or discard, however long ago. */
 export function usePutBackJar(hid: string) {
   const refresh = useRefreshJarViews(hid);
-  return useMutation({ mutationFn: ({ jarId, eventId }: { jarId: string; eventId: string }) => undoJarChange(hid, jarId, eventId), onSettled: refresh });
+  return useMutation({
+    mutationFn: ({ jarId, eventId }: { jarId: string; eventId: string }) => undoJarChange(hid, jarId, eventId),
+    onSettled: refresh,
+  });
 }
 
-export const whereJarIs = (jar: Pick<JarView, 'state'>) => (jar.state === 'opened' ? 'back in the fridge' : 'back on the shelf, sealed');
+export const whereJarIs = (jar: Pick<JarView, 'state'>) =>
+  jar.state === 'opened' ? 'back in the fridge' : 'back on the shelf, sealed';
 
 /** What the toast says: which jar, and where it went. */
 export function jarActionWords(action: JarAction, jar: Pick<JarView, 'code' | 'productName' | 'useBy'>): string {
   const which = `jar ${jar.code} of ${jar.productName}`;
-  if (action === 'open') return `Opened ${which}. It is in the fridge now${jar.useBy ? `; use by ${dateWords(jar.useBy)}` : ''}.`;
+  if (action === 'open')
+    return `Opened ${which}. It is in the fridge now${jar.useBy ? `; use by ${dateWords(jar.useBy)}` : ''}.`;
   if (action === 'finish') return `Finished ${which}. It has left the fridge.`;
   return `Discarded ${which}. It is off the shelf and out of the plan.`;
 }

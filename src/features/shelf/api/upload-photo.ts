@@ -20,4 +20,5 @@ export function useUploadBatchPhoto(hid: string, batchId: string) {
   });
 }
 
-export const batchPhotoUrl = (hid: string, batchId: string, version: string) => `/api/households/${hid}/batches/${batchId}/photo?v=${encodeURIComponent(version)}`;
+export const batchPhotoUrl = (hid: string, batchId: string, version: string) =>
+  `/api/households/${hid}/batches/${batchId}/photo?v=${encodeURIComponent(version)}`;

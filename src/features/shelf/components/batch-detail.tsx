@@ -48,7 +48,9 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             <dt className="text-ink-muted">Jars</dt>
             <dd className="tabular">
               {batch.jarsFilled} {jarSizeWords(batch.jarSize)} filled,{' '}
-              {batch.sealCheck ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check` : `${batch.jarsSealed} sealed`}
+              {batch.sealCheck
+                ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check`
+                : `${batch.jarsSealed} sealed`}
             </dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
@@ -63,7 +65,10 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             <dt className="text-ink-muted">Recipe</dt>
             <dd>
               {batch.recipeId ? (
-                <Link to={paths.recipe(hid, batch.recipeId)} className="font-bold text-action underline underline-offset-4">
+                <Link
+                  to={paths.recipe(hid, batch.recipeId)}
+                  className="font-bold text-action underline underline-offset-4"
+                >
                   {batch.recipeName}
                 </Link>
               ) : (
@@ -97,7 +102,10 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
         <Card>
           <div className="mb-2 flex flex-wrap items-center justify-between gap-2">
             <h2 className="text-xl">Jars</h2>
-            <Link to={paths.batchLabels(hid, batch.id)} className="inline-flex min-h-11 items-center rounded-lg border border-line px-4 font-bold hover:bg-sunken">
+            <Link
+              to={paths.batchLabels(hid, batch.id)}
+              className="inline-flex min-h-11 items-center rounded-lg border border-line px-4 font-bold hover:bg-sunken"
+            >
               Print labels
             </Link>
           </div>
@@ -106,7 +114,10 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
               <li key={jar.id} className="flex flex-wrap items-center justify-between gap-3 py-3">
                 <div className="flex flex-col gap-1">
                   <p className="flex flex-wrap items-center gap-2">
-                    <Link to={paths.jar(jar.code)} className="font-mono text-lg font-bold tracking-wider text-action underline underline-offset-4">
+                    <Link
+                      to={paths.jar(jar.code)}
+                      className="font-mono text-lg font-bold tracking-wider text-action underline underline-offset-4"
+                    >
                       {jar.code}
                     </Link>
                     <JarStateBadge jar={jar} />

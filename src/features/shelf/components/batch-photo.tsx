@@ -9,13 +9,20 @@ export function BatchPhoto({ hid, batch, canUpload }: { hid: string; batch: Batc
   return (
     <div className="flex flex-col gap-2">
       {batch.hasPhoto ? (
-        <img src={batchPhotoUrl(hid, batch.id, String(upload.submittedAt || 0))} alt={`The ${batch.productName} batch`} className="max-h-72 w-full rounded-card border border-line object-cover" />
+        <img
+          src={batchPhotoUrl(hid, batch.id, String(upload.submittedAt || 0))}
+          alt={`The ${batch.productName} batch`}
+          className="max-h-72 w-full rounded-card border border-line object-cover"
+        />
       ) : (
         <p className="text-ink-muted">No photo of this batch yet.</p>
       )}
       {canUpload && (
         <div>
-          <label htmlFor={id} className="inline-flex min-h-11 cursor-pointer items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken focus-within:outline-3">
+          <label
+            htmlFor={id}
+            className="inline-flex min-h-11 cursor-pointer items-center rounded-lg border border-line bg-surface px-4 font-bold hover:bg-sunken focus-within:outline-3"
+          >
             {upload.isPending ? 'Uploading…' : batch.hasPhoto ? 'Replace the photo' : 'Add a photo'}
           </label>
           <input

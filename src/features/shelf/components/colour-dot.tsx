@@ -10,6 +10,10 @@ const CHIP: Record<ProductColour, string> = {
 };
 
 export function ColourDot({ colour, className = '' }: { colour: string; className?: string }) {
-  return <span aria-hidden="true" className={`inline-block h-3.5 w-3.5 shrink-0 rounded-full ${CHIP[colour as ProductColour] ?? CHIP.wheat} ${className}`} />;
+  return (
+    <span
+      aria-hidden="true"
+      className={`inline-block h-3.5 w-3.5 shrink-0 rounded-full ${CHIP[colour as ProductColour] ?? CHIP.wheat} ${className}`}
+    />
+  );
 }
-

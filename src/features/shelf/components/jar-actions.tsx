@@ -40,19 +40,23 @@ export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: Ja
               onOpened={setJustOpened}
             />
           ) : (
-          <Button
-            key={action}
-            variant={action === 'discard' && size === 'large' ? 'danger' : 'secondary'}
-            className={`${size === 'large' ? 'min-h-14 px-6 text-lg' : ''} ${action === 'discard' && size !== 'large' ? 'text-past' : ''}`}
-            disabled={act.isSending}
-            aria-label={`${label}: jar ${jar.code}`}
-            onClick={() => {
-              if (action === 'discard' && !window.confirm(`Discard jar ${jar.code} of ${jar.productName}? When in doubt, throw it out.`)) return;
-              act.act(jar, action);
-            }}
-          >
-            {label}
-          </Button>
+            <Button
+              key={action}
+              variant={action === 'discard' && size === 'large' ? 'danger' : 'secondary'}
+              className={`${size === 'large' ? 'min-h-14 px-6 text-lg' : ''} ${action === 'discard' && size !== 'large' ? 'text-past' : ''}`}
+              disabled={act.isSending}
+              aria-label={`${label}: jar ${jar.code}`}
+              onClick={() => {
+                if (
+                  action === 'discard' &&
+                  !window.confirm(`Discard jar ${jar.code} of ${jar.productName}? When in doubt, throw it out.`)
+                )
+                  return;
+                act.act(jar, action);
+              }}
+            >
+              {label}
+            </Button>
           ),
         )}
       </div>

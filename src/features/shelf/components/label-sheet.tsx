@@ -9,7 +9,8 @@ export type Paper = 'a4' | 'letter';
 // Common sheet layouts: A4 with 21 labels (63.5 x 38.1 mm), US Letter with 30 labels (2 5/8 x 1 in).
 const PAPER_CSS: Record<Paper, string> = {
   a4: '@page { size: A4; margin: 15.1mm 7.2mm; } .label-sheet { --label-w: 63.5mm; --label-h: 38.1mm; --gap: 2.5mm; }',
-  letter: '@page { size: letter; margin: 0.5in 0.19in; } .label-sheet { --label-w: 2.625in; --label-h: 1in; --gap: 0.125in; }',
+  letter:
+    '@page { size: letter; margin: 0.5in 0.19in; } .label-sheet { --label-w: 2.625in; --label-h: 1in; --gap: 0.125in; }',
 };
 
 /** The address a label's QR code opens: the configured public origin's /j/<code>, else this browser's. */
@@ -21,20 +22,37 @@ function JarLabel({ jar, origin }: { jar: JarView; origin: string | null }) {
   const [qr, setQr] = useState<string | null>(null);
   useEffect(() => {
     let live = true;
-    void QRCode.toString(jarUrl(jar.code, origin), { type: 'svg', margin: 1, errorCorrectionLevel: 'M' }).then((svg) => {
-      if (live) setQr(`data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`);
-    });
+    void QRCode.toString(jarUrl(jar.code, origin), { type: 'svg', margin: 1, errorCorrectionLevel: 'M' }).then(
+      (svg) => {
+        if (live) setQr(`data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`);
+      },
+    );
     return () => {
       live = false;
     };
   }, [jar.code, origin]);
   return (
-    <li className="jar-label flex items-center gap-2 overflow-hidden rounded-md border border-line bg-surface px-2 print:rounded-none print:bg-white print:border-dashed" data-code={jar.code}>
-      {qr ? <img src={qr} alt={`QR code for jar ${jar.code}`} className="aspect-square h-[calc(var(--label-h)*0.8)] shrink-0" /> : <span className="aspect-square h-[calc(var(--label-h)*0.8)]" />}
+    <li
+      className="jar-label flex items-center gap-2 overflow-hidden rounded-md border border-line bg-surface px-2 print:rounded-none print:bg-white print:border-dashed"
+      data-code={jar.code}
+    >
+      {qr ? (
+        <img
+          src={qr}
+          alt={`QR code for jar ${jar.code}`}
+          className="aspect-square h-[calc(var(--label-h)*0.8)] shrink-0"
+        />
+      ) : (
+        <span className="aspect-square h-[calc(var(--label-h)*0.8)]" />
+      )}
       <span className="flex min-w-0 flex-col gap-0.5 leading-tight">
         <span className="line-clamp-2 font-bold">{jar.productName}</span>
-        <span className="tabular whitespace-nowrap">{DATE_NAMES.canned} {dateWords(jar.cannedOn)}</span>
-        <span className="tabular whitespace-nowrap">{DATE_NAMES.bestQuality} {dateWords(jar.bestBy)}</span>
+        <span className="tabular whitespace-nowrap">
+          {DATE_NAMES.canned} {dateWords(jar.cannedOn)}
+        </span>
+        <span className="tabular whitespace-nowrap">
+          {DATE_NAMES.bestQuality} {dateWords(jar.bestBy)}
+        </span>
         <span className="font-mono font-bold tracking-wider">{jar.code}</span>
       </span>
     </li>

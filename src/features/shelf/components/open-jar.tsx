@@ -57,7 +57,13 @@ export function OpenJarButton({ hid, jar, label, ariaLabel, variant = 'primary',
   return (
     <div className="flex flex-col gap-2">
       {!advice && (
-        <Button variant={variant} className={className} disabled={checking || act.isSending} aria-label={ariaLabel} onClick={() => void start()}>
+        <Button
+          variant={variant}
+          className={className}
+          disabled={checking || act.isSending}
+          aria-label={ariaLabel}
+          onClick={() => void start()}
+        >
           {label}
         </Button>
       )}
@@ -71,14 +77,29 @@ export function OpenJarButton({ hid, jar, label, ariaLabel, variant = 'primary',
   );
 }
 
-function AdvicePanel({ jar, advice, onOpen, onCancel }: { jar: OpenableJar; advice: OpeningAdvice; onOpen: (jar: OpenableJar) => void; onCancel: () => void }) {
+function AdvicePanel({
+  jar,
+  advice,
+  onOpen,
+  onCancel,
+}: {
+  jar: OpenableJar;
+  advice: OpeningAdvice;
+  onOpen: (jar: OpenableJar) => void;
+  onCancel: () => void;
+}) {
   const heading = useRef<HTMLHeadingElement>(null);
   useEffect(() => heading.current?.focus(), []);
   const oldest = advice.olderSealed[0];
   return (
-    <section aria-labelledby={`advice-${jar.id}`} className="flex flex-col gap-3 rounded-card border border-soon-fill bg-soon-soft p-4 text-ink">
+    <section
+      aria-labelledby={`advice-${jar.id}`}
+      className="flex flex-col gap-3 rounded-card border border-soon-fill bg-soon-soft p-4 text-ink"
+    >
       <h3 id={`advice-${jar.id}`} ref={heading} tabIndex={-1} className="text-lg font-bold">
-        {advice.openedJars.length ? `${jar.productName} already has an opened jar` : `An older jar of ${jar.productName} is on the shelf`}
+        {advice.openedJars.length
+          ? `${jar.productName} already has an opened jar`
+          : `An older jar of ${jar.productName} is on the shelf`}
       </h3>
       {advice.openedJars.length > 0 && (
         <div>
@@ -86,7 +107,10 @@ function AdvicePanel({ jar, advice, onOpen, onCancel }: { jar: OpenableJar; advi
           <ul className="mt-1 flex flex-col gap-1">
             {advice.openedJars.map((other) => (
               <li key={other.id}>
-                <Link to={paths.jar(other.code)} className="inline-flex min-h-11 items-center font-bold text-action underline underline-offset-4">
+                <Link
+                  to={paths.jar(other.code)}
+                  className="inline-flex min-h-11 items-center font-bold text-action underline underline-offset-4"
+                >
                   Jar {other.code}
                 </Link>{' '}
                 opened {other.openedOn ? dateWords(other.openedOn) : ''}

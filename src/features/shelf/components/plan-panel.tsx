@@ -12,7 +12,10 @@ export function PlanPanel({ plan, method, altitudeFt }: { plan: ProcessingPlan; 
       <Cautions cautions={plan.cautions} />
       {plan.allowed ? (
         <Notice tone="action" title={headline(plan, method)}>
-          <p>{METHOD_NAMES[method]}.{plan.altitudeAddMinutes ? ` Includes ${plan.altitudeAddMinutes} minutes added for your altitude.` : ''}</p>
+          <p>
+            {METHOD_NAMES[method]}.
+            {plan.altitudeAddMinutes ? ` Includes ${plan.altitudeAddMinutes} minutes added for your altitude.` : ''}
+          </p>
         </Notice>
       ) : (
         <Notice tone="past" title="Not allowed: this batch cannot be saved" role="alert">

@@ -45,7 +45,9 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
             <tbody>
               {recipe.ingredients.map((ingredient, index) => (
                 <tr key={`${ingredient.name}-${index}`} className="border-t border-line">
-                  <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">{formatKitchenAmount(ingredient.amount, ingredient.unit)}</td>
+                  <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">
+                    {formatKitchenAmount(ingredient.amount, ingredient.unit)}
+                  </td>
                   <td className="py-2">{ingredient.name}</td>
                   <td className="py-2 text-sm text-ink-muted">{INGREDIENT_ROLE_NAMES[ingredient.role]}</td>
                 </tr>

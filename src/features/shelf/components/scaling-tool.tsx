@@ -16,7 +16,12 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
   const [jarSize, setJarSize] = useState<JarSize>(recipe.yieldJarSize);
   const jars = numberFrom(jarsText);
   const valid = Number.isInteger(jars) && jars >= 1 && jars <= 200;
-  const scaled = valid ? scaleRecipe({ yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients }, { jars, jarSize }) : null;
+  const scaled = valid
+    ? scaleRecipe(
+        { yield: { jars: recipe.yieldJars, jarSize: recipe.yieldJarSize }, ingredients: recipe.ingredients },
+        { jars, jarSize },
+      )
+    : null;
   const plan = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt });
 
   return (
@@ -25,7 +30,13 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
         Scale it
       </h2>
       <div className="grid grid-cols-2 gap-3">
-        <TextField label="Jars" inputMode="numeric" value={jarsText} onChange={(e) => setJarsText(e.target.value)} error={valid ? undefined : 'Enter 1 to 200 jars.'} />
+        <TextField
+          label="Jars"
+          inputMode="numeric"
+          value={jarsText}
+          onChange={(e) => setJarsText(e.target.value)}
+          error={valid ? undefined : 'Enter 1 to 200 jars.'}
+        />
         <SelectField label="Jar size" value={jarSize} onChange={(e) => setJarSize(e.target.value as JarSize)}>
           {JAR_SIZES.map((size) => (
             <option key={size} value={size}>
@@ -37,7 +48,9 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
       {scaled && (
         <>
           <p className="text-ink-muted">
-            {scaled.factor === 1 ? 'The tested batch, as written.' : `${Math.round(scaled.factor * 100) / 100} times the tested batch.`}
+            {scaled.factor === 1
+              ? 'The tested batch, as written.'
+              : `${Math.round(scaled.factor * 100) / 100} times the tested batch.`}
             {scaled.acidFactor > scaled.factor ? ' Acid is scaled up a little more, so rounding never weakens it.' : ''}
           </p>
           <table className="w-full text-left">
@@ -45,10 +58,16 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
             <tbody>
               {scaled.ingredients.map((ingredient, index) => (
                 <tr key={`${ingredient.name}-${index}`} className="border-t border-line">
-                  <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">{formatKitchenAmount(ingredient.amount, ingredient.unit)}</td>
+                  <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">
+                    {formatKitchenAmount(ingredient.amount, ingredient.unit)}
+                  </td>
                   <td className="py-2">
                     {ingredient.name}
-                    {ingredient.role === 'acid' && <span className="ml-2 rounded-full bg-info-soft px-2 text-sm font-bold text-info">acid: never less</span>}
+                    {ingredient.role === 'acid' && (
+                      <span className="ml-2 rounded-full bg-info-soft px-2 text-sm font-bold text-info">
+                        acid: never less
+                      </span>
+                    )}
                   </td>
                 </tr>
               ))}
@@ -63,9 +82,15 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
       )}
       <Cautions cautions={plan.cautions} />
       {plan.allowed ? (
-        <Notice tone="action" title={`${jarSizeWords(jarSize)} jars: ${minutesWords(plan.minutes!)}${plan.pressurePsi !== null ? ` at ${pressureWords(plan.pressurePsi)}` : ''} at ${altitudeWords(altitudeFt)}`}>
+        <Notice
+          tone="action"
+          title={`${jarSizeWords(jarSize)} jars: ${minutesWords(plan.minutes!)}${plan.pressurePsi !== null ? ` at ${pressureWords(plan.pressurePsi)}` : ''} at ${altitudeWords(altitudeFt)}`}
+        >
           {valid && (
-            <Link to={paths.newBatch(hid, { productId: recipe.productId, recipeId: recipe.id, jars, jarSize })} className="font-bold text-action underline">
+            <Link
+              to={paths.newBatch(hid, { productId: recipe.productId, recipeId: recipe.id, jars, jarSize })}
+              className="font-bold text-action underline"
+            >
               Record this batch
             </Link>
           )}

@@ -98,7 +98,12 @@ export function SealCheckPanel({ hid, batch, canCook }: { hid: string; batch: Ba
             {unsealed > 0 && (
               <fieldset className="flex flex-col gap-2">
                 <legend className="mb-1 font-bold">Where do they go?</legend>
-                <ChoiceCard name="unsealed-way" checked={wayNow === 'fridge'} onChange={() => setWay('fridge')} label={UNSEALED_CHOICES.fridge} />
+                <ChoiceCard
+                  name="unsealed-way"
+                  checked={wayNow === 'fridge'}
+                  onChange={() => setWay('fridge')}
+                  label={UNSEALED_CHOICES.fridge}
+                />
                 {reprocessOpen && canCook ? (
                   <ChoiceCard
                     name="unsealed-way"

@@ -7,12 +7,25 @@ import { ColourDot } from './colour-dot';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 import { paths } from '@shared/paths';
 
-export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: string; groups: ShelfProductGroup[]; canHandleJars: boolean; canCook: boolean }) {
+export function ShelfCards({
+  hid,
+  groups,
+  canHandleJars,
+  canCook,
+}: {
+  hid: string;
+  groups: ShelfProductGroup[];
+  canHandleJars: boolean;
+  canCook: boolean;
+}) {
   const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});
   return (
     <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
       {groups.map((group) => (
-        <li key={group.product.id} className="flex min-w-0 flex-col gap-3 rounded-card border border-line bg-surface p-4">
+        <li
+          key={group.product.id}
+          className="flex min-w-0 flex-col gap-3 rounded-card border border-line bg-surface p-4"
+        >
           <div className="flex items-start justify-between gap-3">
             <div className="min-w-0 flex-1">
               <h2 className="flex items-baseline gap-2 text-lg">
@@ -36,18 +49,26 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
           </div>
           {group.oldestBestBy ? (
             <p className="flex flex-wrap items-center gap-2 text-[0.95rem]">
-              <span className="tabular">{DATE_NAMES.oldestBestQuality} {dateWords(group.oldestBestBy)}</span>
+              <span className="tabular">
+                {DATE_NAMES.oldestBestQuality} {dateWords(group.oldestBestBy)}
+              </span>
               {group.pastBest > 0 && <PastBestBadge bestBy={group.oldestBestBy} />}
             </p>
           ) : (
-            <p className="text-[0.95rem] text-ink-muted">None on the shelf{group.product.minJars > 0 ? `; the household keeps at least ${group.product.minJars}` : ''}.</p>
+            <p className="text-[0.95rem] text-ink-muted">
+              None on the shelf
+              {group.product.minJars > 0 ? `; the household keeps at least ${group.product.minJars}` : ''}.
+            </p>
           )}
           {group.opened > 0 && <p className="text-sm text-info">{group.opened} opened in the fridge</p>}
           {group.batches.length > 0 && (
             <ul className="divide-y divide-line border-y border-line text-[0.95rem]">
               {group.batches.map((row) => (
                 <li key={row.batchId}>
-                  <Link to={paths.batch(hid, row.batchId)} className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken">
+                  <Link
+                    to={paths.batch(hid, row.batchId)}
+                    className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken"
+                  >
                     <span className="tabular">
                       {dateWords(row.cannedOn)} · {jarSizeWords(row.jarSize)}
                     </span>
@@ -70,12 +91,17 @@ export function ShelfCards({ hid, groups, canHandleJars, canCook }: { hid: strin
               />
             )}
             {canCook && (
-              <Link to={paths.product(hid, group.product.id)} className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+              <Link
+                to={paths.product(hid, group.product.id)}
+                className="inline-flex min-h-11 items-center rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+              >
                 Edit product
               </Link>
             )}
           </div>
-          {justOpened[group.product.id] && <OpeningChecks code={justOpened[group.product.id]!.code} productName={group.product.name} />}
+          {justOpened[group.product.id] && (
+            <OpeningChecks code={justOpened[group.product.id]!.code} productName={group.product.name} />
+          )}
         </li>
       ))}
     </ul>

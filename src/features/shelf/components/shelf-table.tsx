@@ -1,4 +1,12 @@
-import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { DATE_NAMES, dateWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
@@ -17,33 +25,62 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
   const [kind, setKind] = useState('');
   const [pastOnly, setPastOnly] = useState(false);
   // Stable references: the table re-renders forever when its columns or state are new on every render.
-  const columns = useMemo(() => [
-    column.accessor('productName', {
-      header: 'Product',
-      cell: (info) => (
-        <Link to={paths.batch(hid, info.row.original.batchId)} className="flex min-h-11 items-center gap-2 font-bold text-action underline-offset-4 hover:underline">
-          <ColourDot colour={info.row.original.productColour} />
-          {info.getValue()}
-        </Link>
-      ),
-    }),
-    column.accessor('productKind', { header: 'Kind', cell: (info) => PRODUCT_KIND_NAMES[info.getValue() as ProductKind], filterFn: 'equals' }),
-    column.accessor('cannedOn', { header: 'Canned', cell: (info) => <span className="tabular whitespace-nowrap">{dateWords(info.getValue())}</span> }),
-    column.accessor('jarSize', { header: 'Jar size', cell: (info) => <span className="whitespace-nowrap">{jarSizeWords(info.getValue())}</span> }),
-    column.accessor('sealed', { header: 'Sealed', cell: (info) => <span className="tabular font-bold">{info.getValue()}</span> }),
-    column.accessor('bestBy', {
-      header: DATE_NAMES.bestQuality,
-      cell: (info) => (
-        <span className="flex flex-wrap items-center gap-2">
-          <span className="tabular">{dateWords(info.getValue())}</span>
-          {info.row.original.pastBestQuality && <PastBestBadge bestBy={info.getValue()} />}
-        </span>
-      ),
-    }),
-    column.accessor('pastBestQuality', { header: 'Past best', enableSorting: false, filterFn: 'equals' }),
-    column.accessor('notes', { header: 'Notes', enableSorting: false, cell: (info) => <span className="text-ink-muted">{info.getValue()}</span> }),
-  ], [hid]);
-  const columnFilters = useMemo(() => [...(kind ? [{ id: 'productKind', value: kind }] : []), ...(pastOnly ? [{ id: 'pastBestQuality', value: true }] : [])], [kind, pastOnly]);
+  const columns = useMemo(
+    () => [
+      column.accessor('productName', {
+        header: 'Product',
+        cell: (info) => (
+          <Link
+            to={paths.batch(hid, info.row.original.batchId)}
+            className="flex min-h-11 items-center gap-2 font-bold text-action underline-offset-4 hover:underline"
+          >
+            <ColourDot colour={info.row.original.productColour} />
+            {info.getValue()}
+          </Link>
+        ),
+      }),
+      column.accessor('productKind', {
+        header: 'Kind',
+        cell: (info) => PRODUCT_KIND_NAMES[info.getValue() as ProductKind],
+        filterFn: 'equals',
+      }),
+      column.accessor('cannedOn', {
+        header: 'Canned',
+        cell: (info) => <span className="tabular whitespace-nowrap">{dateWords(info.getValue())}</span>,
+      }),
+      column.accessor('jarSize', {
+        header: 'Jar size',
+        cell: (info) => <span className="whitespace-nowrap">{jarSizeWords(info.getValue())}</span>,
+      }),
+      column.accessor('sealed', {
+        header: 'Sealed',
+        cell: (info) => <span className="tabular font-bold">{info.getValue()}</span>,
+      }),
+      column.accessor('bestBy', {
+        header: DATE_NAMES.bestQuality,
+        cell: (info) => (
+          <span className="flex flex-wrap items-center gap-2">
+            <span className="tabular">{dateWords(info.getValue())}</span>
+            {info.row.original.pastBestQuality && <PastBestBadge bestBy={info.getValue()} />}
+          </span>
+        ),
+      }),
+      column.accessor('pastBestQuality', { header: 'Past best', enableSorting: false, filterFn: 'equals' }),
+      column.accessor('notes', {
+        header: 'Notes',
+        enableSorting: false,
+        cell: (info) => <span className="text-ink-muted">{info.getValue()}</span>,
+      }),
+    ],
+    [hid],
+  );
+  const columnFilters = useMemo(
+    () => [
+      ...(kind ? [{ id: 'productKind', value: kind }] : []),
+      ...(pastOnly ? [{ id: 'pastBestQuality', value: true }] : []),
+    ],
+    [kind, pastOnly],
+  );
   const table = useReactTable({
     data: rows,
     columns,
@@ -73,7 +110,11 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
           </SelectField>
         </div>
         <div className="pb-2">
-          <CheckboxField label="Only jars past best quality" checked={pastOnly} onChange={(e) => setPastOnly(e.target.checked)} />
+          <CheckboxField
+            label="Only jars past best quality"
+            checked={pastOnly}
+            onChange={(e) => setPastOnly(e.target.checked)}
+          />
         </div>
       </div>
       <div className="overflow-x-auto rounded-card border border-line bg-surface">
@@ -85,9 +126,18 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
                 {group.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
                   return (
-                    <th key={header.id} scope="col" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined} className="px-3 py-1 font-bold">
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
+                      className="px-3 py-1 font-bold"
+                    >
                       {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="flex min-h-11 items-center gap-1 font-bold whitespace-nowrap">
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="flex min-h-11 items-center gap-1 font-bold whitespace-nowrap"
+                        >
                           {flexRender(header.column.columnDef.header, header.getContext())}
                           <span aria-hidden="true" className="text-ink-muted">
                             {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
@@ -114,7 +164,9 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
             ))}
           </tbody>
         </table>
-        {table.getRowModel().rows.length === 0 && <p className="p-4 text-ink-muted">No batch on the shelf matches these filters.</p>}
+        {table.getRowModel().rows.length === 0 && (
+          <p className="p-4 text-ink-muted">No batch on the shelf matches these filters.</p>
+        )}
       </div>
     </div>
   );

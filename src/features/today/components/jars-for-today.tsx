@@ -23,27 +23,50 @@ function JarLink({ code }: { code: string }) {
 
 function whereFrom(portion: TodayUse) {
   if (!portion.jarCode) return <span className="font-bold text-soon">none on the shelf</span>;
-  if (portion.opensToday) return <>open <JarLink code={portion.jarCode} /></>;
+  if (portion.opensToday)
+    return (
+      <>
+        open <JarLink code={portion.jarCode} />
+      </>
+    );
   const daysLeft = portion.openedJarDaysLeft;
   if (daysLeft !== null && daysLeft <= OPENED_SOON_DAYS) {
     return (
       <>
-        use the opened jar first: <JarLink code={portion.jarCode} /> ({daysLeft === 0 ? 'use by today' : `${count(daysLeft, 'day')} left`})
+        use the opened jar first: <JarLink code={portion.jarCode} /> (
+        {daysLeft === 0 ? 'use by today' : `${count(daysLeft, 'day')} left`})
       </>
     );
   }
-  return <>from <JarLink code={portion.jarCode} /></>;
+  return (
+    <>
+      from <JarLink code={portion.jarCode} />
+    </>
+  );
 }
 
 /** What to open and use today, meal by meal, from the week's allocation; each new jar can be opened right here. */
-export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView, 'use' | 'short'> & { hid: string; canHandleJars: boolean }) {
-  if (use.length === 0) return <p className="text-ink-muted">No jars are paired with today’s meals. Pair a product with a meal on the Week to see it here.</p>;
+export function JarsForToday({
+  hid,
+  use,
+  short,
+  canHandleJars,
+}: Pick<TodayView, 'use' | 'short'> & { hid: string; canHandleJars: boolean }) {
+  if (use.length === 0)
+    return (
+      <p className="text-ink-muted">
+        No jars are paired with today’s meals. Pair a product with a meal on the Week to see it here.
+      </p>
+    );
   // One line per jar: two portions from the same new jar open it once.
   const openings = [...new Map(use.filter((p) => p.opensToday && p.jarId).map((p) => [p.jarId!, p])).values()];
   return (
     <div className="flex flex-col gap-3">
       {openings.length > 0 && (
-        <Notice tone="action" title={openings.length === 1 ? 'Open one new jar today' : `Open ${openings.length} new jars today`}>
+        <Notice
+          tone="action"
+          title={openings.length === 1 ? 'Open one new jar today' : `Open ${openings.length} new jars today`}
+        >
           <ul className="flex flex-col gap-1">
             {openings.map((portion) => (
               <li key={portion.jarId} className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
@@ -52,7 +75,12 @@ export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView,
                 </span>
                 {canHandleJars && (
                   <Suspense fallback={null}>
-                    <OpenItButton hid={hid} jarId={portion.jarId!} code={portion.jarCode!} productName={portion.productName} />
+                    <OpenItButton
+                      hid={hid}
+                      jarId={portion.jarId!}
+                      code={portion.jarCode!}
+                      productName={portion.productName}
+                    />
                   </Suspense>
                 )}
               </li>
@@ -62,9 +90,13 @@ export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView,
       )}
       <ul className="divide-y divide-line">
         {use.map((portion) => (
-          <li key={`${portion.portionId}-${portion.jarCode}`} className="flex flex-wrap items-baseline justify-between gap-x-3 py-2">
+          <li
+            key={`${portion.portionId}-${portion.jarCode}`}
+            className="flex flex-wrap items-baseline justify-between gap-x-3 py-2"
+          >
             <span>
-              <span className="font-bold">{SLOT_NAMES[portion.slot]}</span> · {portion.mealTitle}: <span className="tabular">{portion.tbsp}</span> tbsp {portion.productName}
+              <span className="font-bold">{SLOT_NAMES[portion.slot]}</span> · {portion.mealTitle}:{' '}
+              <span className="tabular">{portion.tbsp}</span> tbsp {portion.productName}
             </span>
             <span className="text-sm text-ink-muted">{whereFrom(portion)}</span>
           </li>
@@ -72,7 +104,8 @@ export function JarsForToday({ hid, use, short, canHandleJars }: Pick<TodayView,
       </ul>
       {short.length > 0 && (
         <Notice tone="soon" title="The shelf runs short today">
-          {short.map((s) => `${s.tbsp} tbsp of ${s.productName}`).join(', ')} cannot be covered. Swap the pairing on the Week, or use something else.
+          {short.map((s) => `${s.tbsp} tbsp of ${s.productName}`).join(', ')} cannot be covered. Swap the pairing on the
+          Week, or use something else.
         </Notice>
       )}
     </div>

@@ -21,7 +21,10 @@ export function MyTodos({ hid, todos }: { hid: string; todos: TodayTodo[] }) {
               onChange={() => tick.tick(todo, true)}
             />
           </label>
-          <Link to={paths.todo(hid, todo.kind === 'restock' ? todo.id : null)} className="flex min-h-11 flex-1 flex-col justify-center hover:underline">
+          <Link
+            to={paths.todo(hid, todo.kind === 'restock' ? todo.id : null)}
+            className="flex min-h-11 flex-1 flex-col justify-center hover:underline"
+          >
             <span>{todo.title}</span>
             {todo.dueOn && <span className="text-sm text-ink-muted">by {dateWords(todo.dueOn)}</span>}
           </Link>

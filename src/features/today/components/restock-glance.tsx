@@ -16,7 +16,10 @@ export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: 
           >
             <span className="font-bold text-action">{suggestion.productName}</span>
             <span className="text-sm text-ink-muted">
-              {suggestion.why} {suggestion.openTodoId ? 'A batch is on the list.' : `Make about ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars.`}
+              {suggestion.why}{' '}
+              {suggestion.openTodoId
+                ? 'A batch is on the list.'
+                : `Make about ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars.`}
             </span>
           </Link>
         </li>

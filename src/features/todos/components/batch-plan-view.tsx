@@ -1,5 +1,15 @@
 import { Link } from 'react-router-dom';
-import { altitudeWords, BEFORE_YOU_START, count, dateWords, headspaceWords, inCanner, JAR_SIZE_NAMES, minutesWords, pressureWords } from '@shared/words';
+import {
+  altitudeWords,
+  BEFORE_YOU_START,
+  count,
+  dateWords,
+  headspaceWords,
+  inCanner,
+  JAR_SIZE_NAMES,
+  minutesWords,
+  pressureWords,
+} from '@shared/words';
 import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
@@ -10,7 +20,9 @@ function processingWords(plan: BatchPlan): string {
   if (processing.pressurePsi !== null) {
     return `${minutesWords(processing.minutes!)} at ${pressureWords(processing.pressurePsi)} ${inCanner(plan.method)}, for ${altitude}.`;
   }
-  const added = processing.altitudeAddMinutes ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-1,000 ft plus ${processing.altitudeAddMinutes} for the altitude)` : '';
+  const added = processing.altitudeAddMinutes
+    ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-1,000 ft plus ${processing.altitudeAddMinutes} for the altitude)`
+    : '';
   return `${minutesWords(processing.minutes!)} ${inCanner(plan.method)} at ${altitude}${added}.`;
 }
 
@@ -29,9 +41,25 @@ function ShoppingList({ title, items }: { title: string; items: ShoppingItem[] }
 }
 
 /** Everything needed to make a restock batch, and the step that records it. */
-export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; todoId: string; plan: BatchPlan; canRecord: boolean }) {
+export function BatchPlanView({
+  hid,
+  todoId,
+  plan,
+  canRecord,
+}: {
+  hid: string;
+  todoId: string;
+  plan: BatchPlan;
+  canRecord: boolean;
+}) {
   const size = JAR_SIZE_NAMES[plan.jarSize];
-  const recordHref = paths.newBatch(hid, { productId: plan.productId, recipeId: plan.recipeId, jars: plan.jars, jarSize: plan.jarSize, todoId });
+  const recordHref = paths.newBatch(hid, {
+    productId: plan.productId,
+    recipeId: plan.recipeId,
+    jars: plan.jars,
+    jarSize: plan.jarSize,
+    todoId,
+  });
   return (
     <div className="flex flex-col gap-5">
       <div>
@@ -58,7 +86,8 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
           <li>{count(plan.equipment.jars, `${size} jar`)}, washed and kept hot</li>
           <li>{count(plan.equipment.newLids, 'new lid')}: lids seal only once; bands can be reused</li>
           <li>
-            {count(plan.equipment.cannerLoads.length, 'canner load')} ({plan.equipment.cannerLoads.join(' + ')} jars; your canner holds {plan.equipment.cannerCapacityJars})
+            {count(plan.equipment.cannerLoads.length, 'canner load')} ({plan.equipment.cannerLoads.join(' + ')} jars;
+            your canner holds {plan.equipment.cannerCapacityJars})
           </li>
         </ul>
       </section>
@@ -118,7 +147,10 @@ export function BatchPlanView({ hid, todoId, plan, canRecord }: { hid: string; t
       </section>
 
       {canRecord && plan.processing.allowed && (
-        <Link to={recordHref} className="inline-flex min-h-11 items-center justify-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong">
+        <Link
+          to={recordHref}
+          className="inline-flex min-h-11 items-center justify-center rounded-lg bg-action px-4 font-bold text-white hover:bg-action-strong"
+        >
           Record this batch
         </Link>
       )}

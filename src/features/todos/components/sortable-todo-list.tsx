@@ -1,5 +1,18 @@
-import { closestCenter, DndContext, KeyboardSensor, PointerSensor, useSensor, useSensors, type DragEndEvent } from '@dnd-kit/core';
-import { arrayMove, SortableContext, sortableKeyboardCoordinates, verticalListSortingStrategy } from '@dnd-kit/sortable';
+import {
+  closestCenter,
+  DndContext,
+  KeyboardSensor,
+  PointerSensor,
+  useSensor,
+  useSensors,
+  type DragEndEvent,
+} from '@dnd-kit/core';
+import {
+  arrayMove,
+  SortableContext,
+  sortableKeyboardCoordinates,
+  verticalListSortingStrategy,
+} from '@dnd-kit/sortable';
 import type { TodoFilter, TodoView } from '@shared/schemas/todos';
 import { useMoveTodo } from '../api/move-todo';
 import { useTickTodo } from '../api/update-todo';
@@ -20,7 +33,10 @@ export function SortableTodoList({ hid, filter, todos, canMove, today, onOpen }:
   const move = useMoveTodo(hid, filter);
   const tick = useTickTodo(hid);
   // A short drag distance keeps a tap on the handle from starting a drag on a phone.
-  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 6 } }), useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }));
+  const sensors = useSensors(
+    useSensor(PointerSensor, { activationConstraint: { distance: 6 } }),
+    useSensor(KeyboardSensor, { coordinateGetter: sortableKeyboardCoordinates }),
+  );
 
   const onDragEnd = ({ active, over }: DragEndEvent) => {
     if (!over || active.id === over.id) return;
@@ -35,11 +51,20 @@ export function SortableTodoList({ hid, filter, todos, canMove, today, onOpen }:
       collisionDetection={closestCenter}
       onDragEnd={onDragEnd}
       accessibility={{
-        screenReaderInstructions: { draggable: 'To move a to-do, press space or enter on its handle, use the up and down arrows, then space or enter to drop it, or escape to cancel.' },
+        screenReaderInstructions: {
+          draggable:
+            'To move a to-do, press space or enter on its handle, use the up and down arrows, then space or enter to drop it, or escape to cancel.',
+        },
         announcements: {
           onDragStart: ({ active }) => `Picked up ${titleOf(todos, active.id)}.`,
-          onDragOver: ({ active, over }) => (over ? `${titleOf(todos, active.id)} is over ${titleOf(todos, over.id)}.` : `${titleOf(todos, active.id)} is not over a place.`),
-          onDragEnd: ({ active, over }) => (over ? `${titleOf(todos, active.id)} dropped at ${titleOf(todos, over.id)}.` : `${titleOf(todos, active.id)} dropped.`),
+          onDragOver: ({ active, over }) =>
+            over
+              ? `${titleOf(todos, active.id)} is over ${titleOf(todos, over.id)}.`
+              : `${titleOf(todos, active.id)} is not over a place.`,
+          onDragEnd: ({ active, over }) =>
+            over
+              ? `${titleOf(todos, active.id)} dropped at ${titleOf(todos, over.id)}.`
+              : `${titleOf(todos, active.id)} dropped.`,
           onDragCancel: ({ active }) => `Moving ${titleOf(todos, active.id)} was cancelled.`,
         },
       }}

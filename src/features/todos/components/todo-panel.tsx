@@ -32,7 +32,11 @@ export function TodoPanel({ hid, todo, members, canEdit, onClose }: Props) {
         <h2 id="todo-panel-title" className="text-xl">
           {todo.title}
         </h2>
-        <button type="button" onClick={() => dialog.current?.close()} className="min-h-11 shrink-0 rounded-lg px-3 font-bold text-action hover:bg-action-soft">
+        <button
+          type="button"
+          onClick={() => dialog.current?.close()}
+          className="min-h-11 shrink-0 rounded-lg px-3 font-bold text-action hover:bg-action-soft"
+        >
           Close
         </button>
       </div>
@@ -44,7 +48,9 @@ export function TodoPanel({ hid, todo, members, canEdit, onClose }: Props) {
         )}
         {canEdit ? (
           <details open={!todo.batchPlan} className="rounded-card border border-line bg-surface p-4">
-            <summary className="min-h-11 cursor-pointer content-center font-bold">{todo.batchPlan ? 'Edit the to-do' : 'Details'}</summary>
+            <summary className="min-h-11 cursor-pointer content-center font-bold">
+              {todo.batchPlan ? 'Edit the to-do' : 'Details'}
+            </summary>
             <div className="mt-3">
               <TodoEditor hid={hid} todo={todo} members={members} onDone={() => dialog.current?.close()} />
             </div>

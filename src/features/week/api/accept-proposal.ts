@@ -7,10 +7,17 @@ import { useOptimisticWeek } from './optimistic';
 
 export const acceptProposal = (hid: string, meals: ProposedMealView[]) =>
   api.post<{ entryIds: string[] }>(`/households/${hid}/week/proposal/accept`, {
-    entries: meals.map((m) => ({ date: m.date, slot: m.slot, mealId: m.mealId, servings: m.servings, eaters: m.eaters })),
+    entries: meals.map((m) => ({
+      date: m.date,
+      slot: m.slot,
+      mealId: m.mealId,
+      servings: m.servings,
+      eaters: m.eaters,
+    })),
   });
 
-export const takeBackProposal = (hid: string, entryIds: string[]) => api.post<{ removed: number }>(`/households/${hid}/week/proposal/undo`, { entryIds });
+export const takeBackProposal = (hid: string, entryIds: string[]) =>
+  api.post<{ removed: number }>(`/households/${hid}/week/proposal/undo`, { entryIds });
 
 /** The accepted meals land in their slots at once, as cards still being saved, exactly as dropped meals do. */
 function withProposed(week: WeekView, meals: ProposedMealView[]): WeekView {
@@ -27,7 +34,12 @@ function withProposed(week: WeekView, meals: ProposedMealView[]): WeekView {
           mealId: meal.mealId,
           servings: meal.servings,
           eaters: meal.eaters,
-          pairings: meal.pairings.map((p, i) => ({ id: `pending-${i}`, productId: p.productId, tbspPerServing: p.tbspPerServing, flags: [] })),
+          pairings: meal.pairings.map((p, i) => ({
+            id: `pending-${i}`,
+            productId: p.productId,
+            tbspPerServing: p.tbspPerServing,
+            flags: [],
+          })),
         },
         meal.date,
         meal.slot,

@@ -14,9 +14,15 @@ export function useAddPairing(hid: string, start: string, onRefused: (message: s
     (week, { entryId, productId }) => {
       const entry = findEntry(week, entryId);
       if (!entry || entry.pairings.some((p) => p.productId === productId)) return week;
-      return changeEntry(week, entryId, { pairings: [...entry.pairings, { id: pendingId(), productId, tbspPerServing: 1, flags: [] }] });
+      return changeEntry(week, entryId, {
+        pairings: [...entry.pairings, { id: pendingId(), productId, tbspPerServing: 1, flags: [] }],
+      });
     },
     onRefused,
   );
-  return useMutation({ mutationFn: ({ entryId, productId }: { entryId: string; productId: string }) => addPairing(hid, entryId, { productId }), ...optimistic });
+  return useMutation({
+    mutationFn: ({ entryId, productId }: { entryId: string; productId: string }) =>
+      addPairing(hid, entryId, { productId }),
+    ...optimistic,
+  });
 }

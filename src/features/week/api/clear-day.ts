@@ -3,7 +3,8 @@ import { api } from '@/lib/api-client';
 import { clearDate } from '../week-edits';
 import { useOptimisticWeek } from './optimistic';
 
-export const clearDay = (hid: string, date: string) => api.delete<{ removed: number }>(`/households/${hid}/week/days/${date}`);
+export const clearDay = (hid: string, date: string) =>
+  api.delete<{ removed: number }>(`/households/${hid}/week/days/${date}`);
 
 export function useClearDay(hid: string, start: string, onRefused: (message: string) => void) {
   const optimistic = useOptimisticWeek<string>(hid, start, clearDate, onRefused);

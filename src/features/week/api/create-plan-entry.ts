@@ -4,7 +4,8 @@ import { api } from '@/lib/api-client';
 import { pendingId, placeEntry } from '../week-edits';
 import { useOptimisticWeek } from './optimistic';
 
-export const createPlanEntry = (hid: string, entry: PlanEntryCreate) => api.post<{ id: string }>(`/households/${hid}/plan-entries`, entry);
+export const createPlanEntry = (hid: string, entry: PlanEntryCreate) =>
+  api.post<{ id: string }>(`/households/${hid}/plan-entries`, entry);
 
 export interface NewEntry extends PlanEntryCreate {
   slot: Slot;
@@ -17,8 +18,17 @@ export function useCreatePlanEntry(hid: string, start: string, onRefused: (messa
     hid,
     start,
     (week, { date, slot, position, mealId, preview }) =>
-      placeEntry(week, { id: pendingId(), date, slot, position: 0, mealId: mealId ?? null, eaters: null, ...preview }, date, slot, position),
+      placeEntry(
+        week,
+        { id: pendingId(), date, slot, position: 0, mealId: mealId ?? null, eaters: null, ...preview },
+        date,
+        slot,
+        position,
+      ),
     onRefused,
   );
-  return useMutation({ mutationFn: ({ preview: _preview, ...entry }: NewEntry) => createPlanEntry(hid, entry), ...optimistic });
+  return useMutation({
+    mutationFn: ({ preview: _preview, ...entry }: NewEntry) => createPlanEntry(hid, entry),
+    ...optimistic,
+  });
 }

@@ -8,7 +8,8 @@ import { nextMealFor } from '../next-meal';
 
 function warningText(warning: AllocationWarning, board: ReturnType<typeof useBoard>) {
   const name = productName(board.week, String(warning.productId));
-  if (warning.kind === 'short') return `Not enough ${name} on the shelf: the plan needs ${tbspWords(warning.tbsp)} more than it holds.`;
+  if (warning.kind === 'short')
+    return `Not enough ${name} on the shelf: the plan needs ${tbspWords(warning.tbsp)} more than it holds.`;
   return `Jar ${jarCode(board.week, warning.jarId)} of ${name} passes its use-by with ${tbspWords(warning.tbsp)} left.`;
 }
 
@@ -28,20 +29,30 @@ export function DayNotes({ date }: { date: string }) {
       {[...opened].map(([productId, codes]) => (
         <p key={productId} className="rounded-md border border-info/40 bg-info-soft px-1.5 py-1">
           {codes.length === 1 ? 'Open a new jar of ' : `Open ${codes.length} new jars of `}
-          <strong>{productName(board.week, productId)}</strong> <span className="tabular text-ink-muted">({codes.join(', ')})</span>
+          <strong>{productName(board.week, productId)}</strong>{' '}
+          <span className="tabular text-ink-muted">({codes.join(', ')})</span>
         </p>
       ))}
       {warnings.map((warning, i) => (
-        <div key={`${warning.kind}-${String(warning.productId)}-${i}`} role="note" className="rounded-md border border-soon-fill bg-soon-soft px-1.5 py-1">
+        <div
+          key={`${warning.kind}-${String(warning.productId)}-${i}`}
+          role="note"
+          className="rounded-md border border-soon-fill bg-soon-soft px-1.5 py-1"
+        >
           <p>{warningText(warning, board)}</p>
-          {warning.kind === 'will-expire' ? <PlanItOnAMeal productId={String(warning.productId)} jarId={String(warning.jarId)} useBy={warning.date} /> : <RestockButton productId={String(warning.productId)} />}
+          {warning.kind === 'will-expire' ? (
+            <PlanItOnAMeal productId={String(warning.productId)} jarId={String(warning.jarId)} useBy={warning.date} />
+          ) : (
+            <RestockButton productId={String(warning.productId)} />
+          )}
         </div>
       ))}
     </div>
   );
 }
 
-const LINK_BUTTON = 'mt-0.5 min-h-8 rounded px-0.5 text-left font-bold text-action underline underline-offset-2 pointer-coarse:min-h-11';
+const LINK_BUTTON =
+  'mt-0.5 min-h-8 rounded px-0.5 text-left font-bold text-action underline underline-offset-2 pointer-coarse:min-h-11';
 
 function RestockButton({ productId }: { productId: string }) {
   const { canEdit, restock, week } = useBoard();
@@ -50,7 +61,13 @@ function RestockButton({ productId }: { productId: string }) {
   const refusal = restock.refused.get(productId);
   return (
     <>
-      <button type="button" aria-label={`Add a restock to-do for ${productName(week, productId)}`} className={LINK_BUTTON} disabled={restock.todo.isPending} onClick={() => restock.add(productId)}>
+      <button
+        type="button"
+        aria-label={`Add a restock to-do for ${productName(week, productId)}`}
+        className={LINK_BUTTON}
+        disabled={restock.todo.isPending}
+        onClick={() => restock.add(productId)}
+      >
         Add a restock to-do
       </button>
       {refusal && <ErrorWithAction error={refusal} />}
@@ -65,9 +82,19 @@ function PlanItOnAMeal({ productId, jarId, useBy }: { productId: string; jarId: 
   const [refusal, setRefusal] = useState<Error | null>(null);
   if (!canEdit) return null;
   const name = productName(week, productId);
-  if (placed) return <p role="status" className="font-bold text-action">{placed}</p>;
+  if (placed)
+    return (
+      <p role="status" className="font-bold text-action">
+        {placed}
+      </p>
+    );
   const entry = nextMealFor(week, meals, productId, useBy);
-  if (!entry) return <p className="text-ink-muted">No meal planned by {weekday(useBy)} usually takes {name}: drag it from the shelf onto one, or plan one it suits.</p>;
+  if (!entry)
+    return (
+      <p className="text-ink-muted">
+        No meal planned by {weekday(useBy)} usually takes {name}: drag it from the shelf onto one, or plan one it suits.
+      </p>
+    );
   const where = `${weekday(entry.date)} ${entry.slot}, ${entry.title}`;
   return (
     <>
@@ -78,7 +105,10 @@ function PlanItOnAMeal({ productId, jarId, useBy }: { productId: string; jarId: 
         disabled={addPairing.isPending}
         onClick={() => {
           setRefusal(null);
-          addPairing.mutate({ entryId: entry.id, productId }, { onSuccess: () => setPlaced(`Paired with ${where}`), onError: setRefusal });
+          addPairing.mutate(
+            { entryId: entry.id, productId },
+            { onSuccess: () => setPlaced(`Paired with ${where}`), onError: setRefusal },
+          );
         }}
       >
         Plan it on a meal

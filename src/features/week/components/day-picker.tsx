@@ -2,7 +2,17 @@ import { weekdayWords } from '@shared/words';
 import type { WeekDay } from '@shared/schemas/week';
 
 /** On a phone the board shows one day; this picks it. */
-export function DayPicker({ days, selected, today, onSelect }: { days: WeekDay[]; selected: string; today: string; onSelect: (date: string) => void }) {
+export function DayPicker({
+  days,
+  selected,
+  today,
+  onSelect,
+}: {
+  days: WeekDay[];
+  selected: string;
+  today: string;
+  onSelect: (date: string) => void;
+}) {
   return (
     <nav aria-label="Day of the week" className="grid grid-cols-7 gap-1">
       {days.map((day) => (
@@ -12,7 +22,11 @@ export function DayPicker({ days, selected, today, onSelect }: { days: WeekDay[]
           aria-pressed={day.date === selected}
           onClick={() => onSelect(day.date)}
           className={`flex min-h-14 flex-col items-center justify-center rounded-lg border text-sm font-bold ${
-            day.date === selected ? 'border-action bg-action text-white' : day.date === today ? 'border-action bg-surface text-action' : 'border-line bg-surface text-ink'
+            day.date === selected
+              ? 'border-action bg-action text-white'
+              : day.date === today
+                ? 'border-action bg-surface text-action'
+                : 'border-line bg-surface text-ink'
           }`}
         >
           <span aria-hidden="true">{weekdayWords(day.date, true)}</span>

@@ -1,7 +1,21 @@
 import { useState } from 'react';
 
 /** A small number box that saves when it loses focus or on Enter, not on every keystroke. */
-export function NumberCommit({ label, value, min, max, step = 1, onCommit }: { label: string; value: number; min: number; max: number; step?: number; onCommit: (value: number) => void }) {
+export function NumberCommit({
+  label,
+  value,
+  min,
+  max,
+  step = 1,
+  onCommit,
+}: {
+  label: string;
+  value: number;
+  min: number;
+  max: number;
+  step?: number;
+  onCommit: (value: number) => void;
+}) {
   const [draft, setDraft] = useState(String(value));
   const [seen, setSeen] = useState(value);
   if (seen !== value) {

@@ -5,14 +5,27 @@ import { Notice } from '@/components/ui/notice';
 import { useUpdatePreferences } from '../api/update-preferences';
 
 /** Who eats at this table: heat tolerance and diets, which the board checks each pairing against. */
-export function PreferencesPanel({ hid, members, myId, isKeeper }: { hid: string; members: WeekMember[]; myId: string; isKeeper: boolean }) {
+export function PreferencesPanel({
+  hid,
+  members,
+  myId,
+  isKeeper,
+}: {
+  hid: string;
+  members: WeekMember[];
+  myId: string;
+  isKeeper: boolean;
+}) {
   const update = useUpdatePreferences(hid);
   return (
     <section aria-labelledby="who-eats" className="rounded-card border border-line bg-surface p-4">
       <h2 id="who-eats" className="text-lg">
         Who eats
       </h2>
-      <p className="mb-3 text-sm text-ink-muted">A pairing hotter than someone keeps to, or against their diet, is flagged on the meal. Each member sets their own; a keeper can set anyone’s.</p>
+      <p className="mb-3 text-sm text-ink-muted">
+        A pairing hotter than someone keeps to, or against their diet, is flagged on the meal. Each member sets their
+        own; a keeper can set anyone’s.
+      </p>
       {update.error && (
         <Notice tone="past" role="alert">
           {update.error.message}
@@ -22,7 +35,10 @@ export function PreferencesPanel({ hid, members, myId, isKeeper }: { hid: string
         {members.map((member) => {
           const editable = isKeeper || member.userId === myId;
           const toggleDiet = (tag: DietTag, on: boolean) =>
-            update.mutate({ userId: member.userId, patch: { dietTags: on ? [...member.dietTags, tag] : member.dietTags.filter((t) => t !== tag) } });
+            update.mutate({
+              userId: member.userId,
+              patch: { dietTags: on ? [...member.dietTags, tag] : member.dietTags.filter((t) => t !== tag) },
+            });
           return (
             <li key={member.userId} className="flex flex-col gap-1 rounded-lg bg-sunken/60 p-3">
               <p className="font-bold">
@@ -35,7 +51,9 @@ export function PreferencesPanel({ hid, members, myId, isKeeper }: { hid: string
                   className="min-h-11 rounded-lg border border-line bg-surface px-2"
                   value={member.heatTolerance}
                   disabled={!editable || update.isPending}
-                  onChange={(e) => update.mutate({ userId: member.userId, patch: { heatTolerance: Number(e.target.value) } })}
+                  onChange={(e) =>
+                    update.mutate({ userId: member.userId, patch: { heatTolerance: Number(e.target.value) } })
+                  }
                 >
                   {HEAT_LEVELS.map((heat) => (
                     <option key={heat} value={heat}>

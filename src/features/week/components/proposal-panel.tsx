@@ -13,7 +13,12 @@ import { weekday } from '../drag';
 import { ProposedMealRow } from './proposed-meal-row';
 
 const slotKey = (m: { date: string; slot: string }) => `${m.date}|${m.slot}`;
-const SLOT_NAMES: Record<string, string> = { breakfast: 'The breakfasts', lunch: 'The lunches', dinner: 'The dinners', snack: 'The snacks' };
+const SLOT_NAMES: Record<string, string> = {
+  breakfast: 'The breakfasts',
+  lunch: 'The lunches',
+  dinner: 'The dinners',
+  snack: 'The snacks',
+};
 
 function scopeOf(value: string): ProposalScope {
   const [kind, rest] = value.split(':');
@@ -42,7 +47,13 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
   const ask = (options: { keep?: ProposedMealView[]; avoid?: typeof avoid } = {}) => {
     setMessage(null);
     propose.mutate(
-      { start: week.start, scope: scopeOf(scope), varietyDays, keep: (options.keep ?? []).map((m) => ({ date: m.date, slot: m.slot, mealId: m.mealId })), avoid: options.avoid ?? [] },
+      {
+        start: week.start,
+        scope: scopeOf(scope),
+        varietyDays,
+        keep: (options.keep ?? []).map((m) => ({ date: m.date, slot: m.slot, mealId: m.mealId })),
+        avoid: options.avoid ?? [],
+      },
       {
         onSuccess: (answer) => {
           setProposal(answer);
@@ -81,7 +92,10 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
   };
 
   return (
-    <section aria-labelledby="proposal-heading" className="flex flex-col gap-3 rounded-card border border-line bg-surface p-3">
+    <section
+      aria-labelledby="proposal-heading"
+      className="flex flex-col gap-3 rounded-card border border-line bg-surface p-3"
+    >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 id="proposal-heading" className="text-lg font-bold">
           Plan from the shelf
@@ -100,7 +114,11 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
         <div className="flex flex-wrap items-end gap-2">
           <label className="flex flex-col gap-1 text-sm font-bold">
             Propose meals for
-            <select className="min-h-11 rounded-lg border border-line bg-surface px-2 font-normal" value={scope} onChange={(e) => setScope(e.target.value)}>
+            <select
+              className="min-h-11 rounded-lg border border-line bg-surface px-2 font-normal"
+              value={scope}
+              onChange={(e) => setScope(e.target.value)}
+            >
               <option value="week">The whole week</option>
               {SLOTS.map((slot) => (
                 <option key={slot} value={`slot:${slot}`}>
@@ -132,7 +150,9 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
       )}
       {planned && (
         <div className="flex flex-wrap items-center gap-2 rounded-lg bg-action-soft px-3 py-2" role="status">
-          <span className="flex-1">Planned {planned.count === 1 ? '1 proposed meal' : `${planned.count} proposed meals`}.</span>
+          <span className="flex-1">
+            Planned {planned.count === 1 ? '1 proposed meal' : `${planned.count} proposed meals`}.
+          </span>
           <Button variant="secondary" onClick={undo} disabled={takeBack.isPending}>
             Undo
           </Button>
@@ -141,18 +161,31 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
       {proposal && (
         <div className="flex flex-col gap-2">
           {wholeProposal && (
-          <p className="tabular text-sm" data-testid="proposal-figures">
-            If you accept them all: <span className="font-bold">{wasteWords(proposal.before)}</span> → <span className="font-bold text-action">{wasteWords(proposal.after)}</span>
-          </p>
+            <p className="tabular text-sm" data-testid="proposal-figures">
+              If you accept them all: <span className="font-bold">{wasteWords(proposal.before)}</span> →{' '}
+              <span className="font-bold text-action">{wasteWords(proposal.after)}</span>
+            </p>
           )}
-          {proposal.proposed.length === 0 && <p>Every slot asked for is planned already, or no meal suits it without a flag, a repeat or a jar the shelf lacks.</p>}
+          {proposal.proposed.length === 0 && (
+            <p>
+              Every slot asked for is planned already, or no meal suits it without a flag, a repeat or a jar the shelf
+              lacks.
+            </p>
+          )}
           <ul className="flex flex-col gap-2" aria-label="Proposed meals">
             {proposal.proposed.map((meal) => (
               <ProposedMealRow
                 key={slotKey(meal)}
                 meal={meal}
                 chosen={chosen.has(slotKey(meal))}
-                onChoose={(on) => setChosen((set) => { const next = new Set(set); if (on) next.add(slotKey(meal)); else next.delete(slotKey(meal)); return next; })}
+                onChoose={(on) =>
+                  setChosen((set) => {
+                    const next = new Set(set);
+                    if (on) next.add(slotKey(meal));
+                    else next.delete(slotKey(meal));
+                    return next;
+                  })
+                }
                 onSwap={() => swap(meal)}
                 busy={propose.isPending}
               />
@@ -160,7 +193,8 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
           </ul>
           {proposal.unfilled.length > 0 && (
             <p className="text-sm text-ink-muted">
-              Left open: {proposal.unfilled.map((s) => `${weekday(s.date)} ${s.slot}`).join(', ')} (no meal suits without a flag, a repeat or a jar the shelf lacks).
+              Left open: {proposal.unfilled.map((s) => `${weekday(s.date)} ${s.slot}`).join(', ')} (no meal suits
+              without a flag, a repeat or a jar the shelf lacks).
             </p>
           )}
           <div className="flex flex-wrap gap-2">

@@ -44,7 +44,19 @@ const sourceOf = (thing: { data: { current?: unknown } } | null | undefined) =>
 const targetOf = (thing: { data: { current?: unknown } } | null | undefined) =>
   thing?.data.current as DropTarget | undefined;
 
-export function WeekBoard({ hid, week, meals, canEdit, firstDay = null }: { hid: string; week: WeekView; meals: MealView[]; canEdit: boolean; firstDay?: string | null }) {
+export function WeekBoard({
+  hid,
+  week,
+  meals,
+  canEdit,
+  firstDay = null,
+}: {
+  hid: string;
+  week: WeekView;
+  meals: MealView[];
+  canEdit: boolean;
+  firstDay?: string | null;
+}) {
   const [message, setMessage] = useState<string | null>(null);
   const report = (text: string) => setMessage(text);
   const refuse = (text: string) => {
@@ -60,7 +72,9 @@ export function WeekBoard({ hid, week, meals, canEdit, firstDay = null }: { hid:
   const [restockRefused, setRestockRefused] = useState(() => new Map<string, Error>());
   const wide = useMedia('(min-width: 1024px)');
   const [picked, setPicked] = useState<string | null>(firstDay);
-  const selectedDay = week.days.find((d) => d.date === picked)?.date ?? (week.days.some((d) => d.date === week.today) ? week.today : week.days[0].date);
+  const selectedDay =
+    week.days.find((d) => d.date === picked)?.date ??
+    (week.days.some((d) => d.date === week.today) ? week.today : week.days[0].date);
   const visibleDays = wide ? week.days : week.days.filter((d) => d.date === selectedDay);
   const [dragging, setDragging] = useState<DragSource | null>(null);
   // On a phone a quick sideways swipe over the day turns to the next or previous day.
