@@ -1,4 +1,4 @@
-// `npm test`: first the code rules (lint, import direction), then the same set-up as `npm start` against
+// `npm test`: first the code rules (lint, formatting, import direction), then the same set-up as `npm start` against
 // separate test databases, then every test. Extra arguments go to vitest, e.g.
 // `npm test -- --project api tests/api/auth.test.ts`; `--project code` runs the code rules alone.
 import { spawnSync } from 'node:child_process';
@@ -119,11 +119,12 @@ function printSummary(resultsFile) {
   );
 }
 
-/** The lint and the import rules, each one check of the suite; a failure prints each broken rule's reason. */
+/** The lint, the formatting (Prettier) and the import rules, each one check of the suite; a failure prints each broken rule's reason. */
 function checkCodeRules() {
   const counts = { passed: 0, failed: 0 };
   for (const [name, script] of [
     ['lint', 'lint'],
+    ['format', 'format:check'],
     ['import rules', 'check:imports'],
   ]) {
     log(`checking the ${name} (npm run ${script})`);

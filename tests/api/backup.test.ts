@@ -222,27 +222,23 @@ describe('one limit per value, shared by every entry point', () => {
       return res.body;
     };
     await ok(
-      agent
-        .patch(base)
-        .send({
-          altitudeFt: LIMITS.altitudeFt.max,
-          bestQualityMonths: LIMITS.bestQualityMonths,
-          cannerCapacityJars: LIMITS.cannerCapacityJars,
-        }),
+      agent.patch(base).send({
+        altitudeFt: LIMITS.altitudeFt.max,
+        bestQualityMonths: LIMITS.bestQualityMonths,
+        cannerCapacityJars: LIMITS.cannerCapacityJars,
+      }),
       200,
     );
     const name = 'P'.repeat(LIMITS.length.productName);
     const { product } = await ok(
-      agent
-        .post(`${base}/products`)
-        .send({
-          name,
-          kind: 'pickle',
-          heat: LIMITS.heat,
-          minJars: LIMITS.minJars,
-          useWithinDays: LIMITS.useWithinDays,
-          notes: 'n'.repeat(LIMITS.length.notes),
-        }),
+      agent.post(`${base}/products`).send({
+        name,
+        kind: 'pickle',
+        heat: LIMITS.heat,
+        minJars: LIMITS.minJars,
+        useWithinDays: LIMITS.useWithinDays,
+        notes: 'n'.repeat(LIMITS.length.notes),
+      }),
       201,
     );
     await ok(

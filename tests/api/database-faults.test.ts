@@ -70,27 +70,23 @@ function write(n: number) {
   const pending =
     n % 2 === 0
       ? request(built.app).post(`${base}/todos`).send({ title: tag })
-      : request(built.app)
-          .post(`${base}/batches`)
-          .send({
-            productId,
-            recipeId,
-            cannedOn: '2026-09-14',
-            jarSize,
-            jarsFilled: 6,
-            jarsSealed: 6,
-            method,
-            notes: tag,
-          });
-  return pending
-    .set('Cookie', cookie)
-    .then((response) => ({
-      n,
-      tag,
-      kind: n % 2 === 0 ? 'todo' : 'batch',
-      status: response.status,
-      body: response.body,
-    }));
+      : request(built.app).post(`${base}/batches`).send({
+          productId,
+          recipeId,
+          cannedOn: '2026-09-14',
+          jarSize,
+          jarsFilled: 6,
+          jarsSealed: 6,
+          method,
+          notes: tag,
+        });
+  return pending.set('Cookie', cookie).then((response) => ({
+    n,
+    tag,
+    kind: n % 2 === 0 ? 'todo' : 'batch',
+    status: response.status,
+    body: response.body,
+  }));
 }
 
 type Answer = Awaited<ReturnType<typeof write>>;

@@ -42,15 +42,13 @@ describe('first run: nothing is planned before the altitude is confirmed', () =>
 
   it('saving the altitude confirms it, and UTC is stored as UTC', async () => {
     const { agent, hid } = await newHousehold('ash@example.test');
-    const saved = await agent
-      .patch(`/api/households/${hid}`)
-      .send({
-        altitudeFt: 5200,
-        timeZone: 'UTC',
-        cannerCapacityJars: 9,
-        defaultMethod: 'boiling-water',
-        weekStartsOn: 0,
-      });
+    const saved = await agent.patch(`/api/households/${hid}`).send({
+      altitudeFt: 5200,
+      timeZone: 'UTC',
+      cannerCapacityJars: 9,
+      defaultMethod: 'boiling-water',
+      weekStartsOn: 0,
+    });
     expect(saved.status, saved.text).toBe(200);
     expect(saved.body.household).toMatchObject({
       altitudeFt: 5200,

@@ -18,16 +18,14 @@ describe('calendar dates', () => {
     expect(todo.status).toBe(400);
     expect(todo.body.error.fields.dueOn).toMatch(/real date/);
     const products = (await keeper.get(`/api/households/${ctx.householdId}/products`)).body.products;
-    const batch = await keeper
-      .post(`/api/households/${ctx.householdId}/batches`)
-      .send({
-        productId: products[0].id,
-        cannedOn: '2026-02-30',
-        jarSize: 'pint',
-        jarsFilled: 2,
-        jarsSealed: 2,
-        method: 'boiling-water',
-      });
+    const batch = await keeper.post(`/api/households/${ctx.householdId}/batches`).send({
+      productId: products[0].id,
+      cannedOn: '2026-02-30',
+      jarSize: 'pint',
+      jarsFilled: 2,
+      jarsSealed: 2,
+      method: 'boiling-water',
+    });
     expect(batch.status).toBe(400);
     expect(batch.body.error.fields.cannedOn).toMatch(/real date/);
     expect(

@@ -174,18 +174,16 @@ describe('products and recipes', () => {
 
   it('refuses a recipe without a tested time or with a bad heat, naming the fields', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const recipe = await cook
-      .post(`${lookups.base}/recipes`)
-      .send({
-        productId: lookups.product('Pickled Beets').id,
-        name: 'x',
-        yieldJars: 1,
-        yieldJarSize: 'pint',
-        ingredients: [],
-        method: 'boiling-water',
-        baseMinutes: {},
-        headspaceInches: 0.5,
-      });
+    const recipe = await cook.post(`${lookups.base}/recipes`).send({
+      productId: lookups.product('Pickled Beets').id,
+      name: 'x',
+      yieldJars: 1,
+      yieldJarSize: 'pint',
+      ingredients: [],
+      method: 'boiling-water',
+      baseMinutes: {},
+      headspaceInches: 0.5,
+    });
     expect(recipe.status).toBe(400);
     expect(Object.keys(recipe.body.error.fields).sort()).toEqual(['baseMinutes', 'ingredients']);
     const product = await cook

@@ -224,11 +224,9 @@ describe('shelf CSV round trip', () => {
       ['half-pint', 'pressure-weighted'],
     ]);
     const wrong = (
-      await cook
-        .post(`${lookups.base}/shelf/import`)
-        .send({
-          csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nHot Pepper Jelly,2025-08-30,gallon,1,1,kettle',
-        })
+      await cook.post(`${lookups.base}/shelf/import`).send({
+        csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nHot Pepper Jelly,2025-08-30,gallon,1,1,kettle',
+      })
     ).body.problems;
     expect(wrong).toEqual([
       {

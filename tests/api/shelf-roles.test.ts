@@ -106,17 +106,15 @@ const ROUTES: Route[] = [
     name: 'POST batches',
     may: 'cook',
     send: (a) =>
-      a
-        .post(`${lookups.base}/batches`)
-        .send({
-          productId: lookups.product('Pickled Beets').id,
-          recipeId: lookups.recipe('Pickled beets').id,
-          cannedOn: '2026-07-01',
-          jarSize: 'pint',
-          jarsFilled: 2,
-          jarsSealed: 2,
-          method: 'boiling-water',
-        }),
+      a.post(`${lookups.base}/batches`).send({
+        productId: lookups.product('Pickled Beets').id,
+        recipeId: lookups.recipe('Pickled beets').id,
+        cannedOn: '2026-07-01',
+        jarSize: 'pint',
+        jarsFilled: 2,
+        jarsSealed: 2,
+        method: 'boiling-water',
+      }),
   },
   {
     name: 'POST a batch photo',
@@ -152,11 +150,9 @@ const ROUTES: Route[] = [
     name: 'POST shelf/import (preview)',
     may: 'cook',
     send: (a) =>
-      a
-        .post(`${lookups.base}/shelf/import`)
-        .send({
-          csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nPickled Beets,2026-07-02,pint,2,2,boiling-water\n',
-        }),
+      a.post(`${lookups.base}/shelf/import`).send({
+        csv: 'product,canned_on,jar_size,jars_filled,jars_sealed,method\nPickled Beets,2026-07-02,pint,2,2,boiling-water\n',
+      }),
   },
 ];
 

@@ -153,14 +153,12 @@ describe('who eats: flags on a pairing', () => {
 describe('the meal library and copying a week', () => {
   it('creates a meal with its usual product, plans it with that pairing, and copies the week', async () => {
     const { product } = await productWithJars(ctx.householdId, { name: 'Test Plum Sauce', kind: 'sauce', jars: 3 });
-    const meal = await cook
-      .post(url('/meals'))
-      .send({
-        name: 'Test pork buns',
-        tags: ['weekend'],
-        usualServings: 4,
-        products: [{ productId: product.id, tbspPerServing: 1.5 }],
-      });
+    const meal = await cook.post(url('/meals')).send({
+      name: 'Test pork buns',
+      tags: ['weekend'],
+      usualServings: 4,
+      products: [{ productId: product.id, tbspPerServing: 1.5 }],
+    });
     expect(meal.status).toBe(201);
     expect(meal.body.meal).toMatchObject({
       name: 'Test pork buns',
