@@ -1,19 +1,12 @@
-import { useDraggable } from '@dnd-kit/core';
 import Fuse from 'fuse.js';
 import { useMemo, useState, type FormEvent, type ReactNode } from 'react';
 import type { MealView } from '@shared/schemas/week';
 import { useCreateMeal } from '../api/create-meal';
-import { useBoard } from '../board-context';
+import { useBoardChip } from '../use-board-chip';
 import { ChipList } from './chip-list';
 
 function MealChip({ meal, putOn }: { meal: MealView; putOn: ReactNode }) {
-  const board = useBoard();
-  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
-    id: `meal:${meal.id}`,
-    data: { type: 'meal', meal },
-    disabled: !board.canEdit,
-  });
-  const picked = board.held?.type === 'meal' && board.held.meal.id === meal.id;
+  const { board, attributes, listeners, setNodeRef, isDragging, picked } = useBoardChip({ type: 'meal', meal });
   return (
     <>
       <button

@@ -1,18 +1,11 @@
-import { useDraggable } from '@dnd-kit/core';
 import type { ReactNode } from 'react';
 import type { WeekProduct } from '@shared/schemas/week';
 import { JarDrawing } from '@/components/ui/jar-drawing';
-import { useBoard } from '../board-context';
+import { useBoardChip } from '../use-board-chip';
 import { ChipList } from './chip-list';
 
 function ProductChip({ product, putOn }: { product: WeekProduct; putOn: ReactNode }) {
-  const board = useBoard();
-  const { attributes, listeners, setNodeRef, isDragging } = useDraggable({
-    id: `product:${product.id}`,
-    data: { type: 'product', product },
-    disabled: !board.canEdit,
-  });
-  const picked = board.held?.type === 'product' && board.held.product.id === product.id;
+  const { board, attributes, listeners, setNodeRef, isDragging, picked } = useBoardChip({ type: 'product', product });
   const counts = [
     product.openedJars ? `${product.openedJars} open` : '',
     product.sealedJars ? `${product.sealedJars} sealed` : '',
