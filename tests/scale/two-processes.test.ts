@@ -294,6 +294,16 @@ describe('two app processes behind nginx', () => {
     });
     const db = new pg.Client({ connectionString: database.url });
     await Promise.all([boss.start(), db.connect()]);
+    /** Waits until no sweep is queued or running (30 s at most). */
+    const sweepsDone = async () => {
+      for (let i = 0; i < 150; i += 1) {
+        const { rows } = await db.query(
+          "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
+        );
+        if (rows[0].waiting === 0) return;
+        await new Promise((resolve) => setTimeout(resolve, 200));
+      }
+    };
     const sweepsBy = (done: string) => apps.filter((a) => a.logs.some((l) => l.msg === done)).map((a) => a.name);
     try {
       // A sweep is taken by whichever process polls first. After each round the processes that have run both kinds
@@ -306,13 +316,7 @@ describe('two app processes behind nginx', () => {
         try {
           await boss.send('reminder-sweep', {});
           await boss.send('digest-sweep', {});
-          for (let i = 0; i < 150; i += 1) {
-            const { rows } = await db.query(
-              "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
-            );
-            if (rows[0].waiting === 0) break;
-            await new Promise((resolve) => setTimeout(resolve, 200));
-          }
+          await sweepsDone();
           // Each process writes its log asynchronously: the line may come a moment after the job is marked done.
           await new Promise((resolve) => setTimeout(resolve, 300));
         } finally {
@@ -321,13 +325,7 @@ describe('two app processes behind nginx', () => {
       }
       // One more round for both at once: the claims, not the timing, keep each message once.
       await Promise.all([boss.send('reminder-sweep', {}), boss.send('digest-sweep', {})]);
-      for (let i = 0; i < 150; i += 1) {
-        const { rows } = await db.query(
-          "SELECT count(*)::int AS waiting FROM pgboss.job WHERE name IN ('reminder-sweep', 'digest-sweep') AND state IN ('created', 'retry', 'active')",
-        );
-        if (rows[0].waiting === 0) break;
-        await new Promise((resolve) => setTimeout(resolve, 200));
-      }
+      await sweepsDone();
       const reminderSweeps = sweepsBy('reminder sweep done');
       const digestSweeps = sweepsBy('digest sweep done');
       expect(reminderSweeps.sort()).toEqual(['app-a', 'app-b']);

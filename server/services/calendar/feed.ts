@@ -39,7 +39,7 @@ export async function householdCalendar(household: Household, publicOrigin: stri
   const zone = household.timeZone;
   const times = household.mealTimes;
   const today = todayIn(zone);
-  const [entries, jars, todos] = await Promise.all([
+  const [entries, jars, todos, sealChecks] = await Promise.all([
     PlanEntry.findAll({
       where: {
         householdId: household.id,
@@ -68,8 +68,8 @@ export async function householdCalendar(household: Household, publicOrigin: stri
         ['id', 'ASC'],
       ],
     }),
+    sealChecksToDo(household.id),
   ]);
-  const sealChecks = await sealChecksToDo(household.id);
 
   const calendar = ical({
     name: `Larderly: ${household.name}`,

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
-import { Link } from 'react-router-dom';
 import { Button } from './button';
+import { RefusalAction } from './error-with-action';
 import { Notice } from './notice';
 
 /** What a refused submit said: its message and, by field, what to change there. */
@@ -44,14 +44,7 @@ export function FormFooter({
           {marked > 0
             ? `${error.message} Check the ${marked === 1 ? 'marked field' : `${marked} marked fields`}.`
             : error.message}
-          {error.action && (
-            <>
-              {' '}
-              <Link to={error.action.href} className="text-action underline underline-offset-2">
-                {error.action.label}
-              </Link>
-            </>
-          )}
+          <RefusalAction action={error.action} />
         </Notice>
       )}
       <div className="flex flex-wrap items-center gap-3">
