@@ -3,6 +3,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { can, type Permission, type Role } from '../../shared/roles';
 import { Household } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
+import { joinedMembership } from './session';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -28,16 +29,8 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 
 type MembershipRow = Record<string, unknown> & { member_role: Role; data_version: string };
 
-/** The person's membership and its household in one indexed read (memberships_household_id_user_id). */
-async function membershipOf(sequelize: Sequelize, householdId: string, userId: string) {
-  // Raw SQL: every household request pays for this read, and a Sequelize include costs more than the query itself.
-  const [row] = await sequelize.query<MembershipRow>(
-    `SELECT m.role AS member_role, h.*
-       FROM memberships m JOIN households h ON h.id = m.household_id
-      WHERE m.household_id = :householdId AND m.user_id = :userId`,
-    { replacements: { householdId, userId }, type: QueryTypes.SELECT },
-  );
-  if (!row) return null;
+/** A membership row (the household's columns and `member_role`) as the guard's membership. */
+function membershipFromRow(row: MembershipRow) {
   const attributes = Object.fromEntries(
     Object.entries(Household.getAttributes()).map(([name, column]) => [name, row[column.field ?? name]]),
   );
@@ -46,6 +39,23 @@ async function membershipOf(sequelize: Sequelize, householdId: string, userId: s
     dataVersion: String(row.data_version),
     household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }),
   };
+}
+
+/**
+ * The person's membership and its household: as the session read joined it in the same round trip
+ * (session.ts), else in one indexed read of its own (memberships_household_id_user_id).
+ */
+async function membershipOf(req: Request, sequelize: Sequelize, householdId: string, userId: string) {
+  const joined = joinedMembership(req, householdId, userId);
+  if (joined) return joined.row ? membershipFromRow(joined.row as MembershipRow) : null;
+  // Raw SQL: every household request pays for this read, and a Sequelize include costs more than the query itself.
+  const [row] = await sequelize.query<MembershipRow>(
+    `SELECT m.role AS member_role, h.*
+       FROM memberships m JOIN households h ON h.id = m.household_id
+      WHERE m.household_id = :householdId AND m.user_id = :userId`,
+    { replacements: { householdId, userId }, type: QueryTypes.SELECT },
+  );
+  return row ? membershipFromRow(row) : null;
 }
 
 /**
@@ -58,8 +68,9 @@ export function householdAccess(permission: Permission): RequestHandler {
       if (!req.user) throw new AppError(401, 'signed_out', 'Please sign in first.');
       const householdId = String(req.params.hid ?? '');
       if (!UUID.test(householdId)) throw notFound('That household');
-      // Read fresh on every request, never cached: a removed member loses access on their next request, on every process.
-      const membership = await membershipOf(Household.sequelize!, householdId, req.user.id);
+      // Read fresh on every request (with the session, or here), never cached: a removed member loses access on
+      // their next request, on every process.
+      const membership = await membershipOf(req, Household.sequelize!, householdId, req.user.id);
       if (!membership) throw notFound('That household');
       req.membership = { householdId, ...membership };
       if (!can(membership.role, permission)) throw forbidden();

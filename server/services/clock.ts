@@ -1,4 +1,4 @@
-import { calendarDateIn } from '../../shared/time-zones';
+import { calendarDateIn, hourOfDayIn } from '../../shared/time-zones';
 
 /** The one place the server asks what time it is, so tests can set the clock. */
 export const clock = {
@@ -12,5 +12,5 @@ export function todayIn(timeZone: string, now = clock.now()) {
 
 /** The hour of the day (0-23) in a time zone. */
 export function hourIn(timeZone: string, now = clock.now()) {
-  return Number(new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', hourCycle: 'h23' }).format(now));
+  return hourOfDayIn(timeZone, now);
 }

@@ -1,5 +1,6 @@
 // Two app instances on one database, as two processes behind a load balancer: each keeps its own
 // session middleware and its own cache of household answers, so neither may trust what it saw before.
+import pg from 'pg';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { weekStartOf } from '../../shared/schemas/week';
@@ -179,6 +180,36 @@ describe('the session and the guard, across both apps', () => {
     expect(daysLeft).toBeGreaterThan(29.9);
     expect(daysLeft).toBeLessThan(30.01);
     expect((await onSecond(week, cookie)).headers['set-cookie']).toBeUndefined();
+  });
+
+  it('reads the session, the person and the membership in one round trip, and a stranger still gets 404', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const texts: string[] = [];
+    // Counted at the driver, below both Sequelize and the session store's own pool.
+    const query = pg.Client.prototype.query;
+    pg.Client.prototype.query = function counted(this: pg.Client, ...args: unknown[]) {
+      texts.push(typeof args[0] === 'string' ? args[0] : String((args[0] as { text?: string })?.text));
+      return (query as (...a: unknown[]) => unknown).apply(this, args);
+    } as typeof query;
+    try {
+      const answer = await onSecond(`/api/households/${first.householdId}`, cookie);
+      expect(answer.status).toBe(200);
+      expect(answer.body.household.id).toBe(first.householdId);
+      expect(texts).toHaveLength(1);
+      expect(texts[0]).toMatch(/FROM sessions/);
+      expect(texts[0]).not.toMatch(/password_hash/);
+    } finally {
+      pg.Client.prototype.query = query;
+    }
+    // Another household: the joined read finds no membership, and the answer is the same 404 as before.
+    const other = await Household.create({ name: 'Not the cook’s', timeZone: 'America/Chicago' });
+    try {
+      const refused = await onSecond(`/api/households/${other.id}/week`, cookie);
+      expect(refused.status).toBe(404);
+      expect((await onSecond(`/api/households/${other.id.toUpperCase()}`, cookie)).status).toBe(404);
+    } finally {
+      await other.destroy();
+    }
   });
 
   it('never reads the password hash on a signed-in request', async () => {

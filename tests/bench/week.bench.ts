@@ -1,5 +1,5 @@
 // GET /week under load beside a bare Express JSON route, and the queries one request makes.
-// Run: node --import tsx tests/bench/week.bench.ts   (starts or reuses the project's PostgreSQL; ports 3201-3202)
+// Run: node --import tsx tests/bench/week.bench.ts   (starts or reuses the project's PostgreSQL; ports 3201-3202, or BENCH_PORT and the one above)
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 // @ts-expect-error autocannon ships no type declarations
@@ -17,8 +17,9 @@ import { BENCH_EMAIL, BENCH_PASSWORD, generateHousehold } from './week-household
 
 const CONNECTIONS = 32;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
-const APP_PORT = 3201;
-const BARE_PORT = 3202;
+// BENCH_PORT moves both ports (the app's and the bare route's, one above), so parallel runs on one machine never collide.
+const APP_PORT = Number(process.env.BENCH_PORT ?? 3201);
+const BARE_PORT = APP_PORT + 1;
 
 const cluster = startCluster();
 const database = `larderly_bench_${process.pid}`;
