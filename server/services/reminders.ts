@@ -168,12 +168,13 @@ export interface SweepHooks {
   afterClaim?: (deliveryId: string) => void | Promise<void>;
 }
 
-/** One opened jar near its use-by and one member of its household, with that member's settings (null: defaults). */
-interface Candidate {
+/** A use-by reminder this sweep claimed and has something to send for: a push device, or an e-mail to write. */
+interface Claimed {
+  deliveryId: string;
+  kind: 'soon' | 'today';
   jarId: string;
   code: string;
   useBy: string;
-  householdId: string;
   householdName: string;
   timeZone: string;
   productName: string;
@@ -184,48 +185,93 @@ interface Candidate {
   daysBefore: number | null;
 }
 
-/** Claims are written this many at a time: one INSERT ... SELECT FROM unnest(...) each. */
-const CLAIM_CHUNK = 2_000;
+/**
+ * The use-by sweep is split into this many ranges of household ids; each is claimed in one transaction holding an
+ * advisory lock on its range, so two processes sweeping at once share the work instead of both doing all of it.
+ * Ids are random UUIDs, so the ranges hold about as many households each; a range's opened jars are read on the
+ * partial index jars_opened_household_use_by (migration 0180).
+ */
+const USE_BY_PARTS = 16; // one hex digit of the id each
+/** The household ids of one range: from the first id starting with the part's hex digit, to the next part's. */
+function partRange(part: number) {
+  const start = (digit: number) => `${digit.toString(16)}0000000-0000-0000-0000-000000000000`;
+  return { lowest: start(part), above: part + 1 < USE_BY_PARTS ? start(part + 1) : null };
+}
+/** The first key of the parts' advisory locks ("LR" for Larderly reminders). */
+const USE_BY_LOCK = 0x4c52;
+/** Reminders sent at once: pushes and e-mails go out in parallel, up to this many. */
+const SEND_CONCURRENCY = 16;
 
 /**
- * The candidates for a use-by reminder now, found in one query: opened jars near their use-by, each with every
- * member whose reminder hour (in the household's time zone) has come and whose "days before" reaches the jar.
- * The SQL only narrows the rows; dueReminder() below is the rule. Reminders already sent, given up on, or
- * claimed by a sweep still within its time are left out here, as the claim would refuse them.
+ * Claims every use-by reminder due now in one part of the households, in one statement: opened jars near their
+ * use-by, each with every member whose reminder hour (in the household's time zone) has come and whose "days
+ * before" reaches the jar (the rule of dueReminder(), in SQL). A new claim, or one whose sends never finished and
+ * went stale, as claim() does. A reminder with nothing to send (no push device, no e-mail for that person) is
+ * recorded sent in the same statement; the others come back to be sent.
  */
-async function useByCandidates(ctx: Notifiers, now: Date) {
+async function claimUseByPart(ctx: Notifiers, now: Date, part: number) {
   const utcToday = now.toISOString().slice(0, 10);
-  // Raw SQL: one set-based read instead of a query per household, member and jar (the sweep bench's 100,000 jars).
-  return ctx.sequelize.query<Candidate>(
+  // Raw SQL: a set-based claim, where a query per household, member and jar took minutes for 100,000 jars.
+  const [row] = await ctx.sequelize.query<{ claimed: number; toSend: Claimed[] }>(
     `WITH local AS (
-       SELECT j.id, j.code, j.use_by, j.household_id, j.product_id, h.name, h.time_zone,
-              (:now::timestamptz AT TIME ZONE h.time_zone)::date AS today,
-              extract(hour FROM :now::timestamptz AT TIME ZONE h.time_zone)::int AS hour
-         FROM jars j JOIN households h ON h.id = j.household_id
-        WHERE j.state = 'opened' AND j.use_by BETWEEN :from AND :to
-     )
-     SELECT l.id AS "jarId", l.code, l.use_by AS "useBy", l.household_id AS "householdId", l.name AS "householdName",
-            l.time_zone AS "timeZone", p.name AS "productName", m.user_id AS "userId", u.email,
-            np.email_reminders AS "emailReminders", np.reminder_hour AS "reminderHour", np.days_before AS "daysBefore"
-       FROM local l
-       JOIN products p ON p.id = l.product_id
-       JOIN memberships m ON m.household_id = l.household_id
-       JOIN users u ON u.id = m.user_id
-       LEFT JOIN notification_preferences np ON np.user_id = m.user_id
-      WHERE l.use_by - l.today BETWEEN 0 AND COALESCE(np.days_before, :defaultDaysBefore)
-        AND l.hour >= COALESCE(np.reminder_hour, :defaultHour) AND l.hour < COALESCE(np.reminder_hour, :defaultHour) + :catchUpHours
-        AND NOT EXISTS (
-              SELECT 1 FROM reminder_deliveries d
-               WHERE d.jar_id = l.id AND d.user_id = m.user_id
-                 AND d.kind = CASE WHEN l.use_by = l.today THEN 'today' ELSE 'soon' END
-                 AND (d.sent_at IS NOT NULL OR d.attempts >= :maxAttempts
-                      OR d.claimed_at >= :now::timestamptz - make_interval(mins => :staleMinutes)))
-      ORDER BY l.household_id, l.id, m.user_id`,
+         SELECT j.id, j.code, j.use_by, j.household_id, j.product_id, h.name, h.time_zone,
+                (:now::timestamptz AT TIME ZONE h.time_zone)::date AS today,
+                extract(hour FROM :now::timestamptz AT TIME ZONE h.time_zone)::int AS hour
+           FROM jars j JOIN households h ON h.id = j.household_id
+          WHERE j.state = 'opened' AND j.use_by BETWEEN :from AND :to
+            AND j.household_id >= :lowest::uuid AND (:above::uuid IS NULL OR j.household_id < :above::uuid)
+       ), due AS (
+         SELECT l.id AS jar_id, l.code, l.use_by, l.household_id, l.name AS household_name, l.time_zone,
+                l.product_id, m.user_id, np.email_reminders, np.reminder_hour, np.days_before,
+                CASE WHEN l.use_by = l.today THEN 'today' ELSE 'soon' END AS kind,
+                NOT EXISTS (SELECT 1 FROM push_subscriptions ps WHERE ps.user_id = m.user_id)
+                  AND NOT (:mailEnabled AND COALESCE(np.email_reminders, :defaultEmail)) AS nothing_to_send
+           FROM local l
+           JOIN memberships m ON m.household_id = l.household_id
+           LEFT JOIN notification_preferences np ON np.user_id = m.user_id
+          WHERE l.use_by - l.today BETWEEN 0 AND COALESCE(np.days_before, :defaultDaysBefore)
+            AND l.hour >= COALESCE(np.reminder_hour, :defaultHour) AND l.hour < COALESCE(np.reminder_hour, :defaultHour) + :catchUpHours
+       ), claimed AS (
+         INSERT INTO reminder_deliveries (id, household_id, jar_id, user_id, kind, use_by, claimed_at, attempts,
+                                          pushes_sent, email_sent, sent_at, created_at, updated_at)
+         SELECT gen_random_uuid(), household_id, jar_id, user_id, kind, use_by, :now, 1,
+                0, false, CASE WHEN nothing_to_send THEN :now::timestamptz END, :now, :now
+           FROM due
+         -- Sent, given up on, or claimed by a sweep still within its time: the conflict leaves it be. No NOT EXISTS
+         -- before it: with the table's statistics out of date (a first sweep) the planner may scan the whole table
+         -- for every row, while the arbiter index is always used.
+         ON CONFLICT (jar_id, kind, user_id) DO UPDATE
+           SET claimed_at = EXCLUDED.claimed_at, attempts = reminder_deliveries.attempts + 1, updated_at = EXCLUDED.updated_at,
+               sent_at = EXCLUDED.sent_at, pushes_sent = 0, email_sent = false, problem = NULL
+           WHERE reminder_deliveries.sent_at IS NULL
+             AND reminder_deliveries.claimed_at < :now::timestamptz - make_interval(mins => :staleMinutes)
+             AND reminder_deliveries.attempts < :maxAttempts
+         RETURNING id, household_id, jar_id, user_id, kind, use_by, sent_at
+       )
+       -- One row: how many were claimed, and those with something to send, with what their messages need.
+       SELECT (SELECT count(*) FROM claimed)::int AS claimed,
+              COALESCE((
+                SELECT json_agg(json_build_object(
+                         'deliveryId', c.id, 'kind', c.kind, 'jarId', c.jar_id, 'code', j.code, 'useBy', c.use_by,
+                         'householdName', h.name, 'timeZone', h.time_zone, 'productName', p.name,
+                         'userId', c.user_id, 'email', u.email, 'emailReminders', np.email_reminders,
+                         'reminderHour', np.reminder_hour, 'daysBefore', np.days_before))
+                  -- By primary keys, not a join back to the rows above: only the claims with something to send.
+                  FROM claimed c
+                  JOIN jars j ON j.id = c.jar_id
+                  JOIN households h ON h.id = c.household_id
+                  JOIN products p ON p.id = j.product_id
+                  JOIN users u ON u.id = c.user_id
+                  LEFT JOIN notification_preferences np ON np.user_id = c.user_id
+                 WHERE c.sent_at IS NULL), '[]') AS "toSend"`,
     {
       replacements: {
         now,
         from: addDays(utcToday, -1),
         to: addDays(utcToday, 16),
+        ...partRange(part),
+        mailEnabled: ctx.mailer.enabled,
+        defaultEmail: DEFAULT_PREFERENCES.emailReminders,
         defaultDaysBefore: DEFAULT_PREFERENCES.daysBefore,
         defaultHour: DEFAULT_PREFERENCES.reminderHour,
         catchUpHours: CATCH_UP_HOURS,
@@ -235,47 +281,54 @@ async function useByCandidates(ctx: Notifiers, now: Date) {
       type: QueryTypes.SELECT,
     },
   );
+  return row!;
 }
 
-/**
- * Claims many use-by reminders in one statement, with the same rule as claim(): a new claim, or one whose sends
- * never finished and went stale. Returns the claims won, by "jarId userId kind".
- */
-async function claimMany(ctx: Notifiers, now: Date, rows: { candidate: Candidate; kind: 'soon' | 'today' }[]) {
-  const claimed = await ctx.sequelize.query<{ id: string; jar_id: string; user_id: string; kind: string }>(
-    `INSERT INTO reminder_deliveries (id, household_id, jar_id, user_id, kind, use_by, claimed_at, attempts, created_at, updated_at)
-     SELECT gen_random_uuid(), c.household_id, c.jar_id, c.user_id, c.kind, c.use_by, $1, 1, $1, $1
-       FROM unnest($2::uuid[], $3::uuid[], $4::uuid[], $5::text[], $6::date[]) AS c(household_id, jar_id, user_id, kind, use_by)
-     ON CONFLICT (jar_id, kind, user_id) DO UPDATE SET claimed_at = $1, attempts = reminder_deliveries.attempts + 1, updated_at = $1
-       WHERE reminder_deliveries.sent_at IS NULL
-         AND reminder_deliveries.claimed_at < $1::timestamptz - make_interval(mins => $7)
-         AND reminder_deliveries.attempts < $8
-     RETURNING id, jar_id, user_id, kind`,
-    {
-      bind: [
-        now,
-        rows.map((r) => r.candidate.householdId),
-        rows.map((r) => r.candidate.jarId),
-        rows.map((r) => r.candidate.userId),
-        rows.map((r) => r.kind),
-        rows.map((r) => r.candidate.useBy),
-        STALE_CLAIM_MINUTES,
-        MAX_ATTEMPTS,
-      ],
-      type: QueryTypes.SELECT,
-    },
-  );
-  return new Map(claimed.map((c) => [`${c.jar_id} ${c.user_id} ${c.kind}`, c.id]));
+/** Runs `work` over `items`, at most `limit` at a time; the first failure stops the rest and is thrown. */
+async function eachAtMost<T>(items: T[], limit: number, work: (item: T) => Promise<void>) {
+  let next = 0;
+  let failed = false;
+  const worker = async () => {
+    while (!failed && next < items.length) {
+      const item = items[next++]!;
+      try {
+        await work(item);
+      } catch (error) {
+        failed = true;
+        throw error;
+      }
+    }
+  };
+  await Promise.all(Array.from({ length: Math.min(limit, items.length) }, worker));
 }
 
-/** Marks many claims done at once: those with nothing to send (no push device, no e-mail for that person). */
-async function markSentWithNothingToSend(ctx: Notifiers, now: Date, ids: string[]) {
-  if (ids.length === 0) return;
-  await ctx.sequelize.query(
-    `UPDATE reminder_deliveries SET pushes_sent = 0, email_sent = false, problem = NULL, sent_at = $1, updated_at = $1
-      WHERE id = ANY($2::uuid[])`,
-    { bind: [now, ids] },
-  );
+/** Sends the use-by reminders one part's claim returned, up to SEND_CONCURRENCY at a time. */
+async function sendUseBy(ctx: Notifiers, now: Date, claimed: Claimed[], hooks: SweepHooks) {
+  if (claimed.length === 0) return;
+  const subscriptions = new Map<string, PushSubscription[]>();
+  for (const device of await subscriptionsOf([...new Set(claimed.map((r) => r.userId))])) {
+    subscriptions.set(device.userId, [...(subscriptions.get(device.userId) ?? []), device]);
+  }
+  const zones = new Map<string, string>();
+  await eachAtMost(claimed, SEND_CONCURRENCY, async (row) => {
+    await hooks.afterClaim?.(row.deliveryId);
+    let today = zones.get(row.timeZone);
+    if (!today) zones.set(row.timeZone, (today = todayIn(row.timeZone, now)));
+    const prefs: Preferences = {
+      ...DEFAULT_PREFERENCES,
+      ...(row.emailReminders === null ? {} : { emailReminders: row.emailReminders }),
+      ...(row.reminderHour === null ? {} : { reminderHour: row.reminderHour }),
+      ...(row.daysBefore === null ? {} : { daysBefore: row.daysBefore }),
+    };
+    await deliver(
+      ctx,
+      now,
+      row.deliveryId,
+      { userId: row.userId, email: row.email, prefs, subscriptions: subscriptions.get(row.userId) ?? [] },
+      row.householdName,
+      useByMessage({ id: row.jarId, code: row.code }, row.productName, row.kind, daysBetween(today, row.useBy)),
+    );
+  });
 }
 
 /**
@@ -284,64 +337,26 @@ async function markSentWithNothingToSend(ctx: Notifiers, now: Date, ids: string[
  * the claims in reminder_deliveries make each reminder go out once, whichever process wins it.
  */
 export async function sweepReminders(ctx: Notifiers, now = clock.now(), hooks: SweepHooks = {}) {
-  const due: { candidate: Candidate; kind: 'soon' | 'today'; daysLeft: number; prefs: Preferences }[] = [];
-  const zones = new Map<string, { today: string; hour: number }>();
-  for (const candidate of await useByCandidates(ctx, now)) {
-    let zone = zones.get(candidate.timeZone);
-    if (!zone)
-      zones.set(
-        candidate.timeZone,
-        (zone = { today: todayIn(candidate.timeZone, now), hour: hourIn(candidate.timeZone, now) }),
-      );
-    const prefs: Preferences = {
-      ...DEFAULT_PREFERENCES,
-      ...(candidate.emailReminders === null ? {} : { emailReminders: candidate.emailReminders }),
-      ...(candidate.reminderHour === null ? {} : { reminderHour: candidate.reminderHour }),
-      ...(candidate.daysBefore === null ? {} : { daysBefore: candidate.daysBefore }),
-    };
-    const daysLeft = daysBetween(zone.today, candidate.useBy);
-    const kind = dueReminder(daysLeft, zone.hour, prefs);
-    if (kind) due.push({ candidate, kind, daysLeft, prefs });
-  }
-
   let claimed = 0;
-  for (let at = 0; at < due.length; at += CLAIM_CHUNK) {
-    const chunk = due.slice(at, at + CLAIM_CHUNK);
-    const won = await claimMany(ctx, now, chunk);
-    if (won.size === 0) continue;
-    claimed += won.size;
-    const mine = chunk.flatMap((row) => {
-      const deliveryId = won.get(`${row.candidate.jarId} ${row.candidate.userId} ${row.kind}`);
-      return deliveryId ? [{ ...row, deliveryId }] : [];
-    });
-    const subscriptions = new Map<string, PushSubscription[]>();
-    for (const device of await subscriptionsOf([...new Set(mine.map((r) => r.candidate.userId))])) {
-      subscriptions.set(device.userId, [...(subscriptions.get(device.userId) ?? []), device]);
-    }
-    const nothingToSend: string[] = [];
-    for (const row of mine) {
-      await hooks.afterClaim?.(row.deliveryId);
-      const devices = subscriptions.get(row.candidate.userId) ?? [];
-      if (devices.length === 0 && !(row.prefs.emailReminders && ctx.mailer.enabled)) {
-        nothingToSend.push(row.deliveryId);
-        continue;
-      }
-      await deliver(
-        ctx,
-        now,
-        row.deliveryId,
-        { userId: row.candidate.userId, email: row.candidate.email, prefs: row.prefs, subscriptions: devices },
-        row.candidate.householdName,
-        useByMessage(
-          { id: row.candidate.jarId, code: row.candidate.code },
-          row.candidate.productName,
-          row.kind,
-          row.daysLeft,
-        ),
+  // Each process starts at its own part, so two sweeps started together rarely meet at a lock.
+  const first = Math.floor(Math.random() * USE_BY_PARTS);
+  // The parts this sweep takes stay locked (in a transaction that only holds the locks) until it is done, so
+  // another sweep running at the same time skips them, both the ones in progress and the ones already swept;
+  // each part's claims commit on their own, before their sends. A process that dies lets its locks go.
+  await ctx.sequelize.transaction(async (locks) => {
+    for (let i = 0; i < USE_BY_PARTS; i += 1) {
+      const part = (first + i) % USE_BY_PARTS;
+      const [lock] = await ctx.sequelize.query<{ held: boolean }>(
+        'SELECT pg_try_advisory_xact_lock(:key, :part) AS held',
+        { replacements: { key: USE_BY_LOCK, part }, type: QueryTypes.SELECT, transaction: locks },
       );
+      // Another sweep holds this part: it claims (and sends) all of it.
+      if (!lock.held) continue;
+      const done = await claimUseByPart(ctx, now, part);
+      claimed += done.claimed;
+      await sendUseBy(ctx, now, done.toSend, hooks);
     }
-    await markSentWithNothingToSend(ctx, now, nothingToSend);
-  }
+  });
   const seals = await sweepSealChecks(ctx, now, hooks);
   return { claimed: claimed + seals };
 }

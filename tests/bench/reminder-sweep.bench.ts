@@ -1,11 +1,13 @@
 // The reminder sweep over 100,000 opened jars in 10,000 households, run by two processes at the same moment
 // (each `server/jobs/sweep-once.ts`, as two app processes' job runners would): how long until both are done,
 // and whether each reminder was claimed exactly once (the delivery rows against the reminders due).
-// Run: npm run bench:sweep   (starts or reuses the project's PostgreSQL; BENCH_HOUSEHOLDS, BENCH_OPENED to change it)
+// Run: npm run bench:sweep   (starts or reuses the project's PostgreSQL; BENCH_HOUSEHOLDS, BENCH_OPENED to change it;
+// BENCH_DATABASE=<name> keeps the generated database under that name and reuses it on the next run, its deliveries emptied)
 // No mail server and no push devices: every reminder is claimed and recorded with nothing to send, so the figure is
 // the sweep's own work (the database), not an SMTP server's speed.
 import { spawn } from 'node:child_process';
 import os from 'node:os';
+import pg from 'pg';
 import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
@@ -18,7 +20,8 @@ const HOUSEHOLDS = Number(process.env.BENCH_HOUSEHOLDS ?? 10_000);
 const OPENED = Number(process.env.BENCH_OPENED ?? 100_000);
 const ZONE = 'America/New_York';
 const cluster = startCluster();
-const database = `larderly_sweep_${process.pid}`;
+const kept = process.env.BENCH_DATABASE;
+const database = kept ?? `larderly_sweep_${process.pid}`;
 
 function withoutMail(env: NodeJS.ProcessEnv) {
   return Object.fromEntries(Object.entries(env).filter(([name]) => !name.startsWith('SMTP_')));
@@ -42,15 +45,19 @@ function sweepProcess(url: string, at: Date) {
 }
 
 const loadBefore = os.loadavg()[0];
-await recreateDatabase(cluster, database);
 const url = cluster.url(database);
+const reuse = kept ? await hasCrowd(url) : false;
+if (!reuse) await recreateDatabase(cluster, database);
 const built = createApp(
   loadConfig({ ...process.env, NODE_ENV: 'test', DATABASE_URL: url, STATIC_DIR: 'no-static-in-bench' }),
 );
 try {
   await migrate(built.sequelize);
   const began = performance.now();
-  const counts = await generateCrowd(built.sequelize, HOUSEHOLDS);
+  if (reuse) await built.sequelize.query('TRUNCATE reminder_deliveries');
+  const counts = reuse
+    ? { households: await built.sequelize.models.Household!.count(), jars: await built.sequelize.models.Jar!.count() }
+    : await generateCrowd(built.sequelize, HOUSEHOLDS);
   const q = (sql: string, replacements: Record<string, unknown> = {}) =>
     built.sequelize.transaction(async (transaction) => {
       // Bulk set-up statements on a busy machine may outlast the app's 15 s limit for a request.
@@ -69,6 +76,7 @@ try {
   const hour = Number(
     new Intl.DateTimeFormat('en-US', { timeZone: ZONE, hour: 'numeric', hourCycle: 'h23' }).format(now),
   );
+  await q('DELETE FROM notification_preferences');
   await q(
     `INSERT INTO notification_preferences (user_id, email_reminders, weekly_digest, reminder_hour, days_before, created_at, updated_at)
      SELECT id, true, false, :hour, 14, now(), now() FROM users`,
@@ -81,7 +89,7 @@ try {
       WHERE j.state = 'opened' AND j.use_by BETWEEN (:now::timestamptz AT TIME ZONE :zone)::date AND (:now::timestamptz AT TIME ZONE :zone)::date + 14`,
     { now, zone: ZONE },
   );
-  const made = `${counts.households} households, ${counts.jars} jars, ${opened.toLocaleString('en-US')} opened, made in ${((performance.now() - began) / 1000).toFixed(1)} s`;
+  const made = `${counts.households} households, ${counts.jars} jars, ${opened.toLocaleString('en-US')} opened, ${reuse ? 'reused' : 'made'} in ${((performance.now() - began) / 1000).toFixed(1)} s`;
 
   const wall = performance.now();
   const [one, two] = await Promise.all([sweepProcess(url, now), sweepProcess(url, now)]);
@@ -112,6 +120,20 @@ try {
   if (!once) process.exitCode = 1;
 } finally {
   await built.close();
-  await dropDatabase(cluster, database).catch(() => {});
+  if (!kept) await dropDatabase(cluster, database).catch(() => {});
   cluster.stop();
+}
+
+/** Whether a kept database already holds a generated crowd. */
+async function hasCrowd(databaseUrl: string) {
+  const client = new pg.Client({ connectionString: databaseUrl });
+  try {
+    await client.connect();
+    const { rows } = await client.query("SELECT to_regclass('households') IS NOT NULL AS made");
+    return rows[0].made && (await client.query('SELECT count(*)::int AS n FROM households')).rows[0].n > 0;
+  } catch {
+    return false;
+  } finally {
+    await client.end().catch(() => {});
+  }
 }

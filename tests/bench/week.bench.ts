@@ -1,7 +1,8 @@
 // GET /week under load beside a bare Express JSON route, and the queries one request makes.
-// Run: node --import tsx tests/bench/week.bench.ts   (starts or reuses the project's PostgreSQL; ports 3201-3202, or BENCH_PORT and the one above)
+// Run: node --import tsx tests/bench/week.bench.ts   (starts or reuses the project's PostgreSQL; port 3201 or BENCH_PORT)
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
+import { readFileSync } from 'node:fs';
 // @ts-expect-error autocannon ships no type declarations
 import autocannon from 'autocannon';
 import pg from 'pg';
@@ -17,9 +18,8 @@ import { BENCH_EMAIL, BENCH_PASSWORD, generateHousehold } from './week-household
 
 const CONNECTIONS = 32;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
-// BENCH_PORT moves both ports (the app's and the bare route's, one above), so parallel runs on one machine never collide.
+// BENCH_PORT moves the app's port, so parallel runs on one machine never collide; the bare route takes a free one.
 const APP_PORT = Number(process.env.BENCH_PORT ?? 3201);
-const BARE_PORT = APP_PORT + 1;
 
 const cluster = startCluster();
 const database = `larderly_bench_${process.pid}`;
@@ -64,7 +64,9 @@ try {
     `\nqueries per GET /week: ${texts.length / rounds} (${rounds} requests, ${texts.length} queries); one request's:`,
   );
   for (const sql of texts.slice(0, texts.length / rounds)) console.log(`  ${sql}`);
-  const payload = (await agent.get(path)).body;
+  const answered = await agent.get(path);
+  const payload = answered.body;
+  console.log(`answer: ${answered.text.length} bytes of JSON`);
   console.log(
     `payload: ${payload.days.reduce((n: number, d: { entries: unknown[] }) => n + d.entries.length, 0)} entries, ${payload.allocation.assignments.length} assignments, ${payload.allocation.openings.length} openings, ${payload.allocation.warnings.length} warnings`,
   );
@@ -94,11 +96,14 @@ try {
     [
       '--input-type=module',
       '-e',
-      `import express from 'express'; const app = express(); app.get('/bare', (_req, res) => res.json({ ok: true, start: '${start}' })); app.listen(${BARE_PORT}, '127.0.0.1');`,
+      `import express from 'express'; const app = express(); app.get('/bare', (_req, res) => res.json({ ok: true, start: '${start}' })); const s = app.listen(0, '127.0.0.1', () => console.log(s.address().port));`,
     ],
-    { stdio: ['ignore', 'inherit', 'inherit'] },
+    { stdio: ['ignore', 'pipe', 'inherit'] },
   );
   children.push(server, bare);
+  const BARE_PORT = await new Promise<number>((resolve) =>
+    bare.stdout!.once('data', (chunk) => resolve(Number(String(chunk).trim()))),
+  );
   await waitFor(`http://127.0.0.1:${APP_PORT}/api/health`);
   await waitFor(`http://127.0.0.1:${BARE_PORT}/bare`);
 
@@ -117,10 +122,14 @@ try {
 
   const os = await import('node:os');
   const loadBefore = os.loadavg()[0];
-  const week = await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie });
+  const week = await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie }, server.pid);
   // The same session and household guard with almost no work behind them: what any household route costs here.
-  const guarded = await load(`http://127.0.0.1:${APP_PORT}/api/households/${household.id}`, { cookie: serverCookie });
-  const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {});
+  const guarded = await load(
+    `http://127.0.0.1:${APP_PORT}/api/households/${household.id}`,
+    { cookie: serverCookie },
+    server.pid,
+  );
+  const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {}, bare.pid);
   console.log(
     `\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; machine load average before the run: ${loadBefore.toFixed(1)}`,
   );
@@ -129,6 +138,9 @@ try {
     'GET /households/:hid (same session and guard)': guarded,
     'bare Express JSON': base,
   });
+  console.log(
+    `server CPU per request, against bare Express's: week ${(week.serverCpuMsPerRequest / base.serverCpuMsPerRequest).toFixed(1)}x, guard only ${(guarded.serverCpuMsPerRequest / base.serverCpuMsPerRequest).toFixed(1)}x (PostgreSQL's own CPU not counted)`,
+  );
   console.log(
     `throughput ratio (week / bare): ${(week.requestsPerSecond / base.requestsPerSecond).toFixed(3)}; aim: p99 < 25 ms and ratio >= 0.333`,
   );
@@ -149,8 +161,21 @@ try {
   cluster.stop();
 }
 
-async function load(url: string, headers: Record<string, string>) {
+/** CPU time a process has used (user and system, ms), from /proc: steadier than throughput on a shared machine. */
+function cpuMsOf(pid: number | undefined) {
+  if (!pid) return NaN;
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100; // utime and stime, in clock ticks of 1/100 s
+  } catch {
+    return NaN;
+  }
+}
+
+async function load(url: string, headers: Record<string, string>, pid?: number) {
+  const cpuBefore = cpuMsOf(pid);
   const result = await autocannon({ url, connections: CONNECTIONS, duration: SECONDS, headers });
+  const cpuPerRequest = (cpuMsOf(pid) - cpuBefore) / result.requests.total;
   if (result.non2xx > 0 || result.errors > 0)
     console.log(`  ${url}: ${result.non2xx} non-2xx, ${result.errors} errors`);
   return {
@@ -158,6 +183,7 @@ async function load(url: string, headers: Record<string, string>) {
     p99Ms: result.latency.p99,
     requestsPerSecond: result.requests.average,
     non2xx: result.non2xx,
+    serverCpuMsPerRequest: Number(cpuPerRequest.toFixed(3)),
   };
 }
 
