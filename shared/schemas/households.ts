@@ -1,12 +1,12 @@
 import { z } from 'zod';
 import { LIMITS, limitWords } from './limits';
 import { PROCESSING_METHODS, type Method } from '../domain';
+import { UNIT_SYSTEMS, type UnitSystem } from '../domain/units';
 import { ROLES, type Role } from '../roles';
 import { isTimeZone } from '../time-zones';
 import { householdName } from './auth';
 
-export const UNIT_SYSTEMS = ['us', 'metric'] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+export { UNIT_SYSTEMS, type UnitSystem };
 
 export const householdPatch = z
   .object({
