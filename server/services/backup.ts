@@ -174,7 +174,7 @@ export async function exportHousehold(sequelize: Sequelize, household: Household
       timeZone: household.timeZone,
       bestQualityMonths: household.bestQualityMonths,
       weekStartsOn: household.weekStartsOn,
-      cannerCapacityJars: household.cannerCapacityJars,
+      canners: household.canners,
       defaultMethod: household.defaultMethod,
       mealTimes: household.mealTimes,
     },
@@ -200,7 +200,15 @@ export async function importHousehold(
     throw new AppError(400, 'invalid_input', 'The time zone in the file is not one this server knows.');
   try {
     return await sequelize.transaction(async (transaction) => {
-      const household = await Household.create({ ...backup.household }, { transaction });
+      const { cannerCapacityJars, canners, ...settings } = backup.household;
+      // Older backups give one capacity: it becomes the default canner's.
+      const household = await Household.create(
+        {
+          ...settings,
+          canners: canners ?? [{ method: settings.defaultMethod, capacityJars: cannerCapacityJars ?? 7 }],
+        },
+        { transaction },
+      );
       await Membership.create({ householdId: household.id, userId: importerId, role: 'keeper' }, { transaction });
       const takenCodes = await codesInUse(
         sequelize,

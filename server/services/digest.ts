@@ -29,7 +29,7 @@ export async function buildDigest(household: Household, today: string, origin: s
       order: [['useBy', 'ASC']],
     }),
     allocatePlan(household.id, today, weekEnd, products),
-    digestRestockLines(household.id, today),
+    digestRestockLines(household.id, today, household.unitSystem),
   ]);
   const jarProduct = new Map(
     (await Jar.findAll({ where: { id: (plan?.allocation.openings ?? []).map((o) => String(o.jarId)) } })).map((j) => [

@@ -99,7 +99,7 @@ export async function todayView(household: Household, userId: string): Promise<T
     sealChecksOf(household),
   ]);
   const fridge = fridgeCountdowns(snapshot);
-  const restock = await restockFromSnapshot(snapshot);
+  const restock = await restockFromSnapshot(snapshot, household.unitSystem);
   return {
     today,
     ...todaysUse(snapshot),

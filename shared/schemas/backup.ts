@@ -10,7 +10,7 @@ import {
 } from '../domain';
 import { householdName } from './auth';
 import { mealTimesBody } from './calendar';
-import { UNIT_SYSTEMS } from './households';
+import { canner, UNIT_SYSTEMS } from './households';
 import { ingredientInput } from './recipes';
 import { PRODUCT_COLOURS } from '../words';
 import { SLOTS } from './week';
@@ -147,6 +147,7 @@ const shoppingItem = z.object({
     .min(0)
     .max(LIMITS.ingredientAmount * 100),
   unit: z.enum(INGREDIENT_UNITS),
+  shown: z.object({ amount: z.number().min(0), unit: z.enum(INGREDIENT_UNITS) }).optional(),
   text: text(200),
 });
 /** A restock to-do's batch plan, every field as the server writes it: the to-do page draws each of them. */
@@ -190,6 +191,7 @@ const batchPlan = z.object({
   equipment: z.object({
     jars: int(1, LIMITS.jarsPerBatch),
     newLids: int(0, LIMITS.jarsPerBatch),
+    cannerMethod: z.enum(PROCESSING_METHODS).optional(),
     cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
     cannerLoads: z.array(int(0, LIMITS.cannerCapacityJars)).max(LIMITS.jarsPerBatch),
   }),
@@ -231,7 +233,9 @@ export const householdBackup = z
       timeZone: text(64),
       bestQualityMonths: int(1, LIMITS.bestQualityMonths),
       weekStartsOn: int(0, 6),
-      cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
+      /** Older backups have one capacity instead of a list of canners. */
+      cannerCapacityJars: int(1, LIMITS.cannerCapacityJars).optional(),
+      canners: z.array(canner).min(1).max(PROCESSING_METHODS.length).optional(),
       defaultMethod: z.enum(PROCESSING_METHODS),
       /** Added with the household calendar; older backups have none and get the default times. */
       mealTimes: mealTimesBody.optional(),

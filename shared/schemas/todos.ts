@@ -74,7 +74,9 @@ export interface ShoppingItem {
   role: IngredientRole;
   amount: number;
   unit: IngredientUnit;
-  /** Written the way a cook measures it, e.g. "2 1/4 cups". */
+  /** The same amount in the household's units, as the text writes it (older plans have none until read again). */
+  shown?: { amount: number; unit: IngredientUnit };
+  /** Written the way a cook measures it, in the household's units, e.g. "2 1/4 cups" or "530 mL". */
   text: string;
 }
 
@@ -93,7 +95,14 @@ export interface BatchPlan {
   headspaceInches: number;
   scaled: ScaledRecipe;
   processing: ProcessingPlan;
-  equipment: { jars: number; newLids: number; cannerCapacityJars: number; cannerLoads: number[] };
+  equipment: {
+    jars: number;
+    newLids: number;
+    /** The canner the loads are counted in (older plans have none: the recipe's method). */
+    cannerMethod?: Method;
+    cannerCapacityJars: number;
+    cannerLoads: number[];
+  };
   shopping: { produce: ShoppingItem[]; pantry: ShoppingItem[] };
   targetOn: string;
   targetWhy: string;

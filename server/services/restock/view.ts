@@ -16,14 +16,21 @@ import type {
   RestockSuggestionView,
   RestockView,
 } from '../../../shared/schemas/restock';
+import type { UnitSystem } from '../../../shared/domain';
 import { Household, Recipe, Todo, type Product } from '../../db/models';
 import { todayIn } from '../clock';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
-function whyInWords(today: string, suggestion: RestockSuggestion, forecast: RestockForecast, product: Product): string {
+function whyInWords(
+  today: string,
+  suggestion: RestockSuggestion,
+  forecast: RestockForecast,
+  product: Product,
+  system: UnitSystem,
+): string {
   if (suggestion.reason === 'runs-out-soon') {
     if (forecast.jarsOnHand === 0) return 'None left on the shelf or in the fridge.';
-    return `At about ${tbspPerDay(forecast.dailyTbsp)}, the last jar is empty by ${dateWords(suggestion.runOutOn!, yearOf(today))}.`;
+    return `At about ${tbspPerDay(forecast.dailyTbsp, system)}, the last jar is empty by ${dateWords(suggestion.runOutOn!, yearOf(today))}.`;
   }
   return `${count(forecast.sealedJars, 'sealed jar')} left; you keep at least ${product.minJars}.`;
 }
@@ -58,10 +65,10 @@ async function planningState(householdId: string) {
 export async function restockView(household: Household): Promise<RestockView> {
   const today = todayIn(household.timeZone);
   const snapshot = await stockSnapshot(household.id, today);
-  return restockFromSnapshot(snapshot);
+  return restockFromSnapshot(snapshot, household.unitSystem);
 }
 
-export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<RestockView> {
+export async function restockFromSnapshot(snapshot: StockSnapshot, system: UnitSystem = 'us'): Promise<RestockView> {
   const { products, today } = snapshot;
   const { withRecipe, openTodo } = await planningState(snapshot.householdId);
   const result = restockSuggestions({
@@ -90,7 +97,7 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
       ...suggestion,
       productId: product.id,
       productName: product.name,
-      why: whyInWords(today, suggestion, forecastOf.get(product.id)!, product),
+      why: whyInWords(today, suggestion, forecastOf.get(product.id)!, product, system),
       jarSize: product.jarSize,
       hasRecipe: withRecipe.has(product.id),
       openTodoId: openTodo.get(product.id) ?? null,
@@ -134,5 +141,5 @@ export async function restockFor(householdId: string, today?: string): Promise<R
   const household = await Household.findByPk(householdId);
   if (!household) return [];
   const snapshot = await stockSnapshot(household.id, today ?? todayIn(household.timeZone));
-  return (await restockFromSnapshot(snapshot)).suggestions;
+  return (await restockFromSnapshot(snapshot, household.unitSystem)).suggestions;
 }

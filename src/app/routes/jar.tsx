@@ -9,12 +9,15 @@ import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
-import { dateWords, jarSizeWords } from '@shared/words';
+import { dateWords, } from '@shared/words';
 import { ReminderOffer } from '@/features/notifications/components/reminder-offer';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** What a label's QR code opens: the jar, found by its code in whichever household of yours holds it. */
+
 export function JarRoute() {
+  const units = useUnits();
   const { code = '' } = useParams();
   const found = useJarByCode(code);
   const jar = found.data?.jar;
@@ -45,7 +48,7 @@ export function JarRoute() {
             <p className="font-mono text-lg font-bold tracking-wider text-ink-muted">{jar.code}</p>
             <h1 className="text-3xl">{jar.productName}</h1>
             <p className="text-ink-muted">
-              {jarSizeWords(jar.jarSize)} jar, canned {dateWords(jar.cannedOn)}
+              {units.jarSize(jar.jarSize)} jar, canned {dateWords(jar.cannedOn)}
             </p>
           </div>
           <p className="flex flex-wrap items-center gap-2">

@@ -1,16 +1,12 @@
 import { Link } from 'react-router-dom';
 import type { BatchDetail } from '@shared/schemas/batches';
 import {
-  altitudeWords,
   clockWords,
   count,
   dateWords,
-  headspaceWords,
-  jarSizeWords,
   METHOD_NAMES,
   minutesWords,
-  pressureWords,
-} from '@shared/words';
+  } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';
@@ -18,6 +14,7 @@ import { SealCheckPanel } from './seal-check-panel';
 import { JarActions } from './jar-actions';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 const EVENT_WORDS: Record<string, string> = {
   filled: 'filled',
@@ -31,9 +28,10 @@ const EVENT_WORDS: Record<string, string> = {
 };
 
 export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
+  const units = useUnits();
   const processing =
     batch.pressurePsi !== null
-      ? `${minutesWords(batch.minutes!)} at ${pressureWords(batch.pressurePsi)}`
+      ? `${minutesWords(batch.minutes!)} at ${units.pressure(batch.pressurePsi)}`
       : batch.minutes !== null
         ? minutesWords(batch.minutes)
         : 'time not recorded';
@@ -47,19 +45,19 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             <dd className="tabular">{dateWords(batch.cannedOn)}</dd>
             <dt className="text-ink-muted">Jars</dt>
             <dd className="tabular">
-              {batch.jarsFilled} {jarSizeWords(batch.jarSize)} filled,{' '}
+              {batch.jarsFilled} {units.jarSize(batch.jarSize)} filled,{' '}
               {batch.sealCheck
                 ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check`
                 : `${batch.jarsSealed} sealed`}
             </dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
-              {METHOD_NAMES[batch.method]}, {processing} at {altitudeWords(batch.altitudeFt)}
+              {METHOD_NAMES[batch.method]}, {processing} at {units.altitude(batch.altitudeFt)}
             </dd>
             {batch.headspaceInches !== null && (
               <>
                 <dt className="text-ink-muted">Headspace</dt>
-                <dd>{headspaceWords(batch.headspaceInches)}</dd>
+                <dd>{units.headspace(batch.headspaceInches)}</dd>
               </>
             )}
             <dt className="text-ink-muted">Recipe</dt>
@@ -85,8 +83,8 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                     {p.number === 1 ? 'First' : 'Reprocess'}: {count(p.jars, 'jar')},{' '}
                     {clockWords(p.processedAt, batch.timeZone)}, {METHOD_NAMES[p.method]}
                     {p.minutes !== null ? `, ${minutesWords(p.minutes)}` : ''}
-                    {p.pressurePsi !== null ? ` at ${pressureWords(p.pressurePsi)}` : ''} at{' '}
-                    {altitudeWords(p.altitudeFt)}
+                    {p.pressurePsi !== null ? ` at ${units.pressure(p.pressurePsi)}` : ''} at{' '}
+                    {units.altitude(p.altitudeFt)}
                     {p.number > 1 ? ', new lids' : ''}
                     {p.who ? ` by ${p.who}` : ''}
                   </li>

@@ -6,7 +6,7 @@ import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
-import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
+import { METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
 import { FormFooter } from '@/components/ui/form-footer';
 import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -16,6 +16,7 @@ import { useCreateBatch } from '../api/create-batch';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** The household's today, as YYYY-MM-DD: the canning day the server checks against. */
 
@@ -23,6 +24,7 @@ import { paths } from '@shared/paths';
  * The day's work in order: what, which tested recipe, when, which jars, how many sealed, which canner.
  * The draft lives in the address (the pre-fill parameters), so a reload or a shared link keeps it.
  */
+
 export function NewBatchForm({
   household,
   products,
@@ -32,6 +34,7 @@ export function NewBatchForm({
   products: ProductView[];
   recipes: RecipeView[];
 }) {
+  const units = useUnits();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const create = useCreateBatch(household.id);
@@ -154,7 +157,7 @@ export function NewBatchForm({
           >
             {JAR_SIZES.map((size) => (
               <option key={size} value={size}>
-                {jarSizeWords(size)}
+                {units.jarSize(size)}
                 {recipe && !testedSizes.includes(size) ? ' (no tested time)' : ''}
               </option>
             ))}
@@ -224,7 +227,7 @@ export function NewBatchForm({
         ) : (
           <Notice tone="info" title="The processing plan appears here">
             Choose the product and its tested recipe; the plan is worked out for your altitude,{' '}
-            {household.altitudeFt.toLocaleString('en-US')} ft.
+            {units.altitude(household.altitudeFt)}.
           </Notice>
         )}
       </div>

@@ -5,7 +5,6 @@ import type { ProductView } from '@shared/schemas/products';
 import {
   HEAT_LEVELS,
   heatWords,
-  jarSizeWords,
   PRODUCT_COLOUR_NAMES,
   PRODUCT_COLOURS,
   PRODUCT_KIND_NAMES,
@@ -20,10 +19,12 @@ import { useSaveProduct } from '../api/save-product';
 import { numberFrom } from '../number-from';
 import { ColourDot } from './colour-dot';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 export function ProductForm({ hid, product }: { hid: string; product?: ProductView }) {
+  const units = useUnits();
   const save = useSaveProduct(hid, product?.id);
   const navigate = useNavigate();
   const [form, setForm] = useState({
@@ -124,7 +125,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
       >
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
-            {jarSizeWords(size)}
+            {units.jarSize(size)}
           </option>
         ))}
       </SelectField>

@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, heatWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { DATE_NAMES, dateWords, heatWords, PRODUCT_KIND_NAMES } from '@shared/words';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 export function ShelfCards({
   hid,
@@ -18,6 +19,7 @@ export function ShelfCards({
   canHandleJars: boolean;
   canCook: boolean;
 }) {
+  const units = useUnits();
   const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});
   return (
     <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
@@ -70,7 +72,7 @@ export function ShelfCards({
                     className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken"
                   >
                     <span className="tabular">
-                      {dateWords(row.cannedOn)} · {jarSizeWords(row.jarSize)}
+                      {dateWords(row.cannedOn)} · {units.jarSize(row.jarSize)}
                     </span>
                     <span className="tabular font-bold">{row.sealed}</span>
                   </Link>

@@ -1,27 +1,24 @@
 import { Link } from 'react-router-dom';
 import {
-  altitudeWords,
   BEFORE_YOU_START,
   count,
   dateWords,
-  headspaceWords,
   inCanner,
-  JAR_SIZE_NAMES,
   minutesWords,
-  pressureWords,
-} from '@shared/words';
+  } from '@shared/words';
 import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
+import { useUnits, type Units } from '@/lib/units';
 
-function processingWords(plan: BatchPlan): string {
+function processingWords(plan: BatchPlan, units: Units): string {
   const { processing } = plan;
-  const altitude = altitudeWords(plan.altitudeFt);
+  const altitude = units.altitude(plan.altitudeFt);
   if (processing.pressurePsi !== null) {
-    return `${minutesWords(processing.minutes!)} at ${pressureWords(processing.pressurePsi)} ${inCanner(plan.method)}, for ${altitude}.`;
+    return `${minutesWords(processing.minutes!)} at ${units.pressure(processing.pressurePsi)} ${inCanner(plan.method)}, for ${altitude}.`;
   }
   const added = processing.altitudeAddMinutes
-    ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-1,000 ft plus ${processing.altitudeAddMinutes} for the altitude)`
+    ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-${units.altitude(1000)} plus ${processing.altitudeAddMinutes} for the altitude)`
     : '';
   return `${minutesWords(processing.minutes!)} ${inCanner(plan.method)} at ${altitude}${added}.`;
 }
@@ -52,7 +49,8 @@ export function BatchPlanView({
   plan: BatchPlan;
   canRecord: boolean;
 }) {
-  const size = JAR_SIZE_NAMES[plan.jarSize];
+  const units = useUnits();
+  const size = units.jarSize(plan.jarSize);
   const recordHref = paths.newBatch(hid, {
     productId: plan.productId,
     recipeId: plan.recipeId,
@@ -127,7 +125,7 @@ export function BatchPlanView({
           Processing
         </h3>
         {plan.processing.allowed ? (
-          <p className="font-bold">{processingWords(plan)}</p>
+          <p className="font-bold">{processingWords(plan, units)}</p>
         ) : (
           <Notice tone="past" title="Not allowed: no tested process for this plan now" role="alert">
             <ul className="list-disc pl-5">
@@ -137,7 +135,7 @@ export function BatchPlanView({
             </ul>
           </Notice>
         )}
-        <p>Headspace: {headspaceWords(plan.headspaceInches)}.</p>
+        <p>Headspace: {units.headspace(plan.headspaceInches)}.</p>
         <h4 className="mt-2 font-bold">After processing</h4>
         <ol className="list-decimal pl-5">
           {plan.processing.afterProcessing.map((step) => (
