@@ -41,8 +41,8 @@ export async function updateHousehold(household: Household, patch: HouseholdPatc
       : [...canners, { method: defaultMethod, capacityJars: cannerCapacityJars }];
   }
   if (!cannerFor(canners, defaultMethod)) {
-    const message = `Add a ${METHOD_NAMES[defaultMethod].toLowerCase()} to the household’s canners first, or choose one it has as the default.`;
-    throw new AppError(422, 'invalid_input', message, { defaultMethod: message });
+    const message = `Add the ${METHOD_NAMES[defaultMethod].toLowerCase()} to the household’s canners first, or choose one it has as the default.`;
+    throw new AppError(400, 'invalid_input', message, { defaultMethod: message });
   }
   await household.update({
     ...settings,

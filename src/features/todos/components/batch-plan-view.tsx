@@ -1,11 +1,5 @@
 import { Link } from 'react-router-dom';
-import {
-  BEFORE_YOU_START,
-  count,
-  dateWords,
-  inCanner,
-  minutesWords,
-  } from '@shared/words';
+import { BEFORE_YOU_START, count, dateWords, inCanner, METHOD_NAMES, minutesWords } from '@shared/words';
 import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
@@ -85,7 +79,8 @@ export function BatchPlanView({
           <li>{count(plan.equipment.newLids, 'new lid')}: lids seal only once; bands can be reused</li>
           <li>
             {count(plan.equipment.cannerLoads.length, 'canner load')} ({plan.equipment.cannerLoads.join(' + ')} jars;
-            your canner holds {plan.equipment.cannerCapacityJars})
+            your {METHOD_NAMES[plan.equipment.cannerMethod ?? plan.method].toLowerCase()} holds{' '}
+            {plan.equipment.cannerCapacityJars})
           </li>
         </ul>
       </section>
