@@ -60,7 +60,11 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
         timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
         bestQualityMonths: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 12 },
         weekStartsOn: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
-        canners: { type: DataTypes.JSONB, allowNull: false, defaultValue: [{ method: 'boiling-water', capacityJars: 7 }] },
+        canners: {
+          type: DataTypes.JSONB,
+          allowNull: false,
+          defaultValue: [{ method: 'boiling-water', capacityJars: 7 }],
+        },
         defaultMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
         altitudeConfirmedAt: { type: DataTypes.DATE, allowNull: true },
         mealTimes: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_MEAL_TIMES },

@@ -10,7 +10,14 @@ import {
   type RestockReason,
   type ScaledIngredient,
 } from '../../../shared/domain';
-import { altitudeWords, amountWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
+import {
+  altitudeWords,
+  amountWords,
+  dateWords,
+  METHOD_NAMES,
+  minutesWords,
+  pressureWords,
+} from '../../../shared/words';
 import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';

@@ -9,7 +9,7 @@ import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
-import { dateWords, } from '@shared/words';
+import { dateWords } from '@shared/words';
 import { ReminderOffer } from '@/features/notifications/components/reminder-offer';
 import { paths } from '@shared/paths';
 import { useUnits } from '@/lib/units';

@@ -1,5 +1,5 @@
 import type { RestockForecastView } from '@shared/schemas/restock';
-import { count, dateWords, } from '@shared/words';
+import { count, dateWords } from '@shared/words';
 import { LazyUseChart } from './lazy-use-chart';
 import { RestockSettings } from './restock-settings';
 import { useUnits, type Units } from '@/lib/units';

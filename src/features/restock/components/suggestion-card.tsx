@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
-import { dateWords, } from '@shared/words';
+import { dateWords } from '@shared/words';
 import { AddToList } from './add-to-list';
 import { paths } from '@shared/paths';
 import { useUnits } from '@/lib/units';

@@ -1,12 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { BatchDetail } from '@shared/schemas/batches';
-import {
-  clockWords,
-  count,
-  dateWords,
-  METHOD_NAMES,
-  minutesWords,
-  } from '@shared/words';
+import { clockWords, count, dateWords, METHOD_NAMES, minutesWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { BatchView } from '@shared/schemas/batches';
-import { dateWords, METHOD_NAMES, minutesWords, } from '@shared/words';
+import { dateWords, METHOD_NAMES, minutesWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { paths } from '@shared/paths';
 import { useUnits } from '@/lib/units';

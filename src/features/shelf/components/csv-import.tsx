@@ -3,7 +3,7 @@ import type { ImportProblem, ImportRow } from '@shared/schemas/batches';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCommitImport, usePreviewImport } from '../api/import-batches';
-import { dateWords, } from '@shared/words';
+import { dateWords } from '@shared/words';
 import { CSV_IMPORT_COLUMNS, csvChoiceList } from '@shared/words/csv';
 import { useUnits } from '@/lib/units';
 

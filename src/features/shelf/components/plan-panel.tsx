@@ -1,5 +1,5 @@
 import type { Method, ProcessingPlan } from '@shared/domain';
-import { BEFORE_YOU_START, METHOD_NAMES, minutesWords, } from '@shared/words';
+import { BEFORE_YOU_START, METHOD_NAMES, minutesWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { useUnits, type Units } from '@/lib/units';
 

@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { recipeProcessingPlan } from '@shared/processing-plan';
 import { JAR_SIZES, scaleRecipe, type JarSize } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { minutesWords, } from '@shared/words';
+import { minutesWords } from '@shared/words';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { numberFrom } from '../number-from';

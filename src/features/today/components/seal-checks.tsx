@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { SealCheckView } from '@shared/schemas/batches';
-import { clockWords, count, } from '@shared/words';
+import { clockWords, count } from '@shared/words';
 import { sealCheckTimes } from '@/features/shelf';
 import { paths } from '@shared/paths';
 import { useUnits } from '@/lib/units';

@@ -2,7 +2,7 @@ import type { PairingView, PlanEntryView } from '@shared/schemas/week';
 import { jarCode, productName, useBoard } from '../board-context';
 import { isPending } from '../week-edits';
 import { NumberCommit } from './number-commit';
-import { heatWords, } from '@shared/words';
+import { heatWords } from '@shared/words';
 import { ReasonToggle } from '@/components/ui/reason-toggle';
 import { useUnits, type Units } from '@/lib/units';
 
