@@ -92,7 +92,7 @@ export const GRAMS_PER_POUND = 453.59237;
 /** NIST SP 811, Appendix B: 1 ounce (avoirdupois) = 1/16 lb = 28.349523125 g exactly. */
 export const GRAMS_PER_OUNCE = GRAMS_PER_POUND / 16;
 /** NIST SP 811, Appendix B: 1 foot = 0.3048 m exactly. */
-export const METRES_PER_FOOT = 0.3048;
+export const METERS_PER_FOOT = 0.3048;
 /** NIST SP 811, Appendix B: 1 inch = 25.4 mm exactly. */
 export const MM_PER_INCH = 25.4;
 /** NIST SP 811, Appendix B: 1 pound-force per square inch = 6.894757 kPa. */
@@ -179,12 +179,12 @@ export function amountIn(
   return ounces >= 16 ? { value: ounces / 16, unit: 'lb' } : { value: ounces, unit: 'oz' };
 }
 
-export function feetToMetres(feet: number): number {
-  return requireNumber(feet, 'feet') * METRES_PER_FOOT;
+export function feetToMeters(feet: number): number {
+  return requireNumber(feet, 'feet') * METERS_PER_FOOT;
 }
 
-export function metresToFeet(metres: number): number {
-  return requireNumber(metres, 'metres') / METRES_PER_FOOT;
+export function metersToFeet(meters: number): number {
+  return requireNumber(meters, 'meters') / METERS_PER_FOOT;
 }
 
 export function psiToKpa(psi: number): number {

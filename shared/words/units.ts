@@ -5,9 +5,9 @@
 import { formatKitchenAmount, roundKitchenAmount } from '../domain/kitchen-amounts';
 import {
   amountIn,
-  feetToMetres,
+  feetToMeters,
   jarCapacityMl,
-  metresToFeet,
+  metersToFeet,
   ML_PER_US_TBSP,
   MM_PER_INCH,
   psiToKpa,
@@ -50,9 +50,9 @@ export function headspaceWords(inches: number, system: UnitSystem = 'us'): strin
   return `${number} ${rounded > 1 ? 'inches' : 'inch'}`;
 }
 
-/** "2,350 ft"; metric to the whole metre: "716 m". */
+/** "2,350 ft"; metric to the whole meter: "716 m". */
 export function altitudeWords(feet: number, system: UnitSystem = 'us'): string {
-  if (system === 'metric') return `${Math.round(feetToMetres(feet)).toLocaleString('en-US')} m`;
+  if (system === 'metric') return `${Math.round(feetToMeters(feet)).toLocaleString('en-US')} m`;
   return `${feet.toLocaleString('en-US')} ft`;
 }
 
@@ -61,13 +61,13 @@ export function altitudeUnitWords(system: UnitSystem): string {
   return system === 'metric' ? 'meters' : 'feet';
 }
 
-/** The altitude field's value as a person edits it: whole feet, or whole metres. */
+/** The altitude field's value as a person edits it: whole feet, or whole meters. */
 export function altitudeInputValue(feet: number, system: UnitSystem): string {
-  return String(system === 'metric' ? Math.round(feetToMetres(feet)) : feet);
+  return String(system === 'metric' ? Math.round(feetToMeters(feet)) : feet);
 }
 
 /**
- * The one parser of a typed altitude: "2,350" (feet) or "716" / "716 m" (metres) becomes whole feet, the unit the
+ * The one parser of a typed altitude: "2,350" (feet) or "716" / "716 m" (meters) becomes whole feet, the unit the
  * processing tables use; null when it is not a number.
  */
 export function parseAltitude(text: string, system: UnitSystem): number | null {
@@ -77,7 +77,7 @@ export function parseAltitude(text: string, system: UnitSystem): number | null {
     .replace(/\s*(ft|feet|m|meters|metres)$/i, '');
   if (cleaned === '' || !/^-?\d+(\.\d+)?$/.test(cleaned)) return null;
   const value = Number(cleaned);
-  return Math.round(system === 'metric' ? metresToFeet(value) : value);
+  return Math.round(system === 'metric' ? metersToFeet(value) : value);
 }
 
 /** An ingredient amount in the household's units: "1 1/2 cups" or "355 mL", "2 lb" or "910 g". */

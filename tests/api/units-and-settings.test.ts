@@ -88,7 +88,7 @@ describe('the same batch plan in US customary and in metric', () => {
     for (const item of items(us)) expect(['ml', 'l', 'g', 'kg']).not.toContain(item.shown!.unit);
   });
 
-  it('says a changed altitude in metres in metric, and names the jar with its millilitres in a new to-do', async () => {
+  it('says a changed altitude in meters in metric, and names the jar with its milliliters in a new to-do', async () => {
     expect((await patch({ unitSystem: 'metric' })).status).toBe(200);
     try {
       const { todoId } = await planned('Metric Apple Butter', 8);

@@ -11,7 +11,7 @@ interface Named {
 }
 
 describe('a household in metric units, on a phone', () => {
-  it('switches to metric on the Household page, plans a batch and records it in mL, grams and metres', async () => {
+  it('switches to metric on the Household page, plans a batch and records it in mL, grams and meters', async () => {
     const page = await newPage(PHONE_TOUCH);
     await signIn(page, baseURL, 'keeper@larderly.test');
     const hid = /\/h\/([0-9a-f-]{36})/.exec(page.url())![1];

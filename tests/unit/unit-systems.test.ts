@@ -3,11 +3,11 @@ import {
   amountIn,
   convertMass,
   convertVolume,
-  feetToMetres,
+  feetToMeters,
   GRAMS_PER_POUND,
   KPA_PER_PSI,
-  METRES_PER_FOOT,
-  metresToFeet,
+  METERS_PER_FOOT,
+  metersToFeet,
   ML_PER_US_CUP,
   ML_PER_US_TBSP,
   psiToKpa,
@@ -47,9 +47,9 @@ describe('the published factors', () => {
 
   // NIST SP 811 (2008), Appendix B.8: foot = 0.3048 m exactly; pound-force per square inch = 6.894757 kPa.
   it('has the foot and the psi of NIST SP 811', () => {
-    expect(METRES_PER_FOOT).toBe(0.3048);
-    expectClose(feetToMetres(1000), 304.8);
-    expectClose(metresToFeet(0.3048), 1);
+    expect(METERS_PER_FOOT).toBe(0.3048);
+    expectClose(feetToMeters(1000), 304.8);
+    expectClose(metersToFeet(0.3048), 1);
     expect(KPA_PER_PSI).toBe(6.894757);
     expectClose(psiToKpa(10), 68.94757);
   });
@@ -62,7 +62,7 @@ describe('amounts in the household’s system', () => {
     expect(sugar.unit).toBe('l');
     expectClose(sugar.value, 1.419529419);
     expect(amountWords(6, 'cup', 'metric')).toBe('1.42 L');
-    // 2 tbsp x 14.78676478125 mL (NIST HB 44) = 29.57 mL, written to the millilitre.
+    // 2 tbsp x 14.78676478125 mL (NIST HB 44) = 29.57 mL, written to the milliliter.
     expect(amountWords(2, 'tbsp', 'metric')).toBe('30 mL');
     // 5 lb x 453.59237 g (NIST SP 811) = 2,267.96 g.
     expect(amountWords(5, 'lb', 'metric')).toBe('2.27 kg');
@@ -81,7 +81,7 @@ describe('amounts in the household’s system', () => {
     expect(amountIn(3, 'each', 'us')).toEqual({ value: 3, unit: 'each' });
   });
 
-  it('writes spoons and rates of use in millilitres in metric', () => {
+  it('writes spoons and rates of use in milliliters in metric', () => {
     expect(tbspWords(2, 'metric')).toBe('30 mL');
     expect(tbspWords(2, 'us')).toBe('2 tbsp');
     // 0.5 tbsp x 14.78676478125 mL = 7.39 mL.
@@ -91,7 +91,7 @@ describe('amounts in the household’s system', () => {
 });
 
 describe('canning numbers in the household’s system', () => {
-  it('keeps jar trade names and puts the millilitres beside them in metric', () => {
+  it('keeps jar trade names and puts the milliliters beside them in metric', () => {
     // A pint is 16 US fl oz x 29.5735295625 mL (NIST HB 44) = 473.18 mL.
     expect(jarSizeWords('pint', 'metric')).toBe('pint (473 mL)');
     expect(jarSizeWords('half-pint', 'metric')).toBe('half-pint (237 mL)');
@@ -106,7 +106,7 @@ describe('canning numbers in the household’s system', () => {
     expect(pressureWords(11)).toBe('11 pounds of pressure');
   });
 
-  it('writes altitude in metres and headspace in millimetres in metric', () => {
+  it('writes altitude in meters and headspace in millimeters in metric', () => {
     // 2,350 ft x 0.3048 m (NIST SP 811) = 716.28 m; 1/2 inch x 25.4 mm = 12.7 mm.
     expect(altitudeWords(2350, 'metric')).toBe('716 m');
     expect(altitudeWords(2350, 'us')).toBe('2,350 ft');
