@@ -32,6 +32,7 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
     defaultMethod: household.defaultMethod,
   });
   const [canners, setCanners] = useState(() => cannerDrafts(household));
+  const [altitudeProblem, setAltitudeProblem] = useState<string | null>(null);
   const error = update.error instanceof ApiError ? update.error : null;
   const formRef = useFocusFirstError(error);
   const owned = PROCESSING_METHODS.filter((method) => canners[method].owned);
@@ -47,9 +48,16 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
   function submit(event: FormEvent) {
     event.preventDefault();
     const months = form.bestQualityMonths.trim() === '' ? Number.NaN : Number(form.bestQualityMonths);
+    const altitudeFt = parseAltitude(form.altitude, altitudeSystem);
+    // The server checks feet; a number typed in meters is checked here, in the words of the field.
+    if (altitudeFt === null && altitudeSystem === 'metric') {
+      setAltitudeProblem('Enter the altitude in whole meters as a number, such as 716.');
+      return;
+    }
+    setAltitudeProblem(null);
     update.mutate({
       name: form.name,
-      altitudeFt: parseAltitude(form.altitude, altitudeSystem) ?? Number.NaN,
+      altitudeFt: altitudeFt ?? Number.NaN,
       unitSystem: form.unitSystem,
       timeZone: form.timeZone,
       bestQualityMonths: months,
@@ -92,7 +100,7 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
           inputMode="numeric"
           value={form.altitude}
           onChange={(e) => setForm({ ...form, altitude: e.target.value })}
-          error={error?.fields.altitudeFt}
+          error={altitudeProblem ?? error?.fields.altitudeFt}
           hint="Processing times and pressures depend on it. Your local extension service can tell you yours."
         />
         <TimeZoneField
