@@ -1,5 +1,6 @@
 import type { Transaction } from 'sequelize';
 import type { Household, User } from '../db/models';
+import { seedPlaces } from './places';
 import { seedSealCheck } from './seal-check';
 import { seedShelf } from './shelf';
 import { seedWeek } from './week';
@@ -20,6 +21,7 @@ export interface DemoSeedContext {
 export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
   await seedSealCheck(ctx);
+  await seedPlaces(ctx);
   await seedWeek(ctx);
   await seedProposalScenario(ctx);
   await seedTodos(ctx);

@@ -8,6 +8,7 @@ import { householdInvitationsRouter } from './invitations';
 import { batchesRouter } from './batches';
 import { jarsRouter } from './jars';
 import { mealsRouter } from './meals';
+import { placesRouter } from './places';
 import { productsRouter } from './products';
 import { recipesRouter } from './recipes';
 import { restockRouter } from './restock';
@@ -26,6 +27,7 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(productsRouter());
   router.use(recipesRouter());
   router.use(batchesRouter(ctx));
+  router.use(placesRouter(ctx));
   router.use(jarsRouter(ctx));
   router.use(shelfRouter(ctx));
   router.use(mealsRouter(ctx));

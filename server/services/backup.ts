@@ -21,6 +21,7 @@ type Column = [json: string, sql: string, type: string, ref?: BackupTable];
  * comes back checked; the README says so). Label codes go in, and are kept on import where no jar holds them.
  */
 const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: false }[] = [
+  { key: 'places', table: 'places', columns: [['name', 'name', 'varchar']] },
   {
     key: 'products',
     table: 'products',
@@ -35,6 +36,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['jarSize', 'jar_size', 'varchar'],
       ['colour', 'colour', 'varchar'],
       ['notes', 'notes', 'text'],
+      ['defaultPlaceId', 'default_place_id', 'uuid', 'places'],
     ],
   },
   {
@@ -91,6 +93,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['finishedOn', 'finished_on', 'date'],
       ['discardedOn', 'discarded_on', 'date'],
       ['code', 'code', 'varchar'],
+      ['placeId', 'place_id', 'uuid', 'places'],
     ],
   },
   {
@@ -102,6 +105,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['batchId', 'batch_id', 'uuid', 'batches'],
       ['kind', 'kind', 'varchar'],
       ['happenedOn', 'happened_on', 'date'],
+      ['placeMove', 'place_move', 'jsonb'],
     ],
   },
   {

@@ -31,6 +31,10 @@ const tbsp = z.number().min(0).max(100_000);
 const list = <T extends z.ZodType>(item: T, max: number) =>
   z.array(item).max(max, `The file has more than ${max.toLocaleString('en-US')} of these.`);
 
+// Added with shelf places; older files have none, and their jars come back with no place.
+const place = z.object({ id, name: text(N.placeName).trim().min(1) });
+const placeRef = id.nullable().default(null);
+
 const product = z.object({
   id,
   name: text(N.productName).min(1),
@@ -43,6 +47,7 @@ const product = z.object({
   jarSize: z.enum(JAR_SIZES),
   colour: z.enum(PRODUCT_COLOURS),
   notes: text(N.notes),
+  defaultPlaceId: placeRef,
 });
 
 const recipe = z.object({
@@ -100,14 +105,30 @@ const jar = z.object({
     .string()
     .regex(/^[0-9A-HJKMNP-TV-Z]{6}$/, 'A label code is 6 letters and digits.')
     .optional(),
+  placeId: placeRef,
 });
 
 const jarEvent = z.object({
   id,
   jarId: id,
   batchId: id,
-  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored', 'seal-checked', 'reprocessed']),
+  kind: z.enum([
+    'filled',
+    'unsealed',
+    'opened',
+    'finished',
+    'discarded',
+    'restored',
+    'seal-checked',
+    'reprocessed',
+    'moved',
+  ]),
   happenedOn: date,
+  placeMove: z
+    .object({ from: text(N.placeName).nullable(), to: text(N.placeName).nullable() })
+    .strict()
+    .nullable()
+    .default(null),
 });
 
 const meal = z.object({
@@ -236,6 +257,7 @@ export const householdBackup = z
       /** Added with the household calendar; older backups have none and get the default times. */
       mealTimes: mealTimesBody.optional(),
     }),
+    places: list(place, LIMITS.places).default([]),
     products: list(product, 2_000),
     recipes: list(recipe, 2_000),
     batches: list(batch, 10_000),

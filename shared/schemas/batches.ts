@@ -41,6 +41,8 @@ export const batchCreate = z
     seals: z
       .enum(SEAL_STATES, { error: 'Say whether the seals are checked already or still to check.' })
       .default('checked'),
+    /** Where the jars go; left out, the product's usual place. null: no place. */
+    placeId: z.uuid({ error: 'Choose a place from the list, or no place.' }).nullable().optional(),
   })
   .strict()
   .refine((batch) => batch.jarsSealed <= batch.jarsFilled, {
@@ -117,6 +119,8 @@ export const jarStateQuery = z.object({
   state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded']), z.literal('all')]).optional(),
   productId: z.uuid().optional(),
   batchId: z.uuid().optional(),
+  /** A place's id, or 'none' for jars with no place named. */
+  placeId: z.union([z.uuid({ error: 'That place was not found.' }), z.literal('none')]).optional(),
 });
 
 export const JAR_ACTIONS = ['open', 'finish', 'discard'] as const;
@@ -146,6 +150,9 @@ export interface JarView {
   pastBestQuality: boolean;
   /** 'to-check' while the jar cools after processing. */
   seal: SealState;
+  placeId: string | null;
+  /** The place's name, null when none is named. */
+  placeName: string | null;
 }
 
 export interface BatchView {
@@ -174,6 +181,8 @@ export interface JarEventView {
   happenedOn: string;
   jarCode: string;
   who: string | null;
+  /** For a move: the place names it moved between. */
+  placeMove?: { from: string | null; to: string | null } | null;
 }
 
 export interface BatchDetail extends BatchView {

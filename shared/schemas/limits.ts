@@ -33,6 +33,8 @@ export const LIMITS = {
   todoPosition: 100_000,
   /** Rows a CSV import takes at once. */
   importRows: 500,
+  /** Shelf places a household names. */
+  places: 100,
   /** Characters. */
   length: {
     productName: 80,
@@ -47,6 +49,7 @@ export const LIMITS = {
     source: 500,
     householdName: 80,
     personName: 80,
+    placeName: 60,
   },
 } as const;
 

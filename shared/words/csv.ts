@@ -6,6 +6,7 @@ import { PRODUCT_KINDS, type ProductKind } from '../domain/products';
 import { JAR_STATES, type JarState } from '../domain/shelf-life';
 import { JAR_SIZES, type JarSize } from '../domain/units';
 import { JAR_STATE_NAMES, METHOD_NAMES, PRODUCT_KIND_NAMES } from './names';
+import { PLACE_CSV_HELP } from './places';
 import { JAR_SIZE_NAMES } from './units';
 
 const STATE_WORDS: Record<JarState, string> = {
@@ -93,5 +94,6 @@ export const CSV_IMPORT_COLUMNS: CsvColumnHelp[] = [
   },
   { column: 'use_by, best_by', says: 'The jar’s dates; worked out again when empty.', needed: 'no' },
   { column: 'unsealed', says: 'yes for a jar that did not seal.', needed: 'no' },
+  { column: 'place', says: PLACE_CSV_HELP, needed: 'no' },
   { column: 'notes', says: 'The batch’s notes (batch_notes in the shelf export).', needed: 'no' },
 ];

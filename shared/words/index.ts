@@ -7,3 +7,4 @@ export * from './countdown';
 export * from './cautions';
 export * from './seal-check';
 export * from './ingredients';
+export * from './places';

@@ -52,6 +52,7 @@ export interface Ids {
   batchId: string;
   jarId: string;
   jarCode: string;
+  placeId: string;
   mealId: string;
   planEntryId: string;
   pairingId: string;
@@ -71,6 +72,7 @@ export const PARAMS: Record<string, keyof Ids | { literal: string }> = {
   jarId: 'jarId',
   action: { literal: 'open' },
   code: 'jarCode',
+  placeId: 'placeId',
   userId: 'helperId',
   date: 'planDate',
   'meals/:id': 'mealId',
@@ -177,6 +179,16 @@ export const TABLE: Record<string, RouteRule> = {
     access: 'handleJars',
     body: () => ({ eventId: '00000000-0000-4000-8000-000000000000' }),
   },
+  [`GET ${H}/places`]: { access: 'read' },
+  [`POST ${H}/places`]: {
+    access: 'cook',
+    body: () => ({ name: `Crate ${Math.random().toString(36).slice(2, 8)}` }),
+  },
+  [`PATCH ${H}/places/:placeId`]: { access: 'cook', body: () => ({ name: 'Pantry shelf' }) },
+  // The place holds jars, so without a choice of where they go the removal is refused (409) and the place stays.
+  [`DELETE ${H}/places/:placeId`]: { access: 'cook' },
+  // Any member may move jars (tests/api/places.test.ts).
+  [`POST ${H}/jars/move`]: { access: 'handleJars', body: (ids) => ({ jarIds: [ids.jarId], placeId: ids.placeId }) },
   [`GET ${H}/shelf.csv`]: { access: 'read' },
   [`POST ${H}/shelf/import`]: { access: 'cook', body: () => ({ csv: 'product,canned on\n', commit: false }) },
 

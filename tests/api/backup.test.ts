@@ -19,10 +19,11 @@ afterAll(() => ctx.close());
 
 /** Which table each id column points into, in insert order, so a row can be named by its content. */
 const REFS: [BackupTable, Record<string, BackupTable>][] = [
-  ['products', {}],
+  ['places', {}],
+  ['products', { defaultPlaceId: 'places' }],
   ['recipes', { productId: 'products' }],
   ['batches', { productId: 'products', recipeId: 'recipes' }],
-  ['jars', { batchId: 'batches', productId: 'products' }],
+  ['jars', { batchId: 'batches', productId: 'products', placeId: 'places' }],
   ['jarEvents', { jarId: 'jars', batchId: 'batches' }],
   ['meals', {}],
   ['mealProducts', { mealId: 'meals', productId: 'products' }],

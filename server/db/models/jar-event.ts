@@ -18,6 +18,7 @@ export const JAR_EVENT_KINDS = [
   'restored',
   'seal-checked',
   'reprocessed',
+  'moved',
 ] as const;
 export type JarEventKind = (typeof JAR_EVENT_KINDS)[number];
 
@@ -28,6 +29,12 @@ export interface JarBefore {
   finishedOn: string | null;
   discardedOn: string | null;
   remainingTbsp: number;
+}
+
+/** A move's place names (null: no place), as they were called then. */
+export interface PlaceMove {
+  from: string | null;
+  to: string | null;
 }
 
 export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttributes<JarEvent>> {
@@ -42,6 +49,7 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
   declare undoesEventId: CreationOptional<string | null>;
   /** The jar's fields before an open, finish or discard, so an undo puts back exactly those. */
   declare stateBefore: CreationOptional<JarBefore | null>;
+  declare placeMove: CreationOptional<PlaceMove | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -56,6 +64,7 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
         happenedOn: { type: DataTypes.DATEONLY, allowNull: false },
         undoesEventId: { type: DataTypes.UUID, allowNull: true },
         stateBefore: { type: DataTypes.JSONB, allowNull: true },
+        placeMove: { type: DataTypes.JSONB, allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'jar_events', updatedAt: false },

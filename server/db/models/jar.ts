@@ -4,10 +4,12 @@ import {
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from 'sequelize';
 import type { JarState } from '../../../shared/domain';
 import { decimal, requiredUuid, uuidKey } from './columns';
+import type { Place } from './place';
 
 export type JarSeal = 'checked' | 'to-check';
 
@@ -30,6 +32,9 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
   declare seal: CreationOptional<JarSeal>;
   /** The jar's latest processing (null for jars recorded before processings were kept). */
   declare processingId: CreationOptional<string | null>;
+  /** Where the jar is kept (null: no place named). */
+  declare placeId: CreationOptional<string | null>;
+  declare place?: NonAttribute<Place | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -52,6 +57,7 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
         discardedOn: { type: DataTypes.DATEONLY, allowNull: true },
         seal: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'checked' },
         processingId: { type: DataTypes.UUID, allowNull: true },
+        placeId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -2,10 +2,11 @@ import type { Sequelize } from 'sequelize';
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
-import { Batch, BatchProcessing, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
+import { Batch, BatchProcessing, Jar, JarEvent, Place, Product, Recipe, User, type Household } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
 import { requireConfirmedAltitude } from '../households';
+import { placeNewJars, placeOfHousehold } from './places';
 import { findProduct } from './products';
 import { findRecipe } from './recipes';
 import { processingView, sealCheckView } from './seal-check-view';
@@ -25,7 +26,10 @@ export async function previewPlan(household: Household, recipeId: string, jarSiz
 export async function createBatch(
   sequelize: Sequelize,
   household: Household,
-  input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number },
+  input: Required<Omit<BatchCreate, 'headspaceInches' | 'placeId'>> & {
+    headspaceInches?: number;
+    placeId?: string | null;
+  },
   userId: string,
 ): Promise<BatchCreated> {
   requireConfirmedAltitude(household);
@@ -59,9 +63,16 @@ export async function createBatch(
     altitudeFt: household.altitudeFt,
   });
   if (!plan.allowed) throw notAllowed(plan);
+  // Left out, the jars go to the product's usual place; a place since removed leaves them with none.
+  const place =
+    input.placeId !== undefined
+      ? await placeOfHousehold(household.id, input.placeId, 'placeId')
+      : product.defaultPlaceId
+        ? await Place.findOne({ where: { householdId: household.id, id: product.defaultPlaceId } })
+        : null;
 
-  const { batch, jars } = await withFreshJarCodes(sequelize, (transaction) =>
-    writeBatch(
+  const { batch, jars } = await withFreshJarCodes(sequelize, async (transaction) => {
+    const made = await writeBatch(
       household,
       product,
       {
@@ -80,8 +91,10 @@ export async function createBatch(
       userId,
       transaction,
       input.seals === 'to-check' ? clock.now() : undefined,
-    ),
-  );
+    );
+    await placeNewJars(made.jars, place, transaction);
+    return made;
+  });
   const shelf = shelfClock(household);
   return {
     batch: batchView(
@@ -131,7 +144,11 @@ export async function batchDetail(household: Household, batchId: string): Promis
   const [product, recipe, jars, events, processings] = await Promise.all([
     findProduct(household.id, batch.productId),
     batch.recipeId ? Recipe.findOne({ where: { householdId: household.id, id: batch.recipeId } }) : null,
-    Jar.findAll({ where: { batchId: batch.id }, order: [['code', 'ASC']] }),
+    Jar.findAll({
+      where: { batchId: batch.id },
+      include: [{ model: Place, as: 'place', required: false }],
+      order: [['code', 'ASC']],
+    }),
     JarEvent.findAll({
       where: { batchId: batch.id },
       include: [{ model: User, as: 'user', attributes: ['name'] }],
@@ -162,6 +179,7 @@ export async function batchDetail(household: Household, batchId: string): Promis
       happenedOn: event.happenedOn,
       jarCode: codes.get(event.jarId) ?? '',
       who: (event as JarEvent & { user?: User | null }).user?.name ?? null,
+      placeMove: event.placeMove ?? null,
     })),
     processings: processings.map(processingView),
     timeZone: household.timeZone,

@@ -17,11 +17,12 @@ import {
 import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
 import { LIMITS, limitWords } from '../../../shared/schemas/limits';
 import { csvChoiceList, readCsvChoice, type CsvChoiceColumn } from '../../../shared/words/csv';
-import { Jar, JarEvent, Product, Recipe, type Household } from '../../db/models';
+import { Jar, JarEvent, Place, Product, Recipe, type Household } from '../../db/models';
 import { AppError } from '../../http/errors';
 import { todayIn } from '../clock';
 import { requireConfirmedAltitude } from '../households';
 import { unguardCell } from './csv-cells';
+import { placeByName, placeNewJars } from './places';
 import { withFreshJarCodes, writeBatch, type BatchRecord } from './write-batch';
 
 export const IMPORT_COLUMNS = [
@@ -34,6 +35,7 @@ export const IMPORT_COLUMNS = [
   'method',
   'minutes',
   'notes',
+  'place',
 ] as const;
 const ALWAYS = ['product', 'canned_on', 'jar_size', 'method'];
 const BATCH_ROWS = ['jars_filled', 'jars_sealed'];
@@ -97,6 +99,14 @@ const common = {
     .max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`)
     .optional()
     .default(''),
+  // Files from before places have no such column: the jars then have no place.
+  place: z
+    .string()
+    .trim()
+    .max(LIMITS.length.placeName, `Use at most ${LIMITS.length.placeName} characters for a place.`)
+    .refine((name) => !/[\p{Cc}\p{Cf}]/u.test(name), 'Write the place without control characters.')
+    .optional()
+    .default(''),
 };
 
 const batchRow = z
@@ -138,6 +148,8 @@ interface Planned {
   record: Omit<BatchRecord, 'productId'>;
   /** One row a jar: each jar's state and dates, in the order writeBatch makes them (sealed lids first). */
   jars?: JarRow[];
+  /** One row a batch: where its jars go ('' for no place). */
+  place?: string;
 }
 
 export async function checkImport(household: Household, csv: string) {
@@ -262,7 +274,7 @@ export async function checkImport(household: Household, csv: string) {
           problems.push({ row, field: String(issue.path[0] ?? '_'), message: issue.message }),
         );
       const batch = batchOf(row, result.data, result.data.jars_filled, result.data.jars_sealed);
-      if (batch) planned.push(batch);
+      if (batch) planned.push({ ...batch, place: result.data.place });
     });
   } else {
     // Jars canned together: the same batch number, or without one the same product, day, size, canner and notes.
@@ -321,9 +333,37 @@ export async function checkImport(household: Household, csv: string) {
       if (batch) planned.push({ ...batch, jars: ordered });
     }
   }
+  await placesProblem(household, planned, problems);
   problems.sort((a, b) => a.row - b.row);
   rows.sort((a, b) => a.row - b.row);
   return { rows, planned, problems };
+}
+
+/** The names of places a file uses, in lower case, each once. */
+function placeNamesOf(planned: Planned[]) {
+  const names = new Map<string, string>();
+  for (const plan of planned)
+    for (const name of plan.jars ? plan.jars.map((jar) => jar.place) : [plan.place ?? ''])
+      if (name) names.set(name.toLowerCase(), name);
+  return names;
+}
+
+/** Places the file names that the household does not have are added on import, within the household's limit. */
+async function placesProblem(household: Household, planned: Planned[], problems: ImportProblem[]) {
+  const named = placeNamesOf(planned);
+  if (named.size === 0) return;
+  const existing = new Set(
+    (await Place.findAll({ where: { householdId: household.id }, attributes: ['name'] })).map((p) =>
+      p.name.toLowerCase(),
+    ),
+  );
+  const added = [...named.keys()].filter((name) => !existing.has(name)).length;
+  if (existing.size + added > LIMITS.places)
+    problems.push({
+      row: 1,
+      field: 'place',
+      message: `The file names ${added} new places, and a household keeps at most ${LIMITS.places}. Use places the household has, or remove some first.`,
+    });
 }
 
 /** A jar row's dates fit its state: opened, finished and discarded jars say when, and nothing happens before canning or after today. */
@@ -426,6 +466,10 @@ export async function importBatches(sequelize: Sequelize, household: Household, 
   await withFreshJarCodes(sequelize, async (transaction) => {
     const made = new Map<string, Product>();
     const free = await freeCodes(sequelize, transaction, planned);
+    const places = new Map<string, Place>();
+    for (const [lower, name] of placeNamesOf(planned))
+      places.set(lower, await placeByName(household.id, name, transaction));
+    const placeOf = (name: string | undefined) => (name ? places.get(name.toLowerCase())! : null);
     for (const plan of planned) {
       let product = plan.product instanceof Product ? plan.product : made.get(plan.product.name.toLowerCase());
       if (!product) {
@@ -443,6 +487,14 @@ export async function importBatches(sequelize: Sequelize, household: Household, 
         transaction,
       );
       if (plan.jars) await applyJarRows(household, product, jars, plan.jars, free, userId, transaction);
+      if (plan.jars) {
+        for (const [lower, place] of places)
+          await placeNewJars(
+            jars.filter((_, index) => plan.jars![index].place.toLowerCase() === lower),
+            place,
+            transaction,
+          );
+      } else await placeNewJars(jars, placeOf(plan.place), transaction);
     }
   });
   return { imported: rows.length, jars: rows.reduce((sum, row) => sum + row.jarsFilled, 0) };

@@ -3,7 +3,7 @@ import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequeli
 import type { JarState } from '../../../shared/domain';
 import { JAR_UNDO_MINUTES, type JarActed, type JarChange } from '../../../shared/schemas/batches';
 import { can, type Role } from '../../../shared/roles';
-import { Batch, Household, Jar, JarEvent, Product, User } from '../../db/models';
+import { Batch, Household, Jar, JarEvent, Place, Product, User } from '../../db/models';
 import type { JarBefore } from '../../db/models/jar-event';
 import { conflict, forbidden, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
@@ -119,7 +119,7 @@ export async function undoJarEvent(
         Batch.findByPk(jar.batchId, { transaction }),
         Product.findByPk(jar.productId, { transaction }),
       ]);
-      await jar.reload({ transaction });
+      await jar.reload({ transaction, include: [{ model: Place, as: 'place', required: false }] });
       return { jar: jarView(jar, batch!, product!, shelfClock(household)), eventId: restored.id };
     });
   } catch (error) {

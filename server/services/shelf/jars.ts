@@ -2,7 +2,7 @@
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
 import type { JarAction, JarActed, JarByCode, OpeningAdvice } from '../../../shared/schemas/batches';
-import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/models';
+import { Batch, Household, Jar, JarEvent, Membership, Place, Product } from '../../db/models';
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 import { normaliseJarCode } from './jar-codes';
@@ -13,16 +13,18 @@ type JarWithParts = Jar & { batch: Batch; product: Product };
 const withParts = [
   { model: Batch, as: 'batch', required: true },
   { model: Product, as: 'product', required: true },
+  { model: Place, as: 'place', required: false },
 ];
 
 export async function listJars(
   household: Household,
-  filter: { state?: JarState | 'all'; productId?: string; batchId?: string },
+  filter: { state?: JarState | 'all'; productId?: string; batchId?: string; placeId?: string },
 ) {
   const where: WhereOptions<Jar> = { householdId: household.id };
   if (filter.state !== 'all') Object.assign(where, { state: filter.state ?? { [Op.in]: ['sealed', 'opened'] } });
   if (filter.productId) Object.assign(where, { productId: filter.productId });
   if (filter.batchId) Object.assign(where, { batchId: filter.batchId });
+  if (filter.placeId) Object.assign(where, { placeId: filter.placeId === 'none' ? null : filter.placeId });
   const jars = (await Jar.findAll({
     where,
     include: withParts,

@@ -21,6 +21,7 @@ export function productView(product: Product): ProductView {
     jarSize: product.jarSize,
     colour: product.colour as ProductColour,
     notes: product.notes,
+    defaultPlaceId: product.defaultPlaceId ?? null,
   };
 }
 
@@ -75,6 +76,8 @@ export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnT
     productColour: product.colour,
     pastBestQuality: jar.state === 'sealed' && bestBy < clock.today,
     seal: jar.seal ?? 'checked',
+    placeId: jar.placeId ?? null,
+    placeName: jar.place?.name ?? null,
   };
 }
 
