@@ -1,16 +1,18 @@
 import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { TextField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useJars } from '@/features/shelf/api/get-jars';
+import { usePlaces } from '@/features/shelf/api/get-places';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
 import { paths } from '@shared/paths';
+import { PLACE_WORDS } from '@shared/words';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },
@@ -25,14 +27,28 @@ export function ShelfRoute() {
   const jars = useJars(hid);
   const products = useProducts(hid);
   const [params, setParams] = useSearchParams();
+  const places = usePlaces(hid);
   const view = params.get('view') === 'table' ? 'table' : 'cards';
+  // The place filter lives in the address with the view, so a shared link shows the same shelf: '' every place, 'none'.
+  const place = params.get('place') ?? '';
   const [text, setText] = useState('');
+  const setParam = (key: string, value: string) => {
+    const next = new URLSearchParams(params);
+    if (value) next.set(key, value);
+    else next.delete(key);
+    setParams(next, { replace: true });
+  };
 
-  const rows = useMemo(() => shelfBatchRows(jars.data ?? [], products.data ?? []), [jars.data, products.data]);
-  const groups = useMemo(
-    () => shelfProductGroups(jars.data ?? [], products.data ?? [], rows),
-    [jars.data, products.data, rows],
+  const placed = useMemo(
+    () => (place === '' ? (jars.data ?? []) : (jars.data ?? []).filter((jar) => (jar.placeId ?? 'none') === place)),
+    [jars.data, place],
   );
+  const rows = useMemo(() => shelfBatchRows(placed, products.data ?? []), [placed, products.data]);
+  const groups = useMemo(() => {
+    const all = shelfProductGroups(placed, products.data ?? [], rows);
+    // In one place, only the products kept there.
+    return place === '' ? all : all.filter((group) => group.sealed + group.opened > 0);
+  }, [placed, products.data, rows, place]);
   const found = useMemo(() => searchShelf(rows, products.data ?? [], text), [rows, products.data, text]);
   const shownRows = found ? rows.filter((r) => found.batchIds.has(r.batchId)) : rows;
   const shownGroups = found ? groups.filter((g) => found.productIds.has(g.product.id)) : groups;
@@ -87,6 +103,19 @@ export function ShelfRoute() {
       ) : (
         <div className="flex flex-col gap-4">
           <div className="flex flex-wrap items-end justify-between gap-3">
+            {(places.data?.length ?? 0) > 0 && (
+              <div className="w-full sm:w-56">
+                <SelectField label={PLACE_WORDS.name} value={place} onChange={(e) => setParam('place', e.target.value)}>
+                  <option value="">{PLACE_WORDS.everywhere}</option>
+                  {places.data!.map((p) => (
+                    <option key={p.id} value={p.id}>
+                      {p.name}
+                    </option>
+                  ))}
+                  <option value="none">{PLACE_WORDS.noneOnShelf}</option>
+                </SelectField>
+              </div>
+            )}
             <div className="w-full sm:w-96">
               <TextField
                 label="Search the shelf"
@@ -103,7 +132,7 @@ export function ShelfRoute() {
                   key={option.id}
                   type="button"
                   aria-pressed={view === option.id}
-                  onClick={() => setParams(option.id === 'cards' ? {} : { view: option.id }, { replace: true })}
+                  onClick={() => setParam('view', option.id === 'cards' ? '' : option.id)}
                   className={`min-h-11 rounded-md px-4 font-bold ${view === option.id ? 'bg-action text-white' : 'text-ink hover:bg-sunken'}`}
                 >
                   {option.label}

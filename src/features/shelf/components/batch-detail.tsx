@@ -9,6 +9,7 @@ import {
   jarSizeWords,
   METHOD_NAMES,
   minutesWords,
+  placeMoveWords,
   pressureWords,
 } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
@@ -16,6 +17,7 @@ import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';
 import { SealCheckPanel } from './seal-check-panel';
 import { JarActions } from './jar-actions';
+import { MoveJarsForm } from './move-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
 import { paths } from '@shared/paths';
 
@@ -28,6 +30,7 @@ const EVENT_WORDS: Record<string, string> = {
   finished: 'finished',
   discarded: 'discarded',
   restored: 'put back (the change before was undone)',
+  moved: 'moved',
 };
 
 export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
@@ -125,12 +128,16 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                   </p>
                   <p className="text-sm text-ink-muted">
                     <JarDates jar={jar} />
+                    {jar.placeName && (jar.state === 'sealed' || jar.state === 'opened') ? ` · ${jar.placeName}` : ''}
                   </p>
                 </div>
                 <JarActions hid={hid} jar={jar} />
               </li>
             ))}
           </ul>
+          <div className="mt-3">
+            <MoveJarsForm hid={hid} jars={batch.jars} buttonLabel="Move these jars" />
+          </div>
         </Card>
       </div>
       <div className="flex flex-col gap-5">
@@ -144,7 +151,8 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             {batch.history.map((event) => (
               <li key={event.id} className="tabular">
                 <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar{' '}
-                <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
+                <span className="font-mono">{event.jarCode}</span>{' '}
+                {event.placeMove ? placeMoveWords(event.placeMove) : (EVENT_WORDS[event.kind] ?? event.kind)}
                 {event.who ? ` by ${event.who}` : ''}
               </li>
             ))}

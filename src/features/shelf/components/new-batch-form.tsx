@@ -6,13 +6,14 @@ import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
-import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
+import { jarSizeWords, METHOD_NAMES, PLACE_WORDS, SEALS_CHOICE } from '@shared/words';
 import { FormFooter } from '@/components/ui/form-footer';
 import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useCreateBatch } from '../api/create-batch';
+import { usePlaces } from '../api/get-places';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
 import { paths } from '@shared/paths';
@@ -35,6 +36,7 @@ export function NewBatchForm({
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const create = useCreateBatch(household.id);
+  const places = usePlaces(household.id);
   const [notes, setNotes] = useState('');
   const error = create.error instanceof ApiError ? create.error : null;
   const formRef = useFocusFirstError(error);
@@ -57,6 +59,9 @@ export function NewBatchForm({
   const cannedOn = params.get('date') ?? today;
   // Seals left to check only for a batch processed today; an earlier day's seals are checked already.
   const seals = params.get('seals') === 'to-check' && cannedOn === today ? 'to-check' : 'checked';
+
+  // Where the jars go: the product's usual place unless the cook chose another ('none': no place).
+  const place = params.get('place') ?? product?.defaultPlaceId ?? 'none';
 
   const plan = recipe ? recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
   const filled = numberFrom(jarsText);
@@ -89,6 +94,7 @@ export function NewBatchForm({
         method,
         notes,
         seals,
+        placeId: place === 'none' ? null : place,
       },
       {
         onSuccess: (created) =>
@@ -103,7 +109,7 @@ export function NewBatchForm({
         <SelectField
           label="What did you make?"
           value={productId}
-          onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null })}
+          onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null, place: null })}
           error={error?.fields.productId}
         >
           <option value="">Choose a product</option>
@@ -211,6 +217,24 @@ export function NewBatchForm({
             </option>
           ))}
         </SelectField>
+        {(places.data?.length ?? 0) > 0 && (
+          <SelectField
+            label={PLACE_WORDS.batchPlace}
+            value={place}
+            onChange={(e) => set({ place: e.target.value })}
+            error={error?.fields.placeId}
+            hint={
+              product?.defaultPlaceId && place === product.defaultPlaceId ? `${product.name}’s usual place.` : undefined
+            }
+          >
+            <option value="none">{PLACE_WORDS.none}</option>
+            {places.data!.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </SelectField>
+        )}
         <TextAreaField
           label="Notes"
           value={notes}

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, heatWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { DATE_NAMES, dateWords, heatWords, jarSizeWords, placeWords, PRODUCT_KIND_NAMES } from '@shared/words';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
@@ -78,7 +78,12 @@ export function ShelfCards({
               ))}
             </ul>
           )}
-          {group.nextJar && <p className="tabular text-sm text-ink-muted">Eat first: jar {group.nextJar.code}</p>}
+          {group.nextJar && (
+            <p className="tabular text-sm text-ink-muted">
+              Eat first: jar {group.nextJar.code}
+              {group.nextJar.placeName ? `, ${placeWords(group.nextJar.placeName)}` : ''}
+            </p>
+          )}
           <div className="mt-auto flex flex-wrap gap-2">
             {canHandleJars && group.nextJar && (
               <OpenJarButton

@@ -9,7 +9,7 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { DATE_NAMES, dateWords, jarSizeWords, PLACE_WORDS, PRODUCT_KIND_NAMES } from '@shared/words';
 import type { ProductKind } from '@shared/domain';
 import { CheckboxField, SelectField } from '@/components/ui/field';
 import type { ShelfBatchRow } from '../shelf-rows';
@@ -66,6 +66,10 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
         ),
       }),
       column.accessor('pastBestQuality', { header: 'Past best', enableSorting: false, filterFn: 'equals' }),
+      column.accessor('places', {
+        header: PLACE_WORDS.name,
+        cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span>,
+      }),
       column.accessor('notes', {
         header: 'Notes',
         enableSorting: false,
