@@ -31,8 +31,8 @@ export type JarMoveBody = z.infer<typeof jarMoveBody>;
 export interface PlaceView {
   id: string;
   name: string;
-  /** Sealed and opened jars kept there. */
-  jarsOnHand: number;
+  /** Sealed jars kept there (an opened jar lives in the fridge). */
+  sealedJars: number;
 }
 
 export interface JarsMoved {

@@ -26,9 +26,9 @@ describe('shelf places', () => {
     const helper = await ctx.signedIn('helper@larderly.test');
     const places = await placesOf(helper);
     expect(places.map((p) => p.name)).toContain('Pantry shelf');
-    const jars = await jarsOf(helper);
+    const jars = await jarsOf(helper, '?state=sealed');
     for (const place of places)
-      expect(place.jarsOnHand, place.name).toBe(jars.filter((jar) => jar.placeId === place.id).length);
+      expect(place.sealedJars, place.name).toBe(jars.filter((jar) => jar.placeId === place.id).length);
     const pantry = places.find((p) => p.name === 'Pantry shelf')!;
     expect(jars.filter((j) => j.placeId === pantry.id).every((j) => j.placeName === 'Pantry shelf')).toBe(true);
   });
@@ -39,7 +39,7 @@ describe('shelf places', () => {
     expect((await helper.post(`${base}/places`).send({ name: 'Attic' })).status).toBe(403);
     const made = await cook.post(`${base}/places`).send({ name: '  Attic crate  ' });
     expect(made.status).toBe(201);
-    expect(made.body.place).toEqual({ id: expect.any(String), name: 'Attic crate', jarsOnHand: 0 });
+    expect(made.body.place).toEqual({ id: expect.any(String), name: 'Attic crate', sealedJars: 0 });
     const id = made.body.place.id as string;
 
     // One name once per household, in any case.
@@ -190,13 +190,23 @@ describe('moving jars', () => {
     });
   });
 
-  it('refuses a jar that is no longer on hand, and bad lists', async () => {
+  it('moves only sealed jars (an opened jar lives in the fridge), and refuses bad lists', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
-    const [jar] = (await jarsOf(cook, '?state=sealed')).filter((j) => j.productName === 'Hot Pepper Jelly');
+    const [jar, other] = (await jarsOf(cook, '?state=sealed')).filter((j) => j.productName === 'Hot Pepper Jelly');
     expect((await cook.post(`${base}/jars/${jar!.id}/discard`)).status).toBe(200);
-    const answer = await cook.post(`${base}/jars/move`).send({ jarIds: [jar!.id], placeId: null });
+    const answer = await cook.post(`${base}/jars/move`).send({ jarIds: [other!.id, jar!.id], placeId: null });
     expect(answer.status).toBe(409);
-    expect(answer.body.error.message).toMatch(new RegExp(`Jar ${jar!.code} is discarded.*Leave it out`));
+    expect(answer.body.error.message).toBe(
+      `Jar ${jar!.code} is discarded: only sealed jars move between places. Leave it out of the jars to move.`,
+    );
+    // Nothing moved: the other jar is where it was.
+    expect((await jarsOf(cook, `?batchId=${other!.batchId}`)).find((j) => j.id === other!.id)!.placeId).toBe(
+      other!.placeId,
+    );
+    const [opened] = await jarsOf(cook, '?state=opened');
+    const inFridge = await cook.post(`${base}/jars/move`).send({ jarIds: [opened!.id], placeId: null });
+    expect(inFridge.status).toBe(409);
+    expect(inFridge.body.error.message).toMatch(/is opened, so it lives in the fridge/);
     expect((await cook.post(`${base}/jars/move`).send({ jarIds: [], placeId: null })).status).toBe(400);
     expect((await cook.post(`${base}/jars/move`).send({ jarIds: ['nope'], placeId: null })).status).toBe(400);
     expect((await cook.post(`${base}/jars/move`).send({ jarIds: [jar!.id] })).status).toBe(400);

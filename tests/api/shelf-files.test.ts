@@ -193,8 +193,8 @@ describe('shelf CSV round trip', () => {
     expect(await shelfOf(other.agent, other.base)).toEqual(await shelfOf(keeper, lookups.base));
     // The places came by name: the other household now has the same places, each holding the same jars.
     const placeNames = async (agent: import('supertest').Agent, base: string) =>
-      ((await agent.get(`${base}/places`)).body.places as { name: string; jarsOnHand: number }[])
-        .map(({ name, jarsOnHand }) => `${name}: ${jarsOnHand}`)
+      ((await agent.get(`${base}/places`)).body.places as { name: string; sealedJars: number }[])
+        .map(({ name, sealedJars }) => `${name}: ${sealedJars}`)
         .sort();
     expect(await placeNames(other.agent, other.base)).toEqual(await placeNames(keeper, lookups.base));
     expect((await placeNames(other.agent, other.base)).length).toBeGreaterThan(1);
@@ -265,12 +265,12 @@ describe('shelf CSV round trip', () => {
     const places = (await other.agent.get(`${other.base}/places`)).body.places as {
       id: string;
       name: string;
-      jarsOnHand: number;
+      sealedJars: number;
     }[];
     // "larder" is the household's Larder (names match in any case); "Shed shelf" is added.
-    expect(places.map(({ name, jarsOnHand }) => ({ name, jarsOnHand }))).toEqual([
-      { name: 'Larder', jarsOnHand: 4 },
-      { name: 'Shed shelf', jarsOnHand: 2 },
+    expect(places.map(({ name, sealedJars }) => ({ name, sealedJars }))).toEqual([
+      { name: 'Larder', sealedJars: 4 },
+      { name: 'Shed shelf', sealedJars: 2 },
     ]);
     expect(places[0]!.id).toBe(made.id);
     const jars = (await other.agent.get(`${other.base}/jars?placeId=none`)).body.jars as { cannedOn: string }[];

@@ -7,7 +7,13 @@ import { Jar, JarEvent, Place, type Household } from '../../db/models';
 import { AppError, conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 
-const ON_HAND = ['sealed', 'opened'];
+/** Only sealed jars have a shelf place that counts: an opened jar lives in the fridge. */
+const ON_SHELF = ['sealed'];
+const NOT_ON_SHELF: Record<string, string> = {
+  opened: 'is opened, so it lives in the fridge',
+  finished: 'is finished',
+  discarded: 'is discarded',
+};
 
 function sameName(error: unknown, name: string): never {
   if (error instanceof UniqueConstraintError)
@@ -19,14 +25,14 @@ export async function listPlaces(householdId: string): Promise<PlaceView[]> {
   const [places, counts] = await Promise.all([
     Place.findAll({ where: { householdId }, order: [[fn('lower', col('name')), 'ASC']] }),
     Jar.findAll({
-      where: { householdId, state: ON_HAND, placeId: { [Op.ne]: null } },
+      where: { householdId, state: ON_SHELF, placeId: { [Op.ne]: null } },
       attributes: ['placeId', [fn('count', col('id')), 'jars']],
       group: ['placeId'],
       raw: true,
     }) as unknown as Promise<{ placeId: string; jars: string }[]>,
   ]);
   const jarsAt = new Map(counts.map((row) => [row.placeId, Number(row.jars)]));
-  return places.map((place) => ({ id: place.id, name: place.name, jarsOnHand: jarsAt.get(place.id) ?? 0 }));
+  return places.map((place) => ({ id: place.id, name: place.name, sealedJars: jarsAt.get(place.id) ?? 0 }));
 }
 
 export async function findPlace(householdId: string, placeId: string, transaction?: Transaction) {
@@ -59,7 +65,7 @@ export async function createPlace(householdId: string, input: PlaceBody): Promis
   if (count >= LIMITS.places)
     throw conflict(`A household can name at most ${LIMITS.places} places. Remove one you no longer use first.`);
   const place = await Place.create({ householdId, name: input.name }).catch((error) => sameName(error, input.name));
-  return { id: place.id, name: place.name, jarsOnHand: 0 };
+  return { id: place.id, name: place.name, sealedJars: 0 };
 }
 
 export async function renamePlace(householdId: string, placeId: string, input: PlaceBody): Promise<PlaceView> {
@@ -122,7 +128,7 @@ async function moveInTransaction(
   return moving.length;
 }
 
-/** Moves jars on hand to a place, or to no place. Jars already there are left as they are. */
+/** Moves sealed jars to a place, or to no place. Jars already there are left as they are. */
 export async function moveJars(
   sequelize: Sequelize,
   household: Household,
@@ -139,10 +145,10 @@ export async function moveJars(
       lock: transaction.LOCK.UPDATE,
     });
     if (jars.length !== ids.length) throw notFound('A jar in the list');
-    const ended = jars.find((jar) => !ON_HAND.includes(jar.state));
-    if (ended)
+    const off = jars.find((jar) => !ON_SHELF.includes(jar.state));
+    if (off)
       throw conflict(
-        `Jar ${ended.code} is ${ended.state}, so it is on no shelf to move. Leave it out of the jars to move.`,
+        `Jar ${off.code} ${NOT_ON_SHELF[off.state] ?? `is ${off.state}`}: only sealed jars move between places. Leave it out of the jars to move.`,
       );
     const moved = await moveInTransaction(household, jars, to, userId, transaction);
     return { moved, placeId: to?.id ?? null, placeName: to?.name ?? null };
@@ -168,7 +174,7 @@ export async function removePlace(
     });
     if (!place) throw notFound('That place');
     const jars = await Jar.findAll({
-      where: { householdId: household.id, placeId: place.id, state: ON_HAND },
+      where: { householdId: household.id, placeId: place.id, state: ON_SHELF },
       transaction,
       lock: transaction.LOCK.UPDATE,
     });
@@ -176,7 +182,7 @@ export async function removePlace(
     if (jars.length > 0) {
       if (moveTo === undefined)
         throw new AppError(409, 'conflict', placeHoldsJarsWords(place.name, jars.length), undefined, {
-          jarsOnHand: jars.length,
+          sealedJars: jars.length,
         });
       if (moveTo === place.id)
         throw new AppError(400, 'invalid_input', 'Choose another place for its jars, or no place.', {

@@ -40,14 +40,18 @@ export function ShelfRoute() {
   };
 
   const placed = useMemo(
-    () => (place === '' ? (jars.data ?? []) : (jars.data ?? []).filter((jar) => (jar.placeId ?? 'none') === place)),
+    () =>
+      place === ''
+        ? (jars.data ?? [])
+        : // An opened jar lives in the fridge, whatever shelf it came from: one place shows its sealed jars.
+          (jars.data ?? []).filter((jar) => jar.state === 'sealed' && (jar.placeId ?? 'none') === place),
     [jars.data, place],
   );
   const rows = useMemo(() => shelfBatchRows(placed, products.data ?? []), [placed, products.data]);
   const groups = useMemo(() => {
     const all = shelfProductGroups(placed, products.data ?? [], rows);
     // In one place, only the products kept there.
-    return place === '' ? all : all.filter((group) => group.sealed + group.opened > 0);
+    return place === '' ? all : all.filter((group) => group.sealed > 0);
   }, [placed, products.data, rows, place]);
   const found = useMemo(() => searchShelf(rows, products.data ?? [], text), [rows, products.data, text]);
   const shownRows = found ? rows.filter((r) => found.batchIds.has(r.batchId)) : rows;

@@ -128,7 +128,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                   </p>
                   <p className="text-sm text-ink-muted">
                     <JarDates jar={jar} />
-                    {jar.placeName && (jar.state === 'sealed' || jar.state === 'opened') ? ` · ${jar.placeName}` : ''}
+                    {jar.placeName && jar.state === 'sealed' ? ` · ${jar.placeName}` : ''}
                   </p>
                 </div>
                 <JarActions hid={hid} jar={jar} />

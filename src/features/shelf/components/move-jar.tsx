@@ -6,17 +6,18 @@ import { SelectField } from '@/components/ui/field';
 import { useMoveJars } from '../api/move-jars';
 import { usePlaces } from '../api/get-places';
 
-const onHand = (jar: JarView) => jar.state === 'sealed' || jar.state === 'opened';
+/** Only sealed jars have a shelf place: an opened jar lives in the fridge. */
+const onShelf = (jar: JarView) => jar.state === 'sealed';
 
 /** Where a jar is kept and, for a jar on hand, a way to move it; the move goes into the jar's history. */
 export function MoveJar({ hid, jar, canMove }: { hid: string; jar: JarView; canMove: boolean }) {
-  if (!onHand(jar) && !jar.placeName) return null;
+  if (!onShelf(jar)) return null;
   return (
     <div className="flex flex-col gap-2">
       <p className="text-lg">
         <span className="font-bold">{PLACE_WORDS.name}:</span> {jar.placeName ?? PLACE_WORDS.noneOnShelf}
       </p>
-      {canMove && onHand(jar) && <MoveJarsForm hid={hid} jars={[jar]} buttonLabel={`Move jar ${jar.code}`} />}
+      {canMove && <MoveJarsForm hid={hid} jars={[jar]} buttonLabel={`Move jar ${jar.code}`} />}
     </div>
   );
 }
@@ -25,7 +26,7 @@ export function MoveJar({ hid, jar, canMove }: { hid: string; jar: JarView; canM
 export function MoveJarsForm({ hid, jars, buttonLabel }: { hid: string; jars: JarView[]; buttonLabel: string }) {
   const places = usePlaces(hid);
   const move = useMoveJars(hid);
-  const movable = jars.filter(onHand);
+  const movable = jars.filter(onShelf);
   const shared = movable.every((jar) => jar.placeId === movable[0]?.placeId) ? movable[0]?.placeId : undefined;
   const [to, setTo] = useState(shared ?? 'none');
   const choices = places.data ?? [];
@@ -37,7 +38,7 @@ export function MoveJarsForm({ hid, jars, buttonLabel }: { hid: string; jars: Ja
         <div className="min-w-48 flex-1">
           <SelectField
             label={
-              jars.length > 1 ? `${PLACE_WORDS.moveTo} (${count(movable.length, 'jar')} on hand)` : PLACE_WORDS.moveTo
+              jars.length > 1 ? `${PLACE_WORDS.moveTo} (${count(movable.length, 'sealed jar')})` : PLACE_WORDS.moveTo
             }
             value={to}
             onChange={(e) => setTo(e.target.value)}

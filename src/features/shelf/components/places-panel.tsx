@@ -112,7 +112,7 @@ function PlaceRow({
         <div className="flex flex-wrap items-center justify-between gap-2">
           <span>
             <span className="font-bold">{place.name}</span>{' '}
-            <span className="tabular text-ink-muted">{count(place.jarsOnHand, 'jar')}</span>
+            <span className="tabular text-ink-muted">{count(place.sealedJars, 'sealed jar')}</span>
           </span>
           {canCook && mode === 'view' && (
             <span className="flex gap-1">
@@ -122,7 +122,7 @@ function PlaceRow({
               <Button
                 variant="quiet"
                 aria-label={`Remove ${place.name}`}
-                onClick={() => (place.jarsOnHand > 0 ? setMode('remove') : remove.mutate(undefined))}
+                onClick={() => (place.sealedJars > 0 ? setMode('remove') : remove.mutate(undefined))}
                 disabled={remove.isPending}
               >
                 Remove
@@ -134,8 +134,8 @@ function PlaceRow({
       {mode === 'remove' && (
         <div className="flex flex-col gap-2 rounded-card border border-soon-fill bg-soon-soft p-3">
           <p>
-            {place.name} holds {count(place.jarsOnHand, 'jar')}. Where should {place.jarsOnHand === 1 ? 'it' : 'they'}{' '}
-            go?
+            {place.name} holds {count(place.sealedJars, 'sealed jar')}. Where should{' '}
+            {place.sealedJars === 1 ? 'it' : 'they'} go?
           </p>
           <SelectField label={PLACE_WORDS.moveTo} value={moveTo} onChange={(e) => setMoveTo(e.target.value)}>
             <option value="none">{PLACE_WORDS.none}</option>
