@@ -6,7 +6,7 @@ import { PRODUCT_KINDS, type ProductKind } from '../domain/products';
 import { JAR_STATES, type JarState } from '../domain/shelf-life';
 import { JAR_SIZES, type JarSize } from '../domain/units';
 import { JAR_STATE_NAMES, METHOD_NAMES, PRODUCT_KIND_NAMES } from './names';
-import { PLACE_CSV_HELP } from './places';
+import { PLACE_CSV_HELP } from './shelf-places';
 import { JAR_SIZE_NAMES } from './units';
 
 const STATE_WORDS: Record<JarState, string> = {

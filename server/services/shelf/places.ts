@@ -2,7 +2,7 @@
 import { fn, col, Op, QueryTypes, UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type { JarsMoved, PlaceBody, PlaceView } from '../../../shared/schemas/places';
 import { LIMITS } from '../../../shared/schemas/limits';
-import { PLACE_NAME_TAKEN, placeHoldsJarsWords } from '../../../shared/words/places';
+import { PLACE_NAME_TAKEN, placeHoldsJarsWords } from '../../../shared/words/shelf-places';
 import { Jar, JarEvent, Place, type Household } from '../../db/models';
 import { AppError, conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';

@@ -12,7 +12,7 @@ import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
 import { paths } from '@shared/paths';
-import { PLACE_WORDS } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },

@@ -9,9 +9,9 @@ import {
   jarSizeWords,
   METHOD_NAMES,
   minutesWords,
-  placeMoveWords,
   pressureWords,
 } from '@shared/words';
+import { placeMoveWords } from '@shared/words/shelf-places';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';

@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import type { PlaceView } from '@shared/schemas/places';
-import { count, PLACE_WORDS } from '@shared/words';
+import { count } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import { Button } from '@/components/ui/button';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

@@ -9,10 +9,10 @@ import {
   PRODUCT_COLOUR_NAMES,
   PRODUCT_COLOURS,
   PRODUCT_KIND_NAMES,
-  PLACE_WORDS,
   type ProductColour,
   USE_WITHIN_DEFAULT_HINT,
 } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import { FormFooter } from '@/components/ui/form-footer';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { ApiError } from '@/lib/api-client';

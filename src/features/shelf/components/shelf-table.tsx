@@ -9,7 +9,8 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, jarSizeWords, PLACE_WORDS, PRODUCT_KIND_NAMES } from '@shared/words';
+import { DATE_NAMES, dateWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import type { ProductKind } from '@shared/domain';
 import { CheckboxField, SelectField } from '@/components/ui/field';
 import type { ShelfBatchRow } from '../shelf-rows';
