@@ -297,3 +297,30 @@ describe('shelf filters and the oldest jar', () => {
     await keeper.patch(`${base}/places/${place.id}`).send({ name: place.name });
   });
 });
+
+describe('moves and a removal at the same time', () => {
+  it('never loses a jar: each move lands before the removal (and goes where its jars go) or is refused after it', async () => {
+    const cook = await ctx.signedIn('cook@larderly.test');
+    const helper = await ctx.signedIn('helper@larderly.test');
+    const doomed = (await cook.post(`${base}/places`).send({ name: 'Porch crate' })).body.place as PlaceView;
+    const pantry = (await placesOf(cook)).find((p) => p.name === 'Pantry shelf')!;
+    const jars = (await jarsOf(cook, '?state=sealed')).filter((j) => j.productName === 'Smoky Tomato Jam').slice(0, 8);
+    expect(jars.length).toBeGreaterThanOrEqual(4);
+    const answers = await Promise.all([
+      ...jars.map((jar) => helper.post(`${base}/jars/move`).send({ jarIds: [jar.id], placeId: doomed.id })),
+      cook.delete(`${base}/places/${doomed.id}?moveTo=${pantry.id}`),
+    ]);
+    const statuses = answers.map((a) => a.status);
+    expect(
+      statuses.every((s) => s === 200 || s === 404),
+      JSON.stringify(statuses),
+    ).toBe(true);
+    expect(statuses.at(-1)).toBe(200);
+    const after = new Map((await jarsOf(cook, '?state=sealed')).map((j) => [j.id, j.placeId]));
+    // A jar whose move was answered 200 went to Porch crate before it was removed, so it is in the Pantry shelf now.
+    jars.forEach((jar, index) => {
+      if (answers[index]!.status === 200) expect(after.get(jar.id)).toBe(pantry.id);
+      else expect(after.get(jar.id)).toBe(jar.placeId);
+    });
+  });
+});

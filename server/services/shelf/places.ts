@@ -35,8 +35,13 @@ export async function listPlaces(householdId: string): Promise<PlaceView[]> {
   return places.map((place) => ({ id: place.id, name: place.name, sealedJars: jarsAt.get(place.id) ?? 0 }));
 }
 
+/** With a transaction the place is share-locked, so a removal running at the same time waits, or wins first. */
 export async function findPlace(householdId: string, placeId: string, transaction?: Transaction) {
-  const place = await Place.findOne({ where: { householdId, id: placeId }, transaction });
+  const place = await Place.findOne({
+    where: { householdId, id: placeId },
+    transaction,
+    lock: transaction ? transaction.LOCK.SHARE : undefined,
+  });
   if (!place) throw notFound('That place');
   return place;
 }
