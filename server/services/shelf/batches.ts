@@ -1,4 +1,4 @@
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
@@ -63,15 +63,17 @@ export async function createBatch(
     altitudeFt: household.altitudeFt,
   });
   if (!plan.allowed) throw notAllowed(plan);
-  // Left out, the jars go to the product's usual place; a place since removed leaves them with none.
-  const place =
+  // Left out, the jars go to the product's usual place. Read in the write's transaction, share-locked, so a place
+  // removed at the same time is either still there for the jars or refused (a usual place since removed: none).
+  const placeFor = (transaction: Transaction) =>
     input.placeId !== undefined
-      ? await placeOfHousehold(household.id, input.placeId, 'placeId')
+      ? placeOfHousehold(household.id, input.placeId, 'placeId', transaction)
       : product.defaultPlaceId
-        ? await Place.findOne({ where: { householdId: household.id, id: product.defaultPlaceId } })
+        ? placeOfHousehold(household.id, product.defaultPlaceId, 'placeId', transaction).catch(() => null)
         : null;
 
   const { batch, jars } = await withFreshJarCodes(sequelize, async (transaction) => {
+    const place = await placeFor(transaction);
     const made = await writeBatch(
       household,
       product,

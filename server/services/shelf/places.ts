@@ -57,7 +57,11 @@ export async function placeOfHousehold(
   transaction?: Transaction,
 ): Promise<Place | null> {
   if (placeId === null) return null;
-  const place = await Place.findOne({ where: { householdId, id: placeId }, transaction });
+  const place = await Place.findOne({
+    where: { householdId, id: placeId },
+    transaction,
+    lock: transaction ? transaction.LOCK.SHARE : undefined,
+  });
   if (!place)
     throw new AppError(400, 'invalid_input', 'That place was not found. Choose one of the household’s places.', {
       [field]: 'Choose a place from the list.',
