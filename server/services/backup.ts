@@ -90,6 +90,8 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['useBy', 'use_by', 'date'],
       ['finishedOn', 'finished_on', 'date'],
       ['discardedOn', 'discarded_on', 'date'],
+      ['givenOn', 'given_on', 'date'],
+      ['givenTo', 'given_to', 'varchar'],
       ['code', 'code', 'varchar'],
     ],
   },
@@ -102,6 +104,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['batchId', 'batch_id', 'uuid', 'batches'],
       ['kind', 'kind', 'varchar'],
       ['happenedOn', 'happened_on', 'date'],
+      ['givenTo', 'given_to', 'varchar'],
     ],
   },
   {

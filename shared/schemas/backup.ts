@@ -95,6 +95,9 @@ const jar = z.object({
   useBy: date.nullable(),
   finishedOn: date.nullable(),
   discardedOn: date.nullable(),
+  // Older files carry no gifts; their jars were not given.
+  givenOn: date.nullable().optional(),
+  givenTo: text(N.giftRecipient).nullable().optional(),
   // Older files carry no label codes; the import then gives fresh ones.
   code: z
     .string()
@@ -106,8 +109,20 @@ const jarEvent = z.object({
   id,
   jarId: id,
   batchId: id,
-  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored', 'seal-checked', 'reprocessed']),
+  kind: z.enum([
+    'filled',
+    'unsealed',
+    'opened',
+    'finished',
+    'discarded',
+    'given',
+    'restored',
+    'seal-checked',
+    'reprocessed',
+  ]),
   happenedOn: date,
+  // Older files carry no gifts.
+  givenTo: text(N.giftRecipient).nullable().optional(),
 });
 
 const meal = z.object({

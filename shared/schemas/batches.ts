@@ -114,7 +114,7 @@ export const planQuery = z.object({
 });
 
 export const jarStateQuery = z.object({
-  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded']), z.literal('all')]).optional(),
+  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded', 'given']), z.literal('all')]).optional(),
   productId: z.uuid().optional(),
   batchId: z.uuid().optional(),
 });
@@ -132,6 +132,9 @@ export interface JarView {
   useBy: string | null;
   finishedOn: string | null;
   discardedOn: string | null;
+  /** The day the jar was given away, and to whom when the giver said. */
+  givenOn: string | null;
+  givenTo: string | null;
   capacityTbsp: number;
   remainingTbsp: number;
   batchId: string;
@@ -173,6 +176,8 @@ export interface JarEventView {
   kind: string;
   happenedOn: string;
   jarCode: string;
+  /** A gift's recipient, when the giver named one. */
+  givenTo: string | null;
   who: string | null;
 }
 
@@ -211,6 +216,27 @@ export interface JarByCode {
 
 /** How long a helper may undo their own open, finish or discard; cooks and keepers may put a jar back any time. */
 export const JAR_UNDO_MINUTES = 10;
+
+/** Giving a jar away: to whom is optional; control characters are refused, and blank means nobody named. */
+export const jarGiveBody = z.object({
+  to: z
+    .string({ error: 'Write whom the jar went to, or leave it empty.' })
+    .trim()
+    .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
+    // eslint-disable-next-line no-control-regex
+    .refine((value) => !/[\u0000-\u001f\u007f]/.test(value), 'Write the name on one line, without special characters.')
+    .optional()
+    .nullable()
+    .transform((value) => (value ? value : null)),
+});
+export type JarGive = z.input<typeof jarGiveBody>;
+
+/** Jars given away in the household's calendar year, all together and by product (most given first). */
+export interface GiftsThisYear {
+  year: number;
+  jars: number;
+  byProduct: { productId: string; productName: string; jars: number }[];
+}
 
 export const jarUndoBody = z.object({ eventId: z.uuid({ error: 'Say which change to undo.' }) });
 

@@ -47,6 +47,8 @@ export const LIMITS = {
     source: 500,
     householdName: 80,
     personName: 80,
+    /** Whom a jar was given to (a name or a few words, optional). */
+    giftRecipient: 80,
   },
 } as const;
 

@@ -20,6 +20,7 @@ export const shelfKeys = {
   batches: (hid: string) => ['households', hid, 'shelf', 'batches'] as const,
   batch: (hid: string, batchId: string) => ['households', hid, 'shelf', 'batches', batchId] as const,
   jars: (hid: string, state: string) => ['households', hid, 'shelf', 'jars', state] as const,
+  gifts: (hid: string) => ['households', hid, 'shelf', 'gifts'] as const,
   /** A label's page is read by jar code, before its household is known, so it sits outside the household. */
   jarsByCode: () => ['jar-by-code'] as const,
   jarByCode: (code: string) => ['jar-by-code', code] as const,

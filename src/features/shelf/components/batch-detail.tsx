@@ -27,6 +27,7 @@ const EVENT_WORDS: Record<string, string> = {
   opened: 'opened',
   finished: 'finished',
   discarded: 'discarded',
+  given: 'given away',
   restored: 'put back (the change before was undone)',
 };
 
@@ -145,6 +146,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
               <li key={event.id} className="tabular">
                 <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar{' '}
                 <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
+                {event.kind === 'given' && event.givenTo ? ` to ${event.givenTo}` : ''}
                 {event.who ? ` by ${event.who}` : ''}
               </li>
             ))}
