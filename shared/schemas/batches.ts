@@ -217,14 +217,20 @@ export interface JarByCode {
 /** How long a helper may undo their own open, finish or discard; cooks and keepers may put a jar back any time. */
 export const JAR_UNDO_MINUTES = 10;
 
-/** Giving a jar away: to whom is optional; control characters are refused, and blank means nobody named. */
+/**
+ * Giving a jar away: to whom is optional, one line of plain text. Control characters and the invisible marks that
+ * turn text around (which could make a history line read as something else) are refused; blank means nobody named.
+ */
 export const jarGiveBody = z.object({
   to: z
     .string({ error: 'Write whom the jar went to, or leave it empty.' })
     .trim()
     .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
-    // eslint-disable-next-line no-control-regex
-    .refine((value) => !/[\u0000-\u001f\u007f]/.test(value), 'Write the name on one line, without special characters.')
+    .refine(
+      // eslint-disable-next-line no-control-regex
+      (value) => !/[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/.test(value),
+      'Write the name on one line, in plain letters, without special characters.',
+    )
     .optional()
     .nullable()
     .transform((value) => (value ? value : null)),
