@@ -122,7 +122,15 @@ export function restockSuggestions(input: RestockInput): RestockResult {
   const forecasts: RestockForecast[] = [];
   const suggestions: RestockSuggestion[] = [];
   for (const product of products) {
-    const base = forecastProduct({ productId: product.id, today, horizonDays: leadDays, jars, finished, given, planned });
+    const base = forecastProduct({
+      productId: product.id,
+      today,
+      horizonDays: leadDays,
+      jars,
+      finished,
+      given,
+      planned,
+    });
     const forecast = {
       ...base,
       projectedJars: Math.floor(base.tbspLeftOnHorizon / jarCapacityTbsp(product.jarSize) + CRUMB_JARS),

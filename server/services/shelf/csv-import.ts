@@ -413,7 +413,12 @@ async function applyJarRows(
     }
     changes.state = row.state;
     await jar.update(changes, { transaction });
-    const day = { opened: changes.openedOn, finished: row.finished_on, discarded: row.discarded_on, given: row.given_on };
+    const day = {
+      opened: changes.openedOn,
+      finished: row.finished_on,
+      discarded: row.discarded_on,
+      given: row.given_on,
+    };
     if (events.length)
       await JarEvent.bulkCreate(
         events.map((kind) => ({
