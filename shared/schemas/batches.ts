@@ -221,16 +221,19 @@ export const JAR_UNDO_MINUTES = 10;
  * Giving a jar away: to whom is optional, one line of plain text. Control characters and the invisible marks that
  * turn text around (which could make a history line read as something else) are refused; blank means nobody named.
  */
+/** Whom a jar went to, as every door takes it (the give form, the CSV import): trimmed, bounded, plain. */
+export const giftRecipientText = z
+  .string({ error: 'Write whom the jar went to, or leave it empty.' })
+  .trim()
+  .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
+  .refine(
+    // eslint-disable-next-line no-control-regex
+    (value) => !/[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/.test(value),
+    'Write the name on one line, in plain letters, without special characters.',
+  );
+
 export const jarGiveBody = z.object({
-  to: z
-    .string({ error: 'Write whom the jar went to, or leave it empty.' })
-    .trim()
-    .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
-    .refine(
-      // eslint-disable-next-line no-control-regex
-      (value) => !/[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/.test(value),
-      'Write the name on one line, in plain letters, without special characters.',
-    )
+  to: giftRecipientText
     .optional()
     .nullable()
     .transform((value) => (value ? value : null)),

@@ -148,6 +148,29 @@ describe('giving a jar away', () => {
   });
 });
 
+describe('gifts in the shelf file', () => {
+  it('imports a given jar with its day and recipient, and asks for the day when it is missing', async () => {
+    const header = 'batch,product,state,canned_on,jar_size,method,minutes,given_on,given_to';
+    const row = (state: string, givenOn = '', to = '') =>
+      `1,Pickled Beets,${state},2026-09-01,pint,boiling-water,10,${givenOn},${to}`;
+    const missing = await cook
+      .post(`${base}/shelf/import`)
+      .send({ csv: [header, row('sealed'), row('given')].join('\n') });
+    expect(missing.body.problems).toContainEqual(
+      expect.objectContaining({ field: 'given_on', message: 'A given jar needs the day it was given away.' }),
+    );
+    const csv = [header, row('sealed'), row('given', '2026-11-20', 'the Lindqvists across the lane')].join('\n');
+    expect((await cook.post(`${base}/shelf/import`).send({ csv, commit: true })).status).toBe(201);
+    const given = await Jar.findOne({
+      where: { householdId: ctx.householdId, givenTo: 'the Lindqvists across the lane' },
+    });
+    expect(given).toMatchObject({ state: 'given', givenOn: '2026-11-20' });
+    expect(await history(cook, given!.batchId, given!.code)).toContainEqual(
+      expect.objectContaining({ kind: 'given', happenedOn: '2026-11-20', givenTo: 'the Lindqvists across the lane' }),
+    );
+  });
+});
+
 interface Forecast {
   productId: string;
   historyTbspPerDay: number;

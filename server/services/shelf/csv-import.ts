@@ -14,7 +14,7 @@ import {
   type Method,
   type ProductKind,
 } from '../../../shared/domain';
-import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
+import { giftRecipientText, type ImportProblem, type ImportRow } from '../../../shared/schemas/batches';
 import { LIMITS, limitWords } from '../../../shared/schemas/limits';
 import { csvChoiceList, readCsvChoice, type CsvChoiceColumn } from '../../../shared/words/csv';
 import { Jar, JarEvent, Product, Recipe, type Household } from '../../db/models';
@@ -128,12 +128,7 @@ const jarRow = z.object({
   finished_on: optionalDate,
   discarded_on: optionalDate,
   given_on: optionalDate,
-  given_to: z
-    .string()
-    .trim()
-    .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
-    .optional()
-    .default(''),
+  given_to: giftRecipientText.optional().default(''),
 });
 type JarRow = z.infer<typeof jarRow>;
 
