@@ -149,6 +149,8 @@ export interface JarFates {
   /** opened and still in the fridge */
   opened?: number[];
   discarded?: number[];
+  /** given away, and to whom when the giver said */
+  given?: { daysAgo: number; to?: string }[];
 }
 
 export interface DemoBatch {
@@ -273,7 +275,14 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     sealed: 7,
     fates: { finished: [78, 58, 37], opened: [16] },
   },
-  { product: 'Roasted Salsa Verde', daysAgo: 95, jarSize: 'pint', filled: 5, sealed: 5, fates: { finished: [70, 33] } },
+  {
+    product: 'Roasted Salsa Verde',
+    daysAgo: 95,
+    jarSize: 'pint',
+    filled: 5,
+    sealed: 5,
+    fates: { finished: [70, 33], given: [{ daysAgo: 6 }] },
+  },
   {
     product: 'Hot Pepper Jelly',
     daysAgo: 90,
@@ -281,7 +290,12 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     filled: 6,
     sealed: 5,
     notes: 'Set softer than usual. One jar did not seal.',
-    fates: {},
+    fates: {
+      given: [
+        { daysAgo: 9, to: 'the Okafors next door' },
+        { daysAgo: 2, to: 'Wren, for the cheese board' },
+      ],
+    },
     unsealedFates: [{ discarded: 80 }],
   },
   {

@@ -92,6 +92,8 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['useBy', 'use_by', 'date'],
       ['finishedOn', 'finished_on', 'date'],
       ['discardedOn', 'discarded_on', 'date'],
+      ['givenOn', 'given_on', 'date'],
+      ['givenTo', 'given_to', 'varchar'],
       ['code', 'code', 'varchar'],
       ['placeId', 'place_id', 'uuid', 'places'],
     ],
@@ -106,6 +108,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['kind', 'kind', 'varchar'],
       ['happenedOn', 'happened_on', 'date'],
       ['placeMove', 'place_move', 'jsonb'],
+      ['givenTo', 'given_to', 'varchar'],
     ],
   },
   {

@@ -100,6 +100,9 @@ const jar = z.object({
   useBy: date.nullable(),
   finishedOn: date.nullable(),
   discardedOn: date.nullable(),
+  // Older files carry no gifts; their jars were not given.
+  givenOn: date.nullable().optional(),
+  givenTo: text(N.giftRecipient).nullable().optional(),
   // Older files carry no label codes; the import then gives fresh ones.
   code: z
     .string()
@@ -118,12 +121,15 @@ const jarEvent = z.object({
     'opened',
     'finished',
     'discarded',
+    'given',
     'restored',
     'seal-checked',
     'reprocessed',
     'moved',
   ]),
   happenedOn: date,
+  // Older files carry no gifts.
+  givenTo: text(N.giftRecipient).nullable().optional(),
   placeMove: z
     .object({ from: text(N.placeName).nullable(), to: text(N.placeName).nullable() })
     .strict()

@@ -116,7 +116,7 @@ export const planQuery = z.object({
 });
 
 export const jarStateQuery = z.object({
-  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded']), z.literal('all')]).optional(),
+  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded', 'given']), z.literal('all')]).optional(),
   productId: z.uuid().optional(),
   batchId: z.uuid().optional(),
   /** A place's id, or 'none' for jars with no place named. */
@@ -136,6 +136,9 @@ export interface JarView {
   useBy: string | null;
   finishedOn: string | null;
   discardedOn: string | null;
+  /** The day the jar was given away, and to whom when the giver said. */
+  givenOn: string | null;
+  givenTo: string | null;
   capacityTbsp: number;
   remainingTbsp: number;
   batchId: string;
@@ -180,6 +183,8 @@ export interface JarEventView {
   kind: string;
   happenedOn: string;
   jarCode: string;
+  /** A gift's recipient, when the giver named one. */
+  givenTo: string | null;
   who: string | null;
   /** For a move: the place names it moved between. */
   placeMove?: { from: string | null; to: string | null } | null;
@@ -220,6 +225,36 @@ export interface JarByCode {
 
 /** How long a helper may undo their own open, finish or discard; cooks and keepers may put a jar back any time. */
 export const JAR_UNDO_MINUTES = 10;
+
+/**
+ * Giving a jar away: to whom is optional, one line of plain text. Control characters and the invisible marks that
+ * turn text around (which could make a history line read as something else) are refused; blank means nobody named.
+ */
+/** Whom a jar went to, as every door takes it (the give form, the CSV import): trimmed, bounded, plain. */
+export const giftRecipientText = z
+  .string({ error: 'Write whom the jar went to, or leave it empty.' })
+  .trim()
+  .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
+  .refine(
+    // eslint-disable-next-line no-control-regex
+    (value) => !/[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/.test(value),
+    'Write the name on one line, in plain letters, without special characters.',
+  );
+
+export const jarGiveBody = z.object({
+  to: giftRecipientText
+    .optional()
+    .nullable()
+    .transform((value) => (value ? value : null)),
+});
+export type JarGive = z.input<typeof jarGiveBody>;
+
+/** Jars given away in the household's calendar year, all together and by product (most given first). */
+export interface GiftsThisYear {
+  year: number;
+  jars: number;
+  byProduct: { productId: string; productName: string; jars: number }[];
+}
 
 export const jarUndoBody = z.object({ eventId: z.uuid({ error: 'Say which change to undo.' }) });
 

@@ -50,6 +50,8 @@ export const LIMITS = {
     householdName: 80,
     personName: 80,
     placeName: 60,
+    /** Whom a jar was given to (a name or a few words, optional). */
+    giftRecipient: 80,
   },
 } as const;
 

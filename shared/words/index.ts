@@ -6,5 +6,6 @@ export * from './names';
 export * from './countdown';
 export * from './cautions';
 export * from './seal-check';
+export * from './gifts';
 export * from './ingredients';
 export * from './places';

@@ -21,6 +21,7 @@ export const shelfKeys = {
   batch: (hid: string, batchId: string) => ['households', hid, 'shelf', 'batches', batchId] as const,
   jars: (hid: string, state: string) => ['households', hid, 'shelf', 'jars', state] as const,
   places: (hid: string) => ['households', hid, 'shelf', 'places'] as const,
+  gifts: (hid: string) => ['households', hid, 'shelf', 'gifts'] as const,
   /** A label's page is read by jar code, before its household is known, so it sits outside the household. */
   jarsByCode: () => ['jar-by-code'] as const,
   jarByCode: (code: string) => ['jar-by-code', code] as const,

@@ -174,6 +174,13 @@ export const TABLE: Record<string, RouteRule> = {
   [`GET ${H}/jars/by-code/:code`]: { access: 'read' },
   [`GET ${H}/jars/:jarId/opening-advice`]: { access: 'read' },
   [`POST ${H}/jars/:jarId/:action`]: { access: 'handleJars', destructive: true },
+  // Giving a jar away is a jar action like the others: any member, and undone the same way (tests/api/gifts.test.ts).
+  [`POST ${H}/jars/:jarId/give`]: {
+    access: 'handleJars',
+    body: () => ({ to: 'the Okafors next door' }),
+    destructive: true,
+  },
+  [`GET ${H}/gifts`]: { access: 'read' },
   // Any member reaches the service, which lets a helper undo only their own recent change (tests/api/jar-undo.test.ts).
   [`POST ${H}/jars/:jarId/undo`]: {
     access: 'handleJars',

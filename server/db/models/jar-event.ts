@@ -15,6 +15,7 @@ export const JAR_EVENT_KINDS = [
   'opened',
   'finished',
   'discarded',
+  'given',
   'restored',
   'seal-checked',
   'reprocessed',
@@ -28,6 +29,9 @@ export interface JarBefore {
   useBy: string | null;
   finishedOn: string | null;
   discardedOn: string | null;
+  /** Absent from snapshots written before gifts existed; those jars were not given. */
+  givenOn?: string | null;
+  givenTo?: string | null;
   remainingTbsp: number;
 }
 
@@ -45,11 +49,13 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
   declare kind: JarEventKind;
   declare userId: string | null;
   declare happenedOn: string;
-  /** A 'restored' event names the open, finish or discard it reverses. */
+  /** A 'restored' event names the open, finish, discard or gift it reverses. */
   declare undoesEventId: CreationOptional<string | null>;
-  /** The jar's fields before an open, finish or discard, so an undo puts back exactly those. */
+  /** The jar's fields before an open, finish, discard or gift, so an undo puts back exactly those. */
   declare stateBefore: CreationOptional<JarBefore | null>;
   declare placeMove: CreationOptional<PlaceMove | null>;
+  /** A 'given' event: whom the jar went to, when the giver said. */
+  declare givenTo: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -65,6 +71,7 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
         undoesEventId: { type: DataTypes.UUID, allowNull: true },
         stateBefore: { type: DataTypes.JSONB, allowNull: true },
         placeMove: { type: DataTypes.JSONB, allowNull: true },
+        givenTo: { type: DataTypes.STRING(80), allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'jar_events', updatedAt: false },

@@ -28,6 +28,9 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
   declare useBy: CreationOptional<string | null>;
   declare finishedOn: CreationOptional<string | null>;
   declare discardedOn: CreationOptional<string | null>;
+  /** The day the jar was given away, and to whom when the giver said. */
+  declare givenOn: CreationOptional<string | null>;
+  declare givenTo: CreationOptional<string | null>;
   /** 'to-check' while the jar cools after processing and nobody has checked its lid yet. */
   declare seal: CreationOptional<JarSeal>;
   /** The jar's latest processing (null for jars recorded before processings were kept). */
@@ -55,6 +58,8 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
         useBy: { type: DataTypes.DATEONLY, allowNull: true },
         finishedOn: { type: DataTypes.DATEONLY, allowNull: true },
         discardedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        givenOn: { type: DataTypes.DATEONLY, allowNull: true },
+        givenTo: { type: DataTypes.STRING(80), allowNull: true },
         seal: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'checked' },
         processingId: { type: DataTypes.UUID, allowNull: true },
         placeId: { type: DataTypes.UUID, allowNull: true },

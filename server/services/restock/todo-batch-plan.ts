@@ -93,6 +93,7 @@ export async function addRestockTodo(
       remainingTbsp: jar.remainingTbsp,
     })),
     finished: snapshot.finished,
+    given: snapshot.given,
     planned: snapshot.planned,
   });
   const suggestion = suggestions[0];

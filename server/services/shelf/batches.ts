@@ -180,6 +180,7 @@ export async function batchDetail(household: Household, batchId: string): Promis
       kind: event.kind,
       happenedOn: event.happenedOn,
       jarCode: codes.get(event.jarId) ?? '',
+      givenTo: event.givenTo ?? null,
       who: (event as JarEvent & { user?: User | null }).user?.name ?? null,
       placeMove: event.placeMove ?? null,
     })),

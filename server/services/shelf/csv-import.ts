@@ -14,7 +14,7 @@ import {
   type Method,
   type ProductKind,
 } from '../../../shared/domain';
-import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
+import { giftRecipientText, type ImportProblem, type ImportRow } from '../../../shared/schemas/batches';
 import { LIMITS, limitWords } from '../../../shared/schemas/limits';
 import { csvChoiceList, readCsvChoice, type CsvChoiceColumn } from '../../../shared/words/csv';
 import { Jar, JarEvent, Place, Product, Recipe, type Household } from '../../db/models';
@@ -137,6 +137,8 @@ const jarRow = z.object({
   use_by: optionalDate,
   finished_on: optionalDate,
   discarded_on: optionalDate,
+  given_on: optionalDate,
+  given_to: giftRecipientText.optional().default(''),
 });
 type JarRow = z.infer<typeof jarRow>;
 
@@ -368,14 +370,22 @@ async function placesProblem(household: Household, planned: Planned[], problems:
 
 /** A jar row's dates fit its state: opened, finished and discarded jars say when, and nothing happens before canning or after today. */
 function jarDatesProblem(jar: JarRow, today: string): Omit<ImportProblem, 'row'> | null {
-  const need: Partial<Record<JarState, keyof JarRow>> = { finished: 'finished_on', discarded: 'discarded_on' };
+  const need: Partial<Record<JarState, keyof JarRow>> = {
+    finished: 'finished_on',
+    discarded: 'discarded_on',
+    given: 'given_on',
+  };
   if (jar.state === 'opened' && jar.unsealed !== 'yes' && !jar.opened_on)
     return { field: 'opened_on', message: 'An opened jar needs the day it was opened.' };
   const field = need[jar.state];
-  if (field && !jar[field]) return { field, message: `A ${jar.state} jar needs the day it was ${jar.state}.` };
+  if (field && !jar[field])
+    return {
+      field,
+      message: `A ${jar.state} jar needs the day it was ${jar.state === 'given' ? 'given away' : jar.state}.`,
+    };
   if (jar.state === 'sealed' && jar.unsealed === 'yes')
     return { field: 'unsealed', message: 'A jar that did not seal cannot be sealed; write opened.' };
-  for (const key of ['opened_on', 'finished_on', 'discarded_on'] as const) {
+  for (const key of ['opened_on', 'finished_on', 'discarded_on', 'given_on'] as const) {
     if (jar[key] && jar[key] < jar.canned_on) return { field: key, message: 'This day is before the jar was canned.' };
     if (jar[key] && jar[key] > today) return { field: key, message: 'This day is in the future.' };
   }
@@ -417,7 +427,7 @@ async function applyJarRows(
       changes.code = row.jar_code;
       free.delete(row.jar_code);
     }
-    const events: ('opened' | 'finished' | 'discarded')[] = [];
+    const events: ('opened' | 'finished' | 'discarded' | 'given')[] = [];
     const openedOn = row.opened_on || (jar.unsealed ? jar.openedOn : null);
     if (row.state !== 'sealed' && openedOn && !jar.unsealed) events.push('opened');
     if (row.state === 'opened' || (row.state !== 'sealed' && openedOn)) {
@@ -432,9 +442,18 @@ async function applyJarRows(
       changes.discardedOn = row.discarded_on;
       events.push('discarded');
     }
+    if (row.state === 'given') {
+      Object.assign(changes, { givenOn: row.given_on, givenTo: row.given_to || null });
+      events.push('given');
+    }
     changes.state = row.state;
     await jar.update(changes, { transaction });
-    const day = { opened: changes.openedOn, finished: row.finished_on, discarded: row.discarded_on };
+    const day = {
+      opened: changes.openedOn,
+      finished: row.finished_on,
+      discarded: row.discarded_on,
+      given: row.given_on,
+    };
     if (events.length)
       await JarEvent.bulkCreate(
         events.map((kind) => ({
@@ -444,6 +463,7 @@ async function applyJarRows(
           kind,
           userId,
           happenedOn: day[kind]!,
+          givenTo: kind === 'given' ? row.given_to || null : null,
         })),
         { transaction },
       );

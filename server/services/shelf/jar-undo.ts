@@ -1,4 +1,4 @@
-// Putting a jar back: an open, finish or discard reversed by a new event, never by erasing one.
+// Putting a jar back: an open, finish, discard or gift reversed by a new event, never by erasing one.
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type { JarState } from '../../../shared/domain';
 import { JAR_UNDO_MINUTES, type JarActed, type JarChange } from '../../../shared/schemas/batches';
@@ -9,18 +9,25 @@ import { conflict, forbidden, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
 import { jarView, shelfClock } from './views';
 
-const REVERSIBLE = ['opened', 'finished', 'discarded'] as const;
+const REVERSIBLE = ['opened', 'finished', 'discarded', 'given'] as const;
 type Reversible = (typeof REVERSIBLE)[number];
-const AFTER: Record<Reversible, JarState> = { opened: 'opened', finished: 'finished', discarded: 'discarded' };
+const AFTER: Record<Reversible, JarState> = {
+  opened: 'opened',
+  finished: 'finished',
+  discarded: 'discarded',
+  given: 'given',
+};
 
 export function jarBefore(jar: Jar): JarBefore {
-  const { state, openedOn, useBy, finishedOn, discardedOn, remainingTbsp } = jar;
+  const { state, openedOn, useBy, finishedOn, discardedOn, givenOn, givenTo, remainingTbsp } = jar;
   return {
     state,
     openedOn: openedOn ?? null,
     useBy: useBy ?? null,
     finishedOn: finishedOn ?? null,
     discardedOn: discardedOn ?? null,
+    givenOn: givenOn ?? null,
+    givenTo: givenTo ?? null,
     remainingTbsp: Number(remainingTbsp),
   };
 }
@@ -33,7 +40,15 @@ function inferredBefore(kind: Reversible, jar: Jar): JarBefore {
   const wasOpened = kind === 'finished' || jar.openedOn !== null;
   // How much a finished jar held is not recorded; a full jar's worth errs toward showing it, not hiding it.
   const remainingTbsp = kind === 'finished' || now.remainingTbsp <= 0 ? Number(jar.capacityTbsp) : now.remainingTbsp;
-  return { ...now, state: wasOpened ? 'opened' : 'sealed', finishedOn: null, discardedOn: null, remainingTbsp };
+  return {
+    ...now,
+    state: wasOpened ? 'opened' : 'sealed',
+    finishedOn: null,
+    discardedOn: null,
+    givenOn: null,
+    givenTo: null,
+    remainingTbsp,
+  };
 }
 
 const latestEvent = (jarId: string, transaction?: Transaction) =>
@@ -62,7 +77,7 @@ export async function lastJarChange(householdId: string, jarId: string): Promise
 }
 
 /**
- * Reverses one open, finish or discard. It must still be the jar's latest change (the jar row is
+ * Reverses one open, finish, discard or gift. It must still be the jar's latest change (the jar row is
  * locked while we look), so two people undoing at once, or an undo racing a new action, cannot both win.
  * Helpers may undo their own action for a short while; cooks and keepers may put a jar back any time.
  */

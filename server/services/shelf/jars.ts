@@ -1,7 +1,7 @@
 // Jars on the shelf and in the fridge, and the three things a member does with one.
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
-import type { JarAction, JarActed, JarByCode, OpeningAdvice } from '../../../shared/schemas/batches';
+import type { GiftsThisYear, JarAction, JarActed, JarByCode, OpeningAdvice } from '../../../shared/schemas/batches';
 import { Batch, Household, Jar, JarEvent, Membership, Place, Product } from '../../db/models';
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
@@ -44,19 +44,24 @@ const EVENT: Record<JarAction, 'opened' | 'finished' | 'discarded'> = {
   discard: 'discarded',
 };
 
-function refusal(action: JarAction, jar: Jar): string {
-  const already = {
+/** What has happened to a jar, as a refusal says it. */
+function jarNow(jar: Jar): string {
+  return {
     opened: `was opened on ${jar.openedOn}`,
     finished: `was finished on ${jar.finishedOn}`,
     discarded: `was discarded on ${jar.discardedOn}`,
+    given: `was given away on ${jar.givenOn}`,
     sealed: 'is still sealed',
   }[jar.state];
+}
+
+function refusal(action: JarAction, jar: Jar): string {
   const what = {
     open: 'Only a sealed jar can be opened.',
     finish: 'Only an opened jar can be finished; open it first.',
-    discard: 'A finished or discarded jar cannot be discarded.',
+    discard: 'A finished, discarded or given jar cannot be discarded.',
   }[action];
-  return `Jar ${jar.code} ${already}. ${what} Refresh to see its state now.`;
+  return `Jar ${jar.code} ${jarNow(jar)}. ${what} Refresh to see its state now.`;
 }
 
 /**
@@ -111,6 +116,78 @@ export async function actOnJar(
     );
     return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
   });
+}
+
+/**
+ * Gives a sealed jar away: it leaves the shelf in a state of its own, so its empty jar does not come back and the
+ * forecast does not count it as eaten. Only a jar known to be sealed goes: one still cooling is checked first
+ * (USDA Complete Guide to Home Canning, 2015: check the seals 12 to 24 hours after processing), and an unsealed jar
+ * is in the fridge already (NCHFP: refrigerate it or reprocess it). The same conditional UPDATE as actOnJar is the lock.
+ */
+export async function giveJar(
+  sequelize: Sequelize,
+  household: Household,
+  jarId: string,
+  to: string | null,
+  userId: string,
+): Promise<JarActed> {
+  const today = todayIn(household.timeZone);
+  return sequelize.transaction(async (transaction) => {
+    const jar = (await Jar.findOne({
+      where: { id: jarId, householdId: household.id },
+      include: withParts,
+      transaction,
+    })) as JarWithParts | null;
+    if (!jar) throw notFound('That jar');
+    const [count, rows] = await Jar.update(
+      { state: 'given', givenOn: today, givenTo: to },
+      { where: { id: jar.id, state: 'sealed', seal: 'checked' }, returning: true, transaction },
+    );
+    if (count === 0) {
+      await jar.reload({ transaction });
+      if (jar.state === 'sealed')
+        throw conflict(`Jar ${jar.code} is still cooling and its seal is not checked yet. Check its seal first.`);
+      throw conflict(
+        `Jar ${jar.code} ${jarNow(jar)}. Only a sealed jar on the shelf can be given away. Refresh to see its state now.`,
+      );
+    }
+    const event = await JarEvent.create(
+      {
+        householdId: household.id,
+        jarId: jar.id,
+        batchId: jar.batchId,
+        kind: 'given',
+        userId,
+        happenedOn: today,
+        givenTo: to,
+        stateBefore: jarBefore(jar),
+      },
+      { transaction },
+    );
+    return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
+  });
+}
+
+/** How many jars the household gave away this calendar year (its own time zone's year), by product. */
+export async function giftsThisYear(household: Household): Promise<GiftsThisYear> {
+  const today = todayIn(household.timeZone);
+  const year = Number(today.slice(0, 4));
+  const jars = await Jar.findAll({
+    where: { householdId: household.id, state: 'given', givenOn: { [Op.gte]: `${year}-01-01`, [Op.lte]: today } },
+    attributes: ['productId'],
+    include: [{ model: Product, as: 'product', required: true, attributes: ['id', 'name'] }],
+  });
+  const byProduct = new Map<string, { productId: string; productName: string; jars: number }>();
+  for (const jar of jars as (Jar & { product: Product })[]) {
+    const entry = byProduct.get(jar.productId) ?? { productId: jar.productId, productName: jar.product.name, jars: 0 };
+    entry.jars += 1;
+    byProduct.set(jar.productId, entry);
+  }
+  return {
+    year,
+    jars: jars.length,
+    byProduct: [...byProduct.values()].sort((a, b) => b.jars - a.jars || a.productName.localeCompare(b.productName)),
+  };
 }
 
 /**

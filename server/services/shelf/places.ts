@@ -13,6 +13,7 @@ const NOT_ON_SHELF: Record<string, string> = {
   opened: 'is opened, so it lives in the fridge',
   finished: 'is finished',
   discarded: 'is discarded',
+  given: 'was given away',
 };
 
 function sameName(error: unknown, name: string): never {

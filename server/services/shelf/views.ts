@@ -64,6 +64,8 @@ export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnT
     useBy: jar.useBy,
     finishedOn: jar.finishedOn,
     discardedOn: jar.discardedOn,
+    givenOn: jar.givenOn ?? null,
+    givenTo: jar.givenTo ?? null,
     capacityTbsp: jar.capacityTbsp,
     remainingTbsp: jar.remainingTbsp,
     batchId: batch.id,

@@ -1,6 +1,7 @@
 import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
+import { giftsThisYearWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -60,7 +61,9 @@ export function RestockRoute() {
               Every product
             </h2>
             <p className="mb-3 max-w-prose text-ink-muted">
-              The rate is the larger of the last twelve weeks’ finished jars and the meals planned from today.
+              The rate is the larger of the last twelve weeks’ finished jars and the meals planned from today. Jars
+              given away are counted apart: they leave the shelf but do not raise the rate.{' '}
+              {giftsThisYearWords(restock.data.givenThisYear, Number(restock.data.today.slice(0, 4)))}
             </p>
             {restock.data.forecasts.length === 0 ? (
               <EmptyState title="No products yet">

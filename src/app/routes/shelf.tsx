@@ -1,12 +1,14 @@
 import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
+import { giftsThisYearWords } from '@shared/words';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useJars } from '@/features/shelf/api/get-jars';
 import { usePlaces } from '@/features/shelf/api/get-places';
+import { useGifts } from '@/features/shelf/api/give-jar';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
@@ -26,6 +28,11 @@ export function ShelfRoute() {
   const { hid, role } = useCurrentHousehold();
   const jars = useJars(hid);
   const products = useProducts(hid);
+  const gifts = useGifts(hid);
+  const givenByProduct = useMemo(
+    () => new Map((gifts.data?.byProduct ?? []).map((entry) => [entry.productId, entry.jars])),
+    [gifts.data],
+  );
   const [params, setParams] = useSearchParams();
   const places = usePlaces(hid);
   const view = params.get('view') === 'table' ? 'table' : 'cards';
@@ -65,7 +72,7 @@ export function ShelfRoute() {
         title="Shelf"
         lead={
           jars.data
-            ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.`
+            ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.${gifts.data && gifts.data.jars > 0 ? ` ${giftsThisYearWords(gifts.data.jars, gifts.data.year)}` : ''}`
             : 'Every sealed jar, by product and batch, oldest first.'
         }
         actions={
@@ -150,7 +157,13 @@ export function ShelfRoute() {
           {view === 'table' ? (
             <ShelfTable hid={hid} rows={shownRows} />
           ) : (
-            <ShelfCards hid={hid} groups={shownGroups} canHandleJars={can(role, 'handleJars')} canCook={canCook} />
+            <ShelfCards
+              hid={hid}
+              groups={shownGroups}
+              canHandleJars={can(role, 'handleJars')}
+              canCook={canCook}
+              givenThisYear={givenByProduct}
+            />
           )}
         </div>
       )}

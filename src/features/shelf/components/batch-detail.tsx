@@ -29,6 +29,7 @@ const EVENT_WORDS: Record<string, string> = {
   opened: 'opened',
   finished: 'finished',
   discarded: 'discarded',
+  given: 'given away',
   restored: 'put back (the change before was undone)',
   moved: 'moved',
 };
@@ -153,6 +154,7 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                 <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar{' '}
                 <span className="font-mono">{event.jarCode}</span>{' '}
                 {event.placeMove ? placeMoveWords(event.placeMove) : (EVENT_WORDS[event.kind] ?? event.kind)}
+                {event.kind === 'given' && event.givenTo ? ` to ${event.givenTo}` : ''}
                 {event.who ? ` by ${event.who}` : ''}
               </li>
             ))}

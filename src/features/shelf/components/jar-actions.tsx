@@ -4,6 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useState } from 'react';
 import { useActOnJar } from '../api/act-on-jar';
+import { GiveJar } from './give-jar';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 
 const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> = {
@@ -17,9 +18,10 @@ const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> 
   ],
   finished: [],
   discarded: [],
+  given: [],
 };
 
-/** The three things any member may do with a jar; a 409 says someone else got there first. */
+/** What any member may do with a jar (a sealed one may also be given away); a 409 says someone else got there first. */
 export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: JarView; size?: 'normal' | 'large' }) {
   const act = useActOnJar(hid);
   const [justOpened, setJustOpened] = useState<OpenableJar | null>(null);
@@ -59,6 +61,7 @@ export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: Ja
             </Button>
           ),
         )}
+        {jar.state === 'sealed' && jar.seal === 'checked' && <GiveJar hid={hid} jar={jar} size={size} />}
       </div>
       {justOpened && <OpeningChecks code={justOpened.code} productName={justOpened.productName} />}
       {act.error && (

@@ -1,9 +1,19 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, heatWords, jarSizeWords, placeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import {
+  count,
+  DATE_NAMES,
+  dateWords,
+  GIFT_WORDS,
+  heatWords,
+  jarSizeWords,
+  placeWords,
+  PRODUCT_KIND_NAMES,
+} from '@shared/words';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
+import { GiveJar } from './give-jar';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 import { paths } from '@shared/paths';
 
@@ -12,11 +22,14 @@ export function ShelfCards({
   groups,
   canHandleJars,
   canCook,
+  givenThisYear,
 }: {
   hid: string;
   groups: ShelfProductGroup[];
   canHandleJars: boolean;
   canCook: boolean;
+  /** Jars of each product given away this year, by product id. */
+  givenThisYear: Map<string, number>;
 }) {
   const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});
   return (
@@ -61,6 +74,11 @@ export function ShelfCards({
             </p>
           )}
           {group.opened > 0 && <p className="text-sm text-info">{group.opened} opened in the fridge</p>}
+          {(givenThisYear.get(group.product.id) ?? 0) > 0 && (
+            <p className="text-sm text-ink-muted">
+              {count(givenThisYear.get(group.product.id)!, 'jar')} given away this year
+            </p>
+          )}
           {group.batches.length > 0 && (
             <ul className="divide-y divide-line border-y border-line text-[0.95rem]">
               {group.batches.map((row) => (
@@ -94,6 +112,9 @@ export function ShelfCards({
                 ariaLabel={`Open oldest jar of ${group.product.name}`}
                 onOpened={(jar) => setJustOpened((all) => ({ ...all, [group.product.id]: jar }))}
               />
+            )}
+            {canHandleJars && group.nextJar?.seal === 'checked' && (
+              <GiveJar hid={hid} jar={group.nextJar} label={`${GIFT_WORDS.action} jar ${group.nextJar.code}`} />
             )}
             {canCook && (
               <Link
