@@ -1,6 +1,7 @@
 // Today: what to open and use from the week's allocation, the fridge countdowns, restock and my to-dos, in one read.
 import { addDays, allocateWeek, daysBetween, type Id, type PlannedPortion } from '../../shared/domain';
 import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/today';
+import { placeWords } from '../../shared/words/shelf-places';
 import { Household, Jar, Place, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
 import { keepsDays } from './plan-allocation';
@@ -14,6 +15,11 @@ const SLOT_ORDER = ['breakfast', 'lunch', 'dinner', 'snack'];
 
 function openedDaysLeft(jar: Jar | undefined, today: string): number | null {
   return jar?.state === 'opened' && jar.useBy ? daysBetween(today, jar.useBy) : null;
+}
+
+/** Where a jar Today draws from is kept, by name and in words. */
+function placeOf(name: string | null) {
+  return { jarPlaceName: name, jarPlaceWords: name ? placeWords(name) : null };
 }
 
 function todaysUse(
@@ -55,7 +61,7 @@ function todaysUse(
         tbsp: assignment.tbsp,
         jarId: assignment.jarId === null ? null : String(assignment.jarId),
         jarCode: assignment.jarId === null ? null : jarOf.get(assignment.jarId)!.code,
-        jarPlaceName: placeNames.get(jarOf.get(assignment.jarId ?? '')?.placeId ?? '') ?? null,
+        ...placeOf(placeNames.get(jarOf.get(assignment.jarId ?? '')?.placeId ?? '') ?? null),
         openedJarDaysLeft: openedDaysLeft(jarOf.get(assignment.jarId ?? ''), today),
         opensToday: assignment.jarId !== null && openedToday.has(assignment.jarId),
       },

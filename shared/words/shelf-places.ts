@@ -1,5 +1,6 @@
 // Shelf places: where a household keeps its jars. The names are the household's own; these are the words around them.
-// Imported from shared/words/shelf-places, not the words' index, so the first screen does not load them (placeWords is there).
+// Imported from shared/words/shelf-places, not the words' index, so the first screen does not load them; Today gets its
+// "in the Pantry" from the server, which writes it with placeWords.
 
 /** What the screens call a place, and the no-place choice. */
 export const PLACE_WORDS = {
@@ -33,3 +34,9 @@ export const PLACE_NAME_TAKEN = (name: string) =>
 /** The CSV column, as the import help lists it. */
 export const PLACE_CSV_HELP =
   'Where the jars are kept, by the place’s name. A place the household does not have yet is added; an empty cell leaves the jars with no place.';
+
+/** "in the Pantry"; a name that starts with its own article ("the cupboard over the stairs", "our loft") keeps it. */
+export function placeWords(name: string | null): string {
+  if (!name) return 'with no place named';
+  return /^(the|my|our|a|an)\s/i.test(name.trim()) ? `in ${name.trim()}` : `in the ${name.trim()}`;
+}

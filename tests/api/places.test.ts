@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BatchDetail, JarView, OpeningAdvice } from '../../shared/schemas/batches';
 import type { PlaceView } from '../../shared/schemas/places';
 import type { TodayView } from '../../shared/schemas/today';
+import { placeWords } from '../../shared/words/shelf-places';
 import { DEMO_OLDEST_APART } from '../../server/demo/places';
 import { demoApp } from '../support/app';
 import { shelfLookups } from './shelf-helpers';
@@ -284,7 +285,10 @@ describe('shelf filters and the oldest jar', () => {
     const placeOf = new Map((await jarsOf(helper)).map((j) => [j.id, j.placeName]));
     const fromJars = today.use.filter((u) => u.jarId !== null);
     expect(fromJars.length, 'the demo plans jars for today').toBeGreaterThan(0);
-    for (const use of fromJars) expect(use.jarPlaceName).toBe(placeOf.get(use.jarId!));
+    for (const use of fromJars) {
+      expect(use.jarPlaceName).toBe(placeOf.get(use.jarId!));
+      expect(use.jarPlaceWords).toBe(use.jarPlaceName ? placeWords(use.jarPlaceName) : null);
+    }
     expect(fromJars.some((u) => u.jarPlaceName !== null)).toBe(true);
 
     // Renaming the place shows on Today at once (the cached read follows the data version).

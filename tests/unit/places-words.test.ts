@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { placeWords } from '@shared/words';
-import { placeHoldsJarsWords, placeMoveWords } from '@shared/words/shelf-places';
+import { placeHoldsJarsWords, placeMoveWords, placeWords } from '@shared/words/shelf-places';
 import { shelfBatchRows } from '../../src/features/shelf/shelf-rows';
 import type { JarView } from '@shared/schemas/batches';
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import type { JarView } from '@shared/schemas/batches';
-import { count, placeWords } from '@shared/words';
-import { PLACE_WORDS } from '@shared/words/shelf-places';
+import { count } from '@shared/words';
+import { PLACE_WORDS, placeWords } from '@shared/words/shelf-places';
 import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { useMoveJars } from '../api/move-jars';

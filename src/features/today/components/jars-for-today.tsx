@@ -1,7 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import type { TodayUse, TodayView } from '@shared/schemas/today';
-import { count, placeWords } from '@shared/words';
+import { count } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
 
@@ -27,7 +27,7 @@ function whereFrom(portion: TodayUse) {
     return (
       <>
         open <JarLink code={portion.jarCode} />
-        {portion.jarPlaceName ? ` ${placeWords(portion.jarPlaceName)}` : ''}
+        {portion.jarPlaceWords ? ` ${portion.jarPlaceWords}` : ''}
       </>
     );
   const daysLeft = portion.openedJarDaysLeft;
@@ -73,7 +73,7 @@ export function JarsForToday({
               <li key={portion.jarId} className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
                 <span>
                   {portion.productName} (<JarLink code={portion.jarCode!} />)
-                  {portion.jarPlaceName ? `, ${placeWords(portion.jarPlaceName)}` : ''}
+                  {portion.jarPlaceWords ? `, ${portion.jarPlaceWords}` : ''}
                 </span>
                 {canHandleJars && (
                   <Suspense fallback={null}>
