@@ -8,3 +8,4 @@ export * from './cautions';
 export * from './seal-check';
 export * from './gifts';
 export * from './ingredients';
+export * from './stock';

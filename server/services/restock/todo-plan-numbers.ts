@@ -1,16 +1,28 @@
 // The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import {
+  batchShopping,
   formatKitchenAmount,
+  mouthFor,
+  type StockItem,
   scaleRecipe,
   type JarSize,
   type RestockReason,
   type ScaledIngredient,
 } from '../../../shared/domain';
-import { altitudeWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
-import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
+import {
+  altitudeWords,
+  batchShoppingTodo,
+  batchShoppingWords,
+  dateWords,
+  METHOD_NAMES,
+  minutesWords,
+  pressureWords,
+} from '../../../shared/words';
+import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
+import { stockFor } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
 function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
@@ -96,6 +108,21 @@ export function composeBatchPlan(question: PlanQuestion): BatchPlan {
   return plan;
 }
 
+/** What the plan's jars and lids need bought after the empty jars and new lids in stock now. */
+function planStock(plan: BatchPlan, inStock: (item: StockItem, size: string) => number): BatchPlanStock {
+  const mouth = mouthFor(plan.jarSize);
+  const shop = batchShopping(plan.equipment.jars, {
+    emptyJars: inStock('jar', plan.jarSize),
+    lids: inStock('lid', mouth),
+  });
+  return {
+    mouth,
+    ...shop,
+    words: batchShoppingWords(plan.jarSize, mouth, shop),
+    todoTitle: batchShoppingTodo(plan.jarSize, mouth, shop),
+  };
+}
+
 function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
   const { minutes, pressurePsi, allowed } = plan.processing;
   if (!allowed) return 'no tested process';
@@ -161,10 +188,11 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  const [household, recipes, products] = await Promise.all([
+  const [household, recipes, products, inStock] = await Promise.all([
     Household.findByPk(householdId),
     Recipe.findAll({ where: { householdId, id: recipeIds } }),
     Product.findAll({ where: { householdId, id: productIds } }),
+    stockFor(Household.sequelize!, householdId),
   ]);
   if (!household) throw notFound('That household');
   return views.map((view) => {
@@ -196,6 +224,7 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
       targetWhy: made.targetWhy,
       changes: planChanges(made, now),
     };
+    fresh.stock = planStock(fresh, inStock);
     if (!household.altitudeConfirmedAt)
       return {
         ...view,

@@ -10,6 +10,7 @@ import { findProduct } from './products';
 import { findRecipe } from './recipes';
 import { processingView, sealCheckView } from './seal-check-view';
 import { batchView, jarView, shelfClock } from './views';
+import { takeForBatch } from '../stock/jar-stock';
 import { withFreshJarCodes, writeBatch } from './write-batch';
 
 export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError {
@@ -25,7 +26,7 @@ export async function previewPlan(household: Household, recipeId: string, jarSiz
 export async function createBatch(
   sequelize: Sequelize,
   household: Household,
-  input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number },
+  input: Required<Omit<BatchCreate, 'headspaceInches' | 'mouth'>> & Pick<BatchCreate, 'headspaceInches' | 'mouth'>,
   userId: string,
 ): Promise<BatchCreated> {
   requireConfirmedAltitude(household);
@@ -60,8 +61,8 @@ export async function createBatch(
   });
   if (!plan.allowed) throw notAllowed(plan);
 
-  const { batch, jars } = await withFreshJarCodes(sequelize, (transaction) =>
-    writeBatch(
+  const { batch, jars, stock } = await withFreshJarCodes(sequelize, async (transaction) => {
+    const written = await writeBatch(
       household,
       product,
       {
@@ -69,6 +70,7 @@ export async function createBatch(
         recipeId: recipe.id,
         cannedOn: input.cannedOn,
         jarSize: input.jarSize,
+        mouth: input.mouth ?? null,
         jarsFilled: input.jarsFilled,
         jarsSealed: input.jarsSealed,
         method: input.method,
@@ -80,8 +82,19 @@ export async function createBatch(
       userId,
       transaction,
       input.seals === 'to-check' ? clock.now() : undefined,
-    ),
-  );
+    );
+    // Every jar filled took an empty jar and a new lid, sealed or not (lids seal once: USDA 2015, NCHFP).
+    const stock = await takeForBatch(
+      sequelize,
+      household.id,
+      written.batch,
+      input.jarsFilled,
+      'record',
+      userId,
+      transaction,
+    );
+    return { ...written, stock };
+  });
   const shelf = shelfClock(household);
   return {
     batch: batchView(
@@ -92,6 +105,7 @@ export async function createBatch(
     ),
     jars: jars.map((jar) => jarView(jar, batch, product, shelf)),
     plan,
+    stockWarnings: stock.flatMap((applied) => (applied.warning ? [applied.warning] : [])),
   };
 }
 
