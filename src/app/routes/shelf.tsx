@@ -13,6 +13,7 @@ import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
 import { paths } from '@shared/paths';
+import { STOCK_WORDS } from '@shared/words';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },
@@ -57,6 +58,9 @@ export function ShelfRoute() {
         }
         actions={
           <>
+            <Link to={paths.stock(hid)} className={linkButton}>
+              {STOCK_WORDS.shopLink}
+            </Link>
             <a href={`/api/households/${hid}/shelf.csv`} download className={linkButton}>
               Export CSV
             </a>
