@@ -3,7 +3,10 @@ import type { BatchShopping, Mouth, StockItem } from '../domain/jar-stock';
 import type { JarSize } from '../domain/units';
 import { count, JAR_SIZE_NAMES } from './units';
 
+/** In a sentence, before "lid" or "jar": "wide-mouth lids". */
 export const MOUTH_NAMES: Record<Mouth, string> = { regular: 'regular-mouth', wide: 'wide-mouth' };
+/** On its own, as a choice. */
+export const MOUTH_LABELS: Record<Mouth, string> = { regular: 'Regular mouth', wide: 'Wide mouth' };
 
 export const STOCK_REASONS = ['record', 'finish', 'discard', 'reprocess', 'correction', 'undo'] as const;
 export type StockReason = (typeof STOCK_REASONS)[number];
@@ -25,11 +28,12 @@ export const STOCK_WORDS = {
   lidsHint: 'A flat lid seals once; bands and jars are used again (USDA Complete Guide to Home Canning, 2015).',
   history: 'Changes',
   noHistory: 'No changes yet.',
-  correct: 'Save count',
+  correct: 'Save',
+  otherSizes: 'Other jar sizes',
   correctNote: 'Why (optional)',
   kept: 'The empty jar goes back with the empty jars',
   keptHint: 'Untick it if the jar is broken, chipped or thrown out with the food.',
-  shopLink: 'Empty jars and lids',
+  shopLink: 'Jars and lids',
   addLidsTodo: 'Add to the to-do list',
 } as const;
 

@@ -249,5 +249,11 @@ describe('the batch plan against stock', () => {
     const enough = await cook.get(`${lookups.base}/todos/${made.body.todo.id}`);
     expect(enough.body.todo.batchPlan.stock).toMatchObject({ buyJars: 0, buyLids: 0, todoTitle: null });
     expect(enough.body.todo.batchPlan.stock.words).toMatch(/enough for this batch\.$/);
+    // The mouth is the jars': once the household cans these pints in wide-mouth jars, the plan buys wide-mouth lids.
+    await recordPints(1, { mouth: 'wide' });
+    await setCount('lid', 'wide', 0);
+    const wide = await cook.get(`${lookups.base}/todos/${made.body.todo.id}`);
+    expect(wide.body.todo.batchPlan.stock).toMatchObject({ mouth: 'wide', buyLids: 10 });
+    expect(wide.body.todo.batchPlan.stock.todoTitle).toBe('Buy 10 wide-mouth lids and 1 pint jar');
   });
 });

@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
+import { paths } from '../../shared/paths';
 import { SCREENS } from '../../src/app/screens';
 import { browserForFile, PHONE_TOUCH, screenshot, signIn } from '../support/browser';
 
@@ -82,6 +83,7 @@ describe('one voice on every screen (phone)', () => {
     found.push(await walk(page, 'batch', `${home}/batches/${sealed.batchId}`));
     found.push(await walk(page, 'recipe-card', `${home}/recipes/${recipe.id}`));
     found.push(await walk(page, 'new-batch', `${home}/batches/new`));
+    found.push(await walk(page, 'stock', paths.stock(home.split('/')[2]!)));
     found.push(await walk(page, 'labels', `${home}/batches/${sealed.batchId}/labels`));
     if (planned) found.push(await walk(page, 'todo-plan', `${home}/todo?open=${planned.id}`));
     await page.close();

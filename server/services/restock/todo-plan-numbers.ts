@@ -3,7 +3,7 @@ import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import {
   batchShopping,
   formatKitchenAmount,
-  mouthFor,
+  type Mouth,
   type StockItem,
   scaleRecipe,
   type JarSize,
@@ -22,7 +22,7 @@ import {
 import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
-import { stockFor } from '../stock/jar-stock';
+import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
 function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
@@ -109,8 +109,7 @@ export function composeBatchPlan(question: PlanQuestion): BatchPlan {
 }
 
 /** What the plan's jars and lids need bought after the empty jars and new lids in stock now. */
-function planStock(plan: BatchPlan, inStock: (item: StockItem, size: string) => number): BatchPlanStock {
-  const mouth = mouthFor(plan.jarSize);
+function planStock(plan: BatchPlan, mouth: Mouth, inStock: (item: StockItem, size: string) => number): BatchPlanStock {
   const shop = batchShopping(plan.equipment.jars, {
     emptyJars: inStock('jar', plan.jarSize),
     lids: inStock('lid', mouth),
@@ -188,11 +187,12 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  const [household, recipes, products, inStock] = await Promise.all([
+  const [household, recipes, products, inStock, mouthOf] = await Promise.all([
     Household.findByPk(householdId),
     Recipe.findAll({ where: { householdId, id: recipeIds } }),
     Product.findAll({ where: { householdId, id: productIds } }),
     stockFor(Household.sequelize!, householdId),
+    usualMouths(Household.sequelize!, householdId, productIds),
   ]);
   if (!household) throw notFound('That household');
   return views.map((view) => {
@@ -224,7 +224,7 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
       targetWhy: made.targetWhy,
       changes: planChanges(made, now),
     };
-    fresh.stock = planStock(fresh, inStock);
+    fresh.stock = planStock(fresh, mouthOf(fresh.productId, fresh.jarSize), inStock);
     if (!household.altitudeConfirmedAt)
       return {
         ...view,

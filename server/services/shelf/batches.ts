@@ -1,6 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
-import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
+import { mouthFor, type JarSize, type Method, type ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
 import { Batch, BatchProcessing, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
@@ -70,7 +70,8 @@ export async function createBatch(
         recipeId: recipe.id,
         cannedOn: input.cannedOn,
         jarSize: input.jarSize,
-        mouth: input.mouth ?? null,
+        // Kept as chosen or assumed, so the next plan for this product buys the lids its jars take.
+        mouth: mouthFor(input.jarSize, input.mouth),
         jarsFilled: input.jarsFilled,
         jarsSealed: input.jarsSealed,
         method: input.method,

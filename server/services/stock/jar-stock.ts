@@ -246,6 +246,28 @@ export async function stockFor(
   return (item, size) => counts.find((row) => row.item === item && row.size === size)?.count ?? 0;
 }
 
+/**
+ * The mouth a household uses for a product in a jar size: that of its latest batch of it that says, else the size's
+ * usual one. A jar's mouth is the jar's, so what the household canned in last is the best guess for the next batch.
+ */
+export async function usualMouths(
+  sequelize: Sequelize,
+  householdId: string,
+  productIds: string[],
+): Promise<(productId: string, size: JarSize) => Mouth> {
+  const rows =
+    productIds.length === 0
+      ? []
+      : await sequelize.query<{ product_id: string; jar_size: JarSize; mouth: Mouth }>(
+          `SELECT DISTINCT ON (product_id, jar_size) product_id, jar_size, mouth FROM batches
+           WHERE household_id = $1 AND product_id = ANY($2::uuid[]) AND mouth IS NOT NULL
+           ORDER BY product_id, jar_size, canned_on DESC, created_at DESC`,
+          { bind: [householdId, productIds], type: QueryTypes.SELECT },
+        );
+  return (productId, size) =>
+    mouthFor(size, rows.find((row) => row.product_id === productId && row.jar_size === size)?.mouth);
+}
+
 /** A count set by hand after counting the cupboard; the history keeps the difference and who counted. */
 export async function correctStock(
   sequelize: Sequelize,

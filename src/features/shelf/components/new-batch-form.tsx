@@ -15,7 +15,7 @@ import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
-import { jarSizeWords, METHOD_NAMES, MOUTH_NAMES, SEALS_CHOICE } from '@shared/words';
+import { jarSizeWords, METHOD_NAMES, MOUTH_LABELS, SEALS_CHOICE } from '@shared/words';
 import { FormFooter } from '@/components/ui/form-footer';
 import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -185,7 +185,7 @@ export function NewBatchForm({
           >
             {MOUTHS.map((m) => (
               <option key={m} value={m}>
-                {MOUTH_NAMES[m]}
+                {MOUTH_LABELS[m]}
               </option>
             ))}
           </SelectField>

@@ -6,6 +6,10 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCorrectStock } from '../api/correct-stock';
 
+const sentence = (words: string) => words.charAt(0).toUpperCase() + words.slice(1);
+/** Shown always; the other sizes wait under a disclosure unless the cupboard holds some. */
+const EVERYDAY_SIZES: readonly string[] = ['half-pint', 'pint', 'quart'];
+
 interface Row {
   item: StockItem;
   size: string;
@@ -22,7 +26,7 @@ function CountRow({ hid, row, canCorrect, note }: { hid: string; row: Row; canCo
   return (
     <li className="flex flex-col gap-1 border-b border-line py-3 last:border-b-0">
       <div className="flex flex-wrap items-center gap-3">
-        <span className="min-w-32 flex-1 font-bold">{row.label}</span>
+        <span className="min-w-0 flex-1 font-bold">{row.label}</span>
         {canCorrect ? (
           <form
             className="flex items-center gap-2"
@@ -75,13 +79,13 @@ export function StockCounts({ hid, stock, canCorrect }: { hid: string; stock: Ja
   const jars: Row[] = stock.jars.map((j) => ({
     item: 'jar',
     size: j.size,
-    label: `${JAR_SIZE_NAMES[j.size]} jars`,
+    label: sentence(`${JAR_SIZE_NAMES[j.size]} jars`),
     count: j.count,
   }));
   const lids: Row[] = stock.lids.map((l) => ({
     item: 'lid',
     size: l.mouth,
-    label: `${MOUTH_NAMES[l.mouth]} lids`,
+    label: sentence(`${MOUTH_NAMES[l.mouth]} lids`),
     count: l.count,
   }));
   const list = (rows: Row[]) => (
@@ -118,7 +122,15 @@ export function StockCounts({ hid, stock, canCorrect }: { hid: string; stock: Ja
         <h2 id="stock-jars" className="pt-3 text-lg">
           {STOCK_WORDS.emptyJars}
         </h2>
-        {list(jars)}
+        {list(jars.filter((row) => row.count > 0 || EVERYDAY_SIZES.includes(row.size)))}
+        {jars.some((row) => row.count === 0 && !EVERYDAY_SIZES.includes(row.size)) && (
+          <details className="border-t border-line py-3">
+            <summary className="min-h-11 cursor-pointer content-center font-bold text-action">
+              {STOCK_WORDS.otherSizes}
+            </summary>
+            {list(jars.filter((row) => row.count === 0 && !EVERYDAY_SIZES.includes(row.size)))}
+          </details>
+        )}
       </section>
       <section aria-labelledby="stock-lids" className="rounded-card border border-line bg-surface px-4">
         <h2 id="stock-lids" className="pt-3 text-lg">
