@@ -7,6 +7,7 @@ import {
   dateWords,
   headspaceWords,
   jarSizeWords,
+  MOUTH_LABELS,
   METHOD_NAMES,
   minutesWords,
   pressureWords,
@@ -53,6 +54,8 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                 ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check`
                 : `${batch.jarsSealed} sealed`}
             </dd>
+            <dt className="text-ink-muted">Lids</dt>
+            <dd>{MOUTH_LABELS[batch.mouth]}</dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
               {METHOD_NAMES[batch.method]}, {processing} at {altitudeWords(batch.altitudeFt)}

@@ -181,7 +181,7 @@ export function NewBatchForm({
             value={mouth}
             onChange={(e) => set({ mouth: e.target.value === mouthFor(jarSize) ? null : e.target.value })}
             error={error?.fields.mouth}
-            hint="Which lids the jars take."
+            hint={`Which lids the jars take; ${MOUTH_LABELS[mouthFor(jarSize)].toLowerCase()} is the usual for ${jarSizeWords(jarSize)} jars (common practice).`}
           >
             {MOUTHS.map((m) => (
               <option key={m} value={m}>
