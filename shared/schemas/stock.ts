@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { JAR_SIZES, MOUTHS, type JarSize, type Mouth, type StockItem } from '../domain';
-import type { StockReason } from '../words';
+import type { StockReason } from '../words/stock';
 import { LIMITS, limitWords } from './limits';
 
 const stockCount = z

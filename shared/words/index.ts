@@ -8,4 +8,3 @@ export * from './cautions';
 export * from './seal-check';
 export * from './gifts';
 export * from './ingredients';
-export * from './stock';

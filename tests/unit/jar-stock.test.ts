@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { batchShopping, JAR_SIZES, mouthFor, USUAL_MOUTH } from '../../shared/domain';
-import { batchShoppingTodo, batchShoppingWords } from '../../shared/words';
+import { batchShoppingTodo, batchShoppingWords } from '../../shared/words/stock';
 import { emptyJarsBack } from '../../server/services/stock/jar-endings';
 
 describe('which jar endings bring an empty jar back', () => {

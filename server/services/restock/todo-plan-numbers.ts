@@ -10,15 +10,8 @@ import {
   type RestockReason,
   type ScaledIngredient,
 } from '../../../shared/domain';
-import {
-  altitudeWords,
-  batchShoppingTodo,
-  batchShoppingWords,
-  dateWords,
-  METHOD_NAMES,
-  minutesWords,
-  pressureWords,
-} from '../../../shared/words';
+import { altitudeWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
+import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/stock';
 import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';

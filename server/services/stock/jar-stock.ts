@@ -2,7 +2,7 @@
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { JAR_SIZES, MOUTHS, mouthFor, type JarSize, type Mouth, type StockItem } from '../../../shared/domain';
 import type { JarStockView, StockChangeView, StockCorrection } from '../../../shared/schemas/stock';
-import { stockShortWords, type StockReason } from '../../../shared/words';
+import { stockShortWords, type StockReason } from '../../../shared/words/stock';
 import type { Household } from '../../db/models';
 import { emptyJarsBack, type JarEnding } from './jar-endings';
 

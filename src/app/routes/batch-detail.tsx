@@ -5,7 +5,8 @@ import { PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { BatchDetailView } from '@/features/shelf/components/batch-detail';
-import { dateWords, STOCK_WORDS } from '@shared/words';
+import { dateWords } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { paths } from '@shared/paths';
 
 export function BatchDetailRoute() {

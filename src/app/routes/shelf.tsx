@@ -13,7 +13,7 @@ import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
 import { paths } from '@shared/paths';
-import { STOCK_WORDS } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },

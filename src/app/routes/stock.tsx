@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import { can } from '@shared/roles';
 import { paths } from '@shared/paths';
-import { STOCK_WORDS } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';

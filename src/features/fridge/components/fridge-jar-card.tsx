@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { count, countdown, dateWords, DATE_NAMES, JAR_ACTION_NAMES, STOCK_WORDS } from '@shared/words';
+import { count, countdown, dateWords, DATE_NAMES, JAR_ACTION_NAMES } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import type { FridgeJar } from '@shared/schemas/fridge';
 import { Button } from '@/components/ui/button';
 import { CheckboxField } from '@/components/ui/field';

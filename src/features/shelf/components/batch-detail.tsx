@@ -7,11 +7,11 @@ import {
   dateWords,
   headspaceWords,
   jarSizeWords,
-  MOUTH_LABELS,
   METHOD_NAMES,
   minutesWords,
   pressureWords,
 } from '@shared/words';
+import { MOUTH_LABELS } from '@shared/words/stock';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';

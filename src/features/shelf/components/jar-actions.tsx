@@ -1,5 +1,6 @@
 import type { JarAction, JarView } from '@shared/schemas/batches';
-import { JAR_ACTION_NAMES, STOCK_WORDS } from '@shared/words';
+import { JAR_ACTION_NAMES } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { Button } from '@/components/ui/button';
 import { CheckboxField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

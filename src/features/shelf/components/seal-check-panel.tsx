@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import type { BatchDetail, SealCheckDone } from '@shared/schemas/batches';
-import { clockWords, count, SEAL_CHECK_HOW, SEAL_CHECK_SOURCE, STOCK_WORDS, UNSEALED_CHOICES } from '@shared/words';
+import { clockWords, count, SEAL_CHECK_HOW, SEAL_CHECK_SOURCE, UNSEALED_CHOICES } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { Button } from '@/components/ui/button';
 import { CautionLine } from '@/components/ui/caution-line';
 import { ChoiceCard, TextField } from '@/components/ui/field';

@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import type { StockItem } from '@shared/domain';
 import type { JarStockView } from '@shared/schemas/stock';
-import { JAR_SIZE_NAMES, MOUTH_NAMES, STOCK_WORDS } from '@shared/words';
+import { JAR_SIZE_NAMES } from '@shared/words';
+import { MOUTH_NAMES, STOCK_WORDS } from '@shared/words/stock';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCorrectStock } from '../api/correct-stock';

@@ -1,5 +1,5 @@
 import type { StockChangeView } from '@shared/schemas/stock';
-import { stockItemWords, STOCK_REASON_NAMES, STOCK_WORDS } from '@shared/words';
+import { stockItemWords, STOCK_REASON_NAMES, STOCK_WORDS } from '@shared/words/stock';
 
 const when = (at: string) =>
   new Date(at).toLocaleString('en-US', { month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });

@@ -8,10 +8,9 @@ import {
   inCanner,
   JAR_SIZE_NAMES,
   minutesWords,
-  MOUTH_NAMES,
   pressureWords,
-  STOCK_WORDS,
 } from '@shared/words';
+import { MOUTH_NAMES, STOCK_WORDS } from '@shared/words/stock';
 import type { BatchPlan, BatchPlanStock, ShoppingItem } from '@shared/schemas/todos';
 import { Button } from '@/components/ui/button';
 import { useCreateTodo } from '../api/create-todo';
