@@ -143,6 +143,19 @@ describe('empty jars and new lids in stock', () => {
     expect(refused.status).toBe(400);
   });
 
+  it('a given jar takes its empty jar with it, and putting the gift back changes no count (common practice: a gift leaves in its jar)', async () => {
+    const { jars } = await recordPints(1);
+    await setCount('jar', 'pint', 3);
+    const given = await cook.post(`${lookups.base}/jars/${jars[0].id}/give`).send({ to: 'the Okafors next door' });
+    expect(given.status, given.text).toBe(200);
+    expect(pints(await stock())).toBe(3);
+    const undone = await cook.post(`${lookups.base}/jars/${jars[0].id}/undo`).send({ eventId: given.body.eventId });
+    expect(undone.status, undone.text).toBe(200);
+    const view = await stock();
+    expect(pints(view)).toBe(3);
+    expect(view.history[0]).toMatchObject({ reason: 'correction', countAfter: 3 });
+  });
+
   it('a reprocess takes a new lid a jar and no jars (reprocess within 24 hours with a new lid: NCHFP)', async () => {
     const processedAt = instantAt(addDays(todayIn(ZONE), -1), 20, 0, ZONE);
     clock.now = () => processedAt;

@@ -178,6 +178,16 @@ export async function giveJar(
       },
       { transaction },
     );
+    // The one rule for jar endings: a given jar's empty jar leaves with it, so stock does not change.
+    await jarEnded(
+      sequelize,
+      household.id,
+      { jarSize: jar.batch.jarSize, batchId: jar.batchId },
+      { reason: 'given' },
+      userId,
+      event.id,
+      transaction,
+    );
     return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
   });
 }
