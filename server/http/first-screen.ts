@@ -38,7 +38,8 @@ function hintsFor(pathname: string): Hints | null {
     shelf: [`${household}/jars`, `${household}/products`],
     week: [`${household}/meals`],
   };
-  return { modules: [...SIGNED_IN, route(screen)], reads: ['/api/auth/me', ...(reads[screen] ?? [])] };
+  // The household itself too: the week's first day and the setup banner wait for it.
+  return { modules: [...SIGNED_IN, route(screen)], reads: ['/api/auth/me', household, ...(reads[screen] ?? [])] };
 }
 
 /**

@@ -88,6 +88,7 @@ describe("each screen's page names its code and first reads, so they load at onc
       'modulepreload /shelf-1.js',
       'modulepreload /fuse-1.js',
       'preload /api/auth/me',
+      `preload /api/households/${hid}`,
       `preload /api/households/${hid}/jars`,
       `preload /api/households/${hid}/products`,
     ]);
