@@ -19,8 +19,11 @@ const RETIRED: { pattern: RegExp; now: string }[] = [
   { pattern: /best_by|use_by/i, now: 'Best quality by / Use by' },
   { pattern: /months after canning\)/i, now: 'Best quality by' },
   { pattern: /what expires/i, now: 'Use by this week' },
-  { pattern: /needs a new batch|time to make more/i, now: 'Restock' },
-  { pattern: /\b(colour|favourite|flavour|metres?|litres?|millilitres?|centre|mould|grey)\b/i, now: 'US English' },
+  { pattern: /needs a new batch|time to make more|running low/i, now: 'Restock' },
+  {
+    pattern: /\b(colour|favourite|flavour|metres?|litres?|millilitres?|centre|mould|grey|cancelled|labelled)\b/i,
+    now: 'US English',
+  },
   {
     pattern: /\b(fl-oz|twelve-ounce|pressure-dial|pressure-weighted|atmospheric-steam|fruit-butter)\b/,
     now: 'the words the screens show',

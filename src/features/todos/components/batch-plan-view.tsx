@@ -134,6 +134,15 @@ export function BatchPlanView({
         </Notice>
       )}
 
+      {/* The cautions come before every number of the plan: jars, amounts, minutes and pressure. */}
+      <Notice tone="info" title={BEFORE_YOU_START}>
+        <ul className="list-disc pl-5">
+          {plan.processing.cautions.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
+        </ul>
+      </Notice>
+
       <section aria-labelledby="plan-equipment">
         <h3 id="plan-equipment" className="mb-1 text-lg">
           Jars and canner
@@ -170,14 +179,6 @@ export function BatchPlanView({
           </Notice>
         ))}
       </section>
-
-      <Notice tone="info" title={BEFORE_YOU_START}>
-        <ul className="list-disc pl-5">
-          {plan.processing.cautions.map((caution) => (
-            <li key={caution}>{caution}</li>
-          ))}
-        </ul>
-      </Notice>
 
       <section aria-labelledby="plan-processing">
         <h3 id="plan-processing" className="mb-1 text-lg">
