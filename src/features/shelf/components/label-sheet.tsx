@@ -71,7 +71,7 @@ export function LabelSheet({ batch, paper }: { batch: BatchDetail; paper: Paper 
       <style>{`${PAPER_CSS[paper]}
         .label-sheet ul { display: grid; grid-template-columns: repeat(3, var(--label-w)); grid-auto-rows: var(--label-h); column-gap: var(--gap); row-gap: 0; }
         @media print { html, body { background: white; } .label-sheet li { break-inside: avoid; } }
-        .label-sheet li { font-size: ${paper === 'letter' ? '8pt' : '10pt'}; }`}</style>
+        .label-sheet li { font-size: ${paper === 'letter' ? '9pt' : '10pt'}; }`}</style>
       <div className="label-sheet">
         <ul aria-label={`Labels for ${jars.length} jars`}>
           {jars.map((jar) => (
