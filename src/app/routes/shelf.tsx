@@ -3,6 +3,7 @@ import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
 import { giftsThisYearWords } from '@shared/words';
 import { TextField } from '@/components/ui/field';
+import { CautionLine } from '@/components/ui/caution-line';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -97,6 +98,7 @@ export function ShelfRoute() {
         </EmptyState>
       ) : (
         <div className="flex flex-col gap-4">
+          <CautionLine about="best-quality" />
           <div className="flex flex-wrap items-end justify-between gap-3">
             <div className="w-full sm:w-96">
               <TextField
