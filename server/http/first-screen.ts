@@ -26,6 +26,9 @@ interface Hints {
 /** What the screen at this address loads first (see src/app/router.tsx), or null for an address with no hints. */
 function hintsFor(pathname: string): Hints | null {
   const parts = pathname.split('/').filter(Boolean);
+  // The address a bookmark or the home-screen icon opens: it reads the session, then goes to the household.
+  if (parts.length === 0)
+    return { modules: ['src/app/layouts/require-auth.tsx', route('home-redirect')], reads: ['/api/auth/me'] };
   if (parts[0] === 'sign-in' && parts.length === 1) return { modules: [route('sign-in')], reads: ['/api/auth/me'] };
   if (parts[0] === 'sign-up' && parts.length === 1) return { modules: [route('sign-up')], reads: [] };
   if (parts[0] === 'j' && parts.length === 2)
