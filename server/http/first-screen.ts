@@ -19,7 +19,10 @@ const ID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
 interface Hints {
   modules: string[];
-  /** API reads the screen makes first, fetched in parallel with its code instead of after it. */
+  /**
+   * API reads the screen makes first, fetched in parallel with its code instead of after it. Only reads the screen
+   * always makes on its first render: a preload nobody takes at once could answer a later read with an older copy.
+   */
   reads: string[];
 }
 
@@ -37,7 +40,7 @@ function hintsFor(pathname: string): Hints | null {
   const household = `/api/households/${parts[1]}`;
   const screen = parts[2] ?? 'today';
   const reads: Record<string, string[]> = {
-    today: [`${household}/today`],
+    today: [`${household}/today`, `${household}/products`],
     shelf: [`${household}/jars`, `${household}/products`],
     week: [`${household}/meals`],
   };
