@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { giftsThisYearWords } from '@shared/words';
+import { giftsThisYearWords } from '@shared/words/gifts';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';

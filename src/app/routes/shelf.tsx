@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { giftsThisYearWords } from '@shared/words';
+import { giftsThisYearWords } from '@shared/words/gifts';
 import { TextField } from '@/components/ui/field';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Notice } from '@/components/ui/notice';
