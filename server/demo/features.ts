@@ -3,6 +3,7 @@ import type { Household, User } from '../db/models';
 import { seedPlaces } from './places';
 import { seedSealCheck } from './seal-check';
 import { seedShelf } from './shelf';
+import { seedStock } from './stock';
 import { seedWeek } from './week';
 import { seedProposalScenario } from './week-proposal';
 import { seedTodos } from './todos';
@@ -22,6 +23,7 @@ export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
   await seedSealCheck(ctx);
   await seedPlaces(ctx);
+  await seedStock(ctx);
   await seedWeek(ctx);
   await seedProposalScenario(ctx);
   await seedTodos(ctx);

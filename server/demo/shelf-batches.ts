@@ -1,5 +1,5 @@
 // Our invented demo shelf: two seasons of batches and what became of each jar, in days before today.
-import type { JarSize } from '../../shared/domain';
+import type { JarSize, Mouth } from '../../shared/domain';
 import type { ProductCreate } from '../../shared/schemas/products';
 
 export const CALLOWAY_PRODUCTS: ProductCreate[] = [
@@ -157,6 +157,8 @@ export interface DemoBatch {
   product: string;
   daysAgo: number;
   jarSize: JarSize;
+  /** The jars' mouth, where not the size's usual one: the relish goes in wide-mouth half-pints. */
+  mouth?: Mouth;
   filled: number;
   sealed: number;
   notes?: string;
@@ -172,6 +174,7 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     product: 'Sweet Corn Relish',
     daysAgo: 490,
     jarSize: 'half-pint',
+    mouth: 'wide',
     filled: 9,
     sealed: 9,
     fates: { finished: [380, 340, 300, 270, 240, 200, 170, 150] },
@@ -255,6 +258,7 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     product: 'Sweet Corn Relish',
     daysAgo: 120,
     jarSize: 'half-pint',
+    mouth: 'wide',
     filled: 9,
     sealed: 9,
     fates: { finished: [80, 62, 44, 27], opened: [12] },

@@ -80,6 +80,7 @@ async function seedBatches(
         recipeId: recipe?.id ?? null,
         cannedOn,
         jarSize: demo.jarSize,
+        mouth: demo.mouth ?? null,
         jarsFilled: demo.filled,
         jarsSealed: demo.sealed,
         method: 'boiling-water',

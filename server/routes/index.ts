@@ -12,6 +12,7 @@ import { placesRouter } from './places';
 import { productsRouter } from './products';
 import { recipesRouter } from './recipes';
 import { restockRouter } from './restock';
+import { stockRouter } from './stock';
 import { shelfRouter } from './shelf';
 import { todayRouter } from './today';
 import { todosRouter } from './todos';
@@ -34,6 +35,7 @@ export function householdFeatureRouters(ctx: AppContext) {
   router.use(weekRouter(ctx));
   router.use(weekProposalRouter(ctx));
   router.use(restockRouter(ctx));
+  router.use(stockRouter(ctx));
   router.use(todosRouter(ctx));
   router.use(todayRouter(ctx));
   router.use(fridgeRouter(ctx));

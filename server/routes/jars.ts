@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { JAR_ACTIONS, jarGiveBody, jarStateQuery, jarUndoBody } from '../../shared/schemas/batches';
+import { jarActionBody } from '../../shared/schemas/stock';
 import { currentMembership, householdAccess, requireUser } from '../auth/guards';
 import type { AppContext } from '../context';
 import { idempotent } from '../http/idempotency';
@@ -63,7 +64,8 @@ export function jarsRouter(ctx: AppContext) {
 
   router.post('/jars/:jarId/:action', householdAccess('handleJars'), idempotent(ctx.sequelize), async (req, res) => {
     const { jarId, action } = params(req, jarAction);
-    res.json(await actOnJar(ctx.sequelize, currentMembership(req).household, jarId, action, req.user!.id));
+    const { kept } = body(req, jarActionBody);
+    res.json(await actOnJar(ctx.sequelize, currentMembership(req).household, jarId, action, req.user!.id, { kept }));
   });
 
   return router;

@@ -17,7 +17,7 @@ type Column = [json: string, sql: string, type: string, ref?: BackupTable];
 
 /**
  * What a backup holds, table by table in insert order. People are left out (the importer becomes
- * the keeper), and so are photos, who did what, and a batch's processings and seal check (a jar still to check
+ * the keeper), and so are photos, who did what (the jar and lid stock keeps its counts, not its changes), and a batch's processings and seal check (a jar still to check
  * comes back checked; the README says so). Label codes go in, and are kept on import where no jar holds them.
  */
 const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: false }[] = [
@@ -67,6 +67,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['recipeId', 'recipe_id', 'uuid', 'recipes'],
       ['cannedOn', 'canned_on', 'date'],
       ['jarSize', 'jar_size', 'varchar'],
+      ['mouth', 'mouth', 'varchar'],
       ['jarsFilled', 'jars_filled', 'int'],
       ['jarsSealed', 'jars_sealed', 'int'],
       ['method', 'method', 'varchar'],
@@ -164,6 +165,15 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['kind', 'kind', 'varchar'],
       ['productId', 'product_id', 'uuid', 'products'],
       ['batchPlan', 'batch_plan', 'jsonb'],
+    ],
+  },
+  {
+    key: 'jarStock',
+    table: 'jar_stock',
+    columns: [
+      ['item', 'item', 'varchar'],
+      ['size', 'size', 'varchar'],
+      ['count', 'count', 'int'],
     ],
   },
 ];

@@ -17,3 +17,4 @@ export * from './validate';
 export * from './plan-waste';
 export * from './meal-proposal';
 export * from './seal-check';
+export * from './jar-stock';

@@ -4,6 +4,7 @@ import {
   INGREDIENT_UNITS,
   JAR_SIZES,
   JAR_STATES,
+  MOUTHS,
   PROCESSING_METHODS,
   PRODUCT_KINDS,
   RESTOCK_REASONS,
@@ -77,6 +78,8 @@ const batch = z.object({
   recipeId: id.nullable(),
   cannedOn: date,
   jarSize: z.enum(JAR_SIZES),
+  /** Added with the jar and lid stock; older backups have none (the size's usual mouth). */
+  mouth: z.enum(MOUTHS).nullable().default(null),
   jarsFilled: int(1, LIMITS.jarsPerBatch),
   jarsSealed: int(0, LIMITS.jarsPerBatch),
   method: z.enum(PROCESSING_METHODS),
@@ -230,6 +233,12 @@ const batchPlan = z.object({
   changes: words(1000).optional(),
 });
 
+/** A count of empty jars of one size or of new lids of one mouth; the history of changes stays behind, like who did what. */
+const stockCount = z.discriminatedUnion('item', [
+  z.object({ id, item: z.literal('jar'), size: z.enum(JAR_SIZES), count: int(0, LIMITS.stockCount) }),
+  z.object({ id, item: z.literal('lid'), size: z.enum(MOUTHS), count: int(0, LIMITS.stockCount) }),
+]);
+
 const todo = z.object({
   id,
   title: text(N.todoTitle).min(1),
@@ -274,6 +283,12 @@ export const householdBackup = z
     planEntries: list(planEntry, 20_000),
     pairings: list(pairing, 50_000),
     todos: list(todo, 5_000),
+    /** Added with the jar and lid stock; older backups have none. */
+    jarStock: list(stockCount, JAR_SIZES.length + MOUTHS.length)
+      .refine((rows) => new Set(rows.map((row) => `${row.item} ${row.size}`)).size === rows.length, {
+        error: 'The file counts the same jar size or lid mouth twice.',
+      })
+      .default([]),
   })
   .strict();
 

@@ -2,10 +2,12 @@ import { z } from 'zod';
 import { LIMITS, limitWords } from './limits';
 import {
   JAR_SIZES,
+  MOUTHS,
   PROCESSING_METHODS,
   type JarSize,
   type JarState,
   type Method,
+  type Mouth,
   type ProcessingPlan,
 } from '../domain';
 
@@ -21,6 +23,8 @@ export const batchCreate = z
     recipeId: z.uuid({ error: 'Choose the tested recipe you followed.' }),
     cannedOn: isoDate,
     jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
+    /** The jars' mouth, for their lids; without it, the size's usual mouth. */
+    mouth: z.enum(MOUTHS, { error: 'Choose regular or wide mouth.' }).optional(),
     jarsFilled: z
       .number({ error: 'Enter how many jars you filled.' })
       .int('Use a whole number of jars.')
@@ -107,6 +111,8 @@ export interface SealCheckDone {
   reprocessed: number;
   plan: ProcessingPlan | null;
   batch: BatchDetail;
+  /** Said when the reprocess used more new lids than were in stock. */
+  stockWarnings: string[];
 }
 
 export const planQuery = z.object({
@@ -166,6 +172,8 @@ export interface BatchView {
   recipeName: string | null;
   cannedOn: string;
   jarSize: JarSize;
+  /** The jars' mouth: the one recorded, else the size's usual one. */
+  mouth: Mouth;
   jarsFilled: number;
   jarsSealed: number;
   method: Method;
@@ -204,6 +212,8 @@ export interface BatchCreated {
   batch: BatchView;
   jars: JarView[];
   plan: ProcessingPlan;
+  /** Said when the batch used more jars or lids than were in stock (the counts stop at 0). */
+  stockWarnings: string[];
 }
 
 /** Before a jar is opened: jars of the same product that should be used first (the choice stays the person's). */

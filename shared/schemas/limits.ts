@@ -28,6 +28,8 @@ export const LIMITS = {
   heat: 5,
   bestQualityMonths: 60,
   cannerCapacityJars: 40,
+  /** Empty jars of one size, or new lids of one mouth, a household keeps counted. */
+  stockCount: 10_000,
   mealTags: 12,
   planPosition: 1000,
   todoPosition: 100_000,
@@ -52,6 +54,7 @@ export const LIMITS = {
     placeName: 60,
     /** Whom a jar was given to (a name or a few words, optional). */
     giftRecipient: 80,
+    stockNote: 200,
   },
 } as const;
 

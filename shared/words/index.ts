@@ -6,5 +6,4 @@ export * from './names';
 export * from './countdown';
 export * from './cautions';
 export * from './seal-check';
-export * from './gifts';
 export * from './ingredients';

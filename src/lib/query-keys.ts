@@ -37,6 +37,9 @@ export const weekKeys = {
 
 export const fridgeKeys = { fridge: (hid: string) => ['households', hid, 'fridge'] as const };
 
+/** The household's empty jars and new lids; under the household, so a batch or a jar action refreshes it. */
+export const stockKeys = { view: (hid: string) => ['households', hid, 'stock'] as const };
+
 export const restockKeys = { list: (hid: string) => ['households', hid, 'restock'] as const };
 
 export const todoKeys = {

@@ -240,6 +240,12 @@ export const TABLE: Record<string, RouteRule> = {
   // Helpers may tick a to-do; anything else they send is refused by the service.
   [`PATCH ${H}/todos/:id`]: { access: 'handleJars', body: () => ({ done: true }) },
   [`DELETE ${H}/todos/:id`]: { access: 'cook' },
+  [`GET ${H}/stock`]: { access: 'read' },
+  // A hand count: cooks and keepers (tests/api/jar-stock.test.ts).
+  [`POST ${H}/stock/correction`]: {
+    access: 'cook',
+    body: () => ({ item: 'lid', size: 'wide', count: 12, note: 'Counted again' }),
+  },
   [`GET ${H}/today`]: { access: 'read' },
   [`GET ${H}/fridge`]: { access: 'read' },
 

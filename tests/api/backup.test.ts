@@ -30,6 +30,7 @@ const REFS: [BackupTable, Record<string, BackupTable>][] = [
   ['planEntries', { mealId: 'meals' }],
   ['pairings', { planEntryId: 'planEntries', productId: 'products' }],
   ['todos', { productId: 'products' }],
+  ['jarStock', {}],
 ];
 
 /** Each table as a sorted list of rows with ids replaced by what they point to: equal files give equal lists. */

@@ -164,6 +164,8 @@ describe('the seal check after processing', () => {
       url: `/h/${ctx.householdId}/batches/${batchId}`,
     });
     expect(mine()[0].body).toMatch(/6 jars of Pickled Beets have cooled 12 hours/);
+    // The push carries the short canning caution: the times are the published ones, the tested recipe comes first.
+    expect(mine()[0].body).toMatch(/Your tested recipe and local extension service come first\.$/);
     const mails = sealMails().filter((m) => m.text.includes(batchId));
     expect(mails).toHaveLength(1);
     expect(mails[0].text).toContain(CANNING_CAUTION_SENTENCE);

@@ -1,16 +1,21 @@
 // The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import {
+  batchShopping,
   formatKitchenAmount,
+  type Mouth,
+  type StockItem,
   scaleRecipe,
   type JarSize,
   type RestockReason,
   type ScaledIngredient,
 } from '../../../shared/domain';
 import { altitudeWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
-import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
+import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/stock';
+import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
+import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
 function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
@@ -96,6 +101,20 @@ export function composeBatchPlan(question: PlanQuestion): BatchPlan {
   return plan;
 }
 
+/** What the plan's jars and lids need bought after the empty jars and new lids in stock now. */
+function planStock(plan: BatchPlan, mouth: Mouth, inStock: (item: StockItem, size: string) => number): BatchPlanStock {
+  const shop = batchShopping(plan.equipment.jars, {
+    emptyJars: inStock('jar', plan.jarSize),
+    lids: inStock('lid', mouth),
+  });
+  return {
+    mouth,
+    ...shop,
+    words: batchShoppingWords(plan.jarSize, mouth, shop),
+    todoTitle: batchShoppingTodo(plan.jarSize, mouth, shop),
+  };
+}
+
 function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
   const { minutes, pressurePsi, allowed } = plan.processing;
   if (!allowed) return 'no tested process';
@@ -161,10 +180,12 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  const [household, recipes, products] = await Promise.all([
+  const [household, recipes, products, inStock, mouthOf] = await Promise.all([
     Household.findByPk(householdId),
     Recipe.findAll({ where: { householdId, id: recipeIds } }),
     Product.findAll({ where: { householdId, id: productIds } }),
+    stockFor(Household.sequelize!, householdId),
+    usualMouths(Household.sequelize!, householdId, productIds),
   ]);
   if (!household) throw notFound('That household');
   return views.map((view) => {
@@ -196,6 +217,7 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
       targetWhy: made.targetWhy,
       changes: planChanges(made, now),
     };
+    fresh.stock = planStock(fresh, mouthOf(fresh.productId, fresh.jarSize), inStock);
     if (!household.altitudeConfirmedAt)
       return {
         ...view,

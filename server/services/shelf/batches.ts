@@ -1,6 +1,6 @@
 import type { Sequelize, Transaction } from 'sequelize';
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
-import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
+import { mouthFor, type JarSize, type Method, type ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
 import { Batch, BatchProcessing, Jar, JarEvent, Place, Product, Recipe, User, type Household } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
@@ -11,6 +11,7 @@ import { findProduct } from './products';
 import { findRecipe } from './recipes';
 import { processingView, sealCheckView } from './seal-check-view';
 import { batchView, jarView, shelfClock } from './views';
+import { takeForBatch } from '../stock/jar-stock';
 import { withFreshJarCodes, writeBatch } from './write-batch';
 
 export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError {
@@ -26,10 +27,8 @@ export async function previewPlan(household: Household, recipeId: string, jarSiz
 export async function createBatch(
   sequelize: Sequelize,
   household: Household,
-  input: Required<Omit<BatchCreate, 'headspaceInches' | 'placeId'>> & {
-    headspaceInches?: number;
-    placeId?: string | null;
-  },
+  input: Required<Omit<BatchCreate, 'headspaceInches' | 'placeId' | 'mouth'>> &
+    Pick<BatchCreate, 'headspaceInches' | 'mouth'> & { placeId?: string | null },
   userId: string,
 ): Promise<BatchCreated> {
   requireConfirmedAltitude(household);
@@ -72,9 +71,9 @@ export async function createBatch(
         ? placeOfHousehold(household.id, product.defaultPlaceId, 'placeId', transaction).catch(() => null)
         : null;
 
-  const { batch, jars } = await withFreshJarCodes(sequelize, async (transaction) => {
+  const { batch, jars, stock } = await withFreshJarCodes(sequelize, async (transaction) => {
     const place = await placeFor(transaction);
-    const made = await writeBatch(
+    const written = await writeBatch(
       household,
       product,
       {
@@ -82,6 +81,8 @@ export async function createBatch(
         recipeId: recipe.id,
         cannedOn: input.cannedOn,
         jarSize: input.jarSize,
+        // Kept as chosen or assumed, so the next plan for this product buys the lids its jars take.
+        mouth: mouthFor(input.jarSize, input.mouth),
         jarsFilled: input.jarsFilled,
         jarsSealed: input.jarsSealed,
         method: input.method,
@@ -94,8 +95,18 @@ export async function createBatch(
       transaction,
       input.seals === 'to-check' ? clock.now() : undefined,
     );
-    await placeNewJars(made.jars, place, transaction);
-    return made;
+    await placeNewJars(written.jars, place, transaction);
+    // Every jar filled took an empty jar and a new lid, sealed or not (lids seal once: USDA 2015, NCHFP).
+    const stock = await takeForBatch(
+      sequelize,
+      household.id,
+      written.batch,
+      input.jarsFilled,
+      'record',
+      userId,
+      transaction,
+    );
+    return { ...written, stock };
   });
   const shelf = shelfClock(household);
   return {
@@ -107,6 +118,7 @@ export async function createBatch(
     ),
     jars: jars.map((jar) => jarView(jar, batch, product, shelf)),
     plan,
+    stockWarnings: stock.flatMap((applied) => (applied.warning ? [applied.warning] : [])),
   };
 }
 

@@ -7,6 +7,7 @@ import { Batch, Household, Jar, JarEvent, Place, Product, User } from '../../db/
 import type { JarBefore } from '../../db/models/jar-event';
 import { conflict, forbidden, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
+import { undoJarEnding } from '../stock/jar-stock';
 import { jarView, shelfClock } from './views';
 
 const REVERSIBLE = ['opened', 'finished', 'discarded', 'given'] as const;
@@ -130,6 +131,7 @@ export async function undoJarEvent(
         },
         { transaction },
       );
+      await undoJarEnding(sequelize, household.id, event.id, userId, restored.id, transaction);
       const [batch, product] = await Promise.all([
         Batch.findByPk(jar.batchId, { transaction }),
         Product.findByPk(jar.productId, { transaction }),

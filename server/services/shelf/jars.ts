@@ -6,6 +6,7 @@ import { Batch, Household, Jar, JarEvent, Membership, Place, Product } from '../
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 import { normaliseJarCode } from './jar-codes';
+import { jarEnded, type JarEnding } from '../stock/jar-stock';
 import { jarBefore, lastJarChange } from './jar-undo';
 import { jarView, shelfClock } from './views';
 
@@ -74,6 +75,7 @@ export async function actOnJar(
   jarId: string,
   action: JarAction,
   userId: string,
+  options: { kept?: boolean } = {},
 ): Promise<JarActed> {
   const today = todayIn(household.timeZone);
   return sequelize.transaction(async (transaction) => {
@@ -114,6 +116,20 @@ export async function actOnJar(
       },
       { transaction },
     );
+    if (action !== 'open') {
+      // A discarded jar's glass is usually washed and kept; the person says when it broke or went out with the food.
+      const ending: JarEnding =
+        action === 'finish' ? { reason: 'finish' } : { reason: 'discard', kept: options.kept ?? true };
+      await jarEnded(
+        sequelize,
+        household.id,
+        { jarSize: jar.batch.jarSize, batchId: jar.batchId },
+        ending,
+        userId,
+        event.id,
+        transaction,
+      );
+    }
     return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
   });
 }
@@ -163,6 +179,16 @@ export async function giveJar(
         stateBefore: jarBefore(jar),
       },
       { transaction },
+    );
+    // The one rule for jar endings: a given jar's empty jar leaves with it, so stock does not change.
+    await jarEnded(
+      sequelize,
+      household.id,
+      { jarSize: jar.batch.jarSize, batchId: jar.batchId },
+      { reason: 'given' },
+      userId,
+      event.id,
+      transaction,
     );
     return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
   });

@@ -1,5 +1,5 @@
 // How shelf rows look to the client: one place that turns models into the shared view shapes.
-import { bestQualityBy, defaultUseWithinDays, JAR_STATES, type JarState } from '../../../shared/domain';
+import { bestQualityBy, defaultUseWithinDays, JAR_STATES, mouthFor, type JarState } from '../../../shared/domain';
 import type { BatchView, JarView } from '../../../shared/schemas/batches';
 import type { ProductView } from '../../../shared/schemas/products';
 import { type ProductColour } from '../../../shared/words';
@@ -95,6 +95,7 @@ export function batchView(batch: Batch, product: Product, recipe: Recipe | null,
     recipeName: recipe?.name ?? null,
     cannedOn: batch.cannedOn,
     jarSize: batch.jarSize,
+    mouth: mouthFor(batch.jarSize, batch.mouth),
     jarsFilled: batch.jarsFilled,
     jarsSealed: batch.jarsSealed,
     method: batch.method,

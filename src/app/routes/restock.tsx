@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { giftsThisYearWords } from '@shared/words';
+import { giftsThisYearWords } from '@shared/words/gifts';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -24,7 +24,7 @@ export function RestockRoute() {
     <>
       <PageHeader
         title="Restock"
-        lead="Favorites running low, and the batch that would carry you to the next harvest."
+        lead="Favorites to restock, and the batch that would carry you to the next harvest."
       />
       {restock.isError && (
         <Notice tone="past" role="alert" title="The restock list could not be loaded">
@@ -39,7 +39,7 @@ export function RestockRoute() {
               Restock suggestions
             </h2>
             {restock.data.suggestions.length === 0 ? (
-              <EmptyState title="Nothing is running low">
+              <EmptyState title="Nothing to restock">
                 Mark your favorites and set a minimum below; Larderly watches the count for you.
               </EmptyState>
             ) : (

@@ -1,8 +1,9 @@
 import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { giftsThisYearWords } from '@shared/words';
+import { giftsThisYearWords } from '@shared/words/gifts';
 import { SelectField, TextField } from '@/components/ui/field';
+import { CautionLine } from '@/components/ui/caution-line';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -15,6 +16,7 @@ import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
 import { paths } from '@shared/paths';
 import { PLACE_WORDS } from '@shared/words/shelf-places';
+import { STOCK_WORDS } from '@shared/words/stock';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },
@@ -77,6 +79,9 @@ export function ShelfRoute() {
         }
         actions={
           <>
+            <Link to={paths.stock(hid)} className={linkButton}>
+              {STOCK_WORDS.shopLink}
+            </Link>
             <a href={`/api/households/${hid}/shelf.csv`} download className={linkButton}>
               Export CSV
             </a>
@@ -113,6 +118,7 @@ export function ShelfRoute() {
         </EmptyState>
       ) : (
         <div className="flex flex-col gap-4">
+          <CautionLine about="best-quality" />
           <div className="flex flex-wrap items-end justify-between gap-3">
             {(places.data?.length ?? 0) > 0 && (
               <div className="w-full sm:w-56">

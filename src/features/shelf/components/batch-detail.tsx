@@ -12,6 +12,7 @@ import {
   pressureWords,
 } from '@shared/words';
 import { placeMoveWords } from '@shared/words/shelf-places';
+import { MOUTH_LABELS } from '@shared/words/stock';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';
@@ -56,6 +57,8 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                 ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check`
                 : `${batch.jarsSealed} sealed`}
             </dd>
+            <dt className="text-ink-muted">Lids</dt>
+            <dd>{MOUTH_LABELS[batch.mouth]}</dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
               {METHOD_NAMES[batch.method]}, {processing} at {altitudeWords(batch.altitudeFt)}

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { JarView } from '@shared/schemas/batches';
-import { GIFT_WORDS } from '@shared/words';
+import { GIFT_WORDS } from '@shared/words/gifts';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

@@ -1,13 +1,7 @@
 import { ReasonToggle } from '@/components/ui/reason-toggle';
 import type { JarView } from '@shared/schemas/batches';
-import {
-  DATE_NAMES,
-  dateWords,
-  givenWords,
-  JAR_STATE_NAMES,
-  SEAL_TO_CHECK_NAME,
-  UNSEALED_STATE_NAME,
-} from '@shared/words';
+import { DATE_NAMES, dateWords, JAR_STATE_NAMES, SEAL_TO_CHECK_NAME, UNSEALED_STATE_NAME } from '@shared/words';
+import { givenWords } from '@shared/words/gifts';
 
 export function PastBestBadge({ bestBy }: { bestBy: string }) {
   return (

@@ -1,13 +1,23 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { recipeProcessingPlan } from '@shared/processing-plan';
-import { JAR_SIZES, PROCESSING_METHODS, UNSEALED_JAR_ADVICE, type JarSize, type Method } from '@shared/domain';
+import {
+  JAR_SIZES,
+  MOUTHS,
+  mouthFor,
+  PROCESSING_METHODS,
+  UNSEALED_JAR_ADVICE,
+  type JarSize,
+  type Method,
+  type Mouth,
+} from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
 import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
 import { PLACE_WORDS } from '@shared/words/shelf-places';
+import { MOUTH_LABELS } from '@shared/words/stock';
 import { FormFooter } from '@/components/ui/form-footer';
 import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -51,6 +61,11 @@ export function NewBatchForm({
   const jarSize = (JAR_SIZES as readonly string[]).includes(params.get('jarSize') ?? '')
     ? (params.get('jarSize') as JarSize)
     : (testedSizes[0] ?? product?.jarSize ?? 'half-pint');
+  // A jar's mouth is the jar's; the size's usual one until the cook says (it decides which lids the batch takes).
+  const mouth = mouthFor(
+    jarSize,
+    (MOUTHS as readonly string[]).includes(params.get('mouth') ?? '') ? (params.get('mouth') as Mouth) : null,
+  );
   const method = (PROCESSING_METHODS as readonly string[]).includes(params.get('method') ?? '')
     ? (params.get('method') as Method)
     : (recipe?.method ?? household.defaultMethod);
@@ -90,6 +105,7 @@ export function NewBatchForm({
         recipeId: recipe.id,
         cannedOn,
         jarSize,
+        mouth,
         jarsFilled: filled,
         jarsSealed: seals === 'to-check' ? filled : sealed,
         method,
@@ -99,7 +115,9 @@ export function NewBatchForm({
       },
       {
         onSuccess: (created) =>
-          navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') })),
+          navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') }), {
+            state: { stockWarnings: created.stockWarnings },
+          }),
       },
     );
   }
@@ -152,17 +170,30 @@ export function NewBatchForm({
           onChange={(e) => set({ date: e.target.value })}
           error={error?.fields.cannedOn}
         />
-        <div className="grid gap-4 sm:grid-cols-3">
+        <div className="grid gap-4 sm:grid-cols-2">
           <SelectField
             label="Jar size"
             value={jarSize}
-            onChange={(e) => set({ jarSize: e.target.value })}
+            onChange={(e) => set({ jarSize: e.target.value, mouth: null })}
             error={error?.fields.jarSize}
           >
             {JAR_SIZES.map((size) => (
               <option key={size} value={size}>
                 {jarSizeWords(size)}
                 {recipe && !testedSizes.includes(size) ? ' (no tested time)' : ''}
+              </option>
+            ))}
+          </SelectField>
+          <SelectField
+            label="Jar mouth"
+            value={mouth}
+            onChange={(e) => set({ mouth: e.target.value === mouthFor(jarSize) ? null : e.target.value })}
+            error={error?.fields.mouth}
+            hint={`Which lids the jars take; ${MOUTH_LABELS[mouthFor(jarSize)].toLowerCase()} is the usual for ${jarSizeWords(jarSize)} jars (common practice).`}
+          >
+            {MOUTHS.map((m) => (
+              <option key={m} value={m}>
+                {MOUTH_LABELS[m]}
               </option>
             ))}
           </SelectField>

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { count, DATE_NAMES, dateWords, GIFT_WORDS, heatWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { count, DATE_NAMES, dateWords, heatWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { GIFT_WORDS } from '@shared/words/gifts';
 import { placeWords } from '@shared/words/shelf-places';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
