@@ -14,7 +14,7 @@ type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer'>;
 
 const SLOT_ORDER = ['breakfast', 'lunch', 'dinner', 'snack'];
 
-/** The week ahead for one household: its plan, the jars to open, what expires and restock suggestions. */
+/** The week ahead for one household: its plan, the jars to open, the use-by dates this week and restock suggestions. */
 export async function buildDigest(household: Household, today: string, origin: string): Promise<DigestContent> {
   const weekEnd = addDays(today, 6);
   const products = await productsOf(household.id);

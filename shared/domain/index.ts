@@ -18,3 +18,4 @@ export * from './plan-waste';
 export * from './meal-proposal';
 export * from './seal-check';
 export * from './canners';
+export * from './jar-stock';

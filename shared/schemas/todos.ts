@@ -7,6 +7,7 @@ import {
   type IngredientUnit,
   type JarSize,
   type Method,
+  type Mouth,
   type ProcessingPlan,
   type RestockReason,
   type ScaledRecipe,
@@ -109,6 +110,20 @@ export interface BatchPlan {
   plannedOn: string;
   /** Filled in on every read: what differs from the plan as first made (altitude, canner, recipe), in words. */
   changes?: string[];
+  /** Filled in on every read: the empty jars and new lids in stock now, and what to buy beyond them. */
+  stock?: BatchPlanStock;
+}
+
+export interface BatchPlanStock {
+  mouth: Mouth;
+  emptyJars: number;
+  lids: number;
+  buyJars: number;
+  buyLids: number;
+  /** "You have 6 empty pint jars and no regular-mouth lids: buy 4 jars and 10 regular-mouth lids." */
+  words: string;
+  /** The to-do the plan offers to add ("Buy 10 regular-mouth lids and 4 pint jars"), or null with nothing to buy. */
+  todoTitle: string | null;
 }
 
 export interface TodoView {

@@ -98,6 +98,7 @@ function seedBody(key: string): unknown {
       useWithinDays: null,
       harvestMonths: [8, 9],
       notes: 'Keeps well.',
+      defaultPlaceId: ids.placeId,
     },
     [`POST ${H}/recipes`]: {
       productId: ids.productId,

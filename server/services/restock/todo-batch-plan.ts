@@ -98,6 +98,7 @@ export async function addRestockTodo(
       remainingTbsp: jar.remainingTbsp,
     })),
     finished: snapshot.finished,
+    given: snapshot.given,
     planned: snapshot.planned,
   });
   const suggestion = suggestions[0];

@@ -4,6 +4,9 @@ import {
   amountIn,
   cannerFor,
   cannerLoads,
+  batchShopping,
+  type Mouth,
+  type StockItem,
   scaleRecipe,
   type UnitSystem,
   type JarSize,
@@ -12,15 +15,17 @@ import {
 } from '../../../shared/domain';
 import {
   altitudeWords,
-  amountWords,
   dateWords,
   METHOD_NAMES,
   minutesWords,
   pressureWords,
+  amountWords,
 } from '../../../shared/words';
-import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
+import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/stock';
+import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
+import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
 /** The amount as the recipe keeps it, and as the household measures it (its text and its shown number). */
@@ -108,6 +113,20 @@ export function composeBatchPlan(question: PlanQuestion): BatchPlan {
   return plan;
 }
 
+/** What the plan's jars and lids need bought after the empty jars and new lids in stock now. */
+function planStock(plan: BatchPlan, mouth: Mouth, inStock: (item: StockItem, size: string) => number): BatchPlanStock {
+  const shop = batchShopping(plan.equipment.jars, {
+    emptyJars: inStock('jar', plan.jarSize),
+    lids: inStock('lid', mouth),
+  });
+  return {
+    mouth,
+    ...shop,
+    words: batchShoppingWords(plan.jarSize, mouth, shop),
+    todoTitle: batchShoppingTodo(plan.jarSize, mouth, shop),
+  };
+}
+
 function processingWords(plan: Pick<BatchPlan, 'processing'>, system: UnitSystem): string {
   const { minutes, pressurePsi, allowed } = plan.processing;
   if (!allowed) return 'no tested process';
@@ -176,10 +195,12 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  const [household, recipes, products] = await Promise.all([
+  const [household, recipes, products, inStock, mouthOf] = await Promise.all([
     Household.findByPk(householdId),
     Recipe.findAll({ where: { householdId, id: recipeIds } }),
     Product.findAll({ where: { householdId, id: productIds } }),
+    stockFor(Household.sequelize!, householdId),
+    usualMouths(Household.sequelize!, householdId, productIds),
   ]);
   if (!household) throw notFound('That household');
   return views.map((view) => {
@@ -211,6 +232,7 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
       targetWhy: made.targetWhy,
       changes: planChanges(made, now, household.unitSystem),
     };
+    fresh.stock = planStock(fresh, mouthOf(fresh.productId, fresh.jarSize), inStock);
     if (!household.altitudeConfirmedAt)
       return {
         ...view,

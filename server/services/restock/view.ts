@@ -86,8 +86,11 @@ export async function restockFromSnapshot(snapshot: StockSnapshot, system: UnitS
       remainingTbsp: jar.remainingTbsp,
     })),
     finished: snapshot.finished,
+    given: snapshot.given,
     planned: snapshot.planned,
   });
+  const yearStart = `${today.slice(0, 4)}-01-01`;
+  const givenThisYear = snapshot.given.filter((gift) => gift.givenOn >= yearStart);
   const byId = new Map<Id, Product>(products.map((p) => [p.id, p]));
   const forecastOf = new Map<Id, RestockForecast>(result.forecasts.map((f) => [f.productId, f]));
 
@@ -122,6 +125,8 @@ export async function restockFromSnapshot(snapshot: StockSnapshot, system: UnitS
       onHandTbsp: forecast.onHandTbsp,
       dailyTbsp: forecast.dailyTbsp,
       historyTbspPerDay: forecast.historyTbspPerDay,
+      givenJarsInHistory: forecast.givenJarsInHistory,
+      givenThisYear: givenThisYear.filter((gift) => gift.productId === product.id).length,
       plannedTbspPerDay: forecast.plannedTbspPerDay,
       runOutOn: forecast.runOutOn,
       jarSizeAdvice: jarSizeAdvice(forecast.dailyTbsp, useWithinDays),
@@ -133,7 +138,7 @@ export async function restockFromSnapshot(snapshot: StockSnapshot, system: UnitS
   // Favourites that need a batch first, then the other favourites, then the rest; by name within each.
   const rank = (f: RestockForecastView) => (suggested.has(f.productId) ? 0 : f.favourite ? 1 : 2);
   forecasts.sort((a, b) => rank(a) - rank(b) || a.productName.localeCompare(b.productName));
-  return { today, forecasts, suggestions };
+  return { today, givenThisYear: givenThisYear.length, forecasts, suggestions };
 }
 
 /** The restock suggestions for one household, for the weekly digest and other callers outside a request. */

@@ -7,6 +7,7 @@ import { Card } from '@/components/ui/page';
 import { CautionLine } from '@/components/ui/caution-line';
 import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
+import { MoveJar } from '@/features/shelf/components/move-jar';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
 import { dateWords } from '@shared/words';
@@ -63,6 +64,7 @@ export function JarRoute() {
             <ReminderOffer about={`this jar’s use-by (${dateWords(jar.useBy)})`} />
           )}
           {jar.unsealed && jar.state === 'opened' && <Notice tone="soon">{UNSEALED_JAR_ADVICE}</Notice>}
+          <MoveJar hid={found.data.householdId} jar={jar} canMove={can(found.data.role, 'handleJars')} />
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
           <PutBackJar
             hid={found.data.householdId}

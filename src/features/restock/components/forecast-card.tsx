@@ -37,6 +37,13 @@ export function ForecastCard({
         </p>
       </div>
       <p>{runOutWords(forecast, units)}</p>
+      {forecast.givenThisYear > 0 && (
+        <p className="text-sm text-ink-muted">
+          {count(forecast.givenThisYear, 'jar')} given away this year
+          {forecast.givenJarsInHistory > 0 && `, ${forecast.givenJarsInHistory} in the last twelve weeks`}: counted
+          apart from what you ate.
+        </p>
+      )}
       <p className="text-sm text-ink-muted">
         {advice.size
           ? `Jar size that gets finished within ${forecast.useWithinDays} days of opening: ${units.jarSize(advice.size)}.`

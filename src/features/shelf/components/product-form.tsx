@@ -11,10 +11,12 @@ import {
   type ProductColour,
   USE_WITHIN_DEFAULT_HINT,
 } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import { FormFooter } from '@/components/ui/form-footer';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { ApiError } from '@/lib/api-client';
 import { useFocusFirstError } from '@/lib/focus-first-error';
+import { usePlaces } from '../api/get-places';
 import { useSaveProduct } from '../api/save-product';
 import { numberFrom } from '../number-from';
 import { ColourDot } from './colour-dot';
@@ -27,6 +29,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
   const units = useUnits();
   const save = useSaveProduct(hid, product?.id);
   const navigate = useNavigate();
+  const places = usePlaces(hid);
   const [form, setForm] = useState({
     name: product?.name ?? '',
     kind: (product?.kind ?? 'relish') as ProductKind,
@@ -38,6 +41,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
     jarSize: (product?.jarSize ?? 'half-pint') as JarSize,
     colour: (product?.colour ?? 'honey') as ProductColour,
     notes: product?.notes ?? '',
+    defaultPlaceId: product?.defaultPlaceId ?? '',
   });
   const error = save.error instanceof ApiError ? save.error : null;
   const formRef = useFocusFirstError(error);
@@ -56,6 +60,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         jarSize: form.jarSize,
         colour: form.colour,
         notes: form.notes,
+        defaultPlaceId: form.defaultPlaceId || null,
       },
       { onSuccess: () => navigate(paths.shelf(hid)) },
     );
@@ -126,6 +131,20 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
             {units.jarSize(size)}
+          </option>
+        ))}
+      </SelectField>
+      <SelectField
+        label={PLACE_WORDS.defaultPlace}
+        value={form.defaultPlaceId}
+        onChange={(e) => setForm({ ...form, defaultPlaceId: e.target.value })}
+        error={error?.fields.defaultPlaceId}
+        hint={PLACE_WORDS.defaultPlaceHint}
+      >
+        <option value="">{PLACE_WORDS.none}</option>
+        {(places.data ?? []).map((place) => (
+          <option key={place.id} value={place.id}>
+            {place.name}
           </option>
         ))}
       </SelectField>

@@ -10,6 +10,7 @@ import {
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { DATE_NAMES, dateWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import type { ProductKind } from '@shared/domain';
 import { CheckboxField, SelectField } from '@/components/ui/field';
 import type { ShelfBatchRow } from '../shelf-rows';
@@ -68,6 +69,10 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
         ),
       }),
       column.accessor('pastBestQuality', { header: 'Past best', enableSorting: false, filterFn: 'equals' }),
+      column.accessor('places', {
+        header: PLACE_WORDS.name,
+        cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span>,
+      }),
       column.accessor('notes', {
         header: 'Notes',
         enableSorting: false,

@@ -1,6 +1,17 @@
 import { Link } from 'react-router-dom';
-import { BEFORE_YOU_START, count, dateWords, inCanner, METHOD_NAMES, minutesWords } from '@shared/words';
-import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
+import {
+  BEFORE_YOU_START,
+  count,
+  dateWords,
+  inCanner,
+  JAR_SIZE_NAMES,
+  minutesWords,
+  METHOD_NAMES,
+} from '@shared/words';
+import { MOUTH_NAMES, STOCK_WORDS } from '@shared/words/stock';
+import type { BatchPlan, BatchPlanStock, ShoppingItem } from '@shared/schemas/todos';
+import { Button } from '@/components/ui/button';
+import { useCreateTodo } from '../api/create-todo';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
 import { useUnits, type Units } from '@/lib/units';
@@ -27,6 +38,59 @@ function ShoppingList({ title, items }: { title: string; items: ShoppingItem[] }
           <li key={item.name}>{item.text}</li>
         ))}
       </ul>
+    </div>
+  );
+}
+
+/** The empty jars and new lids in stock now, what to buy beyond them, and a to-do to buy it. */
+function PlanStock({
+  hid,
+  plan,
+  stock,
+  canAdd,
+}: {
+  hid: string;
+  plan: BatchPlan;
+  stock: BatchPlanStock;
+  canAdd: boolean;
+}) {
+  const add = useCreateTodo(hid);
+  return (
+    <div className="mt-2 flex flex-col gap-2 rounded-lg border border-line bg-sunken p-3" data-testid="plan-stock">
+      <p>
+        {stock.words}{' '}
+        <Link to={paths.stock(hid)} className="font-bold text-action underline">
+          {STOCK_WORDS.title}
+        </Link>
+      </p>
+      {stock.todoTitle && canAdd && (
+        <div className="flex flex-wrap items-center gap-2">
+          {add.isSuccess ? (
+            <p role="status" className="font-bold">
+              Added “{stock.todoTitle}” to the to-do list.
+            </p>
+          ) : (
+            <Button
+              variant="secondary"
+              disabled={add.isPending}
+              onClick={() =>
+                add.mutate({
+                  title: stock.todoTitle!,
+                  notes: `For ${plan.productName}: ${count(plan.jars, `${JAR_SIZE_NAMES[plan.jarSize]} jar`)}, one new ${MOUTH_NAMES[stock.mouth]} lid a jar.`,
+                  dueOn: plan.targetOn,
+                })
+              }
+            >
+              {STOCK_WORDS.addLidsTodo}: {stock.todoTitle}
+            </Button>
+          )}
+          {add.error && (
+            <p role="alert" className="text-past">
+              {add.error.message}
+            </p>
+          )}
+        </div>
+      )}
     </div>
   );
 }
@@ -70,6 +134,15 @@ export function BatchPlanView({
         </Notice>
       )}
 
+      {/* The cautions come before every number of the plan: jars, amounts, minutes and pressure. */}
+      <Notice tone="info" title={BEFORE_YOU_START}>
+        <ul className="list-disc pl-5">
+          {plan.processing.cautions.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
+        </ul>
+      </Notice>
+
       <section aria-labelledby="plan-equipment">
         <h3 id="plan-equipment" className="mb-1 text-lg">
           Jars and canner
@@ -83,6 +156,7 @@ export function BatchPlanView({
             {plan.equipment.cannerCapacityJars})
           </li>
         </ul>
+        {plan.stock && <PlanStock hid={hid} plan={plan} stock={plan.stock} canAdd={canRecord} />}
       </section>
 
       <section aria-labelledby="plan-shopping">
@@ -106,14 +180,6 @@ export function BatchPlanView({
           </Notice>
         ))}
       </section>
-
-      <Notice tone="info" title={BEFORE_YOU_START}>
-        <ul className="list-disc pl-5">
-          {plan.processing.cautions.map((caution) => (
-            <li key={caution}>{caution}</li>
-          ))}
-        </ul>
-      </Notice>
 
       <section aria-labelledby="plan-processing">
         <h3 id="plan-processing" className="mb-1 text-lg">
