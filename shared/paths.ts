@@ -37,6 +37,8 @@ export const paths = {
   /** The week board, at the week holding `start` (YYYY-MM-DD) when given; `day` is the day a phone shows first. */
   week: (hid: string, start?: string, day?: string) => `${inHousehold(hid, 'week')}${query({ start, day })}`,
   shelf: (hid: string) => inHousehold(hid, 'shelf'),
+  /** The empty jars and new lids in the cupboard, reached from the Shelf. */
+  stock: (hid: string) => inHousehold(hid, 'shelf/stock'),
   fridge: (hid: string) => inHousehold(hid, 'fridge'),
   batches: (hid: string) => inHousehold(hid, 'batches'),
   newBatch: (hid: string, prefill: NewBatchPrefill = {}) =>

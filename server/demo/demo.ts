@@ -1,3 +1,4 @@
+import type { Canner } from '../../shared/domain';
 import type { Sequelize } from 'sequelize';
 import type { Role } from '../../shared/roles';
 import { hashPassword } from '../auth/passwords';
@@ -19,7 +20,14 @@ export async function seedDemo(sequelize: Sequelize, bcryptCost = 12) {
     const members: Record<string, User> = {};
     for (const h of accounts.households) {
       const household = await Household.create(
-        { name: h.name, altitudeFt: h.altitudeFt, timeZone: h.timeZone, altitudeConfirmedAt: new Date() },
+        {
+          name: h.name,
+          altitudeFt: h.altitudeFt,
+          timeZone: h.timeZone,
+          altitudeConfirmedAt: new Date(),
+          // A water-bath canner for fruit and pickles, a pressure canner for the low-acid jars (common sizes).
+          ...('canners' in h ? { canners: h.canners as Canner[] } : {}),
+        },
         { transaction },
       );
       households[h.name] = household;

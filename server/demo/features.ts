@@ -1,7 +1,9 @@
 import type { Transaction } from 'sequelize';
 import type { Household, User } from '../db/models';
+import { seedPlaces } from './places';
 import { seedSealCheck } from './seal-check';
 import { seedShelf } from './shelf';
+import { seedStock } from './stock';
 import { seedWeek } from './week';
 import { seedProposalScenario } from './week-proposal';
 import { seedTodos } from './todos';
@@ -20,6 +22,8 @@ export interface DemoSeedContext {
 export async function seedDemoFeatures(ctx: DemoSeedContext) {
   await seedShelf(ctx);
   await seedSealCheck(ctx);
+  await seedPlaces(ctx);
+  await seedStock(ctx);
   await seedWeek(ctx);
   await seedProposalScenario(ctx);
   await seedTodos(ctx);

@@ -1,5 +1,5 @@
 // Our invented demo shelf: two seasons of batches and what became of each jar, in days before today.
-import type { JarSize } from '../../shared/domain';
+import type { JarSize, Mouth } from '../../shared/domain';
 import type { ProductCreate } from '../../shared/schemas/products';
 
 export const CALLOWAY_PRODUCTS: ProductCreate[] = [
@@ -149,12 +149,16 @@ export interface JarFates {
   /** opened and still in the fridge */
   opened?: number[];
   discarded?: number[];
+  /** given away, and to whom when the giver said */
+  given?: { daysAgo: number; to?: string }[];
 }
 
 export interface DemoBatch {
   product: string;
   daysAgo: number;
   jarSize: JarSize;
+  /** The jars' mouth, where not the size's usual one: the relish goes in wide-mouth half-pints. */
+  mouth?: Mouth;
   filled: number;
   sealed: number;
   notes?: string;
@@ -170,6 +174,7 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     product: 'Sweet Corn Relish',
     daysAgo: 490,
     jarSize: 'half-pint',
+    mouth: 'wide',
     filled: 9,
     sealed: 9,
     fates: { finished: [380, 340, 300, 270, 240, 200, 170, 150] },
@@ -253,6 +258,7 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     product: 'Sweet Corn Relish',
     daysAgo: 120,
     jarSize: 'half-pint',
+    mouth: 'wide',
     filled: 9,
     sealed: 9,
     fates: { finished: [80, 62, 44, 27], opened: [12] },
@@ -273,7 +279,14 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     sealed: 7,
     fates: { finished: [78, 58, 37], opened: [16] },
   },
-  { product: 'Roasted Salsa Verde', daysAgo: 95, jarSize: 'pint', filled: 5, sealed: 5, fates: { finished: [70, 33] } },
+  {
+    product: 'Roasted Salsa Verde',
+    daysAgo: 95,
+    jarSize: 'pint',
+    filled: 5,
+    sealed: 5,
+    fates: { finished: [70, 33], given: [{ daysAgo: 6 }] },
+  },
   {
     product: 'Hot Pepper Jelly',
     daysAgo: 90,
@@ -281,7 +294,12 @@ export const CALLOWAY_BATCHES: DemoBatch[] = [
     filled: 6,
     sealed: 5,
     notes: 'Set softer than usual. One jar did not seal.',
-    fates: {},
+    fates: {
+      given: [
+        { daysAgo: 9, to: 'the Okafors next door' },
+        { daysAgo: 2, to: 'Wren, for the cheese board' },
+      ],
+    },
     unsealedFates: [{ discarded: 80 }],
   },
   {

@@ -80,6 +80,7 @@ async function seedBatches(
         recipeId: recipe?.id ?? null,
         cannedOn,
         jarSize: demo.jarSize,
+        mouth: demo.mouth ?? null,
         jarsFilled: demo.filled,
         jarsSealed: demo.sealed,
         method: 'boiling-water',
@@ -98,6 +99,24 @@ async function seedBatches(
       ...(demo.fates.opened ?? []).map((daysAgo) => ({ daysAgo, state: 'opened' as const })),
       ...(demo.fates.discarded ?? []).map((daysAgo) => ({ daysAgo, state: 'discarded' as const })),
     ];
+    // Gifts leave the shelf sealed: no open before, the empty jar never comes back.
+    for (const [index, gift] of (demo.fates.given ?? []).entries()) {
+      const jar = sealed[fates.length + index];
+      const day = addDays(today, -gift.daysAgo);
+      await jar.update({ state: 'given', givenOn: day, givenTo: gift.to ?? null }, { transaction });
+      await JarEvent.create(
+        {
+          householdId: household.id,
+          jarId: jar.id,
+          batchId: batch.id,
+          kind: 'given',
+          userId: nextHandler().id,
+          happenedOn: day,
+          givenTo: gift.to ?? null,
+        },
+        { transaction },
+      );
+    }
     for (const [index, fate] of fates.entries()) {
       const jar = sealed[index];
       const day = addDays(today, -fate.daysAgo);

@@ -1,12 +1,21 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { JAR_ACTIONS, jarStateQuery, jarUndoBody } from '../../shared/schemas/batches';
+import { JAR_ACTIONS, jarGiveBody, jarStateQuery, jarUndoBody } from '../../shared/schemas/batches';
+import { jarActionBody } from '../../shared/schemas/stock';
 import { currentMembership, householdAccess, requireUser } from '../auth/guards';
 import type { AppContext } from '../context';
 import { idempotent } from '../http/idempotency';
 import { body, params, query } from '../http/validate';
 import { undoJarEvent } from '../services/shelf/jar-undo';
-import { actOnJar, jarByCode, jarInHousehold, listJars, openingAdvice } from '../services/shelf/jars';
+import {
+  actOnJar,
+  giftsThisYear,
+  giveJar,
+  jarByCode,
+  jarInHousehold,
+  listJars,
+  openingAdvice,
+} from '../services/shelf/jars';
 
 const jarAction = z.object({
   hid: z.string(),
@@ -34,6 +43,17 @@ export function jarsRouter(ctx: AppContext) {
     res.json({ advice: await openingAdvice(currentMembership(req).household, params(req, jarParams).jarId) });
   });
 
+  router.get('/gifts', householdAccess('read'), async (req, res) => {
+    res.json({ gifts: await giftsThisYear(currentMembership(req).household) });
+  });
+
+  // Before '/:action', like undo: any member may give a sealed jar away, and undo it as they would an open.
+  router.post('/jars/:jarId/give', householdAccess('handleJars'), idempotent(ctx.sequelize), async (req, res) => {
+    const { jarId } = params(req, jarParams);
+    const { to } = body(req, jarGiveBody);
+    res.json(await giveJar(ctx.sequelize, currentMembership(req).household, jarId, to, req.user!.id));
+  });
+
   // Before '/:action': any member may try; the service lets helpers undo only their own recent change.
   router.post('/jars/:jarId/undo', householdAccess('handleJars'), idempotent(ctx.sequelize), async (req, res) => {
     const { jarId } = params(req, jarParams);
@@ -44,7 +64,8 @@ export function jarsRouter(ctx: AppContext) {
 
   router.post('/jars/:jarId/:action', householdAccess('handleJars'), idempotent(ctx.sequelize), async (req, res) => {
     const { jarId, action } = params(req, jarAction);
-    res.json(await actOnJar(ctx.sequelize, currentMembership(req).household, jarId, action, req.user!.id));
+    const { kept } = body(req, jarActionBody);
+    res.json(await actOnJar(ctx.sequelize, currentMembership(req).household, jarId, action, req.user!.id, { kept }));
   });
 
   return router;

@@ -17,10 +17,11 @@ type Column = [json: string, sql: string, type: string, ref?: BackupTable];
 
 /**
  * What a backup holds, table by table in insert order. People are left out (the importer becomes
- * the keeper), and so are photos, who did what, and a batch's processings and seal check (a jar still to check
+ * the keeper), and so are photos, who did what (the jar and lid stock keeps its counts, not its changes), and a batch's processings and seal check (a jar still to check
  * comes back checked; the README says so). Label codes go in, and are kept on import where no jar holds them.
  */
 const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: false }[] = [
+  { key: 'places', table: 'places', columns: [['name', 'name', 'varchar']] },
   {
     key: 'products',
     table: 'products',
@@ -35,6 +36,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['jarSize', 'jar_size', 'varchar'],
       ['colour', 'colour', 'varchar'],
       ['notes', 'notes', 'text'],
+      ['defaultPlaceId', 'default_place_id', 'uuid', 'places'],
     ],
   },
   {
@@ -65,6 +67,7 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['recipeId', 'recipe_id', 'uuid', 'recipes'],
       ['cannedOn', 'canned_on', 'date'],
       ['jarSize', 'jar_size', 'varchar'],
+      ['mouth', 'mouth', 'varchar'],
       ['jarsFilled', 'jars_filled', 'int'],
       ['jarsSealed', 'jars_sealed', 'int'],
       ['method', 'method', 'varchar'],
@@ -90,7 +93,10 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['useBy', 'use_by', 'date'],
       ['finishedOn', 'finished_on', 'date'],
       ['discardedOn', 'discarded_on', 'date'],
+      ['givenOn', 'given_on', 'date'],
+      ['givenTo', 'given_to', 'varchar'],
       ['code', 'code', 'varchar'],
+      ['placeId', 'place_id', 'uuid', 'places'],
     ],
   },
   {
@@ -102,6 +108,8 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['batchId', 'batch_id', 'uuid', 'batches'],
       ['kind', 'kind', 'varchar'],
       ['happenedOn', 'happened_on', 'date'],
+      ['placeMove', 'place_move', 'jsonb'],
+      ['givenTo', 'given_to', 'varchar'],
     ],
   },
   {
@@ -159,6 +167,15 @@ const TABLES: { key: BackupTable; table: string; columns: Column[]; updatedAt?: 
       ['batchPlan', 'batch_plan', 'jsonb'],
     ],
   },
+  {
+    key: 'jarStock',
+    table: 'jar_stock',
+    columns: [
+      ['item', 'item', 'varchar'],
+      ['size', 'size', 'varchar'],
+      ['count', 'count', 'int'],
+    ],
+  },
 ];
 
 /** The household as one JSON document, every table in a stable order. */
@@ -174,7 +191,7 @@ export async function exportHousehold(sequelize: Sequelize, household: Household
       timeZone: household.timeZone,
       bestQualityMonths: household.bestQualityMonths,
       weekStartsOn: household.weekStartsOn,
-      cannerCapacityJars: household.cannerCapacityJars,
+      canners: household.canners,
       defaultMethod: household.defaultMethod,
       mealTimes: household.mealTimes,
     },
@@ -200,7 +217,15 @@ export async function importHousehold(
     throw new AppError(400, 'invalid_input', 'The time zone in the file is not one this server knows.');
   try {
     return await sequelize.transaction(async (transaction) => {
-      const household = await Household.create({ ...backup.household }, { transaction });
+      const { cannerCapacityJars, canners, ...settings } = backup.household;
+      // Older backups give one capacity: it becomes the default canner's.
+      const household = await Household.create(
+        {
+          ...settings,
+          canners: canners ?? [{ method: settings.defaultMethod, capacityJars: cannerCapacityJars ?? 7 }],
+        },
+        { transaction },
+      );
       await Membership.create({ householdId: household.id, userId: importerId, role: 'keeper' }, { transaction });
       const takenCodes = await codesInUse(
         sequelize,

@@ -14,7 +14,7 @@ type Notifiers = Pick<AppContext, 'config' | 'sequelize' | 'mailer'>;
 
 const SLOT_ORDER = ['breakfast', 'lunch', 'dinner', 'snack'];
 
-/** The week ahead for one household: its plan, the jars to open, what expires and restock suggestions. */
+/** The week ahead for one household: its plan, the jars to open, the use-by dates this week and restock suggestions. */
 export async function buildDigest(household: Household, today: string, origin: string): Promise<DigestContent> {
   const weekEnd = addDays(today, 6);
   const products = await productsOf(household.id);
@@ -29,7 +29,7 @@ export async function buildDigest(household: Household, today: string, origin: s
       order: [['useBy', 'ASC']],
     }),
     allocatePlan(household.id, today, weekEnd, products),
-    digestRestockLines(household.id, today),
+    digestRestockLines(household.id, today, household.unitSystem),
   ]);
   const jarProduct = new Map(
     (await Jar.findAll({ where: { id: (plan?.allocation.openings ?? []).map((o) => String(o.jarId)) } })).map((j) => [

@@ -13,6 +13,8 @@ import {
 } from '../db/models';
 import { AppError, conflict, notFound } from '../http/errors';
 import { paths } from '../../shared/paths';
+import { cannerFor } from '../../shared/domain';
+import { METHOD_NAMES } from '../../shared/words';
 
 export function viewHousehold(household: Household, role: Role): HouseholdView {
   return { ...household.toPublic(), role };
@@ -29,7 +31,24 @@ export async function listMembers(householdId: string): Promise<MemberView[]> {
 
 /** A keeper who saves an altitude has confirmed it: from then on processing plans may be shown. */
 export async function updateHousehold(household: Household, patch: HouseholdPatch) {
-  await household.update(patch.altitudeFt === undefined ? patch : { ...patch, altitudeConfirmedAt: new Date() });
+  const { cannerCapacityJars, canners: listed, ...settings } = patch;
+  const defaultMethod = patch.defaultMethod ?? household.defaultMethod;
+  let canners = listed ?? household.canners;
+  if (cannerCapacityJars !== undefined) {
+    // One number for the default canner, as the first-run questions ask it: that canner's capacity, added if new.
+    canners = cannerFor(canners, defaultMethod)
+      ? canners.map((c) => (c.method === defaultMethod ? { ...c, capacityJars: cannerCapacityJars } : c))
+      : [...canners, { method: defaultMethod, capacityJars: cannerCapacityJars }];
+  }
+  if (!cannerFor(canners, defaultMethod)) {
+    const message = `Add the ${METHOD_NAMES[defaultMethod].toLowerCase()} to the household’s canners first, or choose one it has as the default.`;
+    throw new AppError(400, 'invalid_input', message, { defaultMethod: message });
+  }
+  await household.update({
+    ...settings,
+    canners,
+    ...(patch.altitudeFt === undefined ? {} : { altitudeConfirmedAt: new Date() }),
+  });
   return household;
 }
 

@@ -1,7 +1,8 @@
 // Today: what to open and use from the week's allocation, the fridge countdowns, restock and my to-dos, in one read.
 import { addDays, allocateWeek, daysBetween, type Id, type PlannedPortion } from '../../shared/domain';
 import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/today';
-import { Household, Jar, Product, Todo } from '../db/models';
+import { placeWords } from '../../shared/words/shelf-places';
+import { Household, Jar, Place, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
 import { keepsDays } from './plan-allocation';
 import { sealChecksOf } from './shelf/seal-check';
@@ -16,7 +17,15 @@ function openedDaysLeft(jar: Jar | undefined, today: string): number | null {
   return jar?.state === 'opened' && jar.useBy ? daysBetween(today, jar.useBy) : null;
 }
 
-function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView['short'] } {
+/** Where a jar Today draws from is kept, by name and in words. */
+function placeOf(name: string | null) {
+  return { jarPlaceName: name, jarPlaceWords: name ? placeWords(name) : null };
+}
+
+function todaysUse(
+  snapshot: StockSnapshot,
+  placeNames: Map<string, string>,
+): { use: TodayUse[]; short: TodayView['short'] } {
   const { today, products, shelfJars, planned, entryOf } = snapshot;
   const productOf = new Map<Id, Product>(products.map((p) => [p.id, p]));
   // The week ahead decides which jar today draws from: opened jars first, then the oldest sealed one.
@@ -52,6 +61,7 @@ function todaysUse(snapshot: StockSnapshot): { use: TodayUse[]; short: TodayView
         tbsp: assignment.tbsp,
         jarId: assignment.jarId === null ? null : String(assignment.jarId),
         jarCode: assignment.jarId === null ? null : jarOf.get(assignment.jarId)!.code,
+        ...placeOf(placeNames.get(jarOf.get(assignment.jarId ?? '')?.placeId ?? '') ?? null),
         openedJarDaysLeft: openedDaysLeft(jarOf.get(assignment.jarId ?? ''), today),
         opensToday: assignment.jarId !== null && openedToday.has(assignment.jarId),
       },
@@ -88,7 +98,7 @@ function fridgeCountdowns(snapshot: StockSnapshot): TodayFridgeJar[] {
 
 export async function todayView(household: Household, userId: string): Promise<TodayView> {
   const today = todayIn(household.timeZone);
-  const [snapshot, myTodos, openTodoCount, sealChecks] = await Promise.all([
+  const [snapshot, myTodos, openTodoCount, sealChecks, places] = await Promise.all([
     stockSnapshot(household.id, today),
     Todo.findAll({
       where: { householdId: household.id, done: false, assigneeId: userId },
@@ -97,12 +107,13 @@ export async function todayView(household: Household, userId: string): Promise<T
     }),
     Todo.count({ where: { householdId: household.id, done: false } }),
     sealChecksOf(household),
+    Place.findAll({ where: { householdId: household.id }, attributes: ['id', 'name'] }),
   ]);
   const fridge = fridgeCountdowns(snapshot);
-  const restock = await restockFromSnapshot(snapshot);
+  const restock = await restockFromSnapshot(snapshot, household.unitSystem);
   return {
     today,
-    ...todaysUse(snapshot),
+    ...todaysUse(snapshot, new Map(places.map((place) => [place.id, place.name]))),
     fridge: fridge.slice(0, FRIDGE_SHOWN),
     fridgeCount: fridge.length,
     restock: restock.suggestions,

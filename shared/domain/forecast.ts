@@ -25,6 +25,12 @@ export interface FinishedPortion {
   tbsp: number;
 }
 
+/** A jar given away: it left the shelf, but nobody in the household ate it. */
+export interface GivenJar {
+  productId: Id;
+  givenOn: string;
+}
+
 export interface PlannedDraw {
   productId: Id;
   date: string;
@@ -33,8 +39,10 @@ export interface PlannedDraw {
 
 export interface ProductForecast {
   productId: Id;
-  /** Tablespoons finished in the 84 days before today, divided by 84. */
+  /** Tablespoons finished in the 84 days before today, divided by 84. Gifts are not in it. */
   historyTbspPerDay: number;
+  /** Jars given away in the same 84 days, counted apart from what the household ate. */
+  givenJarsInHistory: number;
   /** Planned tablespoons divided by the days from today to the last planned date, both included. */
   plannedTbspPerDay: number;
   /** The larger of the two rates. */
@@ -68,6 +76,15 @@ export function readFinishedPortion(entry: FinishedPortion, index: number): Fini
   };
 }
 
+export function readGivenJar(entry: GivenJar, index: number): GivenJar {
+  const label = `given[${index}]`;
+  requireRecord(entry, label);
+  return {
+    productId: requireId(entry.productId, `${label}.productId`),
+    givenOn: requireIsoDate(entry.givenOn, `${label}.givenOn`),
+  };
+}
+
 export function readPlannedDraw(entry: PlannedDraw, index: number): PlannedDraw {
   const label = `planned[${index}]`;
   requireRecord(entry, label);
@@ -84,6 +101,8 @@ interface ForecastQuestion {
   horizonDays: number;
   jars: ForecastJar[];
   finished: FinishedPortion[];
+  /** Jars given away; they leave the shelf (so they are not in `jars`) and never raise the eating rate. */
+  given?: GivenJar[];
   planned: PlannedDraw[];
 }
 
@@ -97,6 +116,7 @@ export function forecastProduct({
   horizonDays,
   jars,
   finished,
+  given = [],
   planned,
 }: ForecastQuestion): ProductForecast {
   const todayDay = dayNumber(today, 'today');
@@ -105,14 +125,17 @@ export function forecastProduct({
   );
   const onHandTbsp = shelfJars.reduce((sum, jar) => sum + jar.remainingTbsp, 0);
 
+  const inHistory = (date: string) => {
+    const day = dayNumber(date);
+    return day >= todayDay - HISTORY_DAYS && day < todayDay;
+  };
+  // The eating rate is what the household finished. A jar given away left the shelf without being eaten, so a
+  // generous month lowers what is on hand but not the rate at which the household eats (common practice).
   const historyTbsp = finished
-    .filter((entry) => entry.productId === productId)
-    .filter((entry) => {
-      const day = dayNumber(entry.finishedOn);
-      return day >= todayDay - HISTORY_DAYS && day < todayDay;
-    })
+    .filter((entry) => entry.productId === productId && inHistory(entry.finishedOn))
     .reduce((sum, entry) => sum + entry.tbsp, 0);
   const historyTbspPerDay = historyTbsp / HISTORY_DAYS;
+  const givenJarsInHistory = given.filter((entry) => entry.productId === productId && inHistory(entry.givenOn)).length;
 
   const plannedByDay = new Map<number, number>();
   for (const entry of planned) {
@@ -145,6 +168,7 @@ export function forecastProduct({
   return {
     productId,
     historyTbspPerDay,
+    givenJarsInHistory,
     plannedTbspPerDay,
     dailyTbsp: Math.max(historyTbspPerDay, plannedTbspPerDay),
     onHandTbsp,

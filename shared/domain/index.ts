@@ -17,3 +17,5 @@ export * from './validate';
 export * from './plan-waste';
 export * from './meal-proposal';
 export * from './seal-check';
+export * from './canners';
+export * from './jar-stock';

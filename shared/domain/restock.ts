@@ -4,9 +4,11 @@ import {
   forecastProduct,
   readFinishedPortion,
   readForecastJar,
+  readGivenJar,
   readPlannedDraw,
   type FinishedPortion,
   type ForecastJar,
+  type GivenJar,
   type PlannedDraw,
   type ProductForecast,
 } from './forecast';
@@ -34,6 +36,8 @@ export interface RestockInput {
   products: RestockProduct[];
   jars: ForecastJar[];
   finished: FinishedPortion[];
+  /** Jars given away: counted apart, never as eaten. */
+  given?: GivenJar[];
   planned: PlannedDraw[];
   leadDays?: number;
 }
@@ -111,13 +115,22 @@ export function restockSuggestions(input: RestockInput): RestockResult {
   const products = requireList<RestockProduct>(input.products, 'products').map(readProduct);
   const jars = requireList<ForecastJar>(input.jars, 'jars').map(readForecastJar);
   const finished = requireList<FinishedPortion>(input.finished, 'finished').map(readFinishedPortion);
+  const given = requireList<GivenJar>(input.given ?? [], 'given').map(readGivenJar);
   const planned = requireList<PlannedDraw>(input.planned, 'planned').map(readPlannedDraw);
   const horizon = addDays(today, leadDays);
 
   const forecasts: RestockForecast[] = [];
   const suggestions: RestockSuggestion[] = [];
   for (const product of products) {
-    const base = forecastProduct({ productId: product.id, today, horizonDays: leadDays, jars, finished, planned });
+    const base = forecastProduct({
+      productId: product.id,
+      today,
+      horizonDays: leadDays,
+      jars,
+      finished,
+      given,
+      planned,
+    });
     const forecast = {
       ...base,
       projectedJars: Math.floor(base.tbspLeftOnHorizon / jarCapacityTbsp(product.jarSize) + CRUMB_JARS),

@@ -2,7 +2,8 @@
 import { addDays, addMonths, requireIsoDate } from './dates';
 import { requireWholeNumber } from './validate';
 
-export const JAR_STATES = ['sealed', 'opened', 'finished', 'discarded'] as const;
+/** A jar's life: on the shelf (sealed), in the fridge (opened), and its three endings: eaten, thrown out, given away. */
+export const JAR_STATES = ['sealed', 'opened', 'finished', 'discarded', 'given'] as const;
 export type JarState = (typeof JAR_STATES)[number];
 
 /** NCHFP, "Storing Home Canned Foods": for best quality, use home-canned food within one year. */

@@ -4,13 +4,14 @@ import {
   INGREDIENT_UNITS,
   JAR_SIZES,
   JAR_STATES,
+  MOUTHS,
   PROCESSING_METHODS,
   PRODUCT_KINDS,
   RESTOCK_REASONS,
 } from '../domain';
 import { householdName } from './auth';
 import { mealTimesBody } from './calendar';
-import { UNIT_SYSTEMS } from './households';
+import { canner, UNIT_SYSTEMS } from './households';
 import { ingredientInput } from './recipes';
 import { PRODUCT_COLOURS } from '../words';
 import { SLOTS } from './week';
@@ -31,6 +32,10 @@ const tbsp = z.number().min(0).max(100_000);
 const list = <T extends z.ZodType>(item: T, max: number) =>
   z.array(item).max(max, `The file has more than ${max.toLocaleString('en-US')} of these.`);
 
+// Added with shelf places; older files have none, and their jars come back with no place.
+const place = z.object({ id, name: text(N.placeName).trim().min(1) });
+const placeRef = id.nullable().default(null);
+
 const product = z.object({
   id,
   name: text(N.productName).min(1),
@@ -43,6 +48,7 @@ const product = z.object({
   jarSize: z.enum(JAR_SIZES),
   colour: z.enum(PRODUCT_COLOURS),
   notes: text(N.notes),
+  defaultPlaceId: placeRef,
 });
 
 const recipe = z.object({
@@ -72,6 +78,8 @@ const batch = z.object({
   recipeId: id.nullable(),
   cannedOn: date,
   jarSize: z.enum(JAR_SIZES),
+  /** Added with the jar and lid stock; older backups have none (the size's usual mouth). */
+  mouth: z.enum(MOUTHS).nullable().default(null),
   jarsFilled: int(1, LIMITS.jarsPerBatch),
   jarsSealed: int(0, LIMITS.jarsPerBatch),
   method: z.enum(PROCESSING_METHODS),
@@ -95,19 +103,41 @@ const jar = z.object({
   useBy: date.nullable(),
   finishedOn: date.nullable(),
   discardedOn: date.nullable(),
+  // Older files carry no gifts; their jars were not given.
+  givenOn: date.nullable().optional(),
+  givenTo: text(N.giftRecipient).nullable().optional(),
   // Older files carry no label codes; the import then gives fresh ones.
   code: z
     .string()
     .regex(/^[0-9A-HJKMNP-TV-Z]{6}$/, 'A label code is 6 letters and digits.')
     .optional(),
+  placeId: placeRef,
 });
 
 const jarEvent = z.object({
   id,
   jarId: id,
   batchId: id,
-  kind: z.enum(['filled', 'unsealed', 'opened', 'finished', 'discarded', 'restored', 'seal-checked', 'reprocessed']),
+  kind: z.enum([
+    'filled',
+    'unsealed',
+    'opened',
+    'finished',
+    'discarded',
+    'given',
+    'restored',
+    'seal-checked',
+    'reprocessed',
+    'moved',
+  ]),
   happenedOn: date,
+  // Older files carry no gifts.
+  givenTo: text(N.giftRecipient).nullable().optional(),
+  placeMove: z
+    .object({ from: text(N.placeName).nullable(), to: text(N.placeName).nullable() })
+    .strict()
+    .nullable()
+    .default(null),
 });
 
 const meal = z.object({
@@ -147,6 +177,7 @@ const shoppingItem = z.object({
     .min(0)
     .max(LIMITS.ingredientAmount * 100),
   unit: z.enum(INGREDIENT_UNITS),
+  shown: z.object({ amount: z.number().min(0), unit: z.enum(INGREDIENT_UNITS) }).optional(),
   text: text(200),
 });
 /** A restock to-do's batch plan, every field as the server writes it: the to-do page draws each of them. */
@@ -190,6 +221,7 @@ const batchPlan = z.object({
   equipment: z.object({
     jars: int(1, LIMITS.jarsPerBatch),
     newLids: int(0, LIMITS.jarsPerBatch),
+    cannerMethod: z.enum(PROCESSING_METHODS).optional(),
     cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
     cannerLoads: z.array(int(0, LIMITS.cannerCapacityJars)).max(LIMITS.jarsPerBatch),
   }),
@@ -202,6 +234,12 @@ const batchPlan = z.object({
   plannedOn: date,
   changes: words(1000).optional(),
 });
+
+/** A count of empty jars of one size or of new lids of one mouth; the history of changes stays behind, like who did what. */
+const stockCount = z.discriminatedUnion('item', [
+  z.object({ id, item: z.literal('jar'), size: z.enum(JAR_SIZES), count: int(0, LIMITS.stockCount) }),
+  z.object({ id, item: z.literal('lid'), size: z.enum(MOUTHS), count: int(0, LIMITS.stockCount) }),
+]);
 
 const todo = z.object({
   id,
@@ -231,11 +269,14 @@ export const householdBackup = z
       timeZone: text(64),
       bestQualityMonths: int(1, LIMITS.bestQualityMonths),
       weekStartsOn: int(0, 6),
-      cannerCapacityJars: int(1, LIMITS.cannerCapacityJars),
+      /** Older backups have one capacity instead of a list of canners. */
+      cannerCapacityJars: int(1, LIMITS.cannerCapacityJars).optional(),
+      canners: z.array(canner).min(1).max(PROCESSING_METHODS.length).optional(),
       defaultMethod: z.enum(PROCESSING_METHODS),
       /** Added with the household calendar; older backups have none and get the default times. */
       mealTimes: mealTimesBody.optional(),
     }),
+    places: list(place, LIMITS.places).default([]),
     products: list(product, 2_000),
     recipes: list(recipe, 2_000),
     batches: list(batch, 10_000),
@@ -246,6 +287,12 @@ export const householdBackup = z
     planEntries: list(planEntry, 20_000),
     pairings: list(pairing, 50_000),
     todos: list(todo, 5_000),
+    /** Added with the jar and lid stock; older backups have none. */
+    jarStock: list(stockCount, JAR_SIZES.length + MOUTHS.length)
+      .refine((rows) => new Set(rows.map((row) => `${row.item} ${row.size}`)).size === rows.length, {
+        error: 'The file counts the same jar size or lid mouth twice.',
+      })
+      .default([]),
   })
   .strict();
 

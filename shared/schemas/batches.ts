@@ -2,10 +2,12 @@ import { z } from 'zod';
 import { LIMITS, limitWords } from './limits';
 import {
   JAR_SIZES,
+  MOUTHS,
   PROCESSING_METHODS,
   type JarSize,
   type JarState,
   type Method,
+  type Mouth,
   type ProcessingPlan,
 } from '../domain';
 
@@ -21,6 +23,8 @@ export const batchCreate = z
     recipeId: z.uuid({ error: 'Choose the tested recipe you followed.' }),
     cannedOn: isoDate,
     jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
+    /** The jars' mouth, for their lids; without it, the size's usual mouth. */
+    mouth: z.enum(MOUTHS, { error: 'Choose regular or wide mouth.' }).optional(),
     jarsFilled: z
       .number({ error: 'Enter how many jars you filled.' })
       .int('Use a whole number of jars.')
@@ -41,6 +45,8 @@ export const batchCreate = z
     seals: z
       .enum(SEAL_STATES, { error: 'Say whether the seals are checked already or still to check.' })
       .default('checked'),
+    /** Where the jars go; left out, the product's usual place. null: no place. */
+    placeId: z.uuid({ error: 'Choose a place from the list, or no place.' }).nullable().optional(),
   })
   .strict()
   .refine((batch) => batch.jarsSealed <= batch.jarsFilled, {
@@ -105,6 +111,8 @@ export interface SealCheckDone {
   reprocessed: number;
   plan: ProcessingPlan | null;
   batch: BatchDetail;
+  /** Said when the reprocess used more new lids than were in stock. */
+  stockWarnings: string[];
 }
 
 export const planQuery = z.object({
@@ -114,9 +122,11 @@ export const planQuery = z.object({
 });
 
 export const jarStateQuery = z.object({
-  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded']), z.literal('all')]).optional(),
+  state: z.union([z.enum(['sealed', 'opened', 'finished', 'discarded', 'given']), z.literal('all')]).optional(),
   productId: z.uuid().optional(),
   batchId: z.uuid().optional(),
+  /** A place's id, or 'none' for jars with no place named. */
+  placeId: z.union([z.uuid({ error: 'That place was not found.' }), z.literal('none')]).optional(),
 });
 
 export const JAR_ACTIONS = ['open', 'finish', 'discard'] as const;
@@ -132,6 +142,9 @@ export interface JarView {
   useBy: string | null;
   finishedOn: string | null;
   discardedOn: string | null;
+  /** The day the jar was given away, and to whom when the giver said. */
+  givenOn: string | null;
+  givenTo: string | null;
   capacityTbsp: number;
   remainingTbsp: number;
   batchId: string;
@@ -146,6 +159,9 @@ export interface JarView {
   pastBestQuality: boolean;
   /** 'to-check' while the jar cools after processing. */
   seal: SealState;
+  placeId: string | null;
+  /** The place's name, null when none is named. */
+  placeName: string | null;
 }
 
 export interface BatchView {
@@ -156,6 +172,8 @@ export interface BatchView {
   recipeName: string | null;
   cannedOn: string;
   jarSize: JarSize;
+  /** The jars' mouth: the one recorded, else the size's usual one. */
+  mouth: Mouth;
   jarsFilled: number;
   jarsSealed: number;
   method: Method;
@@ -173,7 +191,11 @@ export interface JarEventView {
   kind: string;
   happenedOn: string;
   jarCode: string;
+  /** A gift's recipient, when the giver named one. */
+  givenTo: string | null;
   who: string | null;
+  /** For a move: the place names it moved between. */
+  placeMove?: { from: string | null; to: string | null } | null;
 }
 
 export interface BatchDetail extends BatchView {
@@ -190,6 +212,8 @@ export interface BatchCreated {
   batch: BatchView;
   jars: JarView[];
   plan: ProcessingPlan;
+  /** Said when the batch used more jars or lids than were in stock (the counts stop at 0). */
+  stockWarnings: string[];
 }
 
 /** Before a jar is opened: jars of the same product that should be used first (the choice stays the person's). */
@@ -211,6 +235,36 @@ export interface JarByCode {
 
 /** How long a helper may undo their own open, finish or discard; cooks and keepers may put a jar back any time. */
 export const JAR_UNDO_MINUTES = 10;
+
+/**
+ * Giving a jar away: to whom is optional, one line of plain text. Control characters and the invisible marks that
+ * turn text around (which could make a history line read as something else) are refused; blank means nobody named.
+ */
+/** Whom a jar went to, as every door takes it (the give form, the CSV import): trimmed, bounded, plain. */
+export const giftRecipientText = z
+  .string({ error: 'Write whom the jar went to, or leave it empty.' })
+  .trim()
+  .max(LIMITS.length.giftRecipient, `Use at most ${LIMITS.length.giftRecipient} characters for the name.`)
+  .refine(
+    // eslint-disable-next-line no-control-regex
+    (value) => !/[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/.test(value),
+    'Write the name on one line, in plain letters, without special characters.',
+  );
+
+export const jarGiveBody = z.object({
+  to: giftRecipientText
+    .optional()
+    .nullable()
+    .transform((value) => (value ? value : null)),
+});
+export type JarGive = z.input<typeof jarGiveBody>;
+
+/** Jars given away in the household's calendar year, all together and by product (most given first). */
+export interface GiftsThisYear {
+  year: number;
+  jars: number;
+  byProduct: { productId: string; productName: string; jars: number }[];
+}
 
 export const jarUndoBody = z.object({ eventId: z.uuid({ error: 'Say which change to undo.' }) });
 

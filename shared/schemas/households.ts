@@ -1,12 +1,25 @@
 import { z } from 'zod';
 import { LIMITS, limitWords } from './limits';
-import { PROCESSING_METHODS, type Method } from '../domain';
+import { PROCESSING_METHODS, type Canner, type Method } from '../domain';
+import { UNIT_SYSTEMS, type UnitSystem } from '../domain/units';
 import { ROLES, type Role } from '../roles';
 import { isTimeZone } from '../time-zones';
 import { householdName } from './auth';
 
-export const UNIT_SYSTEMS = ['us', 'metric'] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+export { UNIT_SYSTEMS, type UnitSystem };
+
+const cannerCapacity = z
+  .number({ error: 'Enter how many jars the canner holds, as a number.' })
+  .int('Use a whole number of jars.')
+  .min(1, 'A canner holds at least 1 jar.')
+  .max(LIMITS.cannerCapacityJars, `Use at most ${LIMITS.cannerCapacityJars} jars.`);
+
+export const canner = z
+  .object({
+    method: z.enum(PROCESSING_METHODS, { error: 'Choose what kind of canner it is.' }),
+    capacityJars: cannerCapacity,
+  })
+  .strict();
 
 export const householdPatch = z
   .object({
@@ -26,15 +39,28 @@ export const householdPatch = z
       .max(LIMITS.bestQualityMonths, `Use at most ${LIMITS.bestQualityMonths} months.`)
       .optional(),
     weekStartsOn: z.number().int().min(0, 'Choose a day of the week.').max(6, 'Choose a day of the week.').optional(),
-    cannerCapacityJars: z
-      .number()
-      .int('Use a whole number of jars.')
-      .min(1, 'A canner holds at least 1 jar.')
-      .max(LIMITS.cannerCapacityJars, `Use at most ${LIMITS.cannerCapacityJars} jars.`)
-      .optional(),
+    /** The jars a load of the default canner (the first-run questions ask for one number). */
+    cannerCapacityJars: cannerCapacity.optional(),
     defaultMethod: z.enum(PROCESSING_METHODS, { error: 'Choose a processing method.' }).optional(),
+    canners: z
+      .array(canner)
+      .min(1, 'Keep at least one canner: batch plans count their loads by it.')
+      .max(PROCESSING_METHODS.length, `List each kind of canner once (at most ${PROCESSING_METHODS.length}).`)
+      .refine(
+        (list) => new Set(list.map((c) => c.method)).size === list.length,
+        'List each kind of canner once; give it the jars its rack holds.',
+      )
+      .optional(),
   })
-  .strict();
+  .strict()
+  .refine((patch) => !(patch.canners && patch.cannerCapacityJars !== undefined), {
+    path: ['cannerCapacityJars'],
+    message: 'Give the jars a load with each canner, not as one number beside them.',
+  })
+  .refine(
+    (patch) => !patch.canners || !patch.defaultMethod || patch.canners.some((c) => c.method === patch.defaultMethod),
+    { path: ['defaultMethod'], message: 'Choose a default canner from the canners listed.' },
+  );
 export type HouseholdPatch = z.infer<typeof householdPatch>;
 
 export const memberPatch = z.object({ role: z.enum(ROLES, { error: 'Choose keeper, cook or helper.' }) }).strict();
@@ -47,7 +73,9 @@ export interface HouseholdView {
   timeZone: string;
   bestQualityMonths: number;
   weekStartsOn: number;
+  /** The jars a load of the default canner. */
   cannerCapacityJars: number;
+  canners: Canner[];
   defaultMethod: Method;
   /** False until a keeper has confirmed the altitude: until then no processing plan is shown. */
   altitudeConfirmed: boolean;

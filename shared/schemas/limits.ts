@@ -28,11 +28,15 @@ export const LIMITS = {
   heat: 5,
   bestQualityMonths: 60,
   cannerCapacityJars: 40,
+  /** Empty jars of one size, or new lids of one mouth, a household keeps counted. */
+  stockCount: 10_000,
   mealTags: 12,
   planPosition: 1000,
   todoPosition: 100_000,
   /** Rows a CSV import takes at once. */
   importRows: 500,
+  /** Shelf places a household names. */
+  places: 100,
   /** Characters. */
   length: {
     productName: 80,
@@ -47,6 +51,10 @@ export const LIMITS = {
     source: 500,
     householdName: 80,
     personName: 80,
+    placeName: 60,
+    /** Whom a jar was given to (a name or a few words, optional). */
+    giftRecipient: 80,
+    stockNote: 200,
   },
 } as const;
 

@@ -34,6 +34,8 @@ const fields = {
   jarSize: z.enum(JAR_SIZES, { error: 'Choose a jar size.' }),
   colour: z.enum(PRODUCT_COLOURS, { error: 'Choose a colour.' }),
   notes: z.string().max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`),
+  /** Where its batches usually go; null: no usual place. */
+  defaultPlaceId: z.uuid({ error: 'Choose a place from the list, or no place.' }).nullable(),
 };
 
 export const productCreate = z.object(fields).partial().required({ name: true, kind: true }).strict();
@@ -55,4 +57,5 @@ export interface ProductView {
   jarSize: JarSize;
   colour: ProductColour;
   notes: string;
+  defaultPlaceId: string | null;
 }

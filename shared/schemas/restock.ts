@@ -19,7 +19,12 @@ export interface RestockForecastView {
   jarsOnHand: number;
   onHandTbsp: number;
   dailyTbsp: number;
+  /** What the household ate: finished jars only, never the ones given away. */
   historyTbspPerDay: number;
+  /** Jars given away in the 84 days the eating rate looks back over, counted apart. */
+  givenJarsInHistory: number;
+  /** Jars of this product given away this calendar year. */
+  givenThisYear: number;
   plannedTbspPerDay: number;
   runOutOn: string | null;
   jarSizeAdvice: { size: JarSize | null; cautions: string[] };
@@ -46,6 +51,8 @@ export interface RestockSuggestionView {
 
 export interface RestockView {
   today: string;
+  /** Jars of every product given away this calendar year. */
+  givenThisYear: number;
   forecasts: RestockForecastView[];
   suggestions: RestockSuggestionView[];
 }

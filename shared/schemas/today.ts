@@ -15,6 +15,10 @@ export interface TodayUse {
   /** null where the shelf cannot cover it. */
   jarId: string | null;
   jarCode: string | null;
+  /** Where that jar is kept (null: no place named, or no jar). */
+  jarPlaceName: string | null;
+  /** The same in words ("in the Pantry"), null without a place. */
+  jarPlaceWords: string | null;
   /** Days left before the use-by of the opened jar it draws from; null for a sealed jar or none. */
   openedJarDaysLeft: number | null;
   /** The jar has to be opened today for this portion. */

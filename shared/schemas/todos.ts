@@ -7,6 +7,7 @@ import {
   type IngredientUnit,
   type JarSize,
   type Method,
+  type Mouth,
   type ProcessingPlan,
   type RestockReason,
   type ScaledRecipe,
@@ -74,7 +75,9 @@ export interface ShoppingItem {
   role: IngredientRole;
   amount: number;
   unit: IngredientUnit;
-  /** Written the way a cook measures it, e.g. "2 1/4 cups". */
+  /** The same amount in the household's units, as the text writes it (older plans have none until read again). */
+  shown?: { amount: number; unit: IngredientUnit };
+  /** Written the way a cook measures it, in the household's units, e.g. "2 1/4 cups" or "530 mL". */
   text: string;
 }
 
@@ -93,13 +96,34 @@ export interface BatchPlan {
   headspaceInches: number;
   scaled: ScaledRecipe;
   processing: ProcessingPlan;
-  equipment: { jars: number; newLids: number; cannerCapacityJars: number; cannerLoads: number[] };
+  equipment: {
+    jars: number;
+    newLids: number;
+    /** The canner the loads are counted in (older plans have none: the recipe's method). */
+    cannerMethod?: Method;
+    cannerCapacityJars: number;
+    cannerLoads: number[];
+  };
   shopping: { produce: ShoppingItem[]; pantry: ShoppingItem[] };
   targetOn: string;
   targetWhy: string;
   plannedOn: string;
   /** Filled in on every read: what differs from the plan as first made (altitude, canner, recipe), in words. */
   changes?: string[];
+  /** Filled in on every read: the empty jars and new lids in stock now, and what to buy beyond them. */
+  stock?: BatchPlanStock;
+}
+
+export interface BatchPlanStock {
+  mouth: Mouth;
+  emptyJars: number;
+  lids: number;
+  buyJars: number;
+  buyLids: number;
+  /** "You have 6 empty pint jars and no regular-mouth lids: buy 4 jars and 10 regular-mouth lids." */
+  words: string;
+  /** The to-do the plan offers to add ("Buy 10 regular-mouth lids and 4 pint jars"), or null with nothing to buy. */
+  todoTitle: string | null;
 }
 
 export interface TodoView {

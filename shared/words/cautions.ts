@@ -23,6 +23,20 @@ export const USE_BY_CAUTION_LINE =
 export const USE_WITHIN_DEFAULT_HINT =
   'A default from memory, not a published figure (the National Center for Home Food Preservation gives none for every opened product): the tested recipe’s storage advice and the jar’s look and smell come first.';
 
+/** The short form a push notification has room for, after a use-by date (the e-mail adds the sentence below). */
+export const USE_BY_CAUTION_PUSH =
+  'The use-by is a default; the jar’s look and smell come first. When in doubt, throw it out.';
+
+/** The short form a push notification has room for, after canning times (a seal check, a reprocess deadline). */
+export const CANNING_CAUTION_PUSH = 'Your tested recipe and local extension service come first.';
+
+/**
+ * Beside a best-quality date (the label sheet, the shelf): it is about quality, not safety. The USDA Complete Guide
+ * to Home Canning (2015) gives about a year for best quality; the seal, look and smell decide at opening.
+ */
+export const BEST_QUALITY_CAUTION_LINE =
+  'Best quality by is about taste and color, not safety: at opening, check the seal, the look and the smell first. When in doubt, throw it out.';
+
 /** One sentence for a reminder e-mail or push about a use-by date. */
 export const USE_BY_CAUTION_SENTENCE =
   'The use-by date is a default from the product’s settings; follow your tested recipe, check the jar’s look and smell, and when in doubt, throw it out.';

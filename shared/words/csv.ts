@@ -6,6 +6,7 @@ import { PRODUCT_KINDS, type ProductKind } from '../domain/products';
 import { JAR_STATES, type JarState } from '../domain/shelf-life';
 import { JAR_SIZES, type JarSize } from '../domain/units';
 import { JAR_STATE_NAMES, METHOD_NAMES, PRODUCT_KIND_NAMES } from './names';
+import { PLACE_CSV_HELP } from './shelf-places';
 import { JAR_SIZE_NAMES } from './units';
 
 const STATE_WORDS: Record<JarState, string> = {
@@ -13,6 +14,7 @@ const STATE_WORDS: Record<JarState, string> = {
   opened: 'opened',
   finished: 'finished',
   discarded: 'discarded',
+  given: 'given',
 };
 
 /** Each column with a choice of values: the ids, and the words the file is written in. */
@@ -87,11 +89,13 @@ export const CSV_IMPORT_COLUMNS: CsvColumnHelp[] = [
   { column: 'batch', says: 'Which jars were canned together: rows with the same number are one batch.', needed: 'no' },
   { column: 'jar_code', says: 'The label code; kept where no other jar carries it.', needed: 'no' },
   {
-    column: 'opened_on, finished_on, discarded_on',
-    says: 'The day a jar was opened, finished or discarded, YYYY-MM-DD.',
+    column: 'opened_on, finished_on, discarded_on, given_on',
+    says: 'The day a jar was opened, finished, discarded or given away, YYYY-MM-DD.',
     needed: 'no',
   },
+  { column: 'given_to', says: 'Whom a given jar went to; may be empty.', needed: 'no' },
   { column: 'use_by, best_by', says: 'The jar’s dates; worked out again when empty.', needed: 'no' },
   { column: 'unsealed', says: 'yes for a jar that did not seal.', needed: 'no' },
+  { column: 'place', says: PLACE_CSV_HELP, needed: 'no' },
   { column: 'notes', says: 'The batch’s notes (batch_notes in the shelf export).', needed: 'no' },
 ];

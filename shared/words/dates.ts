@@ -22,6 +22,11 @@ export function dateWords(isoDate: string, thisYear = new Date().getFullYear()):
   );
 }
 
+/** "Jul 31, 2026": a printed label's date, which is read for a year or more, so it always carries the year. */
+export function labelDateWords(isoDate: string): string {
+  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric', year: 'numeric' }, US);
+}
+
 /** "Jun 9", for the week board's column heads and a week's range. */
 export function monthDayWords(isoDate: string): string {
   return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric' }, US);

@@ -54,6 +54,7 @@ export const JAR_STATE_NAMES: Record<JarState, string> = {
   opened: 'opened, in the fridge',
   finished: 'finished',
   discarded: 'discarded',
+  given: 'given away',
 };
 export const UNSEALED_STATE_NAME = 'did not seal, in the fridge';
 

@@ -2,6 +2,7 @@
 import { addDays, daysBetween } from '../domain/dates';
 import type { ProposalReason } from '../domain/meal-proposal';
 import { dateWords, weekdayWords } from './dates';
+import { ML_PER_US_TBSP, type UnitSystem } from '../domain/units';
 import { count } from './units';
 
 /** "Monday" for a day within a week of the meal, else "Thu, Dec 10". */
@@ -28,7 +29,14 @@ export function proposalReasonWords(
 }
 
 /** "6 tbsp past their use-by · 2 sealed jars past best quality". */
-export function wasteWords(waste: { tbspPastUseBy: number; sealedJarsPastBest: number }): string {
-  const tbsp = Math.round(waste.tbspPastUseBy * 10) / 10;
-  return `${tbsp} tbsp past their use-by · ${count(waste.sealedJarsPastBest, 'sealed jar')} past best quality`;
+export function wasteWords(
+  waste: { tbspPastUseBy: number; sealedJarsPastBest: number },
+  system: UnitSystem = 'us',
+): string {
+  // Metric in whole mL: 1 US tbsp = 14.78676478125 mL (NIST Handbook 44).
+  const amount =
+    system === 'metric'
+      ? `${Math.round(waste.tbspPastUseBy * ML_PER_US_TBSP)} mL`
+      : `${Math.round(waste.tbspPastUseBy * 10) / 10} tbsp`;
+  return `${amount} past their use-by · ${count(waste.sealedJarsPastBest, 'sealed jar')} past best quality`;
 }

@@ -1,5 +1,6 @@
 // The seal check's words: the batch form's choice, the reminder, Today and the batch page.
 import { count } from './units';
+import { CANNING_CAUTION_PUSH } from './cautions';
 
 /** A sealed jar whose lid has not been checked yet. */
 export const SEAL_TO_CHECK_NAME = 'Seal to check';
@@ -43,5 +44,5 @@ export function sealCheckMessage(productName: string, jars: number, reprocessBy:
   const reprocess = reprocessBy
     ? ` A jar that did not seal goes to the fridge, or is reprocessed with a new lid by ${reprocessBy}.`
     : ' A jar that did not seal goes to the fridge.';
-  return `The ${jarsWord} of ${productName} have cooled 12 hours. ${SEAL_CHECK_HOW}${reprocess}`;
+  return `The ${jarsWord} of ${productName} have cooled 12 hours. ${SEAL_CHECK_HOW}${reprocess} ${CANNING_CAUTION_PUSH}`;
 }

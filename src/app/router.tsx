@@ -79,6 +79,7 @@ const routes = withBoundaries([
               },
               { path: 'week', lazy: async () => ({ Component: (await import('./routes/week')).WeekRoute }) },
               { path: 'shelf', lazy: async () => ({ Component: (await import('./routes/shelf')).ShelfRoute }) },
+              { path: 'shelf/stock', lazy: async () => ({ Component: (await import('./routes/stock')).StockRoute }) },
               { path: 'fridge', lazy: async () => ({ Component: (await import('./routes/fridge')).FridgeRoute }) },
               { path: 'batches', lazy: async () => ({ Component: (await import('./routes/batches')).BatchesRoute }) },
               {

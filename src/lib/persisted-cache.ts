@@ -43,9 +43,12 @@ export async function restoreCache(queryClient: QueryClient) {
   };
   await persistQueryClientRestore(options);
   // With a network, a new page load reads afresh (the saved copy would show an older state first); the session
-  // is kept to open without a flash, and read again too.
-  if (onlineManager.isOnline())
-    queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.me[0] });
+  // is kept to open without a flash, and read again too. A saved "signed out" is not kept: trusted, it would send a
+  // person whose cookie is still good to sign-in and back before the first screen.
+  if (onlineManager.isOnline()) {
+    const signedOut = personOf(queryClient) === null;
+    queryClient.removeQueries({ predicate: (query) => signedOut || query.queryKey[0] !== authKeys.me[0] });
+  }
   await queryClient.invalidateQueries({ refetchType: 'none' });
   let person = personOf(queryClient);
   queryClient.getQueryCache().subscribe((event) => {

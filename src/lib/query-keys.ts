@@ -20,6 +20,8 @@ export const shelfKeys = {
   batches: (hid: string) => ['households', hid, 'shelf', 'batches'] as const,
   batch: (hid: string, batchId: string) => ['households', hid, 'shelf', 'batches', batchId] as const,
   jars: (hid: string, state: string) => ['households', hid, 'shelf', 'jars', state] as const,
+  places: (hid: string) => ['households', hid, 'shelf', 'places'] as const,
+  gifts: (hid: string) => ['households', hid, 'shelf', 'gifts'] as const,
   /** A label's page is read by jar code, before its household is known, so it sits outside the household. */
   jarsByCode: () => ['jar-by-code'] as const,
   jarByCode: (code: string) => ['jar-by-code', code] as const,
@@ -34,6 +36,9 @@ export const weekKeys = {
 };
 
 export const fridgeKeys = { fridge: (hid: string) => ['households', hid, 'fridge'] as const };
+
+/** The household's empty jars and new lids; under the household, so a batch or a jar action refreshes it. */
+export const stockKeys = { view: (hid: string) => ['households', hid, 'stock'] as const };
 
 export const restockKeys = { list: (hid: string) => ['households', hid, 'restock'] as const };
 

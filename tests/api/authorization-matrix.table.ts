@@ -52,6 +52,7 @@ export interface Ids {
   batchId: string;
   jarId: string;
   jarCode: string;
+  placeId: string;
   mealId: string;
   planEntryId: string;
   pairingId: string;
@@ -71,6 +72,7 @@ export const PARAMS: Record<string, keyof Ids | { literal: string }> = {
   jarId: 'jarId',
   action: { literal: 'open' },
   code: 'jarCode',
+  placeId: 'placeId',
   userId: 'helperId',
   date: 'planDate',
   'meals/:id': 'mealId',
@@ -172,11 +174,28 @@ export const TABLE: Record<string, RouteRule> = {
   [`GET ${H}/jars/by-code/:code`]: { access: 'read' },
   [`GET ${H}/jars/:jarId/opening-advice`]: { access: 'read' },
   [`POST ${H}/jars/:jarId/:action`]: { access: 'handleJars', destructive: true },
+  // Giving a jar away is a jar action like the others: any member, and undone the same way (tests/api/gifts.test.ts).
+  [`POST ${H}/jars/:jarId/give`]: {
+    access: 'handleJars',
+    body: () => ({ to: 'the Okafors next door' }),
+    destructive: true,
+  },
+  [`GET ${H}/gifts`]: { access: 'read' },
   // Any member reaches the service, which lets a helper undo only their own recent change (tests/api/jar-undo.test.ts).
   [`POST ${H}/jars/:jarId/undo`]: {
     access: 'handleJars',
     body: () => ({ eventId: '00000000-0000-4000-8000-000000000000' }),
   },
+  [`GET ${H}/places`]: { access: 'read' },
+  [`POST ${H}/places`]: {
+    access: 'cook',
+    body: () => ({ name: `Crate ${Math.random().toString(36).slice(2, 8)}` }),
+  },
+  [`PATCH ${H}/places/:placeId`]: { access: 'cook', body: () => ({ name: 'Pantry shelf' }) },
+  // The place holds jars, so without a choice of where they go the removal is refused (409) and the place stays.
+  [`DELETE ${H}/places/:placeId`]: { access: 'cook' },
+  // Any member may move jars (tests/api/places.test.ts).
+  [`POST ${H}/jars/move`]: { access: 'handleJars', body: (ids) => ({ jarIds: [ids.jarId], placeId: ids.placeId }) },
   [`GET ${H}/shelf.csv`]: { access: 'read' },
   [`POST ${H}/shelf/import`]: { access: 'cook', body: () => ({ csv: 'product,canned on\n', commit: false }) },
 
@@ -221,6 +240,12 @@ export const TABLE: Record<string, RouteRule> = {
   // Helpers may tick a to-do; anything else they send is refused by the service.
   [`PATCH ${H}/todos/:id`]: { access: 'handleJars', body: () => ({ done: true }) },
   [`DELETE ${H}/todos/:id`]: { access: 'cook' },
+  [`GET ${H}/stock`]: { access: 'read' },
+  // A hand count: cooks and keepers (tests/api/jar-stock.test.ts).
+  [`POST ${H}/stock/correction`]: {
+    access: 'cook',
+    body: () => ({ item: 'lid', size: 'wide', count: 12, note: 'Counted again' }),
+  },
   [`GET ${H}/today`]: { access: 'read' },
   [`GET ${H}/fridge`]: { access: 'read' },
 

@@ -48,6 +48,7 @@ async function firstHouseholdSecrets(): Promise<string[]> {
     'todos',
     'invitations',
     'memberships',
+    'places',
   ]) {
     for (const row of await rows<{ id: string }>(`SELECT id FROM ${table} WHERE household_id = :hid`, { hid }))
       found.add(row.id);
@@ -56,6 +57,7 @@ async function firstHouseholdSecrets(): Promise<string[]> {
     `SELECT name AS v FROM households WHERE id = :hid
      UNION SELECT name FROM products WHERE household_id = :hid
      UNION SELECT name FROM recipes WHERE household_id = :hid
+     UNION SELECT name FROM places WHERE household_id = :hid
      UNION SELECT name FROM meals WHERE household_id = :hid
      UNION SELECT title FROM plan_entries WHERE household_id = :hid
      UNION SELECT title FROM todos WHERE household_id = :hid

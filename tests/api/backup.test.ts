@@ -19,16 +19,18 @@ afterAll(() => ctx.close());
 
 /** Which table each id column points into, in insert order, so a row can be named by its content. */
 const REFS: [BackupTable, Record<string, BackupTable>][] = [
-  ['products', {}],
+  ['places', {}],
+  ['products', { defaultPlaceId: 'places' }],
   ['recipes', { productId: 'products' }],
   ['batches', { productId: 'products', recipeId: 'recipes' }],
-  ['jars', { batchId: 'batches', productId: 'products' }],
+  ['jars', { batchId: 'batches', productId: 'products', placeId: 'places' }],
   ['jarEvents', { jarId: 'jars', batchId: 'batches' }],
   ['meals', {}],
   ['mealProducts', { mealId: 'meals', productId: 'products' }],
   ['planEntries', { mealId: 'meals' }],
   ['pairings', { planEntryId: 'planEntries', productId: 'products' }],
   ['todos', { productId: 'products' }],
+  ['jarStock', {}],
 ];
 
 /** Each table as a sorted list of rows with ids replaced by what they point to: equal files give equal lists. */

@@ -1,4 +1,4 @@
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import zlib from 'node:zlib';
@@ -8,7 +8,26 @@ import { demoApp } from '../support/app';
 // A built client in miniature: a script with the brotli and gzip copies the build puts beside it.
 const staticDir = mkdtempSync(path.join(tmpdir(), 'larderly-static-'));
 const script = `export const shelf = ${JSON.stringify(Array.from({ length: 200 }, (_, i) => `jar ${i}`))};\n`;
-writeFileSync(path.join(staticDir, 'index.html'), '<!doctype html><title>Larderly</title><div id="root"></div>');
+writeFileSync(
+  path.join(staticDir, 'index.html'),
+  '<!doctype html><head><title>Larderly</title><script type="module" crossorigin src="/main-abc123.js"></script></head><div id="root"></div>',
+);
+// The build manifest the page hints are computed from: the entry, the offline restore, the layouts and two screens.
+mkdirSync(path.join(staticDir, '.vite'));
+writeFileSync(
+  path.join(staticDir, '.vite', 'manifest.json'),
+  JSON.stringify({
+    'index.html': { file: 'main-abc123.js', imports: ['_common.js'] },
+    _common: { file: 'common-1.js' },
+    '_common.js': { file: 'common-1.js' },
+    'src/app/restore-offline.ts': { file: 'restore-offline-1.js', imports: ['_common.js'] },
+    'src/app/layouts/require-auth.tsx': { file: 'require-auth-1.js' },
+    'src/app/layouts/app-layout.tsx': { file: 'app-layout-1.js' },
+    'src/app/routes/shelf.tsx': { file: 'shelf-1.js', imports: ['_fuse.js'] },
+    '_fuse.js': { file: 'fuse-1.js' },
+    'src/app/routes/sign-in.tsx': { file: 'sign-in-1.js' },
+  }),
+);
 writeFileSync(path.join(staticDir, 'main-abc123.js'), script);
 writeFileSync(path.join(staticDir, 'main-abc123.js.br'), zlib.brotliCompressSync(script));
 writeFileSync(path.join(staticDir, 'main-abc123.js.gz'), zlib.gzipSync(script));
@@ -49,6 +68,47 @@ describe('the built client goes out precompressed', () => {
     expect(response.status).toBe(200);
     expect(response.headers['cache-control']).toBe('no-cache');
     expect(response.text).toContain('<div id="root">');
+  });
+});
+
+describe("each screen's page names its code and first reads, so they load at once", () => {
+  const hid = '7d0c3c1e-2b1a-4c5d-9e8f-0a1b2c3d4e5f';
+
+  it("links a signed-in screen's chunks, with their imports, and its first API reads, but not what the entry loads", async () => {
+    const response = await ctx.request.get(`/h/${hid}/shelf`);
+    expect(response.status).toBe(200);
+    expect(response.headers['cache-control']).toBe('no-cache');
+    const links = [...response.text.matchAll(/<link rel="(\w+)"(?: as="fetch")? crossorigin href="([^"]+)">/g)].map(
+      ([, rel, href]) => `${rel} ${href}`,
+    );
+    expect(links).toEqual([
+      'modulepreload /restore-offline-1.js',
+      'modulepreload /require-auth-1.js',
+      'modulepreload /app-layout-1.js',
+      'modulepreload /shelf-1.js',
+      'modulepreload /fuse-1.js',
+      'preload /api/auth/me',
+      `preload /api/households/${hid}`,
+      `preload /api/households/${hid}/jars`,
+      `preload /api/households/${hid}/products`,
+    ]);
+  });
+
+  it('gives sign-in only its own chunk and the session read, none of the signed-in screens', async () => {
+    const response = await ctx.request.get('/sign-in');
+    expect(response.text).toContain('href="/sign-in-1.js"');
+    expect(response.text).toContain('href="/api/auth/me"');
+    expect(response.text).not.toMatch(/app-layout|require-auth|households/);
+  });
+
+  it('writes no hint for an address whose household is not an id, and answers a repeated request with 304', async () => {
+    const odd = await ctx.request.get('/h/<script>/shelf');
+    expect(odd.text).not.toContain('modulepreload');
+    expect(odd.text).not.toContain('<script>/');
+    const first = await ctx.request.get(`/h/${hid}`);
+    expect(first.headers.etag).toBeTruthy();
+    const again = await ctx.request.get(`/h/${hid}`).set('If-None-Match', first.headers.etag!);
+    expect(again.status).toBe(304);
   });
 });
 

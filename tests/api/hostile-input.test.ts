@@ -74,8 +74,11 @@ function seedBody(key: string): unknown {
       timeZone: 'America/New_York',
       bestQualityMonths: 12,
       weekStartsOn: 1,
-      cannerCapacityJars: 7,
       defaultMethod: 'boiling-water',
+      canners: [
+        { method: 'boiling-water', capacityJars: 7 },
+        { method: 'pressure-dial', capacityJars: 16 },
+      ],
     },
     [`POST ${H}/products`]: {
       name: 'Quince Paste',
@@ -95,6 +98,7 @@ function seedBody(key: string): unknown {
       useWithinDays: null,
       harvestMonths: [8, 9],
       notes: 'Keeps well.',
+      defaultPlaceId: ids.placeId,
     },
     [`POST ${H}/recipes`]: {
       productId: ids.productId,

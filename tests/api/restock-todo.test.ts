@@ -56,9 +56,22 @@ describe('adding a restock batch to the to-do list', () => {
     expect(plan.altitudeFt).toBe(2350);
 
     // Calloway Hollow's canner holds 7 jars (the household default); flat lids seal once (common practice).
-    expect(plan.equipment).toEqual({ jars: 12, newLids: 12, cannerCapacityJars: 7, cannerLoads: [7, 5] });
+    expect(plan.equipment).toEqual({
+      jars: 12,
+      newLids: 12,
+      cannerMethod: 'boiling-water',
+      cannerCapacityJars: 7,
+      cannerLoads: [7, 5],
+    });
     expect(plan.shopping.produce).toEqual([
-      { name: 'apples', role: 'produce', amount: 6, unit: 'lb', text: '6 lb apples' },
+      {
+        name: 'apples',
+        role: 'produce',
+        amount: 6,
+        unit: 'lb',
+        shown: { amount: 6, unit: 'lb' },
+        text: '6 lb apples',
+      },
     ]);
     expect(plan.shopping.pantry.map((item: { text: string }) => item.text)).toEqual(
       expectedScale.ingredients

@@ -100,7 +100,9 @@ describe('the seal check after processing', () => {
     expect(today.sealChecks.map((c: { batchId: string }) => c.batchId)).toContain(batchId);
   });
 
-  it('keeps today’s behaviour when the seals are checked already (the default): unsealed jars go to the fridge at once', async () => {
+  // The seals may have been tested before the batch is recorded (USDA Complete Guide 2015, 12 to 24 hours after);
+  // an unsealed jar then goes to the fridge at once (NCHFP).
+  it('keeps today’s behaviour when the seals are checked already (the default): unsealed jars go to the fridge at once (USDA 2015, NCHFP)', async () => {
     const cook = await ctx.signedIn('cook@larderly.test');
     const response = await cook.post(`${lookups.base}/batches`).send({
       productId: lookups.product('Pickled Beets').id,
@@ -145,7 +147,8 @@ describe('the seal check after processing', () => {
     expect(response.body.error.message).toMatch(/undisturbed 12 hours, until/);
   });
 
-  it('reminds the cook once by push and e-mail 12 hours after processing, with the canning caution', async () => {
+  // USDA Complete Guide to Home Canning (2015): the jars stand undisturbed 12 to 24 hours before their seals are tested.
+  it('reminds the cook once by push and e-mail 12 hours after processing, with the canning caution (USDA Complete Guide 2015)', async () => {
     const processedAt = processingAt(8);
     const { batchId } = await justProcessed(processedAt);
     const mine = () => sealPushes().filter((m) => m.url.endsWith(batchId));
@@ -161,13 +164,15 @@ describe('the seal check after processing', () => {
       url: `/h/${ctx.householdId}/batches/${batchId}`,
     });
     expect(mine()[0].body).toMatch(/6 jars of Pickled Beets have cooled 12 hours/);
+    // The push carries the short canning caution: the times are the published ones, the tested recipe comes first.
+    expect(mine()[0].body).toMatch(/Your tested recipe and local extension service come first\.$/);
     const mails = sealMails().filter((m) => m.text.includes(batchId));
     expect(mails).toHaveLength(1);
     expect(mails[0].text).toContain(CANNING_CAUTION_SENTENCE);
     expect(await ReminderDelivery.count({ where: { processingId: processing.id } })).toBe(1);
   });
 
-  it('waits for the reminder hour (8 by default) when the 12 hours end in the night', async () => {
+  it('waits for the reminder hour (8 by default) when the 12 hours end in the night (USDA Complete Guide 2015: 12 to 24 hours)', async () => {
     const processedAt = processingAt(18); // 12 hours later is 6 in the morning
     const { batchId } = await justProcessed(processedAt);
     const processing = (await detail(batchId)).processings[0];
@@ -188,7 +193,8 @@ describe('the seal check after processing', () => {
     expect(await ReminderDelivery.count({ where: { processingId: processing.id } })).toBe(0);
   });
 
-  it('by count: the jars that did not seal go to the fridge as opened jars, their use-by from the product; the rest stay sealed', async () => {
+  // NCHFP: a jar that did not seal is refrigerated and used like an opened jar, or reprocessed within 24 hours.
+  it('by count: the jars that did not seal go to the fridge as opened jars, their use-by from the product; the rest stay sealed (NCHFP)', async () => {
     const processedAt = processingAt(6, 1);
     const { agent, batchId } = await justProcessed(processedAt);
     const checkedAt = later(processedAt, 13);
@@ -318,5 +324,87 @@ describe('the seal check after processing', () => {
       (await agent.post(url).send({ fridge: { jarIds: [jars[0].id] }, reprocess: { jarIds: [jars[0].id] } })).status,
     ).toBe(400);
     expect((await agent.post(url).send({ fridge: { count: -1 } })).status).toBe(400);
+  });
+
+  it('waits for the cook’s own later reminder hour, then sends push and e-mail once, to the cook alone (USDA Complete Guide 2015: 12 to 24 hours)', async () => {
+    const cook = await ctx.signedIn('cook@larderly.test');
+    expect((await cook.patch('/api/me/notifications').send({ reminderHour: 10 })).status).toBe(200);
+    try {
+      // Out of the canner at 8 in the evening: 12 hours later is 8 in the morning, before the cook's hour of 10.
+      const processedAt = processingAt(20, 1);
+      const { batchId } = await justProcessed(processedAt);
+      const pushes = () => sealPushes().filter((m) => m.url.endsWith(batchId));
+      const mails = () => sealMails().filter((m) => m.text.includes(batchId));
+      for (const hours of [12, 13]) await sweepReminders(ctx.ctx, later(processedAt, hours, 55));
+      expect([pushes().length, mails().length]).toEqual([0, 0]);
+      for (const minutes of [5, 30, 55]) await sweepReminders(ctx.ctx, later(processedAt, 14, minutes));
+      await sweepReminders(ctx.ctx, later(processedAt, 20));
+      expect([pushes().length, mails().length]).toEqual([1, 1]);
+      // The reminder is the cook's, who recorded the batch: the keeper and the helper get none of it.
+      for (const other of ['keeper@larderly.test', 'helper@larderly.test'])
+        expect(standIns.mail.to(other).filter((m) => m.text.includes(batchId))).toHaveLength(0);
+    } finally {
+      await cook.patch('/api/me/notifications').send({ reminderHour: 8 });
+    }
+  });
+
+  it('still offers reprocessing a minute before the 24 hours end, and records it (NCHFP: reprocess within 24 hours)', async () => {
+    const processedAt = processingAt(3, 2);
+    const { agent, batchId } = await justProcessed(processedAt, 2);
+    at(later(processedAt, 23, 59));
+    expect((await detail(batchId)).sealCheck.reprocessUntil).toBe(
+      later(processedAt, REPROCESS_WITHIN_HOURS).toISOString(),
+    );
+    const response = await agent
+      .post(`${lookups.base}/batches/${batchId}/seal-check`)
+      .send({ reprocess: { count: 1 } });
+    expect(response.status, JSON.stringify(response.body)).toBe(200);
+    expect(response.body).toMatchObject({ sealed: 1, reprocessed: 1 });
+    // The second processing starts its own cooling: its check is 12 hours after it (USDA Complete Guide 2015).
+    expect(response.body.batch.sealCheck.checkFrom).toBe(later(processedAt, 23 + 12, 59).toISOString());
+  });
+
+  it('tells each jar’s own story on its page and in the batch history: filled, cooling, then sealed, fridge or reprocessed (USDA 2015, NCHFP)', async () => {
+    const processedAt = processingAt(2, 3);
+    const { agent, batchId, jars } = await justProcessed(processedAt, 3);
+    const [stays, fridge, redo] = jars;
+    const page = async (code: string) => (await agent.get(`/api/jars/by-code/${code}`)).body;
+    // While the jars cool, each jar's page says its seal is still to check.
+    expect((await page(stays.code)).jar).toMatchObject({ state: 'sealed', seal: 'to-check' });
+
+    at(later(processedAt, 13));
+    const first = await agent
+      .post(`${lookups.base}/batches/${batchId}/seal-check`)
+      .send({ fridge: { jarIds: [fridge.id] }, reprocess: { jarIds: [redo.id] } });
+    expect(first.status, JSON.stringify(first.body)).toBe(200);
+    at(later(processedAt, 13 + 13));
+    expect((await agent.post(`${lookups.base}/batches/${batchId}/seal-check`).send({})).status).toBe(200);
+
+    const history = (await detail(batchId)).history as { kind: string; jarCode: string; happenedOn: string }[];
+    // The history lists the newest first; each jar's story, read oldest first:
+    const story = (code: string) =>
+      history
+        .filter((e) => e.jarCode === code)
+        .map((e) => e.kind)
+        .reverse();
+    expect(story(stays.code)).toEqual(['filled', 'seal-checked']);
+    expect(story(fridge.code)).toEqual(['filled', 'unsealed']);
+    expect(story(redo.code)).toEqual(['filled', 'reprocessed', 'seal-checked']);
+
+    expect(await page(fridge.code)).toMatchObject({
+      jar: { state: 'opened', unsealed: true },
+      lastChange: { kind: 'unsealed' },
+    });
+    expect(await page(redo.code)).toMatchObject({
+      jar: { state: 'sealed', seal: 'checked' },
+      lastChange: { kind: 'seal-checked' },
+    });
+    // The batch page keeps both processings, the reprocess on the same jar with its own plan.
+    expect(
+      (await detail(batchId)).processings.map((p: { number: number; jars: number }) => [p.number, p.jars]),
+    ).toEqual([
+      [1, 3],
+      [2, 1],
+    ]);
   });
 });

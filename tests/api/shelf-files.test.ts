@@ -152,6 +152,7 @@ describe('shelf CSV round trip', () => {
           batchNotes,
           pastBestQuality,
           remainingTbsp,
+          placeName,
         }) =>
           JSON.stringify({
             productName,
@@ -168,6 +169,7 @@ describe('shelf CSV round trip', () => {
             batchNotes,
             pastBestQuality,
             remainingTbsp,
+            placeName,
           }),
       )
       .sort();
@@ -189,6 +191,13 @@ describe('shelf CSV round trip', () => {
     expect(imported.status).toBe(201);
     expect(imported.body.jars).toBe(csv.trim().split('\r\n').length - 1);
     expect(await shelfOf(other.agent, other.base)).toEqual(await shelfOf(keeper, lookups.base));
+    // The places came by name: the other household now has the same places, each holding the same jars.
+    const placeNames = async (agent: import('supertest').Agent, base: string) =>
+      ((await agent.get(`${base}/places`)).body.places as { name: string; sealedJars: number }[])
+        .map(({ name, sealedJars }) => `${name}: ${sealedJars}`)
+        .sort();
+    expect(await placeNames(other.agent, other.base)).toEqual(await placeNames(keeper, lookups.base));
+    expect((await placeNames(other.agent, other.base)).length).toBeGreaterThan(1);
 
     // The same batches, canned together as before, and the file exported again reads the same but for label codes.
     const batches = async (agent: import('supertest').Agent, base: string) =>
@@ -241,6 +250,35 @@ describe('shelf CSV round trip', () => {
           'Use one of: Boiling-water canner, Atmospheric steam canner, Pressure canner, dial gauge, Pressure canner, weighted gauge.',
       },
     ]);
+  });
+
+  it('puts a batch row’s jars in the place it names, adding a place the household does not have yet', async () => {
+    const other = await freshHousehold('places');
+    const made = (await other.agent.post(`${other.base}/places`).send({ name: 'Larder' })).body.place;
+    const csv = [
+      'product,kind,canned_on,jar_size,jars_filled,jars_sealed,method,minutes,place',
+      'Quince Paste,Fruit butter,2025-10-01,half-pint,4,4,Boiling-water canner,10,larder',
+      'Quince Paste,Fruit butter,2025-10-02,half-pint,2,2,Boiling-water canner,10,Shed shelf',
+      'Quince Paste,Fruit butter,2025-10-03,half-pint,1,1,Boiling-water canner,10,',
+    ].join('\n');
+    expect((await other.agent.post(`${other.base}/shelf/import`).send({ csv, commit: true })).status).toBe(201);
+    const places = (await other.agent.get(`${other.base}/places`)).body.places as {
+      id: string;
+      name: string;
+      sealedJars: number;
+    }[];
+    // "larder" is the household's Larder (names match in any case); "Shed shelf" is added.
+    expect(places.map(({ name, sealedJars }) => ({ name, sealedJars }))).toEqual([
+      { name: 'Larder', sealedJars: 4 },
+      { name: 'Shed shelf', sealedJars: 2 },
+    ]);
+    expect(places[0]!.id).toBe(made.id);
+    const jars = (await other.agent.get(`${other.base}/jars?placeId=none`)).body.jars as { cannedOn: string }[];
+    expect(jars.map((j) => j.cannedOn)).toEqual(['2025-10-03']);
+
+    const long = csv.replace('Shed shelf', 'x'.repeat(61));
+    const { problems } = (await other.agent.post(`${other.base}/shelf/import`).send({ csv: long })).body;
+    expect(problems).toEqual([{ row: 3, field: 'place', message: 'Use at most 60 characters for a place.' }]);
   });
 
   it('adds a product the household does not have when the row gives its kind', async () => {

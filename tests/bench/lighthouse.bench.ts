@@ -35,15 +35,21 @@ const chrome = await chromeLauncher.launch({
 const rows: Record<string, { performance: number; lcpSeconds: number; accessibility: number; met: string }> = {};
 try {
   for (const { screen, path, signedIn } of screens) {
-    const result = await lighthouse(`${BASE_URL}${path}`, {
-      port: chrome.port,
-      output: 'json',
-      logLevel: 'error',
-      onlyCategories: ['performance', 'accessibility'],
-      // The session cookie rides on every request the page makes, as after a real sign-in.
-      extraHeaders: signedIn ? { Cookie: cookie } : undefined,
-    });
+    const run = () =>
+      lighthouse(`${BASE_URL}${path}`, {
+        port: chrome.port,
+        output: 'json',
+        logLevel: 'error',
+        onlyCategories: ['performance', 'accessibility'],
+        // The session cookie rides on every request the page makes, as after a real sign-in.
+        extraHeaders: signedIn ? { Cookie: cookie } : undefined,
+      });
+    // On a busy machine the trace is sometimes lost (NO_NAVSTART), which would print a score of 0: measure again.
+    let result = await run();
+    for (let attempt = 1; attempt < 3 && result?.lhr.runtimeError; attempt++) result = await run();
     if (!result) throw new Error(`Lighthouse gave no result for ${path}`);
+    if (result.lhr.runtimeError)
+      throw new Error(`Lighthouse could not measure ${path}: ${result.lhr.runtimeError.message}`);
     const { categories, audits, finalDisplayedUrl } = result.lhr;
     if (!finalDisplayedUrl.endsWith(path))
       throw new Error(`${path} ended on ${finalDisplayedUrl}: the screen was not the one measured`);

@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { paths } from '../../shared/paths';
 import { SCREENS } from '../../src/app/screens';
 import { DESKTOP, launchChromium, PHONE, signIn } from '../support/browser';
 
@@ -76,6 +77,7 @@ describe('accessibility (axe-core, WCAG 2 A and AA rules)', () => {
         `/j/${jar.code}`,
         `${home}/recipes/${recipe.id}`,
         `${home}/batches/new`,
+        paths.stock(home.split('/')[2]!),
         `${home}/batches/${jar.batchId}/labels`,
         '/invite/not-a-real-invitation-token-0000',
       ]) {

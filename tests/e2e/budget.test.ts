@@ -8,7 +8,11 @@ import { describe, expect, it } from 'vitest';
 // locale tables), so its budget is 130 again, under a 150 KB ceiling for a phone on a slow connection. The offline
 // queue's change defaults (jar actions, to-do ticks) must be registered before the first render so that changes
 // waiting from an earlier visit resume: with them Today measured 130.4 KB, and its budget is 131.
-const BUDGET_KB = { signIn: 125, today: 131 };
+// Since 2026-12-03 the sums count the offline restore too (src/app/restore-offline.ts: a chunk of its own, but loaded
+// before every first render), and the app's shared modules sit in one chunk: a page loads 8 to 11 files instead of
+// 23 to 35, which a phone fetches a few at a time. Measured that day, before -> after, with the offline restore:
+// sign-in 126.5 -> 132.4 KB in 23 -> 8 files, Today 133.0 -> 136.9 KB in 30 -> 9 files; budgets 134 and 138.
+const BUDGET_KB = { signIn: 134, today: 138 };
 
 interface Chunk {
   file: string;
@@ -40,10 +44,13 @@ const gzipKb = (files: string[]) =>
 describe('what the first screens load', () => {
   it('keeps the gzip JavaScript of the sign-in page and of the Today screen under budget', () => {
     const chunks = manifest();
-    const signIn = gzipKb(staticClosure(chunks, ['index.html', 'src/app/routes/sign-in.tsx']));
+    const signIn = gzipKb(
+      staticClosure(chunks, ['index.html', 'src/app/restore-offline.ts', 'src/app/routes/sign-in.tsx']),
+    );
     const today = gzipKb(
       staticClosure(chunks, [
         'index.html',
+        'src/app/restore-offline.ts',
         'src/app/layouts/require-auth.tsx',
         'src/app/layouts/app-layout.tsx',
         'src/app/routes/today.tsx',

@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, inject, it } from 'vitest';
+import { paths } from '../../shared/paths';
 import { SCREENS } from '../../src/app/screens';
 import { browserForFile, PHONE_TOUCH, screenshot, signIn } from '../support/browser';
 
@@ -18,8 +19,11 @@ const RETIRED: { pattern: RegExp; now: string }[] = [
   { pattern: /best_by|use_by/i, now: 'Best quality by / Use by' },
   { pattern: /months after canning\)/i, now: 'Best quality by' },
   { pattern: /what expires/i, now: 'Use by this week' },
-  { pattern: /needs a new batch|time to make more/i, now: 'Restock' },
-  { pattern: /\b(colour|favourite|flavour|metres?|litres?|millilitres?|centre|mould|grey)\b/i, now: 'US English' },
+  { pattern: /needs a new batch|time to make more|running low/i, now: 'Restock' },
+  {
+    pattern: /\b(colour|favourite|flavour|metres?|litres?|millilitres?|centre|mould|grey|cancelled|labelled)\b/i,
+    now: 'US English',
+  },
   {
     pattern: /\b(fl-oz|twelve-ounce|pressure-dial|pressure-weighted|atmospheric-steam|fruit-butter)\b/,
     now: 'the words the screens show',
@@ -82,6 +86,7 @@ describe('one voice on every screen (phone)', () => {
     found.push(await walk(page, 'batch', `${home}/batches/${sealed.batchId}`));
     found.push(await walk(page, 'recipe-card', `${home}/recipes/${recipe.id}`));
     found.push(await walk(page, 'new-batch', `${home}/batches/new`));
+    found.push(await walk(page, 'stock', paths.stock(home.split('/')[2]!)));
     found.push(await walk(page, 'labels', `${home}/batches/${sealed.batchId}/labels`));
     if (planned) found.push(await walk(page, 'todo-plan', `${home}/todo?open=${planned.id}`));
     await page.close();

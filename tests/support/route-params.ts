@@ -26,6 +26,7 @@ export async function lookUpIds(ctx: DemoApp): Promise<Ids> {
     batchId: await one(`SELECT id AS v FROM batches WHERE household_id = :hid ORDER BY canned_on LIMIT 1`),
     jarId: await one(`SELECT id AS v FROM jars WHERE household_id = :hid AND state = 'sealed' ORDER BY code LIMIT 1`),
     jarCode: await one(`SELECT code AS v FROM jars WHERE household_id = :hid ORDER BY code LIMIT 1`),
+    placeId: await one(`SELECT id AS v FROM places WHERE household_id = :hid AND name = 'Pantry shelf'`),
     mealId: await one(`SELECT id AS v FROM meals WHERE household_id = :hid ORDER BY name LIMIT 1`),
     planEntryId: await one(
       `SELECT id AS v FROM plan_entries WHERE household_id = :hid ORDER BY date, slot, position LIMIT 1`,

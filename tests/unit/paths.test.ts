@@ -31,5 +31,6 @@ describe('paths', () => {
     expect(paths.setup(hid, `/h/${hid}/shelf`)).toBe(`/h/${hid}/setup?back=%2Fh%2F${hid}%2Fshelf`);
     expect(paths.screen(hid, '')).toBe(`/h/${hid}`);
     expect(paths.screen(hid, 'fridge')).toBe(`/h/${hid}/fridge`);
+    expect(paths.stock(hid)).toBe(`/h/${hid}/shelf/stock`);
   });
 });

@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-import type { JarSize, Method } from '../../../shared/domain';
+import type { JarSize, Method, Mouth } from '../../../shared/domain';
 import { decimal, requiredUuid, uuidKey } from './columns';
 
 export class Batch extends Model<InferAttributes<Batch>, InferCreationAttributes<Batch>> {
@@ -16,6 +16,8 @@ export class Batch extends Model<InferAttributes<Batch>, InferCreationAttributes
   declare recipeId: CreationOptional<string | null>;
   declare cannedOn: string;
   declare jarSize: JarSize;
+  /** The jars' mouth, for their lids; null for batches recorded before stock was kept (the size's usual mouth). */
+  declare mouth: CreationOptional<Mouth | null>;
   declare jarsFilled: number;
   declare jarsSealed: number;
   declare method: Method;
@@ -39,6 +41,7 @@ export class Batch extends Model<InferAttributes<Batch>, InferCreationAttributes
         recipeId: { type: DataTypes.UUID, allowNull: true },
         cannedOn: { type: DataTypes.DATEONLY, allowNull: false },
         jarSize: { type: DataTypes.STRING(20), allowNull: false },
+        mouth: { type: DataTypes.STRING(7), allowNull: true },
         jarsFilled: { type: DataTypes.INTEGER, allowNull: false },
         jarsSealed: { type: DataTypes.INTEGER, allowNull: false },
         method: { type: DataTypes.STRING(20), allowNull: false },

@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-import type { Method } from '../../../shared/domain';
+import type { Canner, Method } from '../../../shared/domain';
 import { DEFAULT_MEAL_TIMES, type MealTimes } from '../../../shared/schemas/calendar';
 import type { UnitSystem } from '../../../shared/schemas/households';
 
@@ -19,7 +19,8 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
   declare bestQualityMonths: CreationOptional<number>;
   /** 0 = Sunday ... 6 = Saturday */
   declare weekStartsOn: CreationOptional<number>;
-  declare cannerCapacityJars: CreationOptional<number>;
+  /** The canners the household owns, one a method, each with its jars a load. */
+  declare canners: CreationOptional<Canner[]>;
   declare defaultMethod: CreationOptional<Method>;
   /** When a keeper last confirmed the altitude; null means no processing plan may be shown yet. */
   declare altitudeConfirmedAt: CreationOptional<Date | null>;
@@ -27,6 +28,11 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
   declare mealTimes: CreationOptional<MealTimes>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+
+  /** The jars a load of the default canner (its first canner where none is for the default method). */
+  defaultCannerCapacity(): number {
+    return (this.canners.find((c) => c.method === this.defaultMethod) ?? this.canners[0])?.capacityJars ?? 7;
+  }
 
   toPublic() {
     return {
@@ -37,7 +43,8 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
       timeZone: this.timeZone,
       bestQualityMonths: this.bestQualityMonths,
       weekStartsOn: this.weekStartsOn,
-      cannerCapacityJars: this.cannerCapacityJars,
+      canners: this.canners,
+      cannerCapacityJars: this.defaultCannerCapacity(),
       defaultMethod: this.defaultMethod,
       altitudeConfirmed: this.altitudeConfirmedAt !== null && this.altitudeConfirmedAt !== undefined,
     };
@@ -53,7 +60,11 @@ export class Household extends Model<InferAttributes<Household>, InferCreationAt
         timeZone: { type: DataTypes.STRING(64), allowNull: false, defaultValue: 'UTC' },
         bestQualityMonths: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 12 },
         weekStartsOn: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
-        cannerCapacityJars: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 7 },
+        canners: {
+          type: DataTypes.JSONB,
+          allowNull: false,
+          defaultValue: [{ method: 'boiling-water', capacityJars: 7 }],
+        },
         defaultMethod: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'boiling-water' },
         altitudeConfirmedAt: { type: DataTypes.DATE, allowNull: true },
         mealTimes: { type: DataTypes.JSONB, allowNull: false, defaultValue: DEFAULT_MEAL_TIMES },

@@ -12,6 +12,7 @@ import { Meal, MealProduct } from './meal';
 import { Membership } from './membership';
 import { NotificationPreference } from './notification-preference';
 import { Pairing, PlanEntry } from './plan-entry';
+import { Place } from './place';
 import { Product } from './product';
 import { PushSubscription } from './push-subscription';
 import { Recipe } from './recipe';
@@ -26,6 +27,7 @@ export function initModels(sequelize: Sequelize) {
     User,
     Household,
     Membership,
+    Place,
     Product,
     Recipe,
     Batch,
@@ -66,6 +68,7 @@ export function initModels(sequelize: Sequelize) {
   Batch.hasMany(Jar, { as: 'jars', foreignKey: 'batchId' });
   Jar.belongsTo(Batch, { as: 'batch', foreignKey: 'batchId' });
   Jar.belongsTo(Product, { as: 'product', foreignKey: 'productId' });
+  Jar.belongsTo(Place, { as: 'place', foreignKey: 'placeId' });
   Jar.hasMany(JarEvent, { as: 'events', foreignKey: 'jarId' });
   Batch.hasMany(JarEvent, { as: 'events', foreignKey: 'batchId' });
   JarEvent.belongsTo(User, { as: 'user', foreignKey: 'userId' });
@@ -96,6 +99,7 @@ export {
   Membership,
   NotificationPreference,
   Pairing,
+  Place,
   PlanEntry,
   Product,
   PushSubscription,

@@ -15,9 +15,11 @@ export const JAR_EVENT_KINDS = [
   'opened',
   'finished',
   'discarded',
+  'given',
   'restored',
   'seal-checked',
   'reprocessed',
+  'moved',
 ] as const;
 export type JarEventKind = (typeof JAR_EVENT_KINDS)[number];
 
@@ -27,7 +29,16 @@ export interface JarBefore {
   useBy: string | null;
   finishedOn: string | null;
   discardedOn: string | null;
+  /** Absent from snapshots written before gifts existed; those jars were not given. */
+  givenOn?: string | null;
+  givenTo?: string | null;
   remainingTbsp: number;
+}
+
+/** A move's place names (null: no place), as they were called then. */
+export interface PlaceMove {
+  from: string | null;
+  to: string | null;
 }
 
 export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttributes<JarEvent>> {
@@ -38,10 +49,13 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
   declare kind: JarEventKind;
   declare userId: string | null;
   declare happenedOn: string;
-  /** A 'restored' event names the open, finish or discard it reverses. */
+  /** A 'restored' event names the open, finish, discard or gift it reverses. */
   declare undoesEventId: CreationOptional<string | null>;
-  /** The jar's fields before an open, finish or discard, so an undo puts back exactly those. */
+  /** The jar's fields before an open, finish, discard or gift, so an undo puts back exactly those. */
   declare stateBefore: CreationOptional<JarBefore | null>;
+  declare placeMove: CreationOptional<PlaceMove | null>;
+  /** A 'given' event: whom the jar went to, when the giver said. */
+  declare givenTo: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -56,6 +70,8 @@ export class JarEvent extends Model<InferAttributes<JarEvent>, InferCreationAttr
         happenedOn: { type: DataTypes.DATEONLY, allowNull: false },
         undoesEventId: { type: DataTypes.UUID, allowNull: true },
         stateBefore: { type: DataTypes.JSONB, allowNull: true },
+        placeMove: { type: DataTypes.JSONB, allowNull: true },
+        givenTo: { type: DataTypes.STRING(80), allowNull: true },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'jar_events', updatedAt: false },

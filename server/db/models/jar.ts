@@ -4,10 +4,12 @@ import {
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from 'sequelize';
 import type { JarState } from '../../../shared/domain';
 import { decimal, requiredUuid, uuidKey } from './columns';
+import type { Place } from './place';
 
 export type JarSeal = 'checked' | 'to-check';
 
@@ -26,10 +28,16 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
   declare useBy: CreationOptional<string | null>;
   declare finishedOn: CreationOptional<string | null>;
   declare discardedOn: CreationOptional<string | null>;
+  /** The day the jar was given away, and to whom when the giver said. */
+  declare givenOn: CreationOptional<string | null>;
+  declare givenTo: CreationOptional<string | null>;
   /** 'to-check' while the jar cools after processing and nobody has checked its lid yet. */
   declare seal: CreationOptional<JarSeal>;
   /** The jar's latest processing (null for jars recorded before processings were kept). */
   declare processingId: CreationOptional<string | null>;
+  /** Where the jar is kept (null: no place named). */
+  declare placeId: CreationOptional<string | null>;
+  declare place?: NonAttribute<Place | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -50,8 +58,11 @@ export class Jar extends Model<InferAttributes<Jar>, InferCreationAttributes<Jar
         useBy: { type: DataTypes.DATEONLY, allowNull: true },
         finishedOn: { type: DataTypes.DATEONLY, allowNull: true },
         discardedOn: { type: DataTypes.DATEONLY, allowNull: true },
+        givenOn: { type: DataTypes.DATEONLY, allowNull: true },
+        givenTo: { type: DataTypes.STRING(80), allowNull: true },
         seal: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'checked' },
         processingId: { type: DataTypes.UUID, allowNull: true },
+        placeId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

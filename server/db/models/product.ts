@@ -23,6 +23,8 @@ export class Product extends Model<InferAttributes<Product>, InferCreationAttrib
   declare jarSize: CreationOptional<JarSize>;
   declare colour: CreationOptional<string>;
   declare notes: CreationOptional<string>;
+  /** Where its batches usually go; the new-batch form offers it. */
+  declare defaultPlaceId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -41,6 +43,7 @@ export class Product extends Model<InferAttributes<Product>, InferCreationAttrib
         jarSize: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'half-pint' },
         colour: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'honey' },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        defaultPlaceId: { type: DataTypes.UUID, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

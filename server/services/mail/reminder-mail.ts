@@ -1,5 +1,5 @@
 import type { ReminderKind } from '../../db/models/reminder-delivery';
-import { USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
+import { USE_BY_CAUTION_PUSH, USE_BY_CAUTION_SENTENCE } from '../../../shared/words';
 import { escapeHtml, mailButton, mailLayout, TEXT_FOOTER } from './layout';
 import type { MailMessage } from './mailer';
 
@@ -8,10 +8,7 @@ export interface ReminderWords {
   body: string;
 }
 
-// A push message has room for one short caution; the e-mail carries the full sentence.
-const PUSH_CAUTION = 'The use-by is a default; the jar’s look and smell come first. When in doubt, throw it out.';
-
-/** The words of a use-by reminder, shared by the push notification and the e-mail. */
+/** The words of a use-by reminder, shared by the push notification and the e-mail (which adds the full caution). */
 export function reminderWords(
   kind: Exclude<ReminderKind, 'seal-check'>,
   productName: string,
@@ -21,13 +18,13 @@ export function reminderWords(
   if (kind === 'today') {
     return {
       title: `Use the ${productName} today`,
-      body: `The opened jar ${code} of ${productName} reaches its use-by today. Finish it, or discard what is left. ${PUSH_CAUTION}`,
+      body: `The opened jar ${code} of ${productName} reaches its use-by today. Finish it, or discard what is left. ${USE_BY_CAUTION_PUSH}`,
     };
   }
   const days = daysLeft === 1 ? '1 day' : `${daysLeft} days`;
   return {
     title: `Use the ${productName} within ${days}`,
-    body: `The opened jar ${code} of ${productName} should be finished within ${days}. ${PUSH_CAUTION}`,
+    body: `The opened jar ${code} of ${productName} should be finished within ${days}. ${USE_BY_CAUTION_PUSH}`,
   };
 }
 

@@ -6,6 +6,7 @@ import {
   defaultUseWithinDays,
   HISTORY_DAYS,
   type FinishedPortion,
+  type GivenJar,
   type PlannedPortion,
 } from '../../../shared/domain';
 import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
@@ -21,6 +22,8 @@ export interface StockSnapshot {
   shelfJars: Jar[];
   /** Jars finished since the start of the chart's first month, each counted as a full jar. */
   finished: FinishedPortion[];
+  /** Jars given away since the earlier of the history's start and the first of this year: not eaten, counted apart. */
+  given: GivenJar[];
   /** Every pairing of a plan entry from today on: the pairing's portion per serving times the entry's servings. */
   planned: PlannedPortion[];
   /** The plan entry each planned portion (by pairing id) belongs to. */
@@ -38,12 +41,18 @@ function historyStart(today: string): string {
 }
 
 export async function stockSnapshot(householdId: string, today: string): Promise<StockSnapshot> {
-  const [products, shelfJars, finishedJars, entries] = await Promise.all([
+  const yearStart = `${today.slice(0, 4)}-01-01`;
+  const givenFrom = historyStart(today) < yearStart ? historyStart(today) : yearStart;
+  const [products, shelfJars, finishedJars, givenJars, entries] = await Promise.all([
     Product.findAll({ where: { householdId }, order: [['name', 'ASC']] }),
     Jar.findAll({ where: { householdId, state: ['sealed', 'opened'] } }),
     Jar.findAll({
       where: { householdId, state: 'finished', finishedOn: { [Op.gte]: historyStart(today), [Op.lt]: today } },
       attributes: ['productId', 'finishedOn', 'capacityTbsp'],
+    }),
+    Jar.findAll({
+      where: { householdId, state: 'given', givenOn: { [Op.gte]: givenFrom, [Op.lte]: today } },
+      attributes: ['productId', 'givenOn'],
     }),
     PlanEntry.findAll({
       where: { householdId, date: { [Op.gte]: today } },
@@ -63,6 +72,7 @@ export async function stockSnapshot(householdId: string, today: string): Promise
       finishedOn: jar.finishedOn!,
       tbsp: jar.capacityTbsp,
     })),
+    given: givenJars.map((jar) => ({ productId: jar.productId, givenOn: jar.givenOn! })),
     planned: entries.flatMap((entry) =>
       (entry.pairings ?? []).map((pairing) => ({
         id: pairing.id,

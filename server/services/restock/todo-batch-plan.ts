@@ -1,7 +1,7 @@
 // A restock to-do's batch plan: the tested recipe scaled to the jars wanted, processed for this household.
 import type { Sequelize } from 'sequelize';
-import { jarFluidOunces, restockSuggestions, type JarSize } from '../../../shared/domain';
-import { count, JAR_SIZE_NAMES } from '../../../shared/words';
+import { jarFluidOunces, restockSuggestions, type JarSize, type UnitSystem } from '../../../shared/domain';
+import { count, jarSizeWords } from '../../../shared/words';
 import type { BatchPlan, RestockTodoCreate, TodoView } from '../../../shared/schemas/todos';
 import { Batch, Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
@@ -33,13 +33,18 @@ function refuse(message: string, action?: { label: string; href: string }): AppE
   return new AppError(422, 'not_allowed', message, undefined, action ? { action } : undefined);
 }
 
-export function jarSizeFor(recipe: Recipe, product: Product, wanted: JarSize | undefined): JarSize {
+export function jarSizeFor(
+  recipe: Recipe,
+  product: Product,
+  wanted: JarSize | undefined,
+  system: UnitSystem = 'us',
+): JarSize {
   const tested = Object.keys(recipe.baseMinutes) as JarSize[];
   const size = wanted ?? (tested.includes(product.jarSize) ? product.jarSize : recipe.yieldJarSize);
   if (recipe.baseMinutes[size] === undefined) {
-    const names = tested.map((s) => JAR_SIZE_NAMES[s]).join(', ') || 'none';
+    const names = tested.map((s) => jarSizeWords(s, system)).join(', ') || 'none';
     throw refuse(
-      `"${recipe.name}" has no tested time for ${JAR_SIZE_NAMES[size]} jars. Choose a size it was tested for: ${names}.`,
+      `"${recipe.name}" has no tested time for ${jarSizeWords(size, system)} jars. Choose a size it was tested for: ${names}.`,
     );
   }
   return size;
@@ -50,8 +55,8 @@ export function oneTestedBatch(recipe: Recipe, jarSize: JarSize): number {
   return Math.max(1, Math.ceil((recipe.yieldJars * jarFluidOunces(recipe.yieldJarSize)) / jarFluidOunces(jarSize)));
 }
 
-export function restockTitle(plan: BatchPlan): string {
-  return `Make ${count(plan.jars, `${JAR_SIZE_NAMES[plan.jarSize]} jar`)} of ${plan.productName}`;
+export function restockTitle(plan: BatchPlan, system: UnitSystem = 'us'): string {
+  return `Make ${count(plan.jars, `${jarSizeWords(plan.jarSize, system)} jar`)} of ${plan.productName}`;
 }
 
 /** Makes the restock to-do, or refuses with what to do first. */
@@ -72,7 +77,7 @@ export async function addRestockTodo(
       href: paths.newRecipe(household.id, product.id),
     });
   }
-  const jarSize = jarSizeFor(recipe, product, input.jarSize);
+  const jarSize = jarSizeFor(recipe, product, input.jarSize, household.unitSystem);
 
   const today = todayIn(household.timeZone);
   const snapshot = await stockSnapshot(household.id, today);
@@ -93,6 +98,7 @@ export async function addRestockTodo(
       remainingTbsp: jar.remainingTbsp,
     })),
     finished: snapshot.finished,
+    given: snapshot.given,
     planned: snapshot.planned,
   });
   const suggestion = suggestions[0];
@@ -110,7 +116,7 @@ export async function addRestockTodo(
     runOutOn: forecasts[0].runOutOn,
   });
   return createTodo(sequelize, household.id, userId, {
-    title: restockTitle(plan),
+    title: restockTitle(plan, household.unitSystem),
     dueOn: plan.targetOn,
     kind: 'restock',
     productId: product.id,

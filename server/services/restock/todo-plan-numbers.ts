@@ -1,32 +1,44 @@
 // The numbers of a restock batch plan: the tested recipe scaled, processed for the household as it is now.
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
 import {
-  formatKitchenAmount,
+  amountIn,
+  cannerFor,
+  cannerLoads,
+  batchShopping,
+  type Mouth,
+  type StockItem,
   scaleRecipe,
+  type UnitSystem,
   type JarSize,
   type RestockReason,
   type ScaledIngredient,
 } from '../../../shared/domain';
-import { altitudeWords, dateWords, METHOD_NAMES, minutesWords, pressureWords } from '../../../shared/words';
-import type { BatchPlan, ShoppingItem } from '../../../shared/schemas/todos';
+import {
+  altitudeWords,
+  dateWords,
+  METHOD_NAMES,
+  minutesWords,
+  pressureWords,
+  amountWords,
+} from '../../../shared/words';
+import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/stock';
+import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
+import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
-function shoppingItem(ingredient: ScaledIngredient): ShoppingItem {
-  const amount = formatKitchenAmount(ingredient.amount, ingredient.unit);
+/** The amount as the recipe keeps it, and as the household measures it (its text and its shown number). */
+function shoppingItem(ingredient: ScaledIngredient, system: UnitSystem): ShoppingItem {
+  const amount = amountWords(ingredient.amount, ingredient.unit, system);
   return {
     name: ingredient.name,
     role: ingredient.role,
     amount: ingredient.amount,
     unit: ingredient.unit,
+    shown: (({ value, unit }) => ({ amount: value, unit }))(amountIn(ingredient.amount, ingredient.unit, system)),
     text: `${amount} ${ingredient.name}`.trim(),
   };
-}
-
-function cannerLoads(jars: number, capacity: number): number[] {
-  const loads = Array.from({ length: Math.floor(jars / capacity) }, () => capacity);
-  return jars % capacity ? [...loads, jars % capacity] : loads;
 }
 
 export interface PlanQuestion {
@@ -52,6 +64,10 @@ function planFor({ household, product, recipe, today, jars, jarSize, reason, run
   );
   const processing = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt: household.altitudeFt });
   const target = targetDate(today, product.harvestMonths, runOutOn);
+  const system = household.unitSystem;
+  // The canner the recipe's method goes into; a household without one for it is counted in its default canner's loads.
+  const canner = cannerFor(household.canners, recipe.method);
+  const capacity = canner?.capacityJars ?? household.defaultCannerCapacity();
   return {
     productId: product.id,
     productName: product.name,
@@ -70,12 +86,13 @@ function planFor({ household, product, recipe, today, jars, jarSize, reason, run
     equipment: {
       jars,
       newLids: jars,
-      cannerCapacityJars: household.cannerCapacityJars,
-      cannerLoads: cannerLoads(jars, household.cannerCapacityJars),
+      cannerMethod: canner?.method ?? household.defaultMethod,
+      cannerCapacityJars: capacity,
+      cannerLoads: cannerLoads(jars, capacity),
     },
     shopping: {
-      produce: scaled.ingredients.filter((i) => i.role === 'produce').map(shoppingItem),
-      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map(shoppingItem),
+      produce: scaled.ingredients.filter((i) => i.role === 'produce').map((i) => shoppingItem(i, system)),
+      pantry: scaled.ingredients.filter((i) => i.role !== 'produce').map((i) => shoppingItem(i, system)),
     },
     targetOn: target.targetOn,
     targetWhy: target.why,
@@ -90,39 +107,56 @@ export function composeBatchPlan(question: PlanQuestion): BatchPlan {
     throw new AppError(
       422,
       'not_allowed',
-      `There is no tested process for this batch at ${altitudeWords(question.household.altitudeFt)}: ${plan.processing.reasons.join(' ')}`,
+      `There is no tested process for this batch at ${altitudeWords(question.household.altitudeFt, question.household.unitSystem)}: ${plan.processing.reasons.join(' ')}`,
     );
   }
   return plan;
 }
 
-function processingWords(plan: Pick<BatchPlan, 'processing'>): string {
+/** What the plan's jars and lids need bought after the empty jars and new lids in stock now. */
+function planStock(plan: BatchPlan, mouth: Mouth, inStock: (item: StockItem, size: string) => number): BatchPlanStock {
+  const shop = batchShopping(plan.equipment.jars, {
+    emptyJars: inStock('jar', plan.jarSize),
+    lids: inStock('lid', mouth),
+  });
+  return {
+    mouth,
+    ...shop,
+    words: batchShoppingWords(plan.jarSize, mouth, shop),
+    todoTitle: batchShoppingTodo(plan.jarSize, mouth, shop),
+  };
+}
+
+function processingWords(plan: Pick<BatchPlan, 'processing'>, system: UnitSystem): string {
   const { minutes, pressurePsi, allowed } = plan.processing;
   if (!allowed) return 'no tested process';
-  return pressurePsi !== null ? `${minutesWords(minutes!)} at ${pressureWords(pressurePsi)}` : minutesWords(minutes!);
+  return pressurePsi !== null
+    ? `${minutesWords(minutes!)} at ${pressureWords(pressurePsi, false, system)}`
+    : minutesWords(minutes!);
 }
 
 /** What differs between a plan as made and as worked out now, in words a cook reads on canning day. */
-export function planChanges(made: BatchPlan, now: BatchPlan): string[] {
+export function planChanges(made: BatchPlan, now: BatchPlan, system: UnitSystem = 'us'): string[] {
   const since = `when it was planned on ${dateWords(made.plannedOn)}`;
   const changes: string[] = [];
   if (made.altitudeFt !== now.altitudeFt)
     changes.push(
-      `The household’s altitude is now ${altitudeWords(now.altitudeFt)} (it was ${altitudeWords(made.altitudeFt)} ${since}).`,
+      `The household’s altitude is now ${altitudeWords(now.altitudeFt, system)} (it was ${altitudeWords(made.altitudeFt, system)} ${since}).`,
     );
-  if (processingWords(made) !== processingWords(now))
-    changes.push(`Processing is now ${processingWords(now)} (it was ${processingWords(made)}).`);
+  if (processingWords(made, system) !== processingWords(now, system))
+    changes.push(`Processing is now ${processingWords(now, system)} (it was ${processingWords(made, system)}).`);
   if (made.method !== now.method)
     changes.push(
       `The recipe now uses a ${METHOD_NAMES[now.method].toLowerCase()} (it was a ${METHOD_NAMES[made.method].toLowerCase()}).`,
     );
   if (made.equipment.cannerCapacityJars !== now.equipment.cannerCapacityJars) {
     changes.push(
-      `Your canner now holds ${now.equipment.cannerCapacityJars} jars a load (it was ${made.equipment.cannerCapacityJars}), so the loads are ${now.equipment.cannerLoads.join(' + ')}.`,
+      `Your ${METHOD_NAMES[now.equipment.cannerMethod ?? now.method].toLowerCase()} now holds ${now.equipment.cannerCapacityJars} jars a load (it was ${made.equipment.cannerCapacityJars}), so the loads are ${now.equipment.cannerLoads.join(' + ')}.`,
     );
   }
+  // The recipe's own amounts, not their words: a change of the household's units is not an edit of the recipe.
   const ingredients = (plan: BatchPlan) =>
-    JSON.stringify([...plan.shopping.produce, ...plan.shopping.pantry].map((item) => item.text));
+    JSON.stringify([...plan.shopping.produce, ...plan.shopping.pantry].map((i) => [i.name, i.amount, i.unit]));
   if (
     ingredients(made) !== ingredients(now) ||
     made.headspaceInches !== now.headspaceInches ||
@@ -161,10 +195,12 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  const [household, recipes, products] = await Promise.all([
+  const [household, recipes, products, inStock, mouthOf] = await Promise.all([
     Household.findByPk(householdId),
     Recipe.findAll({ where: { householdId, id: recipeIds } }),
     Product.findAll({ where: { householdId, id: productIds } }),
+    stockFor(Household.sequelize!, householdId),
+    usualMouths(Household.sequelize!, householdId, productIds),
   ]);
   if (!household) throw notFound('That household');
   return views.map((view) => {
@@ -194,8 +230,9 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
       ...now,
       targetOn: made.targetOn,
       targetWhy: made.targetWhy,
-      changes: planChanges(made, now),
+      changes: planChanges(made, now, household.unitSystem),
     };
+    fresh.stock = planStock(fresh, mouthOf(fresh.productId, fresh.jarSize), inStock);
     if (!household.altitudeConfirmedAt)
       return {
         ...view,

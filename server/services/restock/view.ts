@@ -16,14 +16,21 @@ import type {
   RestockSuggestionView,
   RestockView,
 } from '../../../shared/schemas/restock';
+import type { UnitSystem } from '../../../shared/domain';
 import { Household, Recipe, Todo, type Product } from '../../db/models';
 import { todayIn } from '../clock';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
-function whyInWords(today: string, suggestion: RestockSuggestion, forecast: RestockForecast, product: Product): string {
+function whyInWords(
+  today: string,
+  suggestion: RestockSuggestion,
+  forecast: RestockForecast,
+  product: Product,
+  system: UnitSystem,
+): string {
   if (suggestion.reason === 'runs-out-soon') {
     if (forecast.jarsOnHand === 0) return 'None left on the shelf or in the fridge.';
-    return `At about ${tbspPerDay(forecast.dailyTbsp)}, the last jar is empty by ${dateWords(suggestion.runOutOn!, yearOf(today))}.`;
+    return `At about ${tbspPerDay(forecast.dailyTbsp, system)}, the last jar is empty by ${dateWords(suggestion.runOutOn!, yearOf(today))}.`;
   }
   return `${count(forecast.sealedJars, 'sealed jar')} left; you keep at least ${product.minJars}.`;
 }
@@ -58,10 +65,10 @@ async function planningState(householdId: string) {
 export async function restockView(household: Household): Promise<RestockView> {
   const today = todayIn(household.timeZone);
   const snapshot = await stockSnapshot(household.id, today);
-  return restockFromSnapshot(snapshot);
+  return restockFromSnapshot(snapshot, household.unitSystem);
 }
 
-export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<RestockView> {
+export async function restockFromSnapshot(snapshot: StockSnapshot, system: UnitSystem = 'us'): Promise<RestockView> {
   const { products, today } = snapshot;
   const { withRecipe, openTodo } = await planningState(snapshot.householdId);
   const result = restockSuggestions({
@@ -79,8 +86,11 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
       remainingTbsp: jar.remainingTbsp,
     })),
     finished: snapshot.finished,
+    given: snapshot.given,
     planned: snapshot.planned,
   });
+  const yearStart = `${today.slice(0, 4)}-01-01`;
+  const givenThisYear = snapshot.given.filter((gift) => gift.givenOn >= yearStart);
   const byId = new Map<Id, Product>(products.map((p) => [p.id, p]));
   const forecastOf = new Map<Id, RestockForecast>(result.forecasts.map((f) => [f.productId, f]));
 
@@ -90,7 +100,7 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
       ...suggestion,
       productId: product.id,
       productName: product.name,
-      why: whyInWords(today, suggestion, forecastOf.get(product.id)!, product),
+      why: whyInWords(today, suggestion, forecastOf.get(product.id)!, product, system),
       jarSize: product.jarSize,
       hasRecipe: withRecipe.has(product.id),
       openTodoId: openTodo.get(product.id) ?? null,
@@ -115,6 +125,8 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
       onHandTbsp: forecast.onHandTbsp,
       dailyTbsp: forecast.dailyTbsp,
       historyTbspPerDay: forecast.historyTbspPerDay,
+      givenJarsInHistory: forecast.givenJarsInHistory,
+      givenThisYear: givenThisYear.filter((gift) => gift.productId === product.id).length,
       plannedTbspPerDay: forecast.plannedTbspPerDay,
       runOutOn: forecast.runOutOn,
       jarSizeAdvice: jarSizeAdvice(forecast.dailyTbsp, useWithinDays),
@@ -126,7 +138,7 @@ export async function restockFromSnapshot(snapshot: StockSnapshot): Promise<Rest
   // Favourites that need a batch first, then the other favourites, then the rest; by name within each.
   const rank = (f: RestockForecastView) => (suggested.has(f.productId) ? 0 : f.favourite ? 1 : 2);
   forecasts.sort((a, b) => rank(a) - rank(b) || a.productName.localeCompare(b.productName));
-  return { today, forecasts, suggestions };
+  return { today, givenThisYear: givenThisYear.length, forecasts, suggestions };
 }
 
 /** The restock suggestions for one household, for the weekly digest and other callers outside a request. */
@@ -134,5 +146,5 @@ export async function restockFor(householdId: string, today?: string): Promise<R
   const household = await Household.findByPk(householdId);
   if (!household) return [];
   const snapshot = await stockSnapshot(household.id, today ?? todayIn(household.timeZone));
-  return (await restockFromSnapshot(snapshot)).suggestions;
+  return (await restockFromSnapshot(snapshot, household.unitSystem)).suggestions;
 }

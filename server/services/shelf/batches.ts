@@ -1,15 +1,17 @@
-import type { Sequelize } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import { recipeProcessingPlan } from '../../../shared/processing-plan';
-import type { JarSize, Method, ProcessingPlan } from '../../../shared/domain';
+import { mouthFor, type JarSize, type Method, type ProcessingPlan } from '../../../shared/domain';
 import type { BatchCreate, BatchCreated, BatchDetail } from '../../../shared/schemas/batches';
-import { Batch, BatchProcessing, Jar, JarEvent, Product, Recipe, User, type Household } from '../../db/models';
+import { Batch, BatchProcessing, Jar, JarEvent, Place, Product, Recipe, User, type Household } from '../../db/models';
 import { AppError, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
 import { requireConfirmedAltitude } from '../households';
+import { placeNewJars, placeOfHousehold } from './places';
 import { findProduct } from './products';
 import { findRecipe } from './recipes';
 import { processingView, sealCheckView } from './seal-check-view';
 import { batchView, jarView, shelfClock } from './views';
+import { takeForBatch } from '../stock/jar-stock';
 import { withFreshJarCodes, writeBatch } from './write-batch';
 
 export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError {
@@ -25,7 +27,8 @@ export async function previewPlan(household: Household, recipeId: string, jarSiz
 export async function createBatch(
   sequelize: Sequelize,
   household: Household,
-  input: Required<Omit<BatchCreate, 'headspaceInches'>> & { headspaceInches?: number },
+  input: Required<Omit<BatchCreate, 'headspaceInches' | 'placeId' | 'mouth'>> &
+    Pick<BatchCreate, 'headspaceInches' | 'mouth'> & { placeId?: string | null },
   userId: string,
 ): Promise<BatchCreated> {
   requireConfirmedAltitude(household);
@@ -59,9 +62,18 @@ export async function createBatch(
     altitudeFt: household.altitudeFt,
   });
   if (!plan.allowed) throw notAllowed(plan);
+  // Left out, the jars go to the product's usual place. Read in the write's transaction, share-locked, so a place
+  // removed at the same time is either still there for the jars or refused (a usual place since removed: none).
+  const placeFor = (transaction: Transaction) =>
+    input.placeId !== undefined
+      ? placeOfHousehold(household.id, input.placeId, 'placeId', transaction)
+      : product.defaultPlaceId
+        ? placeOfHousehold(household.id, product.defaultPlaceId, 'placeId', transaction).catch(() => null)
+        : null;
 
-  const { batch, jars } = await withFreshJarCodes(sequelize, (transaction) =>
-    writeBatch(
+  const { batch, jars, stock } = await withFreshJarCodes(sequelize, async (transaction) => {
+    const place = await placeFor(transaction);
+    const written = await writeBatch(
       household,
       product,
       {
@@ -69,6 +81,8 @@ export async function createBatch(
         recipeId: recipe.id,
         cannedOn: input.cannedOn,
         jarSize: input.jarSize,
+        // Kept as chosen or assumed, so the next plan for this product buys the lids its jars take.
+        mouth: mouthFor(input.jarSize, input.mouth),
         jarsFilled: input.jarsFilled,
         jarsSealed: input.jarsSealed,
         method: input.method,
@@ -80,8 +94,20 @@ export async function createBatch(
       userId,
       transaction,
       input.seals === 'to-check' ? clock.now() : undefined,
-    ),
-  );
+    );
+    await placeNewJars(written.jars, place, transaction);
+    // Every jar filled took an empty jar and a new lid, sealed or not (lids seal once: USDA 2015, NCHFP).
+    const stock = await takeForBatch(
+      sequelize,
+      household.id,
+      written.batch,
+      input.jarsFilled,
+      'record',
+      userId,
+      transaction,
+    );
+    return { ...written, stock };
+  });
   const shelf = shelfClock(household);
   return {
     batch: batchView(
@@ -92,6 +118,7 @@ export async function createBatch(
     ),
     jars: jars.map((jar) => jarView(jar, batch, product, shelf)),
     plan,
+    stockWarnings: stock.flatMap((applied) => (applied.warning ? [applied.warning] : [])),
   };
 }
 
@@ -131,7 +158,11 @@ export async function batchDetail(household: Household, batchId: string): Promis
   const [product, recipe, jars, events, processings] = await Promise.all([
     findProduct(household.id, batch.productId),
     batch.recipeId ? Recipe.findOne({ where: { householdId: household.id, id: batch.recipeId } }) : null,
-    Jar.findAll({ where: { batchId: batch.id }, order: [['code', 'ASC']] }),
+    Jar.findAll({
+      where: { batchId: batch.id },
+      include: [{ model: Place, as: 'place', required: false }],
+      order: [['code', 'ASC']],
+    }),
     JarEvent.findAll({
       where: { batchId: batch.id },
       include: [{ model: User, as: 'user', attributes: ['name'] }],
@@ -161,7 +192,9 @@ export async function batchDetail(household: Household, batchId: string): Promis
       kind: event.kind,
       happenedOn: event.happenedOn,
       jarCode: codes.get(event.jarId) ?? '',
+      givenTo: event.givenTo ?? null,
       who: (event as JarEvent & { user?: User | null }).user?.name ?? null,
+      placeMove: event.placeMove ?? null,
     })),
     processings: processings.map(processingView),
     timeZone: household.timeZone,

@@ -14,14 +14,15 @@ import {
   type Method,
   type ProductKind,
 } from '../../../shared/domain';
-import type { ImportProblem, ImportRow } from '../../../shared/schemas/batches';
+import { giftRecipientText, type ImportProblem, type ImportRow } from '../../../shared/schemas/batches';
 import { LIMITS, limitWords } from '../../../shared/schemas/limits';
 import { csvChoiceList, readCsvChoice, type CsvChoiceColumn } from '../../../shared/words/csv';
-import { Jar, JarEvent, Product, Recipe, type Household } from '../../db/models';
+import { Jar, JarEvent, Place, Product, Recipe, type Household } from '../../db/models';
 import { AppError } from '../../http/errors';
 import { todayIn } from '../clock';
 import { requireConfirmedAltitude } from '../households';
 import { unguardCell } from './csv-cells';
+import { placeByName, placeNewJars } from './places';
 import { withFreshJarCodes, writeBatch, type BatchRecord } from './write-batch';
 
 export const IMPORT_COLUMNS = [
@@ -34,6 +35,7 @@ export const IMPORT_COLUMNS = [
   'method',
   'minutes',
   'notes',
+  'place',
 ] as const;
 const ALWAYS = ['product', 'canned_on', 'jar_size', 'method'];
 const BATCH_ROWS = ['jars_filled', 'jars_sealed'];
@@ -97,6 +99,14 @@ const common = {
     .max(LIMITS.length.notes, `Use at most ${limitWords(LIMITS.length.notes)} characters.`)
     .optional()
     .default(''),
+  // Files from before places have no such column: the jars then have no place.
+  place: z
+    .string()
+    .trim()
+    .max(LIMITS.length.placeName, `Use at most ${LIMITS.length.placeName} characters for a place.`)
+    .refine((name) => !/[\p{Cc}\p{Cf}]/u.test(name), 'Write the place without control characters.')
+    .optional()
+    .default(''),
 };
 
 const batchRow = z
@@ -127,6 +137,8 @@ const jarRow = z.object({
   use_by: optionalDate,
   finished_on: optionalDate,
   discarded_on: optionalDate,
+  given_on: optionalDate,
+  given_to: giftRecipientText.optional().default(''),
 });
 type JarRow = z.infer<typeof jarRow>;
 
@@ -138,6 +150,8 @@ interface Planned {
   record: Omit<BatchRecord, 'productId'>;
   /** One row a jar: each jar's state and dates, in the order writeBatch makes them (sealed lids first). */
   jars?: JarRow[];
+  /** One row a batch: where its jars go ('' for no place). */
+  place?: string;
 }
 
 export async function checkImport(household: Household, csv: string) {
@@ -262,7 +276,7 @@ export async function checkImport(household: Household, csv: string) {
           problems.push({ row, field: String(issue.path[0] ?? '_'), message: issue.message }),
         );
       const batch = batchOf(row, result.data, result.data.jars_filled, result.data.jars_sealed);
-      if (batch) planned.push(batch);
+      if (batch) planned.push({ ...batch, place: result.data.place });
     });
   } else {
     // Jars canned together: the same batch number, or without one the same product, day, size, canner and notes.
@@ -321,21 +335,57 @@ export async function checkImport(household: Household, csv: string) {
       if (batch) planned.push({ ...batch, jars: ordered });
     }
   }
+  await placesProblem(household, planned, problems);
   problems.sort((a, b) => a.row - b.row);
   rows.sort((a, b) => a.row - b.row);
   return { rows, planned, problems };
 }
 
+/** The names of places a file uses, in lower case, each once. */
+function placeNamesOf(planned: Planned[]) {
+  const names = new Map<string, string>();
+  for (const plan of planned)
+    for (const name of plan.jars ? plan.jars.map((jar) => jar.place) : [plan.place ?? ''])
+      if (name) names.set(name.toLowerCase(), name);
+  return names;
+}
+
+/** Places the file names that the household does not have are added on import, within the household's limit. */
+async function placesProblem(household: Household, planned: Planned[], problems: ImportProblem[]) {
+  const named = placeNamesOf(planned);
+  if (named.size === 0) return;
+  const existing = new Set(
+    (await Place.findAll({ where: { householdId: household.id }, attributes: ['name'] })).map((p) =>
+      p.name.toLowerCase(),
+    ),
+  );
+  const added = [...named.keys()].filter((name) => !existing.has(name)).length;
+  if (existing.size + added > LIMITS.places)
+    problems.push({
+      row: 1,
+      field: 'place',
+      message: `The file names ${added} new places, and a household keeps at most ${LIMITS.places}. Use places the household has, or remove some first.`,
+    });
+}
+
 /** A jar row's dates fit its state: opened, finished and discarded jars say when, and nothing happens before canning or after today. */
 function jarDatesProblem(jar: JarRow, today: string): Omit<ImportProblem, 'row'> | null {
-  const need: Partial<Record<JarState, keyof JarRow>> = { finished: 'finished_on', discarded: 'discarded_on' };
+  const need: Partial<Record<JarState, keyof JarRow>> = {
+    finished: 'finished_on',
+    discarded: 'discarded_on',
+    given: 'given_on',
+  };
   if (jar.state === 'opened' && jar.unsealed !== 'yes' && !jar.opened_on)
     return { field: 'opened_on', message: 'An opened jar needs the day it was opened.' };
   const field = need[jar.state];
-  if (field && !jar[field]) return { field, message: `A ${jar.state} jar needs the day it was ${jar.state}.` };
+  if (field && !jar[field])
+    return {
+      field,
+      message: `A ${jar.state} jar needs the day it was ${jar.state === 'given' ? 'given away' : jar.state}.`,
+    };
   if (jar.state === 'sealed' && jar.unsealed === 'yes')
     return { field: 'unsealed', message: 'A jar that did not seal cannot be sealed; write opened.' };
-  for (const key of ['opened_on', 'finished_on', 'discarded_on'] as const) {
+  for (const key of ['opened_on', 'finished_on', 'discarded_on', 'given_on'] as const) {
     if (jar[key] && jar[key] < jar.canned_on) return { field: key, message: 'This day is before the jar was canned.' };
     if (jar[key] && jar[key] > today) return { field: key, message: 'This day is in the future.' };
   }
@@ -377,7 +427,7 @@ async function applyJarRows(
       changes.code = row.jar_code;
       free.delete(row.jar_code);
     }
-    const events: ('opened' | 'finished' | 'discarded')[] = [];
+    const events: ('opened' | 'finished' | 'discarded' | 'given')[] = [];
     const openedOn = row.opened_on || (jar.unsealed ? jar.openedOn : null);
     if (row.state !== 'sealed' && openedOn && !jar.unsealed) events.push('opened');
     if (row.state === 'opened' || (row.state !== 'sealed' && openedOn)) {
@@ -392,9 +442,18 @@ async function applyJarRows(
       changes.discardedOn = row.discarded_on;
       events.push('discarded');
     }
+    if (row.state === 'given') {
+      Object.assign(changes, { givenOn: row.given_on, givenTo: row.given_to || null });
+      events.push('given');
+    }
     changes.state = row.state;
     await jar.update(changes, { transaction });
-    const day = { opened: changes.openedOn, finished: row.finished_on, discarded: row.discarded_on };
+    const day = {
+      opened: changes.openedOn,
+      finished: row.finished_on,
+      discarded: row.discarded_on,
+      given: row.given_on,
+    };
     if (events.length)
       await JarEvent.bulkCreate(
         events.map((kind) => ({
@@ -404,6 +463,7 @@ async function applyJarRows(
           kind,
           userId,
           happenedOn: day[kind]!,
+          givenTo: kind === 'given' ? row.given_to || null : null,
         })),
         { transaction },
       );
@@ -426,6 +486,10 @@ export async function importBatches(sequelize: Sequelize, household: Household, 
   await withFreshJarCodes(sequelize, async (transaction) => {
     const made = new Map<string, Product>();
     const free = await freeCodes(sequelize, transaction, planned);
+    const places = new Map<string, Place>();
+    for (const [lower, name] of placeNamesOf(planned))
+      places.set(lower, await placeByName(household.id, name, transaction));
+    const placeOf = (name: string | undefined) => (name ? places.get(name.toLowerCase())! : null);
     for (const plan of planned) {
       let product = plan.product instanceof Product ? plan.product : made.get(plan.product.name.toLowerCase());
       if (!product) {
@@ -443,6 +507,14 @@ export async function importBatches(sequelize: Sequelize, household: Household, 
         transaction,
       );
       if (plan.jars) await applyJarRows(household, product, jars, plan.jars, free, userId, transaction);
+      if (plan.jars) {
+        for (const [lower, place] of places)
+          await placeNewJars(
+            jars.filter((_, index) => plan.jars![index].place.toLowerCase() === lower),
+            place,
+            transaction,
+          );
+      } else await placeNewJars(jars, placeOf(plan.place), transaction);
     }
   });
   return { imported: rows.length, jars: rows.reduce((sum, row) => sum + row.jarsFilled, 0) };

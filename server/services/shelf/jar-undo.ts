@@ -1,26 +1,34 @@
-// Putting a jar back: an open, finish or discard reversed by a new event, never by erasing one.
+// Putting a jar back: an open, finish, discard or gift reversed by a new event, never by erasing one.
 import { UniqueConstraintError, type Sequelize, type Transaction } from 'sequelize';
 import type { JarState } from '../../../shared/domain';
 import { JAR_UNDO_MINUTES, type JarActed, type JarChange } from '../../../shared/schemas/batches';
 import { can, type Role } from '../../../shared/roles';
-import { Batch, Household, Jar, JarEvent, Product, User } from '../../db/models';
+import { Batch, Household, Jar, JarEvent, Place, Product, User } from '../../db/models';
 import type { JarBefore } from '../../db/models/jar-event';
 import { conflict, forbidden, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
+import { undoJarEnding } from '../stock/jar-stock';
 import { jarView, shelfClock } from './views';
 
-const REVERSIBLE = ['opened', 'finished', 'discarded'] as const;
+const REVERSIBLE = ['opened', 'finished', 'discarded', 'given'] as const;
 type Reversible = (typeof REVERSIBLE)[number];
-const AFTER: Record<Reversible, JarState> = { opened: 'opened', finished: 'finished', discarded: 'discarded' };
+const AFTER: Record<Reversible, JarState> = {
+  opened: 'opened',
+  finished: 'finished',
+  discarded: 'discarded',
+  given: 'given',
+};
 
 export function jarBefore(jar: Jar): JarBefore {
-  const { state, openedOn, useBy, finishedOn, discardedOn, remainingTbsp } = jar;
+  const { state, openedOn, useBy, finishedOn, discardedOn, givenOn, givenTo, remainingTbsp } = jar;
   return {
     state,
     openedOn: openedOn ?? null,
     useBy: useBy ?? null,
     finishedOn: finishedOn ?? null,
     discardedOn: discardedOn ?? null,
+    givenOn: givenOn ?? null,
+    givenTo: givenTo ?? null,
     remainingTbsp: Number(remainingTbsp),
   };
 }
@@ -33,7 +41,15 @@ function inferredBefore(kind: Reversible, jar: Jar): JarBefore {
   const wasOpened = kind === 'finished' || jar.openedOn !== null;
   // How much a finished jar held is not recorded; a full jar's worth errs toward showing it, not hiding it.
   const remainingTbsp = kind === 'finished' || now.remainingTbsp <= 0 ? Number(jar.capacityTbsp) : now.remainingTbsp;
-  return { ...now, state: wasOpened ? 'opened' : 'sealed', finishedOn: null, discardedOn: null, remainingTbsp };
+  return {
+    ...now,
+    state: wasOpened ? 'opened' : 'sealed',
+    finishedOn: null,
+    discardedOn: null,
+    givenOn: null,
+    givenTo: null,
+    remainingTbsp,
+  };
 }
 
 const latestEvent = (jarId: string, transaction?: Transaction) =>
@@ -62,7 +78,7 @@ export async function lastJarChange(householdId: string, jarId: string): Promise
 }
 
 /**
- * Reverses one open, finish or discard. It must still be the jar's latest change (the jar row is
+ * Reverses one open, finish, discard or gift. It must still be the jar's latest change (the jar row is
  * locked while we look), so two people undoing at once, or an undo racing a new action, cannot both win.
  * Helpers may undo their own action for a short while; cooks and keepers may put a jar back any time.
  */
@@ -115,11 +131,12 @@ export async function undoJarEvent(
         },
         { transaction },
       );
+      await undoJarEnding(sequelize, household.id, event.id, userId, restored.id, transaction);
       const [batch, product] = await Promise.all([
         Batch.findByPk(jar.batchId, { transaction }),
         Product.findByPk(jar.productId, { transaction }),
       ]);
-      await jar.reload({ transaction });
+      await jar.reload({ transaction, include: [{ model: Place, as: 'place', required: false }] });
       return { jar: jarView(jar, batch!, product!, shelfClock(household)), eventId: restored.id };
     });
   } catch (error) {

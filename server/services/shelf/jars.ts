@@ -1,11 +1,12 @@
 // Jars on the shelf and in the fridge, and the three things a member does with one.
 import { Op, type Sequelize, type WhereOptions } from 'sequelize';
 import { defaultUseWithinDays, useBy, type JarState } from '../../../shared/domain';
-import type { JarAction, JarActed, JarByCode, OpeningAdvice } from '../../../shared/schemas/batches';
-import { Batch, Household, Jar, JarEvent, Membership, Product } from '../../db/models';
+import type { GiftsThisYear, JarAction, JarActed, JarByCode, OpeningAdvice } from '../../../shared/schemas/batches';
+import { Batch, Household, Jar, JarEvent, Membership, Place, Product } from '../../db/models';
 import { conflict, notFound } from '../../http/errors';
 import { todayIn } from '../clock';
 import { normaliseJarCode } from './jar-codes';
+import { jarEnded, type JarEnding } from '../stock/jar-stock';
 import { jarBefore, lastJarChange } from './jar-undo';
 import { jarView, shelfClock } from './views';
 
@@ -13,16 +14,18 @@ type JarWithParts = Jar & { batch: Batch; product: Product };
 const withParts = [
   { model: Batch, as: 'batch', required: true },
   { model: Product, as: 'product', required: true },
+  { model: Place, as: 'place', required: false },
 ];
 
 export async function listJars(
   household: Household,
-  filter: { state?: JarState | 'all'; productId?: string; batchId?: string },
+  filter: { state?: JarState | 'all'; productId?: string; batchId?: string; placeId?: string },
 ) {
   const where: WhereOptions<Jar> = { householdId: household.id };
   if (filter.state !== 'all') Object.assign(where, { state: filter.state ?? { [Op.in]: ['sealed', 'opened'] } });
   if (filter.productId) Object.assign(where, { productId: filter.productId });
   if (filter.batchId) Object.assign(where, { batchId: filter.batchId });
+  if (filter.placeId) Object.assign(where, { placeId: filter.placeId === 'none' ? null : filter.placeId });
   const jars = (await Jar.findAll({
     where,
     include: withParts,
@@ -42,19 +45,24 @@ const EVENT: Record<JarAction, 'opened' | 'finished' | 'discarded'> = {
   discard: 'discarded',
 };
 
-function refusal(action: JarAction, jar: Jar): string {
-  const already = {
+/** What has happened to a jar, as a refusal says it. */
+function jarNow(jar: Jar): string {
+  return {
     opened: `was opened on ${jar.openedOn}`,
     finished: `was finished on ${jar.finishedOn}`,
     discarded: `was discarded on ${jar.discardedOn}`,
+    given: `was given away on ${jar.givenOn}`,
     sealed: 'is still sealed',
   }[jar.state];
+}
+
+function refusal(action: JarAction, jar: Jar): string {
   const what = {
     open: 'Only a sealed jar can be opened.',
     finish: 'Only an opened jar can be finished; open it first.',
-    discard: 'A finished or discarded jar cannot be discarded.',
+    discard: 'A finished, discarded or given jar cannot be discarded.',
   }[action];
-  return `Jar ${jar.code} ${already}. ${what} Refresh to see its state now.`;
+  return `Jar ${jar.code} ${jarNow(jar)}. ${what} Refresh to see its state now.`;
 }
 
 /**
@@ -67,6 +75,7 @@ export async function actOnJar(
   jarId: string,
   action: JarAction,
   userId: string,
+  options: { kept?: boolean } = {},
 ): Promise<JarActed> {
   const today = todayIn(household.timeZone);
   return sequelize.transaction(async (transaction) => {
@@ -107,8 +116,104 @@ export async function actOnJar(
       },
       { transaction },
     );
+    if (action !== 'open') {
+      // A discarded jar's glass is usually washed and kept; the person says when it broke or went out with the food.
+      const ending: JarEnding =
+        action === 'finish' ? { reason: 'finish' } : { reason: 'discard', kept: options.kept ?? true };
+      await jarEnded(
+        sequelize,
+        household.id,
+        { jarSize: jar.batch.jarSize, batchId: jar.batchId },
+        ending,
+        userId,
+        event.id,
+        transaction,
+      );
+    }
     return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
   });
+}
+
+/**
+ * Gives a sealed jar away: it leaves the shelf in a state of its own, so its empty jar does not come back and the
+ * forecast does not count it as eaten. Only a jar known to be sealed goes: one still cooling is checked first
+ * (USDA Complete Guide to Home Canning, 2015: check the seals 12 to 24 hours after processing), and an unsealed jar
+ * is in the fridge already (NCHFP: refrigerate it or reprocess it). The same conditional UPDATE as actOnJar is the lock.
+ */
+export async function giveJar(
+  sequelize: Sequelize,
+  household: Household,
+  jarId: string,
+  to: string | null,
+  userId: string,
+): Promise<JarActed> {
+  const today = todayIn(household.timeZone);
+  return sequelize.transaction(async (transaction) => {
+    const jar = (await Jar.findOne({
+      where: { id: jarId, householdId: household.id },
+      include: withParts,
+      transaction,
+    })) as JarWithParts | null;
+    if (!jar) throw notFound('That jar');
+    const [count, rows] = await Jar.update(
+      { state: 'given', givenOn: today, givenTo: to },
+      { where: { id: jar.id, state: 'sealed', seal: 'checked' }, returning: true, transaction },
+    );
+    if (count === 0) {
+      await jar.reload({ transaction });
+      if (jar.state === 'sealed')
+        throw conflict(`Jar ${jar.code} is still cooling and its seal is not checked yet. Check its seal first.`);
+      throw conflict(
+        `Jar ${jar.code} ${jarNow(jar)}. Only a sealed jar on the shelf can be given away. Refresh to see its state now.`,
+      );
+    }
+    const event = await JarEvent.create(
+      {
+        householdId: household.id,
+        jarId: jar.id,
+        batchId: jar.batchId,
+        kind: 'given',
+        userId,
+        happenedOn: today,
+        givenTo: to,
+        stateBefore: jarBefore(jar),
+      },
+      { transaction },
+    );
+    // The one rule for jar endings: a given jar's empty jar leaves with it, so stock does not change.
+    await jarEnded(
+      sequelize,
+      household.id,
+      { jarSize: jar.batch.jarSize, batchId: jar.batchId },
+      { reason: 'given' },
+      userId,
+      event.id,
+      transaction,
+    );
+    return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
+  });
+}
+
+/** How many jars the household gave away this calendar year (its own time zone's year), by product. */
+export async function giftsThisYear(household: Household): Promise<GiftsThisYear> {
+  const today = todayIn(household.timeZone);
+  const year = Number(today.slice(0, 4));
+  const jars = await Jar.findAll({
+    where: { householdId: household.id, state: 'given', givenOn: { [Op.gte]: `${year}-01-01`, [Op.lte]: today } },
+    attributes: ['productId'],
+    include: [{ model: Product, as: 'product', required: true, attributes: ['id', 'name'] }],
+  });
+  const byProduct = new Map<string, { productId: string; productName: string; jars: number }>();
+  for (const jar of jars as (Jar & { product: Product })[]) {
+    const entry = byProduct.get(jar.productId) ?? { productId: jar.productId, productName: jar.product.name, jars: 0 };
+    entry.jars += 1;
+    byProduct.set(jar.productId, entry);
+  }
+  return {
+    year,
+    jars: jars.length,
+    byProduct: [...byProduct.values()].sort((a, b) => b.jars - a.jars || a.productName.localeCompare(b.productName)),
+  };
 }
 
 /**

@@ -16,6 +16,7 @@ import { clockWords } from '../../../shared/words';
 import { Batch, BatchProcessing, Jar, JarEvent, Product, Recipe, type Household } from '../../db/models';
 import { AppError, conflict, forbidden, notFound } from '../../http/errors';
 import { clock, todayIn } from '../clock';
+import { takeForBatch, type StockApplied } from '../stock/jar-stock';
 import { batchDetail, notAllowed } from './batches';
 import { sealCheckView } from './seal-check-view';
 
@@ -106,6 +107,7 @@ export async function checkSeals(
     }
 
     let plan = null;
+    let stock: StockApplied[] = [];
     if (reprocess.length > 0) {
       if (!can(role, 'cook'))
         throw forbidden('Reprocessing is recorded by a cook or a keeper. Put the jars in the fridge, or ask a cook.');
@@ -152,6 +154,8 @@ export async function checkSeals(
         { transaction },
       );
       await Jar.update({ processingId: again.id }, { where: { id: reprocess.map((j) => j.id) }, transaction });
+      // A reprocessed jar gets a new lid; the jar and band are the same (NCHFP; USDA Complete Guide, 2015).
+      stock = await takeForBatch(sequelize, household.id, batch, reprocess.length, 'reprocess', userId, transaction);
     }
 
     if (fridge.length > 0) {
@@ -190,7 +194,13 @@ export async function checkSeals(
       ],
       { transaction },
     );
-    return { sealed: sealed.length, toFridge: fridge.length, reprocessed: reprocess.length, plan };
+    return {
+      sealed: sealed.length,
+      toFridge: fridge.length,
+      reprocessed: reprocess.length,
+      plan,
+      stockWarnings: stock.flatMap((applied) => (applied.warning ? [applied.warning] : [])),
+    };
   });
   return { ...outcome, batch: await batchDetail(household, batchId) };
 }

@@ -1,5 +1,5 @@
 // How shelf rows look to the client: one place that turns models into the shared view shapes.
-import { bestQualityBy, defaultUseWithinDays, JAR_STATES, type JarState } from '../../../shared/domain';
+import { bestQualityBy, defaultUseWithinDays, JAR_STATES, mouthFor, type JarState } from '../../../shared/domain';
 import type { BatchView, JarView } from '../../../shared/schemas/batches';
 import type { ProductView } from '../../../shared/schemas/products';
 import { type ProductColour } from '../../../shared/words';
@@ -21,6 +21,7 @@ export function productView(product: Product): ProductView {
     jarSize: product.jarSize,
     colour: product.colour as ProductColour,
     notes: product.notes,
+    defaultPlaceId: product.defaultPlaceId ?? null,
   };
 }
 
@@ -63,6 +64,8 @@ export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnT
     useBy: jar.useBy,
     finishedOn: jar.finishedOn,
     discardedOn: jar.discardedOn,
+    givenOn: jar.givenOn ?? null,
+    givenTo: jar.givenTo ?? null,
     capacityTbsp: jar.capacityTbsp,
     remainingTbsp: jar.remainingTbsp,
     batchId: batch.id,
@@ -75,6 +78,8 @@ export function jarView(jar: Jar, batch: Batch, product: Product, clock: ReturnT
     productColour: product.colour,
     pastBestQuality: jar.state === 'sealed' && bestBy < clock.today,
     seal: jar.seal ?? 'checked',
+    placeId: jar.placeId ?? null,
+    placeName: jar.place?.name ?? null,
   };
 }
 
@@ -90,6 +95,7 @@ export function batchView(batch: Batch, product: Product, recipe: Recipe | null,
     recipeName: recipe?.name ?? null,
     cannedOn: batch.cannedOn,
     jarSize: batch.jarSize,
+    mouth: mouthFor(batch.jarSize, batch.mouth),
     jarsFilled: batch.jarsFilled,
     jarsSealed: batch.jarsSealed,
     method: batch.method,

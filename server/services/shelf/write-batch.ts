@@ -7,6 +7,7 @@ import {
   useBy,
   type JarSize,
   type Method,
+  type Mouth,
 } from '../../../shared/domain';
 import { Batch, BatchProcessing, Jar, JarEvent, type Household, type Product } from '../../db/models';
 import { newJarCode } from './jar-codes';
@@ -19,6 +20,7 @@ export interface BatchRecord {
   recipeId: string | null;
   cannedOn: string;
   jarSize: JarSize;
+  mouth?: Mouth | null;
   jarsFilled: number;
   jarsSealed: number;
   method: Method;

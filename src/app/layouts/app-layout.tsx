@@ -8,6 +8,8 @@ import { SetupBanner } from '@/features/households/components/setup-banner';
 import { HouseholdSwitcher } from '@/features/households/components/household-switcher';
 import { rememberHousehold, useCurrentHousehold } from '@/features/households/use-current-household';
 import { paths } from '@shared/paths';
+import { useHousehold } from '@/features/households/api/get-household';
+import { UnitSystemProvider } from '@/lib/units';
 
 // Not needed to draw the first screen, so it loads just after it.
 const OfflineBanner = lazy(() => import('./offline-banner').then((module) => ({ default: module.OfflineBanner })));
@@ -18,6 +20,7 @@ const linkClass = ({ isActive }: { isActive: boolean }) =>
 export function AppLayout() {
   const { hid, membership, me } = useCurrentHousehold();
   const logout = useLogout();
+  const household = useHousehold(hid);
   const navigate = useNavigate();
   const location = useLocation();
   // The "more" menu belongs to the page it was opened on, so it closes by itself on navigation.
@@ -77,7 +80,9 @@ export function AppLayout() {
             <OfflineBanner />
           </Suspense>
           <SetupBanner hid={hid} />
-          <Outlet />
+          <UnitSystemProvider system={household.data?.unitSystem ?? 'us'}>
+            <Outlet />
+          </UnitSystemProvider>
         </main>
       </div>
 

@@ -1,4 +1,4 @@
-import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { Link, useLocation, useParams, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
@@ -6,6 +6,7 @@ import { useCurrentHousehold } from '@/features/households/use-current-household
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { BatchDetailView } from '@/features/shelf/components/batch-detail';
 import { dateWords } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { paths } from '@shared/paths';
 
 export function BatchDetailRoute() {
@@ -13,6 +14,10 @@ export function BatchDetailRoute() {
   const { batchId = '' } = useParams();
   const [params] = useSearchParams();
   const batch = useBatch(hid, batchId);
+  // Said once, right after saving: the batch used more empty jars or new lids than were counted.
+  const stockWarnings = ((useLocation().state as { stockWarnings?: string[] } | null)?.stockWarnings ?? []).filter(
+    (w) => typeof w === 'string',
+  );
   return (
     <>
       <PageHeader
@@ -44,6 +49,16 @@ export function BatchDetailRoute() {
               </>
             )}
           </Notice>
+          {stockWarnings.length > 0 && (
+            <div className="mt-3">
+              <Notice tone="soon" title="Empty jars and lids">
+                {stockWarnings.join(' ')}{' '}
+                <Link to={paths.stock(hid)} className="font-bold text-action underline">
+                  {STOCK_WORDS.title}
+                </Link>
+              </Notice>
+            </div>
+          )}
         </div>
       )}
       {batch.error && (

@@ -1,5 +1,6 @@
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
+import { CautionLine } from '@/components/ui/caution-line';
 import { Notice } from '@/components/ui/notice';
 import { useBatch } from '@/features/shelf/api/get-batches';
 import { LabelSheet, type Paper } from '@/features/shelf/components/label-sheet';
@@ -22,6 +23,7 @@ export function BatchLabelsRoute() {
           <p className="text-ink-muted">
             One label a jar. Scanning a label opens the jar’s page to mark it opened, finished or discarded.
           </p>
+          <CautionLine about="best-quality" />
         </div>
         <div className="flex flex-wrap items-center gap-2">
           <div role="group" aria-label="Paper" className="flex rounded-lg border border-line bg-surface p-1">

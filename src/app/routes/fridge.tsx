@@ -65,8 +65,8 @@ export function FridgeRoute() {
               jar={jar}
               unsealedAdvice={fridge.data?.unsealedAdvice ?? ''}
               busy={closeJar.isSending}
-              onClose={(action) =>
-                closeJar.close({ id: jar.jarId, code: jar.code, productName: jar.productName }, action)
+              onClose={(action, kept) =>
+                closeJar.close({ id: jar.jarId, code: jar.code, productName: jar.productName }, action, kept)
               }
             />
           ))}

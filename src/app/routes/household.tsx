@@ -8,6 +8,7 @@ import { CalendarPanel } from '@/features/calendar';
 import { InvitationPanel } from '@/features/invitations/components/invitation-panel';
 import { NotificationSettingsPanel } from '@/features/notifications/components/notification-settings';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
+import { PlacesPanel } from '@/features/shelf/components/places-panel';
 
 const ROLE_NOTES = {
   keeper: 'As a keeper you manage members, roles and the household settings.',
@@ -40,6 +41,14 @@ export function HouseholdRoute() {
           ) : (
             <p className="text-ink-muted">Loading…</p>
           )}
+        </Card>
+        <Card>
+          <h2 className="mb-1 text-xl">Shelf places</h2>
+          <p className="mb-4 text-ink-muted">
+            Where the household keeps its jars. A product can have a usual place; the shelf and Today say where each jar
+            is.
+          </p>
+          <PlacesPanel hid={hid} canCook={can(role, 'cook')} />
         </Card>
         <Card>
           <h2 className="mb-1 text-xl">Notifications</h2>

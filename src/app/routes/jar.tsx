@@ -7,14 +7,18 @@ import { Card } from '@/components/ui/page';
 import { CautionLine } from '@/components/ui/caution-line';
 import { useJarByCode } from '@/features/shelf/api/get-jar-by-code';
 import { JarActions } from '@/features/shelf/components/jar-actions';
+import { MoveJar } from '@/features/shelf/components/move-jar';
 import { PutBackJar } from '@/features/shelf/components/put-back-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from '@/features/shelf/components/jar-badges';
-import { dateWords, jarSizeWords } from '@shared/words';
+import { dateWords } from '@shared/words';
 import { ReminderOffer } from '@/features/notifications/components/reminder-offer';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** What a label's QR code opens: the jar, found by its code in whichever household of yours holds it. */
+
 export function JarRoute() {
+  const units = useUnits();
   const { code = '' } = useParams();
   const found = useJarByCode(code);
   const jar = found.data?.jar;
@@ -45,7 +49,7 @@ export function JarRoute() {
             <p className="font-mono text-lg font-bold tracking-wider text-ink-muted">{jar.code}</p>
             <h1 className="text-3xl">{jar.productName}</h1>
             <p className="text-ink-muted">
-              {jarSizeWords(jar.jarSize)} jar, canned {dateWords(jar.cannedOn)}
+              {units.jarSize(jar.jarSize)} jar, canned {dateWords(jar.cannedOn)}
             </p>
           </div>
           <p className="flex flex-wrap items-center gap-2">
@@ -60,6 +64,7 @@ export function JarRoute() {
             <ReminderOffer about={`this jar’s use-by (${dateWords(jar.useBy)})`} />
           )}
           {jar.unsealed && jar.state === 'opened' && <Notice tone="soon">{UNSEALED_JAR_ADVICE}</Notice>}
+          <MoveJar hid={found.data.householdId} jar={jar} canMove={can(found.data.role, 'handleJars')} />
           <JarActions hid={found.data.householdId} jar={jar} size="large" />
           <PutBackJar
             hid={found.data.householdId}

@@ -1,13 +1,15 @@
 import { Link } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { jarSizeWords, METHOD_NAMES } from '@shared/words';
+import { METHOD_NAMES } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useRecipes } from '@/features/shelf/api/get-recipes';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 export function RecipesRoute() {
+  const units = useUnits();
   const { hid, role } = useCurrentHousehold();
   const recipes = useRecipes(hid);
   const canCook = can(role, 'cook');
@@ -47,7 +49,7 @@ export function RecipesRoute() {
                 <span className="text-lg font-bold">{recipe.name}</span>
                 <span className="text-ink-muted">for {recipe.productName}</span>
                 <span className="text-[0.95rem]">
-                  Makes {recipe.yieldJars} {jarSizeWords(recipe.yieldJarSize)} jars ·{' '}
+                  Makes {recipe.yieldJars} {units.jarSize(recipe.yieldJarSize)} jars ·{' '}
                   {METHOD_NAMES[recipe.method].toLowerCase()}
                 </span>
               </Link>

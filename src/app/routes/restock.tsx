@@ -1,6 +1,7 @@
 import { useEffect } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
+import { giftsThisYearWords } from '@shared/words/gifts';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
@@ -23,7 +24,7 @@ export function RestockRoute() {
     <>
       <PageHeader
         title="Restock"
-        lead="Favorites running low, and the batch that would carry you to the next harvest."
+        lead="Favorites to restock, and the batch that would carry you to the next harvest."
       />
       {restock.isError && (
         <Notice tone="past" role="alert" title="The restock list could not be loaded">
@@ -38,7 +39,7 @@ export function RestockRoute() {
               Restock suggestions
             </h2>
             {restock.data.suggestions.length === 0 ? (
-              <EmptyState title="Nothing is running low">
+              <EmptyState title="Nothing to restock">
                 Mark your favorites and set a minimum below; Larderly watches the count for you.
               </EmptyState>
             ) : (
@@ -60,7 +61,9 @@ export function RestockRoute() {
               Every product
             </h2>
             <p className="mb-3 max-w-prose text-ink-muted">
-              The rate is the larger of the last twelve weeks’ finished jars and the meals planned from today.
+              The rate is the larger of the last twelve weeks’ finished jars and the meals planned from today. Jars
+              given away are counted apart: they leave the shelf but do not raise the rate.{' '}
+              {giftsThisYearWords(restock.data.givenThisYear, Number(restock.data.today.slice(0, 4)))}
             </p>
             {restock.data.forecasts.length === 0 ? (
               <EmptyState title="No products yet">

@@ -1,16 +1,22 @@
 import { useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
-import { TextField } from '@/components/ui/field';
+import { giftsThisYearWords } from '@shared/words/gifts';
+import { SelectField, TextField } from '@/components/ui/field';
+import { CautionLine } from '@/components/ui/caution-line';
 import { Notice } from '@/components/ui/notice';
 import { EmptyState, PageHeader } from '@/components/ui/page';
 import { useCurrentHousehold } from '@/features/households/use-current-household';
 import { useJars } from '@/features/shelf/api/get-jars';
+import { usePlaces } from '@/features/shelf/api/get-places';
+import { useGifts } from '@/features/shelf/api/give-jar';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { ShelfCards } from '@/features/shelf/components/shelf-cards';
 import { ShelfTable } from '@/features/shelf/components/shelf-table';
 import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
 import { paths } from '@shared/paths';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
+import { STOCK_WORDS } from '@shared/words/stock';
 
 const VIEWS = [
   { id: 'cards', label: 'By product' },
@@ -24,15 +30,38 @@ export function ShelfRoute() {
   const { hid, role } = useCurrentHousehold();
   const jars = useJars(hid);
   const products = useProducts(hid);
-  const [params, setParams] = useSearchParams();
-  const view = params.get('view') === 'table' ? 'table' : 'cards';
-  const [text, setText] = useState('');
-
-  const rows = useMemo(() => shelfBatchRows(jars.data ?? [], products.data ?? []), [jars.data, products.data]);
-  const groups = useMemo(
-    () => shelfProductGroups(jars.data ?? [], products.data ?? [], rows),
-    [jars.data, products.data, rows],
+  const gifts = useGifts(hid);
+  const givenByProduct = useMemo(
+    () => new Map((gifts.data?.byProduct ?? []).map((entry) => [entry.productId, entry.jars])),
+    [gifts.data],
   );
+  const [params, setParams] = useSearchParams();
+  const places = usePlaces(hid);
+  const view = params.get('view') === 'table' ? 'table' : 'cards';
+  // The place filter lives in the address with the view, so a shared link shows the same shelf: '' every place, 'none'.
+  const place = params.get('place') ?? '';
+  const [text, setText] = useState('');
+  const setParam = (key: string, value: string) => {
+    const next = new URLSearchParams(params);
+    if (value) next.set(key, value);
+    else next.delete(key);
+    setParams(next, { replace: true });
+  };
+
+  const placed = useMemo(
+    () =>
+      place === ''
+        ? (jars.data ?? [])
+        : // An opened jar lives in the fridge, whatever shelf it came from: one place shows its sealed jars.
+          (jars.data ?? []).filter((jar) => jar.state === 'sealed' && (jar.placeId ?? 'none') === place),
+    [jars.data, place],
+  );
+  const rows = useMemo(() => shelfBatchRows(placed, products.data ?? []), [placed, products.data]);
+  const groups = useMemo(() => {
+    const all = shelfProductGroups(placed, products.data ?? [], rows);
+    // In one place, only the products kept there.
+    return place === '' ? all : all.filter((group) => group.sealed > 0);
+  }, [placed, products.data, rows, place]);
   const found = useMemo(() => searchShelf(rows, products.data ?? [], text), [rows, products.data, text]);
   const shownRows = found ? rows.filter((r) => found.batchIds.has(r.batchId)) : rows;
   const shownGroups = found ? groups.filter((g) => found.productIds.has(g.product.id)) : groups;
@@ -45,11 +74,14 @@ export function ShelfRoute() {
         title="Shelf"
         lead={
           jars.data
-            ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.`
+            ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.${gifts.data && gifts.data.jars > 0 ? ` ${giftsThisYearWords(gifts.data.jars, gifts.data.year)}` : ''}`
             : 'Every sealed jar, by product and batch, oldest first.'
         }
         actions={
           <>
+            <Link to={paths.stock(hid)} className={linkButton}>
+              {STOCK_WORDS.shopLink}
+            </Link>
             <a href={`/api/households/${hid}/shelf.csv`} download className={linkButton}>
               Export CSV
             </a>
@@ -86,7 +118,21 @@ export function ShelfRoute() {
         </EmptyState>
       ) : (
         <div className="flex flex-col gap-4">
+          <CautionLine about="best-quality" />
           <div className="flex flex-wrap items-end justify-between gap-3">
+            {(places.data?.length ?? 0) > 0 && (
+              <div className="w-full sm:w-56">
+                <SelectField label={PLACE_WORDS.name} value={place} onChange={(e) => setParam('place', e.target.value)}>
+                  <option value="">{PLACE_WORDS.everywhere}</option>
+                  {places.data!.map((p) => (
+                    <option key={p.id} value={p.id}>
+                      {p.name}
+                    </option>
+                  ))}
+                  <option value="none">{PLACE_WORDS.noneOnShelf}</option>
+                </SelectField>
+              </div>
+            )}
             <div className="w-full sm:w-96">
               <TextField
                 label="Search the shelf"
@@ -103,7 +149,7 @@ export function ShelfRoute() {
                   key={option.id}
                   type="button"
                   aria-pressed={view === option.id}
-                  onClick={() => setParams(option.id === 'cards' ? {} : { view: option.id }, { replace: true })}
+                  onClick={() => setParam('view', option.id === 'cards' ? '' : option.id)}
                   className={`min-h-11 rounded-md px-4 font-bold ${view === option.id ? 'bg-action text-white' : 'text-ink hover:bg-sunken'}`}
                 >
                   {option.label}
@@ -117,7 +163,13 @@ export function ShelfRoute() {
           {view === 'table' ? (
             <ShelfTable hid={hid} rows={shownRows} />
           ) : (
-            <ShelfCards hid={hid} groups={shownGroups} canHandleJars={can(role, 'handleJars')} canCook={canCook} />
+            <ShelfCards
+              hid={hid}
+              groups={shownGroups}
+              canHandleJars={can(role, 'handleJars')}
+              canCook={canCook}
+              givenThisYear={givenByProduct}
+            />
           )}
         </div>
       )}

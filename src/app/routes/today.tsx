@@ -1,3 +1,4 @@
+import { CautionLine } from '@/components/ui/caution-line';
 import { dateWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
 import { PageHeader } from '@/components/ui/page';
@@ -46,6 +47,8 @@ export function TodayRoute() {
           {view.sealChecks.length > 0 && (
             <TodaySection id="today-seals" title="Seal check">
               <SealChecks hid={hid} checks={view.sealChecks} />
+              {/* The cooling hours are a canning number: the card carries the canning line, as the batch page does. */}
+              <CautionLine about="canning" />
             </TodaySection>
           )}
           <TodaySection id="today-use" title="Open and use today" more={{ to: paths.week(hid), label: 'Week' }}>

@@ -8,7 +8,7 @@ export function PageHeader({ title, lead, actions }: { title: string; lead?: Rea
         <h1 className="text-2xl sm:text-3xl">{title}</h1>
         {lead && <p className="mt-1 max-w-prose text-ink-muted">{lead}</p>}
       </div>
-      {actions && <div className="flex gap-2">{actions}</div>}
+      {actions && <div className="flex flex-wrap gap-2">{actions}</div>}
     </header>
   );
 }

@@ -16,6 +16,8 @@ export interface ShelfBatchRow {
   bestBy: string;
   pastBestQuality: boolean;
   notes: string;
+  /** Where the batch's sealed jars are, by place name ('' for jars with no place), each name once. */
+  places: string;
 }
 
 export interface ShelfProductGroup {
@@ -38,6 +40,8 @@ export function shelfBatchRows(jars: JarView[], products: ProductView[]): ShelfB
     const row = rows.get(jar.batchId);
     if (row) {
       row.sealed += 1;
+      const names = row.places.split(', ');
+      if (!names.includes(jar.placeName ?? '')) row.places = [...names, jar.placeName ?? ''].filter(Boolean).join(', ');
       continue;
     }
     rows.set(jar.batchId, {
@@ -53,6 +57,7 @@ export function shelfBatchRows(jars: JarView[], products: ProductView[]): ShelfB
       bestBy: jar.bestBy,
       pastBestQuality: jar.pastBestQuality,
       notes: jar.batchNotes,
+      places: jar.placeName ?? '',
     });
   }
   return [...rows.values()].sort(

@@ -64,7 +64,7 @@ export const announcements: Announcements = {
     over
       ? `${sourceLabel(data<DragSource>(active))} was dropped on ${targetLabel(data<DropTarget>(over))}.`
       : `${sourceLabel(data<DragSource>(active))} was put back.`,
-  onDragCancel: ({ active }) => `Moving ${sourceLabel(data<DragSource>(active))} was cancelled; nothing changed.`,
+  onDragCancel: ({ active }) => `Moving ${sourceLabel(data<DragSource>(active))} was canceled; nothing changed.`,
 };
 
 export const screenReaderInstructions = {

@@ -29,9 +29,9 @@ export function useCloseJar(hid: string) {
     ...mutation,
     error: madeOffline ? null : mutation.error,
     isSending: mutation.isPending && !mutation.isPaused,
-    close: (jar: ActedJar, action: ClosingAction) => {
+    close: (jar: ActedJar, action: ClosingAction, kept?: boolean) => {
       setMadeOffline(!onlineManager.isOnline());
-      mutation.mutate(jarChange(hid, jar, action));
+      mutation.mutate(jarChange(hid, jar, action, kept));
     },
   };
 }

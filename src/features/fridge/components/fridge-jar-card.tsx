@@ -1,8 +1,10 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { count, countdown, dateWords, DATE_NAMES, JAR_ACTION_NAMES } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import type { FridgeJar } from '@shared/schemas/fridge';
 import { Button } from '@/components/ui/button';
+import { CheckboxField } from '@/components/ui/field';
 import { JarDrawing } from '@/components/ui/jar-drawing';
 import { CountdownBadge } from '@/components/ui/countdown-badge';
 import type { ClosingAction } from '../api/close-jar';
@@ -34,10 +36,11 @@ export function FridgeJarCard({
   canPlan: boolean;
   jar: FridgeJar;
   unsealedAdvice: string;
-  onClose: (action: ClosingAction) => void;
+  onClose: (action: ClosingAction, kept?: boolean) => void;
   busy: boolean;
 }) {
   const [confirmDiscard, setConfirmDiscard] = useState(false);
+  const [kept, setKept] = useState(true);
   const { tone } = countdown(jar.daysLeft);
   return (
     <li className="flex flex-col gap-3 rounded-card border border-line bg-surface p-4">
@@ -78,7 +81,15 @@ export function FridgeJarCard({
       {confirmDiscard ? (
         <div className="flex flex-wrap items-center gap-2" role="group" aria-label={`Discard jar ${jar.code}?`}>
           <span className="font-bold">Discard what is left of jar {jar.code}?</span>
-          <Button variant="danger" disabled={busy} onClick={() => onClose('discard')}>
+          <div className="w-full">
+            <CheckboxField
+              label={STOCK_WORDS.kept}
+              hint={STOCK_WORDS.keptHint}
+              checked={kept}
+              onChange={(e) => setKept(e.target.checked)}
+            />
+          </div>
+          <Button variant="danger" disabled={busy} onClick={() => onClose('discard', kept)}>
             Yes, discard
           </Button>
           <Button variant="secondary" onClick={() => setConfirmDiscard(false)}>

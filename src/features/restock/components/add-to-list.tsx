@@ -1,13 +1,14 @@
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
 import type { JarSize } from '@shared/domain';
-import { JAR_SIZE_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { ErrorWithAction } from '@/components/ui/error-with-action';
 import { useAddRestockTodo } from '../api/add-restock-todo';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** "Add a restock batch to the to-do list", with the jar count the cook may change. */
+
 export function AddToList({
   hid,
   productId,
@@ -21,6 +22,7 @@ export function AddToList({
   suggestedJars: number;
   jarSize: JarSize;
 }) {
+  const units = useUnits();
   const add = useAddRestockTodo(hid);
   const [jars, setJars] = useState(String(suggestedJars));
   const submit = (event: FormEvent) => {
@@ -40,7 +42,7 @@ export function AddToList({
   return (
     <form onSubmit={submit} className="flex flex-wrap items-end gap-3">
       <label className="flex flex-col gap-1">
-        <span className="text-sm font-bold">{JAR_SIZE_NAMES[jarSize]} jars</span>
+        <span className="text-sm font-bold">{units.jarSize(jarSize)} jars</span>
         <input
           type="number"
           inputMode="numeric"

@@ -1,12 +1,13 @@
 import type { RestockForecastView } from '@shared/schemas/restock';
-import { count, dateWords, JAR_SIZE_NAMES, tbspPerDay } from '@shared/words';
+import { count, dateWords } from '@shared/words';
 import { LazyUseChart } from './lazy-use-chart';
 import { RestockSettings } from './restock-settings';
+import { useUnits, type Units } from '@/lib/units';
 
-function runOutWords(forecast: RestockForecastView) {
+function runOutWords(forecast: RestockForecastView, units: Units) {
   if (forecast.dailyTbsp === 0) return 'Not eaten lately and nothing planned.';
   if (forecast.runOutOn === null) return 'Lasts well past next year at this rate.';
-  return `At ${tbspPerDay(forecast.dailyTbsp)}, runs out around ${dateWords(forecast.runOutOn)}.`;
+  return `At ${units.tbspPerDay(forecast.dailyTbsp)}, runs out around ${dateWords(forecast.runOutOn)}.`;
 }
 
 /** One product's rate, stock, run-out date and jar size advice, with its use chart. */
@@ -19,6 +20,7 @@ export function ForecastCard({
   forecast: RestockForecastView;
   canCook: boolean;
 }) {
+  const units = useUnits();
   const advice = forecast.jarSizeAdvice;
   return (
     <article
@@ -34,10 +36,17 @@ export function ForecastCard({
           {forecast.jarsOnHand > forecast.sealedJars && `, ${forecast.jarsOnHand - forecast.sealedJars} open`}
         </p>
       </div>
-      <p>{runOutWords(forecast)}</p>
+      <p>{runOutWords(forecast, units)}</p>
+      {forecast.givenThisYear > 0 && (
+        <p className="text-sm text-ink-muted">
+          {count(forecast.givenThisYear, 'jar')} given away this year
+          {forecast.givenJarsInHistory > 0 && `, ${forecast.givenJarsInHistory} in the last twelve weeks`}: counted
+          apart from what you ate.
+        </p>
+      )}
       <p className="text-sm text-ink-muted">
         {advice.size
-          ? `Jar size that gets finished within ${forecast.useWithinDays} days of opening: ${JAR_SIZE_NAMES[advice.size]}.`
+          ? `Jar size that gets finished within ${forecast.useWithinDays} days of opening: ${units.jarSize(advice.size)}.`
           : 'No jar size advice until it is eaten or planned.'}
         {advice.size && advice.cautions.map((caution) => ` ${caution}`)}
       </p>

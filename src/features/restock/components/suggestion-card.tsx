@@ -1,8 +1,9 @@
 import { Link } from 'react-router-dom';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
-import { dateWords, JAR_SIZE_NAMES } from '@shared/words';
+import { dateWords } from '@shared/words';
 import { AddToList } from './add-to-list';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 const REASON_TITLES = { 'runs-out-soon': 'Runs out soon', 'below-minimum': 'Below your minimum' } as const;
 
@@ -18,6 +19,7 @@ export function SuggestionCard({
   canCook: boolean;
   focused: boolean;
 }) {
+  const units = useUnits();
   return (
     <article
       id={`restock-${suggestion.productId}`}
@@ -31,7 +33,7 @@ export function SuggestionCard({
         </h3>
         <p>{suggestion.why}</p>
         <p className="text-ink-muted">
-          About {suggestion.suggestedJars} {JAR_SIZE_NAMES[suggestion.jarSize]} jars last until{' '}
+          About {suggestion.suggestedJars} {units.jarSize(suggestion.jarSize)} jars last until{' '}
           {dateWords(suggestion.lastsUntil)}, the end of the next harvest month.
         </p>
       </div>

@@ -7,17 +7,24 @@ import { changeKeys, householdKeys, shelfKeys } from '@/lib/query-keys';
 import { newChangeKey, queuedChangeDefaults, type QueuedChange } from '@/lib/queued-changes';
 import { useOfferJarUndo } from './undo-jar-change';
 
-export const actOnJar = (hid: string, jarId: string, action: JarAction, idempotencyKey?: string) =>
-  api.post<JarActed>(`/households/${hid}/jars/${jarId}/${action}`, {}, { idempotencyKey });
+/** A discard says whether the empty jar was kept for canning again; the server keeps it when nothing is said. */
+export const actOnJar = (hid: string, jarId: string, action: JarAction, idempotencyKey?: string, kept?: boolean) =>
+  api.post<JarActed>(
+    `/households/${hid}/jars/${jarId}/${action}`,
+    action === 'discard' && kept !== undefined ? { kept } : {},
+    { idempotencyKey },
+  );
 
 /** Opening, finishing or discarding one jar: made at once, sent when the network allows. */
 export interface JarChange extends QueuedChange {
   jarId: string;
   action: JarAction;
+  /** A discard: whether the empty jar goes back to the household's empty jars. */
+  kept?: boolean;
 }
 
 export const jarChangeDefaults = queuedChangeDefaults((change: JarChange) =>
-  actOnJar(change.hid, change.jarId, change.action, change.key),
+  actOnJar(change.hid, change.jarId, change.action, change.key, change.kept),
 );
 
 const DOING: Record<JarAction, string> = { open: 'Opening', finish: 'Finishing', discard: 'Discarding' };
@@ -25,12 +32,13 @@ const DOING: Record<JarAction, string> = { open: 'Opening', finish: 'Finishing',
 /** The jar the person acts on, as the words of a refusal name it. */
 export type ActedJar = Pick<JarView, 'id' | 'code' | 'productName'>;
 
-export function jarChange(hid: string, jar: ActedJar, action: JarAction): JarChange {
+export function jarChange(hid: string, jar: ActedJar, action: JarAction, kept?: boolean): JarChange {
   return {
     hid,
     key: newChangeKey(),
     jarId: jar.id,
     action,
+    ...(action === 'discard' && kept !== undefined ? { kept } : {}),
     what: `${DOING[action]} jar ${jar.code} of ${jar.productName}`,
   };
 }
@@ -60,9 +68,9 @@ export function useActOnJar(hid: string) {
     error: madeOffline ? null : mutation.error,
     /** Busy only while a change is on its way; one waiting for the network leaves the buttons free. */
     isSending: mutation.isPending && !mutation.isPaused,
-    act: (jar: ActedJar, action: JarAction, options?: { onSuccess?: () => void }) => {
+    act: (jar: ActedJar, action: JarAction, options?: { onSuccess?: () => void; kept?: boolean }) => {
       setMadeOffline(!onlineManager.isOnline());
-      mutation.mutate(jarChange(hid, jar, action), options);
+      mutation.mutate(jarChange(hid, jar, action, options?.kept), { onSuccess: options?.onSuccess });
     },
   };
 }

@@ -1,17 +1,18 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
 import { dateWords } from '@shared/words';
+import { GIFT_WORDS } from '@shared/words/gifts';
 import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
 import { useUndoToast } from '@/components/ui/undo-toast';
 import { api } from '@/lib/api-client';
 import { householdKeys, shelfKeys } from '@/lib/query-keys';
 
-/** Reverses one open, finish or discard on the server; the jar's history keeps both. */
+/** Reverses one open, finish, discard or gift on the server; the jar's history keeps both. */
 export const undoJarChange = (hid: string, jarId: string, eventId: string) =>
   api.post<JarActed>(`/households/${hid}/jars/${jarId}/undo`, { eventId });
 
 /** Every view of a jar sits under the household, and a label's page under its code. */
-function useRefreshJarViews(hid: string) {
+export function useRefreshJarViews(hid: string) {
   const queryClient = useQueryClient();
   return useCallback(
     () =>
@@ -23,7 +24,7 @@ function useRefreshJarViews(hid: string) {
   );
 }
 
-/** A jar page's "Put back": a cook reverses a finish or discard, however long ago. */
+/** A jar page's "Put back": a cook reverses a finish, discard or gift, however long ago. */
 export function usePutBackJar(hid: string) {
   const refresh = useRefreshJarViews(hid);
   return useMutation({
@@ -36,8 +37,13 @@ export const whereJarIs = (jar: Pick<JarView, 'state'>) =>
   jar.state === 'opened' ? 'back in the fridge' : 'back on the shelf, sealed';
 
 /** What the toast says: which jar, and where it went. */
-export function jarActionWords(action: JarAction, jar: Pick<JarView, 'code' | 'productName' | 'useBy'>): string {
+export function jarActionWords(
+  action: JarAction | 'give',
+  jar: Pick<JarView, 'code' | 'productName' | 'useBy'> & { givenTo?: string | null },
+): string {
   const which = `jar ${jar.code} of ${jar.productName}`;
+  if (action === 'give')
+    return `${GIFT_WORDS.ended}: ${which}${jar.givenTo ? ` to ${jar.givenTo}` : ''}. It has left the shelf.`;
   if (action === 'open')
     return `Opened ${which}. It is in the fridge now${jar.useBy ? `; use by ${dateWords(jar.useBy)}` : ''}.`;
   if (action === 'finish') return `Finished ${which}. It has left the fridge.`;
@@ -49,7 +55,7 @@ export function useOfferJarUndo(hid: string) {
   const offer = useUndoToast();
   const refresh = useRefreshJarViews(hid);
   return useCallback(
-    (action: JarAction, acted: JarActed) =>
+    (action: JarAction | 'give', acted: JarActed) =>
       offer({
         message: jarActionWords(action, acted.jar),
         undo: async () => {

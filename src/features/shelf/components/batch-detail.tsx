@@ -1,23 +1,17 @@
 import { Link } from 'react-router-dom';
 import type { BatchDetail } from '@shared/schemas/batches';
-import {
-  altitudeWords,
-  clockWords,
-  count,
-  dateWords,
-  headspaceWords,
-  jarSizeWords,
-  METHOD_NAMES,
-  minutesWords,
-  pressureWords,
-} from '@shared/words';
+import { clockWords, count, dateWords, METHOD_NAMES, minutesWords } from '@shared/words';
+import { placeMoveWords } from '@shared/words/shelf-places';
+import { MOUTH_LABELS } from '@shared/words/stock';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { BatchPhoto } from './batch-photo';
 import { SealCheckPanel } from './seal-check-panel';
 import { JarActions } from './jar-actions';
+import { MoveJarsForm } from './move-jar';
 import { JarDates, JarStateBadge, PastBestBadge } from './jar-badges';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 const EVENT_WORDS: Record<string, string> = {
   filled: 'filled',
@@ -27,13 +21,16 @@ const EVENT_WORDS: Record<string, string> = {
   opened: 'opened',
   finished: 'finished',
   discarded: 'discarded',
+  given: 'given away',
   restored: 'put back (the change before was undone)',
+  moved: 'moved',
 };
 
 export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: BatchDetail; canCook: boolean }) {
+  const units = useUnits();
   const processing =
     batch.pressurePsi !== null
-      ? `${minutesWords(batch.minutes!)} at ${pressureWords(batch.pressurePsi)}`
+      ? `${minutesWords(batch.minutes!)} at ${units.pressure(batch.pressurePsi)}`
       : batch.minutes !== null
         ? minutesWords(batch.minutes)
         : 'time not recorded';
@@ -47,19 +44,21 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             <dd className="tabular">{dateWords(batch.cannedOn)}</dd>
             <dt className="text-ink-muted">Jars</dt>
             <dd className="tabular">
-              {batch.jarsFilled} {jarSizeWords(batch.jarSize)} filled,{' '}
+              {batch.jarsFilled} {units.jarSize(batch.jarSize)} filled,{' '}
               {batch.sealCheck
                 ? `${batch.jarsFilled - batch.jars.filter((j) => j.state === 'opened' && j.unsealed).length - batch.sealCheck.jarIds.length} sealed, ${batch.sealCheck.jarIds.length} to check`
                 : `${batch.jarsSealed} sealed`}
             </dd>
+            <dt className="text-ink-muted">Lids</dt>
+            <dd>{MOUTH_LABELS[batch.mouth]}</dd>
             <dt className="text-ink-muted">Processing</dt>
             <dd>
-              {METHOD_NAMES[batch.method]}, {processing} at {altitudeWords(batch.altitudeFt)}
+              {METHOD_NAMES[batch.method]}, {processing} at {units.altitude(batch.altitudeFt)}
             </dd>
             {batch.headspaceInches !== null && (
               <>
                 <dt className="text-ink-muted">Headspace</dt>
-                <dd>{headspaceWords(batch.headspaceInches)}</dd>
+                <dd>{units.headspace(batch.headspaceInches)}</dd>
               </>
             )}
             <dt className="text-ink-muted">Recipe</dt>
@@ -85,8 +84,8 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                     {p.number === 1 ? 'First' : 'Reprocess'}: {count(p.jars, 'jar')},{' '}
                     {clockWords(p.processedAt, batch.timeZone)}, {METHOD_NAMES[p.method]}
                     {p.minutes !== null ? `, ${minutesWords(p.minutes)}` : ''}
-                    {p.pressurePsi !== null ? ` at ${pressureWords(p.pressurePsi)}` : ''} at{' '}
-                    {altitudeWords(p.altitudeFt)}
+                    {p.pressurePsi !== null ? ` at ${units.pressure(p.pressurePsi)}` : ''} at{' '}
+                    {units.altitude(p.altitudeFt)}
                     {p.number > 1 ? ', new lids' : ''}
                     {p.who ? ` by ${p.who}` : ''}
                   </li>
@@ -125,12 +124,16 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
                   </p>
                   <p className="text-sm text-ink-muted">
                     <JarDates jar={jar} />
+                    {jar.placeName && jar.state === 'sealed' ? ` · ${jar.placeName}` : ''}
                   </p>
                 </div>
                 <JarActions hid={hid} jar={jar} />
               </li>
             ))}
           </ul>
+          <div className="mt-3">
+            <MoveJarsForm hid={hid} jars={batch.jars} buttonLabel="Move these jars" />
+          </div>
         </Card>
       </div>
       <div className="flex flex-col gap-5">
@@ -144,7 +147,9 @@ export function BatchDetailView({ hid, batch, canCook }: { hid: string; batch: B
             {batch.history.map((event) => (
               <li key={event.id} className="tabular">
                 <span className="text-ink-muted">{dateWords(event.happenedOn)}</span> · jar{' '}
-                <span className="font-mono">{event.jarCode}</span> {EVENT_WORDS[event.kind] ?? event.kind}
+                <span className="font-mono">{event.jarCode}</span>{' '}
+                {event.placeMove ? placeMoveWords(event.placeMove) : (EVENT_WORDS[event.kind] ?? event.kind)}
+                {event.kind === 'given' && event.givenTo ? ` to ${event.givenTo}` : ''}
                 {event.who ? ` by ${event.who}` : ''}
               </li>
             ))}

@@ -1,10 +1,12 @@
 import { Link } from 'react-router-dom';
 import type { BatchView } from '@shared/schemas/batches';
-import { dateWords, jarSizeWords, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
+import { dateWords, METHOD_NAMES, minutesWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }) {
+  const units = useUnits();
   return (
     <div className="flex flex-col gap-3">
       <CautionLine about="canning" />
@@ -18,10 +20,10 @@ export function BatchLog({ hid, batches }: { hid: string; batches: BatchView[] }
               <div>
                 <p className="text-lg font-bold">{batch.productName}</p>
                 <p className="tabular text-ink-muted">
-                  {dateWords(batch.cannedOn)} · {batch.jarsFilled} {jarSizeWords(batch.jarSize)} jars ·{' '}
+                  {dateWords(batch.cannedOn)} · {batch.jarsFilled} {units.jarSize(batch.jarSize)} jars ·{' '}
                   {METHOD_NAMES[batch.method].toLowerCase()}
                   {batch.minutes !== null ? `, ${minutesWords(batch.minutes)}` : ''}
-                  {batch.pressurePsi !== null ? ` at ${pressureWords(batch.pressurePsi, true)}` : ''}
+                  {batch.pressurePsi !== null ? ` at ${units.pressure(batch.pressurePsi, true)}` : ''}
                 </p>
               </div>
               <p className="tabular flex flex-wrap gap-3 text-[0.95rem]">

@@ -3,8 +3,9 @@ import type { ImportProblem, ImportRow } from '@shared/schemas/batches';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCommitImport, usePreviewImport } from '../api/import-batches';
-import { dateWords, jarSizeWords } from '@shared/words';
+import { dateWords } from '@shared/words';
 import { CSV_IMPORT_COLUMNS, csvChoiceList } from '@shared/words/csv';
+import { useUnits } from '@/lib/units';
 
 const EXAMPLE = 'product,recipe,canned_on,jar_size,jars_filled,jars_sealed,method,minutes,notes';
 const NEEDED = {
@@ -39,6 +40,7 @@ function ImportColumns() {
 
 /** Choose a file, see every row checked, then write all of it or none of it. */
 export function CsvImport({ hid }: { hid: string }) {
+  const units = useUnits();
   const [csv, setCsv] = useState<string | null>(null);
   const [fileName, setFileName] = useState('');
   const preview = usePreviewImport(hid);
@@ -114,7 +116,7 @@ export function CsvImport({ hid }: { hid: string }) {
                   <td className="px-3 py-2">{row.productName}</td>
                   <td className="px-3 py-2">{dateWords(row.cannedOn)}</td>
                   <td className="px-3 py-2">
-                    {row.jarsFilled} {jarSizeWords(row.jarSize)}
+                    {row.jarsFilled} {units.jarSize(row.jarSize)}
                   </td>
                   <td className="px-3 py-2">{row.jarsSealed}</td>
                   <td className="px-3 py-2">{row.minutes ?? '—'}</td>

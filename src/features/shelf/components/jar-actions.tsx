@@ -1,9 +1,12 @@
 import type { JarAction, JarView } from '@shared/schemas/batches';
 import { JAR_ACTION_NAMES } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { Button } from '@/components/ui/button';
+import { CheckboxField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { useState } from 'react';
 import { useActOnJar } from '../api/act-on-jar';
+import { GiveJar } from './give-jar';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 
 const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> = {
@@ -17,12 +20,15 @@ const ACTIONS: Record<JarView['state'], { action: JarAction; label: string }[]> 
   ],
   finished: [],
   discarded: [],
+  given: [],
 };
 
-/** The three things any member may do with a jar; a 409 says someone else got there first. */
+/** What any member may do with a jar (a sealed one may also be given away); a 409 says someone else got there first. */
 export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: JarView; size?: 'normal' | 'large' }) {
   const act = useActOnJar(hid);
   const [justOpened, setJustOpened] = useState<OpenableJar | null>(null);
+  const [confirmDiscard, setConfirmDiscard] = useState(false);
+  const [kept, setKept] = useState(true);
   const choices = ACTIONS[jar.state];
   if (choices.length === 0) return null;
   return (
@@ -46,20 +52,43 @@ export function JarActions({ hid, jar, size = 'normal' }: { hid: string; jar: Ja
               className={`${size === 'large' ? 'min-h-14 px-6 text-lg' : ''} ${action === 'discard' && size !== 'large' ? 'text-past' : ''}`}
               disabled={act.isSending}
               aria-label={`${label}: jar ${jar.code}`}
-              onClick={() => {
-                if (
-                  action === 'discard' &&
-                  !window.confirm(`Discard jar ${jar.code} of ${jar.productName}? When in doubt, throw it out.`)
-                )
-                  return;
-                act.act(jar, action);
-              }}
+              onClick={() => (action === 'discard' ? setConfirmDiscard(true) : act.act(jar, action))}
             >
               {label}
             </Button>
           ),
         )}
+        {jar.state === 'sealed' && jar.seal === 'checked' && <GiveJar hid={hid} jar={jar} size={size} />}
       </div>
+      {confirmDiscard && (
+        <div
+          className="flex flex-col gap-3 rounded-lg border border-line bg-sunken p-3"
+          role="group"
+          aria-label={`Discard jar ${jar.code}?`}
+        >
+          <p className="font-bold">
+            Discard jar {jar.code} of {jar.productName}? When in doubt, throw it out.
+          </p>
+          <CheckboxField
+            label={STOCK_WORDS.kept}
+            hint={STOCK_WORDS.keptHint}
+            checked={kept}
+            onChange={(e) => setKept(e.target.checked)}
+          />
+          <div className="flex flex-wrap gap-2">
+            <Button
+              variant="danger"
+              disabled={act.isSending}
+              onClick={() => act.act(jar, 'discard', { kept, onSuccess: () => setConfirmDiscard(false) })}
+            >
+              Yes, discard
+            </Button>
+            <Button variant="secondary" onClick={() => setConfirmDiscard(false)}>
+              Not now
+            </Button>
+          </div>
+        </div>
+      )}
       {justOpened && <OpeningChecks code={justOpened.code} productName={justOpened.productName} />}
       {act.error && (
         <Notice tone="past" role="alert">

@@ -1,6 +1,7 @@
 import { ReasonToggle } from '@/components/ui/reason-toggle';
 import type { JarView } from '@shared/schemas/batches';
 import { DATE_NAMES, dateWords, JAR_STATE_NAMES, SEAL_TO_CHECK_NAME, UNSEALED_STATE_NAME } from '@shared/words';
+import { givenWords } from '@shared/words/gifts';
 
 export function PastBestBadge({ bestBy }: { bestBy: string }) {
   return (
@@ -18,6 +19,7 @@ const STATE_STYLE: Record<JarView['state'], string> = {
   opened: 'bg-info-soft text-info',
   finished: 'bg-sunken text-ink-muted',
   discarded: 'bg-sunken text-ink-muted line-through',
+  given: 'bg-sunken text-ink',
 };
 
 export function JarStateBadge({ jar }: { jar: Pick<JarView, 'state' | 'unsealed'> & { seal?: JarView['seal'] } }) {
@@ -52,6 +54,7 @@ export function JarDates({ jar }: { jar: JarView }) {
         {DATE_NAMES.opened} {dateWords(jar.openedOn!)} · {DATE_NAMES.useBy.toLowerCase()} {dateWords(jar.useBy!)}
       </span>
     );
+  if (jar.state === 'given') return <span>{givenWords(dateWords(jar.givenOn!), jar.givenTo)}</span>;
   if (jar.state === 'finished') return <span className="tabular">Finished {dateWords(jar.finishedOn!)}</span>;
   return <span className="tabular">Discarded {dateWords(jar.discardedOn!)}</span>;
 }

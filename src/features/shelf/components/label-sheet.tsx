@@ -1,7 +1,7 @@
 import QRCode from 'qrcode';
 import { useEffect, useState } from 'react';
 import type { BatchDetail, JarView } from '@shared/schemas/batches';
-import { dateWords, DATE_NAMES } from '@shared/words';
+import { DATE_NAMES, labelDateWords } from '@shared/words';
 import { usePublicConfig } from '@/lib/public-config';
 
 export type Paper = 'a4' | 'letter';
@@ -47,11 +47,12 @@ function JarLabel({ jar, origin }: { jar: JarView; origin: string | null }) {
       )}
       <span className="flex min-w-0 flex-col gap-0.5 leading-tight">
         <span className="line-clamp-2 font-bold">{jar.productName}</span>
-        <span className="tabular whitespace-nowrap">
-          {DATE_NAMES.canned} {dateWords(jar.cannedOn)}
+        {/* A date's name may wrap above it on a narrow label; the date itself stays on one line. */}
+        <span className="tabular">
+          {DATE_NAMES.canned} <span className="whitespace-nowrap">{labelDateWords(jar.cannedOn)}</span>
         </span>
-        <span className="tabular whitespace-nowrap">
-          {DATE_NAMES.bestQuality} {dateWords(jar.bestBy)}
+        <span className="tabular">
+          {DATE_NAMES.bestQuality} <span className="whitespace-nowrap">{labelDateWords(jar.bestBy)}</span>
         </span>
         <span className="font-mono font-bold tracking-wider">{jar.code}</span>
       </span>

@@ -1,21 +1,34 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { recipeProcessingPlan } from '@shared/processing-plan';
-import { JAR_SIZES, PROCESSING_METHODS, UNSEALED_JAR_ADVICE, type JarSize, type Method } from '@shared/domain';
+import {
+  JAR_SIZES,
+  MOUTHS,
+  mouthFor,
+  PROCESSING_METHODS,
+  UNSEALED_JAR_ADVICE,
+  type JarSize,
+  type Method,
+  type Mouth,
+} from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
 import { calendarDateIn } from '@shared/time-zones';
 import { jarSizeWords, METHOD_NAMES, SEALS_CHOICE } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
+import { MOUTH_LABELS } from '@shared/words/stock';
 import { FormFooter } from '@/components/ui/form-footer';
 import { ChoiceCard, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useFocusFirstError } from '@/lib/focus-first-error';
 import { useCreateBatch } from '../api/create-batch';
+import { usePlaces } from '../api/get-places';
 import { numberFrom } from '../number-from';
 import { PlanPanel } from './plan-panel';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** The household's today, as YYYY-MM-DD: the canning day the server checks against. */
 
@@ -23,6 +36,7 @@ import { paths } from '@shared/paths';
  * The day's work in order: what, which tested recipe, when, which jars, how many sealed, which canner.
  * The draft lives in the address (the pre-fill parameters), so a reload or a shared link keeps it.
  */
+
 export function NewBatchForm({
   household,
   products,
@@ -32,9 +46,11 @@ export function NewBatchForm({
   products: ProductView[];
   recipes: RecipeView[];
 }) {
+  const units = useUnits();
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const create = useCreateBatch(household.id);
+  const places = usePlaces(household.id);
   const [notes, setNotes] = useState('');
   const error = create.error instanceof ApiError ? create.error : null;
   const formRef = useFocusFirstError(error);
@@ -48,6 +64,11 @@ export function NewBatchForm({
   const jarSize = (JAR_SIZES as readonly string[]).includes(params.get('jarSize') ?? '')
     ? (params.get('jarSize') as JarSize)
     : (testedSizes[0] ?? product?.jarSize ?? 'half-pint');
+  // A jar's mouth is the jar's; the size's usual one until the cook says (it decides which lids the batch takes).
+  const mouth = mouthFor(
+    jarSize,
+    (MOUTHS as readonly string[]).includes(params.get('mouth') ?? '') ? (params.get('mouth') as Mouth) : null,
+  );
   const method = (PROCESSING_METHODS as readonly string[]).includes(params.get('method') ?? '')
     ? (params.get('method') as Method)
     : (recipe?.method ?? household.defaultMethod);
@@ -57,6 +78,9 @@ export function NewBatchForm({
   const cannedOn = params.get('date') ?? today;
   // Seals left to check only for a batch processed today; an earlier day's seals are checked already.
   const seals = params.get('seals') === 'to-check' && cannedOn === today ? 'to-check' : 'checked';
+
+  // Where the jars go: the product's usual place unless the cook chose another ('none': no place).
+  const place = params.get('place') ?? product?.defaultPlaceId ?? 'none';
 
   const plan = recipe ? recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
   const filled = numberFrom(jarsText);
@@ -84,15 +108,19 @@ export function NewBatchForm({
         recipeId: recipe.id,
         cannedOn,
         jarSize,
+        mouth,
         jarsFilled: filled,
         jarsSealed: seals === 'to-check' ? filled : sealed,
         method,
         notes,
         seals,
+        placeId: place === 'none' ? null : place,
       },
       {
         onSuccess: (created) =>
-          navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') })),
+          navigate(paths.batch(household.id, created.batch.id, { saved: true, todoId: params.get('todoId') }), {
+            state: { stockWarnings: created.stockWarnings },
+          }),
       },
     );
   }
@@ -103,7 +131,7 @@ export function NewBatchForm({
         <SelectField
           label="What did you make?"
           value={productId}
-          onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null })}
+          onChange={(e) => set({ productId: e.target.value, recipeId: null, jarSize: null, method: null, place: null })}
           error={error?.fields.productId}
         >
           <option value="">Choose a product</option>
@@ -145,17 +173,30 @@ export function NewBatchForm({
           onChange={(e) => set({ date: e.target.value })}
           error={error?.fields.cannedOn}
         />
-        <div className="grid gap-4 sm:grid-cols-3">
+        <div className="grid gap-4 sm:grid-cols-2">
           <SelectField
             label="Jar size"
             value={jarSize}
-            onChange={(e) => set({ jarSize: e.target.value })}
+            onChange={(e) => set({ jarSize: e.target.value, mouth: null })}
             error={error?.fields.jarSize}
           >
             {JAR_SIZES.map((size) => (
               <option key={size} value={size}>
-                {jarSizeWords(size)}
+                {units.jarSize(size)}
                 {recipe && !testedSizes.includes(size) ? ' (no tested time)' : ''}
+              </option>
+            ))}
+          </SelectField>
+          <SelectField
+            label="Jar mouth"
+            value={mouth}
+            onChange={(e) => set({ mouth: e.target.value === mouthFor(jarSize) ? null : e.target.value })}
+            error={error?.fields.mouth}
+            hint={`Which lids the jars take; ${MOUTH_LABELS[mouthFor(jarSize)].toLowerCase()} is the usual for ${jarSizeWords(jarSize)} jars (common practice).`}
+          >
+            {MOUTHS.map((m) => (
+              <option key={m} value={m}>
+                {MOUTH_LABELS[m]}
               </option>
             ))}
           </SelectField>
@@ -211,6 +252,24 @@ export function NewBatchForm({
             </option>
           ))}
         </SelectField>
+        {(places.data?.length ?? 0) > 0 && (
+          <SelectField
+            label={PLACE_WORDS.batchPlace}
+            value={place}
+            onChange={(e) => set({ place: e.target.value })}
+            error={error?.fields.placeId}
+            hint={
+              product?.defaultPlaceId && place === product.defaultPlaceId ? `${product.name}’s usual place.` : undefined
+            }
+          >
+            <option value="none">{PLACE_WORDS.none}</option>
+            {places.data!.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
+          </SelectField>
+        )}
         <TextAreaField
           label="Notes"
           value={notes}
@@ -224,7 +283,7 @@ export function NewBatchForm({
         ) : (
           <Notice tone="info" title="The processing plan appears here">
             Choose the product and its tested recipe; the plan is worked out for your altitude,{' '}
-            {household.altitudeFt.toLocaleString('en-US')} ft.
+            {units.altitude(household.altitudeFt)}.
           </Notice>
         )}
       </div>

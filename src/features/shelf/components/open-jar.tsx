@@ -3,6 +3,7 @@ import { useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
 import type { JarView, OpeningAdvice } from '@shared/schemas/batches';
 import { dateWords, OPENING_CHECKS, OPENING_CHECKS_SOURCE } from '@shared/words';
+import { placeWords } from '@shared/words/shelf-places';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useActOnJar } from '../api/act-on-jar';
@@ -123,7 +124,8 @@ function AdvicePanel({
       {oldest && (
         <p>
           Jar {oldest.code} was canned {dateWords(oldest.cannedOn)}
-          {oldest.pastBestQuality ? ', and is past its best quality' : ''}: the oldest is the one to eat first
+          {oldest.pastBestQuality ? ', and is past its best quality' : ''}
+          {oldest.placeName ? `; it is ${placeWords(oldest.placeName)}` : ''}: the oldest is the one to eat first
           {advice.olderSealed.length > 1 ? ` (${advice.olderSealed.length} older jars in all)` : ''}.
         </p>
       )}

@@ -1,17 +1,20 @@
 import type { Method, ProcessingPlan } from '@shared/domain';
-import { altitudeWords, BEFORE_YOU_START, METHOD_NAMES, minutesWords, pressureWords } from '@shared/words';
+import { BEFORE_YOU_START, METHOD_NAMES, minutesWords } from '@shared/words';
 import { Notice } from '@/components/ui/notice';
+import { useUnits, type Units } from '@/lib/units';
 
 /** The processing plan with its cautions first: the canning numbers are never shown without them, nor before them. */
+
 export function PlanPanel({ plan, method, altitudeFt }: { plan: ProcessingPlan; method: Method; altitudeFt: number }) {
+  const units = useUnits();
   return (
     <section aria-labelledby="plan-heading" aria-live="polite" className="flex flex-col gap-3">
       <h2 id="plan-heading" className="text-xl">
-        Processing plan at {altitudeWords(altitudeFt)}
+        Processing plan at {units.altitude(altitudeFt)}
       </h2>
       <Cautions cautions={plan.cautions} />
       {plan.allowed ? (
-        <Notice tone="action" title={headline(plan, method)}>
+        <Notice tone="action" title={headline(plan, method, units)}>
           <p>
             {METHOD_NAMES[method]}.
             {plan.altitudeAddMinutes ? ` Includes ${plan.altitudeAddMinutes} minutes added for your altitude.` : ''}
@@ -40,8 +43,8 @@ export function PlanPanel({ plan, method, altitudeFt }: { plan: ProcessingPlan; 
   );
 }
 
-function headline(plan: ProcessingPlan, method: Method): string {
-  if (plan.pressurePsi !== null) return `Process ${minutesWords(plan.minutes!)} at ${pressureWords(plan.pressurePsi)}`;
+function headline(plan: ProcessingPlan, method: Method, units: Units): string {
+  if (plan.pressurePsi !== null) return `Process ${minutesWords(plan.minutes!)} at ${units.pressure(plan.pressurePsi)}`;
   return `Process ${minutesWords(plan.minutes!)}${method === 'atmospheric-steam' ? ' in full steam' : ' at a full rolling boil'}`;
 }
 

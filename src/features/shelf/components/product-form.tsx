@@ -5,27 +5,31 @@ import type { ProductView } from '@shared/schemas/products';
 import {
   HEAT_LEVELS,
   heatWords,
-  jarSizeWords,
   PRODUCT_COLOUR_NAMES,
   PRODUCT_COLOURS,
   PRODUCT_KIND_NAMES,
   type ProductColour,
   USE_WITHIN_DEFAULT_HINT,
 } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import { FormFooter } from '@/components/ui/form-footer';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { ApiError } from '@/lib/api-client';
 import { useFocusFirstError } from '@/lib/focus-first-error';
+import { usePlaces } from '../api/get-places';
 import { useSaveProduct } from '../api/save-product';
 import { numberFrom } from '../number-from';
 import { ColourDot } from './colour-dot';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 export function ProductForm({ hid, product }: { hid: string; product?: ProductView }) {
+  const units = useUnits();
   const save = useSaveProduct(hid, product?.id);
   const navigate = useNavigate();
+  const places = usePlaces(hid);
   const [form, setForm] = useState({
     name: product?.name ?? '',
     kind: (product?.kind ?? 'relish') as ProductKind,
@@ -37,6 +41,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
     jarSize: (product?.jarSize ?? 'half-pint') as JarSize,
     colour: (product?.colour ?? 'honey') as ProductColour,
     notes: product?.notes ?? '',
+    defaultPlaceId: product?.defaultPlaceId ?? '',
   });
   const error = save.error instanceof ApiError ? save.error : null;
   const formRef = useFocusFirstError(error);
@@ -55,6 +60,7 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
         jarSize: form.jarSize,
         colour: form.colour,
         notes: form.notes,
+        defaultPlaceId: form.defaultPlaceId || null,
       },
       { onSuccess: () => navigate(paths.shelf(hid)) },
     );
@@ -124,7 +130,21 @@ export function ProductForm({ hid, product }: { hid: string; product?: ProductVi
       >
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
-            {jarSizeWords(size)}
+            {units.jarSize(size)}
+          </option>
+        ))}
+      </SelectField>
+      <SelectField
+        label={PLACE_WORDS.defaultPlace}
+        value={form.defaultPlaceId}
+        onChange={(e) => setForm({ ...form, defaultPlaceId: e.target.value })}
+        error={error?.fields.defaultPlaceId}
+        hint={PLACE_WORDS.defaultPlaceHint}
+      >
+        <option value="">{PLACE_WORDS.none}</option>
+        {(places.data ?? []).map((place) => (
+          <option key={place.id} value={place.id}>
+            {place.name}
           </option>
         ))}
       </SelectField>

@@ -4,9 +4,9 @@ import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { usePutBackJar, whereJarIs } from '../api/undo-jar-change';
 
-const WORDS: Record<string, string> = { finished: 'Finished', discarded: 'Discarded' };
+const WORDS: Record<string, string> = { finished: 'Finished', discarded: 'Discarded', given: 'Given away' };
 
-/** A finished or discarded jar's way back: cooks and keepers put it back, and its history keeps both changes. */
+/** A finished, discarded or given jar's way back: cooks and keepers put it back, and its history keeps both changes. */
 export function PutBackJar({
   hid,
   jar,
@@ -23,7 +23,7 @@ export function PutBackJar({
     return (
       <Notice tone="action" role="status" title={`Jar ${putBack.data.jar.code} is ${whereJarIs(putBack.data.jar)}.`} />
     );
-  if (jar.state !== 'finished' && jar.state !== 'discarded') return null;
+  if (jar.state !== 'finished' && jar.state !== 'discarded' && jar.state !== 'given') return null;
   const undoable = lastChange && lastChange.kind === jar.state;
   const when = lastChange
     ? `${WORDS[lastChange.kind] ?? lastChange.kind} ${dateWords(lastChange.happenedOn)}${lastChange.who ? ` by ${lastChange.who}` : ''}.`

@@ -1,19 +1,21 @@
-import { formatKitchenAmount, JAR_SIZES } from '@shared/domain';
+import { JAR_SIZES } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { headspaceWords, INGREDIENT_ROLE_NAMES, jarSizeWords, METHOD_NAMES, minutesWords } from '@shared/words';
+import { INGREDIENT_ROLE_NAMES, METHOD_NAMES, minutesWords } from '@shared/words';
 import { CautionLine } from '@/components/ui/caution-line';
 import { Card } from '@/components/ui/page';
 import { AltitudeGate } from '@/features/households';
 import { ScalingTool } from './scaling-tool';
+import { useUnits } from '@/lib/units';
 
 export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: RecipeView; altitudeFt: number }) {
+  const units = useUnits();
   return (
     <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
       <Card className="flex flex-col gap-4">
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">
           <dt className="text-ink-muted">Makes</dt>
           <dd>
-            {recipe.yieldJars} {jarSizeWords(recipe.yieldJarSize)} jars
+            {recipe.yieldJars} {units.jarSize(recipe.yieldJarSize)} jars
           </dd>
           <dt className="text-ink-muted">Canner</dt>
           <dd>{METHOD_NAMES[recipe.method]}</dd>
@@ -23,16 +25,16 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
             {recipe.acidPercent !== null ? `; vinegar or juice of ${recipe.acidPercent}% acidity` : ''}
           </dd>
           <dt className="text-ink-muted">Headspace</dt>
-          <dd>{headspaceWords(recipe.headspaceInches)}</dd>
+          <dd>{units.headspace(recipe.headspaceInches)}</dd>
           <dt className="text-ink-muted">Source</dt>
           <dd>{recipe.source || 'not given'}</dd>
         </dl>
         <div>
-          <h2 className="text-xl">Tested minutes at 0–1,000 ft</h2>
+          <h2 className="text-xl">Tested minutes at 0–{units.altitude(1000)}</h2>
           <ul className="tabular flex flex-wrap gap-3">
             {JAR_SIZES.filter((size) => recipe.baseMinutes[size] !== undefined).map((size) => (
               <li key={size} className="rounded-lg bg-sunken px-3 py-1">
-                {jarSizeWords(size)}: <b>{minutesWords(recipe.baseMinutes[size]!)}</b>
+                {units.jarSize(size)}: <b>{minutesWords(recipe.baseMinutes[size]!)}</b>
               </li>
             ))}
           </ul>
@@ -46,7 +48,7 @@ export function RecipeCard({ hid, recipe, altitudeFt }: { hid: string; recipe: R
               {recipe.ingredients.map((ingredient, index) => (
                 <tr key={`${ingredient.name}-${index}`} className="border-t border-line">
                   <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">
-                    {formatKitchenAmount(ingredient.amount, ingredient.unit)}
+                    {units.amount(ingredient.amount, ingredient.unit)}
                   </td>
                   <td className="py-2">{ingredient.name}</td>
                   <td className="py-2 text-sm text-ink-muted">{INGREDIENT_ROLE_NAMES[ingredient.role]}</td>

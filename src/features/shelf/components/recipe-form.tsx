@@ -3,17 +3,19 @@ import { useNavigate } from 'react-router-dom';
 import {
   defaultHeadspaceInches,
   INGREDIENT_ROLES,
-  INGREDIENT_UNITS,
+  ingredientUnitsFor,
   JAR_SIZES,
   PROCESSING_METHODS,
   type IngredientRole,
   type IngredientUnit,
   type JarSize,
   type Method,
+  type UnitSystem,
 } from '@shared/domain';
+
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { INGREDIENT_ROLE_NAMES, INGREDIENT_UNIT_NAMES, jarSizeWords, METHOD_NAMES } from '@shared/words';
+import { INGREDIENT_ROLE_NAMES, INGREDIENT_UNIT_NAMES, METHOD_NAMES } from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
@@ -23,6 +25,7 @@ import { useRecipes } from '../api/get-recipes';
 import { useSaveRecipe } from '../api/save-recipe';
 import { numberFrom } from '../number-from';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 interface IngredientDraft {
   name: string;
@@ -31,8 +34,19 @@ interface IngredientDraft {
   role: IngredientRole;
 }
 
-const blankIngredient = (): IngredientDraft => ({ name: '', amount: '', unit: 'cup', role: 'produce' });
+const blankIngredient = (system: UnitSystem): IngredientDraft => ({
+  name: '',
+  amount: '',
+  unit: system === 'metric' ? 'ml' : 'cup',
+  role: 'produce',
+});
 const optionalNumber = (text: string) => (text.trim() === '' ? null : numberFrom(text));
+
+/** The household's units, and the ingredient's own where it was written in the other system. */
+const unitChoices = (current: IngredientUnit, system: UnitSystem): readonly IngredientUnit[] => {
+  const offered = ingredientUnitsFor(system);
+  return offered.includes(current) ? offered : [current, ...offered];
+};
 
 /** The form's fields from a saved recipe (to edit it, or to start a new one from its copy), or blank. */
 function draftFrom(
@@ -63,8 +77,8 @@ function draftFrom(
   };
 }
 
-const ingredientDrafts = (recipe: RecipeView | undefined): IngredientDraft[] =>
-  recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient()];
+const ingredientDrafts = (recipe: RecipeView | undefined, system: UnitSystem): IngredientDraft[] =>
+  recipe ? recipe.ingredients.map((i) => ({ ...i, amount: String(i.amount) })) : [blankIngredient(system)];
 
 /** A tested recipe, entered as its source gives it: the app never invents a time. A new one may start from a copy. */
 export function RecipeForm({
@@ -78,10 +92,11 @@ export function RecipeForm({
   recipe?: RecipeView;
   productId?: string;
 }) {
+  const units = useUnits();
   const save = useSaveRecipe(hid, recipe?.id);
   const navigate = useNavigate();
   const [form, setForm] = useState(() => draftFrom(products, recipe, productId));
-  const [ingredients, setIngredients] = useState<IngredientDraft[]>(() => ingredientDrafts(recipe));
+  const [ingredients, setIngredients] = useState<IngredientDraft[]>(() => ingredientDrafts(recipe, units.system));
   const [copiedFrom, setCopiedFrom] = useState('');
   const error = save.error instanceof ApiError ? save.error : null;
   const formRef = useFocusFirstError(error);
@@ -90,7 +105,7 @@ export function RecipeForm({
     setCopiedFrom(recipeId);
     const original = household.find((r) => r.id === recipeId);
     setForm(draftFrom(products, original, productId, original ? `${original.name} (copy)` : ''));
-    setIngredients(ingredientDrafts(original));
+    setIngredients(ingredientDrafts(original, units.system));
     save.reset();
   }
 
@@ -163,7 +178,7 @@ export function RecipeForm({
       >
         {JAR_SIZES.map((size) => (
           <option key={size} value={size}>
-            {jarSizeWords(size)}
+            {units.jarSize(size)}
           </option>
         ))}
       </SelectField>
@@ -185,6 +200,11 @@ export function RecipeForm({
         value={form.headspaceInches}
         onChange={(e) => setForm({ ...form, headspaceInches: e.target.value })}
         error={error?.fields.headspaceInches}
+        hint={
+          units.system === 'metric' && Number(form.headspaceInches) > 0
+            ? `As the tested recipe gives it; that is ${units.headspace(Number(form.headspaceInches))}.`
+            : undefined
+        }
       />
       <div className="sm:col-span-2">
         <CheckboxField
@@ -210,7 +230,7 @@ export function RecipeForm({
         hint="5 for the usual vinegar."
       />
       <fieldset className="sm:col-span-2">
-        <legend className="font-bold">Tested minutes at 0–1,000 ft, by jar size</legend>
+        <legend className="font-bold">Tested minutes at 0–{units.altitude(1000)}, by jar size</legend>
         <p className="text-sm text-ink-muted">
           Copy them from the tested recipe; leave a size empty where it gives no time.
         </p>
@@ -223,7 +243,7 @@ export function RecipeForm({
           {JAR_SIZES.map((size) => (
             <TextField
               key={size}
-              label={jarSizeWords(size)}
+              label={units.jarSize(size)}
               inputMode="numeric"
               value={form.baseMinutes[size]}
               onChange={(e) => setForm({ ...form, baseMinutes: { ...form.baseMinutes, [size]: e.target.value } })}
@@ -263,7 +283,7 @@ export function RecipeForm({
               value={ingredient.unit}
               onChange={(e) => setIngredient(index, { unit: e.target.value as IngredientUnit })}
             >
-              {INGREDIENT_UNITS.map((unit) => (
+              {unitChoices(ingredient.unit, units.system).map((unit) => (
                 <option key={unit} value={unit}>
                   {INGREDIENT_UNIT_NAMES[unit]}
                 </option>
@@ -294,7 +314,7 @@ export function RecipeForm({
         <Button
           variant="secondary"
           className="self-start"
-          onClick={() => setIngredients([...ingredients, blankIngredient()])}
+          onClick={() => setIngredients([...ingredients, blankIngredient(units.system)])}
         >
           Add an ingredient
         </Button>

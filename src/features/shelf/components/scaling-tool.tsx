@@ -1,17 +1,20 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { recipeProcessingPlan } from '@shared/processing-plan';
-import { formatKitchenAmount, JAR_SIZES, scaleRecipe, type JarSize } from '@shared/domain';
+import { JAR_SIZES, scaleRecipe, type JarSize } from '@shared/domain';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { altitudeWords, jarSizeWords, minutesWords, pressureWords } from '@shared/words';
+import { minutesWords } from '@shared/words';
 import { SelectField, TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { numberFrom } from '../number-from';
 import { Cautions } from './plan-panel';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** Scales a tested recipe to the jars wanted; acid is never weakened, and the cautions come along. */
+
 export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: RecipeView; altitudeFt: number }) {
+  const units = useUnits();
   const [jarsText, setJarsText] = useState(String(recipe.yieldJars));
   const [jarSize, setJarSize] = useState<JarSize>(recipe.yieldJarSize);
   const jars = numberFrom(jarsText);
@@ -40,7 +43,7 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
         <SelectField label="Jar size" value={jarSize} onChange={(e) => setJarSize(e.target.value as JarSize)}>
           {JAR_SIZES.map((size) => (
             <option key={size} value={size}>
-              {jarSizeWords(size)}
+              {units.jarSize(size)}
             </option>
           ))}
         </SelectField>
@@ -59,7 +62,7 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
               {scaled.ingredients.map((ingredient, index) => (
                 <tr key={`${ingredient.name}-${index}`} className="border-t border-line">
                   <td className="tabular py-2 pr-3 font-bold whitespace-nowrap">
-                    {formatKitchenAmount(ingredient.amount, ingredient.unit)}
+                    {units.amount(ingredient.amount, ingredient.unit)}
                   </td>
                   <td className="py-2">
                     {ingredient.name}
@@ -84,7 +87,7 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
       {plan.allowed ? (
         <Notice
           tone="action"
-          title={`${jarSizeWords(jarSize)} jars: ${minutesWords(plan.minutes!)}${plan.pressurePsi !== null ? ` at ${pressureWords(plan.pressurePsi)}` : ''} at ${altitudeWords(altitudeFt)}`}
+          title={`${units.jarSize(jarSize)} jars: ${minutesWords(plan.minutes!)}${plan.pressurePsi !== null ? ` at ${units.pressure(plan.pressurePsi)}` : ''} at ${units.altitude(altitudeFt)}`}
         >
           {valid && (
             <Link

@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import type { BatchDetail, SealCheckDone } from '@shared/schemas/batches';
 import { clockWords, count, SEAL_CHECK_HOW, SEAL_CHECK_SOURCE, UNSEALED_CHOICES } from '@shared/words';
+import { STOCK_WORDS } from '@shared/words/stock';
 import { Button } from '@/components/ui/button';
 import { CautionLine } from '@/components/ui/caution-line';
 import { ChoiceCard, TextField } from '@/components/ui/field';
@@ -154,6 +155,11 @@ function SealCheckOutcome({ done, batch }: { done: SealCheckDone; batch: BatchDe
           : ''}
         .
       </Notice>
+      {done.stockWarnings.length > 0 && (
+        <Notice tone="soon" title={STOCK_WORDS.newLids}>
+          {done.stockWarnings.join(' ')}
+        </Notice>
+      )}
       {done.plan && <PlanPanel plan={done.plan} method={batch.method} altitudeFt={batch.altitudeFt} />}
     </div>
   );

@@ -1,23 +1,31 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, heatWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { count, DATE_NAMES, dateWords, heatWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { GIFT_WORDS } from '@shared/words/gifts';
+import { placeWords } from '@shared/words/shelf-places';
 import type { ShelfProductGroup } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
+import { GiveJar } from './give-jar';
 import { OpenJarButton, OpeningChecks, type OpenableJar } from './open-jar';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 export function ShelfCards({
   hid,
   groups,
   canHandleJars,
   canCook,
+  givenThisYear,
 }: {
   hid: string;
   groups: ShelfProductGroup[];
   canHandleJars: boolean;
   canCook: boolean;
+  /** Jars of each product given away this year, by product id. */
+  givenThisYear: Map<string, number>;
 }) {
+  const units = useUnits();
   const [justOpened, setJustOpened] = useState<Record<string, OpenableJar>>({});
   return (
     <ul className="grid gap-4 sm:grid-cols-2 xl:grid-cols-3">
@@ -61,6 +69,11 @@ export function ShelfCards({
             </p>
           )}
           {group.opened > 0 && <p className="text-sm text-info">{group.opened} opened in the fridge</p>}
+          {(givenThisYear.get(group.product.id) ?? 0) > 0 && (
+            <p className="text-sm text-ink-muted">
+              {count(givenThisYear.get(group.product.id)!, 'jar')} given away this year
+            </p>
+          )}
           {group.batches.length > 0 && (
             <ul className="divide-y divide-line border-y border-line text-[0.95rem]">
               {group.batches.map((row) => (
@@ -70,7 +83,7 @@ export function ShelfCards({
                     className="flex min-h-11 items-center justify-between gap-2 hover:bg-sunken"
                   >
                     <span className="tabular">
-                      {dateWords(row.cannedOn)} · {jarSizeWords(row.jarSize)}
+                      {dateWords(row.cannedOn)} · {units.jarSize(row.jarSize)}
                     </span>
                     <span className="tabular font-bold">{row.sealed}</span>
                   </Link>
@@ -78,7 +91,12 @@ export function ShelfCards({
               ))}
             </ul>
           )}
-          {group.nextJar && <p className="tabular text-sm text-ink-muted">Eat first: jar {group.nextJar.code}</p>}
+          {group.nextJar && (
+            <p className="tabular text-sm text-ink-muted">
+              Eat first: jar {group.nextJar.code}
+              {group.nextJar.placeName ? `, ${placeWords(group.nextJar.placeName)}` : ''}
+            </p>
+          )}
           <div className="mt-auto flex flex-wrap gap-2">
             {canHandleJars && group.nextJar && (
               <OpenJarButton
@@ -89,6 +107,9 @@ export function ShelfCards({
                 ariaLabel={`Open oldest jar of ${group.product.name}`}
                 onOpened={(jar) => setJustOpened((all) => ({ ...all, [group.product.id]: jar }))}
               />
+            )}
+            {canHandleJars && group.nextJar?.seal === 'checked' && (
+              <GiveJar hid={hid} jar={group.nextJar} label={`${GIFT_WORDS.action} jar ${group.nextJar.code}`} />
             )}
             {canCook && (
               <Link

@@ -9,18 +9,21 @@ import {
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DATE_NAMES, dateWords, jarSizeWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { DATE_NAMES, dateWords, PRODUCT_KIND_NAMES } from '@shared/words';
+import { PLACE_WORDS } from '@shared/words/shelf-places';
 import type { ProductKind } from '@shared/domain';
 import { CheckboxField, SelectField } from '@/components/ui/field';
 import type { ShelfBatchRow } from '../shelf-rows';
 import { PastBestBadge } from './jar-badges';
 import { ColourDot } from './colour-dot';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 const column = createColumnHelper<ShelfBatchRow>();
 const HIDDEN_COLUMNS = { pastBestQuality: false };
 
 export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }) {
+  const units = useUnits();
   const [sorting, setSorting] = useState<SortingState>([{ id: 'bestBy', desc: false }]);
   const [kind, setKind] = useState('');
   const [pastOnly, setPastOnly] = useState(false);
@@ -50,7 +53,7 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
       }),
       column.accessor('jarSize', {
         header: 'Jar size',
-        cell: (info) => <span className="whitespace-nowrap">{jarSizeWords(info.getValue())}</span>,
+        cell: (info) => <span className="whitespace-nowrap">{units.jarSize(info.getValue())}</span>,
       }),
       column.accessor('sealed', {
         header: 'Sealed',
@@ -66,13 +69,17 @@ export function ShelfTable({ hid, rows }: { hid: string; rows: ShelfBatchRow[] }
         ),
       }),
       column.accessor('pastBestQuality', { header: 'Past best', enableSorting: false, filterFn: 'equals' }),
+      column.accessor('places', {
+        header: PLACE_WORDS.name,
+        cell: (info) => <span className="whitespace-nowrap">{info.getValue()}</span>,
+      }),
       column.accessor('notes', {
         header: 'Notes',
         enableSorting: false,
         cell: (info) => <span className="text-ink-muted">{info.getValue()}</span>,
       }),
     ],
-    [hid],
+    [hid, units],
   );
   const columnFilters = useMemo(
     () => [

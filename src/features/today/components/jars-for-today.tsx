@@ -27,6 +27,7 @@ function whereFrom(portion: TodayUse) {
     return (
       <>
         open <JarLink code={portion.jarCode} />
+        {portion.jarPlaceWords ? ` ${portion.jarPlaceWords}` : ''}
       </>
     );
   const daysLeft = portion.openedJarDaysLeft;
@@ -72,6 +73,7 @@ export function JarsForToday({
               <li key={portion.jarId} className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
                 <span>
                   {portion.productName} (<JarLink code={portion.jarCode!} />)
+                  {portion.jarPlaceWords ? `, ${portion.jarPlaceWords}` : ''}
                 </span>
                 {canHandleJars && (
                   <Suspense fallback={null}>

@@ -1,10 +1,12 @@
 import { Link } from 'react-router-dom';
-import { JAR_SIZE_NAMES } from '@shared/words';
 import type { RestockSuggestionView } from '@shared/schemas/restock';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** The favourites that need a batch; each opens its place on the Restock screen. */
+
 export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: RestockSuggestionView[] }) {
+  const units = useUnits();
   if (suggestions.length === 0) return <p className="text-ink-muted">Every favorite is stocked past its minimum.</p>;
   return (
     <ul className="flex flex-col gap-2">
@@ -19,7 +21,7 @@ export function RestockGlance({ hid, suggestions }: { hid: string; suggestions: 
               {suggestion.why}{' '}
               {suggestion.openTodoId
                 ? 'A batch is on the list.'
-                : `Make about ${suggestion.suggestedJars} ${JAR_SIZE_NAMES[suggestion.jarSize]} jars.`}
+                : `Make about ${suggestion.suggestedJars} ${units.jarSize(suggestion.jarSize)} jars.`}
             </span>
           </Link>
         </li>

@@ -1,11 +1,14 @@
 import { Link } from 'react-router-dom';
 import type { SealCheckView } from '@shared/schemas/batches';
-import { clockWords, count, jarSizeWords } from '@shared/words';
+import { clockWords, count } from '@shared/words';
 import { sealCheckTimes } from '@/features/shelf';
 import { paths } from '@shared/paths';
+import { useUnits } from '@/lib/units';
 
 /** Batches cooling after processing, and those ready for their seal check. */
+
 export function SealChecks({ hid, checks }: { hid: string; checks: SealCheckView[] }) {
+  const units = useUnits();
   return (
     <ul className="divide-y divide-line">
       {checks.map((check) => {
@@ -15,7 +18,7 @@ export function SealChecks({ hid, checks }: { hid: string; checks: SealCheckView
             <span>
               <span className="font-bold">{check.productName}</span>
               <span className="block text-sm text-ink-muted">
-                {count(check.jarIds.length, 'jar')}, {jarSizeWords(check.jarSize)} ·{' '}
+                {count(check.jarIds.length, 'jar')}, {units.jarSize(check.jarSize)} ·{' '}
                 {ready ? 'cooled 12 hours' : `check from ${clockWords(check.checkFrom, check.timeZone)}`}
               </span>
             </span>

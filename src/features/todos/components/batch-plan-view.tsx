@@ -1,27 +1,29 @@
 import { Link } from 'react-router-dom';
 import {
-  altitudeWords,
   BEFORE_YOU_START,
   count,
   dateWords,
-  headspaceWords,
   inCanner,
   JAR_SIZE_NAMES,
   minutesWords,
-  pressureWords,
+  METHOD_NAMES,
 } from '@shared/words';
-import type { BatchPlan, ShoppingItem } from '@shared/schemas/todos';
+import { MOUTH_NAMES, STOCK_WORDS } from '@shared/words/stock';
+import type { BatchPlan, BatchPlanStock, ShoppingItem } from '@shared/schemas/todos';
+import { Button } from '@/components/ui/button';
+import { useCreateTodo } from '../api/create-todo';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
+import { useUnits, type Units } from '@/lib/units';
 
-function processingWords(plan: BatchPlan): string {
+function processingWords(plan: BatchPlan, units: Units): string {
   const { processing } = plan;
-  const altitude = altitudeWords(plan.altitudeFt);
+  const altitude = units.altitude(plan.altitudeFt);
   if (processing.pressurePsi !== null) {
-    return `${minutesWords(processing.minutes!)} at ${pressureWords(processing.pressurePsi)} ${inCanner(plan.method)}, for ${altitude}.`;
+    return `${minutesWords(processing.minutes!)} at ${units.pressure(processing.pressurePsi)} ${inCanner(plan.method)}, for ${altitude}.`;
   }
   const added = processing.altitudeAddMinutes
-    ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-1,000 ft plus ${processing.altitudeAddMinutes} for the altitude)`
+    ? ` (${processing.minutes! - processing.altitudeAddMinutes} at 0-${units.altitude(1000)} plus ${processing.altitudeAddMinutes} for the altitude)`
     : '';
   return `${minutesWords(processing.minutes!)} ${inCanner(plan.method)} at ${altitude}${added}.`;
 }
@@ -40,6 +42,59 @@ function ShoppingList({ title, items }: { title: string; items: ShoppingItem[] }
   );
 }
 
+/** The empty jars and new lids in stock now, what to buy beyond them, and a to-do to buy it. */
+function PlanStock({
+  hid,
+  plan,
+  stock,
+  canAdd,
+}: {
+  hid: string;
+  plan: BatchPlan;
+  stock: BatchPlanStock;
+  canAdd: boolean;
+}) {
+  const add = useCreateTodo(hid);
+  return (
+    <div className="mt-2 flex flex-col gap-2 rounded-lg border border-line bg-sunken p-3" data-testid="plan-stock">
+      <p>
+        {stock.words}{' '}
+        <Link to={paths.stock(hid)} className="font-bold text-action underline">
+          {STOCK_WORDS.title}
+        </Link>
+      </p>
+      {stock.todoTitle && canAdd && (
+        <div className="flex flex-wrap items-center gap-2">
+          {add.isSuccess ? (
+            <p role="status" className="font-bold">
+              Added “{stock.todoTitle}” to the to-do list.
+            </p>
+          ) : (
+            <Button
+              variant="secondary"
+              disabled={add.isPending}
+              onClick={() =>
+                add.mutate({
+                  title: stock.todoTitle!,
+                  notes: `For ${plan.productName}: ${count(plan.jars, `${JAR_SIZE_NAMES[plan.jarSize]} jar`)}, one new ${MOUTH_NAMES[stock.mouth]} lid a jar.`,
+                  dueOn: plan.targetOn,
+                })
+              }
+            >
+              {STOCK_WORDS.addLidsTodo}: {stock.todoTitle}
+            </Button>
+          )}
+          {add.error && (
+            <p role="alert" className="text-past">
+              {add.error.message}
+            </p>
+          )}
+        </div>
+      )}
+    </div>
+  );
+}
+
 /** Everything needed to make a restock batch, and the step that records it. */
 export function BatchPlanView({
   hid,
@@ -52,7 +107,8 @@ export function BatchPlanView({
   plan: BatchPlan;
   canRecord: boolean;
 }) {
-  const size = JAR_SIZE_NAMES[plan.jarSize];
+  const units = useUnits();
+  const size = units.jarSize(plan.jarSize);
   const recordHref = paths.newBatch(hid, {
     productId: plan.productId,
     recipeId: plan.recipeId,
@@ -78,6 +134,15 @@ export function BatchPlanView({
         </Notice>
       )}
 
+      {/* The cautions come before every number of the plan: jars, amounts, minutes and pressure. */}
+      <Notice tone="info" title={BEFORE_YOU_START}>
+        <ul className="list-disc pl-5">
+          {plan.processing.cautions.map((caution) => (
+            <li key={caution}>{caution}</li>
+          ))}
+        </ul>
+      </Notice>
+
       <section aria-labelledby="plan-equipment">
         <h3 id="plan-equipment" className="mb-1 text-lg">
           Jars and canner
@@ -87,9 +152,11 @@ export function BatchPlanView({
           <li>{count(plan.equipment.newLids, 'new lid')}: lids seal only once; bands can be reused</li>
           <li>
             {count(plan.equipment.cannerLoads.length, 'canner load')} ({plan.equipment.cannerLoads.join(' + ')} jars;
-            your canner holds {plan.equipment.cannerCapacityJars})
+            your {METHOD_NAMES[plan.equipment.cannerMethod ?? plan.method].toLowerCase()} holds{' '}
+            {plan.equipment.cannerCapacityJars})
           </li>
         </ul>
+        {plan.stock && <PlanStock hid={hid} plan={plan} stock={plan.stock} canAdd={canRecord} />}
       </section>
 
       <section aria-labelledby="plan-shopping">
@@ -114,20 +181,12 @@ export function BatchPlanView({
         ))}
       </section>
 
-      <Notice tone="info" title={BEFORE_YOU_START}>
-        <ul className="list-disc pl-5">
-          {plan.processing.cautions.map((caution) => (
-            <li key={caution}>{caution}</li>
-          ))}
-        </ul>
-      </Notice>
-
       <section aria-labelledby="plan-processing">
         <h3 id="plan-processing" className="mb-1 text-lg">
           Processing
         </h3>
         {plan.processing.allowed ? (
-          <p className="font-bold">{processingWords(plan)}</p>
+          <p className="font-bold">{processingWords(plan, units)}</p>
         ) : (
           <Notice tone="past" title="Not allowed: no tested process for this plan now" role="alert">
             <ul className="list-disc pl-5">
@@ -137,7 +196,7 @@ export function BatchPlanView({
             </ul>
           </Notice>
         )}
-        <p>Headspace: {headspaceWords(plan.headspaceInches)}.</p>
+        <p>Headspace: {units.headspace(plan.headspaceInches)}.</p>
         <h4 className="mt-2 font-bold">After processing</h4>
         <ol className="list-decimal pl-5">
           {plan.processing.afterProcessing.map((step) => (

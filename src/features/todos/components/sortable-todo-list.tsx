@@ -65,7 +65,7 @@ export function SortableTodoList({ hid, filter, todos, canMove, today, onOpen }:
             over
               ? `${titleOf(todos, active.id)} dropped at ${titleOf(todos, over.id)}.`
               : `${titleOf(todos, active.id)} dropped.`,
-          onDragCancel: ({ active }) => `Moving ${titleOf(todos, active.id)} was cancelled.`,
+          onDragCancel: ({ active }) => `Moving ${titleOf(todos, active.id)} was canceled.`,
         },
       }}
     >

@@ -1,21 +1,22 @@
 import type { AllocationWarning } from '@shared/domain';
 import { jarCode, productName, useBoard } from '../board-context';
 import { useState } from 'react';
-import { tbspWords } from '@shared/words';
 import { ErrorWithAction } from '@/components/ui/error-with-action';
 import { weekday } from '../drag';
 import { nextMealFor } from '../next-meal';
+import { useUnits, type Units } from '@/lib/units';
 
-function warningText(warning: AllocationWarning, board: ReturnType<typeof useBoard>) {
+function warningText(warning: AllocationWarning, board: ReturnType<typeof useBoard>, units: Units) {
   const name = productName(board.week, String(warning.productId));
   if (warning.kind === 'short')
-    return `Not enough ${name} on the shelf: the plan needs ${tbspWords(warning.tbsp)} more than it holds.`;
-  return `Jar ${jarCode(board.week, warning.jarId)} of ${name} passes its use-by with ${tbspWords(warning.tbsp)} left.`;
+    return `Not enough ${name} on the shelf: the plan needs ${units.tbsp(warning.tbsp)} more than it holds.`;
+  return `Jar ${jarCode(board.week, warning.jarId)} of ${name} passes its use-by with ${units.tbsp(warning.tbsp)} left.`;
 }
 
 /** A day's jar news from the allocation: jars to open (by product), and what to act on. */
 export function DayNotes({ date }: { date: string }) {
   const board = useBoard();
+  const units = useUnits();
   const { allocation, jars } = board.week;
   const opened = new Map<string, string[]>();
   for (const opening of allocation.openings.filter((o) => o.date === date)) {
@@ -39,7 +40,7 @@ export function DayNotes({ date }: { date: string }) {
           role="note"
           className="rounded-md border border-soon-fill bg-soon-soft px-1.5 py-1"
         >
-          <p>{warningText(warning, board)}</p>
+          <p>{warningText(warning, board, units)}</p>
           {warning.kind === 'will-expire' ? (
             <PlanItOnAMeal productId={String(warning.productId)} jarId={String(warning.jarId)} useBy={warning.date} />
           ) : (

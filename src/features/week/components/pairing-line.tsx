@@ -2,14 +2,17 @@ import type { PairingView, PlanEntryView } from '@shared/schemas/week';
 import { jarCode, productName, useBoard } from '../board-context';
 import { isPending } from '../week-edits';
 import { NumberCommit } from './number-commit';
-import { heatWords, tbspWords } from '@shared/words';
+import { heatWords } from '@shared/words';
 import { ReasonToggle } from '@/components/ui/reason-toggle';
+import { useUnits, type Units } from '@/lib/units';
 
 /** Which jar a pairing draws from, or how much the shelf lacks. */
+
 function allocationLine(
   pairing: PairingView,
   entry: PlanEntryView,
   board: ReturnType<typeof useBoard>,
+  units: Units,
 ): { text: string; lacking: boolean } {
   const { week } = board;
   if (entry.date < week.today) return { text: 'Day is over; its jars are not counted', lacking: false };
@@ -19,7 +22,7 @@ function allocationLine(
   if (draws.length === 0) return { text: 'Finding a jar…', lacking: false };
   const text = draws
     .map((a) => {
-      if (a.jarId === null) return `${tbspWords(a.tbsp)} more than the shelf holds`;
+      if (a.jarId === null) return `${units.tbsp(a.tbsp)} more than the shelf holds`;
       const opens = week.allocation.openings.some((o) => o.jarId === a.jarId && o.date === entry.date);
       return `${opens ? 'opens' : 'from'} jar ${jarCode(week, a.jarId)}`;
     })
@@ -36,10 +39,11 @@ export function PairingLine({
   entry: PlanEntryView;
   editing: boolean;
 }) {
+  const units = useUnits();
   const board = useBoard();
   const name = productName(board.week, pairing.productId);
   const product = board.week.products.find((p) => p.id === pairing.productId);
-  const line = allocationLine(pairing, entry, board);
+  const line = allocationLine(pairing, entry, board, units);
   const editable = board.canEdit && !isPending(pairing.id);
   return (
     <li data-pairing={name} className="rounded bg-sunken/70 px-1 py-0.5 text-xs leading-tight">
@@ -50,7 +54,7 @@ export function PairingLine({
             <span className="font-normal text-ink-muted"> · {heatWords(product.heat)}</span>
           )}
           {!editing && (
-            <span className="tabular font-normal text-ink-muted"> · {tbspWords(pairing.tbspPerServing)} each</span>
+            <span className="tabular font-normal text-ink-muted"> · {units.tbsp(pairing.tbspPerServing)} each</span>
           )}
         </span>
         {editable && (

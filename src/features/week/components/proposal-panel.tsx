@@ -11,6 +11,7 @@ import { useWaste } from '../api/get-waste';
 import { useProposeMeals } from '../api/propose-meals';
 import { weekday } from '../drag';
 import { ProposedMealRow } from './proposed-meal-row';
+import { useUnits } from '@/lib/units';
 
 const slotKey = (m: { date: string; slot: string }) => `${m.date}|${m.slot}`;
 const SLOT_NAMES: Record<string, string> = {
@@ -29,6 +30,7 @@ function scopeOf(value: string): ProposalScope {
 
 /** Plan from the shelf: meals for the open slots that eat what must go first, and the waste that saves. */
 export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekView; canEdit: boolean }) {
+  const units = useUnits();
   const waste = useWaste(hid, week.start);
   const [message, setMessage] = useState<string | null>(null);
   const propose = useProposeMeals(hid);
@@ -102,7 +104,7 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
         </h2>
         <p className="tabular text-sm" data-testid="week-waste" aria-live="polite">
           <span className="text-ink-muted">Waste this week as planned: </span>
-          <span className="font-bold">{waste.data ? wasteWords(waste.data) : '…'}</span>
+          <span className="font-bold">{waste.data ? wasteWords(waste.data, units.system) : '…'}</span>
         </p>
       </div>
       {message && (
@@ -162,8 +164,8 @@ export function ProposalPanel({ hid, week, canEdit }: { hid: string; week: WeekV
         <div className="flex flex-col gap-2">
           {wholeProposal && (
             <p className="tabular text-sm" data-testid="proposal-figures">
-              If you accept them all: <span className="font-bold">{wasteWords(proposal.before)}</span> →{' '}
-              <span className="font-bold text-action">{wasteWords(proposal.after)}</span>
+              If you accept them all: <span className="font-bold">{wasteWords(proposal.before, units.system)}</span> →{' '}
+              <span className="font-bold text-action">{wasteWords(proposal.after, units.system)}</span>
             </p>
           )}
           {proposal.proposed.length === 0 && (

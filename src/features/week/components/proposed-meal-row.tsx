@@ -1,8 +1,9 @@
 import type { ProposedMealView } from '@shared/schemas/week-proposal';
 import { weekday } from '../drag';
-import { tbspWords } from '@shared/words';
+import { useUnits } from '@/lib/units';
 
 /** One proposed meal: where it goes, why, which jar each pairing draws from, and a swap for the next best. */
+
 export function ProposedMealRow({
   meal,
   chosen,
@@ -16,6 +17,7 @@ export function ProposedMealRow({
   onSwap: () => void;
   busy: boolean;
 }) {
+  const units = useUnits();
   const place = `${weekday(meal.date)} ${meal.slot}`;
   const next = meal.alternatives[0];
   return (
@@ -54,7 +56,7 @@ export function ProposedMealRow({
           {meal.pairings.map((p) => (
             <li key={p.productId}>
               {p.name}:{' '}
-              {p.jars.map((j) => `${tbspWords(j.tbsp)} ${j.opens ? 'opens' : 'from'} jar ${j.code}`).join(', then ')}
+              {p.jars.map((j) => `${units.tbsp(j.tbsp)} ${j.opens ? 'opens' : 'from'} jar ${j.code}`).join(', then ')}
             </li>
           ))}
         </ul>
