@@ -12,7 +12,10 @@ import { describe, expect, it } from 'vitest';
 // before every first render), and the app's shared modules sit in one chunk: a page loads 8 to 11 files instead of
 // 23 to 35, which a phone fetches a few at a time. Measured that day, before -> after, with the offline restore:
 // sign-in 126.5 -> 132.4 KB in 23 -> 8 files, Today 133.0 -> 136.9 KB in 30 -> 9 files; budgets 134 and 138.
-const BUDGET_KB = { signIn: 134, today: 138 };
+// The same day gifts, jar and lid stock, shelf places and the Units setting landed; the shared chunk carries their
+// shared words and components (measured: sign-in 135.5 KB, Today 140.1 KB), so the budgets are 137 and 142. The shared
+// chunk is loaded by sign-in too: splitting it so sign-in loads only what it needs is open work (issue 15).
+const BUDGET_KB = { signIn: 137, today: 142 };
 
 interface Chunk {
   file: string;
