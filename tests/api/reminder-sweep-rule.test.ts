@@ -142,6 +142,9 @@ describe('the use-by sweep in SQL', () => {
   it('claims exactly the reminders the rule in plain code says are due, at several hours of one day', async () => {
     const start = new Date();
     start.setUTCMinutes(10, 0, 0);
+    // The demo household's jars still to check would add a seal-check reminder at some of these hours, depending on
+    // the hour the suite runs; this test counts the use-by claims alone.
+    await Jar.update({ seal: 'checked' }, { where: { seal: 'to-check' } });
     await generate(start);
     let claimedInAll = 0;
     for (const hoursLater of [0, 5, 9, 14, 20]) {

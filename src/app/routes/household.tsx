@@ -25,7 +25,7 @@ export function HouseholdRoute() {
   return (
     <>
       <PageHeader title="Household" lead={role ? ROLE_NOTES[role] : undefined} />
-      <div className="grid gap-5 lg:grid-cols-[3fr_2fr]">
+      <div className="grid gap-5 *:min-w-0 lg:grid-cols-[3fr_2fr]">
         <Card>
           <h2 className="mb-4 text-xl">Settings</h2>
           {household.data ? (

@@ -17,7 +17,7 @@ const inputClass =
 
 function FieldFrame({ id, label, error, hint, children }: FieldProps & { id: string; children: ReactNode }) {
   return (
-    <div className="flex flex-col gap-1">
+    <div className="flex min-w-0 flex-col gap-1">
       <label htmlFor={id} className="font-bold">
         {label}
       </label>

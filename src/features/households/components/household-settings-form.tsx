@@ -130,7 +130,7 @@ export function HouseholdSettingsForm({ household, canEdit }: { household: House
           ))}
         </SelectField>
 
-        <fieldset className="flex flex-col gap-3 sm:col-span-2" aria-describedby="canners-hint">
+        <fieldset className="flex min-w-0 flex-col gap-3 sm:col-span-2" aria-describedby="canners-hint">
           <legend className="font-bold">Your canners</legend>
           <p id="canners-hint" className="text-sm text-ink-muted">
             Tick each canner you own and say how many jars its rack holds: batch plans split the jars into loads of the
