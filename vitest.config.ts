@@ -9,6 +9,9 @@ const alias = {
 export default defineConfig({
   resolve: { alias },
   test: {
+    // Two files at a time on CI's two cores (vitest's default is cores - 1, so one): each API file has a database of
+    // its own, and the browser and scale projects stay one file at a time (fileParallelism: false).
+    maxWorkers: 2,
     projects: [
       {
         resolve: { alias },
