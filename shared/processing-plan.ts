@@ -7,9 +7,11 @@ import {
   type AltitudeRow,
   type JarSize,
   type Method,
+  type PlanQuantities,
   type ProcessingPlan,
+  type UnitSystem,
 } from './domain';
-import { JAR_SIZE_NAMES } from './words';
+import { JAR_SIZE_NAMES, planQuantities } from './words';
 
 export interface PlanRecipe {
   method: Method;
@@ -23,15 +25,17 @@ export interface ProcessingQuestion {
   method: Method;
   jarSize: JarSize;
   altitudeFt: number;
+  /** The household's units, for the quantities in the cautions and reasons; US customary when left out. */
+  unitSystem?: UnitSystem;
 }
 
-function refused(method: Method, reason: string): ProcessingPlan {
+function refused(method: Method, reason: string, quantities: PlanQuantities): ProcessingPlan {
   return {
     allowed: false,
     minutes: null,
     pressurePsi: null,
     reasons: [reason],
-    cautions: cautionsFor(method),
+    cautions: cautionsFor(method, quantities),
     afterProcessing: afterProcessingSteps(method),
     altitudeAddMinutes: null,
   };
@@ -43,12 +47,14 @@ function methodFits(recipeMethod: Method, batchMethod: Method): boolean {
 }
 
 export function recipeProcessingPlan(recipe: PlanRecipe, question: ProcessingQuestion): ProcessingPlan {
+  const quantities = planQuantities(question.unitSystem ?? 'us');
   if (!methodFits(recipe.method, question.method)) {
     return refused(
       question.method,
       isPressureMethod(recipe.method)
         ? 'This recipe is tested for a pressure canner only; there is no tested time for another canner.'
         : 'This recipe is tested for a boiling-water canner; there is no tested pressure time for it. Use a recipe tested for the pressure canner.',
+      quantities,
     );
   }
   const baseMinutes = recipe.baseMinutes[question.jarSize];
@@ -57,6 +63,7 @@ export function recipeProcessingPlan(recipe: PlanRecipe, question: ProcessingQue
     return refused(
       question.method,
       `The recipe has no tested time for ${JAR_SIZE_NAMES[question.jarSize]} jars; use ${sizes.length ? sizes.join(' or ') : 'a size it gives a time for'} jars.`,
+      quantities,
     );
   }
   return processingPlan({
@@ -67,5 +74,6 @@ export function recipeProcessingPlan(recipe: PlanRecipe, question: ProcessingQue
     ...(recipe.ph === null ? {} : { ph: recipe.ph }),
     acidified: recipe.acidified,
     ...(recipe.altitudeTable ? { altitudeTable: recipe.altitudeTable } : {}),
+    quantities,
   });
 }

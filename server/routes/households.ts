@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
 import { z } from 'zod';
-import { householdPatch, memberPatch } from '../../shared/schemas/households';
+import { householdPatchIn, memberPatch } from '../../shared/schemas/households';
 import { currentMembership, householdAccess } from '../auth/guards';
 import { body, params } from '../http/validate';
 import {
@@ -23,7 +23,9 @@ export function householdsRouter(sequelize: Sequelize) {
 
   router.patch('/:hid', householdAccess('manage'), async (req, res) => {
     const { household, role } = currentMembership(req);
-    const updated = await updateHousehold(household, body(req, householdPatch));
+    // The refusals name the altitude's limits in the household's units (or the units this patch chooses).
+    const patch = body(req, householdPatchIn(household.unitSystem, req.body));
+    const updated = await updateHousehold(household, patch);
     res.json({ household: viewHousehold(updated, role) });
   });
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { recipeCreate, recipePatch } from '../../shared/schemas/recipes';
+import { recipeShapesIn } from '../../shared/schemas/recipes';
 import { currentMembership, householdAccess } from '../auth/guards';
 import { body, params } from '../http/validate';
 import { createRecipe, listRecipes, updateRecipe, viewRecipe } from '../services/shelf/recipes';
@@ -20,12 +20,16 @@ export function recipesRouter() {
   });
 
   router.post('/recipes', householdAccess('cook'), async (req, res) => {
-    res.status(201).json({ recipe: await createRecipe(currentMembership(req).householdId, body(req, recipeCreate)) });
+    const { household, householdId } = currentMembership(req);
+    const input = body(req, recipeShapesIn(household.unitSystem).create);
+    res.status(201).json({ recipe: await createRecipe(householdId, input) });
   });
 
   router.patch('/recipes/:recipeId', householdAccess('cook'), async (req, res) => {
     const { recipeId } = params(req, recipeParams);
-    res.json({ recipe: await updateRecipe(currentMembership(req).householdId, recipeId, body(req, recipePatch)) });
+    const { household, householdId } = currentMembership(req);
+    const input = body(req, recipeShapesIn(household.unitSystem).patch);
+    res.json({ recipe: await updateRecipe(householdId, recipeId, input) });
   });
 
   return router;

@@ -1,5 +1,28 @@
 // The safety words shown beside every canning number: general cautions, per-method cautions, and after-processing steps.
 import type { Method } from './processing-tables';
+import type { JarSize } from './units';
+
+/**
+ * How the plan's texts write a quantity. The domain keeps one unit system (inches, feet, the US jar sizes); the
+ * household's words (planQuantities in shared/words/cautions.ts) convert at the edge. Left out, US customary.
+ */
+export interface PlanQuantities {
+  /** Water over the jars: "1 inch" or "2.5 cm". */
+  waterDepth(inches: number): string;
+  /** "10,000 ft" or "3,048 m". */
+  altitude(feet: number): string;
+  /** "quart" or "quart (946 mL)". */
+  jarSize(size: JarSize): string;
+}
+
+export const US_PLAN_QUANTITIES: PlanQuantities = {
+  waterDepth: (inches) => `${inches} ${inches === 1 ? 'inch' : 'inches'}`,
+  altitude: (feet) => `${feet.toLocaleString('en-US')} ft`,
+  jarSize: (size) => size,
+};
+
+/** USDA Complete Guide to Home Canning (2015), Guide 1: the jars stay covered by at least 1 inch of water. */
+export const BOILING_WATER_COVER_INCHES = 1;
 
 /** The usual cautions; Larderly defers to tested recipes and local extension services. */
 export const SAFETY_CAUTIONS: readonly string[] = [
@@ -11,22 +34,26 @@ export const SAFETY_CAUTIONS: readonly string[] = [
   "Your local extension service and the tested recipe's own instructions come first where they differ from this plan.",
 ];
 
-const METHOD_CAUTIONS: Record<Method, readonly string[]> = {
-  // Common practice, from memory of USDA Guide 1.
-  'boiling-water': ['Keep the jars covered by at least 1 inch of water at a full rolling boil for the whole time.'],
+const METHOD_CAUTIONS: Record<Method, (q: PlanQuantities) => readonly string[]> = {
+  // USDA Complete Guide to Home Canning (2015), Guide 1.
+  'boiling-water': (q) => [
+    `Keep the jars covered by at least ${q.waterDepth(BOILING_WATER_COVER_INCHES)} of water at a full rolling boil for the whole time.`,
+  ],
   // University of Wisconsin-Madison research (Willmore, Etzel, Andress and Ingham, 2015), as extension services summarise it.
-  'atmospheric-steam': [
+  'atmospheric-steam': (q) => [
     'Only for acid foods (pH 4.6 or below) with a recipe tested for the boiling-water canner, using its time with the altitude adjustment.',
     'The whole process, altitude adjustment included, must not pass 45 minutes.',
-    'Jars up to a quart only, heated before filling.',
+    `Jars up to a ${q.jarSize('quart')} only, heated before filling.`,
     'Vent until a full column of steam flows, and keep the canner at a full steam (212 °F / 100 °C at sea level) for the whole time.',
   ],
   // Common practice, from memory of USDA Guide 1 and extension services' gauge testing.
-  'pressure-dial': [
+  'pressure-dial': () => [
     'Vent the canner for 10 minutes before closing it and bringing it up to pressure.',
     'Have the dial gauge tested for accuracy every year.',
   ],
-  'pressure-weighted': ['Vent the canner for 10 minutes before putting the weight on and bringing it up to pressure.'],
+  'pressure-weighted': () => [
+    'Vent the canner for 10 minutes before putting the weight on and bringing it up to pressure.',
+  ],
 };
 
 // Common practice, from memory; the tested recipe's own steps win.
@@ -57,8 +84,9 @@ const AFTER_PROCESSING: Record<Method, readonly string[]> = {
   ],
 };
 
-export function cautionsFor(method: Method): string[] {
-  return [...SAFETY_CAUTIONS, ...METHOD_CAUTIONS[method]];
+/** The cautions for a canner, their quantities in the household's words (US customary when left out). */
+export function cautionsFor(method: Method, quantities: PlanQuantities = US_PLAN_QUANTITIES): string[] {
+  return [...SAFETY_CAUTIONS, ...METHOD_CAUTIONS[method](quantities)];
 }
 
 export function afterProcessingSteps(method: Method): string[] {

@@ -1,5 +1,5 @@
 // The processing plan: minutes or pressure for a jar size at an altitude, or a refusal with its reasons.
-import { afterProcessingSteps, cautionsFor } from './cautions';
+import { afterProcessingSteps, cautionsFor, US_PLAN_QUANTITIES, type PlanQuantities } from './cautions';
 import {
   BOILING_WATER_ALTITUDE_TABLE,
   HIGHEST_TESTED_ALTITUDE_FT,
@@ -38,6 +38,8 @@ export interface ProcessingPlanInput {
   acidified?: boolean;
   /** The recipe's own altitude additions; they win over the general table. */
   altitudeTable?: AltitudeRow[];
+  /** How the cautions and reasons write their quantities (the household's units); US customary when left out. */
+  quantities?: PlanQuantities;
 }
 
 export interface ProcessingPlan {
@@ -66,10 +68,6 @@ function acidity(ph: number | undefined, acidified: boolean | undefined): { acid
   return { acid: acidified === true, why: 'it is not known to be acid or acidified (pH 4.6 or below)' };
 }
 
-function feet(value: number): string {
-  return `${value.toLocaleString('en-US')} ft`;
-}
-
 export function processingPlan(input: ProcessingPlanInput): ProcessingPlan {
   requireRecord(input, 'processing plan input');
   const method = requireOneOf(input.method, PROCESSING_METHODS, 'method');
@@ -79,6 +77,8 @@ export function processingPlan(input: ProcessingPlanInput): ProcessingPlan {
   const ph = input.ph === undefined ? undefined : requirePh(input.ph);
   const acidified = input.acidified === undefined ? undefined : requireBoolean(input.acidified, 'acidified');
   const recipeTable = input.altitudeTable === undefined ? undefined : readAltitudeTable(input.altitudeTable);
+  const q = input.quantities ?? US_PLAN_QUANTITIES;
+  const feet = (value: number) => q.altitude(value);
 
   const reasons: string[] = [];
   if (altitudeFt > HIGHEST_TESTED_ALTITUDE_FT) {
@@ -87,7 +87,7 @@ export function processingPlan(input: ProcessingPlanInput): ProcessingPlan {
     );
   }
 
-  const plan = { cautions: cautionsFor(method), afterProcessing: afterProcessingSteps(method) };
+  const plan = { cautions: cautionsFor(method, q), afterProcessing: afterProcessingSteps(method) };
   if (isPressureMethod(method)) {
     const row = rowForAltitude(PRESSURE_TABLE, altitudeFt);
     const pressurePsi = row ? (method === 'pressure-dial' ? row.dialPsi : row.weightedPsi) : null;
@@ -125,7 +125,9 @@ export function processingPlan(input: ProcessingPlanInput): ProcessingPlan {
       );
     }
     if (JAR_SIZES.indexOf(jarSize) > JAR_SIZES.indexOf(STEAM_CANNER_LARGEST_JAR)) {
-      reasons.push(`An atmospheric steam canner is tested only with jars up to a quart; a ${jarSize} jar is bigger.`);
+      reasons.push(
+        `An atmospheric steam canner is tested only with jars up to a ${q.jarSize(STEAM_CANNER_LARGEST_JAR)}; a ${q.jarSize(jarSize)} jar is bigger.`,
+      );
     }
   }
 

@@ -10,6 +10,8 @@ import {
   type Method,
   type RecipeIngredient,
 } from '../domain';
+import type { UnitSystem } from '../domain/units';
+import { headspaceInputValue, headspaceUnitWords } from '../words/units';
 
 export const ingredientInput = z.object({
   name: z
@@ -30,6 +32,18 @@ const minutes = z
   .int('Use whole minutes.')
   .min(0, 'Use 0 or more minutes.')
   .max(LIMITS.processingMinutes, `Use at most ${LIMITS.processingMinutes} minutes.`);
+
+/**
+ * Headspace arrives in inches (the form converts what was typed); the refusals speak the household's units, since
+ * that is what the person typed: "Use at most 50.8 mm." (NIST SP 811: 1 in = 25.4 mm exactly).
+ */
+function headspaceField(system: UnitSystem) {
+  const unit = headspaceUnitWords(system);
+  return z
+    .number({ error: `Enter the headspace in ${unit}.` })
+    .min(0, `Use 0 or more ${unit}.`)
+    .max(LIMITS.headspaceInches, `Use at most ${headspaceInputValue(LIMITS.headspaceInches, system)} ${unit}.`);
+}
 
 const fields = {
   productId: z.uuid({ error: 'Choose the product this recipe makes.' }),
@@ -68,10 +82,7 @@ const fields = {
     .array(z.object({ upToFt: z.number().int().min(0).max(LIMITS.altitudeFt.max), addMinutes: minutes }))
     .max(LIMITS.altitudeRows)
     .nullable(),
-  headspaceInches: z
-    .number({ error: 'Enter the headspace in inches.' })
-    .min(0, 'Use 0 or more inches.')
-    .max(LIMITS.headspaceInches, `Use at most ${LIMITS.headspaceInches} inches.`),
+  headspaceInches: headspaceField('us'),
   steps: z.string().max(LIMITS.length.steps, `Use at most ${limitWords(LIMITS.length.steps)} characters.`),
   source: z.string().max(LIMITS.length.source, `Use at most ${LIMITS.length.source} characters.`),
 };
@@ -90,6 +101,18 @@ export const recipeCreate = z.object(fields).partial().required(required).strict
 export type RecipeCreate = z.infer<typeof recipeCreate>;
 export const recipePatch = z.object(fields).partial().strict();
 export type RecipePatch = z.infer<typeof recipePatch>;
+
+const metricFields = { ...fields, headspaceInches: headspaceField('metric') };
+const recipeShapes = {
+  us: { create: recipeCreate, patch: recipePatch },
+  metric: {
+    create: z.object(metricFields).partial().required(required).strict(),
+    patch: z.object(metricFields).partial().strict(),
+  },
+} as const;
+
+/** The recipe shapes whose refusals speak the household's units (headspace in inches or mm). */
+export const recipeShapesIn = (system: UnitSystem) => recipeShapes[system];
 
 export interface RecipeView {
   id: string;

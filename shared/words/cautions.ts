@@ -1,6 +1,22 @@
 // The safety words beside every canning number and every use-by date, sized to the place they appear.
 // The plan's full list (per canner) is shared/domain/cautions.ts; these are the shorter forms.
 
+import type { PlanQuantities } from '../domain/cautions';
+import type { UnitSystem } from '../domain/units';
+import { altitudeWords, JAR_SIZE_NAMES, jarSizeWords, waterDepthWords } from './units';
+
+/**
+ * The quantities of a processing plan's cautions and reasons in the household's units: "1 inch" or "2.5 cm" of water
+ * over the jars, "10,000 ft" or "3,048 m", "quart" or "quart (946 mL)". The domain's numbers stay in inches and feet.
+ */
+export function planQuantities(system: UnitSystem): PlanQuantities {
+  return {
+    waterDepth: (inches) => waterDepthWords(inches, system),
+    altitude: (feet) => altitudeWords(feet, system),
+    jarSize: (size) => (system === 'metric' ? jarSizeWords(size, system) : JAR_SIZE_NAMES[size]),
+  };
+}
+
 /** The heading placed before any processing numbers on a plan. */
 export const BEFORE_YOU_START = 'Before you start';
 

@@ -50,6 +50,40 @@ export function headspaceWords(inches: number, system: UnitSystem = 'us'): strin
   return `${number} ${rounded > 1 ? 'inches' : 'inch'}`;
 }
 
+/** What the headspace field is called in the household's units: "inches" or "mm". */
+export function headspaceUnitWords(system: UnitSystem): string {
+  return system === 'metric' ? 'mm' : 'inches';
+}
+
+/**
+ * The headspace field's value as a person edits it: inches as stored, or millimetres to three decimals, which keeps
+ * every eighth of an inch exact (3.175, 6.35, 12.7, 25.4, 31.75 mm) so saving unchanged keeps the inches.
+ */
+export function headspaceInputValue(inches: number, system: UnitSystem): string {
+  if (system !== 'metric') return String(inches);
+  return String(Math.round(inches * MM_PER_INCH * 1000) / 1000);
+}
+
+/**
+ * The one parser of a typed headspace: "0.5" (inches) or "12.7" / "13 mm" (millimetres) becomes inches, the unit
+ * recipes and batches store (to 1/10,000 inch, so a value shown in mm comes back as it was); null when not a number.
+ */
+export function parseHeadspace(text: string, system: UnitSystem): number | null {
+  const cleaned = text
+    .trim()
+    .replace(',', '.')
+    .replace(/\s*(in|inch|inches|"|mm|millimeters|millimetres)$/i, '');
+  if (!/^(\d+(\.\d*)?|\.\d+)$/.test(cleaned)) return null;
+  const value = Number(cleaned);
+  return system === 'metric' ? Math.round((value / MM_PER_INCH) * 10_000) / 10_000 : value;
+}
+
+/** How deep water stands over the jars: "1 inch", "2 inches"; metric in cm to one decimal: "2.5 cm". */
+export function waterDepthWords(inches: number, system: UnitSystem = 'us'): string {
+  if (system === 'metric') return `${(Math.round(inches * MM_PER_INCH) / 10).toLocaleString('en-US')} cm`;
+  return headspaceWords(inches, 'us');
+}
+
 /** "2,350 ft"; metric to the whole meter: "716 m". */
 export function altitudeWords(feet: number, system: UnitSystem = 'us'): string {
   if (system === 'metric') return `${Math.round(feetToMeters(feet)).toLocaleString('en-US')} m`;

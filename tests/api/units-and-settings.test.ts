@@ -49,6 +49,7 @@ describe('the same batch plan in US customary and in metric', () => {
     // Nothing but the written amounts differs: processing, altitude, jars, canner loads, dates, the scaled recipe.
     const withoutWords = (plan: BatchPlan) => ({
       ...plan,
+      processing: { ...plan.processing, cautions: [] },
       shopping: {
         produce: plan.shopping.produce.map(({ name, role, amount, unit }) => ({ name, role, amount, unit })),
         pantry: plan.shopping.pantry.map(({ name, role, amount, unit }) => ({ name, role, amount, unit })),
@@ -57,6 +58,12 @@ describe('the same batch plan in US customary and in metric', () => {
     expect(withoutWords(metric)).toEqual(withoutWords(us));
     // A change of units is not an edit of the recipe.
     expect(metric.changes).toEqual([]);
+    // The cautions say the water over the jars in the household's units: 1 inch (USDA Complete Guide to Home
+    // Canning, 2015, Guide 1), 2.5 cm in metric (NIST SP 811: 1 in = 2.54 cm exactly); the rest of them is the same.
+    expect(us.processing.cautions.join(' ')).toContain('covered by at least 1 inch of water');
+    expect(metric.processing.cautions.join(' ')).toContain('covered by at least 2.5 cm of water');
+    expect(metric.processing.cautions.join(' ')).not.toMatch(/\binch/);
+    expect(metric.processing.cautions.length).toBe(us.processing.cautions.length);
 
     // 12 half-pints are three quarters of the tested 8 pints: 6 lb apples, 1 1/2 cups cider, 1 1/2 tbsp cinnamon.
     const byName = (plan: BatchPlan, name: string) => items(plan).find((i) => i.name === name)!;
@@ -186,6 +193,43 @@ describe('the household settings the Household page edits', () => {
 
     const after = (await (await ctx.signedIn('keeper@larderly.test')).get(householdUrl())).body.household;
     expect(after).toEqual(before);
+  });
+
+  it('names the altitude limits in the units the household uses, and saves nothing out of range', async () => {
+    const keeper = await ctx.signedIn('keeper@larderly.test');
+    const before = (await keeper.get(householdUrl())).body.household;
+    // LIMITS.altitudeFt (shared/schemas/limits.ts): -1,500 to 20,000 ft. NIST SP 811: 1 ft = 0.3048 m exactly, so
+    // 20,000 ft = 6,096 m and -1,500 ft = -457.2 m.
+    const us = await patch({ altitudeFt: 20_001 });
+    expect(us.status).toBe(400);
+    expect(us.body.error.fields.altitudeFt).toBe('The altitude cannot be above 20,000 ft.');
+
+    expect((await patch({ unitSystem: 'metric' })).status).toBe(200);
+    try {
+      // The form sends feet: 7,000 m typed is 22,966 ft.
+      const high = await patch({ altitudeFt: 22_966 });
+      expect(high.status).toBe(400);
+      expect(high.body.error.fields.altitudeFt).toBe('The altitude cannot be above 6,096 m.');
+      const low = await patch({ altitudeFt: -1_600 });
+      expect(low.body.error.fields.altitudeFt).toBe('The altitude cannot be below -457 m.');
+      const notNumber = await patch({ altitudeFt: 'high' });
+      expect(notNumber.body.error.fields.altitudeFt).toBe('Enter the altitude in meters as a number.');
+      // A patch that changes the units answers in the units it chooses.
+      const back = await patch({ unitSystem: 'us', altitudeFt: 20_001 });
+      expect(back.body.error.fields.altitudeFt).toBe('The altitude cannot be above 20,000 ft.');
+
+      // Headspace: LIMITS.headspaceInches is 2 inches, 50.8 mm (NIST SP 811: 1 in = 25.4 mm exactly).
+      const recipes = (await keeper.get(`${householdUrl()}/recipes`)).body.recipes as { id: string }[];
+      const deep = await keeper.patch(`${householdUrl()}/recipes/${recipes[0]!.id}`).send({ headspaceInches: 2.1 });
+      expect(deep.status).toBe(400);
+      expect(deep.body.error.fields.headspaceInches).toBe('Use at most 50.8 mm.');
+    } finally {
+      expect((await patch({ unitSystem: 'us' })).status).toBe(200);
+    }
+    const recipes = (await keeper.get(`${householdUrl()}/recipes`)).body.recipes as { id: string }[];
+    const deep = await keeper.patch(`${householdUrl()}/recipes/${recipes[0]!.id}`).send({ headspaceInches: 2.1 });
+    expect(deep.body.error.fields.headspaceInches).toBe('Use at most 2 inches.');
+    expect((await keeper.get(householdUrl())).body.household).toEqual(before);
   });
 
   it('starts the week board on the household’s first day of the week', async () => {

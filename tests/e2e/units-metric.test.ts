@@ -60,6 +60,8 @@ describe('a household in metric units, on a phone', () => {
       // Record it from the plan: the form and the batch page speak metric too.
       await page.getByRole('link', { name: 'Record this batch' }).click();
       await page.getByText('Processing plan at 716 m').waitFor();
+      // USDA Complete Guide to Home Canning (2015): at least 1 inch of water over the jars; NIST SP 811: 2.54 cm.
+      await page.getByText('Keep the jars covered by at least 2.5 cm of water').waitFor();
       await expect.poll(() => page.getByLabel('Jar size').locator('option:checked').innerText()).toBe('pint (473 mL)');
       await page.getByLabel('Seals checked already').check();
       await page.getByLabel('Jars sealed').fill('9');
@@ -84,6 +86,28 @@ describe('a household in metric units, on a phone', () => {
         .waitFor();
       await page.getByText('Tested minutes at 0–305 m').waitFor();
       await screenshot(page, 'units-metric-recipe');
+
+      // The recipe form takes the headspace in mm and stores inches: 6.35 mm / 25.4 mm an inch (NIST SP 811) = 1/4 in.
+      const storedHeadspace = (recipes as (Named & { headspaceInches: number })[]).find(
+        (r) => r.id === beets.id,
+      )!.headspaceInches;
+      try {
+        await page.goto(`${baseURL}/h/${hid}/recipes/${beets.id}/edit`);
+        const headspace = page.getByLabel('Headspace (mm)');
+        await expect.poll(() => headspace.inputValue()).toBe(String(Math.round(storedHeadspace * 25.4 * 1000) / 1000));
+        await headspace.fill('6.35');
+        await page.getByText('That is 1/4 inch, as tested recipes give it.').waitFor();
+        await screenshot(page, 'units-metric-recipe-headspace');
+        await page.getByRole('button', { name: 'Save the recipe' }).click();
+        await page.waitForURL(`**/recipes/${beets.id}`);
+        const saved = (await (await page.request.get(`${api}/recipes/${beets.id}`)).json()).recipe;
+        expect(saved.headspaceInches).toBe(0.25);
+      } finally {
+        await page.request.patch(`${api}/recipes/${beets.id}`, {
+          data: { headspaceInches: storedHeadspace },
+          headers: { Origin: baseURL },
+        });
+      }
     } finally {
       const reset = await page.request.patch(api, {
         data: { unitSystem: 'us', altitudeFt: 2350, weekStartsOn: 1 },

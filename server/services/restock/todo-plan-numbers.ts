@@ -62,7 +62,12 @@ function planFor({ household, product, recipe, today, jars, jarSize, reason, run
     },
     { jars, jarSize },
   );
-  const processing = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt: household.altitudeFt });
+  const processing = recipeProcessingPlan(recipe, {
+    jarSize,
+    method: recipe.method,
+    altitudeFt: household.altitudeFt,
+    unitSystem: household.unitSystem,
+  });
   const target = targetDate(today, product.harvestMonths, runOutOn);
   const system = household.unitSystem;
   // The canner the recipe's method goes into; a household without one for it is counted in its default canner's loads.

@@ -21,7 +21,12 @@ export function notAllowed(plan: ProcessingPlan, what = 'This batch'): AppError 
 export async function previewPlan(household: Household, recipeId: string, jarSize: JarSize, method: Method) {
   requireConfirmedAltitude(household);
   const recipe = await findRecipe(household.id, recipeId);
-  return recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt });
+  return recipeProcessingPlan(recipe, {
+    jarSize,
+    method,
+    altitudeFt: household.altitudeFt,
+    unitSystem: household.unitSystem,
+  });
 }
 
 export async function createBatch(
@@ -60,6 +65,7 @@ export async function createBatch(
     jarSize: input.jarSize,
     method: input.method,
     altitudeFt: household.altitudeFt,
+    unitSystem: household.unitSystem,
   });
   if (!plan.allowed) throw notAllowed(plan);
   // Left out, the jars go to the product's usual place. Read in the write's transaction, share-locked, so a place

@@ -235,6 +235,7 @@ export async function checkImport(household: Household, csv: string) {
         jarSize: value.jar_size,
         method: value.method,
         altitudeFt: household.altitudeFt,
+        unitSystem: household.unitSystem,
       });
       if (!plan.allowed)
         return void problems.push({ row, field: 'method', message: `Not allowed: ${plan.reasons.join(' ')}` });

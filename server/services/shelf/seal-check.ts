@@ -136,6 +136,7 @@ export async function checkSeals(
         jarSize: batch.jarSize,
         method: batch.method,
         altitudeFt: household.altitudeFt,
+        unitSystem: household.unitSystem,
       });
       if (!plan.allowed) throw notAllowed(plan, 'This reprocess');
       const again = await BatchProcessing.create(

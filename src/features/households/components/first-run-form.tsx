@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { PROCESSING_METHODS, type Method } from '@shared/domain';
 import type { HouseholdView } from '@shared/schemas/households';
-import { METHOD_NAMES, WEEKDAY_NAMES } from '@shared/words';
+import { altitudeInputValue, altitudeUnitWords, METHOD_NAMES, parseAltitude, WEEKDAY_NAMES } from '@shared/words';
 import { SelectField, TextField } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
 import { ApiError } from '@/lib/api-client';
@@ -16,7 +16,11 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
   const fromBrowser = browserTimeZone();
   const [answers, setAnswers] = useState({
     // A household never confirmed may still read 0 ft only because nobody asked: start empty so nobody confirms it by accident.
-    altitudeFt: household.altitudeConfirmed || household.altitudeFt !== 0 ? String(household.altitudeFt) : '',
+    // Typed in the household's units (feet or meters); stored in feet.
+    altitude:
+      household.altitudeConfirmed || household.altitudeFt !== 0
+        ? altitudeInputValue(household.altitudeFt, household.unitSystem)
+        : '',
     timeZone: household.altitudeConfirmed ? household.timeZone : fromBrowser,
     defaultMethod: household.defaultMethod,
     cannerCapacityJars: String(household.cannerCapacityJars),
@@ -29,7 +33,7 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
 
   function submit(event: FormEvent) {
     event.preventDefault();
-    const altitude = answers.altitudeFt.trim() === '' ? Number.NaN : Number(answers.altitudeFt.replaceAll(',', ''));
+    const altitude = parseAltitude(answers.altitude, household.unitSystem) ?? Number.NaN;
     const capacity = answers.cannerCapacityJars.trim() === '' ? Number.NaN : Number(answers.cannerCapacityJars);
     update.mutate(
       {
@@ -47,10 +51,10 @@ export function FirstRunForm({ household, onConfirmed }: { household: HouseholdV
     <form ref={form} onSubmit={submit} noValidate className="flex max-w-2xl flex-col gap-5">
       <div className="flex flex-col gap-2">
         <TextField
-          label="Altitude of your kitchen, in feet above sea level"
+          label={`Altitude of your kitchen, in ${altitudeUnitWords(household.unitSystem)} above sea level`}
           inputMode="numeric"
-          value={answers.altitudeFt}
-          onChange={set('altitudeFt')}
+          value={answers.altitude}
+          onChange={set('altitude')}
           error={error?.fields.altitudeFt}
           hint="Water boils at a lower temperature the higher you live, so jars need longer, or more pressure, to be safe."
         />

@@ -82,7 +82,14 @@ export function NewBatchForm({
   // Where the jars go: the product's usual place unless the cook chose another ('none': no place).
   const place = params.get('place') ?? product?.defaultPlaceId ?? 'none';
 
-  const plan = recipe ? recipeProcessingPlan(recipe, { jarSize, method, altitudeFt: household.altitudeFt }) : null;
+  const plan = recipe
+    ? recipeProcessingPlan(recipe, {
+        jarSize,
+        method,
+        altitudeFt: household.altitudeFt,
+        unitSystem: household.unitSystem,
+      })
+    : null;
   const filled = numberFrom(jarsText);
   const sealed = numberFrom(sealedText);
   const unsealed =

@@ -15,7 +15,15 @@ import {
 
 import type { ProductView } from '@shared/schemas/products';
 import type { RecipeView } from '@shared/schemas/recipes';
-import { INGREDIENT_ROLE_NAMES, INGREDIENT_UNIT_NAMES, METHOD_NAMES } from '@shared/words';
+import {
+  headspaceInputValue,
+  headspaceWords,
+  headspaceUnitWords,
+  INGREDIENT_ROLE_NAMES,
+  INGREDIENT_UNIT_NAMES,
+  METHOD_NAMES,
+  parseHeadspace,
+} from '@shared/words';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextAreaField, TextField } from '@/components/ui/field';
 import { FormFooter } from '@/components/ui/form-footer';
@@ -53,6 +61,7 @@ function draftFrom(
   products: ProductView[],
   recipe: RecipeView | undefined,
   productId: string | undefined,
+  system: UnitSystem,
   name = recipe?.name ?? '',
 ) {
   const firstProduct = products.find((p) => p.id === (recipe?.productId ?? productId)) ?? products[0];
@@ -65,8 +74,10 @@ function draftFrom(
     acidified: recipe?.acidified ?? false,
     ph: recipe?.ph === null || recipe === undefined ? '' : String(recipe.ph),
     acidPercent: recipe?.acidPercent === null || recipe === undefined ? '' : String(recipe.acidPercent),
-    headspaceInches: String(
+    // Typed in the household's units (inches or mm); stored in inches.
+    headspace: headspaceInputValue(
       recipe?.headspaceInches ?? (firstProduct ? defaultHeadspaceInches(firstProduct.kind) : 0.5),
+      system,
     ),
     baseMinutes: Object.fromEntries(
       JAR_SIZES.map((size) => [size, recipe?.baseMinutes[size] === undefined ? '' : String(recipe.baseMinutes[size])]),
@@ -75,6 +86,13 @@ function draftFrom(
     source: recipe?.source ?? '',
     altitudeTable: recipe?.altitudeTable ?? null,
   };
+}
+
+/** In metric, the inches a tested recipe gives beside the mm typed, so the cook can check it against the book. */
+function headspaceHint(text: string, system: UnitSystem): string | undefined {
+  const inches = parseHeadspace(text, system);
+  if (system !== 'metric' || inches === null || inches <= 0) return undefined;
+  return `That is ${headspaceWords(inches, 'us')}, as tested recipes give it.`;
 }
 
 const ingredientDrafts = (recipe: RecipeView | undefined, system: UnitSystem): IngredientDraft[] =>
@@ -95,7 +113,7 @@ export function RecipeForm({
   const units = useUnits();
   const save = useSaveRecipe(hid, recipe?.id);
   const navigate = useNavigate();
-  const [form, setForm] = useState(() => draftFrom(products, recipe, productId));
+  const [form, setForm] = useState(() => draftFrom(products, recipe, productId, units.system));
   const [ingredients, setIngredients] = useState<IngredientDraft[]>(() => ingredientDrafts(recipe, units.system));
   const [copiedFrom, setCopiedFrom] = useState('');
   const error = save.error instanceof ApiError ? save.error : null;
@@ -104,7 +122,7 @@ export function RecipeForm({
   function startFromCopy(recipeId: string, household: RecipeView[]) {
     setCopiedFrom(recipeId);
     const original = household.find((r) => r.id === recipeId);
-    setForm(draftFrom(products, original, productId, original ? `${original.name} (copy)` : ''));
+    setForm(draftFrom(products, original, productId, units.system, original ? `${original.name} (copy)` : ''));
     setIngredients(ingredientDrafts(original, units.system));
     save.reset();
   }
@@ -132,7 +150,8 @@ export function RecipeForm({
         method: form.method,
         baseMinutes,
         altitudeTable: form.altitudeTable,
-        headspaceInches: numberFrom(form.headspaceInches),
+        // Not a number stays not a number, so the server's field error says what to enter.
+        headspaceInches: parseHeadspace(form.headspace, units.system) ?? Number.NaN,
         steps: form.steps,
         source: form.source,
       },
@@ -195,16 +214,12 @@ export function RecipeForm({
         ))}
       </SelectField>
       <TextField
-        label="Headspace (inches)"
+        label={`Headspace (${headspaceUnitWords(units.system)})`}
         inputMode="decimal"
-        value={form.headspaceInches}
-        onChange={(e) => setForm({ ...form, headspaceInches: e.target.value })}
+        value={form.headspace}
+        onChange={(e) => setForm({ ...form, headspace: e.target.value })}
         error={error?.fields.headspaceInches}
-        hint={
-          units.system === 'metric' && Number(form.headspaceInches) > 0
-            ? `As the tested recipe gives it; that is ${units.headspace(Number(form.headspaceInches))}.`
-            : undefined
-        }
+        hint={headspaceHint(form.headspace, units.system)}
       />
       <div className="sm:col-span-2">
         <CheckboxField

@@ -25,7 +25,12 @@ export function ScalingTool({ hid, recipe, altitudeFt }: { hid: string; recipe: 
         { jars, jarSize },
       )
     : null;
-  const plan = recipeProcessingPlan(recipe, { jarSize, method: recipe.method, altitudeFt });
+  const plan = recipeProcessingPlan(recipe, {
+    jarSize,
+    method: recipe.method,
+    altitudeFt,
+    unitSystem: units.system,
+  });
 
   return (
     <section aria-labelledby="scale-heading" className="flex flex-col gap-4">
