@@ -65,17 +65,29 @@ function refusal(action: JarAction, jar: Jar): string {
   return `Jar ${jar.code} ${jarNow(jar)}. ${what} Refresh to see its state now.`;
 }
 
+/** One step in a jar's life: what it changes, the states it may start from, and what a refusal says. */
+interface JarStep {
+  kind: 'opened' | 'finished' | 'discarded' | 'given';
+  changes: Partial<Jar>;
+  /** Added to the conditional UPDATE's where: the states (and seal) the step may start from. */
+  from: WhereOptions<Jar>;
+  refuse: (jar: Jar) => string;
+  event?: { givenTo?: string | null };
+  /** A jar that leaves the shelf for good: its empty jar comes back to stock or not, by the one rule of jar-stock. */
+  ending?: JarEnding;
+}
+
 /**
- * Moves a jar along sealed -> opened -> finished, or to discarded. The conditional UPDATE is the
- * lock: of many people acting on one jar at once, exactly one changes it and the others get 409.
+ * Takes one step on a jar in one transaction: the jar's history row, and the stock its ending returns. The
+ * conditional UPDATE is the lock: of many people acting on one jar at once, exactly one changes it and the others
+ * get 409.
  */
-export async function actOnJar(
+async function stepJar(
   sequelize: Sequelize,
   household: Household,
   jarId: string,
-  action: JarAction,
   userId: string,
-  options: { kept?: boolean } = {},
+  plan: (jar: JarWithParts, today: string) => JarStep,
 ): Promise<JarActed> {
   const today = todayIn(household.timeZone);
   return sequelize.transaction(async (transaction) => {
@@ -85,46 +97,35 @@ export async function actOnJar(
       transaction,
     })) as JarWithParts | null;
     if (!jar) throw notFound('That jar');
-    const changes: Partial<Jar> =
-      action === 'open'
-        ? {
-            state: 'opened',
-            openedOn: today,
-            useBy: useBy(today, jar.product.useWithinDays ?? defaultUseWithinDays(jar.product.kind)),
-          }
-        : action === 'finish'
-          ? { state: 'finished', finishedOn: today, remainingTbsp: 0 }
-          : { state: 'discarded', discardedOn: today };
-    const [count, rows] = await Jar.update(changes, {
-      where: { id: jar.id, state: { [Op.in]: FROM[action] } },
+    const step = plan(jar, today);
+    const [count, rows] = await Jar.update(step.changes, {
+      where: { id: jar.id, ...step.from },
       returning: true,
       transaction,
     });
     if (count === 0) {
       await jar.reload({ transaction });
-      throw conflict(refusal(action, jar));
+      throw conflict(step.refuse(jar));
     }
     const event = await JarEvent.create(
       {
         householdId: household.id,
         jarId: jar.id,
         batchId: jar.batchId,
-        kind: EVENT[action],
+        kind: step.kind,
         userId,
         happenedOn: today,
         stateBefore: jarBefore(jar),
+        ...step.event,
       },
       { transaction },
     );
-    if (action !== 'open') {
-      // A discarded jar's glass is usually washed and kept; the person says when it broke or went out with the food.
-      const ending: JarEnding =
-        action === 'finish' ? { reason: 'finish' } : { reason: 'discard', kept: options.kept ?? true };
+    if (step.ending) {
       await jarEnded(
         sequelize,
         household.id,
         { jarSize: jar.batch.jarSize, batchId: jar.batchId },
-        ending,
+        step.ending,
         userId,
         event.id,
         transaction,
@@ -134,64 +135,64 @@ export async function actOnJar(
   });
 }
 
+/** Moves a jar along sealed -> opened -> finished, or to discarded. */
+export function actOnJar(
+  sequelize: Sequelize,
+  household: Household,
+  jarId: string,
+  action: JarAction,
+  userId: string,
+  options: { kept?: boolean } = {},
+): Promise<JarActed> {
+  return stepJar(sequelize, household, jarId, userId, (jar, today) => ({
+    kind: EVENT[action],
+    changes:
+      action === 'open'
+        ? {
+            state: 'opened',
+            openedOn: today,
+            useBy: useBy(today, jar.product.useWithinDays ?? defaultUseWithinDays(jar.product.kind)),
+          }
+        : action === 'finish'
+          ? { state: 'finished', finishedOn: today, remainingTbsp: 0 }
+          : { state: 'discarded', discardedOn: today },
+    from: { state: { [Op.in]: FROM[action] } },
+    refuse: (now) => refusal(action, now),
+    // A discarded jar's glass is usually washed and kept; the person says when it broke or went out with the food.
+    ending:
+      action === 'open'
+        ? undefined
+        : action === 'finish'
+          ? { reason: 'finish' }
+          : { reason: 'discard', kept: options.kept ?? true },
+  }));
+}
+
 /**
  * Gives a sealed jar away: it leaves the shelf in a state of its own, so its empty jar does not come back and the
  * forecast does not count it as eaten. Only a jar known to be sealed goes: one still cooling is checked first
  * (USDA Complete Guide to Home Canning, 2015: check the seals 12 to 24 hours after processing), and an unsealed jar
- * is in the fridge already (NCHFP: refrigerate it or reprocess it). The same conditional UPDATE as actOnJar is the lock.
+ * is in the fridge already (NCHFP: refrigerate it or reprocess it).
  */
-export async function giveJar(
+export function giveJar(
   sequelize: Sequelize,
   household: Household,
   jarId: string,
   to: string | null,
   userId: string,
 ): Promise<JarActed> {
-  const today = todayIn(household.timeZone);
-  return sequelize.transaction(async (transaction) => {
-    const jar = (await Jar.findOne({
-      where: { id: jarId, householdId: household.id },
-      include: withParts,
-      transaction,
-    })) as JarWithParts | null;
-    if (!jar) throw notFound('That jar');
-    const [count, rows] = await Jar.update(
-      { state: 'given', givenOn: today, givenTo: to },
-      { where: { id: jar.id, state: 'sealed', seal: 'checked' }, returning: true, transaction },
-    );
-    if (count === 0) {
-      await jar.reload({ transaction });
-      if (jar.state === 'sealed')
-        throw conflict(`Jar ${jar.code} is still cooling and its seal is not checked yet. Check its seal first.`);
-      throw conflict(
-        `Jar ${jar.code} ${jarNow(jar)}. Only a sealed jar on the shelf can be given away. Refresh to see its state now.`,
-      );
-    }
-    const event = await JarEvent.create(
-      {
-        householdId: household.id,
-        jarId: jar.id,
-        batchId: jar.batchId,
-        kind: 'given',
-        userId,
-        happenedOn: today,
-        givenTo: to,
-        stateBefore: jarBefore(jar),
-      },
-      { transaction },
-    );
-    // The one rule for jar endings: a given jar's empty jar leaves with it, so stock does not change.
-    await jarEnded(
-      sequelize,
-      household.id,
-      { jarSize: jar.batch.jarSize, batchId: jar.batchId },
-      { reason: 'given' },
-      userId,
-      event.id,
-      transaction,
-    );
-    return { jar: jarView(rows[0], jar.batch, jar.product, shelfClock(household)), eventId: event.id };
-  });
+  return stepJar(sequelize, household, jarId, userId, (_jar, today) => ({
+    kind: 'given',
+    changes: { state: 'given', givenOn: today, givenTo: to },
+    from: { state: 'sealed', seal: 'checked' },
+    refuse: (now) =>
+      now.state === 'sealed'
+        ? `Jar ${now.code} is still cooling and its seal is not checked yet. Check its seal first.`
+        : `Jar ${now.code} ${jarNow(now)}. Only a sealed jar on the shelf can be given away. Refresh to see its state now.`,
+    event: { givenTo: to },
+    // A given jar's empty jar leaves with it: the one rule for jar endings says so.
+    ending: { reason: 'given' },
+  }));
 }
 
 /** How many jars the household gave away this calendar year (its own time zone's year), by product. */
