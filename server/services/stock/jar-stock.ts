@@ -45,18 +45,18 @@ export async function changeStock(
     `INSERT INTO jar_stock (household_id, item, size) VALUES ($1, $2, $3) ON CONFLICT (household_id, item, size) DO NOTHING`,
     { bind: [householdId, change.item, change.size], transaction },
   );
-  const [row] = await sequelize.query<{ count: number }>(
-    'SELECT count FROM jar_stock WHERE household_id = $1 AND item = $2 AND size = $3 FOR UPDATE',
-    { bind: [householdId, change.item, change.size], type: QueryTypes.SELECT, transaction },
+  // One statement locks the row (the FOR UPDATE sub-select waits for any other writer and reads its count), and
+  // writes the new count, never below 0; it returns the count before and after.
+  const [row] = await sequelize.query<{ before: number; after: number }>(
+    `UPDATE jar_stock s SET count = GREATEST(0, o.count + $4), updated_at = now()
+       FROM (SELECT count FROM jar_stock WHERE household_id = $1 AND item = $2 AND size = $3 FOR UPDATE) o
+      WHERE s.household_id = $1 AND s.item = $2 AND s.size = $3
+      RETURNING o.count AS before, s.count AS after`,
+    { bind: [householdId, change.item, change.size, change.delta], type: QueryTypes.SELECT, transaction },
   );
-  const before = row!.count;
-  const after = Math.max(0, before + change.delta);
+  const { before, after } = row!;
   const short = after - (before + change.delta);
   if (change.delta !== 0 || change.reason === 'correction') {
-    await sequelize.query(
-      'UPDATE jar_stock SET count = $4, updated_at = now() WHERE household_id = $1 AND item = $2 AND size = $3',
-      { bind: [householdId, change.item, change.size, after], transaction },
-    );
     await sequelize.query(
       `INSERT INTO jar_stock_changes (household_id, item, size, reason, delta, count_after, short, note, user_id, batch_id, jar_event_id, created_at)
        VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, clock_timestamp())`,
