@@ -6,7 +6,8 @@ import { currentMembership } from '../auth/guards';
 import { todayIn } from '../services/clock';
 
 interface Answer {
-  body: string;
+  /** The JSON as sent, encoded once (res.send would encode a string again on every request). */
+  body: Buffer;
   etag: string;
   /** The body compressed, made once per answer the first time a browser asks for each encoding. */
   encoded: Partial<Record<Encoding, Promise<Buffer>>>;
@@ -17,7 +18,7 @@ type Encoding = 'br' | 'gzip';
 const COMPRESS_FROM_BYTES = 1024;
 const brotli = promisify(zlib.brotliCompress);
 const gzip = promisify(zlib.gzip);
-const compress: Record<Encoding, (body: string) => Promise<Buffer>> = {
+const compress: Record<Encoding, (body: Buffer) => Promise<Buffer>> = {
   br: (body) => brotli(body, { params: { [zlib.constants.BROTLI_PARAM_QUALITY]: 5 } }),
   gzip: (body) => gzip(body),
 };
@@ -33,7 +34,7 @@ export function createReadCache(maxEntries = 2_000) {
 
   function remember(key: string, version: string, compute: () => Promise<unknown>) {
     const answer = compute().then((value) => {
-      const body = JSON.stringify(value);
+      const body = Buffer.from(JSON.stringify(value));
       return {
         body,
         etag: `W/"${createHash('sha1').update(body).digest('base64url')}"`,

@@ -6,6 +6,7 @@ interface ProfileNode {
   id: number;
   callFrame: { functionName: string; url: string; lineNumber: number };
   hitCount: number;
+  children?: number[];
 }
 
 const [file, entries = '15'] = process.argv.slice(2);
@@ -44,3 +45,20 @@ console.log('\nself time by function:');
 for (const line of top(byFunction)) console.log(`  ${line}`);
 console.log('\nself time by package or folder:');
 for (const line of top(byPlace)) console.log(`  ${line}`);
+
+// Inclusive time by package or folder: a sample counts once for every place on its stack, so a middleware's
+// share includes the library code it calls (express-session's share holds its store's query, and so on).
+const parent = new Map<number, number>();
+for (const node of profile.nodes) for (const child of node.children ?? []) parent.set(child, node.id);
+const nodeById = new Map(profile.nodes.map((node) => [node.id, node]));
+const inclusive = new Map<string, number>();
+for (const [id, n] of hits) {
+  const places = new Set<string>();
+  for (let at: number | undefined = id; at !== undefined; at = parent.get(at)) {
+    const url = nodeById.get(at)!.callFrame.url;
+    if (url) places.add(where(url));
+  }
+  for (const place of places) inclusive.set(place, (inclusive.get(place) ?? 0) + n);
+}
+console.log('\ntotal time (self and callees) by package or folder:');
+for (const line of top(inclusive)) console.log(`  ${line}`);
