@@ -69,10 +69,14 @@ async function claim(
   const jarReminder = 'jarId' in values;
   // A use-by reminder is one per jar, kind and person; a seal check one per processing and person.
   const subject = jarReminder ? 'jar_id' : 'processing_id';
+  // The seal checks' unique index holds only their own rows (migration 0190), so the conflict names its predicate.
+  const arbiter = jarReminder
+    ? '(jar_id, kind, user_id)'
+    : '(processing_id, kind, user_id) WHERE processing_id IS NOT NULL';
   const rows = await ctx.sequelize.query<{ id: string }>(
     `INSERT INTO reminder_deliveries (id, household_id, ${subject}, user_id, kind, use_by, claimed_at, attempts, created_at, updated_at)
      VALUES (:id, :householdId, :subject, :userId, :kind, :useBy, :now, 1, :now, :now)
-     ON CONFLICT (${subject}, kind, user_id) DO UPDATE SET claimed_at = :now, attempts = reminder_deliveries.attempts + 1, updated_at = :now
+     ON CONFLICT ${arbiter} DO UPDATE SET claimed_at = :now, attempts = reminder_deliveries.attempts + 1, updated_at = :now
        WHERE reminder_deliveries.sent_at IS NULL
          AND reminder_deliveries.claimed_at < :now::timestamptz - make_interval(mins => :staleMinutes)
          AND reminder_deliveries.attempts < :maxAttempts
@@ -213,24 +217,31 @@ async function claimUseByPart(ctx: Notifiers, now: Date, part: number) {
   const utcToday = now.toISOString().slice(0, 10);
   // Raw SQL: a set-based claim, where a query per household, member and jar took minutes for 100,000 jars.
   const [row] = await ctx.sequelize.query<{ claimed: number; toSend: Claimed[] }>(
-    `WITH local AS (
-         SELECT j.id, j.code, j.use_by, j.household_id, j.product_id, h.name, h.time_zone,
-                (:now::timestamptz AT TIME ZONE h.time_zone)::date AS today,
-                extract(hour FROM :now::timestamptz AT TIME ZONE h.time_zone)::int AS hour
-           FROM jars j JOIN households h ON h.id = j.household_id
-          WHERE j.state = 'opened' AND j.use_by BETWEEN :from AND :to
-            AND j.household_id >= :lowest::uuid AND (:above::uuid IS NULL OR j.household_id < :above::uuid)
-       ), due AS (
-         SELECT l.id AS jar_id, l.code, l.use_by, l.household_id, l.name AS household_name, l.time_zone,
-                l.product_id, m.user_id, np.email_reminders, np.reminder_hour, np.days_before,
-                CASE WHEN l.use_by = l.today THEN 'today' ELSE 'soon' END AS kind,
-                NOT EXISTS (SELECT 1 FROM push_subscriptions ps WHERE ps.user_id = m.user_id)
-                  AND NOT (:mailEnabled AND COALESCE(np.email_reminders, :defaultEmail)) AS nothing_to_send
-           FROM local l
-           JOIN memberships m ON m.household_id = l.household_id
+    `WITH homes AS MATERIALIZED (
+         -- Each household: its today and hour, worked out once (not per jar and member; MATERIALIZED keeps the planner
+         -- from folding these time-zone conversions back into the joins below, where they ran for every row).
+         SELECT h.id, (t.local)::date AS today, extract(hour FROM t.local)::int AS hour
+           FROM households h, LATERAL (SELECT :now::timestamptz AT TIME ZONE h.time_zone AS local) t
+          WHERE h.id >= :lowest::uuid AND (:above::uuid IS NULL OR h.id < :above::uuid)
+       ), members AS (
+         -- The members whose reminder hour has come, with how many days before the use-by they want reminding.
+         SELECT hm.id AS household_id, hm.today, m.user_id, np.email_reminders,
+                COALESCE(np.days_before, :defaultDaysBefore) AS days_before
+           FROM homes hm
+           JOIN memberships m ON m.household_id = hm.id
            LEFT JOIN notification_preferences np ON np.user_id = m.user_id
-          WHERE l.use_by - l.today BETWEEN 0 AND COALESCE(np.days_before, :defaultDaysBefore)
-            AND l.hour >= COALESCE(np.reminder_hour, :defaultHour) AND l.hour < COALESCE(np.reminder_hour, :defaultHour) + :catchUpHours
+          WHERE hm.hour >= COALESCE(np.reminder_hour, :defaultHour) AND hm.hour < COALESCE(np.reminder_hour, :defaultHour) + :catchUpHours
+       ), due AS (
+         -- The opened jars of their households whose use-by is from today to that many days ahead (read on the partial
+         -- index jars_opened_household_use_by; the fixed window around the UTC date narrows the index range).
+         SELECT j.id AS jar_id, j.use_by, mb.household_id, mb.user_id,
+                CASE WHEN j.use_by = mb.today THEN 'today' ELSE 'soon' END AS kind,
+                NOT EXISTS (SELECT 1 FROM push_subscriptions ps WHERE ps.user_id = mb.user_id)
+                  AND NOT (:mailEnabled AND COALESCE(mb.email_reminders, :defaultEmail)) AS nothing_to_send
+           FROM members mb
+           JOIN jars j ON j.household_id = mb.household_id AND j.state = 'opened'
+            AND j.use_by BETWEEN :from AND :to
+            AND j.use_by BETWEEN mb.today AND mb.today + mb.days_before
        ), claimed AS (
          INSERT INTO reminder_deliveries (id, household_id, jar_id, user_id, kind, use_by, claimed_at, attempts,
                                           pushes_sent, email_sent, sent_at, created_at, updated_at)
