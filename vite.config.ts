@@ -41,7 +41,15 @@ const SHELL_STARTS = ['./src/app/restore-offline.ts', './src/app/routes/sign-in.
  * sign-in loads none of it. A module the shell imports through an entry file (src/features/<name>/index.ts,
  * shared/words/index.ts) drags every module that entry names into the shell: the shell imports narrow modules.
  */
-const firstCode = { entry: new Set<string>(), shell: new Set<string>(), auth: new Set<string>() };
+const firstCode = {
+  entry: new Set<string>(),
+  shell: new Set<string>(),
+  auth: new Set<string>(),
+  /** What the signed-in layouts import statically besides the first code. */
+  layouts: new Set<string>(),
+  /** How many of the build's entries (index.html and every lazily imported module) reach each module statically. */
+  shared: new Map<string, number>(),
+};
 function findFirstCode(): Plugin {
   return {
     name: 'larderly-first-code',
@@ -59,6 +67,16 @@ function findFirstCode(): Plugin {
       firstCode.entry.clear();
       firstCode.shell.clear();
       firstCode.auth.clear();
+      firstCode.shared.clear();
+      firstCode.layouts.clear();
+      const entries = new Set([ENTRY_HTML]);
+      for (const id of this.getModuleIds())
+        for (const lazy of this.getModuleInfo(id)?.dynamicallyImportedIds ?? []) entries.add(lazy);
+      for (const start of entries) {
+        const reached = new Set<string>();
+        reach([start], reached, new Set());
+        for (const id of reached) firstCode.shared.set(id, (firstCode.shared.get(id) ?? 0) + 1);
+      }
       reach([ENTRY_HTML], firstCode.entry, new Set());
       reach(SHELL_STARTS, firstCode.shell, firstCode.entry);
       // The sign-in screen's own module stays its chunk, and the code only the auth screens use (their form, layout and
@@ -66,6 +84,8 @@ function findFirstCode(): Plugin {
       firstCode.shell.delete(SHELL_STARTS[1]!);
       for (const id of firstCode.shell) if (authScreensOnly(id)) firstCode.auth.add(id);
       for (const id of firstCode.auth) firstCode.shell.delete(id);
+      const layouts = [...this.getModuleIds()].filter(signedInLayout);
+      reach(layouts, firstCode.layouts, new Set([...firstCode.entry, ...firstCode.shell]));
     },
   };
 }
@@ -76,15 +96,23 @@ const authScreensOnly = (id: string) =>
     id,
   );
 
-/** The app's code outside its screens and layouts that the signed-in screens share (the first code aside). */
-function sharedAppModule(id: string) {
-  if (/node_modules[\\/]date-fns[\\/]/.test(id)) return !firstCode.entry.has(id) && !firstCode.shell.has(id);
+/** The layouts every household screen renders inside: a screen loads them with its shared code, in one file. */
+const signedInLayout = (id: string) => /[\\/]src[\\/]app[\\/]layouts[\\/](require-auth|app-layout)\.tsx$/.test(id);
+
+/**
+ * The app's code outside its screens that two or more signed-in screens share, and their layouts (the first code
+ * aside). date-fns's few functions join it rather than making a file of their own.
+ */
+function signedInShared(id: string) {
+  if (firstCode.entry.has(id) || firstCode.shell.has(id)) return false;
+  if (firstCode.layouts.has(id)) return true;
+  const shared = (firstCode.shared.get(id) ?? 0) >= 2;
+  if (/node_modules[\\/]date-fns[\\/]/.test(id)) return shared;
   return (
+    shared &&
     !id.includes('node_modules') &&
     /[\\/](src|shared)[\\/]/.test(id) &&
-    !/[\\/]src[\\/]app[\\/](routes|layouts)[\\/]/.test(id) &&
-    !firstCode.entry.has(id) &&
-    !firstCode.shell.has(id)
+    !/[\\/]src[\\/]app[\\/](routes|layouts)[\\/]/.test(id)
   );
 }
 
@@ -136,13 +164,7 @@ export default defineConfig({
               priority: 2,
               includeDependenciesRecursively: false,
             },
-            {
-              name: 'common',
-              test: sharedAppModule,
-              minShareCount: 2,
-              priority: 1,
-              includeDependenciesRecursively: false,
-            },
+            { name: 'common', test: signedInShared, priority: 1, includeDependenciesRecursively: false },
             { name: 'auth', test: (id) => firstCode.auth.has(id), priority: 1, includeDependenciesRecursively: false },
           ],
         },
