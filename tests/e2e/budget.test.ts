@@ -15,7 +15,10 @@ import { describe, expect, it } from 'vitest';
 // The same day gifts, jar and lid stock, shelf places and the Units setting landed; the shared chunk carries their
 // shared words and components (measured: sign-in 135.5 KB, Today 140.1 KB), so the budgets are 137 and 142. The shared
 // chunk is loaded by sign-in too: splitting it so sign-in loads only what it needs is open work (issue 15).
-const BUDGET_KB = { signIn: 137, today: 142 };
+// Since 2026-12-03 (branch front) sign-in loads the entry, its form and the offline restore only, not the common chunk:
+// measured sign-in 135.5 -> 118.0 KB in 8 -> 4 files, Today 140.1 -> 138.5 KB in 9 -> 4 files (Week's board and Shelf's
+// table and search load after the first paint); budgets 121 and 141.
+const BUDGET_KB = { signIn: 121, today: 141 };
 
 interface Chunk {
   file: string;
