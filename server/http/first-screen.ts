@@ -9,7 +9,11 @@ interface ManifestChunk {
 }
 type Manifest = Record<string, ManifestChunk>;
 
-/** The modules a screen's first render needs besides the entry: the offline restore, the layouts, the screen. */
+/**
+ * The modules a screen's first render needs besides the entry: the offline restore, the layouts, the screen. The build
+ * (vite.config.ts) may keep a module inside a shared chunk, with no manifest key of its own (the offline restore in the
+ * entry's, the layouts in the signed-in screens' common chunk): the screen's chunk imports that chunk, so it is linked.
+ */
 const RESTORE = 'src/app/restore-offline.ts';
 const SIGNED_IN = ['src/app/layouts/require-auth.tsx', 'src/app/layouts/app-layout.tsx'];
 const route = (name: string) => `src/app/routes/${name}.tsx`;

@@ -1,5 +1,7 @@
-import { jarChangeDefaults } from '@/features/shelf';
-import { todoTickDefaults } from '@/features/todos';
+// Straight from the modules that define them, not the features' entries: this runs before every first render, sign-in's
+// too, and an entry would bring the feature's screens' code with it.
+import { jarChangeDefaults } from '@/features/shelf/api/jar-change';
+import { todoTickDefaults } from '@/features/todos/api/update-todo';
 import { watchQueuedChanges } from '@/lib/offline-state';
 import { restoreCache } from '@/lib/persisted-cache';
 import { queryClient } from '@/lib/query-client';

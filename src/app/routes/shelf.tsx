@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { lazy, Suspense, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
 import { giftsThisYearWords } from '@shared/words/gifts';
@@ -12,8 +12,8 @@ import { usePlaces } from '@/features/shelf/api/get-places';
 import { useGifts } from '@/features/shelf/api/give-jar';
 import { useProducts } from '@/features/shelf/api/get-products';
 import { ShelfCards } from '@/features/shelf/components/shelf-cards';
-import { ShelfTable } from '@/features/shelf/components/shelf-table';
-import { searchShelf, shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
+import { shelfBatchRows, shelfProductGroups } from '@/features/shelf/shelf-rows';
+import type { searchShelf } from '@/features/shelf/shelf-search';
 import { paths } from '@shared/paths';
 import { PLACE_WORDS } from '@shared/words/shelf-places';
 import { STOCK_WORDS } from '@shared/words/stock';
@@ -22,6 +22,11 @@ const VIEWS = [
   { id: 'cards', label: 'By product' },
   { id: 'table', label: 'Table' },
 ] as const;
+
+// The table (TanStack Table) and the fuzzy search (Fuse) wait for the tap that needs them: the first view is the cards.
+const ShelfTable = lazy(() =>
+  import('@/features/shelf/components/shelf-table').then((module) => ({ default: module.ShelfTable })),
+);
 
 const linkButton =
   'inline-flex min-h-11 items-center rounded-lg border border-line bg-surface px-4 font-bold text-ink hover:bg-sunken';
@@ -41,6 +46,10 @@ export function ShelfRoute() {
   // The place filter lives in the address with the view, so a shared link shows the same shelf: '' every place, 'none'.
   const place = params.get('place') ?? '';
   const [text, setText] = useState('');
+  const [search, setSearch] = useState<typeof searchShelf | null>(null);
+  const loadSearch = () => {
+    if (!search) void import('@/features/shelf/shelf-search').then((module) => setSearch(() => module.searchShelf));
+  };
   const setParam = (key: string, value: string) => {
     const next = new URLSearchParams(params);
     if (value) next.set(key, value);
@@ -62,7 +71,10 @@ export function ShelfRoute() {
     // In one place, only the products kept there.
     return place === '' ? all : all.filter((group) => group.sealed > 0);
   }, [placed, products.data, rows, place]);
-  const found = useMemo(() => searchShelf(rows, products.data ?? [], text), [rows, products.data, text]);
+  const found = useMemo(
+    () => (search ? search(rows, products.data ?? [], text) : null),
+    [search, rows, products.data, text],
+  );
   const shownRows = found ? rows.filter((r) => found.batchIds.has(r.batchId)) : rows;
   const shownGroups = found ? groups.filter((g) => found.productIds.has(g.product.id)) : groups;
   const sealedCount = rows.reduce((sum, row) => sum + row.sealed, 0);
@@ -139,7 +151,11 @@ export function ShelfRoute() {
                 type="search"
                 placeholder="Product, kind, batch note…"
                 value={text}
-                onChange={(e) => setText(e.target.value)}
+                onFocus={loadSearch}
+                onChange={(e) => {
+                  loadSearch();
+                  setText(e.target.value);
+                }}
                 hint="Finds near matches too: “chutny” finds the chutney."
               />
             </div>
@@ -161,7 +177,9 @@ export function ShelfRoute() {
             <p className="text-ink-muted">Nothing on the shelf matches “{text}”.</p>
           )}
           {view === 'table' ? (
-            <ShelfTable hid={hid} rows={shownRows} />
+            <Suspense fallback={<p className="text-ink-muted">Setting the table…</p>}>
+              <ShelfTable hid={hid} rows={shownRows} />
+            </Suspense>
           ) : (
             <ShelfCards
               hid={hid}

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { addDays, requireIsoDate, weekStartOf } from '@shared/domain';
 import { can } from '@shared/roles';
@@ -12,8 +12,12 @@ import { useCopyWeek } from '@/features/week/api/copy-week';
 import { useMeals } from '@/features/week/api/get-meals';
 import { useWeek } from '@/features/week/api/get-week';
 import { PreferencesPanel } from '@/features/week/components/preferences-panel';
-import { WeekBoard } from '@/features/week/components/week-board';
 import { currentWeekStart, shiftWeek } from '@/features/week/week-dates';
+
+// The board (drag and drop, the meal library's search) is a chunk of its own, fetched while the week's plan is read:
+// the header, this screen's first paint, does not wait for it.
+const loadBoard = () => import('@/features/week/components/week-board');
+const WeekBoard = lazy(() => loadBoard().then((module) => ({ default: module.WeekBoard })));
 
 function validDate(value: string | null) {
   try {
@@ -69,6 +73,15 @@ function WeekScreen({
 }) {
   const week = useWeek(hid, start);
   const meals = useMeals(hid);
+  // Asked for once the header has painted (a frame, then a task), beside the week's read.
+  useEffect(() => {
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    const frame = requestAnimationFrame(() => (timer = setTimeout(() => void loadBoard())));
+    return () => {
+      cancelAnimationFrame(frame);
+      clearTimeout(timer);
+    };
+  }, []);
   const copy = useCopyWeek(hid);
   const [copied, setCopied] = useState<string | null>(null);
   const title = `${monthDayWords(start)} – ${monthDayWords(addDays(start, 6))}`;
@@ -134,10 +147,11 @@ function WeekScreen({
           </Notice>
         )}
         {week.data && meals.data ? (
-          <>
+          // The preferences wait with the board, so nothing below it moves when it arrives.
+          <Suspense fallback={<p className="text-ink-muted">Loading the week…</p>}>
             <WeekBoard hid={hid} week={week.data} meals={meals.data} canEdit={canEdit} firstDay={day} />
             <PreferencesPanel hid={hid} members={week.data.members} myId={myId} isKeeper={isKeeper} />
-          </>
+          </Suspense>
         ) : (
           !week.error && <p className="text-ink-muted">Loading the week…</p>
         )}

@@ -1,5 +1,4 @@
 // The shelf as the screens read it: sealed jars by batch (table rows) and by product (cards).
-import Fuse from 'fuse.js';
 import type { JarView } from '@shared/schemas/batches';
 import type { ProductView } from '@shared/schemas/products';
 
@@ -89,28 +88,4 @@ export function shelfProductGroups(
       (a.oldestBestBy ?? '9999').localeCompare(b.oldestBestBy ?? '9999') ||
       a.product.name.localeCompare(b.product.name),
   );
-}
-
-/** Fuzzy search over products, batches and notes; returns the batch rows and product ids that match. */
-export function searchShelf(rows: ShelfBatchRow[], products: ProductView[], text: string) {
-  const query = text.trim();
-  if (!query) return null;
-  const fuse = new Fuse(rows, {
-    keys: [
-      { name: 'productName', weight: 3 },
-      { name: 'productKind', weight: 1 },
-      { name: 'notes', weight: 1 },
-      { name: 'productNotes', weight: 1 },
-      { name: 'cannedOn', weight: 0.5 },
-    ],
-    threshold: 0.38,
-    ignoreLocation: true,
-  });
-  const productFuse = new Fuse(products, { keys: ['name', 'kind', 'notes'], threshold: 0.38, ignoreLocation: true });
-  const batchIds = new Set(fuse.search(query).map((hit) => hit.item.batchId));
-  const productIds = new Set([
-    ...productFuse.search(query).map((hit) => hit.item.id),
-    ...rows.filter((r) => batchIds.has(r.batchId)).map((r) => r.productId),
-  ]);
-  return { batchIds, productIds };
 }

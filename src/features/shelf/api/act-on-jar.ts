@@ -1,47 +1,12 @@
 import { onlineManager, useMutation } from '@tanstack/react-query';
 import { useState } from 'react';
-import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
-import { api } from '@/lib/api-client';
+import type { JarActed, JarAction, JarView } from '@shared/schemas/batches';
 import { useOptimisticCache } from '@/lib/optimistic';
 import { changeKeys, householdKeys, shelfKeys } from '@/lib/query-keys';
-import { newChangeKey, queuedChangeDefaults, type QueuedChange } from '@/lib/queued-changes';
+import { jarChange, jarChangeDefaults, type ActedJar, type JarChange } from './jar-change';
 import { useOfferJarUndo } from './undo-jar-change';
 
-/** A discard says whether the empty jar was kept for canning again; the server keeps it when nothing is said. */
-export const actOnJar = (hid: string, jarId: string, action: JarAction, idempotencyKey?: string, kept?: boolean) =>
-  api.post<JarActed>(
-    `/households/${hid}/jars/${jarId}/${action}`,
-    action === 'discard' && kept !== undefined ? { kept } : {},
-    { idempotencyKey },
-  );
-
-/** Opening, finishing or discarding one jar: made at once, sent when the network allows. */
-export interface JarChange extends QueuedChange {
-  jarId: string;
-  action: JarAction;
-  /** A discard: whether the empty jar goes back to the household's empty jars. */
-  kept?: boolean;
-}
-
-export const jarChangeDefaults = queuedChangeDefaults((change: JarChange) =>
-  actOnJar(change.hid, change.jarId, change.action, change.key, change.kept),
-);
-
-const DOING: Record<JarAction, string> = { open: 'Opening', finish: 'Finishing', discard: 'Discarding' };
-
-/** The jar the person acts on, as the words of a refusal name it. */
-export type ActedJar = Pick<JarView, 'id' | 'code' | 'productName'>;
-
-export function jarChange(hid: string, jar: ActedJar, action: JarAction, kept?: boolean): JarChange {
-  return {
-    hid,
-    key: newChangeKey(),
-    jarId: jar.id,
-    action,
-    ...(action === 'discard' && kept !== undefined ? { kept } : {}),
-    what: `${DOING[action]} jar ${jar.code} of ${jar.productName}`,
-  };
-}
+export { actOnJar, jarChange, jarChangeDefaults, type ActedJar, type JarChange } from './jar-change';
 
 /** One tap on a jar. The shelf shows it at once; offline it waits and is sent in order when the network returns. */
 export function useActOnJar(hid: string) {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import { dateWords } from '@shared/words';
+import { dateWords } from '@shared/words/dates';
 import { GIFT_WORDS } from '@shared/words/gifts';
 import type { JarAction, JarActed, JarView } from '@shared/schemas/batches';
 import { useUndoToast } from '@/components/ui/undo-toast';
