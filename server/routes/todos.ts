@@ -14,27 +14,25 @@ export function todosRouter({ sequelize }: AppContext) {
 
   router.get('/todos', householdAccess('read'), async (req, res) => {
     const { filter } = query(req, todoListQuery);
-    res.json({ todos: await listTodos(currentMembership(req).householdId, filter, req.user!.id) });
+    res.json({ todos: await listTodos(currentMembership(req).household, filter, req.user!.id) });
   });
 
   router.get('/todos/:id', householdAccess('read'), async (req, res) => {
     const { id } = params(req, todoParams);
-    res.json({ todo: await findTodo(currentMembership(req).householdId, id) });
+    res.json({ todo: await findTodo(currentMembership(req).household, id) });
   });
 
   router.post('/todos', householdAccess('cook'), idempotent(sequelize), async (req, res) => {
     const input = body(req, todoCreate);
-    res
-      .status(201)
-      .json({ todo: await createTodo(sequelize, currentMembership(req).householdId, req.user!.id, input) });
+    res.status(201).json({ todo: await createTodo(sequelize, currentMembership(req).household, req.user!.id, input) });
   });
 
   // Helpers pass this guard to tick a to-do; the service refuses them anything else.
   router.patch('/todos/:id', householdAccess('handleJars'), idempotent(sequelize), async (req, res) => {
     const { id } = params(req, todoParams);
     const patch = body(req, todoPatch);
-    const { householdId, role } = currentMembership(req);
-    res.json({ todo: await updateTodo(sequelize, householdId, role, id, patch) });
+    const { household, role } = currentMembership(req);
+    res.json({ todo: await updateTodo(sequelize, household, role, id, patch) });
   });
 
   router.delete('/todos/:id', householdAccess('cook'), async (req, res) => {

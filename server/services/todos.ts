@@ -1,57 +1,98 @@
 // The household to-do list: positions stay dense (0..n-1) through every add, move and delete.
-import { Op, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
+import { createHash } from 'node:crypto';
+import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { Role } from '../../shared/roles';
-import type { BatchPlan, TodoCreate, TodoFilter, TodoPatch, TodoView } from '../../shared/schemas/todos';
-import { Household, Membership, Todo, User } from '../db/models';
+import type { BatchPlan, TodoCreate, TodoFilter, TodoKind, TodoPatch, TodoView } from '../../shared/schemas/todos';
+import { Household, Membership, Todo } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
 import { refreshPlans } from './restock/todo-plan-numbers';
 
-export function viewTodo(todo: Todo & { assignee?: User | null }): TodoView {
+interface TodoRow {
+  id: string;
+  title: string;
+  notes: string;
+  due_on: string | null;
+  assignee_id: string | null;
+  assignee_name: string | null;
+  done: boolean;
+  done_at: Date | null;
+  position: number;
+  kind: TodoKind;
+  product_id: string | null;
+  batch_plan: BatchPlan | null;
+  created_by: string | null;
+}
+
+function viewTodo(row: TodoRow): TodoView {
   return {
-    id: todo.id,
-    title: todo.title,
-    notes: todo.notes,
-    dueOn: todo.dueOn ?? null,
-    assigneeId: todo.assigneeId ?? null,
-    assigneeName: todo.assignee?.name ?? null,
-    done: todo.done,
-    doneAt: todo.doneAt ? todo.doneAt.toISOString() : null,
-    position: todo.position,
-    kind: todo.kind,
-    productId: todo.productId ?? null,
-    batchPlan: todo.batchPlan ?? null,
-    createdBy: todo.createdBy ?? null,
+    id: row.id,
+    title: row.title,
+    notes: row.notes,
+    dueOn: row.due_on ?? null,
+    assigneeId: row.assignee_id ?? null,
+    assigneeName: row.assignee_name ?? null,
+    done: row.done,
+    doneAt: row.done_at ? new Date(row.done_at).toISOString() : null,
+    position: row.position,
+    kind: row.kind,
+    productId: row.product_id ?? null,
+    batchPlan: row.batch_plan ?? null,
+    createdBy: row.created_by ?? null,
   };
 }
 
-const withAssignee = [{ model: User, as: 'assignee', attributes: ['id', 'name'] }];
+const FILTERS: Record<TodoFilter, string> = {
+  all: '',
+  open: 'AND NOT t.done',
+  done: 'AND t.done',
+  mine: 'AND NOT t.done AND t.assignee_id = $2',
+};
 
-function whereFor(householdId: string, filter: TodoFilter, userId: string): WhereOptions<Todo> {
-  if (filter === 'open') return { householdId, done: false };
-  if (filter === 'done') return { householdId, done: true };
-  if (filter === 'mine') return { householdId, done: false, assigneeId: userId };
-  return { householdId };
+/**
+ * The household's to-dos with their assignees' names, in list order. Raw SQL: GET /todos and the answer of every
+ * to-do write read through here, and Sequelize instances with an include cost several times the query itself.
+ */
+async function todoRows(householdId: string, where: string, bind: unknown[]): Promise<TodoRow[]> {
+  return Todo.sequelize!.query<TodoRow>(
+    `SELECT t.id, t.title, t.notes, t.due_on, t.assignee_id, u.name AS assignee_name, t.done, t.done_at, t.position,
+            t.kind, t.product_id, t.batch_plan, t.created_by
+       FROM todos t LEFT JOIN users u ON u.id = t.assignee_id
+      WHERE t.household_id = $1 ${where}
+      ORDER BY t.position`,
+    { bind: [householdId, ...bind], type: QueryTypes.SELECT },
+  );
 }
 
-export async function listTodos(householdId: string, filter: TodoFilter, userId: string): Promise<TodoView[]> {
-  const todos = await Todo.findAll({
-    where: whereFor(householdId, filter, userId),
-    include: withAssignee,
-    order: [['position', 'ASC']],
-  });
-  return refreshPlans(householdId, todos.map(viewTodo));
+export async function listTodos(household: Household, filter: TodoFilter, userId: string): Promise<TodoView[]> {
+  const rows = await todoRows(household.id, FILTERS[filter], filter === 'mine' ? [userId] : []);
+  return refreshPlans(household, rows.map(viewTodo));
 }
 
-export async function findTodo(householdId: string, id: string): Promise<TodoView> {
-  const todo = await Todo.findOne({ where: { id, householdId }, include: withAssignee });
-  if (!todo) throw notFound('That to-do');
-  const [view] = await refreshPlans(householdId, [viewTodo(todo)]);
-  return view;
+export async function findTodo(household: Household, id: string): Promise<TodoView> {
+  const [row] = await todoRows(household.id, 'AND t.id = $2', [id]);
+  if (!row) throw notFound('That to-do');
+  const [view] = await refreshPlans(household, [viewTodo(row)]);
+  return view!;
 }
 
-/** Locks the household's list: the household row serialises adds, the todo rows are the ones moved. */
+/** A stable 64-bit advisory-lock key for one household's to-do list. */
+function listKey(householdId: string): string {
+  return createHash('sha256').update(`todos:${householdId}`).digest().readBigInt64BE(0).toString();
+}
+
+/**
+ * Locks the household's list: the list's advisory lock serialises adds, moves and deletes (an add's new row is one no
+ * row lock could wait for), the todo rows are the ones changed. The lock is the list's own, not the household row's,
+ * which every write to the household updates at commit (its data version, migration 0085): a to-do write holding that
+ * row would make every other write of the household wait for it.
+ * The rows are read in a statement after the lock's, so they include what the list's previous writer committed.
+ */
 async function lockList(householdId: string, transaction: Transaction): Promise<Todo[]> {
-  await Household.findByPk(householdId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] });
+  await Todo.sequelize!.query('SELECT pg_advisory_xact_lock($1::bigint)', {
+    bind: [listKey(householdId)],
+    transaction,
+    type: QueryTypes.SELECT,
+  });
   return Todo.findAll({
     where: { householdId },
     order: [['position', 'ASC']],
@@ -78,10 +119,11 @@ interface NewTodo extends TodoCreate {
 /** Adds a to-do at the end of the list. */
 export async function createTodo(
   sequelize: Sequelize,
-  householdId: string,
+  household: Household,
   createdBy: string,
   input: NewTodo,
 ): Promise<TodoView> {
+  const householdId = household.id;
   const id = await sequelize.transaction(async (transaction) => {
     const list = await lockList(householdId, transaction);
     await requireMember(householdId, input.assigneeId, transaction);
@@ -102,26 +144,32 @@ export async function createTodo(
     );
     return todo.id;
   });
-  return findTodo(householdId, id);
+  return findTodo(household, id);
 }
 
-/** Moves one to-do to `position` in the whole list, shifting the ones between by one. */
-async function move(list: Todo[], todo: Todo, position: number, transaction: Transaction) {
+/** Moves one to-do to `position` in the whole list, shifting the ones between by one, in one statement. */
+async function move(householdId: string, list: Todo[], todo: Todo, position: number, transaction: Transaction) {
   const target = Math.min(position, list.length - 1);
   const from = list.findIndex((t) => t.id === todo.id);
   if (target === from) return;
   const order = list.filter((t) => t.id !== todo.id);
   order.splice(target, 0, todo);
-  for (const [index, t] of order.entries()) {
-    if (t.position !== index) await t.update({ position: index }, { transaction });
-  }
+  const moved = order.flatMap((t, index) => (t.position === index ? [] : [{ id: t.id, position: index }]));
+  if (moved.length === 0) return;
+  // The list's unique (household_id, position) waits for commit (deferred), so the rows may change in any order.
+  await Todo.sequelize!.query(
+    `UPDATE todos t SET position = v.position, updated_at = now()
+       FROM unnest($2::uuid[], $3::int[]) AS v(id, position)
+      WHERE t.id = v.id AND t.household_id = $1`,
+    { bind: [householdId, moved.map((m) => m.id), moved.map((m) => m.position)], transaction },
+  );
 }
 
 const HELPER_FIELDS = new Set(['done']);
 
 export async function updateTodo(
   sequelize: Sequelize,
-  householdId: string,
+  household: Household,
   role: Role,
   id: string,
   patch: TodoPatch,
@@ -129,6 +177,7 @@ export async function updateTodo(
   if (role === 'helper' && Object.keys(patch).some((field) => !HELPER_FIELDS.has(field))) {
     throw forbidden('Helpers may tick a to-do done or not done; ask a cook or keeper to change anything else.');
   }
+  const householdId = household.id;
   await sequelize.transaction(async (transaction) => {
     const list = await lockList(householdId, transaction);
     const todo = list.find((t) => t.id === id);
@@ -137,9 +186,9 @@ export async function updateTodo(
     const { position, done, ...fields } = patch;
     const doneFields = done === undefined || done === todo.done ? {} : { done, doneAt: done ? new Date() : null };
     await todo.update({ ...fields, ...doneFields }, { transaction });
-    if (position !== undefined) await move(list, todo, position, transaction);
+    if (position !== undefined) await move(householdId, list, todo, position, transaction);
   });
-  return findTodo(householdId, id);
+  return findTodo(household, id);
 }
 
 export async function deleteTodo(sequelize: Sequelize, householdId: string, id: string) {

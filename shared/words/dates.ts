@@ -1,8 +1,15 @@
 // The one way Larderly writes a calendar date, on screens, in e-mails, push messages and CSV help.
-// date-fns's intlFormat hands the words to the platform's Intl (en-US), so no locale tables ship to the browser.
-import { intlFormat } from 'date-fns';
+// The platform's Intl (en-US) writes the words, so no locale tables ship to the browser. Each kind of date words
+// keeps its one Intl.DateTimeFormat: making a formatter costs far more than formatting with it (a to-do list's plans
+// and a week's board write dozens of dates per answer).
+const formatters = new Map<string, Intl.DateTimeFormat>();
 
-const US = { locale: 'en-US' };
+function intlFormat(date: Date, options: Intl.DateTimeFormatOptions): string {
+  const key = JSON.stringify(options);
+  let formatter = formatters.get(key);
+  if (!formatter) formatters.set(key, (formatter = new Intl.DateTimeFormat('en-US', options)));
+  return formatter.format(date);
+}
 
 /** Local midnight of a YYYY-MM-DD date (the words name the calendar day, whatever the zone). */
 function parseISO(isoDate: string): Date {
@@ -15,31 +22,32 @@ function parseISO(isoDate: string): Date {
 /** "Tue, Jun 9" for 2026-06-09; with the year ("Tue, Aug 31, 2027") when it is not `thisYear`. */
 export function dateWords(isoDate: string, thisYear = new Date().getFullYear()): string {
   const day = parseISO(isoDate);
-  return intlFormat(
-    day,
-    { weekday: 'short', month: 'short', day: 'numeric', year: day.getFullYear() === thisYear ? undefined : 'numeric' },
-    US,
-  );
+  return intlFormat(day, {
+    weekday: 'short',
+    month: 'short',
+    day: 'numeric',
+    year: day.getFullYear() === thisYear ? undefined : 'numeric',
+  });
 }
 
 /** "Jul 31, 2026": a printed label's date, which is read for a year or more, so it always carries the year. */
 export function labelDateWords(isoDate: string): string {
-  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric', year: 'numeric' }, US);
+  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric', year: 'numeric' });
 }
 
 /** "Jun 9", for the week board's column heads and a week's range. */
 export function monthDayWords(isoDate: string): string {
-  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric' }, US);
+  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric' });
 }
 
 /** "Tuesday", or "T" when `narrow`. */
 export function weekdayWords(isoDate: string, narrow = false): string {
-  return intlFormat(parseISO(isoDate), { weekday: narrow ? 'narrow' : 'long' }, US);
+  return intlFormat(parseISO(isoDate), { weekday: narrow ? 'narrow' : 'long' });
 }
 
 /** "Dec" for 2026-12. */
 export function monthWords(isoMonth: string): string {
-  return intlFormat(parseISO(`${isoMonth}-01`), { month: 'short' }, US);
+  return intlFormat(parseISO(`${isoMonth}-01`), { month: 'short' });
 }
 
 /** Index 0 = Sunday, as the household's week start and JavaScript's getDay count. */

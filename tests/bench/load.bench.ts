@@ -1,11 +1,14 @@
 // 100 connections for 30 s over a mix of reads and writes against a running server, signed in as the demo cook.
-// Run: BASE_URL=http://127.0.0.1:3000 node --import tsx tests/bench/load.bench.ts   (the server from `npm start`)
+// Run: PORT=3000 node --import tsx tests/bench/load.bench.ts   (the server from `npm start` on that PORT, or BASE_URL=http://host:port)
 // @ts-expect-error autocannon ships no type declarations
 import autocannon from 'autocannon';
+import { loadavg } from 'node:os';
 
-const BASE_URL = (process.env.BASE_URL ?? 'http://127.0.0.1:3000').replace(/\/$/, '');
+const BASE_URL = (process.env.BASE_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`).replace(/\/$/, '');
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 100);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 30);
+// The floor: the same connections on GET /households/:hid (the session and the household guard, almost nothing behind).
+const FLOOR_SECONDS = Number(process.env.BENCH_FLOOR_SECONDS ?? 10);
 
 async function call(path: string, init: RequestInit & { cookie?: string } = {}) {
   const response = await fetch(`${BASE_URL}${path}`, {
@@ -54,13 +57,27 @@ const requests = [
 console.log(
   `load: ${CONNECTIONS} connections for ${SECONDS} s against ${BASE_URL}, ${requests.length} requests in turn (7 reads, 3 writes), as cook@larderly.test`,
 );
-const result = await autocannon({
+const loadBefore = loadavg();
+const instance = autocannon({
   url: BASE_URL,
   connections: CONNECTIONS,
   duration: SECONDS,
   headers: { cookie, 'content-type': 'application/json', origin: BASE_URL },
   requests,
 });
+// Each connection sends the requests in turn, one at a time, so the one a response answers is its client's current one.
+const byRoute = requests.map(() => ({ times: [] as number[], failed: 0 }));
+instance.on(
+  'response',
+  (client: { requestIterator: { currentRequestIndex: number } }, status: number, _bytes: number, time: number) => {
+    const route = byRoute[client.requestIterator.currentRequestIndex];
+    if (!route) return;
+    route.times.push(time);
+    if (status < 200 || status > 299) route.failed += 1;
+  },
+);
+const result = await instance;
+const loadAfter = loadavg();
 
 const failures = result.errors + result.timeouts + result.non2xx;
 console.log(
@@ -70,5 +87,28 @@ console.log(
   `answers by status: ${JSON.stringify(Object.fromEntries(Object.entries(result.statusCodeStats ?? {}).map(([code, s]) => [code, (s as { count: number }).count])))}`,
 );
 console.log(`latency: median ${result.latency.p50} ms, p99 ${result.latency.p99} ms, max ${result.latency.max} ms`);
+const percentile = (sorted: number[], p: number) =>
+  sorted.length === 0 ? 0 : sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]!;
+console.log('by route (answers, median, p99, max in ms, non-2xx):');
+requests.forEach((request, i) => {
+  const times = byRoute[i]!.times.sort((a, b) => a - b);
+  const route = `${request.method} ${request.path.replace(base, '').replace(/[0-9a-f-]{36}/g, ':id')}`;
+  console.log(
+    `  ${route.padEnd(30)} ${String(times.length).padStart(6)}  ${percentile(times, 50).toFixed(1).padStart(7)}  ${percentile(times, 99).toFixed(1).padStart(7)}  ${(times.at(-1) ?? 0).toFixed(1).padStart(7)}  ${byRoute[i]!.failed}`,
+  );
+});
+const fmt = (l: number[]) => l.map((x) => x.toFixed(2)).join(' ');
+console.log(`load average: ${fmt(loadBefore)} before, ${fmt(loadAfter)} after`);
+if (FLOOR_SECONDS > 0) {
+  const floor = await autocannon({
+    url: `${BASE_URL}${base}`,
+    connections: CONNECTIONS,
+    duration: FLOOR_SECONDS,
+    headers: { cookie, origin: BASE_URL },
+  });
+  console.log(
+    `floor, GET /households/:hid for ${FLOOR_SECONDS} s: ${Math.round(floor.requests.average)}/s, median ${floor.latency.p50} ms, p99 ${floor.latency.p99} ms, non-2xx ${floor.non2xx + floor.errors}; the mix made ${(result.requests.average / floor.requests.average).toFixed(3)} of the floor's req/s (load average ${fmt(loadavg())})`,
+  );
+}
 console.log(failures === 0 ? 'zero errors: yes' : `zero errors: NO (${failures} failed requests)`);
 process.exit(failures === 0 ? 0 : 1);

@@ -115,7 +115,7 @@ export async function addRestockTodo(
     reason: suggestion?.reason ?? null,
     runOutOn: forecasts[0].runOutOn,
   });
-  return createTodo(sequelize, household.id, userId, {
+  return createTodo(sequelize, household, userId, {
     title: restockTitle(plan, household.unitSystem),
     dueOn: plan.targetOn,
     kind: 'restock',

@@ -24,7 +24,7 @@ import {
 import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/stock';
 import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
-import { AppError, notFound } from '../../http/errors';
+import { AppError } from '../../http/errors';
 import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
@@ -193,21 +193,21 @@ function orphaned(made: BatchPlan, why: string): BatchPlan {
  * recipe as they are now, and says what changed, so canning day never follows stale numbers.
  */
 export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
-  householdId: string,
+  household: Household,
   views: T[],
 ): Promise<T[]> {
+  const householdId = household.id;
   const planned = views.filter((view) => view.batchPlan);
   if (planned.length === 0) return views;
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  const [household, recipes, products, inStock, mouthOf] = await Promise.all([
-    Household.findByPk(householdId),
+  // The household is the guard's, read with the session in this request.
+  const [recipes, products, inStock, mouthOf] = await Promise.all([
     Recipe.findAll({ where: { householdId, id: recipeIds } }),
     Product.findAll({ where: { householdId, id: productIds } }),
     stockFor(Household.sequelize!, householdId),
     usualMouths(Household.sequelize!, householdId, productIds),
   ]);
-  if (!household) throw notFound('That household');
   return views.map((view) => {
     const made = view.batchPlan;
     if (!made) return view;
