@@ -30,7 +30,11 @@ export interface JoinedMembership {
 }
 export const JOINED_MEMBERSHIP = Symbol('larderly.joinedMembership');
 
-type StoreQuery = (sql: string | { name: string; text: string }, params: unknown[], fn: (error: unknown, row?: SessionRow) => void) => void;
+type StoreQuery = (
+  sql: string | { name: string; text: string },
+  params: unknown[],
+  fn: (error: unknown, row?: SessionRow) => void,
+) => void;
 
 type SessionRow = Record<string, unknown> & {
   sess: session.SessionData & { passport?: { user?: string } };
