@@ -161,7 +161,7 @@ describe('two app processes behind nginx', () => {
     expect(page.status).toBe(200);
     expect(page.instance).toMatch(/^app-[ab]$/);
     expect(page.headers.get('cache-control')).toBe('no-cache');
-    const script = page.body.toString('utf8').match(/src="(\/assets\/[^"]+\.js)"/)![1]!;
+    const script = page.body.toString('utf8').match(/src="(\/assets\/main-[^"]+\.js)"/)![1]!; // the entry: big enough to be precompressed
     const asset = await call('GET', script, { headers: { 'Accept-Encoding': 'gzip' } });
     expect(asset.status).toBe(200);
     expect(asset.instance).toBeNull();
