@@ -23,13 +23,28 @@ export function ReasonToggle({
         onClick={() => setOpen((shown) => !shown)}
       >
         <span className="min-w-0 break-words">{label}</span>
-        <span aria-hidden="true" className="shrink-0 text-[0.7em]">
-          {open ? '▲' : 'ⓘ'}
-        </span>
+        <ReasonMark open={open} />
       </button>
       <span id={reasonId} hidden={!open} className="break-words font-normal text-ink">
         {reason}
       </span>
     </span>
+  );
+}
+
+/** Drawn, not a character: a font without the circled "i" showed an empty box in its place. */
+function ReasonMark({ open }: { open: boolean }) {
+  return (
+    <svg aria-hidden="true" viewBox="0 0 16 16" className="size-[0.85em] shrink-0" fill="none" stroke="currentColor">
+      {open ? (
+        <path d="M3.5 10.5 8 6l4.5 4.5" strokeWidth="2" strokeLinecap="round" strokeLinejoin="round" />
+      ) : (
+        <>
+          <circle cx="8" cy="8" r="6.75" strokeWidth="1.5" />
+          <path d="M8 7.25v4.25" strokeWidth="1.75" strokeLinecap="round" />
+          <circle cx="8" cy="4.75" r="1" fill="currentColor" stroke="none" />
+        </>
+      )}
+    </svg>
   );
 }
