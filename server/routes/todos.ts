@@ -9,12 +9,16 @@ import { createTodo, deleteTodo, findTodo, listTodos, updateTodo } from '../serv
 
 const todoParams = z.object({ hid: z.string(), id: z.uuid({ error: 'That to-do was not found.' }) });
 
-export function todosRouter({ sequelize }: AppContext) {
+export function todosRouter({ sequelize, readCache }: AppContext) {
   const router = Router({ mergeParams: true });
 
   router.get('/todos', householdAccess('read'), async (req, res) => {
     const { filter } = query(req, todoListQuery);
-    res.json({ todos: await listTodos(currentMembership(req).household, filter, req.user!.id) });
+    const userId = req.user!.id;
+    // Kept until the household's data moves (to-dos, recipes, products and stock are versioned); only "mine" is per person.
+    await readCache.send(req, res, `todos ${filter} ${filter === 'mine' ? userId : ''}`, async () => ({
+      todos: await listTodos(currentMembership(req).household, filter, userId),
+    }));
   });
 
   router.get('/todos/:id', householdAccess('read'), async (req, res) => {
