@@ -32,9 +32,9 @@ export async function seedShelf({ households, members, transaction, today }: Dem
   }
   await seedBatches(calloway, products, recipes, CALLOWAY_BATCHES, cook, handlers, today, transaction);
 
-  const neighbour = members['neighbor@larderly.test'];
+  const neighbor = members['neighbor@larderly.test'];
   const marshProducts = await seedProducts(marshEnd, MARSH_END_PRODUCTS, transaction);
-  await seedBatches(marshEnd, marshProducts, new Map(), MARSH_END_BATCHES, neighbour, [neighbour], today, transaction);
+  await seedBatches(marshEnd, marshProducts, new Map(), MARSH_END_BATCHES, neighbor, [neighbor], today, transaction);
 }
 
 async function seedProducts(

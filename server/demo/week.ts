@@ -162,7 +162,7 @@ export async function seedWeek({ households, members, transaction, today }: Demo
   await makeSureOfAWarning(hid, products, start, today, transaction);
 }
 
-/** A supper for the neighbours this week asks more of the lowest-stocked preserve than the shelf holds: a `short` warning to act on. */
+/** A supper for the neighbors this week asks more of the lowest-stocked preserve than the shelf holds: a `short` warning to act on. */
 async function makeSureOfAWarning(
   hid: string,
   products: Map<string, Product>,
@@ -181,7 +181,7 @@ async function makeSureOfAWarning(
   const date = addDays(today, 1) <= weekEnd ? addDays(today, 1) : today;
   const position = await PlanEntry.count({ where: { householdId: hid, date, slot: 'dinner' }, transaction });
   const entry = await PlanEntry.create(
-    { householdId: hid, date, slot: 'dinner', position, title: 'Harvest supper for the neighbours', servings },
+    { householdId: hid, date, slot: 'dinner', position, title: 'Harvest supper for the neighbors', servings },
     { transaction },
   );
   await Pairing.create(

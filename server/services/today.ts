@@ -2,18 +2,18 @@
 import { addDays, allocateWeek, daysBetween, type Id, type PlannedPortion } from '../../shared/domain';
 import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/today';
 import { placeWords } from '../../shared/words/shelf-places';
-import { Household, Jar, Place, Product, Todo } from '../db/models';
+import { Household, Place, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
 import { keepsDays } from './plan-allocation';
 import { sealChecksOf } from './shelf/seal-check';
 import { restockFromSnapshot } from './restock/view';
-import { stockSnapshot, useWithinDaysOf, type StockSnapshot } from './restock/stock-snapshot';
+import { stockSnapshot, useWithinDaysOf, type ShelfJar, type StockSnapshot } from './restock/stock-snapshot';
 
 /** The fridge jars shown first; the Fridge screen has the rest. */
 const FRIDGE_SHOWN = 5;
 const SLOT_ORDER = ['breakfast', 'lunch', 'dinner', 'snack'];
 
-function openedDaysLeft(jar: Jar | undefined, today: string): number | null {
+function openedDaysLeft(jar: ShelfJar | undefined, today: string): number | null {
   return jar?.state === 'opened' && jar.useBy ? daysBetween(today, jar.useBy) : null;
 }
 
@@ -43,7 +43,7 @@ function todaysUse(
     })),
     portions: planned.filter((portion) => portion.date <= addDays(today, 6)),
   });
-  const jarOf = new Map<Id, Jar>(shelfJars.map((jar) => [jar.id, jar]));
+  const jarOf = new Map<Id, ShelfJar>(shelfJars.map((jar) => [jar.id, jar]));
   const openedToday = new Set<Id>(allocation.openings.filter((o) => o.date === today).map((o) => o.jarId));
   const todays = new Map<Id, PlannedPortion>(planned.filter((p) => p.date === today).map((p) => [p.id, p]));
 
@@ -80,7 +80,7 @@ function fridgeCountdowns(snapshot: StockSnapshot): TodayFridgeJar[] {
   const nameOf = new Map(snapshot.products.map((p) => [p.id, p.name]));
   return snapshot.shelfJars
     .filter(
-      (jar): jar is Jar & { openedOn: string; useBy: string } =>
+      (jar): jar is ShelfJar & { openedOn: string; useBy: string } =>
         jar.state === 'opened' && jar.useBy !== null && jar.openedOn !== null,
     )
     .sort((a, b) => (a.useBy < b.useBy ? -1 : a.useBy > b.useBy ? 1 : a.code.localeCompare(b.code)))

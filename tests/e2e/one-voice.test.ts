@@ -21,7 +21,8 @@ const RETIRED: { pattern: RegExp; now: string }[] = [
   { pattern: /what expires/i, now: 'Use by this week' },
   { pattern: /needs a new batch|time to make more|running low/i, now: 'Restock' },
   {
-    pattern: /\b(colour|favourite|flavour|metres?|litres?|millilitres?|centre|mould|grey|cancelled|labelled)\b/i,
+    pattern:
+      /\b(colour|favourite|flavour|metres?|litres?|millilitres?|centre|mould|grey|cancelled|labelled|neighbours?)\b/i,
     now: 'US English',
   },
   {

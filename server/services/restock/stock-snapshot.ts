@@ -14,12 +14,18 @@ import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
 /** The months a use chart shows, the current one included. */
 export const CHART_MONTHS = 6;
 
+/** What the forecast, the restock list and Today read of a sealed or opened jar. */
+export type ShelfJar = Pick<
+  Jar,
+  'id' | 'productId' | 'code' | 'state' | 'capacityTbsp' | 'remainingTbsp' | 'bestBy' | 'openedOn' | 'useBy' | 'placeId'
+>;
+
 export interface StockSnapshot {
   householdId: string;
   today: string;
   products: Product[];
   /** Sealed and opened jars. */
-  shelfJars: Jar[];
+  shelfJars: ShelfJar[];
   /** Jars finished since the start of the chart's first month, each counted as a full jar. */
   finished: FinishedPortion[];
   /** Jars given away since the earlier of the history's start and the first of this year: not eaten, counted apart. */
@@ -45,14 +51,32 @@ export async function stockSnapshot(householdId: string, today: string): Promise
   const givenFrom = historyStart(today) < yearStart ? historyStart(today) : yearStart;
   const [products, shelfJars, finishedJars, givenJars, entries] = await Promise.all([
     Product.findAll({ where: { householdId }, order: [['name', 'ASC']] }),
-    Jar.findAll({ where: { householdId, state: ['sealed', 'opened'] } }),
+    // Plain rows, not model instances: building an instance per jar was the largest cost of Today's and Restock's reads.
+    Jar.findAll({
+      where: { householdId, state: ['sealed', 'opened'] },
+      attributes: [
+        'id',
+        'productId',
+        'code',
+        'state',
+        'capacityTbsp',
+        'remainingTbsp',
+        'bestBy',
+        'openedOn',
+        'useBy',
+        'placeId',
+      ],
+      raw: true,
+    }),
     Jar.findAll({
       where: { householdId, state: 'finished', finishedOn: { [Op.gte]: historyStart(today), [Op.lt]: today } },
       attributes: ['productId', 'finishedOn', 'capacityTbsp'],
+      raw: true,
     }),
     Jar.findAll({
       where: { householdId, state: 'given', givenOn: { [Op.gte]: givenFrom, [Op.lte]: today } },
       attributes: ['productId', 'givenOn'],
+      raw: true,
     }),
     PlanEntry.findAll({
       where: { householdId, date: { [Op.gte]: today } },
@@ -66,11 +90,16 @@ export async function stockSnapshot(householdId: string, today: string): Promise
     householdId,
     today,
     products,
-    shelfJars,
+    // A raw row skips the model's getters: its decimals come as strings (columns.ts's `decimal` makes them numbers).
+    shelfJars: shelfJars.map((jar) => ({
+      ...jar,
+      capacityTbsp: Number(jar.capacityTbsp),
+      remainingTbsp: Number(jar.remainingTbsp),
+    })),
     finished: finishedJars.map((jar) => ({
       productId: jar.productId,
       finishedOn: jar.finishedOn!,
-      tbsp: jar.capacityTbsp,
+      tbsp: Number(jar.capacityTbsp),
     })),
     given: givenJars.map((jar) => ({ productId: jar.productId, givenOn: jar.givenOn! })),
     planned: entries.flatMap((entry) =>
