@@ -130,4 +130,30 @@ describe('concurrent moves', () => {
     await Promise.all(ids.map((id, i) => cook.patch(url(`/plan-entries/${id}`)).send({ position: (i * 3) % 8 })));
     expect((await slot(day, 'snack')).positions).toEqual([0, 1, 2, 3, 4, 5, 6, 7]);
   });
+
+  it('edits servings and titles without a move while others move the same entries, and both land', async () => {
+    const day = '2031-06-02';
+    const ids: string[] = [];
+    for (let i = 0; i < 6; i += 1) ids.push(await plan(day, 'dinner', `Supper ${i}`));
+    const answers = await Promise.all(
+      ids.flatMap((id, i) => [
+        cook.patch(url(`/plan-entries/${id}`)).send({ servings: i + 2, title: `Supper ${i} for ${i + 2}` }),
+        cook.patch(url(`/plan-entries/${id}`)).send({ slot: 'lunch', position: 0 }),
+      ]),
+    );
+    expect(answers.map((a) => a.status)).toEqual(answers.map(() => 200));
+    const rows = await PlanEntry.findAll({ where: { householdId: ctx.householdId, date: day } });
+    for (const [i, id] of ids.entries()) {
+      const row = rows.find((r) => r.id === id)!;
+      expect([row.slot, row.servings, row.title]).toEqual(['lunch', i + 2, `Supper ${i} for ${i + 2}`]);
+    }
+    expect((await slot(day, 'lunch')).positions).toEqual([0, 1, 2, 3, 4, 5]);
+  });
+
+  it('refuses an edit of a planned meal that is not there, changing nothing', async () => {
+    const missing = await cook.patch(url('/plan-entries/00000000-0000-4000-8000-000000000000')).send({ servings: 3 });
+    expect(missing.status).toBe(404);
+    const empty = await cook.patch(url('/plan-entries/00000000-0000-4000-8000-000000000000')).send({});
+    expect(empty.status).toBe(404);
+  });
 });

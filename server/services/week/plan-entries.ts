@@ -87,6 +87,8 @@ async function lockedEntry(householdId: string, id: string, transaction: Transac
 
 /** Moves and edits one entry; a move closes the gap it leaves and opens one where it lands. */
 export async function updatePlanEntry(sequelize: Sequelize, householdId: string, id: string, patch: PlanEntryPatch) {
+  const moves = patch.date !== undefined || patch.slot !== undefined || patch.position !== undefined;
+  if (!moves) return editPlanEntry(sequelize, householdId, id, patch);
   return sequelize.transaction(async (transaction) => {
     const peek = await PlanEntry.findOne({ where: { id, householdId }, attributes: ['date'], transaction });
     if (!peek) throw notFound('That planned meal');
@@ -104,24 +106,42 @@ export async function updatePlanEntry(sequelize: Sequelize, householdId: string,
     if (patch.eaters) await requireMembers(householdId, patch.eaters, transaction);
     const date = patch.date ?? entry.date;
     const slot = (patch.slot ?? entry.slot) as Slot;
-    const moves = patch.date !== undefined || patch.slot !== undefined || patch.position !== undefined;
-    if (moves) {
-      const source = slotOf(entries, entry.date, entry.slot)
-        .map((e) => e.id)
-        .filter((e) => e !== id);
-      const sameSlot = entry.date === date && entry.slot === slot;
-      const destination = sameSlot ? source : slotOf(entries, date, slot).map((e) => e.id);
-      const position = clamp(patch.position ?? destination.length, destination.length);
-      destination.splice(position, 0, id);
-      const lists = [{ date, slot, ids: destination }];
-      if (!sameSlot) lists.push({ date: entry.date, slot: entry.slot, ids: source });
-      await writePlacements(sequelize, transaction, householdId, densePlacements(lists, placementsOf(entries)));
-    }
-    const fields: Partial<Pick<PlanEntry, 'servings' | 'title' | 'eaters'>> = {};
-    if (patch.servings !== undefined) fields.servings = patch.servings;
-    if (patch.title !== undefined) fields.title = patch.title;
-    if (patch.eaters !== undefined) fields.eaters = patch.eaters;
+    const source = slotOf(entries, entry.date, entry.slot)
+      .map((e) => e.id)
+      .filter((e) => e !== id);
+    const sameSlot = entry.date === date && entry.slot === slot;
+    const destination = sameSlot ? source : slotOf(entries, date, slot).map((e) => e.id);
+    const position = clamp(patch.position ?? destination.length, destination.length);
+    destination.splice(position, 0, id);
+    const lists = [{ date, slot, ids: destination }];
+    if (!sameSlot) lists.push({ date: entry.date, slot: entry.slot, ids: source });
+    await writePlacements(sequelize, transaction, householdId, densePlacements(lists, placementsOf(entries)));
+    const fields = editedFields(patch);
     if (Object.keys(fields).length) await PlanEntry.update(fields, { where: { id, householdId }, transaction });
+    return id;
+  });
+}
+
+function editedFields(patch: PlanEntryPatch) {
+  const fields: Partial<Pick<PlanEntry, 'servings' | 'title' | 'eaters'>> = {};
+  if (patch.servings !== undefined) fields.servings = patch.servings;
+  if (patch.title !== undefined) fields.title = patch.title;
+  if (patch.eaters !== undefined) fields.eaters = patch.eaters;
+  return fields;
+}
+
+/**
+ * Servings, title or eaters only: no slot changes, so no day lock; the UPDATE's own row lock orders it with a
+ * concurrent move of the same entry (a move writes date, slot and position, never these columns).
+ */
+async function editPlanEntry(sequelize: Sequelize, householdId: string, id: string, patch: PlanEntryPatch) {
+  return sequelize.transaction(async (transaction) => {
+    if (patch.eaters) await requireMembers(householdId, patch.eaters, transaction);
+    const fields = editedFields(patch);
+    const [changed] = Object.keys(fields).length
+      ? await PlanEntry.update(fields, { where: { id, householdId }, transaction })
+      : [await PlanEntry.count({ where: { id, householdId }, transaction })];
+    if (changed === 0) throw notFound('That planned meal');
     return id;
   });
 }
