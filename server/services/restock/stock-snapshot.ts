@@ -15,10 +15,19 @@ import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
 export const CHART_MONTHS = 6;
 
 /** What the forecast, the restock list and Today read of a sealed or opened jar. */
-export type ShelfJar = Pick<
-  Jar,
-  'id' | 'productId' | 'code' | 'state' | 'capacityTbsp' | 'remainingTbsp' | 'bestBy' | 'openedOn' | 'useBy' | 'placeId'
->;
+const SHELF_JAR_COLUMNS = [
+  'id',
+  'productId',
+  'code',
+  'state',
+  'capacityTbsp',
+  'remainingTbsp',
+  'bestBy',
+  'openedOn',
+  'useBy',
+  'placeId',
+] as const;
+export type ShelfJar = Pick<Jar, (typeof SHELF_JAR_COLUMNS)[number]>;
 
 export interface StockSnapshot {
   householdId: string;
@@ -51,21 +60,10 @@ export async function stockSnapshot(householdId: string, today: string): Promise
   const givenFrom = historyStart(today) < yearStart ? historyStart(today) : yearStart;
   const [products, shelfJars, finishedJars, givenJars, entries] = await Promise.all([
     Product.findAll({ where: { householdId }, order: [['name', 'ASC']] }),
-    // Plain rows, not model instances: building an instance per jar was the largest cost of Today's and Restock's reads.
+    // Plain rows, not model instances: every Today and Restock answer worked out reads these, and uses no model method.
     Jar.findAll({
       where: { householdId, state: ['sealed', 'opened'] },
-      attributes: [
-        'id',
-        'productId',
-        'code',
-        'state',
-        'capacityTbsp',
-        'remainingTbsp',
-        'bestBy',
-        'openedOn',
-        'useBy',
-        'placeId',
-      ],
+      attributes: [...SHELF_JAR_COLUMNS],
       raw: true,
     }),
     Jar.findAll({
