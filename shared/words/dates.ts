@@ -1,14 +1,10 @@
 // The one way Larderly writes a calendar date, on screens, in e-mails, push messages and CSV help.
-// The platform's Intl (en-US) writes the words, so no locale tables ship to the browser. Each kind of date words
-// keeps its one Intl.DateTimeFormat: making a formatter costs far more than formatting with it (a to-do list's plans
-// and a week's board write dozens of dates per answer).
-const formatters = new Map<string, Intl.DateTimeFormat>();
+// The platform's Intl (en-US) writes the words, so no locale tables ship to the browser; each kind of date words
+// keeps its one formatter (a to-do list's plans and a week's board write dozens of dates per answer).
+import { dateFormatter } from './intl-format';
 
 function intlFormat(date: Date, options: Intl.DateTimeFormatOptions): string {
-  const key = JSON.stringify(options);
-  let formatter = formatters.get(key);
-  if (!formatter) formatters.set(key, (formatter = new Intl.DateTimeFormat('en-US', options)));
-  return formatter.format(date);
+  return dateFormatter('en-US', options).format(date);
 }
 
 /** Local midnight of a YYYY-MM-DD date (the words name the calendar day, whatever the zone). */

@@ -1,4 +1,5 @@
 // The seal check's words: the batch form's choice, the reminder, Today and the batch page.
+import { dateFormatter } from './intl-format';
 import { count } from './units';
 import { CANNING_CAUTION_PUSH } from './cautions';
 
@@ -29,7 +30,7 @@ export const UNSEALED_CHOICES = {
 
 /** "Wed 3:40 PM" in the household's time zone. */
 export function clockWords(at: Date | string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-US', { timeZone, weekday: 'short', hour: 'numeric', minute: '2-digit' }).format(
+  return dateFormatter('en-US', { timeZone, weekday: 'short', hour: 'numeric', minute: '2-digit' }).format(
     new Date(at),
   );
 }
