@@ -1,8 +1,8 @@
 // The household to-do list: positions stay dense (0..n-1) through every add, move and delete.
-import { createHash } from 'node:crypto';
 import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { Role } from '../../shared/roles';
 import type { BatchPlan, TodoCreate, TodoFilter, TodoKind, TodoPatch, TodoView } from '../../shared/schemas/todos';
+import { lockNames } from '../db/advisory-locks';
 import { Household, Membership, Todo } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
 import { refreshPlans } from './restock/todo-plan-numbers';
@@ -75,11 +75,6 @@ export async function findTodo(household: Household, id: string): Promise<TodoVi
   return view!;
 }
 
-/** A stable 64-bit advisory-lock key for one household's to-do list. */
-function listKey(householdId: string): string {
-  return createHash('sha256').update(`todos:${householdId}`).digest().readBigInt64BE(0).toString();
-}
-
 /**
  * Locks the household's list: the list's advisory lock serialises adds, moves and deletes (an add's new row is one no
  * row lock could wait for), the todo rows are the ones changed. The lock is the list's own, not the household row's,
@@ -88,11 +83,7 @@ function listKey(householdId: string): string {
  * The rows are read in a statement after the lock's, so they include what the list's previous writer committed.
  */
 async function lockList(householdId: string, transaction: Transaction): Promise<Todo[]> {
-  await Todo.sequelize!.query('SELECT pg_advisory_xact_lock($1::bigint)', {
-    bind: [listKey(householdId)],
-    transaction,
-    type: QueryTypes.SELECT,
-  });
+  await lockNames(Todo.sequelize!, transaction, [`todos:${householdId}`]);
   return Todo.findAll({
     where: { householdId },
     order: [['position', 'ASC']],

@@ -1,25 +1,19 @@
 // Serialises the writes that renumber a day's slots, so two moves at once never share a position.
-import { createHash } from 'node:crypto';
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import type { Sequelize, Transaction } from 'sequelize';
 import type { Slot } from '../../../shared/schemas/week';
+import { lockNames } from '../../db/advisory-locks';
 import { PlanEntry } from '../../db/models';
-
-/** A stable 64-bit advisory-lock key for one household's day. */
-function dayKey(householdId: string, date: string): string {
-  return createHash('sha256').update(`plan:${householdId}:${date}`).digest().readBigInt64BE(0).toString();
-}
 
 /**
  * Takes the days' advisory locks in one fixed order (no deadlock between two moves crossing days),
  * then locks the rows already in those slots.
  */
 export async function lockDays(sequelize: Sequelize, transaction: Transaction, householdId: string, dates: string[]) {
-  const keys = [...new Set(dates.map((date) => dayKey(householdId, date)))].sort();
-  await sequelize.query('SELECT pg_advisory_xact_lock(k) FROM unnest(ARRAY[:keys]::bigint[]) AS k', {
-    replacements: { keys },
+  await lockNames(
+    sequelize,
     transaction,
-    type: QueryTypes.SELECT,
-  });
+    dates.map((date) => `plan:${householdId}:${date}`),
+  );
   return PlanEntry.findAll({
     where: { householdId, date: [...new Set(dates)] },
     order: [
