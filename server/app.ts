@@ -3,7 +3,7 @@ import compression from 'compression';
 import helmet from 'helmet';
 import pg from 'pg';
 import { configurePassport } from './auth/passport';
-import { keepSessionAlive, sessionMiddleware } from './auth/session';
+import { sessionMiddleware } from './auth/session';
 import type { Config } from './config';
 import { acquireDatabase } from './db/sequelize';
 import { errorHandler, notFoundHandler } from './http/errors';
@@ -96,10 +96,9 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
       pool: sessionPool,
       secret: config.sessionSecret,
       secure: config.appOrigins.some((o) => o.startsWith('https:')),
+      passport,
     }),
   );
-  api.use(passport.session());
-  api.use(keepSessionAlive);
   const authLimit = options.authLimit ?? config.authRateLimit;
   api.use('/auth', authRouter(ctx, { authLimit }));
   api.use('/households', householdsRouter(sequelize));

@@ -1,5 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
-import type { RequestHandler } from 'express';
+import { parse as parseCookies } from 'cookie';
+import { unsign } from 'cookie-signature';
+import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
 
@@ -80,9 +82,8 @@ function personJoiningStore(PgStore: ReturnType<typeof connectPgSimple>) {
       reading = undefined;
       // Raw SQL through connect-pg-simple's own query helper (its pool, its error handling, the first row):
       // session, person and membership in one round trip, where Sequelize would make three.
-      // A named statement: each pooled connection plans it once, where planning cost more than running it.
       (this as unknown as { query: StoreQuery }).query(
-        { name: 'larderly-session-read', text: PERSON_AND_MEMBERSHIP },
+        SESSION_READ,
         [sid, slot?.householdId ?? null],
         (error: unknown, row?: SessionRow) => {
           if (error) return fn(error);
@@ -106,8 +107,27 @@ function personJoiningStore(PgStore: ReturnType<typeof connectPgSimple>) {
   };
 }
 
-/** Sessions live in PostgreSQL so any app process can serve any request and restarts keep people signed in. */
-export function sessionMiddleware(options: { pool: pg.Pool; secret: string; secure: boolean }) {
+/** The session's one query, named: each pooled connection plans it once, where planning cost more than running it. */
+const SESSION_READ = { name: 'larderly-session-read', text: PERSON_AND_MEMBERSHIP };
+
+/** What sign-in, sign-up, sign-out and accepting an invitation change: the session itself. */
+const CHANGES_SESSION = /^\/(?:auth|invitations)(?:\/|$)/;
+
+/**
+ * Sessions live in PostgreSQL so any app process can serve any request and restarts keep people signed in.
+ * One handler for the session, the signed-in person and keeping the session alive. A request that only reads a
+ * live session (any route but sign-in, sign-up, sign-out and invitations, with a signed cookie of a session seen
+ * within the day) takes the short way: the cookie checked, the one query, req.user set; express-session and
+ * passport, which would find the same and write nothing, are skipped. Anything else takes the full way.
+ * Either way the session row is read on every request, so a sign-out or a removed membership counts at once on
+ * every process.
+ */
+export function sessionMiddleware(options: {
+  pool: pg.Pool;
+  secret: string;
+  secure: boolean;
+  passport: { session(): RequestHandler };
+}) {
   const Store = personJoiningStore(connectPgSimple(session));
   const middleware = session({
     name: SESSION_COOKIE,
@@ -130,19 +150,68 @@ export function sessionMiddleware(options: { pool: pg.Pool; secret: string; secu
       maxAge: SESSION_DAYS * 24 * 60 * 60 * 1000,
     },
   });
-  const handler: RequestHandler = (req, res, next) => {
-    const slot: Slot = { householdId: HOUSEHOLD_IN_PATH.exec(req.path)?.[1]?.toLowerCase() ?? null };
+  const person = options.passport.session();
+  const full: RequestHandler = (req, res, next) => {
+    const slot: Slot = { householdId: householdInPath(req) };
     reading = slot;
     try {
       middleware(req, res, (error?: unknown) => {
+        if (error) return next(error);
         if (slot.joined) (req as unknown as Record<symbol, JoinedMembership>)[JOINED_MEMBERSHIP] = slot.joined;
-        next(error);
+        person(req, res, (personError?: unknown) =>
+          personError ? next(personError) : keepSessionAlive(req, res, next),
+        );
       });
     } finally {
       reading = undefined;
     }
   };
-  return handler;
+  const sessionIdOf = verifiedSessionIds(options.secret);
+  return ((req, res, next) => {
+    const sid = CHANGES_SESSION.test(req.path) ? null : sessionIdOf(req.headers.cookie);
+    if (!sid) return full(req, res, next);
+    const householdId = householdInPath(req);
+    options.pool.query<SessionRow>({ ...SESSION_READ, values: [sid, householdId] }, (error, result) => {
+      if (error) return next(error);
+      const row = result.rows[0];
+      const sess = row?.sess;
+      const seenAt = typeof sess?.seenAt === 'number' ? sess.seenAt : 0;
+      // Not a live, signed-in session seen within the day: express-session and passport decide, as they always did.
+      if (!row?.person_id || sess?.passport?.user !== row.person_id || Date.now() - seenAt > TOUCH_EVERY_MS)
+        return full(req, res, next);
+      req.user = { id: row.person_id, email: row.person_email!, name: row.person_name! };
+      if (householdId)
+        (req as unknown as Record<symbol, JoinedMembership>)[JOINED_MEMBERSHIP] = {
+          householdId,
+          userId: row.person_id,
+          row: row.member_role ? (row as unknown as JoinedMembership['row']) : null,
+        };
+      next();
+    });
+  }) satisfies RequestHandler;
+}
+
+const householdInPath = (req: Request) => HOUSEHOLD_IN_PATH.exec(req.path)?.[1]?.toLowerCase() ?? null;
+
+/**
+ * The session id in a request's cookie when its signature is good (as express-session reads it: the first
+ * cookie of that name, `s:` and the signed id), else null. A cookie's verdict never changes for one secret, so
+ * the good ones are remembered (a bounded map) and the HMAC is worked out once per session, not per request.
+ */
+function verifiedSessionIds(secret: string) {
+  const known = new Map<string, string>();
+  return (header: string | undefined) => {
+    if (!header || !header.includes(SESSION_COOKIE)) return null;
+    const raw = parseCookies(header)[SESSION_COOKIE];
+    if (!raw?.startsWith('s:')) return null;
+    const cached = known.get(raw);
+    if (cached) return cached;
+    const sid = unsign(raw.slice(2), secret);
+    if (sid === false) return null;
+    if (known.size >= 10_000) known.clear();
+    known.set(raw, sid);
+    return sid;
+  };
 }
 
 /** The membership the session read joined for this household and person, if it did (see sessionMiddleware). */
@@ -152,7 +221,7 @@ export function joinedMembership(req: object, householdId: string, userId: strin
 }
 
 /** Marks a signed-in session seen when it was last written over a day ago, so it (and its cookie) last another 30 days. */
-export const keepSessionAlive: RequestHandler = (req, _res, next) => {
+const keepSessionAlive: RequestHandler = (req, _res, next) => {
   if (req.user && req.session && Date.now() - (req.session.seenAt ?? 0) > TOUCH_EVERY_MS)
     req.session.seenAt = Date.now();
   next();

@@ -75,6 +75,49 @@ describe('sign-in and sign-out', () => {
   });
 });
 
+describe('the session cookie on household routes', () => {
+  async function cookieOf(email: string) {
+    const login = await ctx.request.post('/api/auth/login').send({ email, password: DEMO_PASSWORD });
+    return String(login.headers['set-cookie']).split(';')[0]!;
+  }
+  const household = () => `/api/households/${ctx.householdId}`;
+
+  it('answers 401 to the cookie of a session signed out or deleted, on the very next request', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    expect((await ctx.request.get(household()).set('Cookie', cookie)).status).toBe(200);
+    expect((await ctx.request.post('/api/auth/logout').set('Cookie', cookie)).status).toBe(204);
+    const after = await ctx.request.get(household()).set('Cookie', cookie);
+    expect(after.status).toBe(401);
+    expect(after.body.error.code).toBe('signed_out');
+
+    const other = await cookieOf('helper@larderly.test');
+    expect((await ctx.request.get(household()).set('Cookie', other)).status).toBe(200);
+    const sid = decodeURIComponent(other.split('=')[1]!).slice(2).split('.')[0];
+    await ctx.sequelize.query('DELETE FROM sessions WHERE sid = :sid', { replacements: { sid } });
+    expect((await ctx.request.get(household()).set('Cookie', other)).status).toBe(401);
+  });
+
+  it('is no sign-in when its signature does not match, and only the first cookie of the name counts', async () => {
+    const cookie = await cookieOf('keeper@larderly.test');
+    const value = decodeURIComponent(cookie.split('=')[1]!);
+    const last = value.at(-1) === 'A' ? 'B' : 'A';
+    const forged = `larderly.sid=${encodeURIComponent(value.slice(0, -1) + last)}`;
+    expect((await ctx.request.get(household()).set('Cookie', forged)).status).toBe(401);
+    expect((await ctx.request.get('/api/auth/me').set('Cookie', forged)).status).toBe(401);
+    // Unsigned, the bare id is not taken either (express-session's rule: only a signed `s:` value).
+    const bare = `larderly.sid=${value.slice(2).split('.')[0]}`;
+    expect((await ctx.request.get(household()).set('Cookie', bare)).status).toBe(401);
+    expect((await ctx.request.get(household()).set('Cookie', `${forged}; ${cookie}`)).status).toBe(401);
+    expect((await ctx.request.get(household()).set('Cookie', `${cookie}; ${forged}`)).status).toBe(200);
+  });
+
+  it('answers 404 for a household the signed-in person does not belong to', async () => {
+    const cookie = await cookieOf('keeper@larderly.test');
+    const away = await ctx.request.get(`/api/households/${ctx.neighbourHouseholdId}`).set('Cookie', cookie);
+    expect(away.status).toBe(404);
+  });
+});
+
 describe('requests from another site', () => {
   it('refuses a cross-origin POST with 403', async () => {
     const response = await ctx.request

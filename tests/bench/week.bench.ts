@@ -134,14 +134,25 @@ try {
 
   const os = await import('node:os');
   const loadBefore = os.loadavg()[0];
-  const week = await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie }, server.pid);
+  // BENCH_ROUTES=guard,bare (say) runs only those of week, guard and bare.
+  const only = (name: string) => !process.env.BENCH_ROUTES || process.env.BENCH_ROUTES.split(',').includes(name);
+  const skipped = {
+    medianMs: NaN,
+    p99Ms: NaN,
+    requestsPerSecond: NaN,
+    non2xx: 0,
+    serverCpuMsPerRequest: NaN,
+    mainThreadMs: NaN,
+    postgresCpuMsPerRequest: NaN,
+  };
+  const week = only('week')
+    ? await load(`http://127.0.0.1:${APP_PORT}${path}`, { cookie: serverCookie }, server.pid)
+    : skipped;
   // The same session and household guard with almost no work behind them: what any household route costs here.
-  const guarded = await load(
-    `http://127.0.0.1:${APP_PORT}/api/households/${household.id}`,
-    { cookie: serverCookie },
-    server.pid,
-  );
-  const base = await load(`http://127.0.0.1:${BARE_PORT}/bare`, {}, bare.pid);
+  const guarded = only('guard')
+    ? await load(`http://127.0.0.1:${APP_PORT}/api/households/${household.id}`, { cookie: serverCookie }, server.pid)
+    : skipped;
+  const base = only('bare') ? await load(`http://127.0.0.1:${BARE_PORT}/bare`, {}, bare.pid) : skipped;
   console.log(
     `\n${CONNECTIONS} connections, ${SECONDS} s each, on ${os.cpus().length} cores; machine load average before the run: ${loadBefore.toFixed(1)}`,
   );
@@ -174,10 +185,10 @@ try {
 }
 
 /** CPU time a process has used (user and system, ms), from /proc: steadier than throughput on a shared machine. */
-function cpuMsOf(pid: number | undefined) {
+function cpuMsOf(pid: number | undefined, file = 'stat') {
   if (!pid) return NaN;
   try {
-    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+    const fields = readFileSync(`/proc/${pid}/${file}`, 'utf8').split(') ')[1]!.split(' ');
     return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100; // utime and stime, in clock ticks of 1/100 s
   } catch {
     return NaN;
@@ -209,9 +220,12 @@ function postgresCpuSince(before: Map<string, number>) {
 
 async function load(url: string, headers: Record<string, string>, pid?: number) {
   const cpuBefore = cpuMsOf(pid);
+  // The main thread's own share: the rest is V8's garbage-collector helpers and libuv's threads.
+  const mainBefore = cpuMsOf(pid, `task/${pid}/stat`);
   const postgresBefore = postgresCpuMs();
   const result = await autocannon({ url, connections: CONNECTIONS, duration: SECONDS, headers });
   const cpuPerRequest = (cpuMsOf(pid) - cpuBefore) / result.requests.total;
+  const mainPerRequest = (cpuMsOf(pid, `task/${pid}/stat`) - mainBefore) / result.requests.total;
   const postgresPerRequest = postgresCpuSince(postgresBefore) / result.requests.total;
   if (result.non2xx > 0 || result.errors > 0)
     console.log(`  ${url}: ${result.non2xx} non-2xx, ${result.errors} errors`);
@@ -221,6 +235,7 @@ async function load(url: string, headers: Record<string, string>, pid?: number) 
     requestsPerSecond: result.requests.average,
     non2xx: result.non2xx,
     serverCpuMsPerRequest: Number(cpuPerRequest.toFixed(3)),
+    mainThreadMs: Number(mainPerRequest.toFixed(3)),
     postgresCpuMsPerRequest: Number(postgresPerRequest.toFixed(3)),
   };
 }
