@@ -1,50 +1,46 @@
-// The one way Larderly writes a calendar date, on screens, in e-mails, push messages and CSV help.
-// The platform's Intl (en-US) writes the words, so no locale tables ship to the browser; each kind of date words
-// keeps its one formatter (a to-do list's plans and a week's board write dozens of dates per answer).
-import { dateFormatter } from './intl-format';
+// The one way Larderly writes a calendar date, on screens, in e-mails, push messages and CSV help, in US English.
+// Written from the two name tables below, not with Intl or a date library's locale: the browser's Intl loads its
+// locale data on the first date a screen shows (23-67 ms of the main thread in Chromium here, measured, on every
+// first page load), and date-fns's format with its en-US locale adds 4.6 KB (brotli) to the signed-in code.
+// tests/unit/words.test.ts checks every day of three years against Intl's en-US words.
 
-function intlFormat(date: Date, options: Intl.DateTimeFormatOptions): string {
-  return dateFormatter('en-US', options).format(date);
-}
+/** Index 0 = Sunday, as the household's week start and JavaScript's getDay count. */
+export const WEEKDAY_NAMES = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'] as const;
+const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
 
-/** Local midnight of a YYYY-MM-DD date (the words name the calendar day, whatever the zone). */
-function parseISO(isoDate: string): Date {
-  const [year, month, day] = isoDate.split('-').map(Number);
-  const date = new Date(2000, 0, 1);
-  date.setFullYear(year!, month! - 1, day);
-  return date;
+/** Year, month (1-12), day and weekday (0 = Sunday) of a YYYY-MM-DD date, the calendar day whatever the zone. */
+function partsOf(isoDate: string) {
+  const [year, month, day] = isoDate.split('-').map(Number) as [number, number, number];
+  // Noon UTC of that day: its UTC weekday is the date's own.
+  return { year, month, day, weekday: new Date(Date.UTC(year, month - 1, day, 12)).getUTCDay() };
 }
+const shortWeekday = (weekday: number) => WEEKDAY_NAMES[weekday]!.slice(0, 3);
 
 /** "Tue, Jun 9" for 2026-06-09; with the year ("Tue, Aug 31, 2027") when it is not `thisYear`. */
 export function dateWords(isoDate: string, thisYear = new Date().getFullYear()): string {
-  const day = parseISO(isoDate);
-  return intlFormat(day, {
-    weekday: 'short',
-    month: 'short',
-    day: 'numeric',
-    year: day.getFullYear() === thisYear ? undefined : 'numeric',
-  });
+  const { year, month, day, weekday } = partsOf(isoDate);
+  return `${shortWeekday(weekday)}, ${MONTH_NAMES[month - 1]} ${day}${year === thisYear ? '' : `, ${year}`}`;
 }
 
 /** "Jul 31, 2026": a printed label's date, which is read for a year or more, so it always carries the year. */
 export function labelDateWords(isoDate: string): string {
-  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric', year: 'numeric' });
+  const { year, month, day } = partsOf(isoDate);
+  return `${MONTH_NAMES[month - 1]} ${day}, ${year}`;
 }
 
 /** "Jun 9", for the week board's column heads and a week's range. */
 export function monthDayWords(isoDate: string): string {
-  return intlFormat(parseISO(isoDate), { month: 'short', day: 'numeric' });
+  const { month, day } = partsOf(isoDate);
+  return `${MONTH_NAMES[month - 1]} ${day}`;
 }
 
 /** "Tuesday", or "T" when `narrow`. */
 export function weekdayWords(isoDate: string, narrow = false): string {
-  return intlFormat(parseISO(isoDate), { weekday: narrow ? 'narrow' : 'long' });
+  const name = WEEKDAY_NAMES[partsOf(isoDate).weekday]!;
+  return narrow ? name[0]! : name;
 }
 
 /** "Dec" for 2026-12. */
 export function monthWords(isoMonth: string): string {
-  return intlFormat(parseISO(`${isoMonth}-01`), { month: 'short' });
+  return MONTH_NAMES[Number(isoMonth.slice(5, 7)) - 1]!;
 }
-
-/** Index 0 = Sunday, as the household's week start and JavaScript's getDay count. */
-export const WEEKDAY_NAMES = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday'] as const;

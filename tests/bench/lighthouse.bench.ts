@@ -1,7 +1,8 @@
 // Lighthouse (mobile preset: a mid-range phone on a slow 4G link, simulated) on the sign-in, Today, Week and
 // Shelf screens of the demo household, against a running server; prints performance, LCP and accessibility.
 // Run: npm start (in another terminal), then npm run bench:lighthouse   (BASE_URL=http://host:port for another server;
-// CHROME_PATH for another Chromium than Debian's /usr/bin/chromium)
+// CHROME_PATH for another Chromium than Debian's /usr/bin/chromium; LIGHTHOUSE_REPORTS=<dir> keeps each screen's report)
+import { mkdirSync, writeFileSync } from 'node:fs';
 import * as chromeLauncher from 'chrome-launcher';
 import lighthouse from 'lighthouse';
 
@@ -51,6 +52,10 @@ try {
     if (result.lhr.runtimeError)
       throw new Error(`Lighthouse could not measure ${path}: ${result.lhr.runtimeError.message}`);
     const { categories, audits, finalDisplayedUrl } = result.lhr;
+    if (process.env.LIGHTHOUSE_REPORTS) {
+      mkdirSync(process.env.LIGHTHOUSE_REPORTS, { recursive: true });
+      writeFileSync(`${process.env.LIGHTHOUSE_REPORTS}/${screen}.json`, JSON.stringify(result.lhr));
+    }
     if (!finalDisplayedUrl.endsWith(path))
       throw new Error(`${path} ended on ${finalDisplayedUrl}: the screen was not the one measured`);
     const performance = Math.round((categories.performance?.score ?? 0) * 100);

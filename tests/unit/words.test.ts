@@ -10,6 +10,7 @@ import {
   INGREDIENT_ROLE_NAMES,
   INGREDIENT_UNIT_NAMES,
   jarSizeWords,
+  labelDateWords,
   METHOD_NAMES,
   monthDayWords,
   monthWords,
@@ -26,6 +27,38 @@ describe('one date formatter', () => {
     expect(weekdayWords('2026-12-07')).toBe('Monday');
     expect(weekdayWords('2026-12-07', true)).toBe('M');
     expect(monthWords('2026-09')).toBe('Sep');
+  });
+
+  // Reference: ECMA-402 Intl.DateTimeFormat with Node's ICU (CLDR en-US), the platform's own formatter: every day of
+  // three years (a leap year among them) reads the same in both.
+  it("writes every date as the platform's en-US Intl formatter does", () => {
+    const intl = (options: Intl.DateTimeFormatOptions, at: Date) =>
+      new Intl.DateTimeFormat('en-US', options).format(at);
+    const differ: string[] = [];
+    for (let at = new Date(2027, 0, 1); at.getFullYear() < 2030; at.setDate(at.getDate() + 1)) {
+      const iso = `${at.getFullYear()}-${String(at.getMonth() + 1).padStart(2, '0')}-${String(at.getDate()).padStart(2, '0')}`;
+      const pairs: [string, string][] = [
+        [
+          dateWords(iso, 2028),
+          intl(
+            {
+              weekday: 'short',
+              month: 'short',
+              day: 'numeric',
+              ...(at.getFullYear() === 2028 ? {} : { year: 'numeric' }),
+            },
+            at,
+          ),
+        ],
+        [labelDateWords(iso), intl({ month: 'short', day: 'numeric', year: 'numeric' }, at)],
+        [monthDayWords(iso), intl({ month: 'short', day: 'numeric' }, at)],
+        [weekdayWords(iso), intl({ weekday: 'long' }, at)],
+        [weekdayWords(iso, true), intl({ weekday: 'narrow' }, at)],
+        [monthWords(iso.slice(0, 7)), intl({ month: 'short' }, at)],
+      ];
+      for (const [ours, platform] of pairs) if (ours !== platform) differ.push(`${iso}: ${ours} / ${platform}`);
+    }
+    expect(differ).toEqual([]);
   });
 });
 

@@ -31,6 +31,9 @@ export interface ShelfProductGroup {
   batches: ShelfBatchRow[];
 }
 
+/** YYYY-MM-DD dates sort as plain strings: no locale's collation is needed (or loaded) for them. */
+const compareIso = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
 export function shelfBatchRows(jars: JarView[], products: ProductView[]): ShelfBatchRow[] {
   const notes = new Map(products.map((p) => [p.id, p.notes]));
   const rows = new Map<string, ShelfBatchRow>();
@@ -60,7 +63,7 @@ export function shelfBatchRows(jars: JarView[], products: ProductView[]): ShelfB
     });
   }
   return [...rows.values()].sort(
-    (a, b) => a.bestBy.localeCompare(b.bestBy) || a.productName.localeCompare(b.productName),
+    (a, b) => compareIso(a.bestBy, b.bestBy) || a.productName.localeCompare(b.productName),
   );
 }
 
@@ -85,7 +88,6 @@ export function shelfProductGroups(
   // Oldest best-quality date first, so the jars to eat soonest lead; empty products last.
   return groups.sort(
     (a, b) =>
-      (a.oldestBestBy ?? '9999').localeCompare(b.oldestBestBy ?? '9999') ||
-      a.product.name.localeCompare(b.product.name),
+      compareIso(a.oldestBestBy ?? '9999', b.oldestBestBy ?? '9999') || a.product.name.localeCompare(b.product.name),
   );
 }
