@@ -110,13 +110,15 @@ function personJoiningStore(PgStore: ReturnType<typeof connectPgSimple>) {
 /** The session's one query, named: each pooled connection plans it once, where planning cost more than running it. */
 const SESSION_READ = { name: 'larderly-session-read', text: PERSON_AND_MEMBERSHIP };
 
-/** What sign-in, sign-up, sign-out and accepting an invitation change: the session itself. */
+/** Where sign-in, sign-up, sign-out and accepting an invitation change the session itself (their writes, not reads). */
 const CHANGES_SESSION = /^\/(?:auth|invitations)(?:\/|$)/;
+const changesSession = (req: Request) =>
+  req.method !== 'GET' && req.method !== 'HEAD' && CHANGES_SESSION.test(req.path);
 
 /**
  * Sessions live in PostgreSQL so any app process can serve any request and restarts keep people signed in.
  * One handler for the session, the signed-in person and keeping the session alive. A request that only reads a
- * live session (any route but sign-in, sign-up, sign-out and invitations, with a signed cookie of a session seen
+ * live session (any request but the writes of sign-in, sign-up, sign-out and invitations, with a signed cookie of a session seen
  * within the day) takes the short way: the cookie checked, the one query, req.user set; express-session and
  * passport, which would find the same and write nothing, are skipped. Anything else takes the full way.
  * Either way the session row is read on every request, so a sign-out or a removed membership counts at once on
@@ -168,7 +170,7 @@ export function sessionMiddleware(options: {
   };
   const sessionIdOf = verifiedSessionIds(options.secret);
   return ((req, res, next) => {
-    const sid = CHANGES_SESSION.test(req.path) ? null : sessionIdOf(req.headers.cookie);
+    const sid = changesSession(req) ? null : sessionIdOf(req.headers.cookie);
     if (!sid) return full(req, res, next);
     const householdId = householdInPath(req);
     options.pool.query<SessionRow>({ ...SESSION_READ, values: [sid, householdId] }, (error, result) => {
