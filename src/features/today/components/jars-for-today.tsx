@@ -2,6 +2,7 @@ import { lazy, Suspense } from 'react';
 import { Link } from 'react-router-dom';
 import type { TodayUse, TodayView } from '@shared/schemas/today';
 import { count } from '@shared/words';
+import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { paths } from '@shared/paths';
 
@@ -76,14 +77,28 @@ export function JarsForToday({
                   {portion.jarPlaceWords ? `, ${portion.jarPlaceWords}` : ''}
                 </span>
                 {canHandleJars && (
-                  <Suspense fallback={null}>
-                    <OpenItButton
-                      hid={hid}
-                      jarId={portion.jarId!}
-                      code={portion.jarCode!}
-                      productName={portion.productName}
-                    />
-                  </Suspense>
+                  // On the right, also when a long name wraps it onto a line of its own; while its code loads, the
+                  // same button not yet working holds its place, so the row keeps its height (no layout shift).
+                  <span className="ml-auto">
+                    <Suspense
+                      fallback={
+                        <Button
+                          variant="secondary"
+                          disabled
+                          aria-label={`Open it: jar ${portion.jarCode} of ${portion.productName}`}
+                        >
+                          Open it
+                        </Button>
+                      }
+                    >
+                      <OpenItButton
+                        hid={hid}
+                        jarId={portion.jarId!}
+                        code={portion.jarCode!}
+                        productName={portion.productName}
+                      />
+                    </Suspense>
+                  </span>
                 )}
               </li>
             ))}
