@@ -1,6 +1,5 @@
 import express, { Router } from 'express';
 import compression from 'compression';
-import helmet from 'helmet';
 import pg from 'pg';
 import { configurePassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
@@ -10,6 +9,7 @@ import { errorHandler, notFoundHandler } from './http/errors';
 import { createLogger, requestLogger, type Logger } from './http/logging';
 import { createReadCache } from './http/read-cache';
 import { sameOriginOnly } from './http/same-origin';
+import { securityHeaders } from './http/security-headers';
 import { staticClient } from './http/static-client';
 import { authRouter } from './routes/auth';
 import { backupImportRouter, IMPORT_PATH } from './routes/backup';
@@ -52,28 +52,7 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   // Express's own reading of TRUST_PROXY: X-Forwarded-* and X-Request-Id count only from those peers.
   const trusts = app.get('trust proxy fn') as (address: string, hop: number) => boolean;
   app.use(requestLogger(logger, (address) => trusts(address, 0)));
-  app.use((_req, res, next) => {
-    res.set('X-Larderly-Instance', config.instanceName);
-    next();
-  });
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          defaultSrc: ["'self'"],
-          imgSrc: ["'self'", 'data:', 'blob:'],
-          styleSrc: ["'self'", "'unsafe-inline'"],
-          fontSrc: ["'self'"],
-          connectSrc: ["'self'"],
-          workerSrc: ["'self'"],
-          frameAncestors: ["'none'"],
-          upgradeInsecureRequests:
-            config.isProduction && config.appOrigins.some((o) => o.startsWith('https:')) ? [] : null,
-        },
-      },
-      strictTransportSecurity: config.appOrigins.some((o) => o.startsWith('https:')),
-    }),
-  );
+  app.use(securityHeaders(config));
 
   // JSON answers over 1 KB go out compressed; the built client is compressed at build time.
   app.use(compression({ threshold: 1024 }));

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { errorHandler } from '../../server/http/errors';
+import { helmetPerRequest, securityHeaders } from '../../server/http/security-headers';
 import { demoApp, DEMO_PASSWORD } from '../support/app';
 
 let ctx: Awaited<ReturnType<typeof demoApp>>;
@@ -23,6 +24,38 @@ describe('security headers', () => {
     expect(response.headers['x-content-type-options']).toBe('nosniff');
     expect(response.headers['referrer-policy']).toBe('no-referrer');
     expect(response.headers['x-powered-by']).toBeUndefined();
+  });
+
+  // helmet's headers are worked out once at start (server/http/security-headers.ts): an answer carries exactly the
+  // headers helmet itself sets on a request, over http and over https.
+  it("sends exactly helmet's own headers, over http and https", async () => {
+    for (const origin of ['http://127.0.0.1:3000', 'https://larder.example']) {
+      const config = loadConfig({
+        ...process.env,
+        NODE_ENV: 'production',
+        APP_ORIGIN: origin,
+        SESSION_SECRET: 'x'.repeat(40),
+      });
+      const own = express();
+      own.disable('x-powered-by');
+      own.use(helmetPerRequest(config));
+      own.get('/probe', (_req, res) => res.end());
+      const ours = express();
+      ours.disable('x-powered-by');
+      ours.use(securityHeaders(config));
+      ours.get('/probe', (_req, res) => res.end());
+      const names = (headers: Record<string, string>) =>
+        Object.fromEntries(
+          Object.entries(headers).filter(
+            ([name]) => !/^(date|connection|content-length|keep-alive|x-larderly-instance)$/.test(name),
+          ),
+        );
+      const expected = names((await request(own).get('/probe')).headers);
+      const answered = await request(ours).get('/probe');
+      expect(names(answered.headers)).toEqual(expected);
+      expect(Object.keys(expected).length).toBeGreaterThan(10);
+      expect(answered.headers['x-larderly-instance']).toBe(config.instanceName);
+    }
   });
 
   it('marks the session cookie Secure when the public origin is https', async () => {
