@@ -26,8 +26,11 @@ export function AppLayout() {
   // The "more" menu belongs to the page it was opened on, so it closes by itself on navigation.
   const [moreOpenOn, setMoreOpenOn] = useState<string | null>(null);
   const moreOpen = moreOpenOn === location.pathname;
+  // In a task of its own: a page's first localStorage write opens the store, which took a few ms of the first render.
   useEffect(() => {
-    if (membership) rememberHousehold(hid);
+    if (!membership) return;
+    const later = setTimeout(() => rememberHousehold(hid), 0);
+    return () => clearTimeout(later);
   }, [hid, membership]);
 
   if (!me) return null;
