@@ -38,7 +38,7 @@ function firstSegment(path: unknown) {
  */
 export function householdFeatureRouters(ctx: AppContext) {
   const features = [
-    productsRouter(),
+    productsRouter(ctx),
     recipesRouter(),
     batchesRouter(ctx),
     placesRouter(ctx),

@@ -2,17 +2,20 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { productCreate, productPatch } from '../../shared/schemas/products';
 import { currentMembership, householdAccess } from '../auth/guards';
+import type { AppContext } from '../context';
 import { body, params } from '../http/validate';
 import { createProduct, findProduct, listProducts, updateProduct } from '../services/shelf/products';
 import { productView } from '../services/shelf/views';
 
 const productParams = z.object({ hid: z.string(), productId: z.uuid({ error: 'That product was not found.' }) });
 
-export function productsRouter() {
+export function productsRouter(ctx: AppContext) {
   const router = Router({ mergeParams: true });
 
+  // Kept until the household's data version moves (products are among its versioned tables): every screen reads it.
   router.get('/products', householdAccess('read'), async (req, res) => {
-    res.json({ products: await listProducts(currentMembership(req).householdId) });
+    const { householdId } = currentMembership(req);
+    await ctx.readCache.send(req, res, 'products', async () => ({ products: await listProducts(householdId) }));
   });
 
   router.get('/products/:productId', householdAccess('read'), async (req, res) => {

@@ -97,6 +97,20 @@ describe('a read is never stale after a write made through the other app', () =>
     ).not.toContain(sealed.id);
   });
 
+  it('GET /products on the second app follows a product changed through the first', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const base = `/api/households/${first.householdId}`;
+    const before = (await onSecond(`${base}/products`, cookie)).body.products as { id: string; notes: string }[];
+    const product = before[0]!;
+    const notes = `kept on the top shelf ${Date.now()}`;
+    expect(
+      (await request(first.app).patch(`${base}/products/${product.id}`).set('Cookie', cookie).send({ notes })).status,
+    ).toBe(200);
+    const after = (await onSecond(`${base}/products`, cookie)).body.products as { id: string; notes: string }[];
+    expect(after.find((p) => p.id === product.id)!.notes).toBe(notes);
+    expect(after.map((p) => p.id)).toEqual(before.map((p) => p.id));
+  });
+
   it('answers 304 to a matching If-None-Match, and 200 with the new answer once the other app wrote', async () => {
     const cookie = await cookieOf('cook@larderly.test');
     const base = `/api/households/${first.householdId}`;
