@@ -10,9 +10,15 @@ const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Se
 
 /** Year, month (1-12), day and weekday (0 = Sunday) of a YYYY-MM-DD date, the calendar day whatever the zone. */
 function partsOf(isoDate: string) {
-  const [year, month, day] = isoDate.split('-').map(Number) as [number, number, number];
+  const [year, month, day] = (
+    /^\d{4}-\d{2}-\d{2}$/.test(isoDate) ? isoDate.split('-').map(Number) : [NaN, NaN, NaN]
+  ) as [number, number, number];
   // Noon UTC of that day: its UTC weekday is the date's own.
-  return { year, month, day, weekday: new Date(Date.UTC(year, month - 1, day, 12)).getUTCDay() };
+  const noon = new Date(Date.UTC(year, month - 1, day, 12));
+  // The words the platform's Date and Intl throw, with the value: not a date, or a day the month does not have.
+  if (noon.getUTCDate() !== day || noon.getUTCMonth() !== month - 1)
+    throw new RangeError(`Invalid time value: "${isoDate}" is not a date (YYYY-MM-DD)`);
+  return { year, month, day, weekday: noon.getUTCDay() };
 }
 const shortWeekday = (weekday: number) => WEEKDAY_NAMES[weekday]!.slice(0, 3);
 
@@ -42,5 +48,5 @@ export function weekdayWords(isoDate: string, narrow = false): string {
 
 /** "Dec" for 2026-12. */
 export function monthWords(isoMonth: string): string {
-  return MONTH_NAMES[Number(isoMonth.slice(5, 7)) - 1]!;
+  return MONTH_NAMES[partsOf(`${isoMonth}-01`).month - 1]!;
 }

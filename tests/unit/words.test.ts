@@ -29,6 +29,13 @@ describe('one date formatter', () => {
     expect(monthWords('2026-09')).toBe('Sep');
   });
 
+  it('refuses what is not a date, as the platform does ("Invalid time value"), naming the value', () => {
+    for (const bad of ['next spring', '2026-02-30', '2026-13-01', '2026-6-9', ''])
+      expect(() => dateWords(bad)).toThrow(new RangeError(`Invalid time value: "${bad}" is not a date (YYYY-MM-DD)`));
+    expect(() => monthWords('soon')).toThrow(RangeError);
+    expect(dateWords('2028-02-29', 2028)).toBe('Tue, Feb 29');
+  });
+
   // Reference: ECMA-402 Intl.DateTimeFormat with Node's ICU (CLDR en-US), the platform's own formatter: every day of
   // three years (a leap year among them) reads the same in both.
   it("writes every date as the platform's en-US Intl formatter does", () => {
