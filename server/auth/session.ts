@@ -94,12 +94,7 @@ function personJoiningStore(PgStore: ReturnType<typeof connectPgSimple>) {
             sess.passport[PERSON] = row.person_id
               ? { id: row.person_id, email: row.person_email!, name: row.person_name! }
               : null;
-          if (slot?.householdId && row.person_id)
-            slot.joined = {
-              householdId: slot.householdId,
-              userId: row.person_id,
-              row: row.member_role ? (row as unknown as JoinedMembership['row']) : null,
-            };
+          if (slot?.householdId && row.person_id) slot.joined = joinedFrom(slot.householdId, row.person_id, row);
           fn(null, sess);
         },
       );
@@ -183,15 +178,22 @@ export function sessionMiddleware(options: {
         return full(req, res, next);
       req.user = { id: row.person_id, email: row.person_email!, name: row.person_name! };
       if (householdId)
-        (req as unknown as Record<symbol, JoinedMembership>)[JOINED_MEMBERSHIP] = {
+        (req as unknown as Record<symbol, JoinedMembership>)[JOINED_MEMBERSHIP] = joinedFrom(
           householdId,
-          userId: row.person_id,
-          row: row.member_role ? (row as unknown as JoinedMembership['row']) : null,
-        };
+          row.person_id,
+          row,
+        );
       next();
     });
   }) satisfies RequestHandler;
 }
+
+/** The membership a session read's row joined for the household in the path (null row: the person is no member). */
+const joinedFrom = (householdId: string, userId: string, row: SessionRow): JoinedMembership => ({
+  householdId,
+  userId,
+  row: row.member_role ? (row as unknown as JoinedMembership['row']) : null,
+});
 
 const householdInPath = (req: Request) => HOUSEHOLD_IN_PATH.exec(req.path)?.[1]?.toLowerCase() ?? null;
 

@@ -1,6 +1,6 @@
 // Intl.DateTimeFormat made once per locale and options, on both sides: making a formatter costs far more than
-// formatting with one, and every household request asks for its today (the read cache's key), every answer for
-// its dates in words.
+// formatting with one, and every household request asks for its today in the household's zone (the read cache's
+// key). Dates in words need no Intl (dates.ts); a zone's today, hour and clock time do.
 const formatters = new Map<string, Intl.DateTimeFormat>();
 
 /** The formatter for this locale and these options (time zone included), kept after its first use. */
