@@ -22,8 +22,9 @@ beforeAll(async () => {
   ctx = await demoApp();
   cook = await ctx.signedIn('cook@larderly.test');
   const week: WeekView = (await cook.get(url('/week')).expect(200)).body;
-  // The demo leaves the lunches open from today for nine days: this week, or next when this one has fewer than three days left.
-  start = addDays(week.today, 2) > week.end ? addDays(week.start, 7) : week.start;
+  // The demo leaves the lunches open from today for nine days, beside a fridge jar of chutney that turns in three:
+  // the week the jar turns in, so that its waste is this week's (this week, or next when it turns after this one ends).
+  start = addDays(week.today, 3) > week.end ? addDays(week.start, 7) : week.start;
 });
 afterAll(() => ctx.close());
 

@@ -7,13 +7,16 @@ const browser = browserForFile();
 const DESKTOP_WIDE = { width: 1440, height: 900 };
 const tbspOf = (text: string | null) => Number(/([\d.]+) tbsp past/.exec(text ?? '')?.[1] ?? NaN);
 
-/** The demo week with its lunches open: this one, or the next when this one has fewer than three days left. */
+/**
+ * The demo week with its lunches open and the fridge's chutney turning in it (in three days): this one, or the next
+ * when this one has fewer than four days left.
+ */
 async function openDemoWeek(page: Page) {
   await signIn(page, baseURL, 'cook@larderly.test');
   await page.getByRole('navigation', { name: 'Screens' }).first().getByRole('link', { name: 'Week' }).click();
   await page.getByRole('heading', { name: 'Plan from the shelf' }).waitFor();
   const daysLeft = await page.getByLabel('Propose meals for').locator('option[value^="day:"]').count();
-  if (daysLeft < 3) {
+  if (daysLeft < 4) {
     const url = page.url();
     await page.getByRole('button', { name: 'Next week' }).click();
     await page.waitForURL((next) => next.toString() !== url);
