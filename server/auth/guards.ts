@@ -3,6 +3,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { can, type Permission, type Role } from '../../shared/roles';
 import { Household } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
+import type { HouseholdVersions } from '../services/household-memo';
 import { joinedMembership } from './session';
 
 declare global {
@@ -13,8 +14,10 @@ declare global {
         householdId: string;
         role: Role;
         household: Household;
-        /** Changes with every write to the household's data, in any process (migration 0085): the key of cached reads. */
+        /** Changes with every write to the household's data but its plan, in any process (migrations 0085, 0200). */
         dataVersion: string;
+        /** Changes with every write to the household's planned meals (migration 0200); with dataVersion, the key of cached reads. */
+        planVersion: string;
       };
     }
   }
@@ -27,7 +30,7 @@ export const requireUser: RequestHandler = (req, _res, next) => {
   next();
 };
 
-type MembershipRow = Record<string, unknown> & { member_role: Role; data_version: string };
+type MembershipRow = Record<string, unknown> & { member_role: Role; data_version: string; plan_version: string };
 
 /** A membership row (the household's columns and `member_role`) as the guard's membership. */
 function membershipFromRow(row: MembershipRow) {
@@ -37,6 +40,7 @@ function membershipFromRow(row: MembershipRow) {
   return {
     role: row.member_role,
     dataVersion: String(row.data_version),
+    planVersion: String(row.plan_version),
     household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }),
   };
 }
@@ -84,4 +88,10 @@ export function householdAccess(permission: Permission): RequestHandler {
 export function currentMembership(req: Request) {
   if (!req.membership) throw new Error('householdAccess must run before this handler');
   return req.membership;
+}
+
+/** The household's versions the guard read with this request: the key of shared parts of answers (household-memo.ts). */
+export function householdVersions(req: Request): HouseholdVersions {
+  const { dataVersion, planVersion } = currentMembership(req);
+  return { data: dataVersion, plan: planVersion };
 }

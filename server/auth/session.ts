@@ -28,7 +28,7 @@ export type SessionPerson = { id: string; email: string; name: string } | null;
 export interface JoinedMembership {
   householdId: string;
   userId: string;
-  row: (Record<string, unknown> & { member_role: string; data_version: string }) | null;
+  row: (Record<string, unknown> & { member_role: string; data_version: string; plan_version: string }) | null;
 }
 export const JOINED_MEMBERSHIP = Symbol('larderly.joinedMembership');
 

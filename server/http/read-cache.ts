@@ -23,10 +23,16 @@ const compress: Record<Encoding, (body: Buffer) => Promise<Buffer>> = {
   gzip: (body) => gzip(body),
 };
 
+/** What a cached answer is made from: the household's data, and (unless said otherwise) its planned meals. */
+export interface ReadsOf {
+  /** False only for an answer that reads no plan entry, not even through the week's allocation or the forecast. */
+  plan: boolean;
+}
+
 /**
- * Keeps each household read's answer (as sent) until the household's data version moves.
- * The version is read with the guard on every request and changes in the same transaction as any
- * write (migration 0085), so an answer is never older than the last write, whichever process wrote it.
+ * Keeps each household read's answer (as sent) until the household's versions it reads move.
+ * The versions are read with the guard on every request and change in the same transaction as any
+ * write (migrations 0085, 0200), so an answer is never older than the last write, whichever process wrote it.
  * Requests that miss at once share one computation.
  */
 export function createReadCache(maxEntries = 2_000) {
@@ -51,13 +57,21 @@ export function createReadCache(maxEntries = 2_000) {
   return {
     /**
      * Answers with the cached JSON for this household, `key` and today, computing it when the version moved;
-     * a matching If-None-Match gets 304. `key` must hold everything else the answer depends on.
+     * a matching If-None-Match gets 304. `key` must hold everything else the answer depends on; `reads` may say
+     * the answer reads no planned meal, so that a plan edit leaves it be.
      */
-    async send(req: Request, res: Response, key: string, compute: () => Promise<unknown>) {
-      const { householdId, household, dataVersion } = currentMembership(req);
+    async send(
+      req: Request,
+      res: Response,
+      key: string,
+      compute: () => Promise<unknown>,
+      reads: ReadsOf = { plan: true },
+    ) {
+      const { householdId, household, dataVersion, planVersion } = currentMembership(req);
       const fullKey = `${householdId} ${todayIn(household.timeZone)} ${key}`;
+      const version = reads.plan ? `${dataVersion} ${planVersion}` : dataVersion;
       const held = answers.get(fullKey);
-      const answer = await (held?.version === dataVersion ? held.answer : remember(fullKey, dataVersion, compute));
+      const answer = await (held?.version === version ? held.answer : remember(fullKey, version, compute));
       // Cache-Control stays the API's own (private, no-store, app.ts); a client that sends If-None-Match still gets 304.
       res
         .set({

@@ -30,9 +30,15 @@ export function jarsRouter(ctx: AppContext) {
 
   router.get('/jars', householdAccess('read'), async (req, res) => {
     const filter = query(req, jarStateQuery);
-    await ctx.readCache.send(req, res, `jars ${JSON.stringify(filter)}`, async () => ({
-      jars: await listJars(currentMembership(req).household, filter),
-    }));
+    await ctx.readCache.send(
+      req,
+      res,
+      `jars ${JSON.stringify(filter)}`,
+      async () => ({
+        jars: await listJars(currentMembership(req).household, filter),
+      }),
+      { plan: false },
+    );
   });
 
   router.get('/jars/by-code/:code', householdAccess('read'), async (req, res) => {

@@ -15,7 +15,9 @@ export function productsRouter(ctx: AppContext) {
   // Kept until the household's data version moves (products are among its versioned tables): every screen reads it.
   router.get('/products', householdAccess('read'), async (req, res) => {
     const { householdId } = currentMembership(req);
-    await ctx.readCache.send(req, res, 'products', async () => ({ products: await listProducts(householdId) }));
+    await ctx.readCache.send(req, res, 'products', async () => ({ products: await listProducts(householdId) }), {
+      plan: false,
+    });
   });
 
   router.get('/products/:productId', householdAccess('read'), async (req, res) => {

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { restockTodoCreate } from '../../shared/schemas/todos';
-import { currentMembership, householdAccess } from '../auth/guards';
+import { currentMembership, householdAccess, householdVersions } from '../auth/guards';
 import type { AppContext } from '../context';
 import { body, params } from '../http/validate';
 import { addRestockTodo } from '../services/restock/todo-batch-plan';
@@ -13,7 +13,9 @@ export function restockRouter({ sequelize, readCache }: AppContext) {
   const router = Router({ mergeParams: true });
 
   router.get('/restock', householdAccess('read'), async (req, res) => {
-    await readCache.send(req, res, 'restock', () => restockView(currentMembership(req).household));
+    await readCache.send(req, res, 'restock', () =>
+      restockView(currentMembership(req).household, householdVersions(req)),
+    );
   });
 
   router.post('/restock/:productId/todo', householdAccess('cook'), async (req, res) => {

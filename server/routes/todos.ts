@@ -16,9 +16,15 @@ export function todosRouter({ sequelize, readCache }: AppContext) {
     const { filter } = query(req, todoListQuery);
     const userId = req.user!.id;
     // Kept until the household's data moves (to-dos, recipes, products and stock are versioned); only "mine" is per person.
-    await readCache.send(req, res, `todos ${filter} ${filter === 'mine' ? userId : ''}`, async () => ({
-      todos: await listTodos(currentMembership(req).household, filter, userId),
-    }));
+    await readCache.send(
+      req,
+      res,
+      `todos ${filter} ${filter === 'mine' ? userId : ''}`,
+      async () => ({
+        todos: await listTodos(currentMembership(req).household, filter, userId),
+      }),
+      { plan: false },
+    );
   });
 
   router.get('/todos/:id', householdAccess('read'), async (req, res) => {

@@ -4,6 +4,7 @@ import type { TodayFridgeJar, TodayUse, TodayView } from '../../shared/schemas/t
 import { placeWords } from '../../shared/words/shelf-places';
 import { Household, Place, Product, Todo } from '../db/models';
 import { todayIn } from './clock';
+import type { HouseholdVersions } from './household-memo';
 import { keepsDays } from './plan-allocation';
 import { sealChecksOf } from './shelf/seal-check';
 import { restockFromSnapshot } from './restock/view';
@@ -96,10 +97,15 @@ function fridgeCountdowns(snapshot: StockSnapshot): TodayFridgeJar[] {
     }));
 }
 
-export async function todayView(household: Household, userId: string): Promise<TodayView> {
+/** Today for one person; with the request's versions, the shelf, plan and restock parts are shared with /restock. */
+export async function todayView(
+  household: Household,
+  userId: string,
+  versions?: HouseholdVersions,
+): Promise<TodayView> {
   const today = todayIn(household.timeZone);
   const [snapshot, myTodos, openTodoCount, sealChecks, places] = await Promise.all([
-    stockSnapshot(household.id, today),
+    stockSnapshot(household.id, today, versions),
     Todo.findAll({
       where: { householdId: household.id, done: false, assigneeId: userId },
       attributes: ['id', 'title', 'dueOn', 'kind'],
@@ -110,7 +116,7 @@ export async function todayView(household: Household, userId: string): Promise<T
     Place.findAll({ where: { householdId: household.id }, attributes: ['id', 'name'] }),
   ]);
   const fridge = fridgeCountdowns(snapshot);
-  const restock = await restockFromSnapshot(snapshot, household.unitSystem);
+  const restock = await restockFromSnapshot(snapshot, household.unitSystem, versions);
   return {
     today,
     ...todaysUse(snapshot, new Map(places.map((place) => [place.id, place.name]))),

@@ -99,11 +99,11 @@ interface ForecastQuestion {
   productId: Id;
   today: string;
   horizonDays: number;
-  jars: ForecastJar[];
-  finished: FinishedPortion[];
+  jars: readonly ForecastJar[];
+  finished: readonly FinishedPortion[];
   /** Jars given away; they leave the shelf (so they are not in `jars`) and never raise the eating rate. */
-  given?: GivenJar[];
-  planned: PlannedDraw[];
+  given?: readonly GivenJar[];
+  planned: readonly PlannedDraw[];
 }
 
 /**

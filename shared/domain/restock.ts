@@ -34,11 +34,11 @@ export interface RestockProduct {
 export interface RestockInput {
   today: string;
   products: RestockProduct[];
-  jars: ForecastJar[];
-  finished: FinishedPortion[];
+  jars: readonly ForecastJar[];
+  finished: readonly FinishedPortion[];
   /** Jars given away: counted apart, never as eaten. */
-  given?: GivenJar[];
-  planned: PlannedDraw[];
+  given?: readonly GivenJar[];
+  planned: readonly PlannedDraw[];
   leadDays?: number;
 }
 

@@ -8,6 +8,8 @@ import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
 import { Household, Membership, User } from '../../server/db/models';
 import { todayIn } from '../../server/services/clock';
+import { viewFridge } from '../../server/services/fridge';
+import { restockView } from '../../server/services/restock/view';
 import { todayView } from '../../server/services/today';
 import { readWeek } from '../../server/services/week/read-week';
 import { demoApp, DEMO_PASSWORD, type DemoEmail } from '../support/app';
@@ -245,5 +247,80 @@ describe('the session and the guard, across both apps', () => {
     }
     expect(texts.length).toBeGreaterThan(0);
     expect(texts.join('\n')).not.toMatch(/password_hash/);
+  });
+});
+
+// Last in this file: it takes the demo household's plan away.
+describe('the plan has a version of its own (migration 0200)', () => {
+  const versions = async () => {
+    const [[row]] = (await first.sequelize.query(
+      'SELECT data_version::text AS data, plan_version::text AS plan FROM households WHERE id = :id',
+      { replacements: { id: first.householdId } },
+    )) as [{ data: string; plan: string }[], unknown];
+    return { data: Number(row!.data), plan: Number(row!.plan) };
+  };
+
+  it('one transaction that writes a planned meal and a product moves each version once; a plan write alone moves only the plan’s', async () => {
+    const before = await versions();
+    await first.sequelize.transaction(async (transaction) => {
+      const run = (sql: string) => first.sequelize.query(sql, { replacements: { id: first.householdId }, transaction });
+      // The plan first: under migration 0085's rule its bump of the households row hid the data's bump after it.
+      await run('UPDATE plan_entries SET servings = servings WHERE household_id = :id');
+      await run('UPDATE products SET notes = notes WHERE household_id = :id');
+    });
+    expect(await versions()).toEqual({ data: before.data + 1, plan: before.plan + 1 });
+    await first.sequelize.query('UPDATE plan_entries SET servings = servings WHERE household_id = :id', {
+      replacements: { id: first.householdId },
+    });
+    expect(await versions()).toEqual({ data: before.data + 1, plan: before.plan + 2 });
+    // A settings change is the data's; a settings write that changes nothing moves neither.
+    await first.sequelize.query('UPDATE households SET time_zone = time_zone WHERE id = :id', {
+      replacements: { id: first.householdId },
+    });
+    expect(await versions()).toEqual({ data: before.data + 1, plan: before.plan + 2 });
+    await first.sequelize.query(`UPDATE households SET name = name || ' ' WHERE id = :id`, {
+      replacements: { id: first.householdId },
+    });
+    expect(await versions()).toEqual({ data: before.data + 2, plan: before.plan + 2 });
+    await first.sequelize.query('UPDATE households SET name = rtrim(name) WHERE id = :id', {
+      replacements: { id: first.householdId },
+    });
+  });
+
+  it('the plan taken away through the first app: the second app’s week, Today, fridge and restock follow it, the shelf, products and to-dos stay as they were', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const base = `/api/households/${first.householdId}`;
+    const planned = ['/week', '/today', '/fridge', '/restock'];
+    const unplanned = ['/jars?state=sealed', '/products', '/todos'];
+    const before: Record<string, unknown> = {};
+    for (const path of [...planned, ...unplanned]) {
+      const answer = await onSecond(`${base}${path}`, cookie);
+      expect(answer.status).toBe(200);
+      before[path] = answer.body;
+    }
+    const entries = before['/week'] as { days: { entries: unknown[] }[] };
+    expect(entries.days.flatMap((d) => d.entries).length).toBeGreaterThan(0);
+    const versionsBefore = await versions();
+
+    await first.sequelize.query('DELETE FROM plan_entries WHERE household_id = :id', {
+      replacements: { id: first.householdId },
+    });
+    expect(await versions()).toEqual({ data: versionsBefore.data, plan: versionsBefore.plan + 1 });
+
+    const household = (await Household.findByPk(first.householdId))!;
+    const cook = (await User.findOne({ where: { email: 'cook@larderly.test' } }))!;
+    const today = todayIn(household.timeZone);
+    const direct: Record<string, unknown> = {
+      '/week': await readWeek(first.sequelize, household, weekStartOf(today, household.weekStartsOn)),
+      '/today': await todayView(household, cook.id),
+      '/fridge': await viewFridge(household.id, today),
+      '/restock': await restockView(household),
+    };
+    for (const path of planned) {
+      const after = await onSecond(`${base}${path}`, cookie);
+      expect(after.body, path).toEqual(JSON.parse(JSON.stringify(direct[path])));
+      expect(after.body, `${path} should have changed with the plan`).not.toEqual(before[path]);
+    }
+    for (const path of unplanned) expect((await onSecond(`${base}${path}`, cookie)).body, path).toEqual(before[path]);
   });
 });

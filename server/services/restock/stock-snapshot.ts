@@ -10,6 +10,7 @@ import {
   type PlannedPortion,
 } from '../../../shared/domain';
 import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
+import { frozen, householdMemo, type HouseholdVersions } from '../household-memo';
 
 /** The months a use chart shows, the current one included. */
 export const CHART_MONTHS = 6;
@@ -32,17 +33,17 @@ export type ShelfJar = Pick<Jar, (typeof SHELF_JAR_COLUMNS)[number]>;
 export interface StockSnapshot {
   householdId: string;
   today: string;
-  products: Product[];
+  readonly products: readonly Product[];
   /** Sealed and opened jars. */
-  shelfJars: ShelfJar[];
+  readonly shelfJars: readonly ShelfJar[];
   /** Jars finished since the start of the chart's first month, each counted as a full jar. */
-  finished: FinishedPortion[];
+  readonly finished: readonly FinishedPortion[];
   /** Jars given away since the earlier of the history's start and the first of this year: not eaten, counted apart. */
-  given: GivenJar[];
+  readonly given: readonly GivenJar[];
   /** Every pairing of a plan entry from today on: the pairing's portion per serving times the entry's servings. */
-  planned: PlannedPortion[];
+  readonly planned: readonly PlannedPortion[];
   /** The plan entry each planned portion (by pairing id) belongs to. */
-  entryOf: Map<string, PlanEntry>;
+  readonly entryOf: ReadonlyMap<string, PlanEntry>;
 }
 
 export function useWithinDaysOf(product: Product): number {
@@ -55,10 +56,11 @@ function historyStart(today: string): string {
   return chartStart < forecastStart ? chartStart : forecastStart;
 }
 
-export async function stockSnapshot(householdId: string, today: string): Promise<StockSnapshot> {
+/** The shelf's part of the snapshot: products, jars and their history; none of it reads the plan. */
+async function shelfPart(householdId: string, today: string) {
   const yearStart = `${today.slice(0, 4)}-01-01`;
   const givenFrom = historyStart(today) < yearStart ? historyStart(today) : yearStart;
-  const [products, shelfJars, finishedJars, givenJars, entries] = await Promise.all([
+  const [products, shelfJars, finishedJars, givenJars] = await Promise.all([
     Product.findAll({ where: { householdId }, order: [['name', 'ASC']] }),
     // Plain rows, not model instances: every Today and Restock answer worked out reads these, and uses no model method.
     Jar.findAll({
@@ -76,17 +78,8 @@ export async function stockSnapshot(householdId: string, today: string): Promise
       attributes: ['productId', 'givenOn'],
       raw: true,
     }),
-    PlanEntry.findAll({
-      where: { householdId, date: { [Op.gte]: today } },
-      include: [{ model: Pairing, as: 'pairings', required: true }],
-    }),
   ]);
-  const entryOf = new Map(
-    entries.flatMap((entry) => (entry.pairings ?? []).map((pairing) => [pairing.id, entry] as const)),
-  );
-  return {
-    householdId,
-    today,
+  return frozen({
     products,
     // A raw row skips the model's getters: its decimals come as strings (columns.ts's `decimal` makes them numbers).
     shelfJars: shelfJars.map((jar) => ({
@@ -100,6 +93,16 @@ export async function stockSnapshot(householdId: string, today: string): Promise
       tbsp: Number(jar.capacityTbsp),
     })),
     given: givenJars.map((jar) => ({ productId: jar.productId, givenOn: jar.givenOn! })),
+  });
+}
+
+/** The plan's part: every pairing of a plan entry from today on. */
+async function planPart(householdId: string, today: string) {
+  const entries = await PlanEntry.findAll({
+    where: { householdId, date: { [Op.gte]: today } },
+    include: [{ model: Pairing, as: 'pairings', required: true }],
+  });
+  return frozen({
     planned: entries.flatMap((entry) =>
       (entry.pairings ?? []).map((pairing) => ({
         id: pairing.id,
@@ -108,6 +111,27 @@ export async function stockSnapshot(householdId: string, today: string): Promise
         tbsp: pairing.tbspPerServing * entry.servings,
       })),
     ),
-    entryOf,
-  };
+    entryOf: new Map(entries.flatMap((entry) => (entry.pairings ?? []).map((pairing) => [pairing.id, entry] as const))),
+  });
+}
+
+const shelfParts = householdMemo<Awaited<ReturnType<typeof shelfPart>>>();
+const planParts = householdMemo<Awaited<ReturnType<typeof planPart>>>();
+
+/**
+ * The snapshot for `today`. With the request's versions, each part is kept until the versions it reads move, so a
+ * meal edited on the board reads the shelf's jars again only when they changed too; without, both are read now.
+ */
+export async function stockSnapshot(
+  householdId: string,
+  today: string,
+  versions?: HouseholdVersions,
+): Promise<StockSnapshot> {
+  const key = `${householdId} ${today}`;
+  const [shelf, plan] = await Promise.all([
+    shelfParts(key, versions?.data, () => shelfPart(householdId, today)),
+    // The plan's rows only, but kept on both versions: a data write that cascades into them moves plan_version too.
+    planParts(key, versions && `${versions.data} ${versions.plan}`, () => planPart(householdId, today)),
+  ]);
+  return { householdId, today, ...shelf, ...plan };
 }

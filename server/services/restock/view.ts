@@ -19,6 +19,7 @@ import type {
 import type { UnitSystem } from '../../../shared/domain';
 import { Household, Recipe, Todo, type Product } from '../../db/models';
 import { todayIn } from '../clock';
+import { frozen, householdMemo, type HouseholdVersions } from '../household-memo';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
 function whyInWords(
@@ -61,14 +62,32 @@ async function planningState(householdId: string) {
   return { withRecipe: new Set(recipes.map((recipe) => recipe.productId)), openTodo };
 }
 
-/** The household's restock list for today, worked out over its real shelf, history and plan. */
-export async function restockView(household: Household): Promise<RestockView> {
+/**
+ * The household's restock list for today, worked out over its real shelf, history and plan; with the request's
+ * versions, once per change of the household (Today shows the same list).
+ */
+export async function restockView(household: Household, versions?: HouseholdVersions): Promise<RestockView> {
   const today = todayIn(household.timeZone);
-  const snapshot = await stockSnapshot(household.id, today);
-  return restockFromSnapshot(snapshot, household.unitSystem);
+  const snapshot = await stockSnapshot(household.id, today, versions);
+  return restockFromSnapshot(snapshot, household.unitSystem, versions);
 }
 
-export async function restockFromSnapshot(snapshot: StockSnapshot, system: UnitSystem = 'us'): Promise<RestockView> {
+const restockLists = householdMemo<RestockView>();
+
+/** The restock list from a snapshot; `versions` must be the ones the snapshot was read at. */
+export function restockFromSnapshot(
+  snapshot: StockSnapshot,
+  system: UnitSystem = 'us',
+  versions?: HouseholdVersions,
+): Promise<RestockView> {
+  return restockLists(
+    `${snapshot.householdId} ${snapshot.today} ${system}`,
+    versions && `${versions.data} ${versions.plan}`,
+    async () => frozen(await restockListOf(snapshot, system)),
+  );
+}
+
+async function restockListOf(snapshot: StockSnapshot, system: UnitSystem): Promise<RestockView> {
   const { products, today } = snapshot;
   const { withRecipe, openTodo } = await planningState(snapshot.householdId);
   const result = restockSuggestions({

@@ -1,0 +1,40 @@
+// Parts of an answer that several household reads share (the shelf's jars and history, the restock list), worked out
+// once per change of the household instead of once per read: the read cache's rule, for pieces instead of answers.
+
+/**
+ * The household's versions as the guard read them with this request (migrations 0085, 0200): `data` moves with
+ * every write but the plan's, `plan` with every write to the planned meals, in any process.
+ */
+export interface HouseholdVersions {
+  data: string;
+  plan: string;
+}
+
+/**
+ * A per-process store of values worked out from a household's rows, each kept until the version it was made at is
+ * no longer the one a request reads. A value made while a write committed holds data at least as new as its version,
+ * so no request is answered from rows older than the versions it read. Callers without versions (jobs, writes inside
+ * a transaction) work the value out every time. Requests that miss at once share one computation.
+ *
+ * The values are shared between requests: freeze what a caller could change in place (see `frozen`).
+ */
+export function householdMemo<T>(maxEntries = 1_000) {
+  const entries = new Map<string, { version: string; value: Promise<T> }>();
+  return (key: string, version: string | undefined, compute: () => Promise<T>): Promise<T> => {
+    if (version === undefined) return compute();
+    const held = entries.get(key);
+    if (held?.version === version) return held.value;
+    const value = compute();
+    entries.delete(key);
+    entries.set(key, { version, value });
+    if (entries.size > maxEntries) entries.delete(entries.keys().next().value!);
+    value.catch(() => entries.get(key)?.value === value && entries.delete(key));
+    return value;
+  };
+}
+
+/** The arrays of a shared value, frozen: a caller that sorts or pushes in place fails at once instead of changing it. */
+export function frozen<T extends object>(value: T): T {
+  for (const field of Object.values(value)) if (Array.isArray(field)) Object.freeze(field);
+  return Object.freeze(value);
+}
