@@ -4,7 +4,7 @@ import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 
 /** A stable 64-bit key for a lock name (the first 8 bytes of its SHA-256). */
-function advisoryKey(name: string): string {
+export function advisoryKey(name: string): string {
   return createHash('sha256').update(name).digest().readBigInt64BE(0).toString();
 }
 

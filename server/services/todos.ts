@@ -2,7 +2,7 @@
 import { Op, QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import type { Role } from '../../shared/roles';
 import type { BatchPlan, TodoCreate, TodoFilter, TodoKind, TodoPatch, TodoView } from '../../shared/schemas/todos';
-import { lockNames } from '../db/advisory-locks';
+import { advisoryKey, lockNames } from '../db/advisory-locks';
 import { Household, Membership, Todo } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
 import { refreshPlans } from './restock/todo-plan-numbers';
@@ -83,7 +83,7 @@ export async function findTodo(household: Household, id: string): Promise<TodoVi
  * The rows are read in a statement after the lock's, so they include what the list's previous writer committed.
  */
 async function lockList(householdId: string, transaction: Transaction): Promise<Todo[]> {
-  await lockNames(Todo.sequelize!, transaction, [`todos:${householdId}`]);
+  await lockNames(Todo.sequelize!, transaction, [listLockName(householdId)]);
   return Todo.findAll({
     where: { householdId },
     order: [['position', 'ASC']],
@@ -92,13 +92,18 @@ async function lockList(householdId: string, transaction: Transaction): Promise<
   });
 }
 
+/** The name of the household list's advisory lock, taken by every writer of the list. */
+const listLockName = (householdId: string) => `todos:${householdId}`;
+
+const notAMember = () =>
+  new AppError(400, 'invalid_input', 'Some fields need attention.', {
+    assigneeId: 'Choose a member of this household.',
+  });
+
 async function requireMember(householdId: string, userId: string | null | undefined, transaction: Transaction) {
   if (!userId) return;
   const member = await Membership.findOne({ where: { householdId, userId }, transaction, attributes: ['id'] });
-  if (!member)
-    throw new AppError(400, 'invalid_input', 'Some fields need attention.', {
-      assigneeId: 'Choose a member of this household.',
-    });
+  if (!member) throw notAMember();
 }
 
 interface NewTodo extends TodoCreate {
@@ -138,24 +143,6 @@ export async function createTodo(
   return findTodo(household, id);
 }
 
-/** Moves one to-do to `position` in the whole list, shifting the ones between by one, in one statement. */
-async function move(householdId: string, list: Todo[], todo: Todo, position: number, transaction: Transaction) {
-  const target = Math.min(position, list.length - 1);
-  const from = list.findIndex((t) => t.id === todo.id);
-  if (target === from) return;
-  const order = list.filter((t) => t.id !== todo.id);
-  order.splice(target, 0, todo);
-  const moved = order.flatMap((t, index) => (t.position === index ? [] : [{ id: t.id, position: index }]));
-  if (moved.length === 0) return;
-  // The list's unique (household_id, position) waits for commit (deferred), so the rows may change in any order.
-  await Todo.sequelize!.query(
-    `UPDATE todos t SET position = v.position, updated_at = now()
-       FROM unnest($2::uuid[], $3::int[]) AS v(id, position)
-      WHERE t.id = v.id AND t.household_id = $1`,
-    { bind: [householdId, moved.map((m) => m.id), moved.map((m) => m.position)], transaction },
-  );
-}
-
 const HELPER_FIELDS = new Set(['done']);
 
 export async function updateTodo(
@@ -169,16 +156,24 @@ export async function updateTodo(
     throw forbidden('Helpers may tick a to-do done or not done; ask a cook or keeper to change anything else.');
   }
   const householdId = household.id;
-  await sequelize.transaction(async (transaction) => {
-    const list = await lockList(householdId, transaction);
-    const todo = list.find((t) => t.id === id);
-    if (!todo) throw notFound('That to-do');
-    await requireMember(householdId, patch.assigneeId, transaction);
-    const { position, done, ...fields } = patch;
-    const doneFields = done === undefined || done === todo.done ? {} : { done, doneAt: done ? new Date() : null };
-    await todo.update({ ...fields, ...doneFields }, { transaction });
-    if (position !== undefined) await move(householdId, list, todo, position, transaction);
-  });
+  const { position, done, ...fields } = patch;
+  // One statement (migration 0210): the list's lock is held inside PostgreSQL only, not across round trips.
+  const [{ outcome }] = await sequelize.query<{ outcome: string }>(
+    'SELECT todo_list_update($1::bigint, $2, $3, $4::jsonb, $5, $6) AS outcome',
+    {
+      bind: [
+        advisoryKey(listLockName(householdId)),
+        householdId,
+        id,
+        JSON.stringify(fields),
+        done ?? null,
+        position ?? null,
+      ],
+      type: QueryTypes.SELECT,
+    },
+  );
+  if (outcome === 'missing') throw notFound('That to-do');
+  if (outcome === 'not a member') throw notAMember();
   return findTodo(household, id);
 }
 

@@ -131,6 +131,35 @@ describe('the household to-do list', () => {
     const outsider = await cook.patch(url(`/${todo.id}`)).send({ assigneeId: neighbourId });
     expect(outsider.status).toBe(400);
     expect(outsider.body.error.fields.assigneeId).toMatch(/member of this household/);
+    // The refused change wrote nothing, not even its other fields.
+    const refusedToo = await cook.patch(url(`/${todo.id}`)).send({ title: 'Not saved', assigneeId: neighbourId });
+    expect(refusedToo.status).toBe(400);
+    expect((await cook.get(url(`/${todo.id}`))).body.todo).toMatchObject({
+      title: 'Pick the green tomatoes',
+      assigneeId: helperId,
+    });
+    // null clears the due date and the assignee; the same values again change nothing, not even updated_at.
+    const cleared = await cook.patch(url(`/${todo.id}`)).send({ dueOn: null, assigneeId: null });
+    expect(cleared.body.todo).toMatchObject({
+      dueOn: null,
+      assigneeId: null,
+      assigneeName: null,
+      notes: 'The ones by the fence',
+    });
+    const stamp = async () =>
+      String(
+        (
+          (
+            await ctx.sequelize.query('SELECT updated_at FROM todos WHERE id = :id', { replacements: { id: todo.id } })
+          )[0][0] as { updated_at: Date }
+        ).updated_at.getTime(),
+      );
+    const before = await stamp();
+    const same = await cook
+      .patch(url(`/${todo.id}`))
+      .send({ dueOn: null, notes: 'The ones by the fence', position: cleared.body.todo.position });
+    expect(same.status).toBe(200);
+    expect(await stamp()).toBe(before);
     const invalid = await cook.post(url()).send({ title: '  ' });
     expect(invalid.status).toBe(400);
     expect(invalid.body.error.fields.title).toMatch(/title/);
