@@ -18,7 +18,13 @@ export interface HouseholdVersions {
  *
  * The values are shared between requests: freeze what a caller could change in place (see `frozen`).
  */
-export function householdMemo<T>(maxEntries = 1_000) {
+/**
+ * How many households' parts a memo keeps: a part matters between a change and the reads that follow it, and the
+ * shelf of a household with years of jars is a few hundred kilobytes of objects, so a few hundred bound the memory.
+ */
+export const MEMO_HOUSEHOLDS = 256;
+
+export function householdMemo<T>(maxEntries = MEMO_HOUSEHOLDS) {
   const entries = new Map<string, { version: string; value: Promise<T> }>();
   return (key: string, version: string | undefined, compute: () => Promise<T>): Promise<T> => {
     if (version === undefined) return compute();
