@@ -1,9 +1,10 @@
 // Loaded on its own before the first render (see src/app/offline.ts), so the first screen's chunk stays small.
 import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
-import { onlineManager, type QueryClient } from '@tanstack/react-query';
+import { dehydrate, hydrate, onlineManager, type DehydratedState, type QueryClient } from '@tanstack/react-query';
 import { persistQueryClientRestore, persistQueryClientSubscribe } from '@tanstack/react-query-persist-client';
 import { createStore, del, get, set } from 'idb-keyval';
 import type { MeResponse } from '@shared/schemas/auth';
+import { ApiError } from './api-client';
 import { KEPT_FOR_MS } from './query-client';
 import { authKeys } from './query-keys';
 
@@ -23,6 +24,55 @@ const persister = createAsyncStoragePersister({
 
 const personOf = (queryClient: QueryClient) =>
   queryClient.getQueryData<MeResponse | null>(authKeys.me)?.user.id ?? null;
+
+/**
+ * The browser may say it is online with no network to be had (a weak signal, a network that leads nowhere; some
+ * browsers after a reload offline). Until a read has an answer, the saved copy is kept aside and the changes still
+ * waiting wait: the first read that fails for want of a network puts the copy back and tells TanStack Query it is
+ * offline, as if the browser had said so, and the changes pause again; the first read answered sends them.
+ */
+function untilTheNetworkAnswers(queryClient: QueryClient, saved: DehydratedState, carryOn: () => void) {
+  const stop = queryClient.getQueryCache().subscribe((event) => {
+    if (event.type !== 'updated') return;
+    if (event.action.type === 'success') {
+      stop();
+      return carryOn();
+    }
+    if (event.action.type !== 'error') return;
+    const { error } = event.action;
+    if (!(error instanceof ApiError) || error.code !== 'offline') return;
+    stop();
+    onlineManager.setOnline(false);
+    probeUntilOnline();
+    // The reads still under way began before the saved copy was back: cancelled first, none of them can later put
+    // its empty start back over it (a change made offline cancels the reads it touches, and they revert).
+    void queryClient
+      .cancelQueries()
+      .then(() => hydrate(queryClient, saved))
+      .then(carryOn);
+  });
+}
+
+/** How often the app asks whether the server answers again, once a failed read put it offline. */
+const PROBE_EVERY_MS = 5_000;
+
+/**
+ * Offline on a failed read's word, no browser event says when the network is back (the browser never said it was
+ * gone): every few seconds the app asks the server's health address, and the first answer puts it online again.
+ */
+function probeUntilOnline() {
+  const timer = setInterval(() => {
+    if (onlineManager.isOnline()) return clearInterval(timer);
+    void fetch('/api/health', { cache: 'no-store' }).then(
+      (response) => {
+        if (!response.ok || onlineManager.isOnline()) return;
+        clearInterval(timer);
+        onlineManager.setOnline(true);
+      },
+      () => {},
+    );
+  }, PROBE_EVERY_MS);
+}
 
 /**
  * Puts back the changes still waiting and, when the app starts without a network, what the person last read; keeps
@@ -45,8 +95,20 @@ export async function restoreCache(queryClient: QueryClient) {
   // With a network, a new page load reads afresh (the saved copy would show an older state first); the session
   // is kept to open without a flash, and read again too. A saved "signed out" is not kept: trusted, it would send a
   // person whose cookie is still good to sign-in and back before the first screen.
+  // Restored changes carry on: those that were sending send again, the paused ones wait for the network.
+  // One scope keeps them in the order they were made; offline, each pauses again until the network returns.
+  const carryOn = () => {
+    for (const mutation of queryClient.getMutationCache().getAll())
+      if (mutation.state.status === 'pending') void mutation.continue().catch(() => {});
+  };
+  let waitForTheNetwork = false;
   if (onlineManager.isOnline()) {
     const signedOut = personOf(queryClient) === null;
+    if (!signedOut) {
+      // The queries only: the restored changes are in the cache already.
+      untilTheNetworkAnswers(queryClient, dehydrate(queryClient, { shouldDehydrateMutation: () => false }), carryOn);
+      waitForTheNetwork = true;
+    }
     queryClient.removeQueries({ predicate: (query) => signedOut || query.queryKey[0] !== authKeys.me[0] });
   }
   await queryClient.invalidateQueries({ refetchType: 'none' });
@@ -64,8 +126,5 @@ export async function restoreCache(queryClient: QueryClient) {
     void persister.removeClient();
   });
   persistQueryClientSubscribe(options);
-  // Restored changes carry on: those that were sending send again, the paused ones wait for the network.
-  // One scope keeps them in the order they were made; offline, each pauses again until the network returns.
-  for (const mutation of queryClient.getMutationCache().getAll())
-    if (mutation.state.status === 'pending') void mutation.continue().catch(() => {});
+  if (!waitForTheNetwork) carryOn();
 }

@@ -8,7 +8,8 @@ export function RequireAuth() {
   const { data: me, isPending, error } = useMe();
   const location = useLocation();
   if (isPending) return <p className="p-6 text-ink-muted">Opening your larder…</p>;
-  if (error) {
+  // A read again that failed leaves the person as last read: the screens show what they have, and say why.
+  if (error && me === undefined) {
     return (
       <div className="p-6">
         <Notice tone="past" title="Larderly cannot load right now." role="alert">
