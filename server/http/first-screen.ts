@@ -45,7 +45,9 @@ function hintsFor(pathname: string): Hints | null {
   const screen = parts[2] ?? 'today';
   const reads: Record<string, string[]> = {
     today: [`${household}/today`, `${household}/products`],
-    shelf: [`${household}/jars`, `${household}/products`],
+    // The gifts and places too: the header's line says this year's gifts and the place filter sits above the jars,
+    // and the shelf waits for both rather than move when they come.
+    shelf: [`${household}/jars`, `${household}/products`, `${household}/gifts`, `${household}/places`],
     week: [`${household}/meals`],
   };
   // The household itself too: the week's first day and the setup banner wait for it.

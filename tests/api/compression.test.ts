@@ -91,6 +91,8 @@ describe("each screen's page names its code and first reads, so they load at onc
       `preload /api/households/${hid}`,
       `preload /api/households/${hid}/jars`,
       `preload /api/households/${hid}/products`,
+      `preload /api/households/${hid}/gifts`,
+      `preload /api/households/${hid}/places`,
     ]);
   });
 

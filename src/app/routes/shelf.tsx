@@ -85,7 +85,7 @@ export function ShelfRoute() {
       <PageHeader
         title="Shelf"
         lead={
-          jars.data
+          jars.data && !gifts.isPending
             ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.${gifts.data && gifts.data.jars > 0 ? ` ${giftsThisYearWords(gifts.data.jars, gifts.data.year)}` : ''}`
             : 'Every sealed jar, by product and batch, oldest first.'
         }
@@ -113,7 +113,8 @@ export function ShelfRoute() {
           {(jars.error ?? products.error)?.message}
         </Notice>
       )}
-      {jars.isPending || products.isPending ? (
+      {/* The header's line, the place filter and the jars come together, so nothing moves once they show. */}
+      {jars.isPending || products.isPending || gifts.isPending || places.isPending ? (
         <p className="text-ink-muted">Counting jars…</p>
       ) : products.data?.length === 0 ? (
         <EmptyState
