@@ -14,10 +14,8 @@ declare global {
         householdId: string;
         role: Role;
         household: Household;
-        /** Changes with every write to the household's data but its plan, in any process (migrations 0085, 0200). */
-        dataVersion: string;
-        /** Changes with every write to the household's planned meals (migration 0200); with dataVersion, the key of cached reads. */
-        planVersion: string;
+        /** The household's versions as read with this request: the key of cached reads (household-memo.ts). */
+        versions: HouseholdVersions;
       };
     }
   }
@@ -39,8 +37,7 @@ function membershipFromRow(row: MembershipRow) {
   );
   return {
     role: row.member_role,
-    dataVersion: String(row.data_version),
-    planVersion: String(row.plan_version),
+    versions: { data: String(row.data_version), plan: String(row.plan_version) },
     household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }),
   };
 }
@@ -88,10 +85,4 @@ export function householdAccess(permission: Permission): RequestHandler {
 export function currentMembership(req: Request) {
   if (!req.membership) throw new Error('householdAccess must run before this handler');
   return req.membership;
-}
-
-/** The household's versions the guard read with this request: the key of shared parts of answers (household-memo.ts). */
-export function householdVersions(req: Request): HouseholdVersions {
-  const { dataVersion, planVersion } = currentMembership(req);
-  return { data: dataVersion, plan: planVersion };
 }

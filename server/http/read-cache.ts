@@ -4,6 +4,7 @@ import zlib from 'node:zlib';
 import type { Request, Response } from 'express';
 import { currentMembership } from '../auth/guards';
 import { todayIn } from '../services/clock';
+import { bothVersions, householdMemo } from '../services/household-memo';
 
 interface Answer {
   /** The JSON as sent, encoded once (res.send would encode a string again on every request). */
@@ -32,26 +33,16 @@ export interface ReadsOf {
 /**
  * Keeps each household read's answer (as sent) until the household's versions it reads move.
  * The versions are read with the guard on every request and change in the same transaction as any
- * write (migrations 0085, 0200), so an answer is never older than the last write, whichever process wrote it.
- * Requests that miss at once share one computation.
+ * write (migrations 0085, 0200), so an answer is never older than the last write, whichever process wrote it
+ * (services/household-memo.ts, whose rule this is). Requests that miss at once share one computation.
  */
 export function createReadCache(maxEntries = 2_000) {
-  const answers = new Map<string, { version: string; answer: Promise<Answer> }>();
+  const answers = householdMemo<Answer>(maxEntries);
 
-  function remember(key: string, version: string, compute: () => Promise<unknown>) {
-    const answer = compute().then((value) => {
-      const body = Buffer.from(JSON.stringify(value));
-      return {
-        body,
-        etag: `W/"${createHash('sha1').update(body).digest('base64url')}"`,
-        encoded: {} as Answer['encoded'],
-      };
-    });
-    answers.delete(key);
-    answers.set(key, { version, answer });
-    if (answers.size > maxEntries) answers.delete(answers.keys().next().value!);
-    answer.catch(() => answers.get(key)?.answer === answer && answers.delete(key));
-    return answer;
+  /** The answer as sent: its JSON encoded once, with its ETag. */
+  async function answerOf(compute: () => Promise<unknown>): Promise<Answer> {
+    const body = Buffer.from(JSON.stringify(await compute()));
+    return { body, etag: `W/"${createHash('sha1').update(body).digest('base64url')}"`, encoded: {} };
   }
 
   return {
@@ -67,11 +58,10 @@ export function createReadCache(maxEntries = 2_000) {
       compute: () => Promise<unknown>,
       reads: ReadsOf = { plan: true },
     ) {
-      const { householdId, household, dataVersion, planVersion } = currentMembership(req);
+      const { householdId, household, versions } = currentMembership(req);
       const fullKey = `${householdId} ${todayIn(household.timeZone)} ${key}`;
-      const version = reads.plan ? `${dataVersion} ${planVersion}` : dataVersion;
-      const held = answers.get(fullKey);
-      const answer = await (held?.version === version ? held.answer : remember(fullKey, version, compute));
+      const version = reads.plan ? bothVersions(versions) : versions.data;
+      const answer = await answers(fullKey, version, () => answerOf(compute));
       // Cache-Control stays the API's own (private, no-store, app.ts); a client that sends If-None-Match still gets 304.
       res
         .set({

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { restockTodoCreate } from '../../shared/schemas/todos';
-import { currentMembership, householdAccess, householdVersions } from '../auth/guards';
+import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { body, params } from '../http/validate';
 import { addRestockTodo } from '../services/restock/todo-batch-plan';
@@ -14,7 +14,7 @@ export function restockRouter({ sequelize, readCache }: AppContext) {
 
   router.get('/restock', householdAccess('read'), async (req, res) => {
     await readCache.send(req, res, 'restock', () =>
-      restockView(currentMembership(req).household, householdVersions(req)),
+      restockView(currentMembership(req).household, currentMembership(req).versions),
     );
   });
 

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { currentMembership, householdAccess, householdVersions } from '../auth/guards';
+import { currentMembership, householdAccess } from '../auth/guards';
 import type { AppContext } from '../context';
 import { todayView } from '../services/today';
 
@@ -9,7 +9,7 @@ export function todayRouter({ readCache }: AppContext) {
   router.get('/today', householdAccess('read'), async (req, res) => {
     // My to-dos make the answer each person's own.
     await readCache.send(req, res, `today ${req.user!.id}`, () =>
-      todayView(currentMembership(req).household, req.user!.id, householdVersions(req)),
+      todayView(currentMembership(req).household, req.user!.id, currentMembership(req).versions),
     );
   });
 

@@ -10,20 +10,24 @@ export interface HouseholdVersions {
   plan: string;
 }
 
-/**
- * A per-process store of values worked out from a household's rows, each kept until the version it was made at is
- * no longer the one a request reads. A value made while a write committed holds data at least as new as its version,
- * so no request is answered from rows older than the versions it read. Callers without versions (jobs, writes inside
- * a transaction) work the value out every time. Requests that miss at once share one computation.
- *
- * The values are shared between requests: freeze what a caller could change in place (see `frozen`).
- */
+/** The version of a value made from both the household's data and its plan. */
+export const bothVersions = (versions: HouseholdVersions) => `${versions.data} ${versions.plan}`;
+
 /**
  * How many households' parts a memo keeps: a part matters between a change and the reads that follow it, and the
  * shelf of a household with years of jars is a few hundred kilobytes of objects, so a few hundred bound the memory.
  */
 export const MEMO_HOUSEHOLDS = 256;
 
+/**
+ * A per-process store of values worked out from a household's rows, each kept until the version it was made at is
+ * no longer the one a request reads. A value made while a write committed holds data at least as new as its version,
+ * so no request is answered from rows older than the versions it read. Callers without versions (jobs, writes inside
+ * a transaction) work the value out every time. Requests that miss at once share one computation; a failed one is
+ * not kept. The read cache (http/read-cache.ts) keeps whole answers in one.
+ *
+ * The values are shared between requests: freeze what a caller could change in place (see `frozen`).
+ */
 export function householdMemo<T>(maxEntries = MEMO_HOUSEHOLDS) {
   const entries = new Map<string, { version: string; value: Promise<T> }>();
   return (key: string, version: string | undefined, compute: () => Promise<T>): Promise<T> => {

@@ -101,16 +101,13 @@ export async function restoreCache(queryClient: QueryClient) {
     for (const mutation of queryClient.getMutationCache().getAll())
       if (mutation.state.status === 'pending') void mutation.continue().catch(() => {});
   };
-  let waitForTheNetwork = false;
-  if (onlineManager.isOnline()) {
-    const signedOut = personOf(queryClient) === null;
-    if (!signedOut) {
-      // The queries only: the restored changes are in the cache already.
-      untilTheNetworkAnswers(queryClient, dehydrate(queryClient, { shouldDehydrateMutation: () => false }), carryOn);
-      waitForTheNetwork = true;
-    }
+  const signedOut = personOf(queryClient) === null;
+  const waitForTheNetwork = onlineManager.isOnline() && !signedOut;
+  // The queries only: the restored changes are in the cache already.
+  if (waitForTheNetwork)
+    untilTheNetworkAnswers(queryClient, dehydrate(queryClient, { shouldDehydrateMutation: () => false }), carryOn);
+  if (onlineManager.isOnline())
     queryClient.removeQueries({ predicate: (query) => signedOut || query.queryKey[0] !== authKeys.me[0] });
-  }
   await queryClient.invalidateQueries({ refetchType: 'none' });
   let person = personOf(queryClient);
   queryClient.getQueryCache().subscribe((event) => {

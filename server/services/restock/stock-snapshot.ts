@@ -10,7 +10,7 @@ import {
   type PlannedPortion,
 } from '../../../shared/domain';
 import { Jar, Pairing, PlanEntry, Product } from '../../db/models';
-import { frozen, householdMemo, type HouseholdVersions } from '../household-memo';
+import { bothVersions, frozen, householdMemo, type HouseholdVersions } from '../household-memo';
 
 /** The months a use chart shows, the current one included. */
 export const CHART_MONTHS = 6;
@@ -131,7 +131,7 @@ export async function stockSnapshot(
   const [shelf, plan] = await Promise.all([
     shelfParts(key, versions?.data, () => shelfPart(householdId, today)),
     // The plan's rows only, but kept on both versions: a data write that cascades into them moves plan_version too.
-    planParts(key, versions && `${versions.data} ${versions.plan}`, () => planPart(householdId, today)),
+    planParts(key, versions && bothVersions(versions), () => planPart(householdId, today)),
   ]);
   return { householdId, today, ...shelf, ...plan };
 }

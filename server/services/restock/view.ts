@@ -19,7 +19,7 @@ import type {
 import type { UnitSystem } from '../../../shared/domain';
 import { Household, Recipe, Todo, type Product } from '../../db/models';
 import { todayIn } from '../clock';
-import { frozen, householdMemo, type HouseholdVersions } from '../household-memo';
+import { bothVersions, frozen, householdMemo, type HouseholdVersions } from '../household-memo';
 import { CHART_MONTHS, stockSnapshot, useWithinDaysOf, type StockSnapshot } from './stock-snapshot';
 
 function whyInWords(
@@ -82,7 +82,7 @@ export function restockFromSnapshot(
 ): Promise<RestockView> {
   return restockLists(
     `${snapshot.householdId} ${snapshot.today} ${system}`,
-    versions && `${versions.data} ${versions.plan}`,
+    versions && bothVersions(versions),
     async () => frozen(await restockListOf(snapshot, system)),
   );
 }

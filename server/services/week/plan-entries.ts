@@ -135,24 +135,21 @@ function editedFields(patch: PlanEntryPatch) {
  * concurrent move of the same entry (a move writes date, slot and position, never these columns).
  */
 async function editPlanEntry(sequelize: Sequelize, householdId: string, id: string, patch: PlanEntryPatch) {
-  // Without eaters to check, the one UPDATE is its own transaction: edits of the same meal wait for its row's lock
-  // only for the statement, not across a BEGIN and a COMMIT round trip each.
-  if (!patch.eaters) {
-    const fields = editedFields(patch);
-    const [changed] = Object.keys(fields).length
-      ? await PlanEntry.update(fields, { where: { id, householdId } })
-      : [await PlanEntry.count({ where: { id, householdId } })];
-    if (changed === 0) throw notFound('That planned meal');
-    return id;
-  }
-  return sequelize.transaction(async (transaction) => {
-    if (patch.eaters) await requireMembers(householdId, patch.eaters, transaction);
+  const write = async (transaction?: Transaction) => {
     const fields = editedFields(patch);
     const [changed] = Object.keys(fields).length
       ? await PlanEntry.update(fields, { where: { id, householdId }, transaction })
       : [await PlanEntry.count({ where: { id, householdId }, transaction })];
     if (changed === 0) throw notFound('That planned meal');
     return id;
+  };
+  // Without eaters to check, the one UPDATE is its own transaction: edits of the same meal wait for its row's lock
+  // only for the statement, not across a BEGIN and a COMMIT round trip each.
+  if (!patch.eaters) return write();
+  const eaters = patch.eaters;
+  return sequelize.transaction(async (transaction) => {
+    await requireMembers(householdId, eaters, transaction);
+    return write(transaction);
   });
 }
 
