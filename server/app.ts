@@ -1,10 +1,10 @@
 import express, { Router } from 'express';
-import compression from 'compression';
 import pg from 'pg';
 import { configurePassport } from './auth/passport';
 import { sessionMiddleware } from './auth/session';
 import type { Config } from './config';
 import { acquireDatabase } from './db/sequelize';
+import { compressAnswers } from './http/compress-answers';
 import { errorHandler, notFoundHandler } from './http/errors';
 import { createLogger, requestLogger, type Logger } from './http/logging';
 import { createReadCache } from './http/read-cache';
@@ -54,8 +54,9 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   app.use(requestLogger(logger, (address) => trusts(address, 0)));
   app.use(securityHeaders(config));
 
-  // JSON answers over 1 KB go out compressed; the built client is compressed at build time.
-  app.use(compression({ threshold: 1024 }));
+  // Answers over 1 KB go out compressed (engaged by res.send once the size is known); the built client's files
+  // were compressed at build time, and the middleware covers the rest of what it sends.
+  const compressFiles = compressAnswers(app);
   const api = Router();
   api.use(healthRouter(sequelize, ctx.photos, () => stopping));
   api.use(publicConfigRouter(config));
@@ -91,7 +92,7 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   app.use('/api', api);
 
   const client = staticClient(config.staticDir);
-  if (client) app.use(client);
+  if (client) app.use(compressFiles, client);
   app.use(errorHandler({ exposeInternals: !config.isProduction }));
 
   return {

@@ -4,6 +4,7 @@ import { unsign } from 'cookie-signature';
 import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
+import { sessionReads } from './session-reads';
 
 export const SESSION_COOKIE = 'larderly.sid';
 const SESSION_DAYS = 30;
@@ -105,6 +106,18 @@ function personJoiningStore(PgStore: ReturnType<typeof connectPgSimple>) {
 /** The session's one query, named: each pooled connection plans it once, where planning cost more than running it. */
 const SESSION_READ = { name: 'larderly-session-read', text: PERSON_AND_MEMBERSHIP };
 
+/** The same read for several requests at once (session-reads.ts): row `slot` answers the slot-th session id. */
+export const PEOPLE_AND_MEMBERSHIPS = `
+  SELECT q.slot, s.sess, u.id AS person_id, u.email AS person_email, u.name AS person_name, m.role AS member_role, h.*
+    FROM unnest($1::text[], $2::uuid[]) WITH ORDINALITY AS q(sid, household_id, slot)
+    JOIN sessions s ON s.sid = q.sid AND s.expire >= now()
+    LEFT JOIN users u ON u.id = CASE WHEN s.sess#>>'{passport,user}' ~ '^[0-9a-f-]{36}$' THEN (s.sess#>>'{passport,user}')::uuid END
+    LEFT JOIN memberships m ON m.household_id = q.household_id AND m.user_id = u.id
+    LEFT JOIN households h ON h.id = m.household_id`;
+const SESSIONS_READ = { name: 'larderly-sessions-read', text: PEOPLE_AND_MEMBERSHIPS };
+/** Both statements, as the session middleware gives them to sessionReads (exported for its test). */
+export const SESSION_STATEMENTS = { one: SESSION_READ, many: SESSIONS_READ };
+
 /** Where sign-in, sign-up, sign-out and accepting an invitation change the session itself (their writes, not reads). */
 const CHANGES_SESSION = /^\/(?:auth|invitations)(?:\/|$)/;
 const changesSession = (req: Request) =>
@@ -164,13 +177,13 @@ export function sessionMiddleware(options: {
     }
   };
   const sessionIdOf = verifiedSessionIds(options.secret);
+  const read = sessionReads<SessionRow>(options.pool, SESSION_STATEMENTS);
   return ((req, res, next) => {
     const sid = changesSession(req) ? null : sessionIdOf(req.headers.cookie);
     if (!sid) return full(req, res, next);
     const householdId = householdInPath(req);
-    options.pool.query<SessionRow>({ ...SESSION_READ, values: [sid, householdId] }, (error, result) => {
+    read({ sid, householdId }, (error, row) => {
       if (error) return next(error);
-      const row = result.rows[0];
       const sess = row?.sess;
       const seenAt = typeof sess?.seenAt === 'number' ? sess.seenAt : 0;
       // Not a live, signed-in session seen within the day: express-session and passport decide, as they always did.

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { pino, type DestinationStream, type Logger } from 'pino';
 import type { Config } from '../config';
 
@@ -75,14 +75,10 @@ export function requestLogger(logger: Logger, trusts: (address: string) => boole
     const id = fromProxy ? given : randomUUID();
     res.setHeader('X-Request-Id', id);
     const started = Date.now();
-    let child: Logger | undefined;
-    Object.defineProperty(req, 'log', {
-      configurable: true,
-      get: () => (child ??= logger.child({ reqId: id })),
-    });
-    const finished = () => {
-      res.off('finish', finished);
-      res.off('close', finished);
+    withLazyLog(req);
+    (req as LoggedRequest)[LOGGING] = { logger, id };
+    // 'close' comes once per answer, after 'finish' or when the connection went first: one listener for both.
+    res.once('close', () => {
       const level = res.statusCode >= 500 ? 'error' : 'info';
       if (!logger.isLevelEnabled(level)) return;
       const path = loggedPath(req.originalUrl ?? req.url);
@@ -97,11 +93,29 @@ export function requestLogger(logger: Logger, trusts: (address: string) => boole
         },
         `${req.method} ${path} ${res.statusCode}`,
       );
-    };
-    res.on('finish', finished);
-    res.on('close', finished);
+    });
     next();
   };
+}
+
+const LOGGING = Symbol('larderly.logging');
+type LoggedRequest = Request & { [LOGGING]?: { logger: Logger; id: string; child?: Logger } };
+
+/**
+ * `req.log` as a getter on the app's request prototype (each Express app has its own), set up by its first
+ * request: defining it on every request cost more than the rest of the logger's work.
+ */
+function withLazyLog(req: Request) {
+  const prototype = Object.getPrototypeOf(req) as object;
+  if (Object.prototype.hasOwnProperty.call(prototype, 'log')) return;
+  Object.defineProperty(prototype, 'log', {
+    configurable: true,
+    get(this: LoggedRequest) {
+      const logging = this[LOGGING];
+      if (!logging) throw new Error('req.log is there once requestLogger has run');
+      return (logging.child ??= logging.logger.child({ reqId: logging.id }));
+    },
+  });
 }
 
 declare global {

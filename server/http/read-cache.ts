@@ -5,6 +5,7 @@ import type { Request, Response } from 'express';
 import { currentMembership } from '../auth/guards';
 import { todayIn } from '../services/clock';
 import { bothVersions, householdMemo } from '../services/household-memo';
+import { COMPRESS_FROM_BYTES } from './compress-answers';
 
 interface Answer {
   /** The JSON as sent, encoded once (res.send would encode a string again on every request). */
@@ -15,8 +16,6 @@ interface Answer {
 }
 
 type Encoding = 'br' | 'gzip';
-/** Answers smaller than this go out as they are (as the compression middleware's threshold in app.ts). */
-const COMPRESS_FROM_BYTES = 1024;
 const brotli = promisify(zlib.brotliCompress);
 const gzip = promisify(zlib.gzip);
 const compress: Record<Encoding, (body: Buffer) => Promise<Buffer>> = {
