@@ -64,7 +64,12 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   api.use('/calendar', calendarFeedRouter(config));
   const json = express.json({ limit: '1mb' });
   // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
-  api.use((req, res, next) => (req.method === 'POST' && req.path === IMPORT_PATH ? next() : json(req, res, next)));
+  // A GET or HEAD has no body to read (body-parser would find none, after checking).
+  api.use((req, res, next) =>
+    req.method === 'GET' || req.method === 'HEAD' || (req.method === 'POST' && req.path === IMPORT_PATH)
+      ? next()
+      : json(req, res, next),
+  );
   api.use(sameOriginOnly(config.appOrigins));
   // Household answers are one person's view: never kept by a shared cache or the browser's back-forward store.
   api.use((_req, res, next) => {

@@ -3,7 +3,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { can, type Permission, type Role } from '../../shared/roles';
 import { Household } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
-import type { HouseholdVersions } from '../services/household-memo';
+import { householdMemo, type HouseholdVersions } from '../services/household-memo';
 import { joinedMembership } from './session';
 
 declare global {
@@ -30,25 +30,74 @@ export const requireUser: RequestHandler = (req, _res, next) => {
 
 type MembershipRow = Record<string, unknown> & { member_role: Role; data_version: string; plan_version: string };
 
+/** The model's attribute names and their columns, read once. */
+let columns: [attribute: string, field: string][] | undefined;
+const attributesOf = (row: Record<string, unknown>) =>
+  Object.fromEntries(
+    (columns ??= Object.entries(Household.getAttributes()).map(([name, column]) => [name, column.field ?? name])).map(
+      ([name, field]) => [name, row[field]],
+    ),
+  );
+
+const buildHousehold = (attributes: Record<string, unknown>) =>
+  Household.build({ ...attributes } as Household['_creationAttributes'], { isNewRecord: false, raw: true });
+
 /** A membership row (the household's columns and `member_role`) as the guard's membership. */
 function membershipFromRow(row: MembershipRow) {
-  const attributes = Object.fromEntries(
-    Object.entries(Household.getAttributes()).map(([name, column]) => [name, row[column.field ?? name]]),
-  );
   return {
     role: row.member_role,
     versions: { data: String(row.data_version), plan: String(row.plan_version) },
-    household: Household.build(attributes as Household['_creationAttributes'], { isNewRecord: false, raw: true }),
+    household: buildHousehold(attributesOf(row)),
   };
 }
 
 /**
- * The person's membership and its household: as the session read joined it in the same round trip
- * (session.ts), else in one indexed read of its own (memberships_household_id_user_id).
+ * Each household's columns as last read, by its id and data version: every change to a households row but its plan
+ * version moves its data version (migrations 0085 and 0200, household_settings_changed), so the session read
+ * brings only the versions and the row is read again only after a change, in any process. Small (a household's
+ * settings), so many are kept.
+ */
+const householdColumns = householdMemo<Readonly<Record<string, unknown>> | null>(10_000);
+
+async function householdAt(sequelize: Sequelize, householdId: string, dataVersion: string) {
+  const attributes = await householdColumns(householdId, dataVersion, async () => {
+    const [row] = await sequelize.query<Record<string, unknown>>('SELECT * FROM households WHERE id = :householdId', {
+      replacements: { householdId },
+      type: QueryTypes.SELECT,
+    });
+    return row ? deepFrozen(attributesOf(row)) : null;
+  });
+  return attributes && buildHousehold(attributes);
+}
+
+/** Frozen through and through (the JSON columns too): the memo's copy is shared by every request. */
+function deepFrozen<T>(value: T): T {
+  if (value && typeof value === 'object' && !(value instanceof Date) && !Object.isFrozen(value)) {
+    for (const inner of Object.values(value)) deepFrozen(inner);
+    Object.freeze(value);
+  }
+  return value;
+}
+
+/**
+ * The person's membership and its household: the membership and the household's versions as the session read
+ * joined them in the same round trip (session.ts) with the household's columns as of that version, else in one
+ * indexed read of its own (memberships_household_id_user_id).
  */
 async function membershipOf(req: Request, sequelize: Sequelize, householdId: string, userId: string) {
   const joined = joinedMembership(req, householdId, userId);
-  if (joined) return joined.row ? membershipFromRow(joined.row as MembershipRow) : null;
+  if (joined) {
+    if (!joined.row) return null;
+    const { member_role, data_version, plan_version } = joined.row;
+    const household = await householdAt(sequelize, householdId, String(data_version));
+    return household
+      ? {
+          role: member_role as Role,
+          versions: { data: String(data_version), plan: String(plan_version) },
+          household,
+        }
+      : null;
+  }
   // Raw SQL: every household request pays for this read, and a Sequelize include costs more than the query itself.
   const [row] = await sequelize.query<MembershipRow>(
     `SELECT m.role AS member_role, h.*

@@ -23,13 +23,13 @@ declare module 'express-session' {
 export type SessionPerson = { id: string; email: string; name: string } | null;
 
 /**
- * The membership row the session read joined for the household in the path (the household's columns and
- * `member_role`; null when the person is no member), left on the request for householdAccess.
+ * The membership the session read joined for the household in the path (`member_role` and the household's
+ * versions; null when the person is no member), left on the request for householdAccess.
  */
 export interface JoinedMembership {
   householdId: string;
   userId: string;
-  row: (Record<string, unknown> & { member_role: string; data_version: string; plan_version: string }) | null;
+  row: { member_role: string; data_version: string; plan_version: string } | null;
 }
 export const JOINED_MEMBERSHIP = Symbol('larderly.joinedMembership');
 
@@ -64,7 +64,7 @@ let reading: Slot | undefined;
 
 /** The session read's one query (exported for the bench's EXPLAIN). */
 export const PERSON_AND_MEMBERSHIP = `
-  SELECT s.sess, u.id AS person_id, u.email AS person_email, u.name AS person_name, m.role AS member_role, h.*
+  SELECT s.sess, u.id AS person_id, u.email AS person_email, u.name AS person_name, m.role AS member_role, h.data_version, h.plan_version
     FROM sessions s
     LEFT JOIN users u ON u.id = CASE WHEN s.sess#>>'{passport,user}' ~ '^[0-9a-f-]{36}$' THEN (s.sess#>>'{passport,user}')::uuid END
     LEFT JOIN memberships m ON m.household_id = $2::uuid AND m.user_id = u.id
@@ -108,7 +108,7 @@ const SESSION_READ = { name: 'larderly-session-read', text: PERSON_AND_MEMBERSHI
 
 /** The same read for several requests at once (session-reads.ts): row `slot` answers the slot-th session id. */
 export const PEOPLE_AND_MEMBERSHIPS = `
-  SELECT q.slot, s.sess, u.id AS person_id, u.email AS person_email, u.name AS person_name, m.role AS member_role, h.*
+  SELECT q.slot, s.sess, u.id AS person_id, u.email AS person_email, u.name AS person_name, m.role AS member_role, h.data_version, h.plan_version
     FROM unnest($1::text[], $2::uuid[]) WITH ORDINALITY AS q(sid, household_id, slot)
     JOIN sessions s ON s.sid = q.sid AND s.expire >= now()
     LEFT JOIN users u ON u.id = CASE WHEN s.sess#>>'{passport,user}' ~ '^[0-9a-f-]{36}$' THEN (s.sess#>>'{passport,user}')::uuid END
@@ -216,17 +216,18 @@ const householdInPath = (req: Request) => HOUSEHOLD_IN_PATH.exec(req.path)?.[1]?
  * the good ones are remembered (a bounded map) and the HMAC is worked out once per session, not per request.
  */
 function verifiedSessionIds(secret: string) {
+  // By the whole Cookie header: a browser sends the same one with every request, so it is parsed once too.
   const known = new Map<string, string>();
   return (header: string | undefined) => {
     if (!header || !header.includes(SESSION_COOKIE)) return null;
+    const cached = known.get(header);
+    if (cached) return cached;
     const raw = parseCookies(header)[SESSION_COOKIE];
     if (!raw?.startsWith('s:')) return null;
-    const cached = known.get(raw);
-    if (cached) return cached;
     const sid = unsign(raw.slice(2), secret);
     if (sid === false) return null;
     if (known.size >= 10_000) known.clear();
-    known.set(raw, sid);
+    known.set(header, sid);
     return sid;
   };
 }

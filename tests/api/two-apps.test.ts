@@ -145,6 +145,34 @@ describe('the session and the guard, across both apps', () => {
     expect((await onSecond('/api/auth/me', cookie)).status).toBe(401);
   });
 
+  it('a household renamed or moved by another process (straight in PostgreSQL) shows on the next request of both apps', async () => {
+    const cookie = await cookieOf('keeper@larderly.test');
+    const path = `/api/households/${first.householdId}`;
+    const before = (await onSecond(path, cookie)).body.household;
+    expect((await request(first.app).get(path).set('Cookie', cookie)).body.household).toEqual(before);
+    const other = new pg.Client({ connectionString: first.ctx.config.databaseUrl });
+    await other.connect();
+    try {
+      await other.query(`UPDATE households SET name = $2, altitude_ft = altitude_ft + 1000 WHERE id = $1`, [
+        first.householdId,
+        `${before.name} (moved)`,
+      ]);
+      for (const app of [first.app, second.app]) {
+        const after = (await request(app).get(path).set('Cookie', cookie)).body.household;
+        expect(after).toEqual({ ...before, name: `${before.name} (moved)`, altitudeFt: before.altitudeFt + 1000 });
+      }
+      // Only the plan's version moved: the household's own columns are as they were.
+      await other.query('UPDATE households SET plan_version = plan_version + 1 WHERE id = $1', [first.householdId]);
+      expect((await onSecond(path, cookie)).body.household.name).toBe(`${before.name} (moved)`);
+    } finally {
+      await other.query(`UPDATE households SET name = $2, altitude_ft = altitude_ft - 1000 WHERE id = $1`, [
+        first.householdId,
+        before.name,
+      ]);
+      await other.end();
+    }
+  });
+
   it('a member removed through the first app gets 404 on the second at the next request, even for an answer it holds', async () => {
     const helperCookie = await cookieOf('helper@larderly.test');
     const keeperCookie = await cookieOf('keeper@larderly.test');
