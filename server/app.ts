@@ -58,23 +58,34 @@ export function createApp(config: Config, options: { authLimit?: number; logger?
   // were compressed at build time, and the middleware covers the rest of what it sends.
   const compressFiles = compressAnswers(app);
   const api = Router();
-  api.use(healthRouter(sequelize, ctx.photos, () => stopping));
-  api.use(publicConfigRouter(config));
+  // Health checks and the public configuration read no session (and are asked for by their exact address).
+  const unsigned = Router();
+  unsigned.use(healthRouter(sequelize, ctx.photos, () => stopping));
+  unsigned.use(publicConfigRouter(config));
+  // Their addresses, read from the routers themselves: /health, /ready and /config.
+  type Layer = { handle: { stack?: Layer[] }; route?: { path?: unknown } };
+  const UNSIGNED = new Set(
+    (unsigned.stack as Layer[]).flatMap((router) => (router.handle.stack ?? []).map((layer) => layer.route?.path)),
+  );
+  const unsignedOnly: express.RequestHandler = (req, res, next) =>
+    UNSIGNED.has(req.path) ? unsigned(req, res, next) : next();
+  // Listed like a router's own layers, so whoever walks the app's routes (the authorization matrix) finds them.
+  api.use(Object.assign(unsignedOnly, { stack: [{ handle: unsigned }] }));
   // Calendar apps fetch with the secret in the address and no session: no cookie is read or set.
   api.use('/calendar', calendarFeedRouter(config));
   const json = express.json({ limit: '1mb' });
-  // A backup import may be up to 10 MB; its own route reads it once the person is signed in.
-  // A GET or HEAD has no body to read (body-parser would find none, after checking).
-  api.use((req, res, next) =>
-    req.method === 'GET' || req.method === 'HEAD' || (req.method === 'POST' && req.path === IMPORT_PATH)
-      ? next()
-      : json(req, res, next),
-  );
-  api.use(sameOriginOnly(config.appOrigins));
-  // Household answers are one person's view: never kept by a shared cache or the browser's back-forward store.
-  api.use((_req, res, next) => {
-    res.set('Cache-Control', 'private, no-store');
-    next();
+  const sameOrigin = sameOriginOnly(config.appOrigins);
+  api.use((req, res, next) => {
+    // Household answers are one person's view: never kept by a shared cache or the browser's back-forward store.
+    res.setHeader('Cache-Control', 'private, no-store');
+    // A GET or HEAD has no body to read and is never refused for its origin (same-origin.ts); a backup import may
+    // be up to 10 MB, and its own route reads it once the person is signed in.
+    if (req.method === 'GET' || req.method === 'HEAD') return next();
+    sameOrigin(req, res, (refused?: unknown) => {
+      if (refused) return next(refused);
+      if (req.method === 'POST' && req.path === IMPORT_PATH) return next();
+      json(req, res, next);
+    });
   });
   api.use(
     sessionMiddleware({
