@@ -42,14 +42,15 @@ const attributesOf = (row: Record<string, unknown>) =>
 const buildHousehold = (attributes: Record<string, unknown>) =>
   Household.build({ ...attributes } as Household['_creationAttributes'], { isNewRecord: false, raw: true });
 
-/** A membership row (the household's columns and `member_role`) as the guard's membership. */
-function membershipFromRow(row: MembershipRow) {
-  return {
-    role: row.member_role,
-    versions: { data: String(row.data_version), plan: String(row.plan_version) },
-    household: buildHousehold(attributesOf(row)),
-  };
-}
+/** The guard's membership: the role and the household's versions of a membership row, with its household. */
+const membershipWith = (
+  row: { member_role: Role; data_version: string; plan_version: string },
+  household: Household,
+) => ({
+  role: row.member_role,
+  versions: { data: String(row.data_version), plan: String(row.plan_version) },
+  household,
+});
 
 /**
  * Each household's columns as last read, by its id and data version: every change to a households row but its plan
@@ -88,15 +89,8 @@ async function membershipOf(req: Request, sequelize: Sequelize, householdId: str
   const joined = joinedMembership(req, householdId, userId);
   if (joined) {
     if (!joined.row) return null;
-    const { member_role, data_version, plan_version } = joined.row;
-    const household = await householdAt(sequelize, householdId, String(data_version));
-    return household
-      ? {
-          role: member_role as Role,
-          versions: { data: String(data_version), plan: String(plan_version) },
-          household,
-        }
-      : null;
+    const household = await householdAt(sequelize, householdId, String(joined.row.data_version));
+    return household ? membershipWith(joined.row as MembershipRow, household) : null;
   }
   // Raw SQL: every household request pays for this read, and a Sequelize include costs more than the query itself.
   const [row] = await sequelize.query<MembershipRow>(
@@ -105,7 +99,7 @@ async function membershipOf(req: Request, sequelize: Sequelize, householdId: str
       WHERE m.household_id = :householdId AND m.user_id = :userId`,
     { replacements: { householdId, userId }, type: QueryTypes.SELECT },
   );
-  return row ? membershipFromRow(row) : null;
+  return row ? membershipWith(row, buildHousehold(attributesOf(row))) : null;
 }
 
 /**

@@ -39,20 +39,11 @@ export function sessionReads<Row extends Record<string, unknown>>(
       for (const row of rows) bySlot.set(Number(row.slot), row);
       batch.forEach(({ answer }, index) => answer(error, error ? undefined : bySlot.get(index + 1)));
     };
-    if (batch.length === 1) {
-      const { sid, householdId } = batch[0]!.ask;
-      pool.query<Row>({ ...statements.one, values: [sid, householdId] }, (error, result) =>
-        done(error, error ? [] : result.rows),
-      );
-    } else {
-      pool.query<Row>(
-        {
-          ...statements.many,
-          values: [batch.map(({ ask }) => ask.sid), batch.map(({ ask }) => ask.householdId)],
-        },
-        (error, result) => done(error, error ? [] : result.rows),
-      );
-    }
+    const [statement, values] =
+      batch.length === 1
+        ? [statements.one, [batch[0]!.ask.sid, batch[0]!.ask.householdId]]
+        : [statements.many, [batch.map(({ ask }) => ask.sid), batch.map(({ ask }) => ask.householdId)]];
+    pool.query<Row>({ ...statement, values }, (error, result) => done(error, error ? [] : result.rows));
   };
 
   return (ask: SessionAsk, answer: Answer<Row>) => {
