@@ -35,7 +35,7 @@ describe('shelf places on a phone', () => {
 
     // Removing a place that holds a jar asks where it goes.
     await page.goto(`${baseURL}/h/${hid}/household`);
-    await places.getByText('1 sealed jar').waitFor();
+    await places.getByText('1 sealed jar', { exact: true }).waitFor();
     await page.getByRole('button', { name: 'Remove Garage bench' }).click();
     await page.getByText('Garage bench holds 1 sealed jar. Where should it go?').waitFor();
     await places.getByLabel('Move to').selectOption({ label: 'Pantry shelf' });

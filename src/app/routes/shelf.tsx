@@ -1,4 +1,4 @@
-import { lazy, Suspense, useMemo, useState } from 'react';
+import { lazy, Suspense, useDeferredValue, useMemo, useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/roles';
 import { giftsThisYearWords } from '@shared/words/gifts';
@@ -46,6 +46,8 @@ export function ShelfRoute() {
   // The place filter lives in the address with the view, so a shared link shows the same shelf: '' every place, 'none'.
   const place = params.get('place') ?? '';
   const [text, setText] = useState('');
+  // The jars are drawn in a render of their own just after the first: the header and the caution show first.
+  const drawJars = useDeferredValue(true, false);
   const [search, setSearch] = useState<typeof searchShelf | null>(null);
   const loadSearch = () => {
     if (!search) void import('@/features/shelf/shelf-search').then((module) => setSearch(() => module.searchShelf));
@@ -113,8 +115,15 @@ export function ShelfRoute() {
           {(jars.error ?? products.error)?.message}
         </Notice>
       )}
+      {/* The caution is the same for every shelf: it shows with the header's own line (so neither moves the other),
+          above where the jars will be, and not for a shelf with nothing on it. */}
+      {jars.data && !gifts.isPending && products.data?.length !== 0 && (
+        <div className="mb-4">
+          <CautionLine about="best-quality" />
+        </div>
+      )}
       {/* The header's line, the place filter and the jars come together, so nothing moves once they show. */}
-      {jars.isPending || products.isPending || gifts.isPending || places.isPending ? (
+      {jars.isPending || products.isPending || gifts.isPending || places.isPending || !drawJars ? (
         <p className="text-ink-muted">Counting jars…</p>
       ) : products.data?.length === 0 ? (
         <EmptyState
@@ -131,7 +140,6 @@ export function ShelfRoute() {
         </EmptyState>
       ) : (
         <div className="flex flex-col gap-4">
-          <CautionLine about="best-quality" />
           <div className="flex flex-wrap items-end justify-between gap-3">
             {(places.data?.length ?? 0) > 0 && (
               <div className="w-full sm:w-56">

@@ -19,6 +19,9 @@ import { currentWeekStart, shiftWeek } from '@/features/week/week-dates';
 const loadBoard = () => import('@/features/week/components/week-board');
 const WeekBoard = lazy(() => loadBoard().then((module) => ({ default: module.WeekBoard })));
 
+/** The screen's line, the same for every week: it shows while the household is still being read. */
+const WEEK_LEAD = 'Plan meals and pair them with jars from the shelf; the board says which jar each one draws from.';
+
 function validDate(value: string | null) {
   try {
     return value ? requireIsoDate(value) : null;
@@ -31,7 +34,7 @@ export function WeekRoute() {
   const { hid, role, me } = useCurrentHousehold();
   const household = useHousehold(hid);
   const [params, setParams] = useSearchParams();
-  if (!household.data) return <PageHeader title="Week" lead="Loading the week…" />;
+  if (!household.data) return <PageHeader title="Week" lead={WEEK_LEAD} actions={<p>Loading the week…</p>} />;
   const { timeZone, weekStartsOn } = household.data;
   const asked = validDate(params.get('start'));
   const day = validDate(params.get('day'));
@@ -101,15 +104,13 @@ function WeekScreen({
     <>
       <PageHeader
         title="Week"
-        lead={
-          <>
-            <span className="tabular font-bold text-ink">{title}</span>
-            {start === thisWeek ? ' · this week' : ''}. Plan meals and pair them with jars from the shelf; the board
-            says which jar each one draws from.
-          </>
-        }
+        lead={WEEK_LEAD}
         actions={
-          <nav aria-label="Weeks" className="flex flex-wrap gap-2">
+          <nav aria-label="Weeks" className="flex flex-wrap items-center gap-2">
+            <p className="w-full">
+              <span className="tabular font-bold text-ink">{title}</span>
+              {start === thisWeek ? ' · this week' : ''}
+            </p>
             <Button variant="secondary" onClick={() => goTo(shiftWeek(start, -1))} aria-label="Previous week">
               ← Previous
             </Button>
