@@ -3,8 +3,8 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { can, type Permission, type Role } from '../../shared/roles';
 import { Household } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
-import { householdMemo, type HouseholdVersions } from '../services/household-memo';
-import { joinedMembership } from './session';
+import { deepFrozen, householdMemo, type HouseholdVersions } from '../services/household-memo';
+import { joinedMembership, type JoinedMembership } from './session';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -28,7 +28,7 @@ export const requireUser: RequestHandler = (req, _res, next) => {
   next();
 };
 
-type MembershipRow = Record<string, unknown> & { member_role: Role; data_version: string; plan_version: string };
+type MembershipRow = Record<string, unknown> & NonNullable<JoinedMembership['row']>;
 
 /** The model's attribute names and their columns, read once. */
 let columns: [attribute: string, field: string][] | undefined;
@@ -43,10 +43,7 @@ const buildHousehold = (attributes: Record<string, unknown>) =>
   Household.build({ ...attributes } as Household['_creationAttributes'], { isNewRecord: false, raw: true });
 
 /** The guard's membership: the role and the household's versions of a membership row, with its household. */
-const membershipWith = (
-  row: { member_role: Role; data_version: string; plan_version: string },
-  household: Household,
-) => ({
+const membershipWith = (row: NonNullable<JoinedMembership['row']>, household: Household) => ({
   role: row.member_role,
   versions: { data: String(row.data_version), plan: String(row.plan_version) },
   household,
@@ -66,18 +63,10 @@ async function householdAt(sequelize: Sequelize, householdId: string, dataVersio
       replacements: { householdId },
       type: QueryTypes.SELECT,
     });
+    // Frozen through and through (the JSON columns too): the memo's copy is shared by every request.
     return row ? deepFrozen(attributesOf(row)) : null;
   });
   return attributes && buildHousehold(attributes);
-}
-
-/** Frozen through and through (the JSON columns too): the memo's copy is shared by every request. */
-function deepFrozen<T>(value: T): T {
-  if (value && typeof value === 'object' && !(value instanceof Date) && !Object.isFrozen(value)) {
-    for (const inner of Object.values(value)) deepFrozen(inner);
-    Object.freeze(value);
-  }
-  return value;
 }
 
 /**
@@ -90,7 +79,7 @@ async function membershipOf(req: Request, sequelize: Sequelize, householdId: str
   if (joined) {
     if (!joined.row) return null;
     const household = await householdAt(sequelize, householdId, String(joined.row.data_version));
-    return household ? membershipWith(joined.row as MembershipRow, household) : null;
+    return household ? membershipWith(joined.row, household) : null;
   }
   // Raw SQL: every household request pays for this read, and a Sequelize include costs more than the query itself.
   const [row] = await sequelize.query<MembershipRow>(

@@ -4,6 +4,7 @@ import { unsign } from 'cookie-signature';
 import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
+import type { Role } from '../../shared/roles';
 import { sessionReads } from './session-reads';
 
 export const SESSION_COOKIE = 'larderly.sid';
@@ -29,7 +30,7 @@ export type SessionPerson = { id: string; email: string; name: string } | null;
 export interface JoinedMembership {
   householdId: string;
   userId: string;
-  row: { member_role: string; data_version: string; plan_version: string } | null;
+  row: { member_role: Role; data_version: string; plan_version: string } | null;
 }
 export const JOINED_MEMBERSHIP = Symbol('larderly.joinedMembership');
 

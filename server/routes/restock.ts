@@ -13,9 +13,8 @@ export function restockRouter({ sequelize, readCache }: AppContext) {
   const router = Router({ mergeParams: true });
 
   router.get('/restock', householdAccess('read'), async (req, res) => {
-    await readCache.send(req, res, 'restock', () =>
-      restockView(currentMembership(req).household, currentMembership(req).versions),
-    );
+    const { household, versions } = currentMembership(req);
+    await readCache.send(req, res, 'restock', () => restockView(household, versions));
   });
 
   router.post('/restock/:productId/todo', householdAccess('cook'), async (req, res) => {

@@ -8,9 +8,8 @@ export function todayRouter({ readCache }: AppContext) {
 
   router.get('/today', householdAccess('read'), async (req, res) => {
     // My to-dos make the answer each person's own.
-    await readCache.send(req, res, `today ${req.user!.id}`, () =>
-      todayView(currentMembership(req).household, req.user!.id, currentMembership(req).versions),
-    );
+    const { household, versions } = currentMembership(req);
+    await readCache.send(req, res, `today ${req.user!.id}`, () => todayView(household, req.user!.id, versions));
   });
 
   return router;

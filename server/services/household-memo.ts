@@ -43,6 +43,15 @@ export function householdMemo<T>(maxEntries = MEMO_HOUSEHOLDS) {
   };
 }
 
+/** A small shared value frozen through and through, its nested objects and arrays too (Dates are left as they are). */
+export function deepFrozen<T>(value: T): T {
+  if (value && typeof value === 'object' && !(value instanceof Date) && !Object.isFrozen(value)) {
+    for (const inner of Object.values(value)) deepFrozen(inner);
+    Object.freeze(value);
+  }
+  return value;
+}
+
 /** The arrays of a shared value, frozen: a caller that sorts or pushes in place fails at once instead of changing it. */
 export function frozen<T extends object>(value: T): T {
   for (const field of Object.values(value)) if (Array.isArray(field)) Object.freeze(field);

@@ -81,13 +81,15 @@ export function ShelfRoute() {
   const shownGroups = found ? groups.filter((g) => found.productIds.has(g.product.id)) : groups;
   const sealedCount = rows.reduce((sum, row) => sum + row.sealed, 0);
   const canCook = can(role, 'cook');
+  // The jars counted, with this year's gifts: the header's line and the caution show from then on.
+  const counted = Boolean(jars.data) && !gifts.isPending;
 
   return (
     <>
       <PageHeader
         title="Shelf"
         lead={
-          jars.data && !gifts.isPending
+          counted
             ? `${sealedCount} sealed jars in ${rows.length} batches. Eat the oldest first, within their year of best quality.${gifts.data && gifts.data.jars > 0 ? ` ${giftsThisYearWords(gifts.data.jars, gifts.data.year)}` : ''}`
             : 'Every sealed jar, by product and batch, oldest first.'
         }
@@ -117,7 +119,7 @@ export function ShelfRoute() {
       )}
       {/* The caution is the same for every shelf: it shows with the header's own line (so neither moves the other),
           above where the jars will be, and not for a shelf with nothing on it. */}
-      {jars.data && !gifts.isPending && products.data?.length !== 0 && (
+      {counted && products.data?.length !== 0 && (
         <div className="mb-4">
           <CautionLine about="best-quality" />
         </div>
