@@ -12,6 +12,7 @@ import PgBoss from 'pg-boss';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startNginx } from '../../scripts/lib/nginx.mjs';
 import demo from '../../server/demo/demo-accounts.json' with { type: 'json' };
+import { todayIn } from '../../server/services/clock';
 import { createTestDatabase } from '../support/database';
 import { cameraPhoto } from '../support/photos';
 import { freePort } from '../support/ports';
@@ -373,7 +374,9 @@ describe('two app processes behind nginx', () => {
       [hid],
     );
     const writes: { index: number; answer: Answer }[] = [];
-    const cannedOn = new Date().toISOString().slice(0, 10);
+    // The household's own day, not the UTC one: near midnight the two differ and the day after is refused.
+    const { rows: zones } = await db.query('SELECT time_zone FROM households WHERE id = $1', [hid]);
+    const cannedOn = todayIn(zones[0].time_zone);
     // 4 clients, 15 reads each, and 2 writers recording batches of 6 jars; app-b is killed once 12 reads are in.
     await Promise.all([
       ...Array.from({ length: 4 }, async () => {
