@@ -21,7 +21,7 @@ export function todosRouter({ sequelize, readCache }: AppContext) {
       res,
       `todos ${filter} ${filter === 'mine' ? userId : ''}`,
       async () => ({
-        todos: await listTodos(currentMembership(req).household, filter, userId),
+        todos: await listTodos(currentMembership(req).household, filter, userId, currentMembership(req).versions),
       }),
       { plan: false },
     );
@@ -29,7 +29,8 @@ export function todosRouter({ sequelize, readCache }: AppContext) {
 
   router.get('/todos/:id', householdAccess('read'), async (req, res) => {
     const { id } = params(req, todoParams);
-    res.json({ todo: await findTodo(currentMembership(req).household, id) });
+    const { household, versions } = currentMembership(req);
+    res.json({ todo: await findTodo(household, id, versions) });
   });
 
   router.post('/todos', householdAccess('cook'), idempotent(sequelize), async (req, res) => {
@@ -41,8 +42,8 @@ export function todosRouter({ sequelize, readCache }: AppContext) {
   router.patch('/todos/:id', householdAccess('handleJars'), idempotent(sequelize), async (req, res) => {
     const { id } = params(req, todoParams);
     const patch = body(req, todoPatch);
-    const { household, role } = currentMembership(req);
-    res.json({ todo: await updateTodo(sequelize, household, role, id, patch) });
+    const { household, role, versions } = currentMembership(req);
+    res.json({ todo: await updateTodo(sequelize, household, role, id, patch, versions) });
   });
 
   router.delete('/todos/:id', householdAccess('cook'), async (req, res) => {

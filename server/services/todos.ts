@@ -5,6 +5,7 @@ import type { BatchPlan, TodoCreate, TodoFilter, TodoKind, TodoPatch, TodoView }
 import { advisoryKey, lockNames } from '../db/advisory-locks';
 import { Household, Membership, Todo } from '../db/models';
 import { AppError, forbidden, notFound } from '../http/errors';
+import type { HouseholdVersions } from './household-memo';
 import { refreshPlans } from './restock/todo-plan-numbers';
 
 interface TodoRow {
@@ -63,15 +64,21 @@ async function todoRows(householdId: string, where: string, bind: unknown[]): Pr
   );
 }
 
-export async function listTodos(household: Household, filter: TodoFilter, userId: string): Promise<TodoView[]> {
+/** `versions` are the request's (the guard's): with them, what the restock plans are worked out from is kept. */
+export async function listTodos(
+  household: Household,
+  filter: TodoFilter,
+  userId: string,
+  versions?: HouseholdVersions,
+): Promise<TodoView[]> {
   const rows = await todoRows(household.id, FILTERS[filter], filter === 'mine' ? [userId] : []);
-  return refreshPlans(household, rows.map(viewTodo));
+  return refreshPlans(household, rows.map(viewTodo), versions);
 }
 
-export async function findTodo(household: Household, id: string): Promise<TodoView> {
+export async function findTodo(household: Household, id: string, versions?: HouseholdVersions): Promise<TodoView> {
   const [row] = await todoRows(household.id, 'AND t.id = $2', [id]);
   if (!row) throw notFound('That to-do');
-  const [view] = await refreshPlans(household, [viewTodo(row)]);
+  const [view] = await refreshPlans(household, [viewTodo(row)], versions);
   return view!;
 }
 
@@ -151,13 +158,15 @@ export async function updateTodo(
   role: Role,
   id: string,
   patch: TodoPatch,
+  versions?: HouseholdVersions,
 ): Promise<TodoView> {
   if (role === 'helper' && Object.keys(patch).some((field) => !HELPER_FIELDS.has(field))) {
     throw forbidden('Helpers may tick a to-do done or not done; ask a cook or keeper to change anything else.');
   }
   const householdId = household.id;
   const { position, done, ...fields } = patch;
-  // One statement (migration 0210): the list's lock is held inside PostgreSQL only, not across round trips.
+  // One statement (migrations 0210, 0220): the list's lock is held inside PostgreSQL only, not across round trips,
+  // and only by a change that writes.
   const [{ outcome }] = await sequelize.query<{ outcome: string }>(
     'SELECT todo_list_update($1::bigint, $2, $3, $4::jsonb, $5, $6) AS outcome',
     {
@@ -174,7 +183,7 @@ export async function updateTodo(
   );
   if (outcome === 'missing') throw notFound('That to-do');
   if (outcome === 'not a member') throw notAMember();
-  return findTodo(household, id);
+  return findTodo(household, id, versions);
 }
 
 export async function deleteTodo(sequelize: Sequelize, householdId: string, id: string) {

@@ -1,4 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { lockNames } from '../../server/db/advisory-locks';
+import { Todo } from '../../server/db/models';
 import { demoApp } from '../support/app';
 
 let ctx: Awaited<ReturnType<typeof demoApp>>;
@@ -97,6 +99,51 @@ describe('the household to-do list', () => {
     expect(new Set(all.map((t) => t.id)).size).toBe(all.length);
   });
 
+  it("answers a change that changes nothing without waiting for the list's lock; a change that writes waits and builds on what the lock's holder wrote", async () => {
+    const [first, second] = await add('Lock one', 'Lock two');
+    const cook = await ctx.signedIn('cook@larderly.test');
+    const last = (await list()).length - 1;
+    await cook
+      .patch(url(`/${first!.id}`))
+      .send({ position: last, title: 'Lock one' })
+      .expect(200);
+    // Another writer of the list holds its lock (as a move in progress would) and moves `second` to the top.
+    const holder = await ctx.sequelize.transaction();
+    try {
+      await lockNames(ctx.sequelize, holder, [`todos:${ctx.householdId}`]);
+      await Todo.update({ title: 'Lock two, renamed' }, { where: { id: second!.id }, transaction: holder });
+      // Already last, already so named, a to-do that is not there, an outsider as assignee: answered at once.
+      const answers = await Promise.all([
+        cook.patch(url(`/${first!.id}`)).send({ position: last, title: 'Lock one' }),
+        cook.patch(url(`/${first!.id}`)).send({ position: last + 5 }),
+        cook.patch(url('/00000000-0000-4000-8000-000000000000')).send({ position: 0 }),
+        cook.patch(url(`/${first!.id}`)).send({ assigneeId: '00000000-0000-4000-8000-000000000000' }),
+      ]);
+      expect(answers.map((a) => a.status)).toEqual([200, 200, 404, 400]);
+      expect(answers[0]!.body.todo.position).toBe(last);
+      // A real move waits for the lock's holder...
+      let settled = false;
+      const move = cook
+        .patch(url(`/${first!.id}`))
+        .send({ position: 0 })
+        .then((answer) => {
+          settled = true;
+          return answer;
+        });
+      await new Promise((resolve) => setTimeout(resolve, 300));
+      expect(settled).toBe(false);
+      await holder.commit();
+      // ...and then writes on top of what it committed.
+      expect((await move).status).toBe(200);
+    } finally {
+      if (!(holder as unknown as { finished?: string }).finished) await holder.rollback();
+    }
+    const all = await list();
+    expectDense(all);
+    expect(all[0]!.id).toBe(first!.id);
+    expect(all.find((t) => t.id === second!.id)!.title).toBe('Lock two, renamed');
+  });
+
   it('moves past the end to the last place', async () => {
     const [todo] = await add('Label the chutney');
     const cook = await ctx.signedIn('cook@larderly.test');
@@ -182,7 +229,7 @@ describe('the household to-do list', () => {
     expect((await helper.patch(url(`/${todo.id}`)).send({ position: 0 })).status).toBe(403);
     expect((await helper.post(url()).send({ title: 'Helper list' })).status).toBe(403);
     expect((await helper.delete(url(`/${todo.id}`))).status).toBe(403);
-    expect(
+    await expect(
       (await ctx.signedIn('keeper@larderly.test')).get(url(`/${todo.id}`)).then((r) => r.body.todo.done),
     ).resolves.toBe(false);
   });

@@ -3,6 +3,7 @@
 import pg from 'pg';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { TodoView } from '../../shared/schemas/todos';
 import { weekStartOf } from '../../shared/schemas/week';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
@@ -111,6 +112,36 @@ describe('a read is never stale after a write made through the other app', () =>
     const after = (await onSecond(`${base}/products`, cookie)).body.products as { id: string; notes: string }[];
     expect(after.find((p) => p.id === product.id)!.notes).toBe(notes);
     expect(after.map((p) => p.id)).toEqual(before.map((p) => p.id));
+  });
+
+  it('a restock to-do moved on the second app again and again answers its plan as its recipe is after an edit through the first', async () => {
+    const cookie = await cookieOf('cook@larderly.test');
+    const base = `/api/households/${first.householdId}`;
+    const todos = (await onSecond(`${base}/todos`, cookie)).body.todos as TodoView[];
+    const todo = todos.find((t) => t.kind === 'restock' && t.batchPlan)!;
+    const move = () =>
+      request(second.app).patch(`${base}/todos/${todo.id}`).set('Cookie', cookie).send({ position: todo.position });
+    // Twice the same, changing nothing: the second answer's plan is worked out from what the first read.
+    const [once, twice] = [await move(), await move()];
+    expect([once.status, twice.status]).toEqual([200, 200]);
+    expect(twice.body.todo.batchPlan).toEqual(once.body.todo.batchPlan);
+    const plan = once.body.todo.batchPlan as NonNullable<TodoView['batchPlan']>;
+    const recipe = (await request(first.app).get(`${base}/recipes/${plan.recipeId}`).set('Cookie', cookie)).body
+      .recipe as { baseMinutes: Record<string, number> };
+    const edit = (baseMinutes: Record<string, number>) =>
+      request(first.app).patch(`${base}/recipes/${plan.recipeId}`).set('Cookie', cookie).send({ baseMinutes });
+    expect((await edit({ ...recipe.baseMinutes, [plan.jarSize]: recipe.baseMinutes[plan.jarSize]! + 5 })).status).toBe(
+      200,
+    );
+    try {
+      const after = (await move()).body.todo.batchPlan as NonNullable<TodoView['batchPlan']>;
+      expect(after.processing.minutes).toBe(plan.processing.minutes! + 5);
+      expect(after.changes!.join(' ')).toContain(
+        `Processing is now ${plan.processing.minutes! + 5} minutes (it was ${plan.processing.minutes} minutes)`,
+      );
+    } finally {
+      expect((await edit(recipe.baseMinutes)).status).toBe(200);
+    }
   });
 
   it('answers 304 to a matching If-None-Match, and 200 with the new answer once the other app wrote', async () => {

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays } from '../../shared/domain';
-import { PlanEntry } from '../../server/db/models';
+import { Membership, PlanEntry } from '../../server/db/models';
 import { demoApp } from '../support/app';
 
 let ctx: Awaited<ReturnType<typeof demoApp>>;
@@ -155,5 +155,48 @@ describe('concurrent moves', () => {
     expect(missing.status).toBe(404);
     const empty = await cook.patch(url('/plan-entries/00000000-0000-4000-8000-000000000000')).send({});
     expect(empty.status).toBe(404);
+  });
+});
+
+describe('an edit that changes nothing', () => {
+  const planVersion = async () => {
+    const [[found]] = (await PlanEntry.sequelize!.query('SELECT plan_version FROM households WHERE id = $1', {
+      bind: [ctx.householdId],
+    })) as [{ plan_version: string }[], unknown];
+    return found!.plan_version;
+  };
+  const row = async (id: string) => (await PlanEntry.findByPk(id))!;
+
+  it('writes nothing and moves no plan version; each field that differs is written, nullable eaters both ways', async () => {
+    const id = await plan('2031-07-07', 'dinner', 'Bean chili');
+    const members = (await Membership.findAll({ where: { householdId: ctx.householdId } })).map((m) => m.userId);
+    const edit = async (change: object) => {
+      const response = await cook.patch(url(`/plan-entries/${id}`)).send(change);
+      expect(response.status).toBe(200);
+    };
+    await edit({ servings: 4, title: 'Bean chili', eaters: null });
+    const before = await row(id);
+    const version = await planVersion();
+    // The same values again: no UPDATE runs, so neither the row nor the version moves.
+    await edit({ servings: 4 });
+    await edit({ servings: 4, title: 'Bean chili', eaters: null });
+    expect((await row(id)).updatedAt).toEqual(before.updatedAt);
+    expect(await planVersion()).toBe(version);
+
+    const steps: [object, (r: PlanEntry) => unknown, unknown][] = [
+      [{ eaters: members }, (r) => r.eaters, members],
+      [{ eaters: members }, (r) => r.eaters, members],
+      [{ eaters: members.slice(0, 1) }, (r) => r.eaters, members.slice(0, 1)],
+      [{ eaters: null }, (r) => r.eaters, null],
+      [{ servings: 5, title: 'Bean chili' }, (r) => r.servings, 5],
+      [{ title: 'Bean chili, mild' }, (r) => r.title, 'Bean chili, mild'],
+    ];
+    let expected = version;
+    for (const [i, [change, read, value]] of steps.entries()) {
+      await edit(change);
+      // The second step repeats the first: the only one that must leave the version where it was.
+      if (i !== 1) expected = String(BigInt(expected) + 1n);
+      expect([read(await row(id)), await planVersion()]).toEqual([value, expected]);
+    }
   });
 });

@@ -25,6 +25,7 @@ import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/sto
 import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError } from '../../http/errors';
+import { frozen, householdMemo, type HouseholdVersions } from '../household-memo';
 import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
@@ -189,25 +190,45 @@ function orphaned(made: BatchPlan, why: string): BatchPlan {
 }
 
 /**
+ * What a restock to-do's plan is worked out again from: its recipes and products, the lids and jars in stock and the
+ * mouths the household cans in. All of it is household data, so it is kept until the data version moves: a to-do
+ * ticked or moved again and again (each answer carries its plan) reads none of it again. Shared: only read from.
+ */
+const planInputs = householdMemo<{
+  recipes: Recipe[];
+  products: Product[];
+  inStock: Awaited<ReturnType<typeof stockFor>>;
+  mouthOf: Awaited<ReturnType<typeof usualMouths>>;
+}>();
+
+/**
  * Restock to-dos keep the plan as made; every read works it out again for the household's altitude, canner and
  * recipe as they are now, and says what changed, so canning day never follows stale numbers.
  */
 export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   household: Household,
   views: T[],
+  versions?: HouseholdVersions,
 ): Promise<T[]> {
   const householdId = household.id;
   const planned = views.filter((view) => view.batchPlan);
   if (planned.length === 0) return views;
-  const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))];
-  const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))];
-  // The household is the guard's, read with the session in this request.
-  const [recipes, products, inStock, mouthOf] = await Promise.all([
-    Recipe.findAll({ where: { householdId, id: recipeIds } }),
-    Product.findAll({ where: { householdId, id: productIds } }),
-    stockFor(Household.sequelize!, householdId),
-    usualMouths(Household.sequelize!, householdId, productIds),
-  ]);
+  const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))].sort();
+  const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))].sort();
+  // The household is the guard's, read with the session in this request; the rest is kept per data version.
+  const { recipes, products, inStock, mouthOf } = await planInputs(
+    `${householdId} ${recipeIds.join(',')} ${productIds.join(',')}`,
+    versions?.data,
+    async () => {
+      const [recipes, products, inStock, mouthOf] = await Promise.all([
+        Recipe.findAll({ where: { householdId, id: recipeIds } }),
+        Product.findAll({ where: { householdId, id: productIds } }),
+        stockFor(Household.sequelize!, householdId),
+        usualMouths(Household.sequelize!, householdId, productIds),
+      ]);
+      return frozen({ recipes, products, inStock, mouthOf });
+    },
+  );
   return views.map((view) => {
     const made = view.batchPlan;
     if (!made) return view;
