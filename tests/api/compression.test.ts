@@ -135,3 +135,37 @@ describe('JSON answers go out compressed', () => {
     expect(response.body.products.length).toBeGreaterThan(0);
   });
 });
+
+describe('answers sent whole are compressed in one call', () => {
+  it('compresses a write’s answer, a large answer and a CSV for a client that asks, each the same as sent plain', async () => {
+    const keeper = await ctx.signedIn('keeper@larderly.test');
+    const base = `/api/households/${ctx.householdId}`;
+    const todo = ((await keeper.get(`${base}/todos`)).body.todos as { id: string; kind: string; position: number }[])
+      .filter((t) => t.kind === 'restock')
+      .at(0)!;
+    const move = (encoding: string) =>
+      keeper.patch(`${base}/todos/${todo.id}`).set('Accept-Encoding', encoding).send({ position: todo.position });
+    const [plain, br, gzip] = [await move('identity'), await move('br'), await move('gzip, deflate')];
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.text.length).toBeGreaterThan(1024);
+    expect([br.headers['content-encoding'], gzip.headers['content-encoding']]).toEqual(['br', 'gzip']);
+    expect(br.headers.vary).toMatch(/Accept-Encoding/i);
+    expect(br.headers['content-type']).toBe('application/json; charset=utf-8');
+    expect([br.body, gzip.body]).toEqual([plain.body, plain.body]);
+
+    // The household's backup is over 64 KB: compressed on zlib's threads, the same JSON.
+    const backupPlain = await keeper.get(`${base}/backup`).set('Accept-Encoding', 'identity');
+    expect(backupPlain.status).toBe(200);
+    expect(backupPlain.text.length).toBeGreaterThan(64 * 1024);
+    const backupBr = await keeper.get(`${base}/backup`).set('Accept-Encoding', 'br');
+    expect(backupBr.headers['content-encoding']).toBe('br');
+    expect(Number(backupBr.headers['content-length'])).toBeLessThan(backupPlain.text.length / 3);
+    // Two downloads differ only in when each was made.
+    expect({ ...backupBr.body, exportedAt: null }).toEqual({ ...backupPlain.body, exportedAt: null });
+
+    const csv = await keeper.get(`${base}/shelf.csv`).set('Accept-Encoding', 'gzip');
+    expect(csv.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
+    expect(csv.headers['content-encoding']).toBe('gzip');
+    expect(csv.text).toBe((await keeper.get(`${base}/shelf.csv`).set('Accept-Encoding', 'identity')).text);
+  });
+});

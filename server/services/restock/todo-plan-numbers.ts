@@ -25,7 +25,7 @@ import { batchShoppingTodo, batchShoppingWords } from '../../../shared/words/sto
 import type { BatchPlan, BatchPlanStock, ShoppingItem } from '../../../shared/schemas/todos';
 import { Household, Product, Recipe } from '../../db/models';
 import { AppError } from '../../http/errors';
-import { frozen, householdMemo, type HouseholdVersions } from '../household-memo';
+import { deepFrozen, frozen, householdMemo, type HouseholdVersions } from '../household-memo';
 import { stockFor, usualMouths } from '../stock/jar-stock';
 import { targetDate } from './harvest-target';
 
@@ -199,13 +199,15 @@ const planInputs = householdMemo<{
   products: Product[];
   inStock: Awaited<ReturnType<typeof stockFor>>;
   mouthOf: Awaited<ReturnType<typeof usualMouths>>;
+  /** Each to-do's plan as now, by to-do id, worked out at the first read that needs it. */
+  plans: Map<string, BatchPlan>;
 }>();
 
 /**
  * Restock to-dos keep the plan as made; every read works it out again for the household's altitude, canner and
  * recipe as they are now, and says what changed, so canning day never follows stale numbers.
  */
-export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
+export async function refreshPlans<T extends { id: string; batchPlan: BatchPlan | null }>(
   household: Household,
   views: T[],
   versions?: HouseholdVersions,
@@ -216,7 +218,7 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
   const recipeIds = [...new Set(planned.map((view) => view.batchPlan!.recipeId))].sort();
   const productIds = [...new Set(planned.map((view) => view.batchPlan!.productId))].sort();
   // The household is the guard's, read with the session in this request; the rest is kept per data version.
-  const { recipes, products, inStock, mouthOf } = await planInputs(
+  const { recipes, products, inStock, mouthOf, plans } = await planInputs(
     `${householdId} ${recipeIds.join(',')} ${productIds.join(',')}`,
     versions?.data,
     async () => {
@@ -226,44 +228,55 @@ export async function refreshPlans<T extends { batchPlan: BatchPlan | null }>(
         stockFor(Household.sequelize!, householdId),
         usualMouths(Household.sequelize!, householdId, productIds),
       ]);
-      return frozen({ recipes, products, inStock, mouthOf });
+      return { ...frozen({ recipes, products, inStock, mouthOf }), plans: new Map<string, BatchPlan>() };
     },
   );
   return views.map((view) => {
     const made = view.batchPlan;
     if (!made) return view;
-    const recipe = recipes.find((r) => r.id === made.recipeId);
-    const product = products.find((p) => p.id === made.productId);
-    if (!recipe || !product)
-      return {
-        ...view,
-        batchPlan: orphaned(
-          made,
-          'The recipe or product this plan was made from has been removed; plan the batch again from Restock.',
-        ),
-      };
-    const now = planFor({
-      household,
-      product,
-      recipe,
-      today: made.plannedOn,
-      jars: made.jars,
-      jarSize: made.jarSize,
-      reason: made.reason,
-      runOutOn: null,
-    });
-    const fresh: BatchPlan = {
-      ...now,
-      targetOn: made.targetOn,
-      targetWhy: made.targetWhy,
-      changes: planChanges(made, now, household.unitSystem),
-    };
-    fresh.stock = planStock(fresh, mouthOf(fresh.productId, fresh.jarSize), inStock);
-    if (!household.altitudeConfirmedAt)
-      return {
-        ...view,
-        batchPlan: orphaned(fresh, 'Confirm the household’s altitude first: processing depends on it.'),
-      };
-    return { ...view, batchPlan: fresh };
+    // A to-do's plan as made never changes (it is written with the to-do), so its plan as now is kept with the inputs.
+    let batchPlan = plans.get(view.id);
+    if (!batchPlan) {
+      batchPlan = deepFrozen(planAsNow(household, made, recipes, products, inStock, mouthOf));
+      plans.set(view.id, batchPlan);
+    }
+    return { ...view, batchPlan };
   });
+}
+
+function planAsNow(
+  household: Household,
+  made: BatchPlan,
+  recipes: Recipe[],
+  products: Product[],
+  inStock: Awaited<ReturnType<typeof stockFor>>,
+  mouthOf: Awaited<ReturnType<typeof usualMouths>>,
+): BatchPlan {
+  const recipe = recipes.find((r) => r.id === made.recipeId);
+  const product = products.find((p) => p.id === made.productId);
+  if (!recipe || !product)
+    return orphaned(
+      made,
+      'The recipe or product this plan was made from has been removed; plan the batch again from Restock.',
+    );
+  const now = planFor({
+    household,
+    product,
+    recipe,
+    today: made.plannedOn,
+    jars: made.jars,
+    jarSize: made.jarSize,
+    reason: made.reason,
+    runOutOn: null,
+  });
+  const fresh: BatchPlan = {
+    ...now,
+    targetOn: made.targetOn,
+    targetWhy: made.targetWhy,
+    changes: planChanges(made, now, household.unitSystem),
+  };
+  fresh.stock = planStock(fresh, mouthOf(fresh.productId, fresh.jarSize), inStock);
+  if (!household.altitudeConfirmedAt)
+    return orphaned(fresh, 'Confirm the household’s altitude first: processing depends on it.');
+  return fresh;
 }
